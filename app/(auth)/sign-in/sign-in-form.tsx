@@ -1,0 +1,62 @@
+"use client";
+
+import { signIn } from "next-auth/react";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+
+const MESSAGES: Record<string, string> = {
+  rate_limited: "Too many failed sign-in attempts. Wait 15 minutes, then try again.",
+  CredentialsSignin: "That e-mail and password do not match an account.",
+};
+
+export function SignInForm({ callbackUrl, initialError }: { callbackUrl: string; initialError: string | null }) {
+  const router = useRouter();
+  const [error, setError] = useState<string | null>(initialError ? (MESSAGES[initialError] ?? "Sign-in failed.") : null);
+  const [busy, setBusy] = useState(false);
+
+  async function onSubmit(event: React.FormEvent<HTMLFormElement>) {
+    event.preventDefault();
+    const form = new FormData(event.currentTarget);
+    setBusy(true);
+    setError(null);
+    const result = await signIn("credentials", {
+      email: String(form.get("email") ?? ""),
+      password: String(form.get("password") ?? ""),
+      redirect: false,
+    });
+    setBusy(false);
+    if (result?.ok) {
+      router.replace(callbackUrl);
+      router.refresh();
+    } else if (result?.status === 429) {
+      setError(MESSAGES.rate_limited!);
+    } else {
+      setError(MESSAGES.CredentialsSignin!);
+    }
+  }
+
+  return (
+    <form onSubmit={onSubmit} className="space-y-4" noValidate>
+      <div>
+        <label htmlFor="email" className="field-label">
+          Email
+        </label>
+        <input id="email" name="email" type="email" autoComplete="username" required className="field-input" />
+      </div>
+      <div>
+        <label htmlFor="password" className="field-label">
+          Password
+        </label>
+        <input id="password" name="password" type="password" autoComplete="current-password" required className="field-input" />
+      </div>
+      {error && (
+        <p role="alert" className="rounded-md bg-signal-soft/60 px-3 py-2 text-sm text-ink">
+          {error}
+        </p>
+      )}
+      <button type="submit" className="button-primary" disabled={busy}>
+        {busy ? "Signing in…" : "Sign in"}
+      </button>
+    </form>
+  );
+}

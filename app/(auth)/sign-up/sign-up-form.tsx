@@ -1,0 +1,72 @@
+"use client";
+
+import { signIn } from "next-auth/react";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+
+export function SignUpForm({ passwordRule }: { passwordRule: string }) {
+  const router = useRouter();
+  const [error, setError] = useState<string | null>(null);
+  const [busy, setBusy] = useState(false);
+
+  async function onSubmit(event: React.FormEvent<HTMLFormElement>) {
+    event.preventDefault();
+    const form = new FormData(event.currentTarget);
+    const body = { name: String(form.get("name") ?? ""), email: String(form.get("email") ?? ""), password: String(form.get("password") ?? "") };
+    setBusy(true);
+    setError(null);
+    const response = await fetch("/api/auth/signup", {
+      method: "POST",
+      headers: { "Content-Type": "application/json" },
+      body: JSON.stringify(body),
+    });
+    if (!response.ok) {
+      const answer = (await response.json().catch(() => null)) as { error?: { message?: string } } | null;
+      setError(answer?.error?.message ?? `Sign-up failed (HTTP ${response.status}).`);
+      setBusy(false);
+      return;
+    }
+    const result = await signIn("credentials", { email: body.email, password: body.password, redirect: false });
+    setBusy(false);
+    if (result?.ok) {
+      router.replace("/");
+      router.refresh();
+    } else {
+      router.replace("/sign-in");
+    }
+  }
+
+  return (
+    <form onSubmit={onSubmit} className="space-y-4" noValidate>
+      <div>
+        <label htmlFor="name" className="field-label">
+          Name
+        </label>
+        <input id="name" name="name" type="text" autoComplete="name" required className="field-input" />
+      </div>
+      <div>
+        <label htmlFor="email" className="field-label">
+          Email
+        </label>
+        <input id="email" name="email" type="email" autoComplete="email" required className="field-input" />
+      </div>
+      <div>
+        <label htmlFor="password" className="field-label">
+          Password
+        </label>
+        <input id="password" name="password" type="password" autoComplete="new-password" required className="field-input" aria-describedby="password-rule" />
+        <p id="password-rule" className="mt-1 text-xs text-ink-soft">
+          {passwordRule}
+        </p>
+      </div>
+      {error && (
+        <p role="alert" className="rounded-md bg-signal-soft/60 px-3 py-2 text-sm text-ink">
+          {error}
+        </p>
+      )}
+      <button type="submit" className="button-primary" disabled={busy}>
+        {busy ? "Creating…" : "Create account"}
+      </button>
+    </form>
+  );
+}

@@ -1,0 +1,223 @@
+/// Ringside's relational schema. Migrations in `drizzle/` are generated from this file
+/// with `npm run db:generate`; never edit a committed migration.
+import { sql } from "drizzle-orm";
+import {
+  bigint,
+  boolean,
+  check,
+  index,
+  integer,
+  jsonb,
+  pgEnum,
+  pgTable,
+  primaryKey,
+  text,
+  timestamp,
+  unique,
+  uniqueIndex,
+  uuid,
+} from "drizzle-orm/pg-core";
+
+export const siteRole = pgEnum("site_role", ["admin", "member"]);
+export const teamRole = pgEnum("team_role", ["lead", "member", "guest"]);
+export const visibility = pgEnum("visibility", ["private", "team", "link"]);
+export const cellStatus = pgEnum("cell_status", ["pending", "running", "done", "error", "cancelled"]);
+export const shareRole = pgEnum("share_role", ["viewer", "editor"]);
+export const invitationStatus = pgEnum("invitation_status", ["pending", "accepted", "revoked", "expired"]);
+
+export type SiteRole = (typeof siteRole.enumValues)[number];
+export type TeamRole = (typeof teamRole.enumValues)[number];
+export type Visibility = (typeof visibility.enumValues)[number];
+export type CellStatus = (typeof cellStatus.enumValues)[number];
+export type ShareRole = (typeof shareRole.enumValues)[number];
+
+const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
+
+export const users = pgTable(
+  "users",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    // Stored lower-cased by the application; the check keeps every writer honest.
+    email: text("email").notNull(),
+    displayName: text("display_name").notNull(),
+    passwordHash: text("password_hash").notNull(),
+    siteRole: siteRole("site_role").notNull().default("member"),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    uniqueIndex("users_email_unique").on(t.email),
+    check("users_email_lower", sql`${t.email} = lower(${t.email})`),
+    check("users_display_name_present", sql`length(btrim(${t.displayName})) > 0`),
+  ],
+);
+
+export const teams = pgTable("teams", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  slug: text("slug").notNull().unique(),
+  name: text("name").notNull(),
+  description: text("description").notNull().default(""),
+  createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
+  createdAt: createdAt(),
+});
+
+export const memberships = pgTable(
+  "memberships",
+  {
+    teamId: uuid("team_id")
+      .notNull()
+      .references(() => teams.id, { onDelete: "cascade" }),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    role: teamRole("role").notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [primaryKey({ columns: [t.teamId, t.userId] }), index("memberships_user_idx").on(t.userId)],
+);
+
+/// A Ringside session: a transcript of cells with its named objects (not a sign-in session;
+/// sign-in uses JWT cookies and keeps no table).
+export const sessions = pgTable(
+  "sessions",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    title: text("title").notNull(),
+    ownerId: uuid("owner_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    teamId: uuid("team_id").references(() => teams.id, { onDelete: "set null" }),
+    visibility: visibility("visibility").notNull().default("private"),
+    shareToken: text("share_token").unique(),
+    createdAt: createdAt(),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [
+    index("sessions_owner_idx").on(t.ownerId),
+    index("sessions_team_idx").on(t.teamId),
+    check("sessions_link_has_token", sql`${t.visibility} <> 'link' OR ${t.shareToken} IS NOT NULL`),
+    check("sessions_team_visibility_has_team", sql`${t.visibility} <> 'team' OR ${t.teamId} IS NOT NULL`),
+  ],
+);
+
+export const cells = pgTable(
+  "cells",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    sessionId: uuid("session_id")
+      .notNull()
+      .references(() => sessions.id, { onDelete: "cascade" }),
+    position: integer("position").notNull(),
+    source: text("source").notNull(),
+    status: cellStatus("status").notNull().default("pending"),
+    result: jsonb("result"),
+    error: jsonb("error"),
+    startedAt: timestamp("started_at", { withTimezone: true }),
+    finishedAt: timestamp("finished_at", { withTimezone: true }),
+    durationMs: integer("duration_ms"),
+    engineVersion: text("engine_version"),
+    createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    unique("cells_session_position_unique").on(t.sessionId, t.position),
+    check("cells_position_nonnegative", sql`${t.position} >= 0`),
+    check("cells_duration_nonnegative", sql`${t.durationMs} IS NULL OR ${t.durationMs} >= 0`),
+  ],
+);
+
+export const namedObjects = pgTable(
+  "named_objects",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    sessionId: uuid("session_id")
+      .notNull()
+      .references(() => sessions.id, { onDelete: "cascade" }),
+    ownerId: uuid("owner_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    type: text("type").notNull(),
+    value: jsonb("value").notNull(),
+    sourceCellId: uuid("source_cell_id").references(() => cells.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [unique("named_objects_session_name_unique").on(t.sessionId, t.name)],
+);
+
+/// A grant of a role on one session or one named object to one user or one team.
+export const shares = pgTable(
+  "shares",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    sessionId: uuid("session_id").references(() => sessions.id, { onDelete: "cascade" }),
+    objectId: uuid("object_id").references(() => namedObjects.id, { onDelete: "cascade" }),
+    userId: uuid("user_id").references(() => users.id, { onDelete: "cascade" }),
+    teamId: uuid("team_id").references(() => teams.id, { onDelete: "cascade" }),
+    role: shareRole("role").notNull(),
+    createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    check("shares_one_target", sql`num_nonnulls(${t.sessionId}, ${t.objectId}) = 1`),
+    check("shares_one_grantee", sql`num_nonnulls(${t.userId}, ${t.teamId}) = 1`),
+    unique("shares_target_grantee_unique").on(t.sessionId, t.objectId, t.userId, t.teamId).nullsNotDistinct(),
+    index("shares_user_idx").on(t.userId),
+    index("shares_team_idx").on(t.teamId),
+  ],
+);
+
+/// An e-mailed invitation to join a team. Only the SHA-256 of the token is stored.
+export const invitations = pgTable(
+  "invitations",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    teamId: uuid("team_id")
+      .notNull()
+      .references(() => teams.id, { onDelete: "cascade" }),
+    email: text("email").notNull(),
+    role: teamRole("role").notNull(),
+    tokenHash: text("token_hash").notNull().unique(),
+    status: invitationStatus("status").notNull().default("pending"),
+    invitedBy: uuid("invited_by").references(() => users.id, { onDelete: "set null" }),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    acceptedAt: timestamp("accepted_at", { withTimezone: true }),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    index("invitations_team_idx").on(t.teamId),
+    check("invitations_email_lower", sql`${t.email} = lower(${t.email})`),
+  ],
+);
+
+/// Security-relevant events. `details` never holds a password or a token.
+export const auditLog = pgTable(
+  "audit_log",
+  {
+    id: bigint("id", { mode: "number" }).primaryKey().generatedAlwaysAsIdentity(),
+    at: timestamp("at", { withTimezone: true }).notNull().defaultNow(),
+    event: text("event").notNull(),
+    userId: uuid("user_id").references(() => users.id, { onDelete: "set null" }),
+    email: text("email"),
+    address: text("address"),
+    details: jsonb("details").notNull().default({}),
+  },
+  (t) => [index("audit_log_at_idx").on(t.at), index("audit_log_event_idx").on(t.event, t.at)],
+);
+
+/// One row per sign-in attempt; the rate limiter counts recent failures per account and
+/// per client address here, so every web server shares the same counts.
+export const signInAttempts = pgTable(
+  "sign_in_attempts",
+  {
+    id: bigint("id", { mode: "number" }).primaryKey().generatedAlwaysAsIdentity(),
+    at: timestamp("at", { withTimezone: true }).notNull().defaultNow(),
+    email: text("email").notNull(),
+    address: text("address").notNull(),
+    succeeded: boolean("succeeded").notNull(),
+  },
+  (t) => [
+    index("sign_in_attempts_email_idx").on(t.email, t.at),
+    index("sign_in_attempts_address_idx").on(t.address, t.at),
+  ],
+);

@@ -1,0 +1,34 @@
+/// Who is calling: `currentUser()` for pages that adapt, `requireUser()` and
+/// `requireSiteRole()` for routes that refuse (HttpError 401/403, see lib/http/errors).
+import { eq } from "drizzle-orm";
+import { getServerSession } from "next-auth";
+import { db } from "@/db/client";
+import { users, type SiteRole } from "@/db/schema";
+import { forbidden, unauthorized } from "@/lib/http/errors";
+import { authOptions } from "./options";
+import type { CurrentUser } from "./types";
+
+/// The signed-in user, or null. Reads the user row on every call, so a deleted account or a
+/// changed site role takes effect at once rather than when the JWT expires.
+export async function currentUser(): Promise<CurrentUser | null> {
+  const session = await getServerSession(authOptions);
+  const id = session?.user?.id;
+  if (!id) return null;
+  const [row] = await db()
+    .select({ id: users.id, email: users.email, displayName: users.displayName, siteRole: users.siteRole })
+    .from(users)
+    .where(eq(users.id, id));
+  return row ?? null;
+}
+
+export async function requireUser(): Promise<CurrentUser> {
+  const user = await currentUser();
+  if (!user) throw unauthorized();
+  return user;
+}
+
+export async function requireSiteRole(role: SiteRole): Promise<CurrentUser> {
+  const user = await requireUser();
+  if (role === "admin" && user.siteRole !== "admin") throw forbidden("This needs the site role admin.");
+  return user;
+}

@@ -1,0 +1,56 @@
+/// Reads a JSON request body with a size limit and validates it with a zod schema.
+import type { z } from "zod";
+import { HttpError } from "./errors";
+
+export const DEFAULT_BODY_LIMIT = 64 * 1024;
+
+/// Throws HttpError 413 (body too large), 415 (not JSON), 400 (malformed JSON or a body
+/// that fails the schema; `details` lists each failing field path and why).
+export async function readJson<S extends z.ZodType>(
+  req: Request,
+  schema: S,
+  opts: { maxBytes?: number } = {},
+): Promise<z.infer<S>> {
+  const maxBytes = opts.maxBytes ?? DEFAULT_BODY_LIMIT;
+  const type = req.headers.get("content-type") ?? "";
+  if (!/^application\/(.+\+)?json\b/i.test(type)) {
+    throw new HttpError(415, "unsupported_media_type", "Send the body as JSON (Content-Type: application/json).");
+  }
+  const text = await readLimited(req, maxBytes);
+  let value: unknown;
+  try {
+    value = JSON.parse(text);
+  } catch (error) {
+    const where = error instanceof SyntaxError ? error.message : "unknown position";
+    throw new HttpError(400, "malformed_json", `The body is not valid JSON: ${where}.`);
+  }
+  const parsed = schema.safeParse(value);
+  if (!parsed.success) {
+    const details = parsed.error.issues.map((i) => ({ path: i.path.join(".") || "(body)", message: i.message }));
+    const first = details[0]!;
+    throw new HttpError(400, "invalid_body", `Invalid field ${first.path}: ${first.message}`, details);
+  }
+  return parsed.data;
+}
+
+async function readLimited(req: Request, maxBytes: number): Promise<string> {
+  const tooLarge = () => new HttpError(413, "body_too_large", `The body is larger than ${maxBytes} bytes.`);
+  const declared = Number(req.headers.get("content-length"));
+  if (Number.isFinite(declared) && declared > maxBytes) throw tooLarge();
+  if (!req.body) return "";
+  // Counted while streaming: Content-Length may be absent (chunked) or wrong.
+  const reader = req.body.getReader();
+  const chunks: Uint8Array[] = [];
+  let total = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    total += value.byteLength;
+    if (total > maxBytes) {
+      await reader.cancel();
+      throw tooLarge();
+    }
+    chunks.push(value);
+  }
+  return Buffer.concat(chunks).toString("utf8");
+}
