@@ -1,0 +1,73 @@
+import { HEAD, monoCoprime, monoDivides, monoLcm, type Mono, type MonoLayout } from "../monomial/monomial";
+import type { MonoCompare } from "../order/order";
+import type { Basis, Pair } from "./basis";
+
+/// Pair order for the sugar strategy: smaller sugar first, then smaller lcm.
+export function pairBefore(cmp: MonoCompare, a: Pair, b: Pair): number {
+  return a.sugar !== b.sugar ? a.sugar - b.sugar : cmp(a.lcm, b.lcm);
+}
+
+function lcmEquals(a: Mono, b: Mono, l: Mono): boolean {
+  for (let k = HEAD, len = l.length; k < len; k++) if ((a[k] > b[k] ? a[k] : b[k]) !== l[k]) return false;
+  return true;
+}
+
+/// Sugar of the S-polynomial of elements with leading monomials lmi, lmj.
+function pairSugar(lcm: Mono, lmi: Mono, si: number, lmj: Mono, sj: number): number {
+  const a = si + lcm[1] - lmi[1], b = sj + lcm[1] - lmj[1];
+  return a > b ? a : b;
+}
+
+/// Adds element h to the basis and updates the pair list by the Gebauer–Möller criteria
+/// (R. Gebauer, H. M. Möller, "On an installation of Buchberger's algorithm",
+/// J. Symbolic Comput. 1988; in the form of T. Becker, V. Weispfenning, "Gröbner Bases",
+/// Springer 1993, procedure UPDATE). `pairs` stays sorted by pairBefore.
+export function updatePairs(L: MonoLayout, cmp: MonoCompare, basis: Basis, pairs: Pair[], h: number): Pair[] {
+  const { elts, active } = basis;
+  const eh = elts[h];
+  const lmh = eh.lm;
+  // New pairs (h, g) with their lcms; keep those not made redundant by another new pair.
+  const cand = active.map((g) => ({ g, lcm: monoLcm(L, lmh, elts[g].lm), coprime: monoCoprime(lmh, elts[g].lm) }));
+  const kept: typeof cand = [];
+  for (let k = 0; k < cand.length; k++) {
+    const p = cand[k];
+    if (!p.coprime) {
+      let redundant = false;
+      for (let q = k + 1; q < cand.length && !redundant; q++) redundant = monoDivides(cand[q].lcm, p.lcm);
+      for (let q = 0; q < kept.length && !redundant; q++) redundant = monoDivides(kept[q].lcm, p.lcm);
+      if (redundant) continue;
+    }
+    kept.push(p);
+  }
+  // Old pairs whose lcm is a proper multiple of lm(h) in the chain sense are redundant.
+  const survivors = pairs.filter(
+    (p) =>
+      p.j < 0 ||
+      !monoDivides(lmh, p.lcm) ||
+      lcmEquals(elts[p.i].lm, lmh, p.lcm) ||
+      lcmEquals(elts[p.j].lm, lmh, p.lcm),
+  );
+  const fresh: Pair[] = [];
+  for (const p of kept) {
+    if (p.coprime) continue; // Buchberger's product criterion
+    const eg = elts[p.g];
+    fresh.push({ i: p.g, j: h, lcm: p.lcm, sugar: pairSugar(p.lcm, eg.lm, eg.sugar, lmh, eh.sugar) });
+  }
+  fresh.sort((a, b) => pairBefore(cmp, a, b));
+  // Basis elements whose leading monomial lm(h) divides are no longer needed as reducers.
+  const stillActive = active.filter((g) => !monoDivides(lmh, elts[g].lm));
+  stillActive.push(h);
+  basis.active.length = 0;
+  basis.active.push(...stillActive);
+  return mergeSorted(cmp, survivors, fresh);
+}
+
+function mergeSorted(cmp: MonoCompare, a: Pair[], b: Pair[]): Pair[] {
+  if (b.length === 0) return a;
+  const out: Pair[] = new Array(a.length + b.length);
+  let i = 0, j = 0, k = 0;
+  while (i < a.length && j < b.length) out[k++] = pairBefore(cmp, a[i], b[j]) <= 0 ? a[i++] : b[j++];
+  while (i < a.length) out[k++] = a[i++];
+  while (j < b.length) out[k++] = b[j++];
+  return out;
+}
