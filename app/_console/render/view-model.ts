@@ -1,0 +1,107 @@
+/// Turns a §9 value into what the transcript draws: TeX for algebra, a grid for Betti
+/// tables, a chain of ranks for resolutions, plain text for the rest. Pure functions of
+/// the JSON, so every rendering rule is unit-tested without a browser.
+import type { ValueJson } from "../api/types";
+import { bettiGrid, type BettiEntry, type BettiGrid } from "./betti";
+import { texOfRankChain } from "./chain";
+import { texOfHilbertSeries, texOfSeriesPrefix } from "./series";
+import { texOfExpression, texOfIdeal, texOfMatrix, texOfVariable, texOrVerbatim } from "./tex";
+
+/// What one value looks like on screen.
+export type ValueView =
+  | { readonly kind: "tex"; readonly tex: string; readonly note?: string }
+  | { readonly kind: "betti"; readonly grid: BettiGrid }
+  | { readonly kind: "complex"; readonly chain: string; readonly grid: BettiGrid }
+  | { readonly kind: "series"; readonly tex: string; readonly note: string }
+  | { readonly kind: "text"; readonly text: string }
+  | { readonly kind: "list"; readonly items: readonly ValueView[] }
+  | { readonly kind: "record"; readonly fields: readonly (readonly [string, ValueView])[] }
+  | { readonly kind: "table"; readonly columns: readonly string[]; readonly rows: readonly (readonly string[])[] };
+
+/// TeX of a field name of §9 ("Q", "GF(p)").
+export function texOfField(field: string): string {
+  if (field === "Q") return "\\mathbb{Q}";
+  const p = /^GF\((\d+)\)$/.exec(field);
+  return p ? `\\mathbb{F}_{${p[1]}}` : texOrVerbatim(field);
+}
+
+/// TeX of a ring from its §9 encoding: K[x, y, …], over its defining ideal when nonzero.
+export function texOfRing(v: ValueJson): string {
+  const vars = (v.vars ?? []).map(texOfVariable).join(", ");
+  const base = `${texOfField(v.field ?? "?")}[${vars}]`;
+  const ideal = (v.ideal ?? []).filter((g) => g !== "0");
+  return ideal.length ? `${base} / ${texOfIdeal(ideal)}` : base;
+}
+
+const entriesOf = (v: ValueJson): BettiEntry[] =>
+  ((v.entries ?? v.betti ?? []) as readonly BettiEntry[]).filter(
+    (e) => Array.isArray(e) && e.length === 3 && e.every((n) => typeof n === "number"),
+  );
+
+function isStringRows(rows: ValueJson["rows"]): rows is readonly (readonly string[])[] {
+  return Array.isArray(rows) && rows.every((r) => Array.isArray(r) && r.every((c) => typeof c === "string"));
+}
+
+/// The view of a §9 value; unknown or malformed values fall back to their `text`.
+export function viewOfValue(v: ValueJson): ValueView {
+  switch (v.type) {
+    case "Poly":
+      return { kind: "tex", tex: texOrVerbatim(v.text) };
+    case "Rat": {
+      const t = typeof v.value === "string" ? v.value : v.text;
+      return { kind: "tex", tex: texOfExpression(t) ?? texOrVerbatim(t) };
+    }
+    case "Ideal":
+      return v.gens ? { kind: "tex", tex: texOfIdeal(v.gens) } : { kind: "text", text: v.text };
+    case "Ring":
+      return v.vars ? { kind: "tex", tex: texOfRing(v) } : { kind: "text", text: v.text };
+    case "Field":
+      return { kind: "tex", tex: texOfField(v.text) };
+    case "Matrix":
+      return isStringRows(v.rows) ? { kind: "tex", tex: texOfMatrix(v.rows) } : { kind: "text", text: v.text };
+    case "Module": {
+      const p = v.presentation;
+      if (p && isStringRows(p.rows)) return { kind: "tex", tex: `\\operatorname{coker} ${texOfMatrix(p.rows)}` };
+      return { kind: "text", text: v.text };
+    }
+    case "BettiTable":
+      return { kind: "betti", grid: bettiGrid(entriesOf(v), v.complete !== false) };
+    case "Complex": {
+      const complete = v.complete !== false;
+      return {
+        kind: "complex",
+        chain: texOfRankChain(v.ranks ?? [], complete),
+        grid: bettiGrid(entriesOf(v), complete),
+      };
+    }
+    case "HilbertSeries":
+      if (!v.numerator || v.denominator === undefined) return { kind: "text", text: v.text };
+      return { kind: "tex", tex: texOfHilbertSeries(v.numerator, v.denominator) };
+    case "Series": {
+      const coefficients = v.coefficients ?? [];
+      const terms = `${coefficients.length} term${coefficients.length === 1 ? "" : "s"}`;
+      if (v.rational) {
+        return {
+          kind: "series",
+          tex: texOrVerbatim(v.rational),
+          note: `rational function fitting all ${terms} computed`,
+        };
+      }
+      return { kind: "series", tex: texOfSeriesPrefix(coefficients), note: `${terms} computed; no rational function fits them` };
+    }
+    case "List":
+      return { kind: "list", items: (v.items ?? []).map(viewOfValue) };
+    case "Record":
+      return { kind: "record", fields: Object.entries(v.fields ?? {}).map(([k, f]) => [k, viewOfValue(f)] as const) };
+    case "Table": {
+      const rows = (v.rows ?? []) as readonly (readonly ValueJson[])[];
+      return {
+        kind: "table",
+        columns: v.columns ?? [],
+        rows: rows.map((r) => (Array.isArray(r) ? r.map((c) => (typeof c === "object" && c ? c.text : String(c))) : [])),
+      };
+    }
+    default:
+      return { kind: "text", text: v.text };
+  }
+}
