@@ -1,0 +1,35 @@
+import { NextResponse } from "next/server";
+import { z } from "zod";
+import { requireUser } from "@/lib/auth/current-user";
+import { requireSessionAccess } from "@/lib/auth/access";
+import { readJson } from "@/lib/http/body";
+import { route } from "@/lib/http/errors";
+import { linkToken } from "@/lib/sessions/link-token";
+import { runCell } from "@/lib/sessions/run-cell";
+import { listCells } from "@/lib/sessions/store";
+import { cellView } from "@/lib/sessions/views";
+
+type Context = { params: Promise<{ id: string }> };
+
+export const MAX_SOURCE_BYTES = 100 * 1024;
+
+const NewCell = z
+  .object({ source: z.string().max(MAX_SOURCE_BYTES, "a cell holds at most 100 KB of source").refine((s) => s.trim() !== "", "the cell is empty: type a statement to run") })
+  .strict();
+
+export const dynamic = "force-dynamic";
+
+export const GET = route(async (req, { params }: Context) => {
+  const user = await requireUser();
+  const { id } = await params;
+  await requireSessionAccess(user, id, "read", { linkToken: linkToken(req) });
+  return NextResponse.json({ cells: (await listCells(id)).map(cellView) });
+});
+
+export const POST = route(async (req, { params }: Context) => {
+  const user = await requireUser();
+  const { id } = await params;
+  await requireSessionAccess(user, id, "edit");
+  const { source } = await readJson(req, NewCell, { maxBytes: MAX_SOURCE_BYTES + 1024 });
+  return runCell(user, id, source);
+});

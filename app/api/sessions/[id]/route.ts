@@ -1,0 +1,24 @@
+import { NextResponse } from "next/server";
+import { requireUser } from "@/lib/auth/current-user";
+import { requireSessionAccess } from "@/lib/auth/access";
+import { route } from "@/lib/http/errors";
+import { linkToken } from "@/lib/sessions/link-token";
+import { ownerName } from "@/lib/sessions/store";
+
+type Context = { params: Promise<{ id: string }> };
+
+export const GET = route(async (req, { params }: Context) => {
+  const user = await requireUser();
+  const { id } = await params;
+  const { session, role } = await requireSessionAccess(user, id, "read", { linkToken: linkToken(req) });
+  return NextResponse.json({
+    session: {
+      id: session.id,
+      title: session.title,
+      ownerName: await ownerName(session.ownerId),
+      visibility: session.visibility,
+      access: role,
+      canEdit: role === "owner" || role === "editor",
+    },
+  });
+});
