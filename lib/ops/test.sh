@@ -1,0 +1,110 @@
+#!/usr/bin/env bash
+# npm test: a throw-away PostgreSQL cluster, SMTP sink and production server of its own,
+# then the type check, every vitest suite under tests/ and the browser tests.
+# Ends with one line "N passed, N failed"; exits non-zero on any failure.
+set -euo pipefail
+source "$(dirname "$0")/common.sh"
+cd "$ROOT"
+
+# first_free_port BASE: BASE or the next free port above it (parallel runs do not collide).
+first_free_port() {
+  local p="$1"
+  while ! port_free "$p"; do p=$((p + 1)); [ "$p" -lt $(($1 + 100)) ] || die "no free port near $1"; done
+  printf '%s' "$p"
+}
+
+ensure_data_dir
+T="$DATA/test-$$"
+PASSED=0
+FAILED=0
+SETUP_DONE=0
+SINK_PID=""
+WEB_PID=""
+finish() {
+  local code=$?
+  trap - EXIT INT TERM
+  stop_pid "$WEB_PID"
+  stop_pid "$SINK_PID"
+  [ -d "$T/pg" ] && pg_down "$T/pg"
+  rm -rf "$T"
+  if [ "$SETUP_DONE" = 0 ]; then
+    log "set-up failed before the tests could run"
+    FAILED=$((FAILED + 1))
+  fi
+  printf '%s passed, %s failed\n' "$PASSED" "$FAILED"
+  if [ "$FAILED" -gt 0 ] || [ "$code" -ne 0 ]; then exit 1; fi
+  exit 0
+}
+trap finish EXIT
+trap 'exit 130' INT TERM
+
+ensure_postgres
+/usr/bin/python3 -c 'import sympy' 2>/dev/null || apt_install python3-sympy
+[ -x /usr/bin/chromium ] || apt_install chromium
+ensure_node_modules
+
+PG_PORT="$(first_free_port "${RINGSIDE_TEST_PG_PORT:-54339}")"
+pg_up "$T/pg" "$PG_PORT" "$T/pg-password" "-c fsync=off -c synchronous_commit=off -c full_page_writes=off"
+ensure_database "$PG_PORT" "$T/pg-password" ringside_test
+
+export DATABASE_URL
+DATABASE_URL="$(database_url "$PG_PORT" "$T/pg-password" ringside_test)"
+log "applying migrations to the test database"
+node_ts db/migrate.ts
+
+SMTP_PORT="$(first_free_port "${RINGSIDE_TEST_SMTP_PORT:-2535}")"
+export RINGSIDE_SMTP_PORT="$SMTP_PORT"
+export RINGSIDE_MAIL_DIR="$T/mail"
+export RINGSIDE_SYMPY_PYTHON=/usr/bin/python3
+export NEXT_TELEMETRY_DISABLED=1
+export NEXTAUTH_SECRET
+NEXTAUTH_SECRET="$(secret_file "$T/nextauth-secret")"
+
+TYPECHECK=0
+log "tsc --noEmit"
+npx tsc --noEmit -p . || TYPECHECK=1
+
+node --import tsx lib/ops/smtp-sink.ts 2>"$T/smtp.log" &
+SINK_PID=$!
+wait_port "$SMTP_PORT" 30 "$SINK_PID"
+
+build_if_stale
+WEB_PORT="$(first_free_port "${RINGSIDE_TEST_WEB_PORT:-3100}")"
+export NEXTAUTH_URL="http://127.0.0.1:$WEB_PORT"
+export RINGSIDE_TEST_BASE_URL="$NEXTAUTH_URL"
+export RINGSIDE_TEST_SERVER_LOG="$T/web.log"
+node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$WEB_PORT" >"$T/web.log" 2>&1 &
+WEB_PID=$!
+wait_http "$NEXTAUTH_URL/sign-in" 60 "$WEB_PID"
+SETUP_DONE=1
+
+[ "$TYPECHECK" = 0 ] || { log "type check failed (counted as one failure)"; FAILED=$((FAILED + 1)); }
+
+# count_json FILE: prints "passed failed" from a results file with numPassedTests/numFailedTests.
+count_json() {
+  node -e 'const r=JSON.parse(require("fs").readFileSync(process.argv[1],"utf8"));
+    const failedSuites=(r.testResults||[]).filter(s=>s.status==="failed"&&!(s.assertionResults||[]).some(a=>a.status==="failed")).length;
+    console.log(r.numPassedTests, r.numFailedTests + failedSuites)' "$1"
+}
+
+log "vitest"
+VITEST_OK=0
+npx vitest run --reporter=default --reporter=json --outputFile.json="$T/vitest.json" || VITEST_OK=1
+if [ -s "$T/vitest.json" ]; then
+  read -r p f < <(count_json "$T/vitest.json")
+  PASSED=$((PASSED + p)); FAILED=$((FAILED + f))
+  [ "$VITEST_OK" = 0 ] || [ "$f" -gt 0 ] || FAILED=$((FAILED + 1))
+else
+  log "vitest wrote no results"; FAILED=$((FAILED + 1))
+fi
+
+log "browser tests"
+BROWSER_OK=0
+node --import tsx tests/helpers/browser-runner.ts "$T/browser.json" || BROWSER_OK=1
+if [ -s "$T/browser.json" ]; then
+  read -r p f < <(count_json "$T/browser.json")
+  PASSED=$((PASSED + p)); FAILED=$((FAILED + f))
+  [ "$BROWSER_OK" = 0 ] || [ "$f" -gt 0 ] || FAILED=$((FAILED + 1))
+else
+  log "the browser runner wrote no results"; FAILED=$((FAILED + 1))
+fi
