@@ -1,0 +1,18 @@
+export {
+  type QuotientRing,
+  type AnyRing,
+  isQuotientRing,
+  ambientRing,
+  definingIdeal,
+  quotientRing,
+  quotientNormalForm,
+  quotientEquals,
+  quotientIsZero,
+  quotientAdd,
+  quotientMul,
+  quotientPow,
+  quotientIsZeroRing,
+  quotientHilbertSeries,
+  quotientDimension,
+  quotientDegree,
+} from "./quotient";

@@ -1,0 +1,100 @@
+import { runtimeError } from "../errors";
+import { type HilbertSeries, type RationalNumber } from "../hilbert";
+import { type Ideal, ideal, idealDimension, idealDegree, idealGroebnerBasis, idealHilbertSeries, idealSum, idealIsUnit } from "../ideal";
+import type { ComputeOptions } from "../options";
+import { type Poly, type PolyRing, isZero, mul, normalForm, one, sameRing, sub, add } from "./engine";
+
+/// The quotient S/J of a polynomial ring S (the ambient ring) by an ideal J of S.
+/// Elements are polynomials of S read modulo J.
+export interface QuotientRing {
+  readonly ambient: PolyRing;
+  readonly ideal: Ideal;
+}
+
+/// A polynomial ring or a quotient of one.
+export type AnyRing = PolyRing | QuotientRing;
+
+export function isQuotientRing(A: AnyRing): A is QuotientRing {
+  return "ambient" in A && "ideal" in A;
+}
+
+/// The polynomial ring S with A = S/J (A itself for a polynomial ring).
+export function ambientRing(A: AnyRing): PolyRing {
+  return isQuotientRing(A) ? A.ambient : A;
+}
+
+/// The ideal J of the ambient ring with A = S/J (the zero ideal for a polynomial ring).
+export function definingIdeal(A: AnyRing): Ideal {
+  return isQuotientRing(A) ? A.ideal : ideal(A, []);
+}
+
+/// A / I for an ideal I of A, given by polynomials of the ambient ring S (as an Ideal of S
+/// or a list of generators). For A = S/J this is S/(J + I).
+export function quotientRing(A: AnyRing, I: Ideal | readonly Poly[]): QuotientRing {
+  const S = ambientRing(A);
+  const extra = Array.isArray(I) ? ideal(S, I as readonly Poly[]) : (I as Ideal);
+  if (!sameRing(S, extra.ring)) {
+    throw runtimeError("quotientRing", `the ideal lives in a ring with variables ${extra.ring.vars.join(", ")}, not in the ambient ring (${S.vars.join(", ")})`);
+  }
+  const J = isQuotientRing(A) ? idealSum(A.ideal, extra) : extra;
+  return Object.freeze({ ambient: S, ideal: J });
+}
+
+/// The normal form of f modulo the defining ideal: the unique representative that is a
+/// combination of standard monomials (monomials outside the initial ideal).
+export function quotientNormalForm(A: AnyRing, f: Poly, opts?: ComputeOptions): Poly {
+  if (!isQuotientRing(A)) return f;
+  return normalForm(A.ambient, f, [...idealGroebnerBasis(A.ideal, opts)], opts);
+}
+
+/// Whether f = g in A.
+export function quotientEquals(A: AnyRing, f: Poly, g: Poly, opts?: ComputeOptions): boolean {
+  return isZero(quotientNormalForm(A, sub(ambientRing(A), f, g), opts));
+}
+
+export function quotientIsZero(A: AnyRing, f: Poly, opts?: ComputeOptions): boolean {
+  return isZero(quotientNormalForm(A, f, opts));
+}
+
+/// f + g in A, as a normal form.
+export function quotientAdd(A: AnyRing, f: Poly, g: Poly, opts?: ComputeOptions): Poly {
+  return quotientNormalForm(A, add(ambientRing(A), f, g), opts);
+}
+
+/// f · g in A, as a normal form.
+export function quotientMul(A: AnyRing, f: Poly, g: Poly, opts?: ComputeOptions): Poly {
+  const S = ambientRing(A);
+  return quotientNormalForm(A, mul(S, quotientNormalForm(A, f, opts), quotientNormalForm(A, g, opts), opts), opts);
+}
+
+/// f^k in A by repeated squaring, reducing after every product.
+export function quotientPow(A: AnyRing, f: Poly, k: number, opts?: ComputeOptions): Poly {
+  if (!Number.isSafeInteger(k) || k < 0) throw runtimeError("quotientPow", `the exponent must be a non-negative integer, got ${k}`);
+  let result = quotientNormalForm(A, one(ambientRing(A)), opts);
+  let base = quotientNormalForm(A, f, opts);
+  for (let e = k; e > 0; e >>= 1) {
+    if (e & 1) result = quotientMul(A, result, base, opts);
+    if (e > 1) base = quotientMul(A, base, base, opts);
+  }
+  return result;
+}
+
+/// Whether A is the zero ring (its defining ideal is the unit ideal).
+export function quotientIsZeroRing(A: AnyRing, opts?: ComputeOptions): boolean {
+  return isQuotientRing(A) && idealIsUnit(A.ideal, opts);
+}
+
+/// The Hilbert series of A = S/J in the grading of S.
+export function quotientHilbertSeries(A: AnyRing, opts?: ComputeOptions): HilbertSeries {
+  return idealHilbertSeries(definingIdeal(A), opts);
+}
+
+/// Krull dimension of A (−1 for the zero ring).
+export function quotientDimension(A: AnyRing, opts?: ComputeOptions): number {
+  return idealDimension(definingIdeal(A), opts);
+}
+
+/// The degree (multiplicity) of A.
+export function quotientDegree(A: AnyRing, opts?: ComputeOptions): RationalNumber {
+  return idealDegree(definingIdeal(A), opts);
+}
