@@ -74,9 +74,9 @@ pg_up() {
     log "PostgreSQL already running in ${dir#$ROOT/}"
   else
     log "starting PostgreSQL on 127.0.0.1:$port"
-    run_pg "$PG_BIN/pg_ctl" -D "$dir" -l "$dir.log" -w -t 60 \
+    run_pg "$PG_BIN/pg_ctl" -D "$dir" -l "$dir/server.log" -w -t 60 \
       -o "-c listen_addresses=127.0.0.1 -c port=$port -c unix_socket_directories=$sock $extra" start >/dev/null \
-      || die "PostgreSQL did not start: see ${dir#$ROOT/}.log (is port $port taken?)"
+      || die "PostgreSQL did not start: see ${dir#$ROOT/}/server.log (is port $port taken?)"
     PG_STARTED_BY_US=1
   fi
 }
