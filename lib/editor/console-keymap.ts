@@ -1,0 +1,80 @@
+/// The console's keys: Enter runs the input, Shift+Enter adds a line, ↑ on the first line
+/// and ↓ on the last recall earlier inputs. While the completion list is open, Enter and
+/// the arrows belong to it.
+import { completionStatus } from "@codemirror/autocomplete";
+import { insertNewlineAndIndent } from "@codemirror/commands";
+import { Prec, type Extension } from "@codemirror/state";
+import { EditorView, keymap } from "@codemirror/view";
+import { FRESH_CURSOR, recallNewer, recallOlder, type HistoryCursor } from "./input-history";
+
+/// What the keymap needs from the page.
+export interface ConsoleKeymapOptions {
+  /// Runs the current input; returns false when running is not possible now.
+  readonly run: (source: string) => boolean;
+  /// Earlier inputs of the session, oldest first.
+  readonly history: () => readonly string[];
+}
+
+/// Shows a recalled input; going back leaves the cursor on its first line (so ↑ goes on
+/// recalling), going forward at its end (so ↓ goes on).
+function replaceDoc(view: EditorView, text: string, cursorAtEnd: boolean) {
+  const firstLineEnd = text.indexOf("\n") === -1 ? text.length : text.indexOf("\n");
+  view.dispatch({
+    changes: { from: 0, to: view.state.doc.length, insert: text },
+    selection: { anchor: cursorAtEnd ? text.length : firstLineEnd },
+    scrollIntoView: true,
+    userEvent: "input.recall",
+  });
+}
+
+/// Enter / Shift+Enter / ↑ / ↓ as the console wants them.
+export function consoleKeymap(options: ConsoleKeymapOptions): Extension {
+  let cursor: HistoryCursor = FRESH_CURSOR;
+  const completing = (view: EditorView) => completionStatus(view.state) !== null;
+  const resetOnEdit = EditorView.updateListener.of((u) => {
+    if (u.docChanged && !u.transactions.some((t) => t.isUserEvent("input.recall"))) cursor = FRESH_CURSOR;
+  });
+  return [
+    resetOnEdit,
+    Prec.highest(
+      keymap.of([
+        {
+          key: "Enter",
+          run: (view) => {
+            if (completing(view)) return false;
+            const source = view.state.doc.toString();
+            if (source.trim() === "") return true;
+            if (options.run(source)) cursor = FRESH_CURSOR;
+            return true;
+          },
+        },
+        { key: "Shift-Enter", run: insertNewlineAndIndent },
+        {
+          key: "ArrowUp",
+          run: (view) => {
+            const sel = view.state.selection.main;
+            if (completing(view) || !sel.empty || view.state.doc.lineAt(sel.head).number !== 1) return false;
+            const step = recallOlder(options.history(), cursor, view.state.doc.toString());
+            if (!step) return false;
+            cursor = step.cursor;
+            replaceDoc(view, step.text, false);
+            return true;
+          },
+        },
+        {
+          key: "ArrowDown",
+          run: (view) => {
+            const sel = view.state.selection.main;
+            const doc = view.state.doc;
+            if (completing(view) || !sel.empty || doc.lineAt(sel.head).number !== doc.lines) return false;
+            const step = recallNewer(options.history(), cursor);
+            if (!step) return false;
+            cursor = step.cursor;
+            replaceDoc(view, step.text, true);
+            return true;
+          },
+        },
+      ]),
+    ),
+  ];
+}
