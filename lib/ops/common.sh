@@ -109,7 +109,7 @@ node_ts() { (cd "$ROOT" && node --import tsx "$@"); }
 # (a hash over every tracked and untracked, not ignored, file outside node_modules).
 source_hash() {
   (cd "$ROOT" && git ls-files -z -co --exclude-standard 2>/dev/null | grep -zv '^tests/' \
-    | xargs -0 -r sha256sum 2>/dev/null | sha256sum | cut -d' ' -f1)
+    | { xargs -0 -r sha256sum 2>/dev/null || true; } | sha256sum | cut -d' ' -f1)
 }
 build_if_stale() {
   local stamp="$ROOT/.next/.ringside-source-hash" want=""
