@@ -1,0 +1,47 @@
+/// Errors of evaluation, with the kind and span the Error encoding of notation.md §9 needs.
+import { AlgebraError } from "./engine";
+import type { Span } from "../../grammar/ast";
+import type { ErrorJson, ErrorKind, SpanJson } from "./json";
+import { DivisionByZero } from "./rational";
+
+export class EvalError extends Error {
+  constructor(
+    readonly kind: ErrorKind,
+    message: string,
+    readonly span: Span,
+  ) {
+    super(message);
+    this.name = "EvalError";
+  }
+}
+
+export const runtime = (message: string, span: Span): EvalError => new EvalError("runtime", message, span);
+export const limit = (message: string, span: Span): EvalError => new EvalError("limit", message, span);
+
+/// Any failure inside the evaluation of the node at `span` as an EvalError: engine errors
+/// keep their kind, everything unexpected is reported as a runtime error at that node.
+export function asEvalError(e: unknown, span: Span): EvalError {
+  if (e instanceof EvalError) return e;
+  if (e instanceof AlgebraError) return new EvalError(e.kind, e.message, span);
+  if (e instanceof DivisionByZero) return runtime("division by zero", span);
+  if (e instanceof RangeError && /BigInt|Maximum BigInt size|Invalid array length/i.test(e.message)) {
+    return limit(`the result is too large to represent (${e.message})`, span);
+  }
+  return runtime(e instanceof Error ? e.message : String(e), span);
+}
+
+export function spanJson(span: Span): SpanJson {
+  return { from: { line: span.from.line, col: span.from.col }, to: { line: span.to.line, col: span.to.col } };
+}
+
+/// "runtime error at 2:5-2:9: division by zero"
+export function errorJson(kind: ErrorKind, message: string, span: Span): ErrorJson {
+  const s = spanJson(span);
+  return {
+    type: "Error",
+    text: `${kind} error at ${s.from.line}:${s.from.col}-${s.to.line}:${s.to.col}: ${message}`,
+    kind,
+    message,
+    span: s,
+  };
+}

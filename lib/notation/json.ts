@@ -1,0 +1,410 @@
+/// The JSON encoding of notation.md §9, shared by the API, the CLI and saved objects:
+/// a zod schema per type, `encodeValue` (value → JSON) and `decodeValue` (JSON → value,
+/// validated). Additions to §9 (documented in lib/notation/README.md): Poly, Ideal,
+/// Matrix, Module and Complex carry a "ring" (the Ring encoding) so they restore alone.
+import { z } from "zod";
+import { formatHilbertDenominator, formatPoly, hilbertSeriesFromNumerator, parsePoly, type Poly } from "./engine";
+import { parseDenominator } from "./series-text";
+import { parseRational, ratToString } from "./rational";
+import { RingRegistry, parseField, parseOrder } from "./rings";
+import { fieldText, orderText, ringText, valueText } from "./text";
+import type {
+  BettiTableValue,
+  FunctionValue,
+  IdealValue,
+  MatrixValue,
+  RingValue,
+  Value,
+} from "./values";
+
+const intText = z.string().regex(/^-?\d+$/, "expected a decimal integer string");
+const ratText = z.string().regex(/^-?\d+(\/[1-9]\d*)?$/, "expected a decimal rational string such as -3/4");
+const count = z.number().int().nonnegative();
+const text = z.string();
+
+export const RingJson = z.object({
+  type: z.literal("Ring"),
+  text,
+  field: z.string().regex(/^(Q|GF\(\d+\))$/, 'expected "Q" or "GF(p)"'),
+  vars: z.array(z.string().min(1)).min(1),
+  degrees: z.array(z.number().int().positive()),
+  order: z.string(),
+  ideal: z.array(z.string()),
+});
+export type RingJson = z.infer<typeof RingJson>;
+
+const ringRef = { ring: RingJson };
+
+export const IntJson = z.object({ type: z.literal("Int"), text, value: intText });
+export const RatJson = z.object({ type: z.literal("Rat"), text, value: ratText });
+export const BoolJson = z.object({ type: z.literal("Bool"), text, value: z.boolean() });
+export const StrJson = z.object({ type: z.literal("Str"), text, value: z.string() });
+export const FieldJson = z.object({ type: z.literal("Field"), text: z.string().regex(/^(Q|GF\(\d+\))$/) });
+export const PolyJson = z.object({ type: z.literal("Poly"), text, ...ringRef });
+export const IdealJson = z.object({ type: z.literal("Ideal"), text, gens: z.array(z.string()), ...ringRef });
+export const MatrixJson = z.object({
+  type: z.literal("Matrix"),
+  text,
+  rows: z.array(z.array(z.string())),
+  /// an addition: keeps the shape of a matrix with no rows
+  cols: count,
+  ...ringRef,
+});
+export const ModuleJson = z.object({
+  type: z.literal("Module"),
+  text,
+  presentation: MatrixJson.nullable(),
+  ...ringRef,
+});
+const BettiEntries = z.array(z.tuple([count, z.number().int(), z.number().int().positive()]));
+export const BettiTableJson = z.object({ type: z.literal("BettiTable"), text, entries: BettiEntries, complete: z.boolean() });
+export const ComplexJson = z.object({
+  type: z.literal("Complex"),
+  text,
+  ranks: z.array(count),
+  betti: BettiEntries,
+  complete: z.boolean(),
+  /// an addition: the differentials, when known
+  maps: z.array(MatrixJson).nullable(),
+  ...ringRef,
+});
+export const HilbertSeriesJson = z.object({
+  type: z.literal("HilbertSeries"),
+  text,
+  numerator: z.array(intText),
+  denominator: z.string(),
+});
+export const SeriesJson = z.object({
+  type: z.literal("Series"),
+  text,
+  coefficients: z.array(intText),
+  rational: z.string().nullable(),
+});
+export const NoneJson = z.object({ type: z.literal("None"), text });
+
+export const SpanJson = z.object({
+  from: z.object({ line: z.number().int().positive(), col: z.number().int().positive() }),
+  to: z.object({ line: z.number().int().positive(), col: z.number().int().positive() }),
+});
+export type SpanJson = z.infer<typeof SpanJson>;
+export const ErrorKind = z.enum(["parse", "type", "runtime", "limit", "cancelled"]);
+export type ErrorKind = z.infer<typeof ErrorKind>;
+export const ErrorJson = z.object({ type: z.literal("Error"), text, kind: ErrorKind, message: z.string(), span: SpanJson });
+export type ErrorJson = z.infer<typeof ErrorJson>;
+
+type Leaf =
+  | z.infer<typeof IntJson>
+  | z.infer<typeof RatJson>
+  | z.infer<typeof BoolJson>
+  | z.infer<typeof StrJson>
+  | z.infer<typeof FieldJson>
+  | RingJson
+  | z.infer<typeof PolyJson>
+  | z.infer<typeof IdealJson>
+  | z.infer<typeof MatrixJson>
+  | z.infer<typeof ModuleJson>
+  | z.infer<typeof ComplexJson>
+  | z.infer<typeof BettiTableJson>
+  | z.infer<typeof HilbertSeriesJson>
+  | z.infer<typeof SeriesJson>
+  | z.infer<typeof NoneJson>;
+
+export interface ListJson { type: "List"; text: string; items: ValueJson[] }
+export interface RecordJson { type: "Record"; text: string; fields: Record<string, ValueJson> }
+export interface TableJson { type: "Table"; text: string; columns: string[]; rows: ValueJson[][] }
+/// Functions carry their source, parameters, the values of the names they captured and
+/// the ring their literals are read in, so a later cell can rebuild the closure.
+export interface FunctionJson {
+  type: "Function";
+  text: string;
+  params: string[];
+  captures: Record<string, ValueJson>;
+  ring: RingJson | null;
+}
+export interface FamilyJson {
+  type: "Family";
+  text: string;
+  generator: string;
+  options: Record<string, string>;
+  members: z.infer<typeof IdealJson>[];
+  ring: RingJson;
+}
+export type ValueJson = Leaf | ListJson | RecordJson | TableJson | FunctionJson | FamilyJson;
+
+const lazyValue = z.lazy((): z.ZodType<ValueJson> => ValueJson);
+export const ListJson: z.ZodType<ListJson> = z.object({ type: z.literal("List"), text, items: z.array(lazyValue) });
+export const RecordJson: z.ZodType<RecordJson> = z.object({
+  type: z.literal("Record"),
+  text,
+  fields: z.record(z.string(), lazyValue),
+});
+export const TableJson: z.ZodType<TableJson> = z.object({
+  type: z.literal("Table"),
+  text,
+  columns: z.array(z.string()),
+  rows: z.array(z.array(lazyValue)),
+});
+export const FunctionJson: z.ZodType<FunctionJson> = z.object({
+  type: z.literal("Function"),
+  text,
+  params: z.array(z.string()),
+  captures: z.record(z.string(), lazyValue),
+  ring: RingJson.nullable(),
+});
+export const FamilyJson: z.ZodType<FamilyJson> = z.object({
+  type: z.literal("Family"),
+  text,
+  generator: z.string(),
+  options: z.record(z.string(), intText),
+  members: z.array(IdealJson),
+  ring: RingJson,
+});
+
+const byType = {
+  Int: IntJson, Rat: RatJson, Bool: BoolJson, Str: StrJson, Field: FieldJson, Ring: RingJson,
+  Poly: PolyJson, Ideal: IdealJson, Matrix: MatrixJson, Module: ModuleJson, Complex: ComplexJson,
+  BettiTable: BettiTableJson, HilbertSeries: HilbertSeriesJson, Series: SeriesJson, List: ListJson,
+  Record: RecordJson, Table: TableJson, Function: FunctionJson, Family: FamilyJson, None: NoneJson,
+} as const;
+/// The schema of each value type's encoding, by type name.
+export const ValueJsonSchemas: { readonly [K in ValueJson["type"]]: z.ZodType<Extract<ValueJson, { type: K }>> } = byType;
+
+const typeNames = Object.keys(byType).join(", ");
+function hasKnownType(v: unknown): v is { type: ValueJson["type"] } {
+  if (typeof v !== "object" || v === null) return false;
+  const t = (v as { type?: unknown }).type;
+  return typeof t === "string" && Object.hasOwn(byType, t);
+}
+
+/// Any value's encoding: dispatches on "type" to that type's schema.
+export const ValueJson: z.ZodType<ValueJson> = z
+  .custom<ValueJson>(hasKnownType, { message: `expected an object whose "type" is one of ${typeNames}` })
+  .superRefine((v, ctx) => {
+    const r = byType[v.type].safeParse(v);
+    if (!r.success) for (const issue of r.error.issues) ctx.addIssue({ code: "custom", message: issue.message, path: issue.path });
+  });
+
+// ─── encode ───────────────────────────────────────────────────────────────────
+
+export function encodeRing(r: RingValue): RingJson {
+  return {
+    type: "Ring",
+    text: ringText(r),
+    field: fieldText(r.poly.field),
+    vars: [...r.poly.vars],
+    degrees: [...r.poly.degrees],
+    order: orderText(r.poly.order),
+    ideal: r.ideal.map((f) => formatPoly(r.poly, f)),
+  };
+}
+
+function polyTexts(r: RingValue, fs: readonly Poly[]): string[] {
+  return fs.map((f) => formatPoly(r.poly, f));
+}
+
+function encodeMatrix(m: MatrixValue): z.infer<typeof MatrixJson> {
+  return { type: "Matrix", text: valueText(m), rows: m.rows.map((row) => polyTexts(m.ring, row)), cols: m.cols, ring: encodeRing(m.ring) };
+}
+
+function encodeIdeal(i: IdealValue): z.infer<typeof IdealJson> {
+  return { type: "Ideal", text: valueText(i), gens: polyTexts(i.ring, i.gens), ring: encodeRing(i.ring) };
+}
+
+export function encodeValue(v: Value): ValueJson {
+  const t = valueText(v);
+  switch (v.type) {
+    case "Int":
+      return { type: "Int", text: t, value: v.value.toString() };
+    case "Rat":
+      return { type: "Rat", text: t, value: ratToString(v.value) };
+    case "Bool":
+      return { type: "Bool", text: t, value: v.value };
+    case "Str":
+      return { type: "Str", text: t, value: v.value };
+    case "Field":
+      return { type: "Field", text: t };
+    case "Ring":
+      return encodeRing(v);
+    case "Poly":
+      return { type: "Poly", text: t, ring: encodeRing(v.ring) };
+    case "Ideal":
+      return encodeIdeal(v);
+    case "Matrix":
+      return encodeMatrix(v);
+    case "Module":
+      return { type: "Module", text: t, presentation: v.presentation && encodeMatrix(v.presentation), ring: encodeRing(v.ring) };
+    case "Complex":
+      return {
+        type: "Complex",
+        text: t,
+        ranks: [...v.ranks],
+        betti: v.betti.entries.map(([i, j, b]) => [i, j, b] as [number, number, number]),
+        complete: v.complete,
+        maps: v.maps && v.maps.map(encodeMatrix),
+        ring: encodeRing(v.ring),
+      };
+    case "BettiTable":
+      return { type: "BettiTable", text: t, entries: v.entries.map(([i, j, b]) => [i, j, b] as [number, number, number]), complete: v.complete };
+    case "HilbertSeries":
+      return { type: "HilbertSeries", text: t, numerator: v.series.numerator.map(String), denominator: formatHilbertDenominator(v.series.weights) };
+    case "Series":
+      return { type: "Series", text: t, coefficients: v.coefficients.map(String), rational: v.rational };
+    case "List":
+      return { type: "List", text: t, items: v.items.map(encodeValue) };
+    case "Record":
+      return { type: "Record", text: t, fields: Object.fromEntries([...v.fields].map(([k, x]) => [k, encodeValue(x)])) };
+    case "Table":
+      return { type: "Table", text: t, columns: [...v.columns], rows: v.rows.map((row) => row.map(encodeValue)) };
+    case "Function":
+      return {
+        type: "Function",
+        text: t,
+        params: [...v.params],
+        captures: Object.fromEntries([...v.captures].map(([k, x]) => [k, encodeValue(x)])),
+        ring: v.ring && encodeRing(v.ring),
+      };
+    case "Family":
+      return {
+        type: "Family",
+        text: t,
+        generator: v.generator,
+        options: Object.fromEntries([...v.options].map(([k, x]) => [k, x.toString()])),
+        members: v.members.map(encodeIdeal),
+        ring: encodeRing(v.ring),
+      };
+    case "None":
+      return { type: "None", text: t };
+  }
+}
+
+// ─── decode ───────────────────────────────────────────────────────────────────
+
+export class DecodeError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = "DecodeError";
+  }
+}
+
+export interface DecodeContext {
+  /// shares one RingValue between every value decoded in the same ring
+  readonly rings: RingRegistry;
+  /// rebuilds a closure from its JSON (the evaluator parses and checks its source)
+  readonly makeFunction?: (json: FunctionJson, captures: Map<string, Value>, ring: RingValue | null) => FunctionValue;
+}
+
+function fail(where: string, message: string): never {
+  throw new DecodeError(`${where}: ${message}`);
+}
+
+export function decodeRing(j: RingJson, ctx: DecodeContext): RingValue {
+  const field = parseField(j.field) ?? fail("Ring", `unknown field ${j.field}`);
+  const order = parseOrder(j.order) ?? fail("Ring", `unknown monomial order ${j.order}`);
+  const base = ctx.rings.polynomialRing(field, j.vars, { order, degrees: j.degrees });
+  if (j.ideal.length === 0) return base;
+  return ctx.rings.quotient(base, j.ideal.map((g) => readPoly(base, g, "Ring ideal")));
+}
+
+function readPoly(r: RingValue, textOf: string, where: string): Poly {
+  try {
+    return parsePoly(r.poly, textOf);
+  } catch (e) {
+    return fail(where, `cannot read polynomial "${textOf}" in ${ringText(r)}: ${(e as Error).message}`);
+  }
+}
+
+function decodeMatrix(j: z.infer<typeof MatrixJson>, ctx: DecodeContext): MatrixValue {
+  const ring = decodeRing(j.ring, ctx);
+  if (j.rows.some((row) => row.length !== j.cols)) fail("Matrix", `every row must have ${j.cols} entries`);
+  return { type: "Matrix", ring, rows: j.rows.map((row) => row.map((f) => readPoly(ring, f, "Matrix"))), cols: j.cols };
+}
+
+function decodeBetti(entries: readonly (readonly [number, number, number])[], complete: boolean): BettiTableValue {
+  return { type: "BettiTable", entries: entries.map(([i, j, b]) => [i, j, b] as const), complete };
+}
+
+function decodeIdeal(j: z.infer<typeof IdealJson>, ctx: DecodeContext): IdealValue {
+  const ring = decodeRing(j.ring, ctx);
+  return { type: "Ideal", ring, gens: j.gens.map((g) => readPoly(ring, g, "Ideal")) };
+}
+
+function decodeValidated(j: ValueJson, ctx: DecodeContext): Value {
+  switch (j.type) {
+    case "Int":
+      return { type: "Int", value: BigInt(j.value) };
+    case "Rat":
+      return { type: "Rat", value: parseRational(j.value) ?? fail("Rat", `bad value ${j.value}`) };
+    case "Bool":
+      return { type: "Bool", value: j.value };
+    case "Str":
+      return { type: "Str", value: j.value };
+    case "Field":
+      return { type: "Field", field: parseField(j.text) ?? fail("Field", `unknown field ${j.text}`) };
+    case "Ring":
+      return decodeRing(j, ctx);
+    case "Poly": {
+      const ring = decodeRing(j.ring, ctx);
+      return { type: "Poly", ring, poly: readPoly(ring, j.text, "Poly") };
+    }
+    case "Ideal":
+      return decodeIdeal(j, ctx);
+    case "Matrix":
+      return decodeMatrix(j, ctx);
+    case "Module":
+      return { type: "Module", ring: decodeRing(j.ring, ctx), presentation: j.presentation && decodeMatrix(j.presentation, ctx) };
+    case "Complex":
+      return {
+        type: "Complex",
+        ring: decodeRing(j.ring, ctx),
+        ranks: j.ranks,
+        betti: decodeBetti(j.betti, j.complete),
+        complete: j.complete,
+        maps: j.maps && j.maps.map((m) => decodeMatrix(m, ctx)),
+      };
+    case "BettiTable":
+      return decodeBetti(j.entries, j.complete);
+    case "HilbertSeries": {
+      const denominator = parseDenominator(j.denominator) ?? fail("HilbertSeries", `bad denominator ${j.denominator}`);
+      return { type: "HilbertSeries", series: hilbertSeriesFromNumerator(j.numerator.map((c) => BigInt(c)), denominator) };
+    }
+    case "Series":
+      return { type: "Series", coefficients: j.coefficients.map((c) => BigInt(c)), rational: j.rational };
+    case "List":
+      return { type: "List", items: j.items.map((x) => decodeValidated(x, ctx)) };
+    case "Record":
+      return { type: "Record", fields: new Map(Object.entries(j.fields).map(([k, x]) => [k, decodeValidated(x, ctx)])) };
+    case "Table":
+      if (j.rows.some((row) => row.length !== j.columns.length)) fail("Table", `every row must have ${j.columns.length} cells`);
+      return { type: "Table", columns: j.columns, rows: j.rows.map((row) => row.map((x) => decodeValidated(x, ctx))) };
+    case "Function": {
+      if (!ctx.makeFunction) fail("Function", "functions can only be restored by the evaluator");
+      const captures = new Map(Object.entries(j.captures).map(([k, x]) => [k, decodeValidated(x, ctx)]));
+      return ctx.makeFunction(j, captures, j.ring && decodeRing(j.ring, ctx));
+    }
+    case "Family":
+      return {
+        type: "Family",
+        ring: decodeRing(j.ring, ctx),
+        generator: j.generator,
+        options: new Map(Object.entries(j.options).map(([k, x]) => [k, BigInt(x)])),
+        members: j.members.map((m) => decodeIdeal(m, ctx)),
+      };
+    case "None":
+      return { type: "None" };
+  }
+}
+
+/// Validates `json` against §9 and rebuilds the value; DecodeError says what is wrong.
+export function decodeValue(json: unknown, ctx: DecodeContext): Value {
+  const r = ValueJson.safeParse(json);
+  if (!r.success) {
+    const issue = r.error.issues[0];
+    throw new DecodeError(`invalid value JSON at ${issue.path.join(".") || "top level"}: ${issue.message}`);
+  }
+  try {
+    return decodeValidated(r.data, ctx);
+  } catch (e) {
+    if (e instanceof DecodeError) throw e;
+    throw new DecodeError(`invalid value JSON: ${e instanceof Error ? e.message : String(e)}`);
+  }
+}

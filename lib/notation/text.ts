@@ -1,0 +1,82 @@
+/// The human "text" of every value (notation.md §9): notation-like, one line except tables.
+import { formatPoly, type Field, type OrderSpec } from "./engine";
+import { ascendingText, hilbertText } from "./series-text";
+import { ratToString } from "./rational";
+import type { BettiTableValue, MatrixValue, RingValue, Value } from "./values";
+
+export function fieldText(f: Field): string {
+  return f.kind === "Q" ? "Q" : `GF(${f.p})`;
+}
+
+/// JSON form of an order: "grevlex", "lex", "glex", "weights(1,2,3)".
+export function orderText(o: OrderSpec): string {
+  return o.kind === "weights" ? `weights(${o.weights.join(",")})` : o.kind;
+}
+
+export function polyRingText(r: RingValue): string {
+  const { field, vars, degrees, order } = r.poly;
+  const opts: string[] = [];
+  if (order.kind !== "grevlex") opts.push(`order = ${order.kind === "weights" ? `weights(${order.weights.join(", ")})` : order.kind}`);
+  if (degrees.some((d) => d !== 1)) opts.push(`degrees = (${degrees.join(", ")})`);
+  return `${fieldText(field)}[${vars.join(", ")}${opts.length > 0 ? `; ${opts.join(", ")}` : ""}]`;
+}
+
+export function ringText(r: RingValue): string {
+  const base = polyRingText(r);
+  if (r.ideal.length === 0) return base;
+  return `${base} / <${r.ideal.map((f) => formatPoly(r.poly, f)).join(", ")}>`;
+}
+
+export function matrixText(m: MatrixValue): string {
+  if (m.rows.length === 0) return `matrix(0 × ${m.cols})`;
+  return `[${m.rows.map((row) => row.map((f) => formatPoly(m.ring.poly, f)).join(", ")).join("; ")}]`;
+}
+
+export function bettiText(b: BettiTableValue): string {
+  const entries = b.entries.map(([i, j, n]) => `β(${i},${j})=${n}`).join(", ");
+  return `Betti numbers ${entries === "" ? "all zero" : entries}${b.complete ? "" : " (truncated)"}`;
+}
+
+export function valueText(v: Value): string {
+  switch (v.type) {
+    case "Int":
+    case "Bool":
+      return String(v.value);
+    case "Rat":
+      return ratToString(v.value);
+    case "Str":
+      return v.value;
+    case "Field":
+      return fieldText(v.field);
+    case "Ring":
+      return ringText(v);
+    case "Poly":
+      return formatPoly(v.ring.poly, v.poly);
+    case "Ideal":
+      return v.gens.length === 0 ? "<0>" : `<${v.gens.map((f) => formatPoly(v.ring.poly, f)).join(", ")}>`;
+    case "Matrix":
+      return matrixText(v);
+    case "Module":
+      return v.presentation ? `coker ${matrixText(v.presentation)} over ${ringText(v.ring)}` : `module over ${ringText(v.ring)}`;
+    case "Complex":
+      return `complex of ranks ${v.ranks.join(", ")}${v.complete ? "" : " (truncated)"}`;
+    case "BettiTable":
+      return bettiText(v);
+    case "HilbertSeries":
+      return hilbertText(v.series);
+    case "Series":
+      return `${ascendingText(v.coefficients)}+O(t^${v.coefficients.length})`;
+    case "List":
+      return `[${v.items.map(valueText).join(", ")}]`;
+    case "Record":
+      return `{${[...v.fields].map(([k, x]) => `${k}: ${valueText(x)}`).join(", ")}}`;
+    case "Function":
+      return v.source;
+    case "Family":
+      return `${v.generator}(${[...v.options].map(([k, x]) => `${k} = ${x}`).join(", ")}): ${v.members.length} ideals`;
+    case "Table":
+      return [v.columns.join(" | "), ...v.rows.map((row) => row.map(valueText).join(" | "))].join("\n");
+    case "None":
+      return "none";
+  }
+}

@@ -1,0 +1,146 @@
+/// Runtime values of the notation, one variant per type of notation.md §8.
+/// Engine objects (rings, polynomials) are wrapped, never copied; numbers are exact.
+import type { Field, HilbertSeries, Poly, PolyRing } from "./engine";
+import type { Rational } from "./rational";
+
+/// A ring of the notation: a polynomial ring S (its field, variables, degrees, order)
+/// together with a defining ideal of S; the ideal is empty for S itself.
+export interface RingValue {
+  readonly type: "Ring";
+  readonly poly: PolyRing;
+  /// generators of the defining ideal, in S
+  readonly ideal: readonly Poly[];
+  /// reduced Gröbner basis of the defining ideal, computed once when first needed
+  basis?: readonly Poly[];
+}
+
+export interface PolyValue {
+  readonly type: "Poly";
+  readonly ring: RingValue;
+  /// a representative in S, kept in normal form modulo the defining ideal
+  readonly poly: Poly;
+}
+
+export interface IdealValue {
+  readonly type: "Ideal";
+  readonly ring: RingValue;
+  /// generators as representatives in S (the defining ideal is implied)
+  readonly gens: readonly Poly[];
+  basis?: readonly Poly[];
+}
+
+export interface MatrixValue {
+  readonly type: "Matrix";
+  readonly ring: RingValue;
+  readonly rows: readonly (readonly Poly[])[];
+  /// number of columns, kept so that a matrix with no rows still has a shape
+  readonly cols: number;
+}
+
+/// A finitely presented module over `ring`: coker of `presentation` (null: not yet known).
+export interface ModuleValue {
+  readonly type: "Module";
+  readonly ring: RingValue;
+  readonly presentation: MatrixValue | null;
+}
+
+export type BettiEntry = readonly [homological: number, internal: number, betti: number];
+
+export interface BettiTableValue {
+  readonly type: "BettiTable";
+  /// nonzero β_{i,j}, sorted by i then j; j is the internal degree
+  readonly entries: readonly BettiEntry[];
+  readonly complete: boolean;
+}
+
+export interface ComplexValue {
+  readonly type: "Complex";
+  readonly ring: RingValue;
+  readonly ranks: readonly number[];
+  readonly betti: BettiTableValue;
+  readonly complete: boolean;
+  /// matrices of the differentials F_i → F_{i−1}, i = 1…length, when known
+  readonly maps: readonly MatrixValue[] | null;
+}
+
+export interface HilbertSeriesValue {
+  readonly type: "HilbertSeries";
+  readonly series: HilbertSeries;
+}
+
+export interface SeriesValue {
+  readonly type: "Series";
+  readonly coefficients: readonly bigint[];
+  /// a rational function fitting every computed term, as text; null when none was found
+  readonly rational: string | null;
+}
+
+export interface ListValue {
+  readonly type: "List";
+  readonly items: readonly Value[];
+}
+
+export interface RecordValue {
+  readonly type: "Record";
+  /// in the order written
+  readonly fields: ReadonlyMap<string, Value>;
+}
+
+export interface FunctionValue {
+  readonly type: "Function";
+  readonly params: readonly string[];
+  /// source text of the whole lambda, e.g. "(a, b) -> a + b"
+  readonly source: string;
+  /// applies the closure (depth: how deeply calls are nested); supplied by the evaluator
+  readonly call: (args: readonly Value[], depth?: number) => Value;
+  /// the values of the free names the body refers to, captured when the lambda was made
+  readonly captures: ReadonlyMap<string, Value>;
+  /// the ring that was current where the lambda was written (its literals are read there)
+  readonly ring: RingValue | null;
+}
+
+/// A family of examples for experiments, generated on demand from a recipe.
+export interface FamilyValue {
+  readonly type: "Family";
+  readonly ring: RingValue;
+  readonly generator: string;
+  readonly options: ReadonlyMap<string, bigint>;
+  readonly members: readonly IdealValue[];
+}
+
+export interface TableValue {
+  readonly type: "Table";
+  readonly columns: readonly string[];
+  readonly rows: readonly (readonly Value[])[];
+}
+
+export type Value =
+  | { readonly type: "Int"; readonly value: bigint }
+  | { readonly type: "Rat"; readonly value: Rational }
+  | { readonly type: "Bool"; readonly value: boolean }
+  | { readonly type: "Str"; readonly value: string }
+  | { readonly type: "Field"; readonly field: Field }
+  | RingValue
+  | PolyValue
+  | IdealValue
+  | MatrixValue
+  | ModuleValue
+  | ComplexValue
+  | BettiTableValue
+  | HilbertSeriesValue
+  | SeriesValue
+  | ListValue
+  | RecordValue
+  | FunctionValue
+  | FamilyValue
+  | TableValue
+  | { readonly type: "None" };
+
+export type ValueOf<T extends Value["type"]> = Extract<Value, { type: T }>;
+
+export const NONE: Value = { type: "None" };
+export const int = (value: bigint): Value => ({ type: "Int", value });
+export const bool = (value: boolean): Value => ({ type: "Bool", value });
+export const str = (value: string): Value => ({ type: "Str", value });
+export const list = (items: readonly Value[]): ListValue => ({ type: "List", items });
+export const record = (fields: Iterable<[string, Value]>): RecordValue => ({ type: "Record", fields: new Map(fields) });
