@@ -171,3 +171,7 @@ export function normalForm(R: PolyRing, f: Poly, G: readonly Poly[], opts?: Comp
   const C = ctxFor(R, "normalForm", f, ...G);
   return normalFormCtx(C, f, G, opts);
 }
+
+export * from "./hilbert";
+export * from "./ideal";
+export * from "./quotient";

@@ -1,15 +1,15 @@
 import { describe, expect, it } from "vitest";
 import {
+  AlgebraError,
   evaluateHilbertPolynomial,
+  type Exponents,
   formatHilbertDenominator,
   formatUnivariate,
   hilbertFunctionAt,
   hilbertFunctionValues,
   hilbertPolynomial,
   hilbertSeriesOfMonomials,
-  type Exponents,
-} from "@/lib/algebra/hilbert";
-import { AlgebraError } from "@/lib/algebra/errors";
+} from "@/lib/algebra";
 
 function binomial(n: number, k: number): bigint {
   if (k < 0 || n < k) return 0n;
