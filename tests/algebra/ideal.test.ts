@@ -3,6 +3,7 @@ import {
   AlgebraError,
   formatPoly,
   gf,
+  groebnerBasis,
   ideal,
   type Ideal,
   idealColon,
@@ -120,6 +121,17 @@ describe("ideal operations on hand-checkable examples", () => {
     const S = polyRing(GF, ["x", "y", "z", "w"]);
     const I = parseIdeal(S, ["x*z-y^2", "x*w-y*z", "y*w-z^2"]);
     expect(idealEquals(initialIdeal(I), parseIdeal(S, ["y^2", "y*z", "z^2"]))).toBe(true);
+  });
+
+  it("results of elimination in a grevlex ring carry their reduced Gröbner basis, as a fresh computation confirms", () => {
+    // uniqueness of reduced Gröbner bases (common practice): the cached basis must equal a recomputed one
+    for (const S of [R, polyRing(GF, ["x", "y", "z"], { degrees: [1, 2, 3] })]) {
+      const I = parseIdeal(S, ["x^3-y*z+x", "y^2-x*z"]);
+      const J = parseIdeal(S, ["x*y-z^2", "z-x^2"]);
+      for (const K of [idealIntersection(I, J), idealSaturation(I, parseIdeal(S, ["x"])), idealEliminate(I, ["x"])]) {
+        expect(texts(K)).toEqual(groebnerBasis(S, [...K.gens]).map((g) => formatPoly(S, g)));
+      }
+    }
   });
 
   it("homogeneity is a property of the ideal, not of its generators", () => {

@@ -1,6 +1,6 @@
 import { checkpoint, type ComputeOptions } from "../options";
 import { mul, one, sub, variable } from "./engine";
-import { eliminateTags, embedInTagged } from "./eliminate";
+import { eliminatedIdeal, eliminateTags, embedInTagged } from "./eliminate";
 import { commonRing, ideal, type Ideal } from "./ideal";
 import { taggedRing } from "./transfer";
 
@@ -16,7 +16,7 @@ export function idealIntersection(I: Ideal, J: Ideal, opts?: ComputeOptions): Id
     ...I.gens.map((f) => mul(T, t, embedInTagged(R, T, 1, f))),
     ...J.gens.map((g) => mul(T, oneMinusT, embedInTagged(R, T, 1, g))),
   ];
-  return ideal(R, eliminateTags(R, T, 1, gens, opts));
+  return eliminatedIdeal(R, eliminateTags(R, T, 1, gens, opts));
 }
 
 /// I_1 ∩ I_2 ∩ … (at least one ideal).

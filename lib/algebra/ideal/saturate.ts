@@ -1,7 +1,7 @@
 import { runtimeError } from "../errors";
 import type { ComputeOptions } from "../options";
 import { type Poly, isZero, mul, one, sub, variable } from "./engine";
-import { eliminateTags, embedInTagged } from "./eliminate";
+import { eliminatedIdeal, eliminateTags, embedInTagged } from "./eliminate";
 import { commonRing, ideal, type Ideal } from "./ideal";
 import { idealIntersectionOf } from "./intersect";
 import { taggedRing } from "./transfer";
@@ -18,7 +18,7 @@ export function idealSaturationElement(I: Ideal, f: Poly, opts?: ComputeOptions)
     ...I.gens.map((g) => embedInTagged(R, T, 1, g)),
     sub(T, one(T), mul(T, y, embedInTagged(R, T, 1, f))),
   ];
-  return ideal(R, eliminateTags(R, T, 1, gens, opts));
+  return eliminatedIdeal(R, eliminateTags(R, T, 1, gens, opts));
 }
 
 /// I : J^∞ = ⋂_j (I : f_j^∞) over the generators f_j of J (common practice: a power of J
