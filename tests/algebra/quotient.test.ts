@@ -6,6 +6,9 @@ import {
   gf,
   ideal,
   idealEquals,
+  idealIntersection,
+  idealIsSubset,
+  liftIdeal,
   parsePoly,
   polyRing,
   QQ,
@@ -69,6 +72,17 @@ describe("quotient rings", () => {
     const C = quotientRing(T, ["a*c-b^2", "a*d-b*c", "b*d-c^2"].map((s) => parsePoly(T, s)));
     expect(quotientDimension(C)).toBe(2);
     expect(quotientDegree(C)).toEqual({ num: 3n, den: 1n });
+  });
+
+  it("ideals of a quotient are lifted to ideals of S containing J", () => {
+    // in A = k[x, y]/(x^2): (y) ∩ (x + y) lifts to (x^2, y) ∩ (x^2, x + y) = (x^2, xy, y^2)
+    // (by hand: modulo (x^2, xy, y^2) the only candidate left in (x^2, y) is y, and y ↦ −x
+    // under y = −x is not in (x^2))
+    const A = quotientRing(S, [P("x^2")]);
+    const Y = liftIdeal(A, ideal(S, [P("y")]));
+    const XY = liftIdeal(A, ideal(S, [P("x+y")]));
+    expect(idealEquals(idealIntersection(Y, XY), ideal(S, [P("x^2"), P("x*y"), P("y^2")]))).toBe(true);
+    expect(idealIsSubset(definingIdeal(A), Y)).toBe(true);
   });
 
   it("rejects an ideal of another ring", () => {

@@ -1,3 +1,4 @@
+import { runtimeError } from "../errors";
 import { checkpoint, type ComputeOptions } from "../options";
 import { mul, one, sub, variable } from "./engine";
 import { eliminatedIdeal, eliminateTags, embedInTagged } from "./eliminate";
@@ -21,7 +22,7 @@ export function idealIntersection(I: Ideal, J: Ideal, opts?: ComputeOptions): Id
 
 /// I_1 ∩ I_2 ∩ … (at least one ideal).
 export function idealIntersectionOf(ideals: readonly Ideal[], opts?: ComputeOptions): Ideal {
-  if (ideals.length === 0) throw new Error("idealIntersectionOf: needs at least one ideal");
+  if (ideals.length === 0) throw runtimeError("idealIntersectionOf", "needs at least one ideal");
   commonRing("idealIntersectionOf", ...ideals);
   let acc = ideals[0];
   ideals.slice(1).forEach((J, k) => {

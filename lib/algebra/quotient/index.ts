@@ -4,6 +4,7 @@ export {
   isQuotientRing,
   ambientRing,
   definingIdeal,
+  liftIdeal,
   quotientRing,
   quotientNormalForm,
   quotientEquals,

@@ -40,6 +40,18 @@ export function quotientRing(A: AnyRing, I: Ideal | readonly Poly[]): QuotientRi
   return Object.freeze({ ambient: S, ideal: J });
 }
 
+/// The ideal I + J of S that corresponds to the ideal I of A = S/J (I given by
+/// representatives in S). Ideals of A are the ideals of S containing J, and sums,
+/// intersections, colons, saturations and membership in A are those of S on such ideals;
+/// a product in A is the lift of the product in S.
+export function liftIdeal(A: AnyRing, I: Ideal): Ideal {
+  const S = ambientRing(A);
+  if (!sameRing(S, I.ring)) {
+    throw runtimeError("liftIdeal", `the ideal lives in a ring with variables ${I.ring.vars.join(", ")}, not in the ambient ring (${S.vars.join(", ")})`);
+  }
+  return isQuotientRing(A) ? idealSum(A.ideal, I) : I;
+}
+
 /// The normal form of f modulo the defining ideal: the unique representative that is a
 /// combination of standard monomials (monomials outside the initial ideal).
 export function quotientNormalForm(A: AnyRing, f: Poly, opts?: ComputeOptions): Poly {
