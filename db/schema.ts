@@ -138,6 +138,8 @@ export const namedObjects = pgTable(
     name: text("name").notNull(),
     type: text("type").notNull(),
     value: jsonb("value").notNull(),
+    /// the text of the statement that defined it (notation.md §2)
+    source: text("source").notNull().default(""),
     sourceCellId: uuid("source_cell_id").references(() => cells.id, { onDelete: "set null" }),
     createdAt: createdAt(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),

@@ -18,13 +18,21 @@ export type CellEvent =
   | { event: "progress"; statement: number; stage: string; detail?: string; fraction?: number }
   | { event: "partial"; statement: number; value: unknown }
   | { event: "result"; statement: number; span: Span; value: unknown }
-  | { event: "bound"; statement: number; name: string; type: string; value: unknown }
+  | { event: "bound"; statement: number; name: string; type: string; value: unknown; source?: string }
   | { event: "error"; statement: number | null; error: ErrorValue };
 
 /// The payload the route sends to the job.
 export interface CellJob {
   source: string;
   bindings: { name: string; type: string; value: unknown }[];
+  /// the binding that was the current ring after the session's previous cell
+  currentRing: string | null;
+}
+
+/// What the job returns when the evaluator finished (also after an error or a cancel).
+export interface CellJobOutcome {
+  status: "ok" | "error" | "cancelled";
+  currentRing: string | null;
 }
 
 export function errorValue(kind: ErrorValue["kind"], message: string, span: Span): ErrorValue {

@@ -2,12 +2,12 @@
 /// stream its events as NDJSON, and write the outcome and new named objects in one
 /// transaction — also when the client goes away or the cell is cancelled.
 import { cellLimits, cellPool } from "@/lib/compute/cell-pool";
-import { errorValue, type CellEvent, type CellJob, type ErrorValue, type Span } from "@/lib/compute/cell-events";
+import { errorValue, type CellEvent, type CellJob, type CellJobOutcome, type ErrorValue, type Span } from "@/lib/compute/cell-events";
 import { PoolBusyError, type JobEnd } from "@/lib/compute/pool";
 import type { CurrentUser } from "@/lib/auth/types";
 import { registerRunningCell } from "./cancel-channel";
 import { ENGINE_VERSION } from "./engine-version";
-import { finishCell, listObjects, startCell, type CellOutcome } from "./store";
+import { currentRingOf, finishCell, listObjects, startCell, type CellOutcome } from "./store";
 import { objectView } from "./views";
 
 const WHOLE_CELL: Span = { from: { line: 1, col: 1 }, to: { line: 1, col: 1 } };
@@ -15,10 +15,11 @@ const WHOLE_CELL: Span = { from: { line: 1, col: 1 }, to: { line: 1, col: 1 } };
 export async function runCell(user: CurrentUser, sessionId: string, source: string): Promise<Response> {
   const pool = cellPool();
   const bindings = (await listObjects(sessionId)).map((o) => ({ name: o.name, type: o.type, value: o.value }));
+  const currentRing = await currentRingOf(sessionId);
   const cell = await startCell(sessionId, user, source);
   const started = performance.now();
   const encoder = new TextEncoder();
-  const job: CellJob = { source, bindings };
+  const job: CellJob = { source, bindings, currentRing };
 
   let cancel: () => void = () => {};
   const stream = new ReadableStream<Uint8Array>({
@@ -35,14 +36,14 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
       send({ event: "accepted", cellId: cell.id, position: cell.position });
 
       const results: { statement: number; span: Span; value: unknown }[] = [];
-      const bound = new Map<string, { name: string; type: string; value: unknown }>();
+      const bound = new Map<string, { name: string; type: string; value: unknown; source: string }>();
       let spans: Span[] = [];
       let failure: ErrorValue | null = null;
       const onEvent = (raw: unknown) => {
         const event = raw as CellEvent;
         switch (event.event) {
           case "bound":
-            bound.set(event.name, { name: event.name, type: event.type, value: event.value });
+            bound.set(event.name, { name: event.name, type: event.type, value: event.value, source: event.source ?? "" });
             return;
           case "checked":
             spans = event.spans;
@@ -98,6 +99,8 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
           durationMs,
           engineVersion: ENGINE_VERSION,
           objects: [...bound.values()],
+          // After a stop the evaluator could not report, the ring the cell started in stays current.
+          currentRing: "outcome" in end && end.outcome ? ((end.outcome as CellJobOutcome).currentRing ?? null) : currentRing,
         });
         send({ event: "done", status, timings: { totalMs: Math.round(durationMs) }, objects: saved.map(objectView) });
       } catch (error) {

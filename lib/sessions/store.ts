@@ -15,7 +15,9 @@ export interface CellOutcome {
   error: unknown | null;
   durationMs: number;
   engineVersion: string;
-  objects: { name: string; type: string; value: unknown }[];
+  objects: { name: string; type: string; value: unknown; source: string }[];
+  /// the binding that is the current ring after this cell (the next cell starts there)
+  currentRing: string | null;
 }
 
 export async function createSession(user: CurrentUser, title: string) {
@@ -76,6 +78,18 @@ export async function getCell(sessionId: string, cellId: string): Promise<CellRo
   return row;
 }
 
+/// The current ring left by the session's latest finished cell (null: none yet).
+export async function currentRingOf(sessionId: string): Promise<string | null> {
+  const [row] = await db()
+    .select({ result: cells.result })
+    .from(cells)
+    .where(and(eq(cells.sessionId, sessionId), sql`${cells.result} ? 'currentRing'`))
+    .orderBy(desc(cells.position))
+    .limit(1);
+  const ring = (row?.result as { currentRing?: unknown } | undefined)?.currentRing;
+  return typeof ring === "string" ? ring : null;
+}
+
 export async function listObjects(sessionId: string): Promise<ObjectRow[]> {
   return db().select().from(namedObjects).where(eq(namedObjects.sessionId, sessionId)).orderBy(asc(namedObjects.name));
 }
@@ -109,7 +123,7 @@ export async function finishCell(cell: CellRow, user: CurrentUser, outcome: Cell
       .update(cells)
       .set({
         status: outcome.status,
-        result: { statements: outcome.results },
+        result: { statements: outcome.results, currentRing: outcome.currentRing },
         error: outcome.error,
         finishedAt: new Date(),
         durationMs: Math.max(0, Math.round(outcome.durationMs)),
@@ -120,10 +134,10 @@ export async function finishCell(cell: CellRow, user: CurrentUser, outcome: Cell
     for (const o of outcome.objects) {
       const [row] = await tx
         .insert(namedObjects)
-        .values({ sessionId: cell.sessionId, ownerId: user.id, name: o.name, type: o.type, value: o.value, sourceCellId: cell.id })
+        .values({ sessionId: cell.sessionId, ownerId: user.id, name: o.name, type: o.type, value: o.value, source: o.source, sourceCellId: cell.id })
         .onConflictDoUpdate({
           target: [namedObjects.sessionId, namedObjects.name],
-          set: { type: o.type, value: o.value, sourceCellId: cell.id, updatedAt: new Date() },
+          set: { type: o.type, value: o.value, source: o.source, sourceCellId: cell.id, updatedAt: new Date() },
         })
         .returning();
       saved.push(row!);

@@ -25,6 +25,7 @@ export function objectView(row: ObjectRow) {
     type: row.type,
     value: row.value,
     summary: summarize(text),
+    source: row.source,
     sourceCellId: row.sourceCellId,
     updatedAt: row.updatedAt.toISOString(),
   };
