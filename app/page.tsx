@@ -4,11 +4,14 @@ import { eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { memberships, teams } from "@/db/schema";
 import { currentUser } from "@/lib/auth/current-user";
+import { Console } from "./_console/console";
 
-/// The console shell: the frame the console (sessions, shelf, transcript, input) fills.
-export default async function ConsolePage() {
+/// The console page: the header, then the console (sessions, shelf, transcript, input);
+/// `?session=<id>` opens that session.
+export default async function ConsolePage({ searchParams }: { searchParams: Promise<{ session?: string | string[] }> }) {
   const user = await currentUser();
   if (!user) redirect("/sign-in");
+  const { session } = await searchParams;
   const teamRows = await db()
     .select({ name: teams.name, role: memberships.role })
     .from(memberships)
@@ -16,8 +19,8 @@ export default async function ConsolePage() {
     .where(eq(memberships.userId, user.id));
 
   return (
-    <div className="flex min-h-screen flex-col">
-      <header className="flex items-center justify-between border-b border-ink/10 bg-white px-5 py-3">
+    <div className="flex h-screen flex-col">
+      <header className="flex items-center justify-between border-b border-ink/10 bg-white px-5 py-3 dark:border-paper/10 dark:bg-night-panel dark:text-paper">
         <p className="font-mono text-lg font-semibold tracking-tight">
           Ringside<span className="text-signal">.</span>
         </p>
@@ -40,24 +43,7 @@ export default async function ConsolePage() {
           </Link>
         </nav>
       </header>
-      <div className="grid flex-1 grid-cols-[16rem_1fr] gap-4 p-4">
-        <aside className="flex flex-col gap-4">
-          <section aria-label="Sessions" className="placeholder-region flex-1">
-            <h2 className="text-sm font-semibold uppercase tracking-wide text-ink-soft">Sessions</h2>
-          </section>
-          <section aria-label="Shelf" className="placeholder-region flex-1">
-            <h2 className="text-sm font-semibold uppercase tracking-wide text-ink-soft">Shelf</h2>
-          </section>
-        </aside>
-        <main className="flex flex-col gap-4">
-          <section aria-label="Transcript" className="placeholder-region flex-1">
-            <h2 className="text-sm font-semibold uppercase tracking-wide text-ink-soft">Transcript</h2>
-          </section>
-          <section aria-label="Input" className="placeholder-region font-mono">
-            <h2 className="font-sans text-sm font-semibold uppercase tracking-wide text-ink-soft">Input</h2>
-          </section>
-        </main>
-      </div>
+      <Console initialSessionId={typeof session === "string" ? session : null} />
     </div>
   );
 }

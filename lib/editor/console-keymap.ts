@@ -9,7 +9,8 @@ import { FRESH_CURSOR, recallNewer, recallOlder, type HistoryCursor } from "./in
 
 /// What the keymap needs from the page.
 export interface ConsoleKeymapOptions {
-  /// Runs the current input; returns false when running is not possible now.
+  /// Runs the current input; true when it was sent (the input is then cleared), false
+  /// when running is not possible now (the input stays).
   readonly run: (source: string) => boolean;
   /// Earlier inputs of the session, oldest first.
   readonly history: () => readonly string[];
@@ -44,7 +45,10 @@ export function consoleKeymap(options: ConsoleKeymapOptions): Extension {
             if (completing(view)) return false;
             const source = view.state.doc.toString();
             if (source.trim() === "") return true;
-            if (options.run(source)) cursor = FRESH_CURSOR;
+            if (options.run(source)) {
+              cursor = FRESH_CURSOR;
+              view.dispatch({ changes: { from: 0, to: view.state.doc.length, insert: "" } });
+            }
             return true;
           },
         },

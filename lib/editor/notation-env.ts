@@ -7,7 +7,7 @@ import { T, type SimpleKind, type Type } from "@/grammar/types";
 export interface TypedBinding {
   readonly name: string;
   readonly type: string;
-  readonly value: { readonly type?: string; readonly vars?: readonly string[]; readonly [k: string]: unknown };
+  readonly value: { readonly type?: string; readonly vars?: readonly string[] };
   readonly updatedAt?: string;
 }
 
