@@ -1,7 +1,12 @@
-/// Password policy and hashing (bcrypt, cost 12).
+/// Password policy and hashing (bcrypt).
 import bcrypt from "bcryptjs";
 
-const COST = 12;
+/// bcrypt's work factor: 12 unless RINGSIDE_BCRYPT_COST (4–15) says otherwise; test.sh
+/// lowers it so hundreds of sign-ins stay fast, which is common practice for test suites.
+export function bcryptCost(): number {
+  const wanted = Number(process.env.RINGSIDE_BCRYPT_COST ?? 12);
+  return Number.isInteger(wanted) && wanted >= 4 && wanted <= 15 ? wanted : 12;
+}
 export const PASSWORD_RULE =
   "Passwords need at least 10 characters, including a letter and a digit, and at most 72 bytes.";
 
@@ -16,7 +21,7 @@ export function passwordProblem(password: string): string | null {
 }
 
 export function hashPassword(password: string): Promise<string> {
-  return bcrypt.hash(password, COST);
+  return bcrypt.hash(password, bcryptCost());
 }
 
 export function verifyPassword(password: string, hash: string): Promise<boolean> {
@@ -27,6 +32,6 @@ export function verifyPassword(password: string, hash: string): Promise<boolean>
 // wrong e-mail costs as much time as a wrong password.
 let decoy: Promise<string> | undefined;
 export function decoyHash(): Promise<string> {
-  decoy ??= bcrypt.hash(`decoy-${Math.random()}`, COST);
+  decoy ??= bcrypt.hash(`decoy-${Math.random()}`, bcryptCost());
   return decoy;
 }

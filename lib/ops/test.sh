@@ -56,6 +56,7 @@ SMTP_PORT="$(first_free_port "${RINGSIDE_TEST_SMTP_PORT:-2535}")"
 export RINGSIDE_SMTP_PORT="$SMTP_PORT"
 export RINGSIDE_MAIL_DIR="$T/mail"
 export RINGSIDE_SYMPY_PYTHON=/usr/bin/python3
+export RINGSIDE_BCRYPT_COST=4
 export NEXT_TELEMETRY_DISABLED=1
 export NEXTAUTH_SECRET
 NEXTAUTH_SECRET="$(secret_file "$T/nextauth-secret")"
