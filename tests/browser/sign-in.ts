@@ -13,7 +13,7 @@ browserTest("signs in with a team account and sees the console shell", async ({ 
   await page.getByLabel("Password").fill(account.password);
   await page.getByRole("button", { name: "Sign in" }).click();
   await page.getByRole("region", { name: "Transcript" }).waitFor();
-  for (const region of ["Sessions", "Shelf", "Input"]) {
+  for (const region of ["Transcript", "Input"]) {
     check(await page.getByRole("region", { name: region }).isVisible(), `the console shell shows no ${region} region`);
   }
   check((await page.getByTestId("user-name").textContent()) === account.name, "the header does not show the user's name");
