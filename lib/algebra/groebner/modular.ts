@@ -139,12 +139,15 @@ function ratRecon(u: bigint, M: bigint): Rat | null {
   return x.d > bound ? null : x;
 }
 
+/// Integer square root by Newton's iteration.
 function bigSqrt(n: bigint): bigint {
   if (n < 2n) return n;
-  let x = BigInt(Math.floor(Math.sqrt(Number(n))));
-  while (x * x > n) x--;
-  while ((x + 1n) * (x + 1n) <= n) x++;
-  return x;
+  let x = 1n << (BigInt(n.toString(2).length) / 2n + 1n);
+  for (;;) {
+    const y = (x + n / x) >> 1n;
+    if (y >= x) return x;
+    x = y;
+  }
 }
 
 function reconstruct(R: RingCtx<Rat>, L: Lift): Poly[] | null {
