@@ -14,7 +14,7 @@ type Tok =
 const where = "parsePoly";
 
 function fail(text: string, at: number, why: string): never {
-  throw runtimeError(where, `${why} at column ${at + 1} of ${JSON.stringify(text)}`, at);
+  throw runtimeError(where, `column ${at + 1} of ${JSON.stringify(text)}: ${why}`, at);
 }
 
 function tokenize(text: string): Tok[] {

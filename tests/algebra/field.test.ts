@@ -1,0 +1,63 @@
+import { describe, expect, it } from "vitest";
+import fc from "fast-check";
+import * as A from "@/lib/algebra";
+import { gfCoeffs, qCoeffs } from "@/lib/algebra/field/coeffs";
+import { mulModLarge } from "@/lib/algebra/field/gfp";
+
+describe("coefficient fields", () => {
+  it("accepts primes below 2^31 and rejects everything else with a clear message", () => {
+    expect(A.gf(2)).toEqual({ kind: "gf", p: 2 });
+    expect(A.gf(2147483647).p).toBe(2147483647); // 2^31 − 1 is a Mersenne prime (common practice)
+    expect(() => A.gf(12)).toThrow(/12 is not prime/);
+    expect(() => A.gf(1)).toThrow(/2 <= p < 2\^31/);
+    expect(() => A.gf(2 ** 31 + 11)).toThrow(/2 <= p < 2\^31/);
+    expect(() => A.gf(7.5)).toThrow(/integer/);
+    try {
+      A.gf(91); // 91 = 7·13
+    } catch (e) {
+      expect(e).toBeInstanceOf(A.AlgebraError);
+      expect((e as A.AlgebraError).kind).toBe("runtime");
+    }
+  });
+
+  it("multiplies exactly modulo primes above 2^26 (checked against BigInt)", () => {
+    const p = 2147483629; // a prime below 2^31 (checked by isPrime below)
+    expect(A.isPrime(p)).toBe(true);
+    fc.assert(
+      fc.property(fc.integer({ min: 0, max: p - 1 }), fc.integer({ min: 0, max: p - 1 }), (a, b) => {
+        expect(mulModLarge(a, b, p)).toBe(Number((BigInt(a) * BigInt(b)) % BigInt(p)));
+      }),
+    );
+    const K = gfCoeffs({ kind: "gf", p });
+    expect(K.mul(p - 1, p - 1)).toBe(1); // (−1)² = 1
+  });
+
+  it("inverts every non-zero residue (a · a⁻¹ = 1)", () => {
+    for (const p of [2, 3, 32003, 65537, 2147483647]) {
+      const K = gfCoeffs({ kind: "gf", p });
+      fc.assert(
+        fc.property(fc.integer({ min: 1, max: p - 1 }), (a) => {
+          expect(K.mul(a, K.inv(a))).toBe(1);
+        }),
+        { numRuns: 50 },
+      );
+    }
+  });
+
+  it("satisfies Fermat's little theorem a^(p−1) = 1 in GF(p)", () => {
+    const R = A.polyRing(A.gf(32003), []);
+    expect(A.formatPoly(R, A.pow(R, A.constant(R, 5n), 32002))).toBe("1");
+    expect(A.formatPoly(R, A.pow(R, A.constant(R, 5n), 16001))).toMatch(/^-?1$/); // Euler's criterion: ±1
+  });
+
+  it("computes exactly over Q and maps rationals into GF(p)", () => {
+    const K = qCoeffs;
+    const s = K.add(K.fromRational(1n, 2n), K.fromRational(1n, 3n));
+    expect(K.toRational(s)).toEqual({ num: 5n, den: 6n });
+    expect(K.toRational(K.fromRational(6n, -4n))).toEqual({ num: -3n, den: 2n });
+    const G = gfCoeffs({ kind: "gf", p: 7 });
+    expect(G.fromRational(1n, 2n)).toBe(4); // 2·4 = 8 ≡ 1 (mod 7)
+    expect(() => G.fromRational(1n, 14n)).toThrow(/denominator 14 is 0 in GF\(7\)/);
+    expect(() => K.fromRational(1n, 0n)).toThrow(/division by zero/);
+  });
+});

@@ -1,0 +1,68 @@
+import * as A from "@/lib/algebra";
+
+/// The cyclic-n system in variables x0..x(n−1): the elementary cyclic sums
+/// Σ_i x_i x_{i+1} ⋯ x_{i+k−1} for k < n, and x_0 ⋯ x_{n−1} − 1
+/// (G. Björck, R. Fröberg, "A faster way to count the solutions of inhomogeneous systems
+/// of algebraic equations", J. Symbolic Comput. 1991).
+export function cyclic(field: A.Field, n: number): { R: A.PolyRing; gens: A.Poly[] } {
+  const v = Array.from({ length: n }, (_, i) => `x${i}`);
+  const R = A.polyRing(field, v);
+  const gens: A.Poly[] = [];
+  for (let k = 1; k < n; k++) {
+    const sum = v.map((_, i) => Array.from({ length: k }, (_, j) => v[(i + j) % n]).join("*"));
+    gens.push(A.parsePoly(R, sum.join("+")));
+  }
+  gens.push(A.parsePoly(R, `${v.join("*")}-1`));
+  return { R, gens };
+}
+
+/// The katsura-n system in u0..un: u0 + 2(u1 + … + un) = 1 and, for m = 0..n−1,
+/// Σ_{l=−n..n} u_|l| u_|m−l| = u_m with u_k = 0 for k > n (common practice, from memory).
+export function katsura(field: A.Field, n: number): { R: A.PolyRing; gens: A.Poly[] } {
+  const v = Array.from({ length: n + 1 }, (_, i) => `u${i}`);
+  const R = A.polyRing(field, v);
+  const u = (k: number) => (Math.abs(k) <= n ? v[Math.abs(k)] : null);
+  const gens: A.Poly[] = [A.parsePoly(R, `${v[0]}+2*(${v.slice(1).join("+")})-1`)];
+  for (let m = 0; m < n; m++) {
+    const parts: string[] = [];
+    for (let l = -n; l <= n; l++) {
+      const a = u(l), b = u(m - l);
+      if (a && b) parts.push(`${a}*${b}`);
+    }
+    gens.push(A.parsePoly(R, `${parts.join("+")}-${v[m]}`));
+  }
+  return { R, gens };
+}
+
+/// The number of monomials outside the initial ideal of a zero-dimensional ideal
+/// (= dim_k S/I, the degree counted with multiplicity), by walking the staircase; null
+/// when the ideal is not zero-dimensional.
+export function countStandardMonomials(R: A.PolyRing, G: A.Poly[]): number | null {
+  const lms = G.map((g) => A.leadExponents(R, g));
+  const n = R.vars.length;
+  const bound: number[] = [];
+  for (let i = 0; i < n; i++) {
+    const pure = lms.filter((e) => e.every((x, j) => j === i || x === 0)).map((e) => e[i]);
+    if (pure.length === 0) return null;
+    bound.push(Math.min(...pure));
+  }
+  const inIdeal = (e: number[]) => lms.some((l) => l.every((x, j) => x <= e[j]));
+  let count = 0;
+  const e = new Array<number>(n).fill(0);
+  const walk = (i: number): void => {
+    if (i === n) {
+      count++;
+      return;
+    }
+    for (e[i] = 0; e[i] < bound[i]; e[i]++) {
+      // Divisibility is monotone: once e is in the ideal, larger e_i stay in it.
+      const rest = e.slice();
+      for (let j = i + 1; j < n; j++) rest[j] = 0;
+      if (inIdeal(rest)) break;
+      walk(i + 1);
+    }
+    e[i] = 0;
+  };
+  walk(0);
+  return count;
+}
