@@ -10,7 +10,7 @@ import { ringCtx, type PolyRing, type RingCtx } from "./poly/ring";
 import { groebnerCtx, normalFormCtx } from "./groebner/index";
 
 export { AlgebraError, type AlgebraErrorKind } from "./errors";
-export { gf, QQ, fieldName, type Field } from "./field/field";
+export { gf, QQ, fieldName, type Field, type PrimeField } from "./field/field";
 export { isPrime } from "./field/prime";
 export type { OrderSpec } from "./order/order";
 export { orderName } from "./order/order";

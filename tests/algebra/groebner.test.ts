@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import * as A from "@/lib/algebra";
-import { countStandardMonomials, cyclic, katsura } from "./systems/families";
+import { countStandardMonomials, cyclic, katsura } from "../bench/families";
 
 const F = A.gf(32003);
 const texts = (R: A.PolyRing, G: A.Poly[]) => G.map((g) => A.formatPoly(R, g));

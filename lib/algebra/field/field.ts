@@ -4,10 +4,12 @@ import { isPrime } from "./prime";
 /// A coefficient field: the prime field Z/p or the rationals.
 export type Field = { readonly kind: "gf"; readonly p: number } | { readonly kind: "Q" };
 
+export type PrimeField = Extract<Field, { kind: "gf" }>;
+
 export const GF_MAX = 2 ** 31;
 
 /// The prime field GF(p); p must be a prime below 2^31.
-export function gf(p: number): Field {
+export function gf(p: number): PrimeField {
   if (typeof p !== "number" || !Number.isInteger(p)) {
     throw runtimeError("gf", `the characteristic must be an integer, got ${String(p)}`);
   }
