@@ -1,0 +1,3 @@
+export { type FreeModule, freeModule, freeRank } from "./free";
+export { type ModuleOrder, termOverPosition, positionOverTerm, schreyerOrder } from "./order";
+export { moduleGroebnerBasis, moduleSyzygies, type ModuleOrderKind } from "./api";

@@ -1,0 +1,102 @@
+import { limitError } from "../errors";
+import { checkLimit, checkpoint, Ticker, type ComputeOptions } from "../options";
+import type { RingCtx } from "../poly/ring";
+import { divisorsOf } from "../module/divide";
+import { schreyerOrder, type ModuleOrder } from "../module/order";
+import { schreyerFrame, schreyerSort, schreyerSyzygy } from "../module/syzygy";
+import type { Vec } from "../module/vector";
+
+/// The Schreyer resolution F_0 ← F_1 ← … of a module F_0 / ⟨g⟩: level k holds the columns of
+/// d_k (vectors in F_{k−1}) and the degrees of the basis of F_k.
+export interface SchreyerResolution<C> {
+  readonly degrees: number[][];
+  readonly orders: ModuleOrder[];
+  /// cols[k] for k ≥ 1; cols[0] is empty.
+  readonly cols: Vec<C>[][];
+  /// Whether a degree bound dropped frame elements.
+  truncatedDegree: boolean;
+  /// Whether frame elements beyond the last computed level exist.
+  truncatedLength: boolean;
+}
+
+export interface FrameBounds {
+  /// Last homological degree whose differential is computed.
+  readonly maxLevel: number;
+  /// Largest internal degree kept.
+  readonly maxDegree: number;
+}
+
+/// Called when level k (the columns of d_k) is finished.
+export type LevelDone<C> = (S: SchreyerResolution<C>, k: number) => void;
+
+/// Computes the Schreyer frame level by level and, within a level, degree by degree: the
+/// leading terms come from the previous level alone (Schreyer's theorem), the rest of each
+/// syzygy by one heap division (R. La Scala, M. Stillman, "Strategies for computing minimal
+/// free resolutions", J. Symbolic Comput. 26, 1998).
+export function schreyerResolution<C>(
+  R: RingCtx<C>,
+  degrees0: readonly number[],
+  order0: ModuleOrder,
+  basis: readonly Vec<C>[],
+  bounds: FrameBounds,
+  opts: ComputeOptions | undefined,
+  onLevel: LevelDone<C>,
+): SchreyerResolution<C> {
+  const S: SchreyerResolution<C> = { degrees: [[...degrees0]], orders: [order0], cols: [[]], truncatedDegree: false, truncatedLength: false };
+  const perm = schreyerSort(basis);
+  const first = perm.map((k) => basis[k]);
+  const firstDegrees = first.map((v) => v.mono[0][1] + degrees0[v.comp[0]]);
+  const keep = firstDegrees.map((d) => d <= bounds.maxDegree);
+  if (keep.includes(false)) S.truncatedDegree = true;
+  pushLevel(S, first.filter((_, k) => keep[k]), firstDegrees.filter((_, k) => keep[k]), order0);
+  onLevel(S, 1);
+  const maxTerms = opts?.limits?.maxTerms ?? Infinity;
+  let level = 1, degree = 0, done = 0, total = 0;
+  const info = () => ({
+    stage: "resolution",
+    detail: `homological degree ${level + 1}, internal degree ${degree}`,
+    fraction: total > 0 ? done / total : undefined,
+  });
+  const ticker = new Ticker(opts, info);
+  for (; S.cols[level].length > 0; level++) {
+    const gens = S.cols[level];
+    const frame = schreyerFrame(R, gens);
+    if (level >= bounds.maxLevel) {
+      if (frame.length > 0) S.truncatedLength = true;
+      break;
+    }
+    const degs = frame.map((t) => t.mono[1] + S.degrees[level][t.i]);
+    const kept = frame.filter((_, p) => degs[p] <= bounds.maxDegree);
+    const keptDegs = degs.filter((d) => d <= bounds.maxDegree);
+    if (kept.length < frame.length) S.truncatedDegree = true;
+    checkLimit(opts, "maxBasisSize", kept.length, `the rank of the free module F_${level + 1}`);
+    const O = S.orders[level - 1];
+    const next = S.orders[level];
+    const D = divisorsOf(gens);
+    const cols = new Array<Vec<C>>(kept.length);
+    const byDegree = kept.map((_, p) => p).sort((a, b) => keptDegs[a] - keptDegs[b]);
+    done = 0;
+    total = kept.length;
+    for (const p of byDegree) {
+      degree = keptDegs[p];
+      const limit = opts?.limits?.maxDegree;
+      if (limit !== undefined && degree > limit) {
+        throw limitError("maxDegree", `the resolution reached internal degree ${degree}, above the limit maxDegree = ${limit}`);
+      }
+      checkpoint(opts, info);
+      cols[p] = schreyerSyzygy(R, O, gens, D, next, kept[p], ticker, maxTerms);
+      done++;
+    }
+    S.degrees.push(keptDegs);
+    S.orders.push(schreyerOrder(next, kept.map((t) => ({ mono: t.mono, comp: t.i }))));
+    S.cols.push(cols);
+    onLevel(S, level + 1);
+  }
+  return S;
+}
+
+function pushLevel<C>(S: SchreyerResolution<C>, cols: Vec<C>[], degs: number[], O: ModuleOrder): void {
+  S.degrees.push(degs);
+  S.cols.push(cols);
+  S.orders.push(schreyerOrder(O, cols.map((g) => ({ mono: g.mono[0], comp: g.comp[0] }))));
+}

@@ -1,0 +1,3 @@
+export { type BettiTable, type BettiColumn, bettiNumber, bettiTotals, bettiRegularity, bettiAlternatingSum } from "./betti";
+export { type Resolution, type ResolveOptions, resolveQuotient, resolveCoker } from "./resolve";
+export { projectiveDimension, depthByAuslanderBuchsbaum, regularity } from "./invariants";
