@@ -6,7 +6,7 @@ import { commonRing, ideal, type Ideal } from "./ideal";
 import { idealIntersection, idealIntersectionOf } from "./intersect";
 
 /// I : f = { g : g·f ∈ I } = (1/f)·(I ∩ (f)) (D. Cox, J. Little, D. O'Shea, *Ideals,
-/// Varieties, and Algorithms*, Ch. 4 §4 Thm 11).
+/// Varieties, and Algorithms*, Ch. 4 §4).
 export function idealColonElement(I: Ideal, f: Poly, opts?: ComputeOptions): Ideal {
   const R = I.ring;
   if (!f) throw runtimeError("idealColonElement", "the element is missing");

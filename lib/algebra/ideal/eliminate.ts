@@ -6,7 +6,7 @@ import { avoidsVariables, eliminationRing, identityMap, mapPoly, pullbackPoly } 
 
 /// I ∩ k[other variables]: the elements of a Gröbner basis for an elimination order
 /// that involve none of `vars` generate it (elimination theorem; D. Cox, J. Little,
-/// D. O'Shea, *Ideals, Varieties, and Algorithms*, Ch. 3 §1 Thm 2). The result is an
+/// D. O'Shea, *Ideals, Varieties, and Algorithms*, Ch. 3 §1). The result is an
 /// ideal of the same ring. `vars` are variable names or indices.
 export function idealEliminate(I: Ideal, vars: readonly (string | number)[], opts?: ComputeOptions): Ideal {
   const R = I.ring;

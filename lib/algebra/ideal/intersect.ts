@@ -6,7 +6,7 @@ import { commonRing, ideal, type Ideal } from "./ideal";
 import { taggedRing } from "./transfer";
 
 /// I ∩ J = (t·I + (1 − t)·J) ∩ k[x] with a tag variable t (D. Cox, J. Little, D. O'Shea,
-/// *Ideals, Varieties, and Algorithms*, Ch. 4 §3 Thm 11).
+/// *Ideals, Varieties, and Algorithms*, Ch. 4 §3).
 export function idealIntersection(I: Ideal, J: Ideal, opts?: ComputeOptions): Ideal {
   const R = commonRing("idealIntersection", I, J);
   if (I.gens.length === 0 || J.gens.length === 0) return ideal(R, []);
