@@ -57,6 +57,8 @@ export RINGSIDE_SMTP_PORT="$SMTP_PORT"
 export RINGSIDE_MAIL_DIR="$T/mail"
 export RINGSIDE_SYMPY_PYTHON=/usr/bin/python3
 export RINGSIDE_BCRYPT_COST=4
+# A short cell time limit so the API test of the limit finishes quickly.
+export RINGSIDE_CELL_TIME_LIMIT_MS=8000
 export NEXT_TELEMETRY_DISABLED=1
 export NEXTAUTH_SECRET
 NEXTAUTH_SECRET="$(secret_file "$T/nextauth-secret")"
