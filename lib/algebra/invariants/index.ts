@@ -1,0 +1,2 @@
+export { minors, det } from "./minors";
+export { pfaffians } from "./pfaffians";
