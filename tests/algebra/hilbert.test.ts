@@ -175,6 +175,15 @@ describe("Hilbert series of monomial ideals", () => {
     expect(() => hilbertFunctionValues(hs, 50, { limits: { maxDegree: 10 } })).toThrow(AlgebraError);
   });
 
+  it("reports progress while the recursion runs", () => {
+    const rand = rng(5);
+    const gens = Array.from({ length: 60 }, () => Array.from({ length: 8 }, () => Math.floor(rand() * 4)));
+    const stages: string[] = [];
+    hilbertSeriesOfMonomials(gens, new Array(8).fill(1), { progress: (p) => stages.push(p.stage) });
+    expect(stages.length).toBeGreaterThan(0);
+    expect(stages[0]).toBe("Hilbert series");
+  });
+
   it("stops with kind 'cancelled' when the signal is aborted", () => {
     const controller = new AbortController();
     controller.abort();

@@ -1,6 +1,6 @@
 import { runtimeError } from "../errors";
 import { checkpoint, checkLimit, type ComputeOptions } from "../options";
-import { mul, one } from "./engine";
+import { type Poly, mul, one } from "./engine";
 import { commonRing, ideal, type Ideal } from "./ideal";
 
 /// I + J.
@@ -13,10 +13,10 @@ export function idealSum(I: Ideal, J: Ideal): Ideal {
 export function idealProduct(I: Ideal, J: Ideal, opts?: ComputeOptions): Ideal {
   const R = commonRing("idealProduct", I, J);
   checkLimit(opts, "maxBasisSize", I.gens.length * J.gens.length, "number of generators of a product");
-  const out = [];
+  const out: Poly[] = [];
   for (const f of I.gens) {
     checkpoint(opts, { stage: "ideal product" });
-    for (const g of J.gens) out.push(mul(R, f, g));
+    for (const g of J.gens) out.push(mul(R, f, g, opts));
   }
   return ideal(R, out);
 }
@@ -28,10 +28,10 @@ export function idealPower(I: Ideal, k: number, opts?: ComputeOptions): Ideal {
   // products g_{i1}⋯g_{ij} with i1 ≤ … ≤ ij, kept with the index of their last factor
   let layer = [{ poly: one(R), last: 0 }];
   for (let step = 0; step < k; step++) {
-    const next = [];
+    const next: { poly: Poly; last: number }[] = [];
     for (const { poly, last } of layer) {
       checkpoint(opts, { stage: "ideal power", detail: `factor ${step + 1} of ${k}` });
-      for (let i = last; i < I.gens.length; i++) next.push({ poly: mul(R, poly, I.gens[i]), last: i });
+      for (let i = last; i < I.gens.length; i++) next.push({ poly: mul(R, poly, I.gens[i], opts), last: i });
     }
     checkLimit(opts, "maxBasisSize", next.length, "number of generators of a power");
     layer = next;

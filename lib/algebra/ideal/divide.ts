@@ -1,5 +1,5 @@
 import { runtimeError } from "../errors";
-import { monoDiv, monoDivides } from "../monomial/monomial";
+import { type Mono, monoDiv, monoDivides } from "../monomial/monomial";
 import { addScaled, mulTerm } from "../poly/arith";
 import { asTyped, makePoly, type Poly } from "../poly/poly";
 import { type PolyRing, ringCtx } from "../poly/ring";
@@ -13,8 +13,8 @@ export function exactQuotient(R: PolyRing, h: Poly, f: Poly, opts?: ComputeOptio
   if (f.m.length === 0) throw runtimeError("exactQuotient", "division by the zero polynomial");
   const lm = f.m[0];
   const lcInv = K.inv(asTyped(f).c[0]);
-  const qm = [];
-  const qc = [];
+  const qm: Mono[] = [];
+  const qc: unknown[] = [];
   let rest = h;
   while (rest.m.length > 0) {
     checkpoint(opts, { stage: "exact division", detail: `${rest.m.length} terms left` });
