@@ -432,7 +432,7 @@ class Checker {
   private binary(e: A.Binary): Type {
     const l = this.infer(e.left);
     const r = this.infer(e.right);
-    if (e.op === "^") this.checkExponent(e, r);
+    if (e.op === "^" && this.checkExponent(e, r)) return l.kind === "Ideal" || l.kind === "Poly" ? l : T.Any;
     if (e.op === "/" && constValue(e.right) === 0n) {
       this.error(e.right.span, `division by zero: ${this.text(e)} divides by ${this.text(e.right)}, which is 0`);
       return l.kind === "Int" ? T.Rat : l;
@@ -446,7 +446,8 @@ class Checker {
     return T.Any;
   }
 
-  private checkExponent(e: A.Binary, r: Type): void {
+  /// Reports a bad exponent; true when it did.
+  private checkExponent(e: A.Binary, r: Type): boolean {
     const v = constValue(e.right);
     if (v !== null && v < 0n) {
       this.error(
@@ -457,7 +458,8 @@ class Checker {
       this.error(e.right.span, `power too large: the exponent ${v} is above the limit 10^6`);
     } else if (r.kind === "Rat") {
       this.error(e.right.span, `powers must be non-negative integers, got the Rat ${this.text(e.right)}`);
-    }
+    } else return false;
+    return true;
   }
 
   private operatorMessage(e: A.Binary, l: Type, r: Type): string {
@@ -800,6 +802,7 @@ class Checker {
 }
 
 function wrap(e: A.Expr, text: string): string {
+  if (text.startsWith("(") && text.endsWith(")")) return text;
   const atomic = ["Identifier", "IdealLit", "Call", "Property", "Subscript", "ListLit", "IntLit"].includes(e.kind);
   return atomic ? text : `(${text})`;
 }

@@ -37,6 +37,8 @@ const OPERAND_START = new Set<TokenType>([
   Tok.IdealOpen,
 ]);
 
+const COMPARISONS = new Set<TokenType>([Tok.EqEq, Tok.NotEq, Tok.Lt, Tok.LessEq, Tok.Gt, Tok.GreaterEq, Tok.In, Tok.MemberOf]);
+
 /// How a token is named in a message.
 export function describeToken(t: IToken | undefined): string {
   if (!t || t.tokenType === EOF || t.tokenType === Tok.End) return "the end of the statement";
@@ -51,6 +53,17 @@ const label = (t: TokenType): string => t.LABEL ?? t.name;
 const RULE_WANTS: Record<string, string> = {
   primary: "an expression",
   expression: "an expression",
+  orExpr: "an expression",
+  andExpr: "an expression",
+  notExpr: "an expression",
+  compareExpr: "an expression",
+  rangeExpr: "an expression",
+  idealOpExpr: "an expression",
+  addExpr: "an expression",
+  mulExpr: "an expression",
+  unaryExpr: "an expression",
+  powerExpr: "an expression",
+  postfixExpr: "an expression",
   statement: "a statement",
   argument: "an argument",
   namedOption: "an option `name = value`",
@@ -575,9 +588,11 @@ class NotationParser extends EmbeddedActionsParser {
         },
       });
       this.CONSUME(Tok.RParen);
-      return this.ACTION(() =>
-        items.length === 1 ? items[0] : ({ kind: "Tuple", items, span: this.spanFrom(this.tokSpan(open)) } as A.Tuple),
-      );
+      return this.ACTION((): A.Expr => {
+        const span = this.spanFrom(this.tokSpan(open));
+        // The parentheses belong to the span, so messages quote `(x+1)` whole.
+        return items.length === 1 ? { ...items[0], span } : { kind: "Tuple", items, span };
+      });
     },
     this.recover,
   );
@@ -736,6 +751,11 @@ export function parse(source: string): ParseResult {
       }
     }
     const clean = tokens.filter((t) => t.tokenType !== Tok.UnterminatedStr);
+    if (clean.length === 0) {
+      const s = span(first.startOffset, stmtEnd);
+      statements.push({ kind: "ExprStatement", expr: { kind: "ErrorExpr", span: s }, span: s });
+      return;
+    }
     p.load(loc, clean);
     let stmt: A.Statement;
     try {
@@ -791,6 +811,8 @@ function recognitionError(err: IRecognitionException, tokens: IToken[], loc: Loc
     if (prev && OPERAND_END.has(prev.tokenType) && OPERAND_START.has(t.tokenType)) {
       const glue = t.tokenType === Tok.LParen ? "(…)" : t.image;
       message += ` — there is no implicit multiplication; did you mean ${prev.image}*${glue}?`;
+    } else if (COMPARISONS.has(t.tokenType)) {
+      message += " — comparisons do not chain: join them with `and`, as in a < b and b < c";
     }
   }
   return { kind: "parse", message, span: { from: loc.at(from), to: loc.at(Math.max(from, to)) } };

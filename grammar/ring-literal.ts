@@ -21,7 +21,7 @@ function expandRange(from: string, to: string): string[] | string {
   if (fm && tm && fm[1] === tm[1] && fm[1] !== "") {
     const a = Number(fm[2]);
     const b = Number(tm[2]);
-    if (b < a) return `the range ${from}..${to} runs backwards: write ${to.replace(/[0-9]+$/, fm[2])}..${from.replace(/[0-9]+$/, tm[2])}`;
+    if (b < a) return `the range ${from}..${to} runs backwards: write ${to}..${from}`;
     if (b - a + 1 > MAX_VARIABLES) return `the range ${from}..${to} has ${b - a + 1} variables, more than the limit ${MAX_VARIABLES}`;
     const out: string[] = [];
     for (let i = a; i <= b; i++) out.push(fm[1] + String(i));

@@ -20,6 +20,7 @@ export function editDistance(a: string, b: string, max = 3): number {
 
 /// The closest candidate within a distance that grows with the name's length.
 export function nearest(name: string, candidates: Iterable<string>): string | undefined {
+  if (name.length <= 2) return undefined; // every short name is close to every other
   const limit = name.length <= 3 ? 1 : name.length <= 6 ? 2 : 3;
   let best: string | undefined;
   let bestD = limit + 1;
