@@ -120,7 +120,8 @@ build_if_stale() {
   fi
   log "next build"
   (cd "$ROOT" && NEXT_TELEMETRY_DISABLED=1 node node_modules/next/dist/bin/next build) || die "next build failed"
-  [ -n "$want" ] && printf '%s\n' "$want" >"$stamp"
+  # Hashed again after the build: next build itself may rewrite tsconfig.json.
+  [ -n "$want" ] && source_hash >"$stamp"
   return 0
 }
 
