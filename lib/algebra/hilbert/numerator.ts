@@ -21,8 +21,16 @@ function numeratorOfMinimal(gens: readonly Exponents[], weights: readonly number
   ticker.tick();
   if (gens.length === 0) return [1n];
   if (gens.length === 1) return tpolyMulOneMinusPower([1n], monomialWeightedDegree(gens[0], weights));
-  const pivotVar = mostFrequentVariable(gens);
-  if (pivotVar < 0) return coprimeProduct(gens, weights);
+  const counts = variableCounts(gens);
+  // A generator sharing no variable with the others is a nonzerodivisor modulo them:
+  // it splits off as a factor (1 − t^{deg g}).
+  const isolated = gens.filter((g) => g.every((e, i) => e === 0 || counts[i] === 1));
+  if (isolated.length > 0) {
+    const rest = gens.filter((g) => !isolated.includes(g));
+    return coprimeProduct(isolated, weights, numeratorOfMinimal(rest, weights, ticker));
+  }
+  let pivotVar = 0;
+  for (let i = 1; i < counts.length; i++) if (counts[i] > counts[pivotVar]) pivotVar = i;
 
   // Pivot x^e with e the median exponent of x among generators that are not pure
   // powers of x. Then x^e ∉ I (a pure power x^a of I has a > e, by minimality) and
@@ -50,21 +58,11 @@ function numeratorOfMinimal(gens: readonly Exponents[], weights: readonly number
   return tpolyAdd(first, second);
 }
 
-/// The variable dividing the most generators, or −1 when no variable divides two of
-/// them (the generators are then pairwise coprime).
-function mostFrequentVariable(gens: readonly Exponents[]): number {
-  const n = gens[0].length;
-  let best = -1;
-  let bestCount = 1;
-  for (let i = 0; i < n; i++) {
-    let c = 0;
-    for (const g of gens) if (g[i] > 0) c++;
-    if (c > bestCount) {
-      best = i;
-      bestCount = c;
-    }
-  }
-  return best;
+/// How many generators each variable divides.
+function variableCounts(gens: readonly Exponents[]): number[] {
+  const counts = new Array<number>(gens[0].length).fill(0);
+  for (const g of gens) g.forEach((e, i) => e > 0 && counts[i]++);
+  return counts;
 }
 
 function isPurePower(g: Exponents, i: number): boolean {
@@ -72,9 +70,9 @@ function isPurePower(g: Exponents, i: number): boolean {
   return true;
 }
 
-/// Pairwise coprime generators form a regular sequence: N = ∏ (1 − t^{deg g}).
-function coprimeProduct(gens: readonly Exponents[], weights: readonly number[]): bigint[] {
-  let out: bigint[] = [1n];
+/// N · ∏ (1 − t^{deg g}) for generators g coprime to each other and to the rest.
+function coprimeProduct(gens: readonly Exponents[], weights: readonly number[], rest: bigint[]): bigint[] {
+  let out = rest;
   for (const g of gens) out = tpolyMulOneMinusPower(out, monomialWeightedDegree(g, weights));
   return out;
 }
