@@ -441,6 +441,8 @@ class Checker {
       if (isAssignable(l, r) || isAssignable(r, l)) return T.Bool;
     }
     const t = this.operator(e.op, l, r);
+    // A quotient keeps the variables of the ring it was formed from.
+    if (t?.kind === "Ring" && l.kind === "Ring") return l;
     if (t !== undefined) return t;
     this.error(e.opSpan, this.operatorMessage(e, l, r));
     return T.Any;
@@ -754,6 +756,7 @@ class Checker {
     }
     const sig = this.propertyOf(obj, e);
     if (!sig) return T.Any;
+    if (obj.kind === "Ring" && sig.result.kind === "Ring") return obj;
     if (sig.params !== null) {
       this.error(
         e.span,
@@ -781,7 +784,7 @@ class Checker {
     if (obj.kind === "Ring") {
       this.error(
         e.span,
-        `${this.text(e.object)} is a Ring; a new ring is built from a field, as in ${this.text(e.object)}.field[${e.items.map((i) => this.text(i)).join(", ")}]`,
+        `${this.text(e.object)} is a Ring, not a List, so it cannot be indexed — a new polynomial ring is built from a field, as in ${this.text(e.object)}.field[t]`,
       );
       return T.Any;
     }

@@ -262,6 +262,18 @@ const ENDS_OPERAND = new Set<TokenType>([
   Tok.IdealClose,
 ]);
 
+const STARTS_OPERAND = new Set<TokenType>([
+  Tok.Identifier,
+  Tok.Integer,
+  Tok.NumberName,
+  Tok.Str,
+  Tok.True,
+  Tok.False,
+  Tok.If,
+  Tok.Not,
+  Tok.Use,
+]);
+
 function retype(t: IToken, type: TokenType, image?: string, startOffset?: number): IToken {
   const start = startOffset ?? t.startOffset;
   const img = image ?? t.image;
@@ -313,7 +325,7 @@ export function layout(source: string, raw: RawLex): Layout {
     const type = t.tokenType;
     const top = stack[stack.length - 1];
     if (type === Tok.Newline) {
-      if (stack.length === 0 || startsNewStatement(tokens, i + 1)) closeStatement();
+      if (stack.length === 0 || startsNewStatement(tokens, i + 1, current[current.length - 1])) closeStatement();
       continue;
     }
     if (type === Tok.Semicolon && stack.length === 0) {
@@ -375,11 +387,13 @@ export function layout(source: string, raw: RawLex): Layout {
 }
 
 /// Inside open brackets a new line normally continues the statement; but a line that
-/// begins a definition (`name :=`) or `use` surely starts a new one, which keeps a
-/// forgotten closer from swallowing the rest of the program.
-function startsNewStatement(tokens: IToken[], i: number): boolean {
+/// begins a definition (`name :=`) or `use`, or an operand right after an operand
+/// (nothing could join them), surely starts a new one. This keeps a forgotten closer
+/// from swallowing the rest of the program.
+function startsNewStatement(tokens: IToken[], i: number, prev: IToken | undefined): boolean {
   const a = tokens[i];
   if (!a) return false;
+  if (prev && ENDS_OPERAND.has(prev.tokenType) && STARTS_OPERAND.has(a.tokenType)) return true;
   if (a.tokenType === Tok.Use) return tokens[i + 1]?.tokenType === Tok.Identifier;
   return a.tokenType === Tok.Identifier && tokens[i + 1]?.tokenType === Tok.Define;
 }

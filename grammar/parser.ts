@@ -765,8 +765,10 @@ export function parse(source: string): ParseResult {
       stmt = { kind: "ExprStatement", expr: { kind: "ErrorExpr", span: span(first.startOffset, stmtEnd) }, span: span(first.startOffset, stmtEnd) };
       errors.push({ d: { kind: "parse", message: "could not read this statement", span: stmt.span }, stmt: index });
     }
+    // After an unreadable character the parser's complaints are only its echo.
+    const hasBadChar = raw.bad.some((b) => b.offset >= first.startOffset && b.offset < stmtEnd);
     for (const err of p.errors) {
-      errors.push({ d: recognitionError(err, clean, loc, stmtEnd), stmt: index });
+      if (!hasBadChar) errors.push({ d: recognitionError(err, clean, loc, stmtEnd), stmt: index });
       broken.add(index);
     }
     for (const x of p.extra) {
