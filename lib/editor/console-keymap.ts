@@ -1,7 +1,7 @@
 /// The console's keys: Enter runs the input, Shift+Enter adds a line, ↑ on the first line
 /// and ↓ on the last recall earlier inputs. While the completion list is open, Enter and
 /// the arrows belong to it.
-import { completionStatus } from "@codemirror/autocomplete";
+import { closeCompletion, completionStatus, selectedCompletion } from "@codemirror/autocomplete";
 import { insertNewlineAndIndent } from "@codemirror/commands";
 import { Prec, type Extension } from "@codemirror/state";
 import { EditorView, keymap } from "@codemirror/view";
@@ -28,6 +28,16 @@ function replaceDoc(view: EditorView, text: string, cursorAtEnd: boolean) {
   });
 }
 
+/// Whether the word before the cursor is exactly the highlighted completion.
+function typedInFull(view: EditorView): boolean {
+  const chosen = selectedCompletion(view.state);
+  if (!chosen) return true;
+  const head = view.state.selection.main.head;
+  const line = view.state.doc.lineAt(head);
+  const word = /[A-Za-z0-9_']*$/.exec(line.text.slice(0, head - line.from))?.[0] ?? "";
+  return word === chosen.label;
+}
+
 /// Enter / Shift+Enter / ↑ / ↓ as the console wants them.
 export function consoleKeymap(options: ConsoleKeymapOptions): Extension {
   let cursor: HistoryCursor = FRESH_CURSOR;
@@ -42,7 +52,12 @@ export function consoleKeymap(options: ConsoleKeymapOptions): Extension {
         {
           key: "Enter",
           run: (view) => {
-            if (completing(view)) return false;
+            if (completing(view)) {
+              // Enter picks the highlighted completion, unless the word is already typed
+              // out in full: then the user meant to run.
+              if (!typedInFull(view)) return false;
+              closeCompletion(view);
+            }
             const source = view.state.doc.toString();
             if (source.trim() === "") return true;
             if (options.run(source)) {

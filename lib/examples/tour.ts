@@ -82,7 +82,7 @@ export const GUIDED_TOUR: readonly GuidedExample[] = [
   {
     id: "residue",
     title: "8. An infinite resolution, truncated",
-    source: "R := GF(101)[u, v] / <u^2, v^2>\npoincare(R.residue, terms = 6)",
+    source: "A := GF(101)[u, v]\nR := A / <u^2, v^2>\npoincare(R.residue, terms = 6)",
     computes: "the first six Betti numbers of the residue field over a quotient ring, as a series",
     why: "over a quotient ring resolutions rarely end; the Circle reads their growth from the Poincaré series",
     lookAt: "the coefficients grow by one each step, and the guessed rational function fits every computed term",

@@ -43,9 +43,11 @@ export interface ErrorJson {
 
 export type CellStatus = "running" | "done" | "error" | "cancelled";
 
-/// One statement's result inside a cell.
+/// One statement's result inside a cell. The contract names the statement's number
+/// `index`; the stored cells of the first API version call it `statement`, so both are read.
 export interface CellResult {
-  readonly index: number;
+  readonly index?: number;
+  readonly statement?: number;
   readonly span: SpanJson;
   readonly value: ValueJson;
 }
@@ -57,7 +59,7 @@ export interface Cell {
   readonly status: CellStatus;
   readonly results: readonly CellResult[];
   readonly error: ErrorJson | null;
-  readonly timings: { readonly totalMs: number } | null;
+  readonly timings: { readonly totalMs: number | null } | null;
   readonly engineVersion?: string;
   readonly createdAt: string;
 }
@@ -112,3 +114,6 @@ export type CellEvent =
       readonly timings: { readonly totalMs: number };
       readonly objects: readonly NamedObject[];
     };
+
+/// The statement number of a result, whichever name the server used.
+export const resultIndex = (r: CellResult, fallback: number): number => r.index ?? r.statement ?? fallback;

@@ -1,7 +1,7 @@
 "use client";
 /// One transcript cell: source, status, time taken and results; while it runs, a
 /// progress bar with the stage, the Betti columns computed so far and a Cancel button.
-import type { Cell, CellStatus } from "../api/types";
+import { resultIndex, type Cell, type CellStatus } from "../api/types";
 import { bettiGrid } from "../render/betti";
 import { overallFraction, type RunningCell } from "../state/running-cell";
 import { BettiTable } from "./betti-table";
@@ -48,8 +48,8 @@ export function CellView({ cell }: { cell: Cell }) {
     <article aria-label={`Cell ${cell.position + 1}`} className="rs-cell flex flex-col gap-2 border-b border-ink/10 py-3 dark:border-paper/10">
       <Header position={cell.position} status={cell.status} ms={cell.timings?.totalMs ?? null} />
       <Source source={cell.source} />
-      {cell.results.map((r) => (
-        <ValueView key={r.index} value={r.value} />
+      {cell.results.map((r, k) => (
+        <ValueView key={resultIndex(r, k)} value={r.value} />
       ))}
       {cell.error && <ErrorView error={cell.error} source={cell.source} />}
       {cell.status === "running" && <p className="text-sm text-ink-soft dark:text-paper/70">Still running elsewhere.</p>}
@@ -66,8 +66,8 @@ export function RunningCellView({ cell, onCancel }: { cell: RunningCell; onCance
     <article aria-label="Running cell" aria-busy={running} className="rs-cell flex flex-col gap-2 border-b border-ink/10 py-3 dark:border-paper/10">
       <Header position={cell.position} status={cell.status} ms={cell.totalMs} />
       <Source source={cell.source} />
-      {cell.results.map((r) => (
-        <ValueView key={r.index} value={r.value} />
+      {cell.results.map((r, k) => (
+        <ValueView key={resultIndex(r, k)} value={r.value} />
       ))}
       {running && (
         <div className="flex flex-col gap-1">
