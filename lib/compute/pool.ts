@@ -138,12 +138,17 @@ export class WorkerPool {
   }
 
   private spawn(index: number): Slot {
-    const worker = new Worker(path.join(__dirnameOfPool(), BOOT), {
-      workerData: { entry: this.options.entry },
-      resourceLimits: { maxOldGenerationSizeMb: this.options.heapLimitMb },
-      stdout: false,
-      stderr: false,
-    });
+    // Constructed indirectly so the bundler does not try to bundle the worker's files: they
+    // run from the source tree through tsx.
+    const worker: Worker = Reflect.construct(Worker, [
+      path.join(workerDirectory(), BOOT),
+      {
+        workerData: { entry: this.options.entry },
+        resourceLimits: { maxOldGenerationSizeMb: this.options.heapLimitMb },
+        stdout: false,
+        stderr: false,
+      },
+    ]);
     worker.unref();
     let markReady!: () => void;
     const slot: Slot = { worker, ready: new Promise<void>((r) => (markReady = r)) };
@@ -199,6 +204,6 @@ export class WorkerPool {
 
 // Resolved at run time from the working directory, not from the bundle: Next bundles route
 // handlers into .next/, but the worker files stay in the source tree.
-function __dirnameOfPool(): string {
+function workerDirectory(): string {
   return path.join(process.env.RINGSIDE_ROOT ?? process.cwd(), "lib", "compute");
 }
