@@ -141,6 +141,9 @@ export const namedObjects = pgTable(
     /// the text of the statement that defined it (notation.md §2)
     source: text("source").notNull().default(""),
     sourceCellId: uuid("source_cell_id").references(() => cells.id, { onDelete: "set null" }),
+    /// for a copy imported from a shared object or a JSON export: where it came from
+    /// ({kind, objectId?, sessionId?, sessionTitle, name, ownerName?, importedAt}); null otherwise
+    origin: jsonb("origin"),
     createdAt: createdAt(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
   },
