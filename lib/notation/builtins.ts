@@ -33,7 +33,7 @@ import {
 } from "./engine";
 import { reduceIn, ringOfOperands, toPoly } from "./coerce";
 import { limit, runtime } from "./errors";
-import { eliminationOf, groebnerOf, idealValue, quotientIdeal, saturationByElement, saturationOf } from "./ideals";
+import { colonOf, eliminationOf, groebnerOf, idealProductOf, idealValue, quotientIdeal, saturationByElement, saturationOf } from "./ideals";
 import type { Frame, Interpreter } from "./interpreter";
 import { addValues } from "./operators";
 import { pendingError } from "./pending";
@@ -156,7 +156,8 @@ const FUNCTION_IMPLS: Record<string, FunctionImpl> = {
   "hilbert(Ring)": ([R], c) => hilbertValue(idealHilbertSeries(engineIdeal(ring(R, c.argSpans[0]).poly, (R as RingValue).ideal), opts(c))),
   "sum(List<T>)": ([xs], c) => {
     const items = (xs as { items: readonly Value[] }).items;
-    return items.reduce((acc, x) => addValues(c.interp, acc, x, c.span, c.frame), Int(0));
+    if (items.length === 0) return Int(0);
+    return items.slice(1).reduce((acc, x) => addValues(c.interp, acc, x, c.span, c.frame), items[0]);
   },
   "all(List<Bool>)": ([xs]) => Bool((xs as { items: readonly Value[] }).items.every((x) => x.type === "Bool" && x.value)),
   "any(List<Bool>)": ([xs]) => Bool((xs as { items: readonly Value[] }).items.some((x) => x.type === "Bool" && x.value)),
@@ -225,6 +226,13 @@ const PROPERTY_IMPLS: Record<string, PropertyImpl> = {
   "Ideal.dim": (v, _a, c) => Int(idealDimension(quotientIdeal(v as IdealValue), opts(c))),
   "Ideal.degree": (v, _a, c) => integerDegree(idealDegree(quotientIdeal(v as IdealValue), opts(c)), c),
   "Ideal.hilbert": (v, _a, c) => hilbertValue(idealHilbertSeries(quotientIdeal(v as IdealValue), opts(c))),
+  // B(I) = (m·I) : (I : m) (H. Dao, T. Kobayashi, R. Takahashi, "Burch ideals and Burch
+  // rings", Algebra & Number Theory 2020, Def. 2.1), from the ideal operations alone
+  "Ideal.burch": (v, _a, c) => {
+    const I = v as IdealValue;
+    const m = maximalIdeal(I.ring, c);
+    return colonOf(idealProductOf(m, I, c.span, opts(c)), colonOf(I, m, c.span, opts(c)), c.span, opts(c));
+  },
   "Ideal.is_homogeneous": (v, _a, c) => Bool(idealIsHomogeneous(quotientIdeal(v as IdealValue), opts(c))),
   "Matrix.t": (v) => {
     const A = v as Extract<Value, { type: "Matrix" }>;

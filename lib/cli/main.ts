@@ -1,0 +1,91 @@
+/// `ringside eval [--json] [FILE]` (notation.md §10): evaluates a program from FILE or
+/// standard input with the console's checker and engine and prints each statement's
+/// result — as text, or with --json one §9 JSON object per line. Exit status 0 when
+/// every statement succeeded, 1 when one failed (its Error is printed, nothing after
+/// it runs), 2 for bad usage.
+import { readFile } from "node:fs/promises";
+import { evaluate, type EvalEvent } from "../notation/evaluate";
+import type { ErrorJson } from "../notation/json";
+
+export const USAGE = `usage: ringside eval [--json] [FILE]
+  Evaluates a Ringside notation program from FILE (or standard input when FILE is
+  omitted or "-") and prints each statement's result.
+  --json   print one JSON object per line (notation.md §9) instead of text`;
+
+export interface Io {
+  readonly stdin: NodeJS.ReadableStream;
+  readonly stdout: { write(s: string): unknown };
+  readonly stderr: { write(s: string): unknown };
+  on?(event: "SIGINT", listener: () => void): unknown;
+  off?(event: "SIGINT", listener: () => void): unknown;
+}
+
+interface Args {
+  readonly json: boolean;
+  readonly file: string | null;
+}
+
+function parseArgs(argv: readonly string[]): Args | string {
+  if (argv.length === 0) return "missing command";
+  const [command, ...rest] = argv;
+  if (command !== "eval") return `unknown command ${JSON.stringify(command)}`;
+  let json = false;
+  let file: string | null = null;
+  for (const a of rest) {
+    if (a === "--json") json = true;
+    else if (a.startsWith("-") && a !== "-") return `unknown option ${a}`;
+    else if (file !== null) return "more than one FILE given";
+    else file = a;
+  }
+  return { json, file: file === "-" ? null : file };
+}
+
+async function readAll(stream: NodeJS.ReadableStream): Promise<string> {
+  const chunks: Buffer[] = [];
+  for await (const chunk of stream) chunks.push(typeof chunk === "string" ? Buffer.from(chunk) : (chunk as Buffer));
+  return Buffer.concat(chunks).toString("utf8");
+}
+
+export async function main(argv: readonly string[], io: Io): Promise<number> {
+  if (argv.length === 1 && (argv[0] === "--help" || argv[0] === "-h")) {
+    io.stdout.write(`${USAGE}\n`);
+    return 0;
+  }
+  const args = parseArgs(argv);
+  if (typeof args === "string") {
+    io.stderr.write(`ringside: ${args}\n${USAGE}\n`);
+    return 2;
+  }
+  let source: string;
+  try {
+    source = args.file === null ? await readAll(io.stdin) : await readFile(args.file, "utf8");
+  } catch (e) {
+    io.stderr.write(`ringside: cannot read ${args.file ?? "standard input"}: ${(e as Error).message}\n${USAGE}\n`);
+    return 2;
+  }
+
+  const line = (s: string) => io.stdout.write(`${s}\n`);
+  const printError = (error: ErrorJson) => line(args.json ? JSON.stringify(error) : error.text);
+  const onEvent = (e: EvalEvent) => {
+    if (e.event === "result") {
+      if (args.json) line(JSON.stringify(e.value));
+      else line(e.name === null ? e.value.text : `${e.name} := ${e.value.text}`);
+    } else if (e.event === "checked") {
+      e.errors.forEach(printError);
+    } else if (e.event === "error" && e.index !== null) {
+      printError(e.error);
+    } else if (e.event === "error" && e.error.kind !== "parse" && e.error.kind !== "type") {
+      printError(e.error);
+    }
+  };
+
+  const controller = new AbortController();
+  const interrupt = () => controller.abort();
+  io.on?.("SIGINT", interrupt);
+  try {
+    const outcome = await evaluate(source, [], { signal: controller.signal, onEvent });
+    return outcome.status === "ok" ? 0 : 1;
+  } finally {
+    io.off?.("SIGINT", interrupt);
+  }
+}
