@@ -79,6 +79,8 @@ class Checker {
   readonly subscripts = new Map<A.Subscript, SubscriptInfo>();
   private readonly lambdas = new WeakMap<Type, LambdaInfo>();
   private readonly bindings: Map<string, Type>;
+  /// Every definition in order, to rebuild the environment before any statement.
+  readonly definitions: [string, Type][] = [];
   private currentRing: string | null;
   private locals: Map<string, Type>[] = [];
   private lambdaDepth = 0;
@@ -94,6 +96,10 @@ class Checker {
 
   env(): Env {
     return { bindings: Object.fromEntries(this.bindings), currentRing: this.currentRing };
+  }
+
+  ring(): string | null {
+    return this.currentRing;
   }
 
   // ---- reporting -----------------------------------------------------------------
@@ -135,6 +141,7 @@ class Checker {
       const t = broken ? T.Any : this.infer(s.value);
       if (!broken) this.checkDefinable(s.name);
       this.bindings.set(s.name.name, t);
+      this.definitions.push([s.name.name, t]);
       if (t.kind === "Ring") this.currentRing = s.name.name;
       else if (this.currentRing === s.name.name) this.currentRing = null;
       return;
@@ -848,19 +855,32 @@ function substitute(t: Type, binds: Map<string, Type>): Type {
 /// Checks a parsed program against an initial environment.
 export function check(parsed: ParseResult, env: Env, source: string): Analysis {
   const c = new Checker(source, env);
-  const envs: Env[] = [];
+  const marks: { defined: number; ring: string | null }[] = [];
   parsed.program.statements.forEach((s, i) => {
-    envs.push(c.env());
+    marks.push({ defined: c.definitions.length, ring: c.ring() });
     c.statement(s, parsed.broken.has(i));
   });
   const typeErrors = [...c.errors].sort((a, b) => a.span.from.offset - b.span.from.offset);
+  let envs: Env[] | undefined;
+  // The per-statement environments are rebuilt only when asked for: copying the
+  // bindings before every statement would dominate the cost of checking.
+  const replay = (): Env[] => {
+    const bindings = new Map(Object.entries(env.bindings));
+    let done = 0;
+    return marks.map((m) => {
+      for (; done < m.defined; done++) bindings.set(...c.definitions[done]);
+      return { bindings: Object.fromEntries(bindings), currentRing: m.ring };
+    });
+  };
   return {
     program: parsed.program,
     errors: [...parsed.errors, ...typeErrors],
     types: c.types,
     names: c.names,
     subscripts: c.subscripts,
-    envs,
+    get envs() {
+      return (envs ??= replay());
+    },
     finalEnv: c.env(),
   };
 }

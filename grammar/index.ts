@@ -49,4 +49,5 @@ export * from "./analysis";
 export * from "./signatures";
 export * from "./types";
 export type * from "./ast";
+export { KEYWORD_NAMES } from "./lexer";
 export type { HighlightToken, TokenCategory } from "./lexer";

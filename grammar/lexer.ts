@@ -121,6 +121,9 @@ const LEXER_ORDER: TokenType[] = [
 /// Every token type the parser may see.
 export const ALL_TOKENS: TokenType[] = [...LEXER_ORDER, Tok.End];
 
+/// The notation's keywords, for the editor (completion, highlighting).
+export const KEYWORD_NAMES: readonly string[] = ["use", "in", "for", "if", "then", "else", "and", "or", "not", "true", "false"];
+
 const KEYWORDS = new Set<TokenType>([
   Tok.Use,
   Tok.In,

@@ -37,8 +37,6 @@ const OPERAND_START = new Set<TokenType>([
   Tok.IdealOpen,
 ]);
 
-const COMPARISONS = new Set<TokenType>([Tok.EqEq, Tok.NotEq, Tok.Lt, Tok.LessEq, Tok.Gt, Tok.GreaterEq, Tok.In, Tok.MemberOf]);
-
 /// How a token is named in a message.
 export function describeToken(t: IToken | undefined): string {
   if (!t || t.tokenType === EOF || t.tokenType === Tok.End) return "the end of the statement";
@@ -53,16 +51,9 @@ const label = (t: TokenType): string => t.LABEL ?? t.name;
 const RULE_WANTS: Record<string, string> = {
   primary: "an expression",
   expression: "an expression",
-  orExpr: "an expression",
-  andExpr: "an expression",
-  notExpr: "an expression",
-  compareExpr: "an expression",
-  rangeExpr: "an expression",
-  idealOpExpr: "an expression",
-  addExpr: "an expression",
-  mulExpr: "an expression",
-  unaryExpr: "an expression",
   powerExpr: "an expression",
+  operatorChain: "an expression",
+  exponent: "an expression",
   postfixExpr: "an expression",
   statement: "a statement",
   argument: "an argument",
@@ -85,6 +76,34 @@ const messages: IParserErrorMessageProvider = {
     return `expected ${wants}, found ${describeToken(actual[0])}`;
   },
 };
+
+type ChainItem = { operand: A.Expr } | { prefix: IToken } | { binary: IToken };
+
+const NOT_PREC = 4;
+const COMPARE_PREC = 5;
+const RANGE_PREC = 6;
+const NEG_PREC = 10;
+/// Binding strength of the binary operators (the precedence table in README.md).
+const PRECEDENCE = new Map<TokenType, number>([
+  [Tok.Or, 2],
+  [Tok.And, 3],
+  [Tok.EqEq, COMPARE_PREC],
+  [Tok.NotEq, COMPARE_PREC],
+  [Tok.Lt, COMPARE_PREC],
+  [Tok.LessEq, COMPARE_PREC],
+  [Tok.Gt, COMPARE_PREC],
+  [Tok.GreaterEq, COMPARE_PREC],
+  [Tok.In, COMPARE_PREC],
+  [Tok.MemberOf, COMPARE_PREC],
+  [Tok.DotDot, RANGE_PREC],
+  [Tok.Amp, 7],
+  [Tok.Colon, 7],
+  [Tok.Plus, 8],
+  [Tok.Minus, 8],
+  [Tok.Star, 9],
+  [Tok.Slash, 9],
+]);
+const BINARY_TOKENS = [...PRECEDENCE.keys()];
 
 const BINARY_OPS = new Map<TokenType, A.BinaryOp>([
   [Tok.Plus, "+"],
@@ -238,7 +257,7 @@ class NotationParser extends EmbeddedActionsParser {
         },
         {
           ALT: () => {
-            const lhs = this.SUBRULE(this.orExpr);
+            const lhs = this.SUBRULE(this.operatorChain);
             const body = this.OPTION(() => {
               this.CONSUME(Tok.Arrow);
               return this.SUBRULE4(this.expression);
@@ -264,147 +283,108 @@ class NotationParser extends EmbeddedActionsParser {
     return { kind: "Lambda", params, body, span: { from: lhs.span.from, to: body.span.to } };
   }
 
-  orExpr = this.RULE(
-    "orExpr",
+  /// Levels 2–10 of the precedence table (or … unary minus) in one flat rule: operands
+  /// (powers) with prefix and binary operators between them, arranged into a tree by
+  /// precedence in `arrange`. One rule instead of nine keeps parsing fast.
+  operatorChain = this.RULE(
+    "operatorChain",
     (): A.Expr => {
-      let left = this.SUBRULE(this.andExpr);
+      const items: ChainItem[] = [];
       this.MANY(() => {
-        const op = this.CONSUME(Tok.Or);
-        const right = this.SUBRULE2(this.andExpr);
-        left = this.ACTION(() => this.bin("or", left, right, op));
+        const t = this.OR([{ ALT: () => this.CONSUME(Tok.Not) }, { ALT: () => this.CONSUME(Tok.Minus) }]);
+        this.ACTION(() => items.push({ prefix: t }));
       });
-      return left;
+      const first = this.SUBRULE(this.powerExpr);
+      this.ACTION(() => items.push({ operand: first }));
+      this.MANY2(() => {
+        const op = this.OR2(BINARY_TOKENS.map((t) => ({ ALT: () => this.CONSUME2(t) })));
+        this.ACTION(() => items.push({ binary: op }));
+        this.MANY3(() => {
+          const t = this.OR3([{ ALT: () => this.CONSUME3(Tok.Not) }, { ALT: () => this.CONSUME3(Tok.Minus) }]);
+          this.ACTION(() => items.push({ prefix: t }));
+        });
+        const next = this.SUBRULE2(this.powerExpr);
+        this.ACTION(() => items.push({ operand: next }));
+      });
+      return this.ACTION(() => this.arrange(items));
     },
     this.recover,
   );
 
-  andExpr = this.RULE(
-    "andExpr",
-    (): A.Expr => {
-      let left = this.SUBRULE(this.notExpr);
-      this.MANY(() => {
-        const op = this.CONSUME(Tok.And);
-        const right = this.SUBRULE2(this.notExpr);
-        left = this.ACTION(() => this.bin("and", left, right, op));
-      });
-      return left;
-    },
-    this.recover,
-  );
+  /// Operator precedence (shunting-yard) over a chain; all binary operators associate
+  /// to the left, except that comparisons and ranges do not chain (reported).
+  private arrange(items: ChainItem[]): A.Expr {
+    const out: A.Expr[] = [];
+    const ops: { tok: IToken; prec: number; prefix: boolean }[] = [];
+    const reduce = () => {
+      const op = ops.pop()!;
+      if (op.prefix) {
+        const operand = out.pop() ?? this.errorHere();
+        out.push({
+          kind: "Unary",
+          op: op.tok.tokenType === Tok.Not ? "not" : "-",
+          operand,
+          span: { from: this.tokSpan(op.tok).from, to: operand.span.to },
+        });
+        return;
+      }
+      const right = out.pop() ?? this.errorHere();
+      const left = out.pop() ?? this.errorHere();
+      if (op.tok.tokenType === Tok.DotDot) {
+        out.push({ kind: "Range", from: left, to: right, span: { from: left.span.from, to: right.span.to } });
+      } else out.push(this.bin(BINARY_OPS.get(op.tok.tokenType)!, left, right, op.tok));
+    };
+    for (const item of items) {
+      if ("operand" in item) out.push(item.operand);
+      else if ("prefix" in item) {
+        ops.push({ tok: item.prefix, prec: item.prefix.tokenType === Tok.Not ? NOT_PREC : NEG_PREC, prefix: true });
+      } else {
+        const prec = PRECEDENCE.get(item.binary.tokenType)!;
+        while (ops.length > 0 && ops[ops.length - 1].prec >= prec) {
+          const top = ops[ops.length - 1];
+          if (!top.prefix && top.prec === prec && (prec === COMPARE_PREC || prec === RANGE_PREC)) {
+            this.extra.push({
+              message:
+                prec === COMPARE_PREC
+                  ? "comparisons do not chain: join them with `and`, as in a < b and b < c"
+                  : "ranges do not chain: write a..b",
+              span: this.tokSpan(item.binary),
+            });
+          }
+          reduce();
+        }
+        ops.push({ tok: item.binary, prec, prefix: false });
+      }
+    }
+    while (ops.length > 0) reduce();
+    return out[0] ?? this.errorHere();
+  }
 
-  notExpr = this.RULE(
-    "notExpr",
-    (): A.Expr =>
-      this.OR([
-        {
-          ALT: () => {
-            const op = this.CONSUME(Tok.Not);
-            const operand = this.SUBRULE(this.notExpr);
-            return this.ACTION(
-              () =>
-                ({
-                  kind: "Unary",
-                  op: "not",
-                  operand,
-                  span: { from: this.tokSpan(op).from, to: operand.span.to },
-                }) as A.Unary,
-            );
-          },
-        },
-        { ALT: () => this.SUBRULE(this.compareExpr) },
-      ]),
-    this.recover,
-  );
-
-  compareExpr = this.RULE(
-    "compareExpr",
+  /// `^` binds tighter than unary minus on its left and is right-associative; its
+  /// exponent may carry a sign so that `x^-1` parses and gets a clear type error.
+  powerExpr = this.RULE(
+    "powerExpr",
     (): A.Expr => {
-      let left = this.SUBRULE(this.rangeExpr);
+      let base = this.SUBRULE(this.postfixExpr);
       this.OPTION(() => {
-        const op = this.OR([
-          { ALT: () => this.CONSUME(Tok.EqEq) },
-          { ALT: () => this.CONSUME(Tok.NotEq) },
-          { ALT: () => this.CONSUME(Tok.Lt) },
-          { ALT: () => this.CONSUME(Tok.LessEq) },
-          { ALT: () => this.CONSUME(Tok.Gt) },
-          { ALT: () => this.CONSUME(Tok.GreaterEq) },
-          { ALT: () => this.CONSUME(Tok.In) },
-          { ALT: () => this.CONSUME(Tok.MemberOf) },
-        ]);
-        const right = this.SUBRULE2(this.rangeExpr);
-        left = this.ACTION(() => this.bin(BINARY_OPS.get(op.tokenType)!, left, right, op));
+        const op = this.CONSUME(Tok.Caret);
+        const exponent = this.SUBRULE(this.exponent);
+        base = this.ACTION(() => this.bin("^", base, exponent, op));
       });
-      return left;
+      return base;
     },
     this.recover,
   );
 
-  rangeExpr = this.RULE(
-    "rangeExpr",
-    (): A.Expr => {
-      let left = this.SUBRULE(this.idealOpExpr);
-      this.OPTION(() => {
-        this.CONSUME(Tok.DotDot);
-        const right = this.SUBRULE2(this.idealOpExpr);
-        left = this.ACTION(
-          () => ({ kind: "Range", from: left, to: right, span: { from: left.span.from, to: right.span.to } }) as A.Range,
-        );
-      });
-      return left;
-    },
-    this.recover,
-  );
-
-  idealOpExpr = this.RULE(
-    "idealOpExpr",
-    (): A.Expr => {
-      let left = this.SUBRULE(this.addExpr);
-      this.MANY(() => {
-        const op = this.OR([{ ALT: () => this.CONSUME(Tok.Amp) }, { ALT: () => this.CONSUME(Tok.Colon) }]);
-        const right = this.SUBRULE2(this.addExpr);
-        left = this.ACTION(() => this.bin(BINARY_OPS.get(op.tokenType)!, left, right, op));
-      });
-      return left;
-    },
-    this.recover,
-  );
-
-  addExpr = this.RULE(
-    "addExpr",
-    (): A.Expr => {
-      let left = this.SUBRULE(this.mulExpr);
-      this.MANY(() => {
-        const op = this.OR([{ ALT: () => this.CONSUME(Tok.Plus) }, { ALT: () => this.CONSUME(Tok.Minus) }]);
-        const right = this.SUBRULE2(this.mulExpr);
-        left = this.ACTION(() => this.bin(BINARY_OPS.get(op.tokenType)!, left, right, op));
-      });
-      return left;
-    },
-    this.recover,
-  );
-
-  mulExpr = this.RULE(
-    "mulExpr",
-    (): A.Expr => {
-      let left = this.SUBRULE(this.unaryExpr);
-      this.MANY(() => {
-        const op = this.OR([{ ALT: () => this.CONSUME(Tok.Star) }, { ALT: () => this.CONSUME(Tok.Slash) }]);
-        const right = this.SUBRULE2(this.unaryExpr);
-        left = this.ACTION(() => this.bin(BINARY_OPS.get(op.tokenType)!, left, right, op));
-      });
-      return left;
-    },
-    this.recover,
-  );
-
-  unaryExpr = this.RULE(
-    "unaryExpr",
+  /// The right side of `^`: a power (right-associative), optionally negated.
+  exponent = this.RULE(
+    "exponent",
     (): A.Expr =>
       this.OR([
         {
           ALT: () => {
             const op = this.CONSUME(Tok.Minus);
-            const operand = this.SUBRULE(this.unaryExpr);
+            const operand = this.SUBRULE(this.exponent);
             return this.ACTION(
               () =>
                 ({
@@ -418,22 +398,6 @@ class NotationParser extends EmbeddedActionsParser {
         },
         { ALT: () => this.SUBRULE(this.powerExpr) },
       ]),
-    this.recover,
-  );
-
-  /// `^` binds tighter than unary minus on its left and is right-associative; its
-  /// exponent may carry a sign so that `x^-1` parses and gets a clear type error.
-  powerExpr = this.RULE(
-    "powerExpr",
-    (): A.Expr => {
-      let base = this.SUBRULE(this.postfixExpr);
-      this.OPTION(() => {
-        const op = this.CONSUME(Tok.Caret);
-        const exponent = this.SUBRULE(this.unaryExpr);
-        base = this.ACTION(() => this.bin("^", base, exponent, op));
-      });
-      return base;
-    },
     this.recover,
   );
 
@@ -813,8 +777,6 @@ function recognitionError(err: IRecognitionException, tokens: IToken[], loc: Loc
     if (prev && OPERAND_END.has(prev.tokenType) && OPERAND_START.has(t.tokenType)) {
       const glue = t.tokenType === Tok.LParen ? "(…)" : t.image;
       message += ` — there is no implicit multiplication; did you mean ${prev.image}*${glue}?`;
-    } else if (COMPARISONS.has(t.tokenType)) {
-      message += " — comparisons do not chain: join them with `and`, as in a < b and b < c";
     }
   }
   return { kind: "parse", message, span: { from: loc.at(from), to: loc.at(Math.max(from, to)) } };

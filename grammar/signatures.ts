@@ -524,6 +524,12 @@ export function lookupProperty(owner: TypeKind, name: string): PropertySig | und
   return PROPERTIES.find((q) => q.owner === owner && q.name === name);
 }
 
+const operatorIndex = new Map<string, OperatorSig[]>();
+for (const r of OPERATORS) {
+  const key = `${r.op}/${r.left === undefined}`;
+  operatorIndex.set(key, [...(operatorIndex.get(key) ?? []), r]);
+}
+
 export function operatorRows(o: OperatorName, prefix: boolean): readonly OperatorSig[] {
-  return OPERATORS.filter((r) => r.op === o && (r.left === undefined) === prefix);
+  return operatorIndex.get(`${o}/${prefix}`) ?? [];
 }

@@ -173,7 +173,7 @@ const BAD: [string, string, string[]][] = [
   [
     "chained comparison",
     "1 < 2 < 3",
-    ["parse error at 1:7-1:8: expected an operator or the end of the statement, found `<` — comparisons do not chain: join them with `and`, as in a < b and b < c"],
+    ["parse error at 1:7-1:8: comparisons do not chain: join them with `and`, as in a < b and b < c"],
   ],
   [
     "unterminated string",
