@@ -9,6 +9,7 @@ import {
   isZero,
   monomial,
   mul,
+  neg,
   type Poly,
   polyRing,
   type PolyRing,
@@ -114,4 +115,18 @@ export function bettiMap(C: Resolution): Map<string, number> {
 
 export function idealOf(R: PolyRing, gens: Poly[]): Ideal {
   return ideal(R, gens);
+}
+
+/// The generic alternating n×n matrix: a_{ij} = variable for i < j, a_{ji} = −a_{ij}.
+export function alternating(R: PolyRing, n: number): Poly[][] {
+  const A: Poly[][] = Array.from({ length: n }, () => new Array<Poly>(n).fill(zero(R)));
+  let v = 0;
+  for (let i = 0; i < n; i++) {
+    for (let j = i + 1; j < n; j++) {
+      A[i][j] = variable(R, v);
+      A[j][i] = neg(R, variable(R, v));
+      v++;
+    }
+  }
+  return A;
 }

@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
-import { add, ideal, idealEquals, monomial, neg, parsePoly, pow, QQ, type Poly, type PolyRing, variable, zero } from "@/lib/algebra";
+import { add, ideal, idealEquals, monomial, parsePoly, pow, QQ, variable } from "@/lib/algebra";
 import { minors, pfaffians } from "@/lib/algebra/invariants";
 import { bettiNumber, bettiTotals, resolveQuotient } from "@/lib/algebra/resolution";
-import { binom, expectMinimalComplex, genericMatrix, GF, randomForm, ringOf, rng, vars } from "./resolution-helpers";
+import { alternating, binom, expectMinimalComplex, genericMatrix, GF, randomForm, ringOf, rng, vars } from "./resolution-helpers";
 
 const FIELDS = [
   ["GF(32003)", GF],
@@ -104,19 +104,6 @@ describe.each(FIELDS)("minimal resolutions over %s", (_name, F) => {
   });
 });
 
-/// The generic alternating n×n matrix: a_{ij} = variable for i < j, a_{ji} = −a_{ij}.
-export function alternating(R: PolyRing, n: number): Poly[][] {
-  const A: Poly[][] = Array.from({ length: n }, () => new Array<Poly>(n).fill(zero(R)));
-  let v = 0;
-  for (let i = 0; i < n; i++) {
-    for (let j = i + 1; j < n; j++) {
-      A[i][j] = variable(R, v);
-      A[j][i] = neg(R, variable(R, v));
-      v++;
-    }
-  }
-  return A;
-}
 
 describe("Eagon–Northcott complexes", () => {
   it("maximal minors of generic p×q matrices: β_i = C(q, p+i−1)·C(p+i−2, i−1) in degree p+i−1", () => {

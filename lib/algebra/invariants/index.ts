@@ -1,2 +1,4 @@
 export { minors, det } from "./minors";
 export { pfaffians } from "./pfaffians";
+export { torLengths, serreMultiplicity } from "./tor";
+export { koszulComplex, type FreeComplex } from "./koszul";
