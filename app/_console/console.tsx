@@ -209,6 +209,7 @@ export function Console({ initialSessionId }: { initialSessionId: string | null 
       { id: "history", group: "Input", label: "Search the input history", shortcut: "Alt+R", run: () => setDialog("history") },
       { id: "tour", group: "Help", label: "Guided first steps", shortcut: "Alt+G", keywords: ["examples", "tour"], run: () => setDialog("tour") },
       { id: "help", group: "Help", label: "Keyboard help", shortcut: "Alt+/", keywords: ["shortcuts", "keys"], run: () => setDialog("help") },
+      { id: "reference", group: "Help", label: "Open the notation reference", keywords: ["functions", "properties"], run: () => window.open("/reference", "_blank") },
       { id: "theme", group: "View", label: theme === "dark" ? "Switch to the light theme" : "Switch to the dark theme", shortcut: "Alt+T", run: toggleTheme },
     ];
     if (canEdit) {
@@ -394,6 +395,9 @@ export function Console({ initialSessionId }: { initialSessionId: string | null 
       <Modal open={dialog === "help"} title="Keyboard" onClose={() => setDialog(null)}>
         <KeyboardHelp />
         <p className={panelHeading}>Every palette command also has a button or a shortcut.</p>
+        <a href="/reference" target="_blank" rel="noreferrer" className="text-sm text-ink-soft underline dark:text-signal-soft">
+          The notation reference: every function, property and option
+        </a>
       </Modal>
     </div>
   );
