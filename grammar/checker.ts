@@ -35,6 +35,8 @@ import {
 export const MAX_LITERAL_EXPONENT = 1_000_000n;
 const MAX_PRIME = 2n ** 31n;
 const MAX_LAMBDA_DEPTH = 8;
+/// Deeper expressions are refused rather than risking the call stack.
+const MAX_DEPTH = 1000;
 
 const constantIndex = new Map(CONSTANTS.map((c) => [c.name, c]));
 const functionNames = FUNCTIONS.map((f) => f.name);
@@ -85,6 +87,8 @@ class Checker {
   private locals: Map<string, Type>[] = [];
   private lambdaDepth = 0;
   private seen = new Set<string>();
+  private depth = 0;
+  private tooDeep = false;
 
   constructor(
     private readonly source: string,
@@ -187,9 +191,20 @@ class Checker {
   // ---- expressions ---------------------------------------------------------------
 
   infer(e: A.Expr): Type {
-    const t = this.inferInner(e);
-    this.types.set(e, t);
-    return t;
+    if (this.depth >= MAX_DEPTH) {
+      if (!this.tooDeep) this.error(e.span, `this expression is nested more than ${MAX_DEPTH} levels deep — split it into several definitions`);
+      this.tooDeep = true;
+      this.types.set(e, T.Any);
+      return T.Any;
+    }
+    this.depth++;
+    try {
+      const t = this.inferInner(e);
+      this.types.set(e, t);
+      return t;
+    } finally {
+      this.depth--;
+    }
   }
 
   private inferInner(e: A.Expr): Type {
@@ -436,8 +451,24 @@ class Checker {
     return results.every((r) => sameType(r, results[0])) ? results[0] : T.Any;
   }
 
+  /// Long sums and products are left-deep trees (a pasted polynomial may have
+  /// thousands of terms): walk the left spine with a loop, not recursion.
   private binary(e: A.Binary): Type {
-    const l = this.infer(e.left);
+    const spine: A.Binary[] = [];
+    let bottom: A.Expr = e;
+    while (bottom.kind === "Binary") {
+      spine.push(bottom);
+      bottom = bottom.left;
+    }
+    let l = this.infer(bottom);
+    for (let i = spine.length - 1; i > 0; i--) {
+      l = this.binaryStep(spine[i], l);
+      this.types.set(spine[i], l);
+    }
+    return this.binaryStep(e, l);
+  }
+
+  private binaryStep(e: A.Binary, l: Type): Type {
     const r = this.infer(e.right);
     if (e.op === "^" && this.checkExponent(e, r)) return l.kind === "Ideal" || l.kind === "Poly" ? l : T.Any;
     if (e.op === "/" && constValue(e.right) === 0n) {

@@ -715,6 +715,16 @@ export function parse(source: string): ParseResult {
       }
     }
     const clean = tokens.filter((t) => t.tokenType !== Tok.UnterminatedStr);
+    if (nestingDepth(clean) > MAX_NESTING) {
+      const s = span(first.startOffset, stmtEnd);
+      errors.push({
+        d: { kind: "parse", message: `brackets are nested more than ${MAX_NESTING} levels deep in this statement`, span: s },
+        stmt: index,
+      });
+      broken.add(index);
+      statements.push({ kind: "ExprStatement", expr: { kind: "ErrorExpr", span: s }, span: s });
+      return;
+    }
     if (clean.length === 0) {
       const s = span(first.startOffset, stmtEnd);
       statements.push({ kind: "ExprStatement", expr: { kind: "ErrorExpr", span: s }, span: s });
@@ -722,15 +732,18 @@ export function parse(source: string): ParseResult {
     }
     p.load(loc, clean);
     let stmt: A.Statement;
+    let failed = false;
     try {
       stmt = p.statement();
     } catch {
-      // Chevrotain only throws on an internal failure; report it as a parse error.
+      // Only a call stack exhausted by a pathological chain (e.g. thousands of `^`) gets here.
+      failed = true;
       stmt = { kind: "ExprStatement", expr: { kind: "ErrorExpr", span: span(first.startOffset, stmtEnd) }, span: span(first.startOffset, stmtEnd) };
-      errors.push({ d: { kind: "parse", message: "could not read this statement", span: stmt.span }, stmt: index });
+      errors.push({ d: { kind: "parse", message: "this statement is nested too deeply to read — split it into several definitions", span: stmt.span }, stmt: index });
+      broken.add(index);
     }
     // After an unreadable character the parser's complaints are only its echo.
-    const hasBadChar = raw.bad.some((b) => b.offset >= first.startOffset && b.offset < stmtEnd);
+    const hasBadChar = failed || raw.bad.some((b) => b.offset >= first.startOffset && b.offset < stmtEnd);
     for (const err of p.errors) {
       if (!hasBadChar) errors.push({ d: recognitionError(err, clean, loc, stmtEnd), stmt: index });
       broken.add(index);
@@ -746,6 +759,21 @@ export function parse(source: string): ParseResult {
   const sorted = errors.map((e) => e.d).sort((a, b) => a.span.from.offset - b.span.from.offset);
   const program: A.Program = { kind: "Program", statements, span: span(0, source.length) };
   return { program, errors: dedupe(sorted), broken };
+}
+
+/// Deeper nesting is refused before parsing, so the parser's recursion stays bounded.
+const MAX_NESTING = 200;
+const OPENING = new Set<TokenType>([Tok.LParen, Tok.LBracket, Tok.LBrace, Tok.IdealOpen]);
+const CLOSING = new Set<TokenType>([Tok.RParen, Tok.RBracket, Tok.RBrace, Tok.IdealClose]);
+
+function nestingDepth(tokens: IToken[]): number {
+  let depth = 0;
+  let max = 0;
+  for (const t of tokens) {
+    if (OPENING.has(t.tokenType)) max = Math.max(max, ++depth);
+    else if (CLOSING.has(t.tokenType)) depth--;
+  }
+  return max;
 }
 
 /// A lexical error breaks the statement it falls in.

@@ -100,3 +100,15 @@ describe("fuzz: the front end never throws and spans stay inside the source", ()
     expect(a.errors.some((e) => e.kind === "parse" && e.span.from.line === 2)).toBe(true);
   });
 });
+
+describe("pathological sizes end with a clear error, not a crash", () => {
+  test.each([
+    ["a sum of 5000 terms is fine", Array(5000).fill("1").join(" + "), []],
+    ["300 nested parentheses", "(".repeat(300) + "1" + ")".repeat(300), ["brackets are nested more than 200 levels deep in this statement"]],
+    ["3000 signs", "-".repeat(3000) + "1", ["this expression is nested more than 1000 levels deep — split it into several definitions"]],
+    ["a tower of 5000 powers", Array(5000).fill("2").join("^"), ["this statement is nested too deeply to read — split it into several definitions"]],
+  ])("%s", (_what, source, messages) => {
+    const a = check(parse(source), EMPTY_ENV, source);
+    expect(a.errors.map((e) => e.message)).toEqual(messages);
+  });
+});
