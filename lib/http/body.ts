@@ -34,7 +34,10 @@ export async function readJson<S extends z.ZodType>(
 }
 
 async function readLimited(req: Request, maxBytes: number): Promise<string> {
-  const tooLarge = () => new HttpError(413, "body_too_large", `The body is larger than ${maxBytes} bytes.`);
+  // The rest of the body is never read, so the connection cannot carry another request:
+  // `Connection: close` keeps keep-alive clients from reusing it.
+  const tooLarge = () =>
+    new HttpError(413, "body_too_large", `The body is larger than ${maxBytes} bytes.`, undefined, { Connection: "close" });
   const declared = Number(req.headers.get("content-length"));
   if (Number.isFinite(declared) && declared > maxBytes) throw tooLarge();
   if (!req.body) return "";

@@ -113,15 +113,20 @@ source_hash() {
 }
 build_if_stale() {
   local stamp="$ROOT/.next/.ringside-source-hash" want=""
+  # One build at a time per folder: a second run waits, then usually finds the build current.
+  exec 8>"$DATA/build.lock"
+  flock 8
   if git -C "$ROOT" rev-parse --git-dir >/dev/null 2>&1; then want="$(source_hash)"; fi
   if [ -n "$want" ] && [ -f "$ROOT/.next/BUILD_ID" ] && [ "$(cat "$stamp" 2>/dev/null)" = "$want" ]; then
     log "production build is current"
+    flock -u 8
     return 0
   fi
   log "next build"
   (cd "$ROOT" && NEXT_TELEMETRY_DISABLED=1 node node_modules/next/dist/bin/next build) || die "next build failed"
   # Hashed again after the build: next build itself may rewrite tsconfig.json.
   [ -n "$want" ] && source_hash >"$stamp"
+  flock -u 8
   return 0
 }
 

@@ -78,6 +78,7 @@ describe("sign-up with bad input", () => {
     const big = JSON.stringify({ email, name: "x".repeat(20_000), password: GOOD_PASSWORD });
     const declared = await client().request("/api/auth/signup", { method: "POST", headers: { "Content-Type": "application/json" }, body: big });
     expect(declared.status).toBe(413);
+    expect(declared.headers.get("connection")).toBe("close");
     expect((await errorOf(declared)).code).toBe("body_too_large");
 
     const bytes = new TextEncoder().encode(big);
