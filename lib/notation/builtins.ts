@@ -30,7 +30,7 @@ import {
   variable,
   type HilbertSeries,
   type Poly,
-} from "./engine";
+} from "../algebra/index";
 import { reduceIn, ringOfOperands, toPoly } from "./coerce";
 import { limit, runtime } from "./errors";
 import { colonOf, eliminationOf, groebnerOf, idealProductOf, idealValue, quotientIdeal, saturationByElement, saturationOf } from "./ideals";

@@ -2,7 +2,7 @@
 /// rationals become constants, a polynomial of S becomes its class in a quotient S/J
 /// (the natural map), and everything in a quotient ring is kept in normal form.
 import type { Span } from "../../grammar/ast";
-import { constant, groebnerBasis, isZero, normalForm, type ComputeOptions, type Poly } from "./engine";
+import { constant, groebnerBasis, isZero, normalForm, type ComputeOptions, type Poly } from "../algebra/index";
 import { runtime } from "./errors";
 import { ringText } from "./text";
 import type { RingValue, Value } from "./values";

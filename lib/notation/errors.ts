@@ -1,5 +1,5 @@
 /// Errors of evaluation, with the kind and span the Error encoding of notation.md §9 needs.
-import { AlgebraError } from "./engine";
+import { AlgebraError } from "../algebra/index";
 import type { Span } from "../../grammar/ast";
 import type { ErrorJson, ErrorKind, SpanJson } from "./json";
 import { DivisionByZero } from "./rational";

@@ -5,7 +5,7 @@ import type { Lambda, Span, Statement } from "../../grammar/ast";
 import type { Analysis, Env } from "../../grammar/analysis";
 import { analyze, parse } from "../../grammar/index";
 import { typeToString, type Type } from "../../grammar/types";
-import type { ComputeOptions, ProgressInfo } from "./engine";
+import type { ComputeOptions, ProgressInfo } from "../algebra/index";
 import { EvalError, asEvalError, errorJson, spanJson } from "./errors";
 import { DecodeError, decodeValue, encodeValue, type ErrorJson, type FunctionJson, type SpanJson, type ValueJson } from "./json";
 import { Interpreter, type Frame, type Session } from "./interpreter";

@@ -21,7 +21,7 @@ import {
   type ComputeOptions,
   type Ideal,
   type Poly,
-} from "./engine";
+} from "../algebra/index";
 import { reduceIn, ringBasis } from "./coerce";
 import { runtime } from "./errors";
 import { ringText } from "./text";

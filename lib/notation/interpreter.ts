@@ -12,7 +12,7 @@ import type {
   Subscript,
 } from "../../grammar/ast";
 import type { Analysis, NameResolution, RingLiteralInfo } from "../../grammar/analysis";
-import { QQ, variable, type ComputeOptions } from "./engine";
+import { QQ, variable, type ComputeOptions } from "../algebra/index";
 import { EvalError, asEvalError, limit, runtime } from "./errors";
 import { applyBinary, applyUnary, valuesEqual } from "./operators";
 import { callFunction, functionExists, getProperty, callMethod } from "./builtins";

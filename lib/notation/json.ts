@@ -3,7 +3,7 @@
 /// validated). Additions to §9 (documented in lib/notation/README.md): Poly, Ideal,
 /// Matrix, Module and Complex carry a "ring" (the Ring encoding) so they restore alone.
 import { z } from "zod";
-import { formatHilbertDenominator, formatPoly, hilbertSeriesFromNumerator, parsePoly, type Poly } from "./engine";
+import { formatHilbertDenominator, formatPoly, hilbertSeriesFromNumerator, parsePoly, type Poly } from "../algebra/index";
 import { parseDenominator } from "./series-text";
 import { parseRational, ratToString } from "./rational";
 import { RingRegistry, parseField, parseOrder } from "./rings";

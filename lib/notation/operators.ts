@@ -4,7 +4,7 @@
 import type { Binary, Span, Unary } from "../../grammar/ast";
 import { OPERATORS, type OperatorName, type OperatorSig } from "../../grammar/signatures";
 import { isAssignable, typeToString } from "../../grammar/types";
-import { add, equals, isZero, mul, neg, one, pow, scale, sub, zero, type Poly } from "./engine";
+import { add, equals, isZero, mul, neg, one, pow, scale, sub, zero, type Poly } from "../algebra/index";
 import { reduceIn, ringOfOperands, toPoly } from "./coerce";
 import { limit, runtime } from "./errors";
 import {

@@ -1,10 +1,10 @@
 /// Rings of one evaluation, interned: the same ring written twice (or restored from the
 /// JSON of several saved objects) is one RingValue, so its polynomials mix freely and its
 /// Gröbner basis is computed once.
-import { QQ, gf, polyRing, type Field, type OrderSpec, type Poly } from "./engine";
+import { QQ, gf, polyRing, type Field, type OrderSpec, type Poly } from "../algebra/index";
 import { fieldText, orderText } from "./text";
 import type { RingValue } from "./values";
-import { formatPoly } from "./engine";
+import { formatPoly } from "../algebra/index";
 
 export function parseField(text: string): Field | null {
   if (text === "Q") return QQ;

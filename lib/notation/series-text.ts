@@ -1,6 +1,6 @@
 /// Texts of series in t: ascending powers as a series is read ("1-3*t^2+2*t^3"), and the
 /// Hilbert denominator ∏ (1 − t^{w_i}) read back from the engine's text of it.
-import { formatHilbertDenominator, type HilbertSeries } from "./engine";
+import { formatHilbertDenominator, type HilbertSeries } from "../algebra/index";
 
 export function ascendingText(coeffs: readonly bigint[], variable = "t"): string {
   let out = "";

@@ -1,5 +1,5 @@
 /// The human "text" of every value (notation.md §9): notation-like, one line except tables.
-import { formatPoly, type Field, type OrderSpec } from "./engine";
+import { formatPoly, type Field, type OrderSpec } from "../algebra/index";
 import { ascendingText, hilbertText } from "./series-text";
 import { ratToString } from "./rational";
 import type { BettiTableValue, MatrixValue, RingValue, Value } from "./values";

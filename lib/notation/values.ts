@@ -1,6 +1,6 @@
 /// Runtime values of the notation, one variant per type of notation.md §8.
 /// Engine objects (rings, polynomials) are wrapped, never copied; numbers are exact.
-import type { Field, HilbertSeries, Poly, PolyRing } from "./engine";
+import type { Field, HilbertSeries, Poly, PolyRing } from "../algebra/index";
 import type { Rational } from "./rational";
 
 /// A ring of the notation: a polynomial ring S (its field, variables, degrees, order)

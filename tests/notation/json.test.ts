@@ -1,7 +1,7 @@
 // The JSON encoding of every value type, exactly as notation.md §9, and the round trip
 // encode → decode → encode (what restoring a saved named object relies on).
 import { describe, expect, it } from "vitest";
-import { QQ, gf, hilbertSeriesFromNumerator, parsePoly } from "@/lib/notation/engine";
+import { QQ, gf, hilbertSeriesFromNumerator, parsePoly } from "@/lib/algebra/index";
 import { DecodeError, ValueJson, ValueJsonSchemas, decodeValue, encodeValue, type ValueJson as Json } from "@/lib/notation/json";
 import { rational } from "@/lib/notation/rational";
 import { RingRegistry } from "@/lib/notation/rings";
