@@ -719,7 +719,7 @@ class Checker {
   }
 
   private methodCall(e: A.Call, c: A.Property): Type {
-    const obj = this.infer(c.object);
+    const obj = withoutNone(this.infer(c.object));
     const args = e.args.map((a) => this.infer(a));
     e.named.forEach((n) => {
       this.infer(n.value);
@@ -783,7 +783,7 @@ class Checker {
   }
 
   private property(e: A.Property): Type {
-    const obj = this.infer(e.object);
+    const obj = withoutNone(this.infer(e.object));
     if (obj.kind === "Any") return T.Any;
     if (obj.kind === "Record") {
       if (obj.fields === null) return T.Any;
@@ -805,7 +805,7 @@ class Checker {
   }
 
   private subscript(e: A.Subscript): Type {
-    const obj = this.infer(e.object);
+    const obj = withoutNone(this.infer(e.object));
     if (obj.kind === "Field") {
       const problems: { message: string; span: A.Span }[] = [];
       const info = readRingLiteral(e, problems);
@@ -840,6 +840,13 @@ class Checker {
     if (v !== null && v < 0n) this.error(e.items[0].span, `List indices start at 0 and cannot be negative, got ${v}`);
     return obj.item;
   }
+}
+
+/// The type of a value that may be `none`, once it is not (checked at run time).
+function withoutNone(t: Type): Type {
+  if (t.kind !== "Union") return t;
+  const real = t.options.filter((o) => o.kind !== "None");
+  return real.length === 0 ? t : makeUnion(real);
 }
 
 function wrap(e: A.Expr, text: string): string {

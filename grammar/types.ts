@@ -159,10 +159,16 @@ export function sameType(a: Type, b: Type): boolean {
 /// Whether a value of type `from` may be used where `to` is expected, with the
 /// notation's implicit conversions: Int → Rat → Poly (constants), a Ring where a
 /// Module is expected (quotient ring as cyclic module), a List of ideals where a
-/// Family is expected. Any goes everywhere (the check is left to run time).
+/// Family is expected, `T or None` where T is expected. Any goes everywhere (the
+/// check is left to run time).
 export function isAssignable(from: Type, to: Type): boolean {
   if (from.kind === "Any" || to.kind === "Any" || to.kind === "Var") return true;
-  if (from.kind === "Union") return from.options.every((o) => isAssignable(o, to));
+  // A value that may be `none` is accepted where its other type is expected; the
+  // evaluator reports `none` at run time (there is no flow typing to rule it out).
+  if (from.kind === "Union") {
+    const real = to.kind === "None" ? from.options : from.options.filter((o) => o.kind !== "None");
+    return real.length > 0 && real.every((o) => isAssignable(o, to));
+  }
   if (to.kind === "Union") return to.options.some((o) => isAssignable(from, o));
   switch (to.kind) {
     case "Rat":

@@ -128,6 +128,8 @@ const CASES: Case[] = [
   ["§6 burch_index", WITH_IDEALS, "burch_index(S / I)", "(call burch_index (/ S I))", "Int"],
   ["§6 R.burch_index", WITH_IDEALS, "R.burch_index", "(. R burch_index)", "Int"],
   ["§6 eventual_period", "", "eventual_period([1, 2, 3, 2, 3])", "(call eventual_period (list 1 2 3 2 3))", "Record{start: Int or None, period: Int or None}"],
+  ["§6 a value that may be none is usable (checked at run time)", "r := eventual_period([1, 2, 1, 2])\n", "if r.period == none then 0 else r.period + 1", "(if (== (. r period) none) 0 (+ (. r period) 1))", "Int"],
+  ["§6 fields of a rational function", WITH_COMPLEX, "P.rational.numerator", "(. (. P rational) numerator)", "Poly"],
   // §7 lists, records, functions, families
   ["§7 list", "", "[1, 2, 3]", "(list 1 2 3)", "List<Int>"],
   ["§7 empty list", "", "[]", "(list)", "List<Any>"],
