@@ -3,9 +3,10 @@
 /// transcript in the middle, the input at the bottom, the command palette over all.
 /// The session state lives here; the views under ./views only draw it.
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
+import { mutate } from "swr";
 import { envFromObjects } from "@/lib/editor/notation-env";
 import { GUIDED_TOUR, type GuidedExample } from "@/lib/examples/tour";
-import { ApiError, cancelCell, createSession, deleteObject, exportUrl, renameObject } from "./api/client";
+import { ApiError, cancelCell, createSession, deleteObject, exportUrl, keys, renameObject } from "./api/client";
 import { runCell } from "./api/cell-stream";
 import type { NamedObject } from "./api/types";
 import { InputEditor, type EditorHandle } from "./input-editor";
@@ -113,14 +114,15 @@ export function Console({ initialSessionId }: { initialSessionId: string | null 
           setNotice(`The cell did not run: ${messageOf(e)}`);
           if (!accepted) editor.current?.setText(source);
         } finally {
-          await Promise.all([data.refreshCells(), data.refreshObjects(), data.refreshSessions()]);
+          // By key, not through the hook: the first run may have created the session.
+          if (id) await Promise.all([mutate(keys.cells(id)), mutate(keys.objects(id)), mutate(keys.sessions)]);
           runningRef.current = null;
           setRunning(null);
         }
       })();
       return true;
     },
-    [canEdit, sessionId, data],
+    [canEdit, sessionId],
   );
 
   const cancelRunning = useCallback(async () => {
