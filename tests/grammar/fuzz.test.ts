@@ -6,7 +6,7 @@ import { describe, expect, test } from "vitest";
 import type { Position } from "@/grammar/ast";
 import type { Diagnostic } from "@/grammar/analysis";
 import { check } from "@/grammar/checker";
-import { EMPTY_ENV, tokenize } from "@/grammar/index";
+import { EMPTY_ENV, tokenize, type Env } from "@/grammar/index";
 import { parse } from "@/grammar/parser";
 
 const FRAGMENTS = [
@@ -35,9 +35,15 @@ function positionOk(p: Position, source: string): boolean {
   return p.line === line && p.col === col;
 }
 
-function assertWellFormed(source: string): void {
+/// A session with a current ring and some bindings, so mutations reach more of the checker.
+const SESSION: Env = {
+  bindings: { S: { kind: "Ring", vars: ["x", "y", "z"] }, I: { kind: "Ideal" }, R: { kind: "Ring", vars: ["x", "y", "z"] } },
+  currentRing: "S",
+};
+
+function assertWellFormed(source: string, env: Env = EMPTY_ENV): void {
   const parsed = parse(source);
-  const analysis = check(parsed, EMPTY_ENV, source);
+  const analysis = check(parsed, env, source);
   for (const e of analysis.errors as Diagnostic[]) {
     expect(["parse", "type"]).toContain(e.kind);
     expect(e.message.length).toBeGreaterThan(0);
@@ -82,6 +88,10 @@ describe("fuzz: the front end never throws and spans stay inside the source", ()
 
   test("random token soups", () => {
     fc.assert(fc.property(soup, (s) => assertWellFormed(s)), { numRuns: 400, seed: 20261201 });
+  });
+
+  test("random token soups in a session with a current ring", () => {
+    fc.assert(fc.property(soup, (s) => assertWellFormed(s, SESSION)), { numRuns: 400, seed: 7 });
   });
 
   test("random mutations of valid programs", () => {
