@@ -1,0 +1,23 @@
+import { NextResponse } from "next/server";
+import { requireUser } from "@/lib/auth/current-user";
+import { readJson } from "@/lib/http/body";
+import { clientAddress } from "@/lib/http/client-address";
+import { route } from "@/lib/http/errors";
+import { granteeOf, NewShare } from "@/lib/sharing/bodies";
+import { listObjectShares, shareObject } from "@/lib/sharing/shares";
+
+type Context = { params: Promise<{ objectId: string }> };
+
+export const GET = route(async (_req, { params }: Context) => {
+  const user = await requireUser();
+  const { objectId } = await params;
+  return NextResponse.json({ shares: await listObjectShares(user, objectId) });
+});
+
+export const POST = route(async (req, { params }: Context) => {
+  const user = await requireUser();
+  const { objectId } = await params;
+  const body = await readJson(req, NewShare, { maxBytes: 4 * 1024 });
+  const { share, created } = await shareObject(user, objectId, granteeOf(body), body.role, clientAddress(req.headers));
+  return NextResponse.json({ share }, { status: created ? 201 : 200 });
+});
