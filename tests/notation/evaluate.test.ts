@@ -255,6 +255,21 @@ describe("errors with kind and span", () => {
     expect(big.error?.kind).toBe("limit");
   });
 
+  it("dividing by a multiple of p in GF(p) is a division by zero", async () => {
+    const out = await run("S := GF(7)[x]\nq := 7\nx / q");
+    expect(out.error).toMatchObject({ kind: "runtime", message: "division by zero: 7 is 0 in GF(7)", span: { from: { line: 3, col: 5 }, to: { line: 3, col: 6 } } });
+    const rat = await run("S := GF(7)[x]\nq := 7\n(1/q) * x");
+    expect(rat.error?.message).toMatch(/division by zero/);
+    // 1/2 is 4 in GF(7), since 2·4 = 8 ≡ 1
+    expect(await text("S := GF(7)[x]\nx / 2")).toBe("-3*x");
+  });
+
+  it("a saved object that does not decode is reported, naming it", async () => {
+    const out = await run("1", [{ name: "I", value: { type: "Ideal", text: "<q>", gens: ["q"], ring: { type: "Ring", text: "", field: "Q", vars: ["x"], degrees: [1], order: "grevlex", ideal: [] } } }]);
+    expect(out.error).toMatchObject({ kind: "runtime" });
+    expect(out.error!.message).toMatch(/^the saved object I cannot be restored: /);
+  });
+
   it("an index out of range", async () => {
     const out = await run("[1, 2, 3][5]");
     expect(out.error).toMatchObject({ kind: "runtime", span: { from: { line: 1, col: 11 }, to: { line: 1, col: 12 } } });
