@@ -6,8 +6,12 @@ import type { RingCtx } from "../poly/ring";
 import { buchberger } from "./buchberger";
 import { groebnerModular } from "./modular";
 
-export { buchberger, reducePairwise, pairwiseStrategy, type ReductionStep, type Strategy } from "./buchberger";
+export { buchberger } from "./buchberger";
+export { reducePairwise } from "./reduce-pairwise";
+export type { ReductionStep, Strategy } from "./basis";
 export { interreduce } from "./interreduce";
+export { reduceF4 } from "./f4";
+export { chooseStrategy, f4Strategy, normalStrategy, pairwiseStrategy } from "./strategy";
 export { normalFormCtx } from "./normalform";
 
 /// The reduced Gröbner basis; picks the method by the field.

@@ -184,7 +184,7 @@ function verify(R: RingCtx<Rat>, inputs: readonly Poly[], G: Poly[], opts: Compu
   let pairs: Pair[] = [];
   for (const e of elts) {
     basis.elts.push(e);
-    pairs = updatePairs(R.layout, R.cmp, basis, pairs, basis.elts.length - 1);
+    pairs = updatePairs(R.layout, { cmp: R.cmp, bySugar: false }, basis, pairs, basis.elts.length - 1);
   }
   for (const pr of pairs) {
     const b = new Geobucket(R);

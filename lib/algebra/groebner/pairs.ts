@@ -2,9 +2,17 @@ import { HEAD, monoCoprime, monoDivides, monoLcm, type Mono, type MonoLayout } f
 import type { MonoCompare } from "../order/order";
 import type { Basis, Pair } from "./basis";
 
-/// Pair order for the sugar strategy: smaller sugar first, then smaller lcm.
-export function pairBefore(cmp: MonoCompare, a: Pair, b: Pair): number {
-  return a.sugar !== b.sugar ? a.sugar - b.sugar : cmp(a.lcm, b.lcm);
+/// How pairs are queued: the sugar strategy (smaller sugar first, then smaller lcm), or the
+/// normal strategy (smaller lcm first; B. Buchberger 1985), which does better in orders that
+/// do not compare degrees first, where sugar says little about the work.
+export interface PairOrder {
+  readonly cmp: MonoCompare;
+  readonly bySugar: boolean;
+}
+
+export function pairBefore(o: PairOrder, a: Pair, b: Pair): number {
+  if (o.bySugar && a.sugar !== b.sugar) return a.sugar - b.sugar;
+  return o.cmp(a.lcm, b.lcm);
 }
 
 function lcmEquals(a: Mono, b: Mono, l: Mono): boolean {
@@ -22,7 +30,7 @@ function pairSugar(lcm: Mono, lmi: Mono, si: number, lmj: Mono, sj: number): num
 /// (R. Gebauer, H. M. Möller, "On an installation of Buchberger's algorithm",
 /// J. Symbolic Comput. 1988; in the form of T. Becker, V. Weispfenning, "Gröbner Bases",
 /// Springer 1993, procedure UPDATE). `pairs` stays sorted by pairBefore.
-export function updatePairs(L: MonoLayout, cmp: MonoCompare, basis: Basis, pairs: Pair[], h: number): Pair[] {
+export function updatePairs(L: MonoLayout, order: PairOrder, basis: Basis, pairs: Pair[], h: number): Pair[] {
   const { elts, active } = basis;
   const eh = elts[h];
   const lmh = eh.lm;
@@ -53,20 +61,20 @@ export function updatePairs(L: MonoLayout, cmp: MonoCompare, basis: Basis, pairs
     const eg = elts[p.g];
     fresh.push({ i: p.g, j: h, lcm: p.lcm, sugar: pairSugar(p.lcm, eg.lm, eg.sugar, lmh, eh.sugar) });
   }
-  fresh.sort((a, b) => pairBefore(cmp, a, b));
+  fresh.sort((a, b) => pairBefore(order, a, b));
   // Basis elements whose leading monomial lm(h) divides are no longer needed as reducers.
   const stillActive = active.filter((g) => !monoDivides(lmh, elts[g].lm));
   stillActive.push(h);
   basis.active.length = 0;
   basis.active.push(...stillActive);
-  return mergeSorted(cmp, survivors, fresh);
+  return mergeSorted(order, survivors, fresh);
 }
 
-function mergeSorted(cmp: MonoCompare, a: Pair[], b: Pair[]): Pair[] {
+function mergeSorted(order: PairOrder, a: Pair[], b: Pair[]): Pair[] {
   if (b.length === 0) return a;
   const out: Pair[] = new Array(a.length + b.length);
   let i = 0, j = 0, k = 0;
-  while (i < a.length && j < b.length) out[k++] = pairBefore(cmp, a[i], b[j]) <= 0 ? a[i++] : b[j++];
+  while (i < a.length && j < b.length) out[k++] = pairBefore(order, a[i], b[j]) <= 0 ? a[i++] : b[j++];
   while (i < a.length) out[k++] = a[i++];
   while (j < b.length) out[k++] = b[j++];
   return out;

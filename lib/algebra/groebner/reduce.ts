@@ -2,7 +2,7 @@ import { checkLimit, Ticker, type ComputeOptions } from "../options";
 import { monoDiv, monoDivides, monoMul, type Mono } from "../monomial/monomial";
 import { asTyped, makePoly, type Poly } from "../poly/poly";
 import type { RingCtx } from "../poly/ring";
-import type { BasisElt } from "./basis";
+import type { BasisElt, Reduced } from "./basis";
 import { Geobucket } from "./geobucket";
 
 /// A reducer: among the given elements, one whose leading monomial divides m (shortest first).
@@ -31,11 +31,6 @@ export function addMultipleOfTail<C>(R: RingCtx<C>, B: Geobucket<C>, g: Poly, s:
   B.add(m, c);
 }
 
-export interface Reduced<C> {
-  m: Mono[];
-  c: C[];
-  sugar: number;
-}
 
 /// Full reduction of the sum held in `bucket` by the elements `ids` (monic reducers).
 /// Returns the remainder (not normalised) and the sugar grown by the reductions.
