@@ -12,6 +12,7 @@ import {
   lookupFunction,
   lookupProperty,
   operatorRows,
+  ORDER_NAMES,
   propertiesOf,
   type FunctionSig,
   type OperatorName,
@@ -307,6 +308,10 @@ class Checker {
       return T.Poly;
     }
     this.names.set(e, { kind: "unknown" });
+    if (ORDER_NAMES.includes(n)) {
+      this.error(e.span, `${n} names a monomial order; orders are given inside ring brackets, as in Q[x, y; order = ${n}]`);
+      return T.Any;
+    }
     this.error(e.span, this.unknownNameMessage(n, vars));
     return T.Any;
   }
@@ -562,6 +567,10 @@ class Checker {
         this.names.set(c, { kind: "unknown" });
         e.args.forEach((a) => this.infer(a));
         e.named.forEach((n) => this.infer(n.value));
+        if (c.name === "weights") {
+          this.error(c.span, "weights(…) gives a monomial order inside ring brackets, as in Q[x, y; order = weights(1, 2)]");
+          return T.Any;
+        }
         const guess = nearest(c.name, functionNames);
         this.error(
           c.span,

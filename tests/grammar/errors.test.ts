@@ -306,6 +306,16 @@ const BAD: [string, string, string[]][] = [
     ["type error at 1:8-1:10: List indices start at 0 and cannot be negative, got -1"],
   ],
   [
+    "weights outside ring brackets",
+    "weights(1, 2)",
+    ["type error at 1:1-1:8: weights(…) gives a monomial order inside ring brackets, as in Q[x, y; order = weights(1, 2)]"],
+  ],
+  [
+    "an order name outside ring brackets",
+    "S := Q[x]\nlex",
+    ["type error at 2:1-2:4: lex names a monomial order; orders are given inside ring brackets, as in Q[x, y; order = lex]"],
+  ],
+  [
     "indexing a Ring",
     "S := Q[x]\nS[0]",
     ["type error at 2:1-2:5: S is a Ring, not a List, so it cannot be indexed — a new polynomial ring is built from a field, as in S.field[t]"],
