@@ -1,9 +1,12 @@
 import { internalLimit } from "./limits";
-import { monoDiv, monoDivides, monoMul, type Mono } from "../monomial/monomial";
+import { monoDiv as monoDivImported, monoDivides as monoDividesImported, monoMul as monoMulImported, type Mono } from "../monomial/monomial";
 import type { Ticker } from "../options";
 import type { RingCtx } from "../poly/ring";
 import { compareKeys, type ModuleOrder } from "./order";
 import type { Vec } from "./vector";
+
+// Bound once: transpiled module imports are property reads on every call in the hot loop.
+const monoMul = monoMulImported, monoDiv = monoDivImported, monoDivides = monoDividesImported;
 
 /// The sum s·t·v[pos..] of the terms of v from position pos on, multiplied by the term s·t.
 export interface Stream<C> {

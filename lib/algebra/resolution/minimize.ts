@@ -111,48 +111,54 @@ export function minimizeResolution<C>(R: RingCtx<C>, S: SchreyerResolution<C>, o
   const maps: SparseMap[] = [{ cols: new Map(), rows: new Map() }];
   for (let k = 1; k <= top; k++) maps.push(sparseFromVecs(R, S.cols[k]));
   const alive = S.degrees.map((ds) => new Set(ds.map((_, p) => p)));
-  const K = R.K;
   for (let k = top; k >= 1; k--) {
     const A = maps[k];
     for (;;) {
-      checkpoint(opts, () => ({ stage: "minimize", detail: `homological degree ${k}` }));
-      let best: [number, number] | null = null, bestCost = Infinity;
+      // One scan collects the unit entries, cheapest first; each is re-checked before use
+      // since earlier eliminations change the matrix. Repeat until a scan finds none.
+      const cands: [number, number, number][] = [];
       for (const [b, col] of A.cols) {
-        if (col.size >= bestCost) continue;
         for (const [a, f] of col) {
-          if (S.degrees[k][b] !== S.degrees[k - 1][a] || !isUnit(f)) continue;
-          const cost = col.size * (A.rows.get(a)?.size ?? 1);
-          if (cost < bestCost) {
-            bestCost = cost;
-            best = [a, b];
-          }
+          if (S.degrees[k][b] === S.degrees[k - 1][a] && isUnit(f)) cands.push([col.size * (A.rows.get(a)?.size ?? 1), a, b]);
         }
       }
-      if (!best) break;
-      const [a, b] = best;
-      const colB = A.cols.get(b) as Map<number, Poly>;
-      const c = asTyped<C>(colB.get(a) as Poly).c[0];
-      const cInvNeg = K.neg(K.inv(c));
-      const one = (colB.get(a) as Poly).m[0];
-      for (const q of [...(A.rows.get(a) as Set<number>)]) {
-        if (q === b) continue;
-        const colQ = A.cols.get(q) as Map<number, Poly>;
-        const alpha = mulTerm(R, colQ.get(a) as Poly, cInvNeg, one);
-        for (const [r, beta] of colB) {
-          if (r === a) continue;
-          setEntry(A, r, q, addScaled(R, colQ.get(r) ?? polyFromTerms(R, [], []), mulPoly(R, beta, alpha), K.one));
-        }
+      if (cands.length === 0) break;
+      cands.sort((x, y) => x[0] - y[0]);
+      for (const [, a, b] of cands) {
+        checkpoint(opts, () => ({ stage: "minimize", detail: `homological degree ${k}` }));
+        const f = A.cols.get(b)?.get(a);
+        if (!f || !isUnit(f)) continue;
+        eliminate(R, maps, k, a, b);
+        alive[k].delete(b);
+        alive[k - 1].delete(a);
       }
-      deleteColumn(A, b);
-      deleteRow(A, a);
-      if (k + 1 <= top) deleteRow(maps[k + 1], b);
-      deleteColumn(maps[k - 1], a);
-      alive[k].delete(b);
-      alive[k - 1].delete(a);
     }
   }
   const kept = alive.map((s, k) => [...s].sort((x, y) => S.degrees[k][x] - S.degrees[k][y] || x - y));
   return { kept, maps };
+}
+
+/// Cancels the unit entry (a, b) of d_k.
+function eliminate<C>(R: RingCtx<C>, maps: SparseMap[], k: number, a: number, b: number): void {
+  const K = R.K;
+  const A = maps[k];
+  const colB = A.cols.get(b) as Map<number, Poly>;
+  const pivot = colB.get(a) as Poly;
+  const cInvNeg = K.neg(K.inv(asTyped<C>(pivot).c[0]));
+  const one = pivot.m[0];
+  for (const q of [...(A.rows.get(a) as Set<number>)]) {
+    if (q === b) continue;
+    const colQ = A.cols.get(q) as Map<number, Poly>;
+    const alpha = mulTerm(R, colQ.get(a) as Poly, cInvNeg, one);
+    for (const [r, beta] of colB) {
+      if (r === a) continue;
+      setEntry(A, r, q, addScaled(R, colQ.get(r) ?? polyFromTerms(R, [], []), mulPoly(R, beta, alpha), K.one));
+    }
+  }
+  deleteColumn(A, b);
+  deleteRow(A, a);
+  if (k + 1 < maps.length) deleteRow(maps[k + 1], b);
+  deleteColumn(maps[k - 1], a);
 }
 
 /// The matrix of map k of the minimal complex, rows and columns in the order of `kept`.
