@@ -177,6 +177,55 @@ describe("every construct of notation.md parses and checks", () => {
   });
 });
 
+describe("the examples of notation.md as written", () => {
+  test("§2 statements block, comments included", () => {
+    const program = [
+      "S := GF(32003)[x, y, z, w]      # definition: binds a name, saved as a named object",
+      "use S                           # make S the current ring",
+      "I := <x*z, x*w, y*z, y*w>       # ideal literal, read in the current ring",
+      "resolve(S / I).betti            # expression: evaluated and shown",
+    ].join("\n");
+    const a = analyze(program);
+    expect(a.errors).toEqual([]);
+    expect(a.program.statements.map(sx)).toEqual([
+      "(:= S ([] (call GF 32003) x y z w))",
+      "(use S)",
+      "(:= I (ideal (* x z) (* x w) (* y z) (* y w)))",
+      "(. (call resolve (/ S I)) betti)",
+    ]);
+  });
+
+  test("§6–§7 experiment lines", () => {
+    const program = [
+      "S := Q[x, y, z]",
+      "R := S / <x^2, y^2, z^2>",
+      "[burch_index(S / S.maximal^p) for p in 2..5]",
+      "{index: R.burch_index, depth: R.depth}",
+      "F := random_ideals(S, count = 200, gens = 3, degree = 2, seed = 1)",
+      "G := monomial_ideals(S, degree = 3, max_gens = 4)",
+      "sweep(F, I -> {index: burch_index(S / I), depth: (S / I).depth})",
+      "eventual_period(poincare(R.residue, terms = 12).coefficients)",
+      "serre(S / <x*y>, S / <x - y, z>)",
+      "tor_lengths(S / <x*y>, S / <x - y, z>)",
+    ].join("\n");
+    const a = analyze(program);
+    expect(a.errors.map(formatError)).toEqual([]);
+    const types = a.program.statements.map((s) => (s.kind === "ExprStatement" ? typeToString(a.types.get(s.expr)!) : s.kind));
+    expect(types).toEqual([
+      "Define",
+      "Define",
+      "List<Int>",
+      "Record{index: Int, depth: Int}",
+      "Define",
+      "Define",
+      "Table",
+      "Record{start: Int or None, period: Int or None}",
+      "Int",
+      "List<Int>",
+    ]);
+  });
+});
+
 describe("statements and spans", () => {
   test("newline and ; separate statements; blank lines and extra ; are ignored", () => {
     const a = analyze("a := 1; b := 2\n\n c := a + b ;;\n# only a comment\n");
