@@ -3,7 +3,7 @@
 /// types, named options, a one-line description and the engine part implementing it.
 /// The checker, the editor's completion and the in-app reference all read this table.
 import type { BinaryOp, UnaryOp } from "./ast";
-import { ModuleLike, NumberType, T, orNone, type Type, type TypeKind } from "./types";
+import { ModuleLike, NumberType, T, orNone, typeToString, type Type, type TypeKind } from "./types";
 
 /// Who implements a name: 0 the evaluator itself (no engine call); 1, 2, 3 the
 /// engine's parts (1: fields, polynomials, Gröbner bases, ideals, Hilbert series;
@@ -534,4 +534,19 @@ for (const r of OPERATORS) {
 
 export function operatorRows(o: OperatorName, prefix: boolean): readonly OperatorSig[] {
   return operatorIndex.get(`${o}/${prefix}`) ?? [];
+}
+
+/// One overload as the reference shows it:
+/// `resolve(M: Module or Ring, length = n: Int, degree = d: Int) -> Complex`.
+export function formatOverload(f: FunctionSig, o: Overload): string {
+  const params = o.params.map((q) => `${q.name}: ${typeToString(q.type)}`);
+  if (o.rest) params.push(`${o.rest.name}…: ${typeToString(o.rest.type)}`);
+  const options = f.options.map((q) => `${q.name} = ${q.default ?? "…"}: ${typeToString(q.type)}`);
+  return `${f.name}(${[...params, ...options].join(", ")}) -> ${typeToString(o.result)}`;
+}
+
+/// A property or method as the reference shows it: `Complex.map(i: Int) -> Matrix`.
+export function formatProperty(q: PropertySig): string {
+  const params = q.params === null ? "" : `(${q.params.map((x) => `${x.name}: ${typeToString(x.type)}`).join(", ")})`;
+  return `${q.owner}.${q.name}${params} -> ${typeToString(q.result)}`;
 }

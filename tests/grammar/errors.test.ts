@@ -316,6 +316,11 @@ const BAD: [string, string, string[]][] = [
     ["type error at 2:1-2:4: lex names a monomial order; orders are given inside ring brackets, as in Q[x, y; order = lex]"],
   ],
   [
+    "several errors in one statement (recovery inside a statement)",
+    "[1 +, 2 +]",
+    ["parse error at 1:5-1:6: expected an expression, found `,`", "parse error at 1:10-1:11: expected an expression, found `]`"],
+  ],
+  [
     "indexing a Ring",
     "S := Q[x]\nS[0]",
     ["type error at 2:1-2:5: S is a Ring, not a List, so it cannot be indexed — a new polynomial ring is built from a field, as in S.field[t]"],

@@ -5,6 +5,8 @@ import { describe, expect, test } from "vitest";
 import {
   analyze,
   CONSTANTS,
+  formatOverload,
+  formatProperty,
   FUNCTIONS,
   formatError,
   lookupFunction,
@@ -105,6 +107,19 @@ describe("the signature table", () => {
     }
     const parts = [...FUNCTIONS.flatMap((f) => f.overloads.map((o) => o.part)), ...PROPERTIES.map((p) => p.part), ...OPERATORS.map((o) => o.part)];
     for (const p of parts) expect([0, 1, 2, 3]).toContain(p);
+  });
+
+  test("the reference's printed forms", () => {
+    const resolve = lookupFunction("resolve")!;
+    expect(formatOverload(resolve, resolve.overloads[0])).toBe(
+      "resolve(M: Module or Ring, length = …: Int, degree = …: Int) -> Complex",
+    );
+    const poincare = lookupFunction("poincare")!;
+    expect(formatOverload(poincare, poincare.overloads[0])).toBe("poincare(M: Module or Ring, terms = 10: Int) -> Series");
+    const matrix = lookupFunction("matrix")!;
+    expect(formatOverload(matrix, matrix.overloads[0])).toBe("matrix(rows…: List<Poly>) -> Matrix");
+    expect(formatProperty(lookupProperty("Complex", "map")!)).toBe("Complex.map(i: Int) -> Matrix");
+    expect(formatProperty(lookupProperty("Ring", "vars")!)).toBe("Ring.vars -> List<Poly>");
   });
 
   test.each(FUNCTIONS.map((f) => [f.name, f.example] as const))("the example of %s type-checks: %s", (_name, example) => {
