@@ -24,10 +24,12 @@ export function asEvalError(e: unknown, span: Span): EvalError {
   if (e instanceof EvalError) return e;
   if (e instanceof AlgebraError) return new EvalError(e.kind, e.message, span);
   if (e instanceof DivisionByZero) return runtime("division by zero", span);
-  if (e instanceof RangeError && /BigInt|Maximum BigInt size|Invalid array length/i.test(e.message)) {
+  if (e instanceof RangeError && /BigInt|Invalid array length/i.test(e.message)) {
     return limit(`the result is too large to represent (${e.message})`, span);
   }
-  return runtime(e instanceof Error ? e.message : String(e), span);
+  if (e instanceof RangeError && /call stack/i.test(e.message)) return limit("the computation nested too deeply", span);
+  // anything else is a defect of the evaluator or the engine, said so rather than blamed on the input
+  return runtime(`internal error: ${e instanceof Error ? e.message : String(e)}`, span);
 }
 
 export function spanJson(span: Span): SpanJson {

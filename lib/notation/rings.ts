@@ -1,10 +1,9 @@
 /// Rings of one evaluation, interned: the same ring written twice (or restored from the
 /// JSON of several saved objects) is one RingValue, so its polynomials mix freely and its
 /// Gröbner basis is computed once.
-import { QQ, gf, polyRing, type Field, type OrderSpec, type Poly } from "../algebra/index";
+import { QQ, formatPoly, gf, polyRing, type Field, type OrderSpec, type Poly, type PolyRing } from "../algebra/index";
 import { fieldText, orderText } from "./text";
 import type { RingValue } from "./values";
-import { formatPoly } from "../algebra/index";
 
 export function parseField(text: string): Field | null {
   if (text === "Q") return QQ;
@@ -25,7 +24,7 @@ export class RingRegistry {
 
   polynomialRing(field: Field, vars: readonly string[], opts?: { order?: OrderSpec; degrees?: number[] }): RingValue {
     const poly = polyRing(field, vars, opts);
-    const key = `${fieldText(poly.field)}|${poly.vars.join(",")}|${poly.degrees.join(",")}|${orderText(poly.order)}`;
+    const key = keyOf(poly);
     let r = this.rings.get(key);
     if (!r) {
       r = { type: "Ring", poly, ideal: [] };
@@ -35,13 +34,13 @@ export class RingRegistry {
   }
 
   /// The ring `base.poly / (base.ideal + gens)`; generators must be polynomials of base.poly.
-  quotient(base: RingValue, gens: readonly Poly[], basis?: readonly Poly[]): RingValue {
+  quotient(base: RingValue, gens: readonly Poly[]): RingValue {
     const ideal = [...base.ideal, ...gens];
-    const ambient = this.polynomialRing(base.poly.field, base.poly.vars, { order: base.poly.order, degrees: [...base.poly.degrees] });
-    const key = `${this.keyOf(ambient)}/${ideal.map((f) => formatPoly(ambient.poly, f)).join(",")}`;
+    const ambient = this.ambient(base);
+    const key = `${keyOf(ambient.poly)}/${ideal.map((f) => formatPoly(ambient.poly, f)).join(",")}`;
     let r = this.rings.get(key);
     if (!r) {
-      r = { type: "Ring", poly: ambient.poly, ideal, ...(basis ? { basis } : {}) };
+      r = { type: "Ring", poly: ambient.poly, ideal };
       this.rings.set(key, r);
     }
     return r;
@@ -51,8 +50,6 @@ export class RingRegistry {
   ambient(r: RingValue): RingValue {
     return this.polynomialRing(r.poly.field, r.poly.vars, { order: r.poly.order, degrees: [...r.poly.degrees] });
   }
-
-  private keyOf(r: RingValue): string {
-    return `${fieldText(r.poly.field)}|${r.poly.vars.join(",")}|${r.poly.degrees.join(",")}|${orderText(r.poly.order)}`;
-  }
 }
+
+const keyOf = (p: PolyRing): string => `${fieldText(p.field)}|${p.vars.join(",")}|${p.degrees.join(",")}|${orderText(p.order)}`;
