@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { ideal, neg, parsePoly, QQ, type Poly, zero } from "@/lib/algebra";
-import { resolveCoker, resolveQuotient } from "@/lib/algebra/resolution";
+import { resolveCoker, resolveQuotient, syzygyPresentation } from "@/lib/algebra/resolution";
 import { expectMinimalComplex, GF, randomForm, ringOf, rng, vars } from "./resolution-helpers";
 
 describe("resolutions of cokernels of homogeneous matrices", () => {
@@ -70,5 +70,20 @@ describe("resolutions of cokernels of homogeneous matrices", () => {
     const R = ringOf(GF, 2);
     expect(() => resolveCoker(R, [[parsePoly(R, "x1^2+x2")]])).toThrow(/homogeneous/);
     expect(() => resolveQuotient(ideal(R, [parsePoly(R, "x1^2+x2")]))).toThrow(/homogeneous/);
+  });
+});
+
+describe("syzygy modules and minimal presentations", () => {
+  it("Syz_p(M) is resolved by the tail of the resolution of M: β_{i,j}(Syz_p M) = β_{i+p,j}(M)", () => {
+    // Truncating a minimal resolution at F_p gives a minimal resolution of the p-th syzygy module
+    // (common practice; Eisenbud, The Geometry of Syzygies, Ch. 1).
+    const R = ringOf(GF, 5);
+    const M = resolveQuotient(ideal(R, ["x1*x3-x2^2", "x1*x4-x2*x3", "x2*x4-x3^2", "x5^2"].map((s) => parsePoly(R, s))));
+    for (let p = 0; p <= M.length; p++) {
+      const { rows, rowDegrees } = syzygyPresentation(M, p);
+      const S = resolveCoker(R, rows, rowDegrees);
+      const shifted = M.betti.entries.filter(([i]) => i >= p).map(([i, j, b]) => [i - p, j, b]);
+      expect(S.betti.entries).toEqual(shifted);
+    }
   });
 });

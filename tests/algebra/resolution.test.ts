@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { add, ideal, idealEquals, monomial, parsePoly, pow, QQ, variable } from "@/lib/algebra";
+import { add, ideal, idealEquals, idealHilbertSeries, monomial, parsePoly, polyRing, pow, QQ, variable } from "@/lib/algebra";
 import { minors, pfaffians } from "@/lib/algebra/invariants";
-import { bettiNumber, bettiTotals, resolveQuotient } from "@/lib/algebra/resolution";
+import { bettiAlternatingSum, bettiNumber, bettiTotals, resolveQuotient } from "@/lib/algebra/resolution";
 import { alternating, binom, expectMinimalComplex, genericMatrix, GF, randomForm, ringOf, rng, vars } from "./resolution-helpers";
 
 const FIELDS = [
@@ -194,6 +194,20 @@ describe("parsing round trip", () => {
     const R = ringOf(GF, 3);
     const C = resolveQuotient(ideal(R, ["x1^2", "x1*x2", "x2^3"].map((s) => parsePoly(R, s))));
     expect(C.betti.entries).toEqual([[0, 0, 1], [1, 2, 2], [1, 3, 1], [2, 3, 1], [2, 4, 1]]);
+    expectMinimalComplex(R, C);
+  });
+});
+
+describe("weighted gradings", () => {
+  it("a complete intersection in k[x, y, z] with degrees 1, 2, 3 has Koszul Betti numbers in weighted degrees", () => {
+    // x^2 − y (degree 2) and y^3 − z^2 (degree 6) have coprime lex leading terms x^2, y^3, so they
+    // form a regular sequence (checks.md row 4; common practice); the alternating Betti sum is
+    // the weighted Hilbert series numerator (1 − t^2)(1 − t^6).
+    const R = polyRing(GF, ["x", "y", "z"], { degrees: [1, 2, 3] });
+    const I = ideal(R, ["x^2-y", "y^3-z^2"].map((s) => parsePoly(R, s)));
+    const C = resolveQuotient(I);
+    expect(C.betti.entries).toEqual([[0, 0, 1], [1, 2, 1], [1, 6, 1], [2, 8, 1]]);
+    expect(bettiAlternatingSum(C.betti)).toEqual([...idealHilbertSeries(I).numerator]);
     expectMinimalComplex(R, C);
   });
 });

@@ -1,3 +1,4 @@
 export { type BettiTable, type BettiColumn, bettiNumber, bettiTotals, bettiRegularity, bettiAlternatingSum } from "./betti";
 export { type Resolution, type ResolveOptions, resolveQuotient, resolveCoker } from "./resolve";
 export { projectiveDimension, depthByAuslanderBuchsbaum, regularity } from "./invariants";
+export { type Presentation, syzygyPresentation } from "./syzygy";
