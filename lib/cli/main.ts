@@ -16,8 +16,6 @@ export interface Io {
   readonly stdin: NodeJS.ReadableStream;
   readonly stdout: { write(s: string): unknown };
   readonly stderr: { write(s: string): unknown };
-  on?(event: "SIGINT", listener: () => void): unknown;
-  off?(event: "SIGINT", listener: () => void): unknown;
 }
 
 interface Args {
@@ -72,20 +70,14 @@ export async function main(argv: readonly string[], io: Io): Promise<number> {
       else line(e.name === null ? e.value.text : `${e.name} := ${e.value.text}`);
     } else if (e.event === "checked") {
       e.errors.forEach(printError);
-    } else if (e.event === "error" && e.index !== null) {
-      printError(e.error);
-    } else if (e.event === "error" && e.error.kind !== "parse" && e.error.kind !== "type") {
+    } else if (e.event === "error" && !(e.index === null && (e.error.kind === "parse" || e.error.kind === "type"))) {
+      // check errors were printed with the checked event
       printError(e.error);
     }
   };
 
-  const controller = new AbortController();
-  const interrupt = () => controller.abort();
-  io.on?.("SIGINT", interrupt);
-  try {
-    const outcome = await evaluate(source, [], { signal: controller.signal, onEvent });
-    return outcome.status === "ok" ? 0 : 1;
-  } finally {
-    io.off?.("SIGINT", interrupt);
-  }
+  // Ctrl-C keeps Node's default (end the process): the engine computes synchronously,
+  // so a signal handler could not run before the computation finished anyway.
+  const outcome = await evaluate(source, [], { onEvent });
+  return outcome.status === "ok" ? 0 : 1;
 }
