@@ -138,8 +138,8 @@ export class WorkerPool {
   }
 
   private spawn(index: number): Slot {
-    // Constructed indirectly so the bundler does not try to bundle the worker's files: they
-    // run from the source tree through tsx.
+    // Constructed indirectly so Next's bundler leaves the worker's files alone: the worker
+    // bundles its job from the source tree itself (worker-boot.mjs).
     const worker: Worker = Reflect.construct(Worker, [
       path.join(workerDirectory(), BOOT),
       {
