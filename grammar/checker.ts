@@ -28,7 +28,6 @@ import {
   T,
   typeToString,
   withArticle,
-  type FunctionType,
   type Type,
 } from "./types";
 
@@ -931,5 +930,3 @@ export function check(parsed: ParseResult, env: Env, source: string): Analysis {
     finalEnv: c.env(),
   };
 }
-
-export type { FunctionType };

@@ -38,7 +38,7 @@ const OPERAND_START = new Set<TokenType>([
 ]);
 
 /// How a token is named in a message.
-export function describeToken(t: IToken | undefined): string {
+function describeToken(t: IToken | undefined): string {
   if (!t || t.tokenType === EOF || t.tokenType === Tok.End) return "the end of the statement";
   if (t.image === "") return `\`${t.tokenType.LABEL?.replace(/`/g, "") ?? t.tokenType.name}\``;
   if (t.tokenType === Tok.IdealOpen) return "`<`";
