@@ -182,3 +182,21 @@ it("rings decoded from several objects are one ring, so their polynomials mix", 
   const b = decodeValue(encodeValue(S), { rings: reg });
   expect(a.type === "Poly" && a.ring).toBe(b);
 });
+
+it("Error: kind, message and a 1-based span, with type and text", async () => {
+  const { errorJson } = await import("@/lib/notation/errors");
+  const { ErrorJson } = await import("@/lib/notation/json");
+  const span = { from: { line: 1, col: 13, offset: 12 }, to: { line: 1, col: 14, offset: 13 } };
+  const e = errorJson("type", "burch_index expects a Ring, got Ideal — did you mean burch_index(S / I)?", span);
+  // the example of notation.md §8
+  expect(e).toEqual({
+    type: "Error",
+    text: "type error at 1:13-1:14: burch_index expects a Ring, got Ideal — did you mean burch_index(S / I)?",
+    kind: "type",
+    message: "burch_index expects a Ring, got Ideal — did you mean burch_index(S / I)?",
+    span: { from: { line: 1, col: 13 }, to: { line: 1, col: 14 } },
+  });
+  expect(ErrorJson.safeParse(e).success).toBe(true);
+  expect(ErrorJson.safeParse({ ...e, kind: "oops" }).success).toBe(false);
+  expect(ErrorJson.safeParse({ ...e, span: { from: { line: 0, col: 1 }, to: { line: 1, col: 1 } } }).success).toBe(false);
+});
