@@ -109,6 +109,11 @@ describe("ideals (notation.md §4)", () => {
     expect(await text("S := Q[x, y]\n<x^2 - y^2, x*y>.initial == <x^2, x*y, y^3>")).toBe("true");
   });
 
+  it("ℓ(S/(I + J)) = 3 for the two planes I and J = (x − z, y − w) (checks.md row 7, Serre 1965)", async () => {
+    const v = await values(`${S}J := <x - z, y - w>\nH := (S / (I + J)).hilbert\nH.values(4)\nsum(H.values(10))`);
+    expect(v.slice(4).map((x) => x.text)).toEqual(["[1, 2, 0, 0, 0]", "3"]);
+  });
+
   it("ideal(list) and the Burch ideal of m^2: B(m^p) = m^2 (checks.md row 8)", async () => {
     expect(await text("S := Q[x, y, z]\nm := S.maximal\nideal([x, y]) == <x, y>")).toBe("true");
     expect(await text("S := Q[x, y, z]\nm := S.maximal\n(m^3).burch == m^2")).toBe("true");
