@@ -59,6 +59,8 @@ pg_up() {
   local dir="$1" port="$2" pwfile="$3" extra="${4:-}"
   local sock="$dir.sock"
   install -d -o postgres -g postgres -m 755 "$sock"
+  run_pg test -x "$sock" 2>/dev/null \
+    || die "the postgres user cannot reach ${sock%/*}: every folder above it must be traversable (chmod o+x)"
   if [ ! -s "$dir/PG_VERSION" ]; then
     log "creating PostgreSQL cluster in ${dir#$ROOT/}"
     install -d -o postgres -g postgres -m 700 "$dir"

@@ -26,6 +26,10 @@ finish() {
   stop_pid "$WEB_PID"
   stop_pid "$SINK_PID"
   [ -d "$T/pg" ] && pg_down "$T/pg"
+  if { [ "$FAILED" -gt 0 ] || [ "$code" -ne 0 ]; } && [ -s "$T/web.log" ]; then
+    log "last lines of the test server's log:"
+    tail -n 30 "$T/web.log" >&2
+  fi
   rm -rf "$T"
   if [ "$SETUP_DONE" = 0 ]; then
     log "set-up failed before the tests could run"

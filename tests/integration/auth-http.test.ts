@@ -33,6 +33,9 @@ describe("sign-up, sign-in, protected API", () => {
     expect((await client.signIn(email, password)).status).toBe(200);
     expect(client.hasSession()).toBe(true);
 
+    const signInAgain = await client.request("/sign-in");
+    expect(new URL(signInAgain.headers.get("location") ?? "/sign-in", client.base).pathname).toBe("/");
+
     const me = await client.request("/api/me");
     expect(me.status).toBe(200);
     expect(await me.json()).toMatchObject({ user: { email, name: "Flow Tester", siteRole: "member", teams: [] } });

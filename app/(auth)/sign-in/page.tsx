@@ -1,5 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { redirect } from "next/navigation";
+import { currentUser } from "@/lib/auth/current-user";
 import { safeCallback } from "../safe-callback";
 import { SignInForm } from "./sign-in-form";
 
@@ -7,6 +9,7 @@ export const metadata: Metadata = { title: "Sign in · Ringside" };
 
 export default async function SignInPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const params = await searchParams;
+  if (await currentUser()) redirect(safeCallback(params.callbackUrl));
   const error = typeof params.error === "string" ? params.error : null;
   return (
     <>

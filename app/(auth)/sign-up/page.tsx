@@ -1,11 +1,14 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { redirect } from "next/navigation";
+import { currentUser } from "@/lib/auth/current-user";
 import { PASSWORD_RULE } from "@/lib/auth/password";
 import { SignUpForm } from "./sign-up-form";
 
 export const metadata: Metadata = { title: "Create an account · Ringside" };
 
-export default function SignUpPage() {
+export default async function SignUpPage() {
+  if (await currentUser()) redirect("/");
   return (
     <>
       <h1 className="mb-4 text-lg font-semibold">Create an account</h1>
