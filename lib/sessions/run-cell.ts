@@ -53,6 +53,9 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
             return send(event);
           case "error":
             failure = event.error;
+            // The evaluator sees any stop as a cancel; whether it was the user or the time
+            // limit is known only when the job ends, so that error is sent then.
+            if (event.error.kind === "cancelled") return;
             return send(event);
           default:
             return send(event);
@@ -78,8 +81,9 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
       // A stop that the job did not report itself becomes the cell's error, placed at the
       // statement that was running.
       const running = results.length;
-      const at = spans[running] ?? spans[spans.length - 1] ?? WHOLE_CELL;
-      if (!failure && end.status !== "finished") {
+      const reported = failure as ErrorValue | null;
+      const at = reported?.span ?? spans[running] ?? spans[spans.length - 1] ?? WHOLE_CELL;
+      if (end.status !== "finished" && (!reported || reported.kind === "cancelled")) {
         failure =
           end.status === "cancelled"
             ? errorValue("cancelled", "the computation was cancelled", at)
@@ -87,6 +91,8 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
               ? errorValue("limit", end.message, at)
               : errorValue("runtime", end.message, at);
         send({ event: "error", statement: running, error: failure });
+      } else if (reported?.kind === "cancelled") {
+        send({ event: "error", statement: running, error: reported });
       }
       const status: CellOutcome["status"] =
         end.status === "cancelled" || (failure as ErrorValue | null)?.kind === "cancelled" ? "cancelled" : failure ? "error" : "done";
