@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { ideal, neg, parsePoly, QQ, type Poly, zero } from "@/lib/algebra";
-import { resolveCoker, resolveQuotient, syzygyPresentation } from "@/lib/algebra/resolution";
+import { ideal, idealHilbertSeries, neg, parsePoly, QQ, type Poly, zero } from "@/lib/algebra";
+import { resolutionHilbertSeries, resolveCoker, resolveQuotient, syzygyPresentation } from "@/lib/algebra/resolution";
 import { expectMinimalComplex, GF, randomForm, ringOf, rng, vars } from "./resolution-helpers";
 
 describe("resolutions of cokernels of homogeneous matrices", () => {
@@ -85,5 +85,25 @@ describe("syzygy modules and minimal presentations", () => {
       const shifted = M.betti.entries.filter(([i]) => i >= p).map(([i, j, b]) => [i - p, j, b]);
       expect(S.betti.entries).toEqual(shifted);
     }
+  });
+});
+
+describe("Hilbert series of modules from their resolutions", () => {
+  it("coker [f_1 … f_m] has the Hilbert series of S/(f_1, …, f_m); a direct sum adds them", () => {
+    // The ideal's series comes from lib/algebra's initial-ideal computation (Macaulay), an
+    // independent route; Hilbert series are additive on direct sums (common practice).
+    const rand = rng(501);
+    const R = ringOf(GF, 4);
+    const f = Array.from({ length: 3 }, () => randomForm(R, 2, 3, rand));
+    const g = [randomForm(R, 3, 4, rand)];
+    const HI = idealHilbertSeries(ideal(R, f)), HJ = idealHilbertSeries(ideal(R, g));
+    expect(resolutionHilbertSeries(resolveCoker(R, [f])).numerator).toEqual(HI.numerator);
+    const rows = [[...f, zero(R)], [zero(R), zero(R), zero(R), ...g]];
+    const sum = resolutionHilbertSeries(resolveCoker(R, rows));
+    const n = Math.max(HI.numerator.length, HJ.numerator.length);
+    const add = Array.from({ length: n }, (_, k) => (HI.numerator[k] ?? 0n) + (HJ.numerator[k] ?? 0n));
+    while (add.length > 0 && add[add.length - 1] === 0n) add.pop();
+    expect(sum.numerator).toEqual(add);
+    expect(sum.dimension).toBe(Math.max(HI.dimension, HJ.dimension));
   });
 });

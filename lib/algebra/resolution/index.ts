@@ -2,3 +2,4 @@ export { type BettiTable, type BettiColumn, bettiNumber, bettiTotals, bettiRegul
 export { type Resolution, type ResolveOptions, resolveQuotient, resolveCoker } from "./resolve";
 export { projectiveDimension, depthByAuslanderBuchsbaum, regularity } from "./invariants";
 export { type Presentation, syzygyPresentation } from "./syzygy";
+export { resolutionHilbertSeries } from "./hilbert";
