@@ -4,7 +4,7 @@
 import { randomBytes } from "node:crypto";
 import { and, asc, eq, sql } from "drizzle-orm";
 import { db } from "@/db/client";
-import { invitations, memberships, teams, users, type TeamRole } from "@/db/schema";
+import { invitations, memberships, sessions, shares, teams, users, type TeamRole } from "@/db/schema";
 import { requireTeamRole } from "@/lib/auth/access";
 import type { CurrentUser } from "@/lib/auth/types";
 import { HttpError, notFound } from "@/lib/http/errors";
@@ -78,7 +78,16 @@ export async function teamDetail(user: CurrentUser, teamId: string) {
           .where(and(eq(invitations.teamId, teamId), eq(invitations.status, "pending"), sql`${invitations.expiresAt} > now()`))
           .orderBy(asc(invitations.createdAt))
       : [];
+  // Sessions shared with the team (every member reads them, so every member sees the list).
+  const shared = await database
+    .select({ id: sessions.id, title: sessions.title, ownerName: users.displayName, role: shares.role, shareId: shares.id })
+    .from(shares)
+    .innerJoin(sessions, eq(sessions.id, shares.sessionId))
+    .innerJoin(users, eq(users.id, sessions.ownerId))
+    .where(eq(shares.teamId, teamId))
+    .orderBy(asc(sessions.title));
   return {
+    sharedSessions: shared,
     team: { id: team.id, slug: team.slug, name: team.name, description: team.description, createdAt: team.createdAt.toISOString() },
     role,
     members: members.map((m) => ({ ...m, since: m.since.toISOString() })),
