@@ -7,12 +7,21 @@ import { PoolBusyError, type JobEnd } from "@/lib/compute/pool";
 import type { CurrentUser } from "@/lib/auth/types";
 import { registerRunningCell } from "./cancel-channel";
 import { ENGINE_VERSION } from "./engine-version";
-import { currentRingOf, finishCell, listObjects, startCell, type CellOutcome } from "./store";
+import { abandonStaleCells, currentRingOf, finishCell, listObjects, startCell, type CellOutcome } from "./store";
 import { objectView } from "./views";
 
 const WHOLE_CELL: Span = { from: { line: 1, col: 1 }, to: { line: 1, col: 1 } };
 
+// Once per process: cells that outlived any time limit were left by a server that stopped.
+const holder = globalThis as typeof globalThis & { __ringsideStaleSwept?: boolean };
+async function sweepStaleCellsOnce(): Promise<void> {
+  if (holder.__ringsideStaleSwept) return;
+  holder.__ringsideStaleSwept = true;
+  await abandonStaleCells(cellLimits().timeLimitMs + 60_000).catch((error) => console.error("[ringside] stale cell sweep failed:", error));
+}
+
 export async function runCell(user: CurrentUser, sessionId: string, source: string): Promise<Response> {
+  await sweepStaleCellsOnce();
   const pool = cellPool();
   const bindings = (await listObjects(sessionId)).map((o) => ({ name: o.name, type: o.type, value: o.value }));
   const currentRing = await currentRingOf(sessionId);
