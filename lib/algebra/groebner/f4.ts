@@ -14,12 +14,23 @@ import { findReducer } from "./reduce";
 interface Row {
   /// Monomial ids (table order) while building, then column indices (increasing).
   cols: Int32Array;
-  vals: ArrayLike<number>;
+  vals: Float64Array;
 }
 
 /// Term hashes of a polynomial, computed once per polynomial (the hash is the same for all
 /// tables of the same number of variables).
 const termHashes = new WeakMap<Poly, Int32Array>();
+/// Coefficients as a Float64Array, so the inner loop reads one kind of array only.
+const coeffArrays = new WeakMap<Poly, Float64Array>();
+
+function coeffsOf(f: Poly): Float64Array {
+  let c = coeffArrays.get(f);
+  if (!c) {
+    c = Float64Array.from(f.c as number[]);
+    coeffArrays.set(f, c);
+  }
+  return c;
+}
 
 function hashesOf(table: MonoTable, f: Poly): Int32Array {
   let h = termHashes.get(f);
@@ -49,7 +60,7 @@ export const reduceF4: ReductionStep = <C>(...[R, batch, inputs, basis, opts, ti
     const ht = table.hash(t);
     const ids = new Int32Array(F.m.length);
     for (let k = 0; k < F.m.length; k++) ids[k] = table.productId(t, ht, F.m[k], hs[k]);
-    return { cols: ids, vals: F.c };
+    return { cols: ids, vals: coeffsOf(f) };
   };
   const addPairRow = (k: number, lcm: Mono) => {
     const e = elts[k];
@@ -132,7 +143,7 @@ export const reduceF4: ReductionStep = <C>(...[R, batch, inputs, basis, opts, ti
     }
     if (lead < 0) continue;
     checkLimit(opts, "maxTerms", nonzero, "a polynomial's number of terms");
-    const cols = new Int32Array(nonzero), vals = new Array<number>(nonzero);
+    const cols = new Int32Array(nonzero), vals = new Float64Array(nonzero);
     const inv = invOf(dense[lead], p);
     let k = 0;
     for (let c = lead; c < ncols; c++) {
@@ -143,7 +154,7 @@ export const reduceF4: ReductionStep = <C>(...[R, batch, inputs, basis, opts, ti
       dense[c] = 0;
     }
     pivotByCol[lead] = { cols, vals };
-    out.push({ m: Array.from(cols, (c) => table.monos[byOrder[c]]), c: vals as unknown as C[], sugar });
+    out.push({ m: Array.from(cols, (c) => table.monos[byOrder[c]]), c: Array.from(vals) as unknown as C[], sugar });
   }
   return out;
 };

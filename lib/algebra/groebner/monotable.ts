@@ -1,5 +1,7 @@
 import { HEAD, type Mono } from "../monomial/monomial";
 
+/// Read once: an imported binding may be a getter in transpiled code, too slow for hot loops.
+const H = HEAD;
 /// A hash table of monomials with a hash that is linear in the exponents, so the hash of a
 /// product t·m is the sum of the hashes and products can be looked up before they are
 /// allocated (common practice in matrix-based Gröbner basis codes).
@@ -22,7 +24,7 @@ export class MonoTable {
   hash(m: Mono): number {
     let h = 0;
     const w = this.weights;
-    for (let i = HEAD, len = m.length; i < len; i++) if (m[i] !== 0) h = (h + Math.imul(w[i - HEAD], m[i])) | 0;
+    for (let i = H, len = m.length; i < len; i++) if (m[i] !== 0) h = (h + Math.imul(w[i - H], m[i])) | 0;
     return h;
   }
 
@@ -42,7 +44,7 @@ export class MonoTable {
     r[0] = t[0] + m[0];
     r[1] = t[1] + m[1];
     r[2] = t[2] | m[2];
-    for (let i = HEAD; i < len; i++) r[i] = t[i] + m[i];
+    for (let i = H; i < len; i++) r[i] = t[i] + m[i];
     const id = this.monos.length;
     this.monos.push(r);
     this.hashes.push(h);
@@ -52,7 +54,7 @@ export class MonoTable {
   }
 
   private isProduct(e: Mono, t: Mono, m: Mono): boolean {
-    for (let i = HEAD, len = e.length; i < len; i++) if (e[i] !== t[i] + m[i]) return false;
+    for (let i = H, len = e.length; i < len; i++) if (e[i] !== t[i] + m[i]) return false;
     return true;
   }
 

@@ -2,6 +2,8 @@ import { HEAD, monoCoprime, monoDivides, monoLcm, type Mono, type MonoLayout } f
 import type { MonoCompare } from "../order/order";
 import type { Basis, Pair } from "./basis";
 
+/// Read once: an imported binding may be a getter in transpiled code, too slow for hot loops.
+const H = HEAD;
 /// How pairs are queued: the sugar strategy (smaller sugar first, then smaller lcm), or the
 /// normal strategy (smaller lcm first; B. Buchberger 1985), which does better in orders that
 /// do not compare degrees first, where sugar says little about the work.
@@ -16,7 +18,7 @@ export function pairBefore(o: PairOrder, a: Pair, b: Pair): number {
 }
 
 function lcmEquals(a: Mono, b: Mono, l: Mono): boolean {
-  for (let k = HEAD, len = l.length; k < len; k++) if ((a[k] > b[k] ? a[k] : b[k]) !== l[k]) return false;
+  for (let k = H, len = l.length; k < len; k++) if ((a[k] > b[k] ? a[k] : b[k]) !== l[k]) return false;
   return true;
 }
 

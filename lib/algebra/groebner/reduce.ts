@@ -1,19 +1,22 @@
 import { checkLimit, Ticker, type ComputeOptions } from "../options";
-import { monoDiv, monoDivides, monoMul, type Mono } from "../monomial/monomial";
+import { monoDiv, monoMul, type Mono } from "../monomial/monomial";
 import { asTyped, makePoly, type Poly } from "../poly/poly";
 import type { RingCtx } from "../poly/ring";
 import type { BasisElt, Reduced } from "./basis";
 import { Geobucket } from "./geobucket";
 
 /// A reducer: among the given elements, one whose leading monomial divides m (shortest first).
+/// The mask and degree tests are inlined: this is the hottest search of the engine.
 export function findReducer(elts: readonly BasisElt[], ids: readonly number[], m: Mono): number {
   let best = -1, bestLen = Infinity;
-  for (let k = 0; k < ids.length; k++) {
+  const mask = m[2], deg = m[1], len = m.length;
+  outer: for (let k = 0; k < ids.length; k++) {
     const e = elts[ids[k]];
-    if (monoDivides(e.lm, m) && e.poly.m.length < bestLen) {
-      best = ids[k];
-      bestLen = e.poly.m.length;
-    }
+    const lm = e.lm;
+    if ((lm[2] & ~mask) !== 0 || lm[1] > deg || e.poly.m.length >= bestLen) continue;
+    for (let i = 3; i < len; i++) if (lm[i] > m[i]) continue outer;
+    best = ids[k];
+    bestLen = e.poly.m.length;
   }
   return best;
 }

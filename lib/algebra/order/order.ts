@@ -1,6 +1,8 @@
 import { runtimeError } from "../errors";
 import { HEAD, type Mono } from "../monomial/monomial";
 
+/// Read once: an imported binding may be a getter in transpiled code, too slow for hot loops.
+const H = HEAD;
 /// Monomial orders. The first variable is the largest. "weights" compares w·e first and
 /// breaks ties by grevlex; grevlex and glex compare the grading's (weighted) degree first.
 export type OrderSpec =
@@ -13,7 +15,7 @@ export type OrderSpec =
 export type MonoCompare = (a: Mono, b: Mono) => number;
 
 function revlexTail(a: Mono, b: Mono): number {
-  for (let i = a.length - 1; i >= HEAD; i--) {
+  for (let i = a.length - 1; i >= H; i--) {
     const d = b[i] - a[i];
     if (d !== 0) return d;
   }
@@ -21,7 +23,7 @@ function revlexTail(a: Mono, b: Mono): number {
 }
 
 function lexTail(a: Mono, b: Mono): number {
-  for (let i = HEAD, len = a.length; i < len; i++) {
+  for (let i = H, len = a.length; i < len; i++) {
     const d = a[i] - b[i];
     if (d !== 0) return d;
   }

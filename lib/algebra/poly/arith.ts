@@ -4,6 +4,8 @@ import { checkLimit, checkpoint, type ComputeOptions } from "../options";
 import { asTyped, makePoly, Poly } from "./poly";
 import type { RingCtx } from "./ring";
 
+/// Read once: an imported binding may be a getter in transpiled code, too slow for hot loops.
+const H = HEAD;
 /// f + s·g by one merge of the two sorted term lists.
 export function addScaled<C>(R: RingCtx<C>, f: Poly, g: Poly, s: C): Poly {
   const F = asTyped<C>(f), G = asTyped<C>(g), K = R.K, cmp = R.cmp;
@@ -44,7 +46,7 @@ export function addScaled<C>(R: RingCtx<C>, f: Poly, g: Poly, s: C): Poly {
 export function mulTerm<C>(R: RingCtx<C>, f: Poly, s: C, t: Mono): Poly {
   const F = asTyped<C>(f), K = R.K;
   if (K.isZero(s)) return makePoly([], []);
-  const trivial = t.every((x, i) => i < HEAD || x === 0);
+  const trivial = t.every((x, i) => i < H || x === 0);
   const m = trivial ? [...F.m] : F.m.map((x) => monoMul(x, t));
   const c = K.isOne(s) ? [...F.c] : F.c.map((x) => K.mul(s, x));
   return makePoly(m, c);
@@ -91,7 +93,7 @@ function guardExponents(f: Poly, g: Poly): void {
   const a = f.m[0], b = g.m[0];
   if (!a || !b) return;
   let worst = 0;
-  for (let i = HEAD; i < a.length; i++) {
+  for (let i = H; i < a.length; i++) {
     let ea = 0, eb = 0;
     for (const t of f.m) if (t[i] > ea) ea = t[i];
     for (const t of g.m) if (t[i] > eb) eb = t[i];
@@ -130,7 +132,7 @@ export function powPoly<C>(R: RingCtx<C>, f: Poly, k: number, opts?: ComputeOpti
   if (f.m.length === 0) return f;
   if (f.m.length === 1) {
     const t = f.m[0];
-    for (let i = HEAD; i < t.length; i++) {
+    for (let i = H; i < t.length; i++) {
       if (t[i] * k >= MAX_EXPONENT) throw runtimeError("pow", `an exponent would exceed ${MAX_EXPONENT - 1}`);
     }
     let c = R.K.one;

@@ -3,11 +3,13 @@ import { HEAD, type Mono } from "../monomial/monomial";
 import { asTyped, type Poly } from "./poly";
 import type { RingCtx } from "./ring";
 
+/// Read once: an imported binding may be a getter in transpiled code, too slow for hot loops.
+const H = HEAD;
 /// The monomial as text: x^2*y, "" for 1.
 export function formatMono(vars: readonly string[], m: Mono): string {
   const parts: string[] = [];
   for (let i = 0; i < vars.length; i++) {
-    const e = m[HEAD + i];
+    const e = m[H + i];
     if (e === 1) parts.push(vars[i]);
     else if (e > 1) parts.push(`${vars[i]}^${e}`);
   }
