@@ -108,7 +108,8 @@ database_url() {
 node_ts() { (cd "$ROOT" && node --import tsx "$@"); }
 
 # build_if_stale: `next build` unless .next holds a build of exactly the current sources
-# (a hash over every tracked and untracked, not ignored, file outside node_modules).
+# (a hash over every tracked and untracked, not ignored, file outside tests/); fails
+# (status 1) when the build fails.
 source_hash() {
   (cd "$ROOT" && git ls-files -z -co --exclude-standard 2>/dev/null | grep -zv '^tests/' \
     | { xargs -0 -r sha256sum 2>/dev/null || true; } | sha256sum | cut -d' ' -f1)
@@ -125,7 +126,11 @@ build_if_stale() {
     return 0
   fi
   log "next build"
-  (cd "$ROOT" && NEXT_TELEMETRY_DISABLED=1 node node_modules/next/dist/bin/next build) || die "next build failed"
+  if ! (cd "$ROOT" && NEXT_TELEMETRY_DISABLED=1 node node_modules/next/dist/bin/next build); then
+    flock -u 8
+    log "next build failed"
+    return 1
+  fi
   # Hashed again after the build: next build itself may rewrite tsconfig.json.
   [ -n "$want" ] && source_hash >"$stamp"
   flock -u 8

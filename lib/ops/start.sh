@@ -55,7 +55,7 @@ node --import tsx lib/ops/smtp-sink.ts &
 SINK_PID=$!
 wait_port "$SMTP_PORT" 30 "$SINK_PID"
 
-build_if_stale
+build_if_stale || die "cannot serve without a production build"
 
 node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$WEB_PORT" &
 WEB_PID=$!
