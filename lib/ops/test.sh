@@ -89,7 +89,7 @@ if [ "$BUILD_OK" = 1 ]; then
   WEB_PID=$!
   wait_http "$NEXTAUTH_URL/sign-in" 60 "$WEB_PID"
 else
-  log "next build failed (counted as one failure); browser tests will not run"
+  log "without a build: counted as one failure, browser tests skipped"
   FAILED=$((FAILED + 1))
 fi
 SETUP_DONE=1
