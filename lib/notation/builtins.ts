@@ -15,7 +15,6 @@ import {
   hilbertFunctionValues,
   hilbertPolynomial,
   ideal as engineIdeal,
-  idealCodimension,
   idealDegree,
   idealDimension,
   idealHilbertSeries,

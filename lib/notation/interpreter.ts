@@ -142,14 +142,6 @@ export class Interpreter {
     return v.value;
   }
 
-  /// A small non-negative integer argument (an exponent, a degree, a count).
-  smallInt(v: Value, span: Span, what: string, max: number): number {
-    const n = this.int(v, span);
-    if (n < 0n) throw runtime(`${what} must be non-negative, got ${n}`, span);
-    if (n > BigInt(max)) throw limit(`${what} ${n} is beyond the limit ${max}`, span);
-    return Number(n);
-  }
-
   /// The ring polynomial, ideal and matrix literals are read in here.
   literalRing(f: Frame, span: Span): RingValue {
     if (!f.ring) throw runtime("there is no current ring: define one (S := Q[x, y]) or choose one with use", span);

@@ -150,6 +150,7 @@ const BINARY: Record<string, BinaryImpl> = {
     const f = toPoly(l, I.ring, c.leftSpan, c.interp.session.compute);
     return idealValue(I.ring, I.gens.map((g) => mul(I.ring.poly, f, g, c.interp.session.compute)), c.interp.session.compute);
   },
+  "Ideal * Poly": (l, r, c) => BINARY["Poly * Ideal"](r, l, { ...c, leftSpan: c.rightSpan, rightSpan: c.leftSpan }),
   "Matrix * Matrix": (l, r, c) => matrixProduct(matrix(l, c.leftSpan), matrix(r, c.rightSpan), c),
   "Poly * Matrix": (l, r, c) => {
     const A = matrix(r, c.rightSpan);
@@ -157,6 +158,7 @@ const BINARY: Record<string, BinaryImpl> = {
     const f = toPoly(l, A.ring, c.leftSpan, opts);
     return { type: "Matrix", ring: A.ring, rows: A.rows.map((row) => row.map((g) => reduceIn(A.ring, mul(A.ring.poly, f, g, opts), opts))), cols: A.cols };
   },
+  "Matrix * Poly": (l, r, c) => BINARY["Poly * Matrix"](r, l, { ...c, leftSpan: c.rightSpan, rightSpan: c.leftSpan }),
   "Int / Int": (l, r, c) => {
     if (intOf(r) === 0n) throw runtime("division by zero", c.rightSpan);
     return Rat(rational(intOf(l), intOf(r)));

@@ -136,11 +136,4 @@ export type Value =
   | TableValue
   | { readonly type: "None" };
 
-export type ValueOf<T extends Value["type"]> = Extract<Value, { type: T }>;
-
-export const NONE: Value = { type: "None" };
-export const int = (value: bigint): Value => ({ type: "Int", value });
-export const bool = (value: boolean): Value => ({ type: "Bool", value });
-export const str = (value: string): Value => ({ type: "Str", value });
 export const list = (items: readonly Value[]): ListValue => ({ type: "List", items });
-export const record = (fields: Iterable<[string, Value]>): RecordValue => ({ type: "Record", fields: new Map(fields) });

@@ -80,9 +80,11 @@ describe("ideals (notation.md §4)", () => {
         "<x> <= <x, y>",
         "<x, y> ⊆ <x>",
         "<x, y> != <x>",
+        "x * <y> == <x*y>",
+        "<y> * x == <x*y>",
       ].join("\n"),
     );
-    expect(v.slice(1).map((x) => x.text)).toEqual(["true", "true", "true", "true", "true", "true", "true", "true", "false", "true"]);
+    expect(v.slice(1).map((x) => x.text)).toEqual(["true", "true", "true", "true", "true", "true", "true", "true", "false", "true", "true", "true"]);
   });
 
   it("saturation: (x^2, x*y) : m^∞ = (x), since (x^2, xy) = (x) ∩ (x^2, y) (common practice)", async () => {
@@ -196,8 +198,8 @@ describe("numbers, lists, records, functions", () => {
   });
 
   it("matrices: literals, sum, product, transpose, shape and entries", async () => {
-    const v = await values("S := Q[x, y, z, w]\nA := [x, y; z, w]\nA * A\nA + A\nA.t\nA.rows\nmatrix([x, y, z], [y, z, w]).cols\nA.entries");
-    expect(v.slice(2).map((x) => x.text)).toEqual(["[x^2+y*z, x*y+y*w; x*z+z*w, y*z+w^2]", "[2*x, 2*y; 2*z, 2*w]", "[x, z; y, w]", "2", "3", "<x, y, z, w>"]);
+    const v = await values("S := Q[x, y, z, w]\nA := [x, y; z, w]\nA * A\nA + A\nA.t\nA.rows\nmatrix([x, y, z], [y, z, w]).cols\nA.entries\nx * A == A * x");
+    expect(v.slice(2).map((x) => x.text)).toEqual(["[x^2+y*z, x*y+y*w; x*z+z*w, y*z+w^2]", "[2*x, 2*y; 2*z, 2*w]", "[x, z; y, w]", "2", "3", "<x, y, z, w>", "true"]);
   });
 });
 
