@@ -157,24 +157,24 @@ export function linkUrl(base: string, session: SessionRow): string | null {
     : null;
 }
 
-export async function listSessionShares(user: CurrentUser, sessionId: string, base: string) {
-  const session = await requireSharingManager(user, sessionId);
+export async function listSessionShares(user: CurrentUser, sessionId: string, base: string, linkToken?: string | null) {
+  const session = await requireSharingManager(user, sessionId, linkToken);
   return { shares: await sharesOf({ sessionId }), link: { url: linkUrl(base, session) }, teamId: session.teamId, visibility: session.visibility };
 }
 
-export async function shareSession(user: CurrentUser, sessionId: string, grantee: Grantee, role: ShareRole, address: string) {
-  const session = await requireSharingManager(user, sessionId);
+export async function shareSession(user: CurrentUser, sessionId: string, grantee: Grantee, role: ShareRole, address: string, linkToken?: string | null) {
+  const session = await requireSharingManager(user, sessionId, linkToken);
   return upsertShare(user, { sessionId }, grantee, role, session.ownerId, address);
 }
 
-export async function unshareSession(user: CurrentUser, sessionId: string, shareId: string, address: string) {
-  await requireSharingManager(user, sessionId);
+export async function unshareSession(user: CurrentUser, sessionId: string, shareId: string, address: string, linkToken?: string | null) {
+  await requireSharingManager(user, sessionId, linkToken);
   await deleteShare(user, { sessionId }, shareId, address);
 }
 
 /// Publishes the session as a read-only link (idempotent: an existing link is returned).
-export async function publishLink(user: CurrentUser, sessionId: string, base: string, address: string) {
-  await requireSharingManager(user, sessionId);
+export async function publishLink(user: CurrentUser, sessionId: string, base: string, address: string, linkToken?: string | null) {
+  await requireSharingManager(user, sessionId, linkToken);
   return db().transaction(async (tx) => {
     const [session] = await tx.select().from(sessions).where(eq(sessions.id, sessionId)).for("update");
     if (session!.visibility === "link" && session!.shareToken) return { url: linkUrl(base, session!)!, created: false };
@@ -190,8 +190,8 @@ export async function publishLink(user: CurrentUser, sessionId: string, base: st
 
 /// Revokes the link: its token stops working at once. The session goes back to team
 /// visibility when it has a team, else private.
-export async function revokeLink(user: CurrentUser, sessionId: string, address: string) {
-  await requireSharingManager(user, sessionId);
+export async function revokeLink(user: CurrentUser, sessionId: string, address: string, linkToken?: string | null) {
+  await requireSharingManager(user, sessionId, linkToken);
   return db().transaction(async (tx) => {
     const [session] = await tx.select().from(sessions).where(eq(sessions.id, sessionId)).for("update");
     if (session!.visibility !== "link" && session!.shareToken === null) throw new HttpError(404, "no_link", "This session has no published link.");
@@ -245,24 +245,24 @@ export async function requireObjectAccess(user: CurrentUser, objectId: string, o
   return { object: found.object, session: found.session, role: found.role };
 }
 
-async function requireObjectManager(user: CurrentUser, objectId: string) {
-  const { object, session } = await requireObjectAccess(user, objectId);
+async function requireObjectManager(user: CurrentUser, objectId: string, linkToken?: string | null) {
+  const { object, session } = await requireObjectAccess(user, objectId, { linkToken });
   if (!(await canManageSharing(user, session))) throw forbidden("Only the session's owner or a lead of its team shares its objects.");
   return { object, session };
 }
 
-export async function listObjectShares(user: CurrentUser, objectId: string) {
-  await requireObjectManager(user, objectId);
+export async function listObjectShares(user: CurrentUser, objectId: string, linkToken?: string | null) {
+  await requireObjectManager(user, objectId, linkToken);
   return sharesOf({ objectId });
 }
 
-export async function shareObject(user: CurrentUser, objectId: string, grantee: Grantee, role: ShareRole, address: string) {
-  const { session } = await requireObjectManager(user, objectId);
+export async function shareObject(user: CurrentUser, objectId: string, grantee: Grantee, role: ShareRole, address: string, linkToken?: string | null) {
+  const { session } = await requireObjectManager(user, objectId, linkToken);
   return upsertShare(user, { objectId }, grantee, role, session.ownerId, address);
 }
 
-export async function unshareObject(user: CurrentUser, objectId: string, shareId: string, address: string) {
-  await requireObjectManager(user, objectId);
+export async function unshareObject(user: CurrentUser, objectId: string, shareId: string, address: string, linkToken?: string | null) {
+  await requireObjectManager(user, objectId, linkToken);
   await deleteShare(user, { objectId }, shareId, address);
 }
 

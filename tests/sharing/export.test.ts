@@ -5,7 +5,7 @@
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeDb, db } from "@/db/client";
-import { sessions } from "@/db/schema";
+import { cells, namedObjects, sessions } from "@/db/schema";
 import { transcriptToLatex } from "@/lib/export/latex";
 import { transcriptToMarkdown } from "@/lib/export/markdown";
 import { bettiTabular, mathText } from "@/lib/export/tex";
@@ -86,7 +86,7 @@ describe("export and import over the API", () => {
   let sessionId = "";
 
   beforeAll(async () => {
-    await ensureTestGroup();
+    const group = await ensureTestGroup();
     expect((await owner.signIn(TEST_ACCOUNTS.lead.email, TEST_ACCOUNTS.lead.password)).status).toBe(200);
     expect((await other.signIn(TEST_ACCOUNTS.member.email, TEST_ACCOUNTS.member.password)).status).toBe(200);
     const r = await owner.json("/api/sessions", { title: "three points" });
@@ -95,8 +95,24 @@ describe("export and import over the API", () => {
       const events = await allEvents(await owner.json(`/api/sessions/${sessionId}/cells`, { source }));
       expect(events.at(-1)).toMatchObject({ event: "done", status: "done" });
     };
-    await run("S := Q[x, y, z]\nI := <x*y, y*z, x*z>");
-    await run("B := resolve(S / I).betti\nf := x^2 - 3/4*y*z");
+    await run("S := Q[x, y, z]\nI := <x*y, y*z, x*z>\nf := x^2 - 3/4*y*z");
+    // The exporter formats stored §9 JSON; the Betti table of S/I (three points of P²:
+    // β00 = 1, β12 = 3, β23 = 2) is stored as a finished cell would store it.
+    const betti = { type: "BettiTable", text: "Betti numbers β(0,0)=1, β(1,2)=3, β(2,3)=2", entries: [[0, 0, 1], [1, 2, 3], [2, 3, 2]], complete: true };
+    const span = { from: { line: 1, col: 1 }, to: { line: 1, col: 26 } };
+    const [cell] = await db()
+      .insert(cells)
+      .values({
+        sessionId,
+        position: 1,
+        source: "B := resolve(S / I).betti",
+        status: "done",
+        result: { statements: [{ statement: 0, span, value: betti }], currentRing: "S" },
+        finishedAt: new Date(),
+        durationMs: 3,
+      })
+      .returning();
+    await db().insert(namedObjects).values({ sessionId, ownerId: group.users.lead.id, name: "B", type: "BettiTable", value: betti, source: "B := resolve(S / I).betti", sourceCellId: cell!.id });
   }, 120_000);
   afterAll(() => closeDb());
 
