@@ -20,7 +20,7 @@ import { KeyboardHelp } from "./views/keyboard-help";
 import { Modal } from "./views/modal";
 import { SessionsPanel } from "./views/sessions-panel";
 import { Shelf } from "./views/shelf";
-import { buttonPrimary, buttonSecondary, kbd, panelHeading } from "./views/styles";
+import { buttonPrimary, buttonSecondary, focusRing, kbd, panelHeading } from "./views/styles";
 import { EmptySessionWelcome, TourList } from "./views/tour";
 
 type DialogName = "history" | "tour" | "help" | null;
@@ -322,7 +322,7 @@ export function Console({ initialSessionId }: { initialSessionId: string | null 
           </span>
         </div>
 
-        <section aria-label="Transcript" className="min-h-0 flex-1 overflow-y-auto px-4">
+        <section aria-label="Transcript" tabIndex={0} className={`min-h-0 flex-1 overflow-y-auto px-4 ${focusRing}`}>
           {data.sessionError && <p role="alert" className="py-3 text-sm text-red-700 dark:text-red-300">{data.sessionError}</p>}
           {data.cellsError && !data.sessionError && <p role="alert" className="py-3 text-sm text-red-700 dark:text-red-300">{data.cellsError}</p>}
           {empty && <EmptySessionWelcome onInsert={insertExample} onOpenTour={() => setDialog("tour")} canRun={canEdit} />}
