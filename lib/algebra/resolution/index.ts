@@ -3,3 +3,4 @@ export { type Resolution, type ResolveOptions, resolveQuotient, resolveCoker } f
 export { projectiveDimension, depthByAuslanderBuchsbaum, regularity } from "./invariants";
 export { type Presentation, syzygyPresentation } from "./syzygy";
 export { resolutionHilbertSeries } from "./hilbert";
+export { type QuotientProperties, quotientProperties } from "./quotient";
