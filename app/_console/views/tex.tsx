@@ -1,6 +1,7 @@
 "use client";
 /// Typesets a TeX string with KaTeX; a string KaTeX rejects is shown as code instead.
 import katex from "katex";
+import "katex/dist/katex.min.css";
 import { useMemo } from "react";
 
 /// Inline or display maths from TeX; `label` is the plain text read out by assistive

@@ -40,8 +40,8 @@ export function EmptySessionWelcome({ onInsert, onOpenTour, canRun }: { onInsert
       <h2 className="text-lg font-semibold">An empty session</h2>
       <p className="text-sm">
         New to Ringside? Walk through the first steps of the Saltmarsh Syzygy Circle, a small research group studying
-        &ldquo;tideline ideals&rdquo;: products of neighbouring variables along a line. Each example can be inserted into the input and run
-        with Enter.
+        &ldquo;tideline ideals&rdquo;: products of neighbouring variables along a line.
+        {canRun ? " Each example can be inserted into the input and run with Enter." : " This session is read-only for you, so the examples are there to read."}
       </p>
       <div>
         <button type="button" className={buttonSecondary} onClick={onOpenTour}>
