@@ -1,0 +1,2 @@
+export { Echelon, kernelBasis, rankOf } from "./echelon";
+export { GradedQuotient, gradedQuotient, type SparseColumn } from "./piece";
