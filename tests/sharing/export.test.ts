@@ -81,8 +81,8 @@ describe("LaTeX of values", () => {
 });
 
 describe("export and import over the API", () => {
-  const owner = new TestClient(testAddress(70));
-  const other = new TestClient(testAddress(71));
+  const owner = new TestClient(testAddress(190));
+  const other = new TestClient(testAddress(191));
   let sessionId = "";
 
   beforeAll(async () => {

@@ -12,8 +12,8 @@ import { TEST_ACCOUNTS, ensureTestGroup, uniqueEmail } from "../helpers/fixtures
 import { testEnv } from "../helpers/env";
 import { TestClient, testAddress } from "../helpers/http";
 
-const lead = new TestClient(testAddress(60));
-const wrong = new TestClient(testAddress(61));
+const lead = new TestClient(testAddress(180));
+const wrong = new TestClient(testAddress(181));
 let teamId = "";
 
 async function signUp(client: TestClient, email: string, password = "invitee-pass-4412") {
@@ -67,7 +67,7 @@ describe("invitations", () => {
     expect(JSON.stringify(row)).not.toContain(token);
 
     // the link in the mail opens the accept page for a signed-in invitee
-    const invitee = new TestClient(testAddress(62));
+    const invitee = new TestClient(testAddress(182));
     await signUp(invitee, email);
     const link = new URL(/https?:\/\/\S+\/invitations\/\S+/.exec(mail.text)![0]);
     const page = await invitee.request(link.pathname);
@@ -104,7 +104,7 @@ describe("invitations", () => {
     const invitation = await invite(email);
     const token = tokenFrom((await mailTo(email)).text);
     await db().update(invitations).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(invitations.id, invitation.id));
-    const invitee = new TestClient(testAddress(63));
+    const invitee = new TestClient(testAddress(183));
     await signUp(invitee, email);
     const r = await invitee.request(`/api/invitations/${token}/accept`, { method: "POST" });
     expect(r.status).toBe(410);
@@ -123,7 +123,7 @@ describe("invitations", () => {
     expect(revoke.status).toBe(200);
     const again = await lead.request(`/api/teams/${teamId}/invitations/${first.id}`, { method: "DELETE" });
     expect(again.status).toBe(409);
-    const invitee = new TestClient(testAddress(64));
+    const invitee = new TestClient(testAddress(184));
     await signUp(invitee, email);
     const r = await invitee.request(`/api/invitations/${firstToken}/accept`, { method: "POST" });
     expect(r.status).toBe(410);
@@ -155,7 +155,7 @@ describe("invitations", () => {
     const email = uniqueEmail("second");
     await invite(email);
     const token = tokenFrom((await mailTo(email)).text);
-    const second = new TestClient(testAddress(65));
+    const second = new TestClient(testAddress(185));
     await signUp(second, email);
     expect((await second.request(`/api/invitations/${token}/accept`, { method: "POST" })).status).toBe(200);
     const secondId = ((await (await second.request("/api/me")).json()) as { user: { id: string } }).user.id;

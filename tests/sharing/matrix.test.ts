@@ -239,7 +239,7 @@ async function exportedMethods(file: string): Promise<string[]> {
 let world: World;
 
 beforeAll(async () => {
-  world = await makeWorld(40);
+  world = await makeWorld(160);
 }, 60_000);
 afterAll(() => closeDb());
 
