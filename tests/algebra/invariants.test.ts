@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { formatPoly, ideal, isZero, parsePoly, QQ, type Poly, type PolyRing } from "@/lib/algebra";
-import { det, koszulComplex, minors, pfaffians, serreMultiplicity, torLengths, torLengthsOf } from "@/lib/algebra/invariants";
+import { det, isRegularSequence, koszulComplex, minors, pfaffians, serreMultiplicity, torLengths, torLengthsOf } from "@/lib/algebra/invariants";
 import { bettiTotals, resolveCoker, resolveQuotient } from "@/lib/algebra/resolution";
 import { alternating, genericMatrix, GF, matMul, randomForm, ringOf, rng, vars } from "./resolution-helpers";
 
@@ -68,6 +68,18 @@ describe("Koszul complexes", () => {
     const C = resolveQuotient(ideal(R, fs));
     const fromKoszul = K.degrees.flatMap((ds, i) => [...new Set(ds)].map((d) => [i, d, ds.filter((x) => x === d).length]));
     expect(C.betti.entries).toEqual(fromKoszul.sort((a, b) => a[0] - b[0] || a[1] - b[1]));
+  });
+});
+
+describe("regular sequences", () => {
+  it("x², y² + xz, z³ is regular; xy, xz is not; the variables are", () => {
+    // (xy, xz) ⊂ (x) has codimension 1 < 2; x², y² + xz, z³ define the origin (codimension 3)
+    // (common practice).
+    const R = ringOf(GF, 3);
+    const p = (xs: string[]) => xs.map((s) => parsePoly(R, s));
+    expect(isRegularSequence(R, p(["x1^2", "x2^2+x1*x3", "x3^3"]))).toBe(true);
+    expect(isRegularSequence(R, p(["x1*x2", "x1*x3"]))).toBe(false);
+    expect(isRegularSequence(R, vars(R))).toBe(true);
   });
 });
 

@@ -1,4 +1,4 @@
 export { minors, det } from "./minors";
 export { pfaffians } from "./pfaffians";
 export { torLengths, torLengthsOf, serreMultiplicity, serreMultiplicityOf, quotientPresentation } from "./tor";
-export { koszulComplex, type FreeComplex } from "./koszul";
+export { koszulComplex, isRegularSequence, type FreeComplex } from "./koszul";

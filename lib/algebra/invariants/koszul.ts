@@ -1,5 +1,6 @@
 import { runtimeError } from "../errors";
-import { degree, isZero, neg, zero, type Poly, type PolyRing } from "../index";
+import { degree, ideal, idealCodimension, isHomogeneous, isZero, neg, zero, type Poly, type PolyRing } from "../index";
+import type { ComputeOptions } from "../options";
 
 /// A complex of graded free modules F_0 ← F_1 ← … ← F_length given by its differentials.
 export interface FreeComplex {
@@ -18,7 +19,7 @@ function subsetsOf(n: number, k: number): number[][] {
 }
 
 /// The Koszul complex K(f_1..f_n): F_i = ∧^i S^n with basis e_T (|T| = i, T increasing),
-/// d(e_T) = Σ_k (−1)^k f_{t_k} e_{T∖t_k} (common practice; Eisenbud, Commutative Algebra, §17.2).
+/// d(e_T) = Σ_k (−1)^k f_{t_k} e_{T∖t_k} (common practice).
 /// The f must be homogeneous; F_i is graded by deg e_T = Σ_{t ∈ T} deg f_t.
 export function koszulComplex(R: PolyRing, fs: readonly Poly[]): FreeComplex {
   const n = fs.length;
@@ -45,4 +46,16 @@ export function koszulComplex(R: PolyRing, fs: readonly Poly[]): FreeComplex {
       return A;
     },
   });
+}
+
+/// Whether homogeneous f_1..f_c of positive degree form a regular sequence: in the polynomial
+/// ring (Cohen–Macaulay) this holds exactly when codim (f_1..f_c) = c, and then the Koszul
+/// complex K(f) is exact (common practice).
+export function isRegularSequence(R: PolyRing, fs: readonly Poly[], opts?: ComputeOptions): boolean {
+  fs.forEach((f, k) => {
+    if (isZero(f) || !isHomogeneous(R, f) || degree(R, f) <= 0) {
+      throw runtimeError("isRegularSequence", `element ${k + 1} is not a homogeneous form of positive degree`);
+    }
+  });
+  return idealCodimension(ideal(R, [...fs]), opts) === fs.length;
 }
