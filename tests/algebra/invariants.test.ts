@@ -59,7 +59,7 @@ describe("Tor lengths and Serre's intersection multiplicity", () => {
 
 describe("Koszul complexes", () => {
   it("on a regular sequence the Koszul complex is the minimal resolution", () => {
-    // The Koszul complex on a regular sequence is exact (Eisenbud, Commutative Algebra, Cor. 17.5).
+    // The Koszul complex on a regular sequence is exact (Eisenbud, Commutative Algebra, Cor. 17.5, from memory).
     const R = ringOf(GF, 3);
     const fs = ["x1^2", "x2^2+x1*x3", "x3^3"].map((s) => parsePoly(R, s));
     const K = koszulComplex(R, fs);

@@ -62,7 +62,7 @@ describe("Gröbner bases of submodules", () => {
 describe("Hilbert series of modules", () => {
   it("from the leading terms of a Gröbner basis equals the alternating Betti sum of the resolution", () => {
     // Two routes: Macaulay's theorem for F/U versus Hilbert's syzygy theorem on the minimal
-    // resolution (Eisenbud, The Geometry of Syzygies, Cor. 1.2).
+    // resolution (Eisenbud, The Geometry of Syzygies, Ch. 1, from memory).
     const rand = rng(44);
     for (let t = 0; t < 4; t++) {
       const R = ringOf(t % 2 ? QQ : GF, 3);

@@ -35,7 +35,7 @@ function randomIdeal(seed: number, F = GF): Ideal {
 
 /// depth S/I as the length of a maximal regular sequence of random linear forms: over a large
 /// field a general linear form is a nonzerodivisor on a graded module of positive depth
-/// (common practice; Eisenbud, Commutative Algebra, §18.2). Independent of any resolution.
+/// (common practice). Independent of any resolution.
 function depthByRegularSequence(I: Ideal, seed: number): number {
   const R = I.ring;
   const rand = rng(seed);
@@ -52,7 +52,7 @@ function depthByRegularSequence(I: Ideal, seed: number): number {
 describe("internal consistency of minimal resolutions on random ideals", () => {
   it("Σ_i (−1)^i Σ_j β_{i,j} t^j is the Hilbert series numerator", () => {
     // The Hilbert series of S/I is Σ (−1)^i β_{i,j} t^j / ∏ (1 − t^{deg x_k}) (Hilbert's syzygy
-    // theorem; D. Eisenbud, The Geometry of Syzygies, Cor. 1.2). The numerator comes from
+    // theorem; D. Eisenbud, The Geometry of Syzygies, Ch. 1, from memory). The numerator comes from
     // lib/algebra's Hilbert series of the initial ideal, an independent computation.
     for (let seed = 1; seed <= 12; seed++) {
       const I = randomIdeal(seed);
@@ -73,7 +73,7 @@ describe("internal consistency of minimal resolutions on random ideals", () => {
   });
 
   it("β_{i,j}(S/I) ≤ β_{i,j}(S/in(I)) (upper semicontinuity under Gröbner degeneration)", () => {
-    // D. Eisenbud, Commutative Algebra, Thm. 15.17 and the remark after it (common practice).
+    // Gröbner degeneration is a flat family and Betti numbers are upper semicontinuous (common practice).
     for (let seed = 40; seed <= 47; seed++) {
       const I = randomIdeal(seed);
       const C = resolveQuotient(I);

@@ -89,7 +89,7 @@ describe.each(FIELDS)("minimal resolutions over %s", (_name, F) => {
   });
 
   it("Hilbert–Burch: maximal minors of random (n+1)×n matrices of linear forms are resolved by 0 → S^n → S^{n+1} → S", () => {
-    // The Hilbert–Burch theorem (D. Eisenbud, Commutative Algebra, Thm. 20.15): for a
+    // The Hilbert–Burch theorem (D. Eisenbud, Commutative Algebra, Thm. 20.15, from memory): for a
     // codimension-2 ideal of maximal minors of an (n+1)×n matrix of linear forms the
     // resolution is 0 → S(−n−1)^n → S(−n)^{n+1} → S. Random linear forms in 4 variables give
     // codimension 2 for a generic choice.

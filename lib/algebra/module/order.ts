@@ -39,7 +39,7 @@ export function positionOverTerm(L: MonoLayout, r: number): ModuleOrder {
 
 /// The Schreyer order induced by elements g_1..g_s with leading terms u_l·e_{c_l} under O:
 /// m·e_l > n·e_k iff in(m·g_l) > in(n·g_k), or they are equal and l < k
-/// (D. Eisenbud, Commutative Algebra with a View Toward Algebraic Geometry, §15.5).
+/// (D. Eisenbud, Commutative Algebra with a View Toward Algebraic Geometry, Ch. 15).
 export function schreyerOrder(O: ModuleOrder, leads: readonly { mono: Mono; comp: number }[]): ModuleOrder {
   const s = leads.length;
   const idx = Array.from({ length: s }, (_, l) => l);

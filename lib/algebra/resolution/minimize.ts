@@ -105,7 +105,7 @@ export interface MinimalComplex {
 /// unit coefficient c on e_a, the complex is the direct sum of 0 → R·e_b → R·e_a → 0 and the
 /// complex with d_k' = d_k − (column b)·c^{−1}·(row a) restricted away from a and b,
 /// d_{k+1} without row b and d_{k−1} without column a (Gaussian elimination on complexes;
-/// La Scala–Stillman 1998, §5). Pivots of short row × column are taken first.
+/// La Scala–Stillman 1998). Pivots of short row × column are taken first.
 export function minimizeResolution<C>(R: RingCtx<C>, S: SchreyerResolution<C>, opts?: ComputeOptions): MinimalComplex {
   const top = S.cols.length - 1;
   const maps: SparseMap[] = [{ cols: new Map(), rows: new Map() }];
