@@ -99,30 +99,31 @@ export function resolveDegreewise<C>(req: ResolveRequest<C>): QuotientResolution
       checkpoint(opts, info);
       const dimF = F.dim(j);
       checkLimit(opts, "maxBasisSize", dimF, "a graded piece of the resolution");
+      // d_i maps F_i onto K_{i−1} (onto the module itself for i = 0).
+      const expected = dimF - (i === 0 ? target.dim(j) : (prevKernelDims.get(j) ?? 0));
       const P = new Echelon<C>(K, dimF);
-      for (let v = 0; v < R.n; v++) {
+      // Products beyond rank `expected` add nothing: they all lie in K_{i,j}.
+      products: for (let v = 0; v < R.n; v++) {
         const low = kernels.get(j - R.weights[v]);
         if (!low) continue;
         for (const b of low.rows) {
+          if (P.rank >= expected) break products;
           checkpoint(opts, info);
           P.insert(F.mulVar(v, j - R.weights[v], b));
         }
       }
-      // d_i maps F_i onto K_{i−1} (onto the module itself for i = 0).
-      const expected = dimF - (i === 0 ? target.dim(j) : (prevKernelDims.get(j) ?? 0));
       if (P.rank > expected) throw new AlgebraError("runtime", "resolution: internal inconsistency (syzygies exceed the kernel)");
-      const decomposable = new Echelon<C>(K, dimF);
-      for (const r of P.rows) decomposable.insert(r);
-      let found = 0;
+      let decomposable = P;
       if (P.rank < expected) {
+        if (req.inspect) {
+          decomposable = new Echelon<C>(K, dimF);
+          for (const r of P.rows) decomposable.insert(r);
+        }
         const ker = kernelBasis(K, target.dim(j), images.all(j), () => checkpoint(opts, info));
-        if (ker.length !== expected) throw new AlgebraError("runtime", `resolution: internal inconsistency (kernel dimension ${ker.length} != ${expected} at ${i},${j})`);
+        if (ker.length !== expected) throw new AlgebraError("runtime", "resolution: internal inconsistency (kernel dimension)");
         for (const z of ker) {
           if (P.rank === expected) break;
-          if (P.insert(z)) {
-            next.addGenerator(j, z);
-            found++;
-          }
+          if (P.insert(z)) next.addGenerator(j, z);
         }
       }
       kernels.set(j, P);
