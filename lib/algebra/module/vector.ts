@@ -1,4 +1,4 @@
-import { monoDiv, monoMul, type Mono } from "../monomial/monomial";
+import { monoMul, type Mono } from "../monomial/monomial";
 import { asTyped, type Poly } from "../poly/poly";
 import { polyFromTerms } from "../poly/arith";
 import type { RingCtx } from "../poly/ring";
@@ -29,11 +29,6 @@ export function vecFromPolys<C>(R: RingCtx<C>, O: ModuleOrder, entries: readonly
   };
 }
 
-/// Builds a vector from terms already sorted decreasingly in O.
-export function vecFromSortedTerms<C>(O: ModuleOrder, mono: Mono[], comp: number[], coef: C[]): Vec<C> {
-  return { mono, comp, coef, tot: mono.map((m, k) => monoMul(m, O.T[comp[k]])) };
-}
-
 /// The coordinates of v as r polynomials.
 export function vecToPolys<C>(R: RingCtx<C>, v: Vec<C>, r: number): Poly[] {
   const ms: Mono[][] = Array.from({ length: r }, () => []);
@@ -50,9 +45,4 @@ export function vecMonic<C>(R: RingCtx<C>, v: Vec<C>): Vec<C> {
   if (v.coef.length === 0 || R.K.isOne(v.coef[0])) return v;
   const s = R.K.inv(v.coef[0]);
   return { ...v, coef: v.coef.map((c) => R.K.mul(s, c)) };
-}
-
-/// The monomial of a term from its comparison monomial.
-export function termMono(O: ModuleOrder, tot: Mono, comp: number): Mono {
-  return monoDiv(tot, O.T[comp]);
 }
