@@ -94,7 +94,7 @@ export function gradedRank<C>(N: GradedModule<C>, A: readonly (readonly Poly[])[
     });
     rows.push(row);
   }
-  return scalarRank(K, rows);
+  return scalarRank(K, rows, opts);
 }
 
 function monoFromList<C>(R: RingCtx<C>, u: number[]): Mono {

@@ -10,7 +10,7 @@ import type { SchreyerResolution } from "./frame";
 /// The scalar part of d_k between basis elements of the same degree j: its rank is the
 /// number of generators of degree j cancelled between F_k and F_{k−1} by minimising, since
 /// β_{k,j} = dim H_k(F ⊗ k)_j and F ⊗ k has the scalar parts as differentials.
-export function scalarRanks<C>(R: RingCtx<C>, S: SchreyerResolution<C>, k: number): Map<number, number> {
+export function scalarRanks<C>(R: RingCtx<C>, S: SchreyerResolution<C>, k: number, opts?: ComputeOptions): Map<number, number> {
   const rowsByDegree = new Map<number, Map<number, Map<number, C>>>();
   const cols = S.cols[k] ?? [];
   cols.forEach((v, p) => {
@@ -25,7 +25,7 @@ export function scalarRanks<C>(R: RingCtx<C>, S: SchreyerResolution<C>, k: numbe
     }
   });
   const out = new Map<number, number>();
-  for (const [d, rows] of rowsByDegree) out.set(d, scalarRank(R.K, [...rows.values()]));
+  for (const [d, rows] of rowsByDegree) out.set(d, scalarRank(R.K, [...rows.values()], opts));
   return out;
 }
 

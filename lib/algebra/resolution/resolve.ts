@@ -79,7 +79,7 @@ function resolveFromBasis<C>(R: RingCtx<C>, degrees0: number[], O: ModuleOrder, 
   const ranks: Map<number, number>[] = [];
   // Column i is final once d_{i+1} is known: β_{i,j} = f_{i,j} − rk_{i,j} − rk_{i+1,j}.
   const onLevel = (S: SchreyerResolution<C>, k: number) => {
-    ranks[k] = scalarRanks(R, S, k);
+    ranks[k] = scalarRanks(R, S, k, opts);
     const i = k - 1;
     const count = new Map<number, number>();
     for (const d of S.degrees[i]) count.set(d, (count.get(d) ?? 0) + 1);

@@ -1,11 +1,13 @@
 import type { Coeffs } from "../field/coeffs";
+import { checkpoint, type ComputeOptions } from "../options";
 
 /// The rank of a matrix over the field, given as sparse rows (column → nonzero entry),
 /// by Gaussian elimination.
-export function scalarRank<C>(K: Coeffs<C>, rows: Map<number, C>[]): number {
+export function scalarRank<C>(K: Coeffs<C>, rows: Map<number, C>[], opts?: ComputeOptions): number {
   const pivots = new Map<number, Map<number, C>>();
   let rank = 0;
   for (const row0 of rows) {
+    checkpoint(opts, { stage: "rank", detail: `${rows.length} rows` });
     const row = new Map(row0);
     for (;;) {
       let lead = -1;
