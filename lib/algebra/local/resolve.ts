@@ -133,7 +133,7 @@ export function resolveDegreewise<C>(req: ResolveRequest<C>): QuotientResolution
     }
     const degs = next.degrees;
     const entries = countDegrees(degs);
-    const complete = plan.bound(i + 1) <= plan.D || (prevComplete && natural <= plan.D);
+    const complete: boolean = plan.bound(i + 1) <= plan.D || (prevComplete && natural <= plan.D);
     push({ index: i + 1, entries, total: degs.length, complete });
     prevComplete = complete;
     target = F;
@@ -216,7 +216,7 @@ interface DegreePlan {
 ///   cited from memory).
 /// * M of finite length with top degree s: Tor_i(M, k) is a subquotient of M ⊗ F_i(k), so
 ///   t_i(M) ≤ t_i(k) + s.
-function degreePlan<C>(S: PolyRing, R: GradedQuotient<C>, Q: GradedQuotient<C>, I: Ideal, n: number, degree?: number): DegreePlan {
+function degreePlan<C>(S: PolyRing, R: GradedQuotient<C>, Q: GradedQuotient<C>, I: Ideal, n: number, degreeBound?: number): DegreePlan {
   const standard = S.degrees.every((w) => w === 1);
   const g = Math.max(2, R.initialDegree);
   const s = Q.topDegree();
@@ -227,9 +227,9 @@ function degreePlan<C>(S: PolyRing, R: GradedQuotient<C>, Q: GradedQuotient<C>, 
     reason = "degrees bounded by the rate of R (Backelin) plus the top degree of the module";
   }
   if (R.isArtinian) reason = "R is Artinian: every graded piece beyond the computed ones is zero";
-  if (degree !== undefined) {
-    if (!Number.isInteger(degree) || degree < 0) throw new AlgebraError("runtime", "resolution: the degree bound must be a non-negative integer");
-    return { D: degree, bound, reason };
+  if (degreeBound !== undefined) {
+    if (!Number.isInteger(degreeBound) || degreeBound < 0) throw new AlgebraError("runtime", "resolution: the degree bound must be a non-negative integer");
+    return { D: degreeBound, bound, reason };
   }
   if (R.isArtinian) return { D: Infinity, bound, reason };
   if (bound(n) < Infinity) return { D: bound(n), bound, reason };
