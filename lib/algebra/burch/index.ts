@@ -1,0 +1,2 @@
+export { burchIdeal, burchIndexOfIdeal, burchIndexOfRing, type BurchIndex } from "./burch";
+export { cutByLinearForm } from "./substitute";
