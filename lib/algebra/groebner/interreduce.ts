@@ -18,8 +18,8 @@ export function interreduce<C>(R: RingCtx<C>, G: readonly Poly[], opts: ComputeO
   const elts: BasisElt[] = minimal.map((poly) => ({ poly, lm: poly.m[0], sugar: 0 }));
   const ticker = new Ticker(opts, () => ({ stage: "groebner", detail: "reducing the basis" }));
   const out: Poly[] = [];
-  // Increasing order: element k's tail only meets leading monomials of elements below it
-  // or incomparable ones, and the already reduced ones are used as reducers.
+  // Each tail is reduced by all other elements; finished elements replace their originals,
+  // which keeps the later reductions short. Leading monomials never change.
   for (let k = 0; k < elts.length; k++) {
     checkpoint(opts, { stage: "groebner", detail: `reducing the basis (${k}/${elts.length})` });
     const g = asTyped<C>(elts[k].poly);

@@ -8,6 +8,7 @@ import { makeMonic, reduceBucket } from "./reduce";
 
 /// The remainder of f on full reduction by G (the normal form when G is a Gröbner basis).
 export function normalFormCtx<C>(R: RingCtx<C>, f: Poly, G: readonly Poly[], opts?: ComputeOptions): Poly {
+  if (!Array.isArray(G)) throw runtimeError("normalForm", "G must be a list of polynomials");
   const elts: BasisElt[] = [];
   for (const g of G) {
     if (g.m.length === 0) continue;
@@ -15,7 +16,6 @@ export function normalFormCtx<C>(R: RingCtx<C>, f: Poly, G: readonly Poly[], opt
     const poly = makeMonic(R, [...T.m], [...T.c]);
     elts.push({ poly, lm: poly.m[0], sugar: 0 });
   }
-  if (!Array.isArray(G)) throw runtimeError("normalForm", "G must be a list of polynomials");
   const F = asTyped<C>(f);
   if (F.m.length === 0) return f;
   const bucket = new Geobucket(R);
