@@ -8,3 +8,4 @@ export {
 } from "./resolve";
 export { GradedFree } from "./free";
 export { residueFieldResolution, cyclicResolution, bettiTotalsOf, variablesOf } from "./residue";
+export { residueSplitsFromSyzygy } from "./summand";
