@@ -175,3 +175,6 @@ export function normalForm(R: PolyRing, f: Poly, G: readonly Poly[], opts?: Comp
 export * from "./hilbert";
 export * from "./ideal";
 export * from "./quotient";
+export * from "./module";
+export * from "./resolution";
+export * from "./invariants";
