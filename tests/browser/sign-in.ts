@@ -18,6 +18,8 @@ browserTest("signs in with a team account and sees the console shell", async ({ 
   }
   check((await page.getByTestId("user-name").textContent()) === account.name, "the header does not show the user's name");
   check(await page.getByRole("link", { name: "Sign out" }).isVisible(), "the header has no sign-out link");
+  const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+  check(overflow <= 0, `the console is ${overflow}px wider than the window`);
   await page.screenshot({ path: path.join(artifactsDir, "console-shell.png"), fullPage: true });
 });
 
