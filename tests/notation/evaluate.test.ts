@@ -203,6 +203,33 @@ describe("numbers, lists, records, functions", () => {
   });
 });
 
+describe("determinants, minors and Pfaffians (engine part 2, already landed)", () => {
+  it("det of a generic 2×2 matrix", async () => {
+    expect(await text("S := Q[x, y, z, w]\ndet([x, y; z, w]) == x*w - y*z")).toBe("true");
+  });
+
+  it("2×2 minors of [x, y, z; y, z, w]: the twisted cubic, Betti numbers 1, 3, 2 in degrees 0, 2, 3 (checks.md row 2)", async () => {
+    // so its Hilbert numerator is 1 − 3t^2 + 2t^3 (alternating sum of the Betti numbers)
+    const v = await values("S := Q[x, y, z, w]\nI := minors([x, y, z; y, z, w], 2)\nI.gens.length\nI.codim\nI.degree\nI.hilbert");
+    expect(v.slice(2, 5).map((x) => x.text)).toEqual(["3", "2", "3"]);
+    expect(v[5]).toMatchObject({ numerator: ["1", "0", "-3", "2"], denominator: "(1-t)^4" });
+  });
+
+  it("4×4 Pfaffians of the generic 5×5 alternating matrix: Betti numbers 1, 5, 5, 1 in degrees 0, 2, 3, 5 (checks.md row 9)", async () => {
+    // Buchsbaum–Eisenbud 1977: Gorenstein of codimension 3; numerator 1 − 5t^2 + 5t^3 − t^5
+    const A = "[0, a, b, c, d; -a, 0, e, f, g; -b, -e, 0, h, i; -c, -f, -h, 0, j; -d, -g, -i, -j, 0]";
+    const v = await values(`S := GF(32003)[a..j]\nI := pfaffians(${A}, 4)\nI.gens.length\nI.codim\nI.hilbert`);
+    expect(v.slice(2, 4).map((x) => x.text)).toEqual(["5", "3"]);
+    expect(v[4]).toMatchObject({ numerator: ["1", "0", "-5", "5", "0", "-1"], denominator: "(1-t)^10" });
+  });
+
+  it("bad sizes are runtime errors at the argument", async () => {
+    const out = await run("S := Q[x, y]\nk := 3\nminors(matrix([x, y]), k)");
+    expect(out.error).toMatchObject({ kind: "runtime", span: { from: { line: 3, col: 24 }, to: { line: 3, col: 25 } } });
+    expect((await run("S := Q[x, y]\ndet(matrix([x, y]))")).error?.message).toMatch(/square/);
+  });
+});
+
 describe("events and named objects", () => {
   it("checked, then one result per statement in order, partial items of a comprehension", async () => {
     const out = await run("S := Q[x]\n[x^i for i in 1..3]");

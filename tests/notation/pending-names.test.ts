@@ -10,9 +10,6 @@ import { pendingError } from "@/lib/notation/pending";
 
 /// Waiting for engine part 2 (modules, resolutions, Tor/Ext, depth, pd, regularity).
 const PART_2 = [
-  "det(Matrix)",
-  "minors(Matrix, Int)",
-  "pfaffians(Matrix, Int)",
   "coker(Matrix)",
   "image(Matrix)",
   "ker(Matrix)",
