@@ -2,6 +2,7 @@
 /// The command palette (Ctrl+K / ⌘K): every console command, searchable, grouped.
 /// Each command is also reachable without it (a button or a shortcut, shown beside it).
 import { Command } from "cmdk";
+import { useEffect, useRef } from "react";
 import { kbd } from "./styles";
 
 /// One command the palette offers.
@@ -28,6 +29,16 @@ export function CommandPalette({
   commands: readonly PaletteCommand[];
 }) {
   const groups = [...new Set(commands.map((c) => c.group))];
+  // The chosen command runs once the dialog has closed and given focus back to where it
+  // was (its own timer, set while closing); so a command that focuses the input keeps it.
+  const chosen = useRef<(() => void) | null>(null);
+  useEffect(() => {
+    if (open || !chosen.current) return;
+    const run = chosen.current;
+    chosen.current = null;
+    const timer = window.setTimeout(run, 0);
+    return () => window.clearTimeout(timer);
+  }, [open]);
   return (
     <Command.Dialog
       open={open}
@@ -56,8 +67,8 @@ export function CommandPalette({
                   value={`${c.group} ${c.label} ${c.id}`}
                   keywords={c.keywords ? [...c.keywords] : undefined}
                   onSelect={() => {
+                    chosen.current = c.run;
                     onOpenChange(false);
-                    c.run();
                   }}
                   className={itemClass}
                 >
