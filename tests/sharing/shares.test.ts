@@ -67,13 +67,21 @@ describe("session shares", () => {
     // the owner is not in that team: sharing with it is refused
     const refused = await w.clients.owner.json(`/api/sessions/${sessionId}/shares`, { teamId, role: "editor" });
     expect(refused.status).toBe(403);
-    const shared = await w.clients.owner.json(`/api/sessions/${sessionId}/shares`, { teamId: w.group.teamId, role: "editor" });
+    // the group's lead shares a session of theirs with the group
+    const own = await w.clients.lead.json("/api/sessions", { title: "lead's notes" });
+    const leadSession = ((await own.json()) as { id: string }).id;
+    const shared = await w.clients.lead.json(`/api/sessions/${leadSession}/shares`, { teamId: w.group.teamId, role: "editor" });
     expect(shared.status).toBe(201);
-    expect(await canEdit("member")).toBe("edit");
-    expect(await canEdit("guest")).toBe("read");
+    const access = async (who: "member" | "guest" | "outsider") => {
+      const r = await w.clients[who].request(`/api/sessions/${leadSession}`);
+      return r.status === 200 ? ((await r.json()) as { session: { access: string } }).session.access : r.status;
+    };
+    expect(await access("member")).toBe("editor");
+    expect(await access("guest")).toBe("viewer");
+    expect(await access("outsider")).toBe(404);
     const detail = (await (await w.clients.guest.request(`/api/teams/${w.group.teamId}`)).json()) as { sharedSessions: { id: string }[] };
-    expect(detail.sharedSessions.map((s) => s.id)).toContain(sessionId);
-    const run = await w.clients.guest.json(`/api/sessions/${sessionId}/cells`, { source: "1 + 1" });
+    expect(detail.sharedSessions.map((s) => s.id)).toContain(leadSession);
+    const run = await w.clients.guest.json(`/api/sessions/${leadSession}/cells`, { source: "1 + 1" });
     expect(run.status).toBe(403);
   });
 
