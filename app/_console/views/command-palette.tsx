@@ -36,8 +36,7 @@ export function CommandPalette({
     if (open || !chosen.current) return;
     const run = chosen.current;
     chosen.current = null;
-    const timer = window.setTimeout(run, 0);
-    return () => window.clearTimeout(timer);
+    window.setTimeout(run, 0);
   }, [open]);
   return (
     <Command.Dialog
