@@ -230,6 +230,25 @@ describe("determinants, minors and Pfaffians (engine part 2, already landed)", (
   });
 });
 
+describe("depth, Cohen–Macaulay, Gorenstein, complete intersection of S/J (engine part 2)", () => {
+  const props = ".depth, R.dim, R.is_cm, R.is_gorenstein, R.is_ci]";
+  it("a complete intersection k[x,y,z]/(x^2, y^3) is CM, Gorenstein and CI of depth 1 (common practice)", async () => {
+    expect(await text(`S := Q[x, y, z]\nR := S / <x^2, y^3>\n[R${props}`)).toBe("[1, 1, true, true, true]");
+  });
+
+  it("two planes meeting at a point: dimension 2 but depth 1, so not Cohen–Macaulay (Hartshorne's connectedness example; common practice)", async () => {
+    expect(await text(`S := Q[x, y, z, w]\nR := S / <x*z, x*w, y*z, y*w>\n[R${props}`)).toBe("[1, 2, false, false, false]");
+  });
+
+  it("the twisted cubic is arithmetically CM, not Gorenstein (last Betti number 2, checks.md row 2), not a CI", async () => {
+    expect(await text(`S := Q[x, y, z, w]\nR := S / minors([x, y, z; y, z, w], 2)\n[R${props}`)).toBe("[2, 2, true, false, false]");
+  });
+
+  it("a polynomial ring has depth n", async () => {
+    expect(await text("S := Q[x, y, z]\n[S.depth, S.is_cm]")).toBe("[3, true]");
+  });
+});
+
 describe("events and named objects", () => {
   it("checked, then one result per statement in order, partial items of a comprehension", async () => {
     const out = await run("S := Q[x]\n[x^i for i in 1..3]");
