@@ -41,8 +41,9 @@ browserTest("sharing: the lead shares a session with the group; a member reads i
   await signIn(page, baseUrl, "lead");
   await page.goto(`${baseUrl}/teams/${group.teamId}`);
   await page.getByTestId("my-team-role").filter({ hasText: "lead" }).waitFor();
-  await page.getByLabel("Share one of your sessions").selectOption({ label: title });
-  await page.getByLabel("As", { exact: true }).selectOption("editor");
+  const shared = page.getByRole("region", { name: "Shared sessions" });
+  await shared.getByRole("combobox", { name: "Share one of your sessions" }).selectOption({ label: title });
+  await shared.getByRole("combobox", { name: "Share as", exact: true }).selectOption("editor");
   await page.getByRole("button", { name: "Share with the team" }).click();
   await page.getByTestId("team-notice").filter({ hasText: "is shared with" }).waitFor();
   await page.getByRole("region", { name: "Shared sessions" }).getByRole("link", { name: title }).waitFor();

@@ -142,7 +142,7 @@ export function TeamView({ teamId, userId }: { teamId: string; userId: string })
             </label>
             <label className="flex flex-col text-sm">
               Role
-              <select className={inputClass} value={inviteRole} onChange={(e) => setInviteRole(e.target.value as "member" | "guest")}>
+              <select aria-label="Invitation role" className={inputClass} value={inviteRole} onChange={(e) => setInviteRole(e.target.value as "member" | "guest")}>
                 <option value="member">member</option>
                 <option value="guest">guest</option>
               </select>
@@ -205,7 +205,7 @@ export function TeamView({ teamId, userId }: { teamId: string; userId: string })
           >
             <label className="flex flex-col text-sm">
               Share one of your sessions
-              <select className={inputClass} required value={shareSession} onChange={(e) => setShareSession(e.target.value)}>
+              <select aria-label="Share one of your sessions" className={inputClass} required value={shareSession} onChange={(e) => setShareSession(e.target.value)}>
                 <option value="">choose a session…</option>
                 {own.map((s) => (
                   <option key={s.id} value={s.id}>
@@ -216,7 +216,7 @@ export function TeamView({ teamId, userId }: { teamId: string; userId: string })
             </label>
             <label className="flex flex-col text-sm">
               As
-              <select className={inputClass} value={shareRole} onChange={(e) => setShareRole(e.target.value as "viewer" | "editor")}>
+              <select aria-label="Share as" className={inputClass} value={shareRole} onChange={(e) => setShareRole(e.target.value as "viewer" | "editor")}>
                 <option value="editor">editor</option>
                 <option value="viewer">viewer</option>
               </select>
