@@ -1,0 +1,63 @@
+// Quotient-ring benchmarks (issue 6). Hook into the runner by adding `...quotientCases` to
+// the `cases` list in tests/bench/cases.ts (import { quotientCases } from "./quotient-cases").
+import * as A from "../../lib/algebra/index";
+import { burchIndexOfRing } from "../../lib/algebra/burch/index";
+import { bettiTotalsOf, residueFieldResolution } from "../../lib/algebra/local/index";
+import type { BenchCase } from "./cases";
+
+const F = A.gf(32003);
+
+function ring(n: number): A.PolyRing {
+  return A.polyRing(F, Array.from({ length: n }, (_, i) => `x${i + 1}`));
+}
+
+/// Park–Miller generator with a fixed seed, so every run benchmarks the same input.
+function seeded(seed: number): () => number {
+  let s = seed;
+  return () => (s = (s * 48271) % 2147483647);
+}
+
+/// A random form of degree d with coefficients in [−9, 9].
+function randomForm(S: A.PolyRing, d: number, next: () => number): A.Poly {
+  let f = A.zero(S);
+  const rec = (start: number, left: number, m: A.Poly) => {
+    if (left === 0) {
+      f = A.add(S, f, A.scale(S, m, BigInt((next() % 19) - 9)));
+      return;
+    }
+    for (let i = start; i < S.vars.length; i++) rec(i, left - 1, A.mul(S, m, A.variable(S, i)));
+  };
+  rec(0, d, A.one(S));
+  return f;
+}
+
+function residueCase(name: string, J: () => A.Ideal, length: number): BenchCase {
+  return {
+    name,
+    run: () => {
+      const totals = bettiTotalsOf(residueFieldResolution(J(), length));
+      return { size: totals.reduce((s, b) => s + b, 0), label: `Betti totals ${totals.join(",")}, sum` };
+    },
+  };
+}
+
+const maximal = (S: A.PolyRing) => A.ideal(S, S.vars.map((_, i) => A.variable(S, i)));
+
+export const quotientCases: BenchCase[] = [
+  residueCase("residue field over k[x1..x4]/(4 random quadrics), length 10", () => {
+    const S = ring(4);
+    const next = seeded(2026);
+    return A.ideal(S, [0, 1, 2, 3].map(() => randomForm(S, 2, next)));
+  }, 10),
+  residueCase("residue field over k[x,y,z]/m^3, length 8", () => A.idealPower(maximal(ring(3)), 3), 8),
+  {
+    name: "Burch index of a random m-primary ideal in 4 variables",
+    run: () => {
+      const S = ring(4);
+      const next = seeded(7);
+      const gens = [...[0, 1, 2, 3].map(() => randomForm(S, 2, next)), randomForm(S, 3, next)];
+      const r = burchIndexOfRing(A.ideal(S, gens));
+      return { size: r.index, label: "Burch index" };
+    },
+  },
+];
