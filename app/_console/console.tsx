@@ -273,7 +273,7 @@ export function Console({ initialSessionId }: { initialSessionId: string | null 
   const empty = cells !== undefined && cells.length === 0 && !running;
 
   return (
-    <div className="grid min-h-0 flex-1 grid-cols-[17rem_1fr] bg-paper text-ink dark:bg-night dark:text-paper">
+    <div className="grid min-h-0 flex-1 grid-cols-[17rem_minmax(0,1fr)] bg-paper text-ink dark:bg-night dark:text-paper">
       <aside className="flex min-h-0 flex-col gap-4 border-r border-ink/10 bg-paper-deep/40 p-3 dark:border-paper/10 dark:bg-night-panel">
         <SessionsPanel
           sessions={data.sessions}
@@ -285,7 +285,7 @@ export function Console({ initialSessionId }: { initialSessionId: string | null 
         <Shelf objects={objects} canEdit={canEdit} onInsert={insertName} onRename={renameOne} onDelete={deleteOne} />
       </aside>
 
-      <main className="flex min-h-0 flex-col">
+      <main className="flex min-h-0 min-w-0 flex-col">
         <div className="flex items-center gap-2 border-b border-ink/10 px-4 py-2 dark:border-paper/10">
           <h1 className="truncate text-sm font-semibold" data-testid="session-title">
             {data.session?.title ?? (sessionId ? "…" : "No session open")}
