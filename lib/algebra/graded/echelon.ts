@@ -9,10 +9,35 @@ export class Echelon<C> {
   /// Optional: for every row, the combination of inserted vectors it came from.
   readonly combos: C[][] = [];
 
+  /// Set for GF(p) with p < 2^26, where a·b + c is exact in a double: the hot loops then
+  /// use plain number arithmetic.
+  private readonly p: number;
+
   constructor(
     readonly K: Coeffs<C>,
     readonly dim: number,
-  ) {}
+  ) {
+    const F = K.field;
+    this.p = F.kind === "gf" && F.p < 1 << 26 ? F.p : 0;
+  }
+
+  /// w ← w − c·row over the field.
+  private axpy(w: C[], c: C, row: readonly C[]): void {
+    const K = this.K;
+    if (this.p) {
+      const p = this.p, nc = p - (c as number);
+      const ww = w as unknown as number[], rr = row as unknown as number[];
+      for (let k = 0; k < ww.length; k++) {
+        const a = rr[k];
+        if (a !== 0) ww[k] = (ww[k] + nc * a) % p;
+      }
+      return;
+    }
+    for (let k = 0; k < w.length; k++) {
+      const a = row[k];
+      if (!K.isZero(a)) w[k] = K.sub(w[k], K.mul(c, a));
+    }
+  }
 
   get rank(): number {
     return this.rows.length;
@@ -24,12 +49,7 @@ export class Echelon<C> {
     const w = v.slice();
     for (let r = 0; r < this.rows.length; r++) {
       const c = w[this.pivots[r]];
-      if (K.isZero(c)) continue;
-      const row = this.rows[r];
-      for (let k = 0; k < w.length; k++) {
-        const a = row[k];
-        if (!K.isZero(a)) w[k] = K.sub(w[k], K.mul(c, a));
-      }
+      if (!K.isZero(c)) this.axpy(w, c, this.rows[r]);
     }
     return w;
   }
@@ -60,16 +80,8 @@ export class Echelon<C> {
     for (let r = 0; r < this.rows.length; r++) {
       const c = w[this.pivots[r]];
       if (K.isZero(c)) continue;
-      const row = this.rows[r];
-      for (let k = 0; k < w.length; k++) {
-        const a = row[k];
-        if (!K.isZero(a)) w[k] = K.sub(w[k], K.mul(c, a));
-      }
-      const cr = this.combos[r];
-      for (let k = 0; k < combo.length; k++) {
-        const a = cr[k];
-        if (!K.isZero(a)) combo[k] = K.sub(combo[k], K.mul(c, a));
-      }
+      this.axpy(w, c, this.rows[r]);
+      this.axpy(combo, c, this.combos[r]);
     }
     const p = w.findIndex((a) => !K.isZero(a));
     if (p < 0) return combo;

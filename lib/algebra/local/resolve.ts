@@ -119,11 +119,18 @@ export function resolveDegreewise<C>(req: ResolveRequest<C>): QuotientResolution
           decomposable = new Echelon<C>(K, dimF);
           for (const r of P.rows) decomposable.insert(r);
         }
-        const ker = kernelBasis(K, target.dim(j), images.all(j), () => checkpoint(opts, info));
-        if (ker.length !== expected) throw new AlgebraError("runtime", "resolution: internal inconsistency (kernel dimension)");
-        for (const z of ker) {
-          if (P.rank === expected) break;
-          if (P.insert(z)) next.addGenerator(j, z);
+        // K_{i,j} = P ⊕ (K_{i,j} ∩ C) for C spanned by the unit vectors off the pivots of P,
+        // and d vanishes on P: the new syzygies are the kernel of d restricted to C.
+        const pivots = new Set(P.pivots);
+        const free = Array.from({ length: dimF }, (_, k) => k).filter((k) => !pivots.has(k));
+        const all = images.all(j);
+        const ker = kernelBasis(K, target.dim(j), free.map((k) => all[k]), () => checkpoint(opts, info));
+        if (ker.length !== expected - P.rank) throw new AlgebraError("runtime", "resolution: internal inconsistency (kernel dimension)");
+        for (const c of ker) {
+          const z = new Array<C>(dimF).fill(K.zero);
+          c.forEach((a, k) => (z[free[k]] = a));
+          P.insert(z);
+          next.addGenerator(j, z);
         }
       }
       kernels.set(j, P);
