@@ -87,6 +87,20 @@ describe("residue field over S/J, degree by degree", () => {
     expect(bettiTotalsOf(C).map(BigInt)).toEqual(expandRational(polyPowZ([1n, 1n], 3), polyPowZ([1n, 0n, -1n], 2), 7));
   });
 
+  it("computing beyond the Backelin bound finds nothing more", () => {
+    // The bound t_i(k) ≤ 1 + (i−1)(g−1) (Backelin, rate(R) ≤ g − 1 with g the top degree of
+    // in(J)) decides completeness for non-Artinian rings: a run with a larger degree bound
+    // must give the same table. Ring: k[x,y,z]/(x^2, xy, y^3) (in(J) = J, g = 3).
+    const S = ring(3);
+    const [x, y] = vars(S);
+    const J = A.ideal(S, [A.mul(S, x, x), A.mul(S, x, y), A.pow(S, y, 3)]);
+    const auto = residueFieldResolution(J, 5);
+    expect(auto.complete).toBe(true);
+    expect(auto.exactThroughDegree).toBe(9);
+    const wide = residueFieldResolution(J, 5, { degree: 14 });
+    expect(wide.columns.map((c) => c.entries)).toEqual(auto.columns.map((c) => c.entries));
+  });
+
   it("a degree bound below the needed degrees marks the columns incomplete", () => {
     // k[x]/(x^3): F_2 is generated in degree 3 (Tate 1957: the resolution is periodic with
     // generators in degrees 0, 1, 3, 4, 6, …), so a bound of 2 cuts β_2.
