@@ -114,7 +114,10 @@ describe("export and import over the API", () => {
       .returning();
     await db().insert(namedObjects).values({ sessionId, ownerId: group.users.lead.id, name: "B", type: "BettiTable", value: betti, source: "B := resolve(S / I).betti", sourceCellId: cell!.id });
   }, 120_000);
-  afterAll(() => closeDb());
+  afterAll(async () => {
+    await db().delete(sessions).where(eq(sessions.title, "three points"));
+    await closeDb();
+  });
 
   it("exports LaTeX with the Betti table as a tabular", async () => {
     const r = await owner.request(`/api/sessions/${sessionId}/export?format=latex`);

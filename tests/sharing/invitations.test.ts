@@ -5,7 +5,7 @@
 import { and, desc, eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeDb, db } from "@/db/client";
-import { auditLog, invitations, memberships } from "@/db/schema";
+import { auditLog, invitations, memberships, teams } from "@/db/schema";
 import { listMessages } from "@/lib/mail/mailbox";
 import { tokenHash } from "@/lib/sharing/common";
 import { TEST_ACCOUNTS, ensureTestGroup, uniqueEmail } from "../helpers/fixtures";
@@ -52,7 +52,10 @@ beforeAll(async () => {
   teamId = ((await created.json()) as { team: { id: string } }).team.id;
   await signUp(wrong, uniqueEmail("wrong"));
 }, 60_000);
-afterAll(() => closeDb());
+afterAll(async () => {
+  await db().delete(teams).where(eq(teams.id, teamId));
+  await closeDb();
+});
 
 describe("invitations", () => {
   it("reach the sink, work once with the matching account, and cannot be replayed", async () => {

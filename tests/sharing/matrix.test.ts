@@ -14,7 +14,7 @@ import { newToken, tokenHash } from "@/lib/sharing/common";
 import { EXPORT_FORMAT } from "@/lib/export/format";
 import { uniqueEmail } from "../helpers/fixtures";
 import type { TestClient } from "../helpers/http";
-import { freshSession, freshTeam, makeWorld, ownSession, type Actor, type World } from "./setup";
+import { cleanUp, freshSession, freshTeam, makeWorld, ownSession, type Actor, type World } from "./setup";
 
 const API = path.resolve(__dirname, "..", "..", "app", "api");
 const ROLES = ["owner", "editor", "viewer", "linkHolder", "lead", "member", "guest", "stranger", "signedOut", "admin"] as const;
@@ -210,7 +210,7 @@ const MATRIX: Record<string, Row[]> = {
       make: async (w, role) => {
         const s = await freshSession(w);
         const actor: Actor = role === "stranger" ? "outsider" : role === "signedOut" ? "outsider" : role;
-        return { path: `/api/objects/${s.objectId}/import`, body: { sessionId: await ownSession(w, actor) } };
+        return { path: `/api/objects/${s.objectId}/import`, body: { sessionId: await ownSession(w, actor, "matrix import target") } };
       },
     },
   ],
@@ -241,7 +241,10 @@ let world: World;
 beforeAll(async () => {
   world = await makeWorld(160);
 }, 60_000);
-afterAll(() => closeDb());
+afterAll(async () => {
+  await cleanUp(["matrix session", "matrix", "imported in the matrix", "matrix import target"], ["Matrix team", "Matrix created team"]);
+  await closeDb();
+});
 
 function clientFor(role: Role): TestClient {
   switch (role) {

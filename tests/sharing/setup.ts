@@ -2,7 +2,7 @@
 /// admin, outsider) four more accounts (a session owner, an editor, a viewer and a link
 /// holder), signed-in clients for each, and fresh sessions and teams built in the database.
 import { randomBytes } from "node:crypto";
-import { eq, inArray } from "drizzle-orm";
+import { eq, inArray, like, or } from "drizzle-orm";
 import { db } from "@/db/client";
 import { cells, memberships, namedObjects, sessions, shares, teams, users } from "@/db/schema";
 import { hashPassword } from "@/lib/auth/password";
@@ -101,8 +101,8 @@ export async function freshSession(w: World, title = "matrix session") {
 }
 
 /// A session of `actor`'s own with no sharing (a target for imports).
-export async function ownSession(w: World, actor: Actor): Promise<string> {
-  const [s] = await db().insert(sessions).values({ title: `${actor}'s own`, ownerId: w.ids[actor] }).returning();
+export async function ownSession(w: World, actor: Actor, title: string): Promise<string> {
+  const [s] = await db().insert(sessions).values({ title, ownerId: w.ids[actor] }).returning();
   return s!.id;
 }
 
@@ -123,4 +123,14 @@ export async function freshTeam(w: World): Promise<string> {
 
 export async function removeSession(id: string): Promise<void> {
   await db().delete(sessions).where(eq(sessions.id, id));
+}
+
+/// Removes the sessions and teams a suite made (by their titles and names), so the test
+/// group's users do not carry them into later suites (the console lists every team).
+export async function cleanUp(sessionTitles: string[], teamNames: string[]): Promise<void> {
+  const database = db();
+  if (sessionTitles.length > 0) {
+    await database.delete(sessions).where(or(...sessionTitles.map((t) => (t.includes("%") ? like(sessions.title, t) : eq(sessions.title, t)))));
+  }
+  if (teamNames.length > 0) await database.delete(teams).where(inArray(teams.name, teamNames));
 }

@@ -7,7 +7,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeDb, db } from "@/db/client";
 import { auditLog, namedObjects } from "@/db/schema";
 import { TEST_ACCOUNTS } from "../helpers/fixtures";
-import { EXTRA_ACCOUNTS, makeWorld, ownSession, type World } from "./setup";
+import { cleanUp, EXTRA_ACCOUNTS, makeWorld, ownSession, type World } from "./setup";
 
 const EXTRA_OWNER = EXTRA_ACCOUNTS.owner.email;
 const EXTRA_VIEWER = EXTRA_ACCOUNTS.viewer.email;
@@ -26,7 +26,10 @@ beforeAll(async () => {
     .returning();
   objectId = o!.id;
 }, 60_000);
-afterAll(() => closeDb());
+afterAll(async () => {
+  await cleanUp(["sharing flows", "lead's notes", "flows import target"], ["Flows team"]);
+  await closeDb();
+});
 
 async function lastAudit(event: string) {
   const [row] = await db().select().from(auditLog).where(eq(auditLog.event, event)).orderBy(desc(auditLog.id)).limit(1);
@@ -132,7 +135,7 @@ describe("read-only link", () => {
 
 describe("shared objects", () => {
   it("are imported as a copy that records its origin", async () => {
-    const target = await ownSession(w, "viewer");
+    const target = await ownSession(w, "viewer", "flows import target");
     // not shared yet: the object is invisible
     expect((await w.clients.viewer.json(`/api/objects/${objectId}/import`, { sessionId: target })).status).toBe(404);
     const s = await w.clients.owner.json(`/api/objects/${objectId}/shares`, { email: EXTRA_VIEWER, role: "viewer" });
