@@ -33,7 +33,7 @@ function randomForm(S: A.PolyRing, d: number, next: () => number): A.Poly {
 
 /// The dense linear algebra of lib/algebra/local needs memory ~ (size of a graded piece)^2;
 /// the limit turns what would be an out-of-memory crash into a reported stop.
-const MAX_PIECE = 6000;
+const MAX_PIECE = 2500;
 
 function residueCase(name: string, J: () => A.Ideal, length: number): BenchCase {
   return {

@@ -1,10 +1,15 @@
-// npm run bench [-- NAME-FILTER]: times every case in cases.ts with our engine, then the same
+// npm run bench [-- NAME-FILTER]: times every case with our engine, then the same
 // computation in SymPy (one child process per case, killed after the timeout), and prints the
 // ratio SymPy time / our time. Environment: RINGSIDE_SYMPY_PYTHON (default /usr/bin/python3),
 // RINGSIDE_BENCH_SYMPY_TIMEOUT in seconds (default 300), RINGSIDE_BENCH_NO_SYMPY=1 to skip it.
 import { spawn } from "node:child_process";
 import path from "node:path";
-import { cases, type BenchCase } from "./cases";
+import { cases as groebnerCases, type BenchCase } from "./cases";
+import { quotientCases } from "./quotient-cases";
+import { resolutionCases } from "./resolution-cases";
+
+// Gröbner bases (with SymPy as the reference), resolutions over S (issue 5) and over S/J (issue 6).
+const cases: BenchCase[] = [...groebnerCases, ...resolutionCases, ...quotientCases];
 
 const python = process.env.RINGSIDE_SYMPY_PYTHON || "/usr/bin/python3";
 const timeoutS = Number(process.env.RINGSIDE_BENCH_SYMPY_TIMEOUT || 300);
