@@ -137,7 +137,8 @@ export async function finishCell(cell: CellRow, user: CurrentUser, outcome: Cell
         .values({ sessionId: cell.sessionId, ownerId: user.id, name: o.name, type: o.type, value: o.value, source: o.source, sourceCellId: cell.id })
         .onConflictDoUpdate({
           target: [namedObjects.sessionId, namedObjects.name],
-          set: { type: o.type, value: o.value, source: o.source, sourceCellId: cell.id, updatedAt: new Date() },
+          // A name bound again by a cell is that cell's object now, no longer an imported copy.
+          set: { type: o.type, value: o.value, source: o.source, sourceCellId: cell.id, origin: null, updatedAt: new Date() },
         })
         .returning();
       saved.push(row!);

@@ -7,6 +7,7 @@ export function cellView(row: CellRow) {
     id: row.id,
     position: row.position,
     source: row.source,
+    origin: row.origin ?? null,
     status: row.status,
     results: result?.statements ?? [],
     error: row.error ?? null,
@@ -26,6 +27,7 @@ export function objectView(row: ObjectRow) {
     value: row.value,
     summary: summarize(text),
     source: row.source,
+    origin: row.origin ?? null,
     sourceCellId: row.sourceCellId,
     updatedAt: row.updatedAt.toISOString(),
   };
