@@ -7,7 +7,6 @@ export function cellView(row: CellRow) {
     id: row.id,
     position: row.position,
     source: row.source,
-    origin: row.origin ?? null,
     status: row.status,
     results: result?.statements ?? [],
     error: row.error ?? null,
