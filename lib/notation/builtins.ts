@@ -41,6 +41,7 @@ import { colonOf, eliminationOf, groebnerOf, idealProductOf, idealValue, quotien
 import type { Frame, Interpreter } from "./interpreter";
 import { addValues } from "./operators";
 import { pendingError } from "./pending";
+import { COMPLEX_PROPERTIES, resolveValue } from "./resolutions";
 import { valueType } from "./value-type";
 import { list, type HilbertSeriesValue, type IdealValue, type RingValue, type Value } from "./values";
 
@@ -178,6 +179,7 @@ const FUNCTION_IMPLS: Record<string, FunctionImpl> = {
   },
   "all(List<Bool>)": ([xs]) => Bool((xs as { items: readonly Value[] }).items.every((x) => x.type === "Bool" && x.value)),
   "any(List<Bool>)": ([xs]) => Bool((xs as { items: readonly Value[] }).items.some((x) => x.type === "Bool" && x.value)),
+  "resolve(Module or Ring)": resolveValue,
 };
 
 function matrixArg(v: Value, span: Span): Extract<Value, { type: "Matrix" }> {
@@ -317,6 +319,7 @@ const PROPERTY_IMPLS: Record<string, PropertyImpl> = {
     if (k < 0) throw runtime(`no column ${(name as { value: string }).value}; the columns are ${t.columns.join(", ")}`, c.argSpans[0]);
     return list(t.rows.map((row) => row[k]));
   },
+  ...COMPLEX_PROPERTIES,
 };
 
 /// Keys of everything the evaluator implements (read by the pending-names test).

@@ -103,6 +103,7 @@ const nextTurn = () => new Promise<void>((resolve) => setImmediate(resolve));
 export async function evaluate(source: string, bindings: readonly Binding[], options: EvaluateOptions = {}): Promise<EvalOutcome> {
   const emit = options.onEvent ?? (() => {});
   let index = 0;
+  let partialItem = 0;
   const compute: ComputeOptions = {
     ...(options.signal ? { signal: options.signal } : {}),
     ...(options.engineLimits ? { limits: options.engineLimits } : {}),
@@ -115,6 +116,7 @@ export async function evaluate(source: string, bindings: readonly Binding[], opt
     compute,
     limits: { ...DEFAULT_LIMITS, ...options.limits },
     analysis: null,
+    partial: (value) => emit({ event: "partial", index, item: partialItem++, value: encodeValue(value) }),
   };
   const interp = new Interpreter(session);
   const results: Extract<EvalEvent, { event: "result" }>[] = [];

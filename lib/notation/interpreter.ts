@@ -36,6 +36,8 @@ export interface Session {
   readonly limits: EvalLimits;
   /// null for code that was not checked in this evaluation (a restored lambda)
   analysis: Analysis | null;
+  /// streams a piece of the running statement's value (e.g. one finished Betti column)
+  readonly partial?: (value: Value) => void;
 }
 
 /// Where evaluation is: the scope of locals and the ring literals are read in.

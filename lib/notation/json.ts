@@ -30,6 +30,8 @@ export const RingJson = z.object({
   degrees: z.array(z.number().int().positive()),
   order: z.string(),
   ideal: z.array(z.string()),
+  /// for A / I with A itself a quotient: how many leading generators of `ideal` define A
+  over: count.optional(),
 });
 export type RingJson = z.infer<typeof RingJson>;
 
@@ -195,6 +197,7 @@ export function encodeRing(r: RingValue): RingJson {
     degrees: [...r.poly.degrees],
     order: orderText(r.poly.order),
     ideal: r.ideal.map((f) => formatPoly(r.poly, f)),
+    ...(r.over ? { over: r.over.ideal.length } : {}),
   };
 }
 
@@ -302,7 +305,11 @@ export function decodeRing(j: RingJson, ctx: DecodeContext): RingValue {
   const order = parseOrder(j.order) ?? fail("Ring", `unknown monomial order ${j.order}`);
   const base = ctx.rings.polynomialRing(field, j.vars, { order, degrees: j.degrees });
   if (j.ideal.length === 0) return base;
-  return ctx.rings.quotient(base, j.ideal.map((g) => readPoly(base, g, "Ring ideal")));
+  const gens = j.ideal.map((g) => readPoly(base, g, "Ring ideal"));
+  const over = j.over ?? 0;
+  if (over > gens.length) fail("Ring", `over counts ${over} generators but the ideal has ${gens.length}`);
+  const formedFrom = over > 0 ? ctx.rings.quotient(base, gens.slice(0, over)) : base;
+  return ctx.rings.quotient(formedFrom, gens.slice(over));
 }
 
 function readPoly(r: RingValue, textOf: string, where: string): Poly {

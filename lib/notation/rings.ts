@@ -37,10 +37,12 @@ export class RingRegistry {
   quotient(base: RingValue, gens: readonly Poly[]): RingValue {
     const ideal = [...base.ideal, ...gens];
     const ambient = this.ambient(base);
-    const key = `${keyOf(ambient.poly)}/${ideal.map((f) => formatPoly(ambient.poly, f)).join(",")}`;
+    // (S/J)/I and S/(J+I) are the same ring but not the same module: keep them apart.
+    const over = base.ideal.length > 0 ? base : undefined;
+    const key = `${keyOf(ambient.poly)}/${ideal.map((f) => formatPoly(ambient.poly, f)).join(",")}${over ? `|over:${base.ideal.length}` : ""}`;
     let r = this.rings.get(key);
     if (!r) {
-      r = { type: "Ring", poly: ambient.poly, ideal };
+      r = over ? { type: "Ring", poly: ambient.poly, ideal, over } : { type: "Ring", poly: ambient.poly, ideal };
       this.rings.set(key, r);
     }
     return r;

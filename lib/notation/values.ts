@@ -12,6 +12,10 @@ export interface RingValue {
   readonly ideal: readonly Poly[];
   /// reduced Gröbner basis of the defining ideal, computed once when first needed
   basis?: readonly Poly[];
+  /// the quotient ring this one was formed from (A in A / I), when A is itself a quotient;
+  /// absent for S and for quotients S / I of a polynomial ring. A quotient read as a module is
+  /// a module over the ring it was formed from (notation.md §5).
+  readonly over?: RingValue;
 }
 
 export interface PolyValue {

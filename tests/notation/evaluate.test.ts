@@ -342,7 +342,7 @@ describe("errors with kind and span", () => {
   });
 
   it("names of engine parts 2 and 3 end with a runtime error saying which part", async () => {
-    const out = await run("S := Q[x, y]\nresolve(S / <x, y>)");
+    const out = await run("S := Q[x, y]\nkoszul(S)");
     expect(out.error).toMatchObject({ kind: "runtime", span: { from: { line: 2, col: 1 } } });
     expect(out.error!.message).toMatch(/engine part 2/);
     const burch = await run("S := Q[x, y]\nburch_index(S / <x^2, y^2>)");

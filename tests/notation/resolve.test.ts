@@ -1,0 +1,77 @@
+// resolve(…) end to end through the evaluator: Betti tables, ranks and maps of minimal
+// resolutions over a polynomial ring (engine part 2), bounds, streamed columns, and the
+// refusal to read a quotient of a quotient as a module over the polynomial ring.
+import { describe, expect, it } from "vitest";
+import { evaluate, type EvalEvent } from "@/lib/notation/evaluate";
+import type { ValueJson } from "@/lib/notation/json";
+
+async function run(source: string) {
+  const events: EvalEvent[] = [];
+  const out = await evaluate(source, [], { onEvent: (e) => events.push(e) });
+  return { ...out, events };
+}
+
+async function values(source: string): Promise<ValueJson[]> {
+  const out = await run(source);
+  expect(out.error, out.error?.text).toBeNull();
+  return out.results.map((r) => r.value);
+}
+
+const entries = (v: ValueJson) => (v as unknown as { entries: [number, number, number][] }).entries;
+
+describe("resolve over a polynomial ring", () => {
+  it("gives the twisted cubic's Betti table 1, 3, 2 (checks.md row 2; Eagon–Northcott 1962)", async () => {
+    const [, , betti, ranks] = await values("S := Q[x, y, z, w]\nC := resolve(S / minors([x, y, z; y, z, w], 2))\nC.betti\nC.ranks");
+    expect(entries(betti)).toEqual([
+      [0, 0, 1],
+      [1, 2, 3],
+      [2, 3, 2],
+    ]);
+    expect((betti as unknown as { complete: boolean }).complete).toBe(true);
+    expect((ranks as unknown as { items: { value: string }[] }).items.map((i) => i.value)).toEqual(["1", "3", "2"]);
+  });
+
+  it("has differentials whose composites vanish, with entries in the maximal ideal (common practice: a complex)", async () => {
+    // (xz, xw, yz, yw) = (x, y)·(z, w): the tensor product of two Koszul complexes, ranks 1, 4, 4, 1
+    const v = await values(
+      "S := GF(32003)[x, y, z, w]\nC := resolve(S / <x*z, x*w, y*z, y*w>)\nC.betti.totals\nC.map(1) * C.map(2)\nC.map(2) * C.map(3)\nC.map(3).entries <= S.maximal",
+    );
+    expect((v[2] as unknown as { items: { value: string }[] }).items.map((i) => i.value)).toEqual(["1", "4", "4", "1"]);
+    const zeroRows = (m: ValueJson) => (m as unknown as { rows: string[][] }).rows.flat().every((e) => e === "0");
+    expect(zeroRows(v[3])).toBe(true);
+    expect(zeroRows(v[4])).toBe(true);
+    expect(v[5]).toMatchObject({ type: "Bool", value: true });
+  });
+
+  it("marks a resolution cut by a length bound as incomplete (Koszul: β_i = C(4, i), checks.md row 1)", async () => {
+    const [, , betti, complete] = await values("S := GF(101)[a..d]\nC := resolve(S / S.maximal, length = 2)\nC.betti\nC.complete");
+    expect(entries(betti)).toEqual([
+      [0, 0, 1],
+      [1, 1, 4],
+      [2, 2, 6],
+    ]);
+    expect(complete).toMatchObject({ type: "Bool", value: false });
+  });
+
+  it("streams each finished Betti column as a partial value", async () => {
+    const out = await run("S := GF(101)[a..d]\nresolve(S / S.maximal).betti");
+    const partial = out.events.filter((e) => e.event === "partial").map((e) => entries((e as { value: ValueJson }).value));
+    // Koszul complex on 4 variables: columns 1, 4, 6, 4, 1 (checks.md row 1)
+    expect(partial.map((col) => col.map(([, , b]) => b).reduce((s, b) => s + b, 0))).toEqual([1, 4, 6, 4, 1]);
+  });
+
+  it("refuses to read (S/J)/I as a module over S, and says which engine part will resolve it", async () => {
+    const out = await run("S := GF(7)[x, y]\nA := S / <x^2>\nB := A / <y^2>\nresolve(B)");
+    expect(out.error?.kind).toBe("runtime");
+    expect(out.error?.message).toMatch(/quotient ring.*engine part 3/);
+    expect(out.error?.span.from).toEqual({ line: 4, col: 9 });
+  });
+
+  it("restores a quotient of a quotient from its JSON with the ring it was formed from", async () => {
+    const first = await run("S := GF(7)[x, y]\nA := S / <x^2>\nB := A / <y^2>");
+    const B = first.objects.find((o) => o.name === "B")!;
+    expect(B.value).toMatchObject({ ideal: ["x^2", "y^2"], over: 1 });
+    const second = await evaluate("resolve(B)", first.objects.map((o) => ({ name: o.name, value: o.value })), { currentRing: "B" });
+    expect(second.error?.message).toMatch(/engine part 3/);
+  });
+});
