@@ -252,8 +252,9 @@ const OPENERS = new Map<TokenType, TokenType>([
 const CLOSER_OF = new Map<TokenType, TokenType>([...OPENERS].map(([o, c]) => [c, o]));
 
 /// Tokens after which a `<` is a comparison (they end an operand); elsewhere `<`
-/// starts a primary expression and so opens an ideal.
-const ENDS_OPERAND = new Set<TokenType>([
+/// starts a primary expression and so opens an ideal. The parser uses the same set to
+/// tell two operands written side by side.
+export const ENDS_OPERAND = new Set<TokenType>([
   Tok.Identifier,
   Tok.Integer,
   Tok.Str,

@@ -11,20 +11,9 @@ import {
 } from "chevrotain";
 import type * as A from "./ast";
 import type { Diagnostic } from "./analysis";
-import { ALL_TOKENS, layout, lexRaw, Tok } from "./lexer";
+import { ALL_TOKENS, ENDS_OPERAND, layout, lexRaw, Tok } from "./lexer";
 import { makeLocator, type Locator } from "./positions";
 
-const OPERAND_END = new Set<TokenType>([
-  Tok.Identifier,
-  Tok.Integer,
-  Tok.Str,
-  Tok.True,
-  Tok.False,
-  Tok.RParen,
-  Tok.RBracket,
-  Tok.RBrace,
-  Tok.IdealClose,
-]);
 const OPERAND_START = new Set<TokenType>([
   Tok.Identifier,
   Tok.Integer,
@@ -802,7 +791,7 @@ function recognitionError(err: IRecognitionException, tokens: IToken[], loc: Loc
   if (err.name === "NotAllInputParsedException" && real) {
     const i = tokens.indexOf(t);
     const prev = i > 0 ? tokens[i - 1] : undefined;
-    if (prev && OPERAND_END.has(prev.tokenType) && OPERAND_START.has(t.tokenType)) {
+    if (prev && ENDS_OPERAND.has(prev.tokenType) && OPERAND_START.has(t.tokenType)) {
       const glue = t.tokenType === Tok.LParen ? "(…)" : t.image;
       message += ` — there is no implicit multiplication; did you mean ${prev.image}*${glue}?`;
     }

@@ -3,6 +3,7 @@
 import { signIn } from "next-auth/react";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
+import { Field } from "../field";
 
 const MESSAGES: Record<string, string> = {
   rate_limited: "Too many failed sign-in attempts. Wait 15 minutes, then try again.",
@@ -37,18 +38,8 @@ export function SignInForm({ callbackUrl, initialError }: { callbackUrl: string;
 
   return (
     <form onSubmit={onSubmit} className="space-y-4" noValidate>
-      <div>
-        <label htmlFor="email" className="field-label">
-          Email
-        </label>
-        <input id="email" name="email" type="email" autoComplete="username" required className="field-input" />
-      </div>
-      <div>
-        <label htmlFor="password" className="field-label">
-          Password
-        </label>
-        <input id="password" name="password" type="password" autoComplete="current-password" required className="field-input" />
-      </div>
+      <Field id="email" label="Email" type="email" autoComplete="username" />
+      <Field id="password" label="Password" type="password" autoComplete="current-password" />
       {error && (
         <p role="alert" className="rounded-md bg-signal-soft/60 px-3 py-2 text-sm text-ink">
           {error}

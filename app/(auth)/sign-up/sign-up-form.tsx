@@ -3,6 +3,7 @@
 import { signIn } from "next-auth/react";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
+import { Field } from "../field";
 
 export function SignUpForm({ passwordRule }: { passwordRule: string }) {
   const router = useRouter();
@@ -38,27 +39,13 @@ export function SignUpForm({ passwordRule }: { passwordRule: string }) {
 
   return (
     <form onSubmit={onSubmit} className="space-y-4" noValidate>
-      <div>
-        <label htmlFor="name" className="field-label">
-          Name
-        </label>
-        <input id="name" name="name" type="text" autoComplete="name" required className="field-input" />
-      </div>
-      <div>
-        <label htmlFor="email" className="field-label">
-          Email
-        </label>
-        <input id="email" name="email" type="email" autoComplete="email" required className="field-input" />
-      </div>
-      <div>
-        <label htmlFor="password" className="field-label">
-          Password
-        </label>
-        <input id="password" name="password" type="password" autoComplete="new-password" required className="field-input" aria-describedby="password-rule" />
+      <Field id="name" label="Name" type="text" autoComplete="name" />
+      <Field id="email" label="Email" type="email" autoComplete="email" />
+      <Field id="password" label="Password" type="password" autoComplete="new-password" aria-describedby="password-rule">
         <p id="password-rule" className="mt-1 text-xs text-ink-soft">
           {passwordRule}
         </p>
-      </div>
+      </Field>
       {error && (
         <p role="alert" className="rounded-md bg-signal-soft/60 px-3 py-2 text-sm text-ink">
           {error}
