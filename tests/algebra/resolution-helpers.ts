@@ -1,5 +1,6 @@
 // Shared helpers for the resolution, module and invariants tests.
 import { expect } from "vitest";
+import { mulberry32 } from "./sympy/random-systems";
 import {
   add,
   degree,
@@ -22,17 +23,8 @@ import type { Resolution } from "@/lib/algebra/resolution";
 
 export const GF = gf(32003);
 
-/// A small deterministic generator (mulberry32, common practice).
-export function rng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+/// A small deterministic generator (the sympy cross-check's mulberry32, common practice).
+export const rng = mulberry32;
 
 export function ringOf(F: Field, n: number, name = "x"): PolyRing {
   return polyRing(F, Array.from({ length: n }, (_, i) => `${name}${i + 1}`));

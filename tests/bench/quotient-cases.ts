@@ -3,6 +3,7 @@
 import * as A from "../../lib/algebra/index";
 import { burchIndexOfRing } from "../../lib/algebra/burch/index";
 import { residueFieldResolution } from "../../lib/algebra/local/index";
+import { randomForm } from "../algebra/local-helpers";
 import type { BenchCase } from "./cases";
 
 const F = A.gf(32003);
@@ -17,19 +18,6 @@ function seeded(seed: number): () => number {
   return () => (s = (s * 48271) % 2147483647);
 }
 
-/// A random form of degree d with coefficients in [−9, 9].
-function randomForm(S: A.PolyRing, d: number, next: () => number): A.Poly {
-  let f = A.zero(S);
-  const rec = (start: number, left: number, m: A.Poly) => {
-    if (left === 0) {
-      f = A.add(S, f, A.scale(S, m, BigInt((next() % 19) - 9)));
-      return;
-    }
-    for (let i = start; i < S.vars.length; i++) rec(i, left - 1, A.mul(S, m, A.variable(S, i)));
-  };
-  rec(0, d, A.one(S));
-  return f;
-}
 
 /// The dense linear algebra of lib/algebra/local needs memory ~ (size of a graded piece)^2;
 /// the limit turns what would be an out-of-memory crash into a reported stop.
