@@ -20,7 +20,9 @@ import {
 
 export const siteRole = pgEnum("site_role", ["admin", "member"]);
 export const teamRole = pgEnum("team_role", ["lead", "member", "guest"]);
-export const visibility = pgEnum("visibility", ["private", "team", "link"]);
+/// Who sees a session besides its owner and its shares: nobody else, or its team. A published
+/// read-only link is separate (`shareToken` not null) and never opens the session to the team.
+export const visibility = pgEnum("visibility", ["private", "team"]);
 export const cellStatus = pgEnum("cell_status", ["pending", "running", "done", "error", "cancelled"]);
 export const shareRole = pgEnum("share_role", ["viewer", "editor"]);
 export const invitationStatus = pgEnum("invitation_status", ["pending", "accepted", "revoked", "expired"]);
@@ -87,6 +89,7 @@ export const sessions = pgTable(
       .references(() => users.id, { onDelete: "cascade" }),
     teamId: uuid("team_id").references(() => teams.id, { onDelete: "set null" }),
     visibility: visibility("visibility").notNull().default("private"),
+    /// the read-only link's token while a link is published, else null
     shareToken: text("share_token").unique(),
     createdAt: createdAt(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
@@ -94,8 +97,8 @@ export const sessions = pgTable(
   (t) => [
     index("sessions_owner_idx").on(t.ownerId),
     index("sessions_team_idx").on(t.teamId),
-    check("sessions_link_has_token", sql`${t.visibility} <> 'link' OR ${t.shareToken} IS NOT NULL`),
-    check("sessions_team_visibility_has_team", sql`${t.visibility} <> 'team' OR ${t.teamId} IS NOT NULL`),
+    // (renamed from sessions_team_visibility_has_team so the enum could be rebuilt under it)
+    check("sessions_team_visible_needs_team", sql`${t.visibility} <> 'team' OR ${t.teamId} IS NOT NULL`),
   ],
 );
 

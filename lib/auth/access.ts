@@ -16,9 +16,11 @@ const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 type SessionRow = typeof sessions.$inferSelect;
 
 /// The strongest role `user` holds on the session, or null when it may not even read it.
-/// `linkToken` is the token from a shared link, if the request carried one.
+/// `user` is null for a signed-out visitor, who can only hold a link. `linkToken` is the
+/// token from a published read-only link, if the request carried one: it grants viewer and
+/// nothing else (never the team's access; that is `visibility` alone).
 export async function sessionRole(
-  user: CurrentUser,
+  user: CurrentUser | null,
   sessionId: string,
   opts: { linkToken?: string | null } = {},
 ): Promise<{ session: SessionRow; role: SessionRole | null } | null> {
@@ -26,20 +28,26 @@ export async function sessionRole(
   const database = db();
   const [session] = await database.select().from(sessions).where(eq(sessions.id, sessionId));
   if (!session) return null;
-  if (session.ownerId === user.id) return { session, role: "owner" };
+  if (user && session.ownerId === user.id) return { session, role: "owner" };
 
+  const grants: SessionRole[] = [];
+  if (opts.linkToken && session.shareToken && sameToken(opts.linkToken, session.shareToken)) grants.push("viewer");
+  if (user) grants.push(...(await memberGrants(user, session)));
+  const role = grants.reduce<SessionRole | null>((best, r) => (best === null || RANK[r] > RANK[best] ? r : best), null);
+  return { session, role };
+}
+
+/// What a signed-in user holds through the session's team and through shares.
+async function memberGrants(user: CurrentUser, session: SessionRow): Promise<SessionRole[]> {
+  const database = db();
   const teamRoles = await database
     .select({ teamId: memberships.teamId, role: memberships.role })
     .from(memberships)
     .where(eq(memberships.userId, user.id));
   const roleIn = new Map(teamRoles.map((m) => [m.teamId, m.role]));
   const grants: SessionRole[] = [];
-
-  if (session.visibility !== "private" && session.teamId && roleIn.has(session.teamId)) {
+  if (session.visibility === "team" && session.teamId && roleIn.has(session.teamId)) {
     grants.push(roleIn.get(session.teamId) === "guest" ? "viewer" : "editor");
-  }
-  if (session.visibility === "link" && opts.linkToken && session.shareToken && sameToken(opts.linkToken, session.shareToken)) {
-    grants.push("viewer");
   }
   const teamIds = [...roleIn.keys()];
   const shareRows = await database
@@ -56,8 +64,7 @@ export async function sessionRole(
     const guest = s.teamId !== null && roleIn.get(s.teamId) === "guest";
     grants.push(guest ? "viewer" : s.role);
   }
-  const role = grants.reduce<SessionRole | null>((best, r) => (best === null || RANK[r] > RANK[best] ? r : best), null);
-  return { session, role };
+  return grants;
 }
 
 export async function canRead(user: CurrentUser, sessionId: string, opts: { linkToken?: string | null } = {}): Promise<boolean> {
@@ -73,7 +80,7 @@ export async function canEdit(user: CurrentUser, sessionId: string, opts: { link
 /// exist or the caller may not read it (so private sessions stay invisible), 403 when the
 /// caller may read but `need` is "edit".
 export async function requireSessionAccess(
-  user: CurrentUser,
+  user: CurrentUser | null,
   sessionId: string,
   need: Need,
   opts: { linkToken?: string | null } = {},

@@ -32,3 +32,12 @@ export async function requireSiteRole(role: SiteRole): Promise<CurrentUser> {
   if (role === "admin" && user.siteRole !== "admin") throw forbidden("This needs the site role admin.");
   return user;
 }
+
+/// For routes a published read-only link may read: the signed-in user, or null for a
+/// signed-out visitor who carries a link token (the access check then decides); 401 when
+/// neither.
+export async function requireUserOrLink(linkToken: string | null): Promise<CurrentUser | null> {
+  const user = await currentUser();
+  if (!user && !linkToken) throw unauthorized();
+  return user;
+}

@@ -151,8 +151,9 @@ async function deleteShare(
 
 // ─── sessions ────────────────────────────────────────────────────────────────
 
+/// The read-only link's address while one is published (the token is the link).
 export function linkUrl(base: string, session: SessionRow): string | null {
-  return session.visibility === "link" && session.shareToken
+  return session.shareToken
     ? `${base}/?session=${session.id}&link=${encodeURIComponent(session.shareToken)}`
     : null;
 }
@@ -177,10 +178,11 @@ export async function publishLink(user: CurrentUser, sessionId: string, base: st
   await requireSharingManager(user, sessionId, linkToken);
   return db().transaction(async (tx) => {
     const [session] = await tx.select().from(sessions).where(eq(sessions.id, sessionId)).for("update");
-    if (session!.visibility === "link" && session!.shareToken) return { url: linkUrl(base, session!)!, created: false };
+    if (session!.shareToken) return { url: linkUrl(base, session!)!, created: false };
+    // Only the token changes: a link never opens the session to its team (visibility).
     const [row] = await tx
       .update(sessions)
-      .set({ visibility: "link", shareToken: newToken() })
+      .set({ shareToken: newToken() })
       .where(eq(sessions.id, sessionId))
       .returning();
     await auditSharing(tx, { event: "link_published", userId: user.id, email: user.email, address, details: { sessionId } });
@@ -188,17 +190,14 @@ export async function publishLink(user: CurrentUser, sessionId: string, base: st
   });
 }
 
-/// Revokes the link: its token stops working at once. The session goes back to team
-/// visibility when it has a team, else private.
+/// Revokes the link: its token stops working at once. Who else sees the session (its
+/// visibility, its shares) is left as it was.
 export async function revokeLink(user: CurrentUser, sessionId: string, address: string, linkToken?: string | null) {
   await requireSharingManager(user, sessionId, linkToken);
   return db().transaction(async (tx) => {
     const [session] = await tx.select().from(sessions).where(eq(sessions.id, sessionId)).for("update");
-    if (session!.visibility !== "link" && session!.shareToken === null) throw new HttpError(404, "no_link", "This session has no published link.");
-    await tx
-      .update(sessions)
-      .set({ visibility: session!.teamId ? "team" : "private", shareToken: null })
-      .where(eq(sessions.id, sessionId));
+    if (session!.shareToken === null) throw new HttpError(404, "no_link", "This session has no published link.");
+    await tx.update(sessions).set({ shareToken: null }).where(eq(sessions.id, sessionId));
     await auditSharing(tx, { event: "link_revoked", userId: user.id, email: user.email, address, details: { sessionId } });
     return { revoked: true };
   });
@@ -209,7 +208,7 @@ export async function revokeLink(user: CurrentUser, sessionId: string, address: 
 /// The strongest role the user holds on a named object: its session's role (including a
 /// link token for that session), or an explicit object share (team guests stay viewers).
 export async function objectRole(
-  user: CurrentUser,
+  user: CurrentUser | null,
   objectId: string,
   opts: { linkToken?: string | null } = {},
 ): Promise<{ object: ObjectRow; session: SessionRow; role: SessionRole | null } | null> {
@@ -220,6 +219,7 @@ export async function objectRole(
   const viaSession = await sessionRole(user, object.sessionId, opts);
   if (!viaSession) return null;
   let best = viaSession.role;
+  if (!user) return { object, session: viaSession.session, role: best };
   const teamRows = await database.select({ teamId: memberships.teamId, role: memberships.role }).from(memberships).where(eq(memberships.userId, user.id));
   const roleIn = new Map(teamRows.map((m) => [m.teamId, m.role]));
   const teamIds = [...roleIn.keys()];
@@ -239,7 +239,7 @@ export async function objectRole(
   return { object, session: viaSession.session, role: best };
 }
 
-export async function requireObjectAccess(user: CurrentUser, objectId: string, opts: { linkToken?: string | null } = {}) {
+export async function requireObjectAccess(user: CurrentUser | null, objectId: string, opts: { linkToken?: string | null } = {}) {
   const found = await objectRole(user, objectId, opts);
   if (!found || found.role === null) throw notFound("The object");
   return { object: found.object, session: found.session, role: found.role };

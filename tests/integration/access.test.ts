@@ -1,4 +1,5 @@
 /// The role helper's decisions for every kind of caller, on the real test database.
+import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeDb, db } from "@/db/client";
 import { sessions, shares } from "@/db/schema";
@@ -18,7 +19,8 @@ beforeAll(async () => {
     .values([
       { title: "private", ownerId: owner, teamId: group.teamId, visibility: "private" },
       { title: "team", ownerId: owner, teamId: group.teamId, visibility: "team" },
-      { title: "link", ownerId: owner, teamId: group.teamId, visibility: "link", shareToken: TOKEN },
+      // a private session of the team with a published link
+      { title: "link", ownerId: owner, teamId: group.teamId, visibility: "private", shareToken: TOKEN },
     ])
     .returning({ id: sessions.id, title: sessions.title });
   for (const r of rows) ids[r.title === "private" ? "priv" : (r.title as "team" | "link")] = r.id;
@@ -60,6 +62,28 @@ describe("session access", () => {
     expect(await canRead(outsider, ids.link, { linkToken: TOKEN })).toBe(true);
     expect(await canEdit(outsider, ids.link, { linkToken: TOKEN })).toBe(false);
     expect(await canRead(outsider, ids.link, { linkToken: `${TOKEN}x` })).toBe(false);
+  });
+
+  it("lets a signed-out visitor read with the link token and nothing else", async () => {
+    expect((await sessionRole(null, ids.link, { linkToken: TOKEN }))?.role).toBe("viewer");
+    expect((await sessionRole(null, ids.link))?.role).toBeNull();
+    expect((await sessionRole(null, ids.team))?.role).toBeNull();
+    expect(await status(requireSessionAccess(null, ids.link, "edit", { linkToken: TOKEN }))).toBe(403);
+    expect(await status(requireSessionAccess(null, ids.link, "read", { linkToken: `${TOKEN}x` }))).toBe(404);
+  });
+
+  it("does not open a private team session to the team when a link is published", async () => {
+    const { member, guest } = group.users;
+    // issue 8: a link grants read to link holders only, never to the session's team
+    expect(await canRead(member, ids.link)).toBe(false);
+    expect(await canRead(guest, ids.link)).toBe(false);
+    expect(await status(requireSessionAccess(member, ids.link, "read"))).toBe(404);
+    // a team member who holds the link reads it as a viewer, not as an editor
+    expect((await sessionRole(member, ids.link, { linkToken: TOKEN }))?.role).toBe("viewer");
+    // and a team-visible session that also has a link keeps the team's own roles
+    await db().update(sessions).set({ shareToken: `${TOKEN}-team` }).where(eq(sessions.id, ids.team));
+    expect(await canEdit(member, ids.team)).toBe(true);
+    expect((await sessionRole(guest, ids.team, { linkToken: `${TOKEN}-team` }))?.role).toBe("viewer");
   });
 
   it("applies explicit shares, capping team guests at viewer", async () => {

@@ -37,7 +37,7 @@ describe("schema", () => {
     await db().insert(memberships).values({ teamId: team!.id, userId: reader.id, role: "guest" });
     const [s] = await db()
       .insert(sessions)
-      .values({ title: "Round trip", ownerId: owner.id, teamId: team!.id, visibility: "link", shareToken: `tok-${owner.id}` })
+      .values({ title: "Round trip", ownerId: owner.id, teamId: team!.id, visibility: "team", shareToken: `tok-${owner.id}` })
       .returning();
     const result = { kind: "betti", table: [[1, 0], [0, 3]] };
     const [c] = await db()
@@ -54,7 +54,7 @@ describe("schema", () => {
     const [obj] = await db().select().from(namedObjects).where(eq(namedObjects.sessionId, s!.id));
     expect(obj).toMatchObject({ name: "I", type: "ideal", value: { gens: ["x^2", "y^2"] }, sourceCellId: c!.id });
     const [sess] = await db().select().from(sessions).where(eq(sessions.id, s!.id));
-    expect(sess).toMatchObject({ visibility: "link", teamId: team!.id, ownerId: owner.id });
+    expect(sess).toMatchObject({ visibility: "team", shareToken: `tok-${owner.id}`, teamId: team!.id, ownerId: owner.id });
     const [audit] = await db().select().from(auditLog).where(eq(auditLog.userId, owner.id));
     expect(audit?.details).toEqual({ via: "schema test" });
 
@@ -84,8 +84,8 @@ describe("schema", () => {
   it("rejects roles and visibilities outside their enums and inconsistent sessions and shares", async () => {
     const owner = await newUser("checks");
     expect(await sqlState(db().execute(sql`INSERT INTO users (email, display_name, password_hash, site_role) VALUES ('x@y.example', 'x', 'x', 'owner')`))).toBe("22P02");
-    // A link-visible session needs a token; a team-visible one needs a team.
-    expect(await sqlState(db().insert(sessions).values({ title: "no token", ownerId: owner.id, visibility: "link" }))).toBe("23514");
+    // A link is a token, not a visibility (issue 8); a team-visible session needs a team.
+    expect(await sqlState(db().execute(sql`INSERT INTO sessions (title, owner_id, visibility) VALUES ('link', ${owner.id}, 'link')`))).toBe("22P02");
     expect(await sqlState(db().insert(sessions).values({ title: "no team", ownerId: owner.id, visibility: "team" }))).toBe("23514");
     const [s] = await db().insert(sessions).values({ title: "shares", ownerId: owner.id }).returning();
     // A share names exactly one grantee.

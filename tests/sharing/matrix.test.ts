@@ -1,6 +1,7 @@
 /// The authorisation matrix over the real API: every route file under app/api, every
 /// method it exports, and every caller role (owner, editor, viewer, link holder, team
-/// lead, member, guest, stranger, signed out, plus the site admin) against the expected
+/// lead, member, guest, stranger, signed out, a signed-out link holder, plus the site
+/// admin) against the expected
 /// status. The route files are ENUMERATED from the folder, so a new route without rows
 /// here fails the first test. Each request runs against targets made fresh for it, so a
 /// granted mutation never changes what the next role sees.
@@ -17,25 +18,26 @@ import type { TestClient } from "../helpers/http";
 import { cleanUp, freshSession, freshTeam, makeWorld, ownSession, type Actor, type World } from "./setup";
 
 const API = path.resolve(__dirname, "..", "..", "app", "api");
-const ROLES = ["owner", "editor", "viewer", "linkHolder", "lead", "member", "guest", "stranger", "signedOut", "admin"] as const;
+const ROLES = ["owner", "editor", "viewer", "linkHolder", "lead", "member", "guest", "stranger", "signedOut", "signedOutLink", "admin"] as const;
 type Role = (typeof ROLES)[number];
 
 type Request = { path: string; method: string; body?: unknown; form?: boolean };
 interface Row {
   method: string;
   /// statuses in ROLES order
-  expect: [number, number, number, number, number, number, number, number, number, number];
+  expect: [number, number, number, number, number, number, number, number, number, number, number];
   make: (w: World, role: Role) => Promise<Omit<Request, "method">>;
 }
 
-//                         owner editor viewer link lead member guest stranger out admin
-const READ: Row["expect"] = [200, 200, 200, 200, 200, 200, 200, 404, 401, 404];
-const EDIT: Row["expect"] = [200, 200, 403, 404, 200, 200, 403, 404, 401, 404];
-const MANAGE: Row["expect"] = [200, 403, 403, 403, 200, 403, 403, 404, 401, 404];
-const MANAGE_CREATE: Row["expect"] = [201, 403, 403, 403, 201, 403, 403, 404, 401, 404];
-const SIGNED_IN: Row["expect"] = [200, 200, 200, 200, 200, 200, 200, 200, 401, 200];
-const SIGNED_IN_CREATE: Row["expect"] = [201, 201, 201, 201, 201, 201, 201, 201, 401, 201];
-const TEAM_LEAD: Row["expect"] = [403, 403, 403, 403, 200, 403, 403, 403, 401, 403];
+// "link" is a signed-in holder of the session's link, "out+link" a signed-out one.
+//                         owner editor viewer link lead member guest stranger out out+link admin
+const READ: Row["expect"] = [200, 200, 200, 200, 200, 200, 200, 404, 401, 200, 404];
+const EDIT: Row["expect"] = [200, 200, 403, 403, 200, 200, 403, 404, 401, 401, 404];
+const MANAGE: Row["expect"] = [200, 403, 403, 403, 200, 403, 403, 404, 401, 401, 404];
+const MANAGE_CREATE: Row["expect"] = [201, 403, 403, 403, 201, 403, 403, 404, 401, 401, 404];
+const SIGNED_IN: Row["expect"] = [200, 200, 200, 200, 200, 200, 200, 200, 401, 401, 200];
+const SIGNED_IN_CREATE: Row["expect"] = [201, 201, 201, 201, 201, 201, 201, 201, 401, 401, 201];
+const TEAM_LEAD: Row["expect"] = [403, 403, 403, 403, 200, 403, 403, 403, 401, 401, 403];
 
 function importDoc() {
   return {
@@ -55,17 +57,17 @@ async function invitationFor(teamId: string, email: string, invitedBy: string): 
 }
 
 const MATRIX: Record<string, Row[]> = {
-  "admin/audit/route.ts": [{ method: "GET", expect: [403, 403, 403, 403, 403, 403, 403, 403, 401, 200], make: async () => ({ path: "/api/admin/audit?limit=1" }) }],
+  "admin/audit/route.ts": [{ method: "GET", expect: [403, 403, 403, 403, 403, 403, 403, 403, 401, 401, 200], make: async () => ({ path: "/api/admin/audit?limit=1" }) }],
   "auth/[...nextauth]/route.ts": [
-    { method: "GET", expect: [200, 200, 200, 200, 200, 200, 200, 200, 200, 200], make: async () => ({ path: "/api/auth/csrf" }) },
+    { method: "GET", expect: [200, 200, 200, 200, 200, 200, 200, 200, 200, 200, 200], make: async () => ({ path: "/api/auth/csrf" }) },
     // A credentials post without a CSRF token is turned away by next-auth itself.
     {
       method: "POST",
-      expect: [302, 302, 302, 302, 302, 302, 302, 302, 302, 302],
+      expect: [302, 302, 302, 302, 302, 302, 302, 302, 302, 302, 302],
       make: async () => ({ path: "/api/auth/callback/credentials", body: { email: "nobody@harbor.test.example", password: "x" }, form: true }),
     },
   ],
-  "auth/signup/route.ts": [{ method: "POST", expect: [400, 400, 400, 400, 400, 400, 400, 400, 400, 400], make: async () => ({ path: "/api/auth/signup", body: {} }) }],
+  "auth/signup/route.ts": [{ method: "POST", expect: [400, 400, 400, 400, 400, 400, 400, 400, 400, 400, 400], make: async () => ({ path: "/api/auth/signup", body: {} }) }],
   "me/route.ts": [{ method: "GET", expect: SIGNED_IN, make: async () => ({ path: "/api/me" }) }],
   "sessions/route.ts": [
     { method: "GET", expect: SIGNED_IN, make: async () => ({ path: "/api/sessions" }) },
@@ -80,7 +82,7 @@ const MATRIX: Record<string, Row[]> = {
     {
       method: "POST",
       // editors reach the cell, which has finished: 409
-      expect: [409, 409, 403, 404, 409, 409, 403, 404, 401, 404],
+      expect: [409, 409, 403, 403, 409, 409, 403, 404, 401, 401, 404],
       make: async (w) => {
         const s = await freshSession(w);
         return { path: `/api/sessions/${s.id}/cells/${s.cellId}/cancel` };
@@ -138,13 +140,13 @@ const MATRIX: Record<string, Row[]> = {
     { method: "POST", expect: SIGNED_IN_CREATE, make: async () => ({ path: "/api/teams", body: { name: "Matrix created team" } }) },
   ],
   "teams/[id]/route.ts": [
-    { method: "GET", expect: [403, 403, 403, 403, 200, 200, 200, 403, 401, 403], make: async (w) => ({ path: `/api/teams/${await freshTeam(w)}` }) },
+    { method: "GET", expect: [403, 403, 403, 403, 200, 200, 200, 403, 401, 401, 403], make: async (w) => ({ path: `/api/teams/${await freshTeam(w)}` }) },
   ],
   "teams/[id]/invitations/route.ts": [
     { method: "GET", expect: TEAM_LEAD, make: async (w) => ({ path: `/api/teams/${await freshTeam(w)}/invitations` }) },
     {
       method: "POST",
-      expect: [403, 403, 403, 403, 201, 403, 403, 403, 401, 403],
+      expect: [403, 403, 403, 403, 201, 403, 403, 403, 401, 401, 403],
       make: async (w) => ({ path: `/api/teams/${await freshTeam(w)}/invitations`, body: { email: uniqueEmail("matrix"), role: "member" } }),
     },
   ],
@@ -163,7 +165,7 @@ const MATRIX: Record<string, Row[]> = {
   "teams/[id]/members/[userId]/route.ts": [
     { method: "PATCH", expect: TEAM_LEAD, make: async (w) => ({ path: `/api/teams/${await freshTeam(w)}/members/${w.ids.guest}`, body: { role: "member" } }) },
     // the guest removing the guest is leaving the team, which anyone may
-    { method: "DELETE", expect: [403, 403, 403, 403, 200, 403, 200, 403, 401, 403], make: async (w) => ({ path: `/api/teams/${await freshTeam(w)}/members/${w.ids.guest}` }) },
+    { method: "DELETE", expect: [403, 403, 403, 403, 200, 403, 200, 403, 401, 401, 403], make: async (w) => ({ path: `/api/teams/${await freshTeam(w)}/members/${w.ids.guest}` }) },
   ],
   "invitations/[token]/route.ts": [
     {
@@ -176,27 +178,27 @@ const MATRIX: Record<string, Row[]> = {
     {
       method: "POST",
       // addressed to someone else: every signed-in caller is the wrong account
-      expect: [403, 403, 403, 403, 403, 403, 403, 403, 401, 403],
+      expect: [403, 403, 403, 403, 403, 403, 403, 403, 401, 401, 403],
       make: async (w) => ({ path: `/api/invitations/${await invitationFor(await freshTeam(w), uniqueEmail("other"), w.ids.lead)}/accept` }),
     },
   ],
   "objects/route.ts": [{ method: "GET", expect: SIGNED_IN, make: async () => ({ path: "/api/objects" }) }],
   "objects/[objectId]/route.ts": [
     // the admin holds a viewer share of the object alone
-    { method: "GET", expect: [200, 200, 200, 200, 200, 200, 200, 404, 401, 200], make: async (w) => ({ path: `/api/objects/${(await freshSession(w)).objectId}` }) },
+    { method: "GET", expect: [200, 200, 200, 200, 200, 200, 200, 404, 401, 200, 200], make: async (w) => ({ path: `/api/objects/${(await freshSession(w)).objectId}` }) },
   ],
   "objects/[objectId]/shares/route.ts": [
-    { method: "GET", expect: [200, 403, 403, 403, 200, 403, 403, 404, 401, 403], make: async (w) => ({ path: `/api/objects/${(await freshSession(w)).objectId}/shares` }) },
+    { method: "GET", expect: [200, 403, 403, 403, 200, 403, 403, 404, 401, 401, 403], make: async (w) => ({ path: `/api/objects/${(await freshSession(w)).objectId}/shares` }) },
     {
       method: "POST",
-      expect: [201, 403, 403, 403, 201, 403, 403, 404, 401, 403],
+      expect: [201, 403, 403, 403, 201, 403, 403, 404, 401, 401, 403],
       make: async (w) => ({ path: `/api/objects/${(await freshSession(w)).objectId}/shares`, body: { email: "outsider@harbor.test.example", role: "viewer" } }),
     },
   ],
   "objects/[objectId]/shares/[shareId]/route.ts": [
     {
       method: "DELETE",
-      expect: [200, 403, 403, 403, 200, 403, 403, 404, 401, 403],
+      expect: [200, 403, 403, 403, 200, 403, 403, 404, 401, 401, 403],
       make: async (w) => {
         const s = await freshSession(w);
         return { path: `/api/objects/${s.objectId}/shares/${s.objectShareId}` };
@@ -206,10 +208,10 @@ const MATRIX: Record<string, Row[]> = {
   "objects/[objectId]/import/route.ts": [
     {
       method: "POST",
-      expect: [201, 201, 201, 201, 201, 201, 201, 404, 401, 201],
+      expect: [201, 201, 201, 201, 201, 201, 201, 404, 401, 401, 201],
       make: async (w, role) => {
         const s = await freshSession(w);
-        const actor: Actor = role === "stranger" ? "outsider" : role === "signedOut" ? "outsider" : role;
+        const actor: Actor = role === "stranger" || role === "signedOut" || role === "signedOutLink" ? "outsider" : role;
         return { path: `/api/objects/${s.objectId}/import`, body: { sessionId: await ownSession(w, actor, "matrix import target") } };
       },
     },
@@ -249,6 +251,7 @@ afterAll(async () => {
 function clientFor(role: Role): TestClient {
   switch (role) {
     case "signedOut":
+    case "signedOutLink":
       return world.anonymous;
     case "stranger":
       return world.clients.outsider;
@@ -260,7 +263,7 @@ function clientFor(role: Role): TestClient {
 async function send(role: Role, req: Request, linkToken: string | null): Promise<Response> {
   const client = clientFor(role);
   let p = req.path;
-  if (role === "linkHolder" && linkToken) p += `${p.includes("?") ? "&" : "?"}link=${encodeURIComponent(linkToken)}`;
+  if ((role === "linkHolder" || role === "signedOutLink") && linkToken) p += `${p.includes("?") ? "&" : "?"}link=${encodeURIComponent(linkToken)}`;
   if (req.form) {
     return client.request(p, {
       method: req.method,
@@ -288,7 +291,7 @@ describe("authorisation matrix", () => {
         for (const [i, role] of ROLES.entries()) {
           const made = await row.make(world, role);
           // The link holder's token is the session's; look it up from the path's session.
-          const token = role === "linkHolder" ? await linkTokenOf(made.path) : null;
+          const token = role === "linkHolder" || role === "signedOutLink" ? await linkTokenOf(made.path) : null;
           const response = await send(role, { ...made, method: row.method }, token);
           await response.arrayBuffer();
           got[role] = response.status;

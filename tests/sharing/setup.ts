@@ -67,7 +67,7 @@ export async function makeWorld(base: number): Promise<World> {
   return { group, ids, clients, anonymous: new TestClient(testAddress(base + actors.length)) };
 }
 
-/// A session owned by `owner` in the test group's team, published as a link, shared with
+/// A team-visible session owned by `owner` in the test group's team, published as a link, shared with
 /// `editor` (editor) and `viewer` (viewer), with one finished cell and one named object
 /// (itself shared with the site admin as viewer).
 export async function freshSession(w: World, title = "matrix session") {
@@ -75,7 +75,7 @@ export async function freshSession(w: World, title = "matrix session") {
   const token = randomBytes(32).toString("base64url");
   const [s] = await database
     .insert(sessions)
-    .values({ title, ownerId: w.ids.owner, teamId: w.group.teamId, visibility: "link", shareToken: token })
+    .values({ title, ownerId: w.ids.owner, teamId: w.group.teamId, visibility: "team", shareToken: token })
     .returning();
   const [cell] = await database
     .insert(cells)

@@ -1,11 +1,11 @@
 /// Sharing flows over the API: a share by e-mail grants its role and can be changed and
 /// revoked; a team share leaves the team's guests read-only; a published link lets a
-/// signed-in holder read (never run) until it is revoked; a shared object is imported as a
+/// holder read, signed in or not (never run), until it is revoked, and never opens the session to its team; a shared object is imported as a
 /// copy recording its origin. Each change is checked in the audit log.
 import { desc, eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeDb, db } from "@/db/client";
-import { auditLog, namedObjects } from "@/db/schema";
+import { auditLog, namedObjects, sessions } from "@/db/schema";
 import { TEST_ACCOUNTS } from "../helpers/fixtures";
 import { cleanUp, EXTRA_ACCOUNTS, makeWorld, ownSession, type World } from "./setup";
 
@@ -36,8 +36,8 @@ async function lastAudit(event: string) {
   return row!;
 }
 
-const canEdit = async (who: keyof World["clients"], query = "") => {
-  const r = await w.clients[who].request(`/api/sessions/${sessionId}${query}`);
+const canEdit = async (who: keyof World["clients"] | "anonymous", query = "") => {
+  const r = await (who === "anonymous" ? w.anonymous : w.clients[who]).request(`/api/sessions/${sessionId}${query}`);
   if (r.status !== 200) return r.status;
   return ((await r.json()) as { session: { canEdit: boolean } }).session.canEdit ? "edit" : "read";
 };
@@ -104,7 +104,7 @@ describe("session shares", () => {
 
 
 describe("read-only link", () => {
-  it("lets a signed-in holder read until revoked, never run", async () => {
+  it("lets a holder, signed in or not, read until revoked, never run", async () => {
     const r = await w.clients.owner.request(`/api/sessions/${sessionId}/link`, { method: "POST" });
     expect(r.status).toBe(201);
     const { url } = (await r.json()) as { url: string };
@@ -118,18 +118,45 @@ describe("read-only link", () => {
     const q = `?link=${encodeURIComponent(token)}`;
     expect(await canEdit("linkHolder", q)).toBe("read");
     expect(await canEdit("linkHolder", "?link=wrong-token")).toBe(404);
-    expect((await w.anonymous.request(`/api/sessions/${sessionId}${q}`)).status).toBe(401);
     expect((await w.clients.linkHolder.request(`/api/sessions/${sessionId}/export?format=markdown&link=${encodeURIComponent(token)}`)).status).toBe(200);
+    // a holder is known to read the session, so running a cell is refused as read-only
     const run = await w.clients.linkHolder.json(`/api/sessions/${sessionId}/cells${q}`, { source: "1 + 1" });
-    expect(run.status).toBeGreaterThanOrEqual(403);
-    expect(run.status).toBeLessThanOrEqual(404);
+    expect(run.status).toBe(403);
+
+    // signed out: the link reads the session, its cells, objects and export; nothing else
+    expect(await canEdit("anonymous", q)).toBe("read");
+    for (const sub of ["/cells", "/objects"]) expect((await w.anonymous.request(`/api/sessions/${sessionId}${sub}${q}`)).status).toBe(200);
+    expect((await w.anonymous.request(`/api/sessions/${sessionId}/export${q}&format=json`)).status).toBe(200);
+    expect((await w.anonymous.request(`/api/sessions/${sessionId}`)).status).toBe(401);
+    expect((await w.anonymous.request(`/api/sessions/${sessionId}?link=wrong-token`)).status).toBe(404);
+    expect((await w.anonymous.json(`/api/sessions/${sessionId}/cells${q}`, { source: "1 + 1" })).status).toBe(401);
+    expect((await w.anonymous.request(`/api/sessions/${sessionId}/shares${q}`)).status).toBe(401);
 
     expect((await w.clients.owner.request(`/api/sessions/${sessionId}/link`, { method: "DELETE" })).status).toBe(200);
     expect(await canEdit("linkHolder", q)).toBe(404);
+    expect(await canEdit("anonymous", q)).toBe(404);
     expect((await w.clients.owner.request(`/api/sessions/${sessionId}/link`, { method: "DELETE" })).status).toBe(404);
     const published = await lastAudit("link_published");
     expect(published.details).toEqual({ sessionId });
     expect(JSON.stringify((await lastAudit("link_revoked")).details)).not.toContain(token);
+  });
+
+  it("opens a private session of a team to link holders only, not to the team", async () => {
+    const [s] = await db().insert(sessions).values({ title: "sharing flows", ownerId: w.ids.lead, teamId: w.group.teamId }).returning();
+    const teamRead = async () => Promise.all((["member", "guest"] as const).map(async (who) => (await w.clients[who].request(`/api/sessions/${s!.id}`)).status));
+    expect(await teamRead()).toEqual([404, 404]);
+    const r = await w.clients.lead.request(`/api/sessions/${s!.id}/link`, { method: "POST" });
+    expect(r.status).toBe(201);
+    const token = new URL(((await r.json()) as { url: string }).url).searchParams.get("link")!;
+    expect(await teamRead()).toEqual([404, 404]);
+    const [row] = await db().select().from(sessions).where(eq(sessions.id, s!.id));
+    expect(row!.visibility).toBe("private");
+    // the member with the link reads it as a viewer only
+    const withLink = await w.clients.member.request(`/api/sessions/${s!.id}?link=${encodeURIComponent(token)}`);
+    expect(((await withLink.json()) as { session: { access: string } }).session.access).toBe("viewer");
+    expect((await w.clients.lead.request(`/api/sessions/${s!.id}/link`, { method: "DELETE" })).status).toBe(200);
+    // revoking leaves it private (it does not fall back to the team)
+    expect(await teamRead()).toEqual([404, 404]);
   });
 });
 

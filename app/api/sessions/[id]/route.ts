@@ -1,5 +1,5 @@
 import { NextResponse } from "next/server";
-import { requireUser } from "@/lib/auth/current-user";
+import { requireUserOrLink } from "@/lib/auth/current-user";
 import { requireSessionAccess } from "@/lib/auth/access";
 import { route } from "@/lib/http/errors";
 import { linkToken } from "@/lib/sessions/link-token";
@@ -8,9 +8,10 @@ import { ownerName } from "@/lib/sessions/store";
 type Context = { params: Promise<{ id: string }> };
 
 export const GET = route(async (req, { params }: Context) => {
-  const user = await requireUser();
+  const token = linkToken(req);
+  const user = await requireUserOrLink(token);
   const { id } = await params;
-  const { session, role } = await requireSessionAccess(user, id, "read", { linkToken: linkToken(req) });
+  const { session, role } = await requireSessionAccess(user, id, "read", { linkToken: token });
   return NextResponse.json({
     session: {
       id: session.id,

@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
-import { requireUser } from "@/lib/auth/current-user";
+import { requireUser, requireUserOrLink } from "@/lib/auth/current-user";
 import { requireSessionAccess } from "@/lib/auth/access";
 import { readJson } from "@/lib/http/body";
 import { route } from "@/lib/http/errors";
@@ -20,16 +20,18 @@ const NewCell = z
 export const dynamic = "force-dynamic";
 
 export const GET = route(async (req, { params }: Context) => {
-  const user = await requireUser();
+  const token = linkToken(req);
+  const user = await requireUserOrLink(token);
   const { id } = await params;
-  await requireSessionAccess(user, id, "read", { linkToken: linkToken(req) });
+  await requireSessionAccess(user, id, "read", { linkToken: token });
   return NextResponse.json({ cells: (await listCells(id)).map(cellView) });
 });
 
 export const POST = route(async (req, { params }: Context) => {
   const user = await requireUser();
   const { id } = await params;
-  await requireSessionAccess(user, id, "edit");
+  // With the link's token a link holder is known to read the session: 403, not 404.
+  await requireSessionAccess(user, id, "edit", { linkToken: linkToken(req) });
   const { source } = await readJson(req, NewCell, { maxBytes: MAX_SOURCE_BYTES + 1024 });
   return runCell(user, id, source);
 });

@@ -1,5 +1,5 @@
 import { NextResponse } from "next/server";
-import { requireUser } from "@/lib/auth/current-user";
+import { requireUserOrLink } from "@/lib/auth/current-user";
 import { requireSessionAccess } from "@/lib/auth/access";
 import { route } from "@/lib/http/errors";
 import { linkToken } from "@/lib/sessions/link-token";
@@ -9,8 +9,9 @@ import { objectView } from "@/lib/sessions/views";
 type Context = { params: Promise<{ id: string }> };
 
 export const GET = route(async (req, { params }: Context) => {
-  const user = await requireUser();
+  const token = linkToken(req);
+  const user = await requireUserOrLink(token);
   const { id } = await params;
-  await requireSessionAccess(user, id, "read", { linkToken: linkToken(req) });
+  await requireSessionAccess(user, id, "read", { linkToken: token });
   return NextResponse.json({ objects: (await listObjects(id)).map(objectView) });
 });

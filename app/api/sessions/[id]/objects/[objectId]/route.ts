@@ -4,6 +4,7 @@ import { requireUser } from "@/lib/auth/current-user";
 import { requireSessionAccess } from "@/lib/auth/access";
 import { readJson } from "@/lib/http/body";
 import { HttpError, notFound, route } from "@/lib/http/errors";
+import { linkToken } from "@/lib/sessions/link-token";
 import { deleteObject, renameObject } from "@/lib/sessions/store";
 import { objectView } from "@/lib/sessions/views";
 
@@ -25,7 +26,7 @@ const Rename = z
 export const PATCH = route(async (req, { params }: Context) => {
   const user = await requireUser();
   const { id, objectId } = await params;
-  await requireSessionAccess(user, id, "edit");
+  await requireSessionAccess(user, id, "edit", { linkToken: linkToken(req) });
   const { name } = await readJson(req, Rename);
   if (!UUID.test(objectId)) throw notFound("The object");
   try {
@@ -39,10 +40,10 @@ export const PATCH = route(async (req, { params }: Context) => {
   }
 });
 
-export const DELETE = route(async (_req, { params }: Context) => {
+export const DELETE = route(async (req, { params }: Context) => {
   const user = await requireUser();
   const { id, objectId } = await params;
-  await requireSessionAccess(user, id, "edit");
+  await requireSessionAccess(user, id, "edit", { linkToken: linkToken(req) });
   if (!UUID.test(objectId) || !(await deleteObject(id, objectId))) throw notFound("The object");
   return NextResponse.json({ deleted: true });
 });

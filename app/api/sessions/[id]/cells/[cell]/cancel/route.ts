@@ -3,16 +3,17 @@ import { requireUser } from "@/lib/auth/current-user";
 import { requireSessionAccess } from "@/lib/auth/access";
 import { HttpError, notFound, route } from "@/lib/http/errors";
 import { requestCancel } from "@/lib/sessions/cancel-channel";
+import { linkToken } from "@/lib/sessions/link-token";
 import { getCell } from "@/lib/sessions/store";
 
 type Context = { params: Promise<{ id: string; cell: string }> };
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
-export const POST = route(async (_req, { params }: Context) => {
+export const POST = route(async (req, { params }: Context) => {
   const user = await requireUser();
   const { id, cell: cellId } = await params;
-  await requireSessionAccess(user, id, "edit");
+  await requireSessionAccess(user, id, "edit", { linkToken: linkToken(req) });
   const cell = UUID.test(cellId) ? await getCell(id, cellId) : undefined;
   if (!cell) throw notFound("The cell");
   if (cell.status !== "running") throw new HttpError(409, "not_running", `The cell is not running (it is ${cell.status}).`);
