@@ -9,12 +9,20 @@ import { Console } from "./_console/console";
 // Badges past this many would push the header wider than the window.
 const TEAMS_SHOWN = 2;
 
+const one = (v: string | string[] | undefined): string | null => (typeof v === "string" && v !== "" ? v : null);
+
 /// The console page: the header, then the console (sessions, shelf, transcript, input);
-/// `?session=<id>` opens that session.
-export default async function ConsolePage({ searchParams }: { searchParams: Promise<{ session?: string | string[] }> }) {
+/// `?session=<id>` opens that session, and `&link=<token>` reads it through a published
+/// read-only link, which also works signed out (proxy.ts lets that visit through).
+export default async function ConsolePage({ searchParams }: { searchParams: Promise<{ session?: string | string[]; link?: string | string[] }> }) {
   const user = await currentUser();
-  if (!user) redirect("/sign-in");
-  const { session } = await searchParams;
+  const params = await searchParams;
+  const session = one(params.session);
+  const link = one(params.link);
+  if (!user) {
+    if (!session || !link) redirect("/sign-in");
+    return <LinkVisitorPage sessionId={session} link={link} />;
+  }
   const teamRows = await db()
     .select({ id: teams.id, name: teams.name, role: memberships.role })
     .from(memberships)
@@ -39,6 +47,9 @@ export default async function ConsolePage({ searchParams }: { searchParams: Prom
               +{teamRows.length - TEAMS_SHOWN} more teams
             </span>
           )}
+          <Link href="/teams" className="text-ink-soft underline">
+            Teams
+          </Link>
           {user.siteRole === "admin" && (
             <Link href="/mailbox" className="text-ink-soft underline">
               Mailbox
@@ -52,7 +63,28 @@ export default async function ConsolePage({ searchParams }: { searchParams: Prom
           </Link>
         </nav>
       </header>
-      <Console initialSessionId={typeof session === "string" ? session : null} />
+      <Console initialSessionId={session} linkToken={link} signedIn />
+    </div>
+  );
+}
+
+/// A signed-out visitor with a read-only link: the session alone, no account controls.
+function LinkVisitorPage({ sessionId, link }: { sessionId: string; link: string }) {
+  const back = `/?session=${encodeURIComponent(sessionId)}&link=${encodeURIComponent(link)}`;
+  return (
+    <div className="flex h-screen flex-col">
+      <header className="flex items-center justify-between border-b border-ink/10 bg-white px-5 py-3 dark:border-paper/10 dark:bg-night-panel dark:text-paper">
+        <p className="font-mono text-lg font-semibold tracking-tight">
+          Ringside<span className="text-signal">.</span>
+        </p>
+        <nav className="flex items-center gap-4 text-sm">
+          <span className="text-ink-soft">Visiting through a read-only link</span>
+          <Link href={`/sign-in?callbackUrl=${encodeURIComponent(back)}`} className="text-ink-soft underline">
+            Sign in
+          </Link>
+        </nav>
+      </header>
+      <Console initialSessionId={sessionId} linkToken={link} signedIn={false} />
     </div>
   );
 }

@@ -1,12 +1,15 @@
 "use client";
 /// The Ringside console: sessions and the named-object shelf on the left, the
-/// transcript in the middle, the input at the bottom, the command palette over all.
-/// The session state lives here; the views under ./views only draw it.
+/// transcript in the middle, the input at the bottom, the command palette over all, and
+/// the sharing, export and import dialogs. The session state lives here; the views under
+/// ./views only draw it. Opened with a read-only link (`linkToken`), the console reads
+/// that one session with the token on every call and offers nothing that changes it.
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { mutate } from "swr";
 import { envFromObjects } from "@/lib/editor/notation-env";
 import { GUIDED_TOUR, type GuidedExample } from "@/lib/examples/tour";
-import { ApiError, cancelCell, createSession, deleteObject, exportUrl, keys, renameObject } from "./api/client";
+import { ApiError, cancelCell, createSession, deleteObject, errorOf, exportUrl, keys, renameObject, type ExportFormat } from "./api/client";
+import { importSession } from "./api/sharing";
 import { runCell } from "./api/cell-stream";
 import type { NamedObject } from "./api/types";
 import { InputEditor, type EditorHandle } from "./input-editor";
@@ -18,26 +21,53 @@ import { CommandPalette, type PaletteCommand } from "./views/command-palette";
 import { HistorySearch } from "./views/history-search";
 import { KeyboardHelp } from "./views/keyboard-help";
 import { Modal } from "./views/modal";
+import { ShareObjectPanel } from "./views/object-share-dialog";
+import { ShareSessionPanel } from "./views/share-dialog";
+import { SharedObjectsPanel } from "./views/shared-objects-dialog";
+import { TransferPanel } from "./views/transfer-dialog";
 import { SessionsPanel } from "./views/sessions-panel";
 import { Shelf } from "./views/shelf";
 import { buttonPrimary, buttonSecondary, focusRing, kbd, panelHeading } from "./views/styles";
 import { EmptySessionWelcome, TourList } from "./views/tour";
 
-type DialogName = "history" | "tour" | "help" | null;
+type DialogName = "history" | "tour" | "help" | "share" | "transfer" | "shared-objects" | null;
 
 const messageOf = (e: unknown) => (e instanceof ApiError ? e.message : e instanceof Error ? e.message : String(e));
 
-/// Keeps the open session in the address (?session=…), so a reload reopens it.
-function rememberSession(id: string) {
+/// Keeps the open session in the address (?session=…), so a reload reopens it; the link
+/// token stays only while its own session is open.
+function rememberSession(id: string, link: string | null) {
   const url = new URL(window.location.href);
   url.searchParams.set("session", id);
+  if (link) url.searchParams.set("link", link);
+  else url.searchParams.delete("link");
   window.history.replaceState(null, "", url);
 }
 
-/// The console page body; `initialSessionId` comes from the address.
-export function Console({ initialSessionId }: { initialSessionId: string | null }) {
+/// The file name the server proposes (Content-Disposition), else `fallback`.
+function fileNameOf(res: Response, fallback: string): string {
+  const m = /filename="([^"]+)"/.exec(res.headers.get("content-disposition") ?? "");
+  return m?.[1] ?? fallback;
+}
+
+const EXPORT_LABEL: Record<ExportFormat, string> = { latex: "LaTeX", markdown: "Markdown", json: "JSON" };
+const EXPORT_EXT: Record<ExportFormat, string> = { latex: "tex", markdown: "md", json: "json" };
+
+export interface ConsoleProps {
+  /// the session named in the address (?session=)
+  readonly initialSessionId: string | null;
+  /// the read-only link's token from the address (?link=), for `initialSessionId` only
+  readonly linkToken: string | null;
+  /// false for a signed-out visitor who came with a link
+  readonly signedIn: boolean;
+}
+
+/// The console page body.
+export function Console({ initialSessionId, linkToken, signedIn }: ConsoleProps) {
   const [sessionId, setSessionId] = useState<string | null>(initialSessionId);
-  const data = useSessionData(sessionId);
+  const link = linkToken !== null && sessionId === initialSessionId ? linkToken : null;
+  const data = useSessionData(sessionId, link, signedIn);
+  const [sharingObject, setSharingObject] = useState<NamedObject | null>(null);
   const { theme, toggle: toggleTheme } = useTheme();
   const [running, setRunning] = useState<RunningCell | null>(null);
   const [paletteOpen, setPaletteOpen] = useState(false);
@@ -53,12 +83,14 @@ export function Console({ initialSessionId }: { initialSessionId: string | null 
     if (sessionId === null && data.sessions && data.sessions.length > 0) setSessionId(data.sessions[0].id);
   }, [sessionId, data.sessions]);
   useEffect(() => {
-    if (sessionId) rememberSession(sessionId);
-  }, [sessionId]);
+    if (sessionId) rememberSession(sessionId, link);
+  }, [sessionId, link]);
 
   // Running is offered only once the server has said this user may edit the session
-  // (a guest never sees it); with no session yet, the first run creates one.
-  const canEdit = sessionId === null ? true : data.session?.canEdit === true;
+  // (a guest or a link holder never sees it); with no session yet, the first run creates one.
+  const canEdit = sessionId === null ? signedIn : data.session?.canEdit === true;
+  const canShare = signedIn && data.session?.canManageSharing === true;
+  const readOnlyLink = link !== null && data.session !== undefined && !data.session.canEdit;
   const loadingSession = sessionId !== null && !data.session && !data.sessionError;
   const cells = data.cells;
   const objects = data.objects;
@@ -76,6 +108,7 @@ export function Console({ initialSessionId }: { initialSessionId: string | null 
   }, []);
 
   const newSession = useCallback(async () => {
+    if (!signedIn) return;
     try {
       const title = `Session of ${new Date().toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" })}`;
       const created = await createSession(title);
@@ -85,7 +118,7 @@ export function Console({ initialSessionId }: { initialSessionId: string | null 
     } catch (e) {
       setNotice(`Could not create a session: ${messageOf(e)}`);
     }
-  }, [data, openSession]);
+  }, [data, openSession, signedIn]);
 
   const run = useCallback(
     (source: string): boolean => {
@@ -115,14 +148,14 @@ export function Console({ initialSessionId }: { initialSessionId: string | null 
           if (!accepted) editor.current?.setText(source);
         } finally {
           // By key, not through the hook: the first run may have created the session.
-          if (id) await Promise.all([mutate(keys.cells(id)), mutate(keys.objects(id)), mutate(keys.sessions)]);
+          if (id) await Promise.all([mutate(keys.cells(id, link)), mutate(keys.objects(id, link)), mutate(keys.sessions)]);
           runningRef.current = null;
           setRunning(null);
         }
       })();
       return true;
     },
-    [canEdit, sessionId],
+    [canEdit, sessionId, link],
   );
 
   const cancelRunning = useCallback(async () => {
@@ -148,32 +181,47 @@ export function Console({ initialSessionId }: { initialSessionId: string | null 
     editor.current?.setText(e.source);
   }, []);
 
-  const exportTranscript = useCallback(async () => {
-    if (!sessionId) {
-      setNotice("Open a session to export its transcript.");
-      return;
-    }
-    try {
-      const res = await fetch(exportUrl(sessionId));
-      if (res.status === 404) {
-        setNotice("Export is not available yet: the server has no transcript export for this session (404).");
+  const exportTranscript = useCallback(
+    async (format: ExportFormat) => {
+      if (!sessionId) {
+        setNotice("Open a session to export its transcript.");
         return;
       }
-      if (!res.ok) {
-        setNotice(`Export failed: the server answered ${res.status}.`);
-        return;
+      try {
+        const res = await fetch(exportUrl(sessionId, format, link));
+        if (!res.ok) {
+          setNotice(`Export failed: ${(await errorOf(res)).message}`);
+          return;
+        }
+        const blob = await res.blob();
+        const a = document.createElement("a");
+        a.href = URL.createObjectURL(blob);
+        a.download = fileNameOf(res, `transcript.${EXPORT_EXT[format]}`);
+        a.click();
+        URL.revokeObjectURL(a.href);
+        setNotice(`Transcript exported as ${EXPORT_LABEL[format]} (${a.download}).`);
+      } catch (e) {
+        setNotice(`Export failed: ${messageOf(e)}`);
       }
-      const blob = await res.blob();
-      const a = document.createElement("a");
-      a.href = URL.createObjectURL(blob);
-      a.download = `${(data.session?.title ?? "transcript").replace(/[^\w.-]+/g, "-")}.md`;
-      a.click();
-      URL.revokeObjectURL(a.href);
-      setNotice("Transcript exported as Markdown.");
-    } catch (e) {
-      setNotice(`Export failed: ${messageOf(e)}`);
-    }
-  }, [sessionId, data.session?.title]);
+    },
+    [sessionId, link],
+  );
+
+  const importFromFile = useCallback(
+    async (text: string, fileName: string): Promise<string | null> => {
+      try {
+        const { session } = await importSession(text);
+        await data.refreshSessions();
+        setDialog(null);
+        openSession(session.id);
+        setNotice(`Imported “${session.title}” from ${fileName}: ${session.cells} cells, ${session.objects} named objects.`);
+        return null;
+      } catch (e) {
+        return `Could not import ${fileName}: ${messageOf(e)}`;
+      }
+    },
+    [data, openSession],
+  );
 
   const renameOne = useCallback(
     async (o: NamedObject, name: string) => {
@@ -206,14 +254,36 @@ export function Console({ initialSessionId }: { initialSessionId: string | null 
 
   const commands = useMemo((): PaletteCommand[] => {
     const list: PaletteCommand[] = [
-      { id: "new-session", group: "Session", label: "New session", shortcut: "Alt+N", run: () => void newSession() },
-      { id: "export", group: "Session", label: "Export the transcript (Markdown)", shortcut: "Alt+E", run: () => void exportTranscript() },
+      // a signed-out link visitor has no sessions of their own: newSession does nothing for them
+      { id: "new-session", group: "Session", label: signedIn ? "New session" : "New session (sign in first)", shortcut: "Alt+N", run: () => (signedIn ? void newSession() : window.location.assign("/sign-in")) },
+      { id: "transfer", group: "Session", label: signedIn ? "Export or import…" : "Export the transcript…", shortcut: "Alt+E", run: () => setDialog("transfer") },
       { id: "history", group: "Input", label: "Search the input history", shortcut: "Alt+R", run: () => setDialog("history") },
       { id: "tour", group: "Help", label: "Guided first steps", shortcut: "Alt+G", keywords: ["examples", "tour"], run: () => setDialog("tour") },
       { id: "help", group: "Help", label: "Keyboard help", shortcut: "Alt+/", keywords: ["shortcuts", "keys"], run: () => setDialog("help") },
       { id: "reference", group: "Help", label: "Open the notation reference", keywords: ["functions", "properties"], run: () => window.open("/reference", "_blank") },
       { id: "theme", group: "View", label: theme === "dark" ? "Switch to the light theme" : "Switch to the dark theme", shortcut: "Alt+T", run: toggleTheme },
     ];
+    if (sessionId) {
+      for (const format of ["latex", "markdown", "json"] as const) {
+        list.push({ id: `export-${format}`, group: "Export", label: `Export the transcript as ${EXPORT_LABEL[format]}`, keywords: ["download"], run: () => void exportTranscript(format) });
+      }
+    }
+    if (signedIn) {
+      list.push(
+        { id: "import-session", group: "Session", label: "Import a session from a JSON export…", keywords: ["upload", "file"], run: () => setDialog("transfer") },
+        { id: "shared-objects", group: "Sharing", label: "Objects shared with me…", keywords: ["import", "copy"], run: () => setDialog("shared-objects") },
+        { id: "teams", group: "Sharing", label: "Open the Teams page", keywords: ["group", "members", "invite"], run: () => window.location.assign("/teams") },
+      );
+    }
+    if (canShare) {
+      list.push(
+        { id: "share", group: "Sharing", label: "Share this session…", keywords: ["team", "viewer", "editor"], run: () => setDialog("share") },
+        { id: "link", group: "Sharing", label: "Publish or revoke the read-only link…", keywords: ["url", "public"], run: () => setDialog("share") },
+      );
+      for (const o of objects ?? []) {
+        list.push({ id: `share-object-${o.id}`, group: "Sharing", label: `Share named object: ${o.name}`, run: () => setSharingObject(o) });
+      }
+    }
     if (canEdit) {
       list.splice(2, 0, {
         id: "run",
@@ -237,7 +307,7 @@ export function Console({ initialSessionId }: { initialSessionId: string | null 
       list.push({ id: `object-${o.id}`, group: "Recall a named object", label: `Insert name: ${o.name} (${o.type})`, keywords: [o.summary], run: () => insertName(o.name) });
     }
     return list;
-  }, [theme, toggleTheme, canEdit, running, data.sessions, objects, newSession, exportTranscript, run, cancelRunning, insertExample, openSession, insertName]);
+  }, [theme, toggleTheme, canEdit, canShare, signedIn, sessionId, running, data.sessions, objects, newSession, exportTranscript, run, cancelRunning, insertExample, openSession, insertName]);
 
   useEffect(() => {
     const onKey = (e: KeyboardEvent) => {
@@ -255,7 +325,7 @@ export function Console({ initialSessionId }: { initialSessionId: string | null 
         KeyR: () => setDialog("history"),
         KeyX: () => void cancelRunning(),
         KeyG: () => setDialog("tour"),
-        KeyE: () => void exportTranscript(),
+        KeyE: () => setDialog("transfer"),
         KeyT: toggleTheme,
         Slash: () => setDialog("help"),
       };
@@ -267,7 +337,7 @@ export function Console({ initialSessionId }: { initialSessionId: string | null 
     };
     window.addEventListener("keydown", onKey);
     return () => window.removeEventListener("keydown", onKey);
-  }, [newSession, cancelRunning, exportTranscript, toggleTheme]);
+  }, [newSession, cancelRunning, toggleTheme]);
 
   const shownCells = (cells ?? []).filter((c) => !(running && c.id === running.cellId));
   const empty = cells !== undefined && cells.length === 0 && !running;
@@ -275,14 +345,27 @@ export function Console({ initialSessionId }: { initialSessionId: string | null 
   return (
     <div className="grid min-h-0 flex-1 grid-cols-[17rem_minmax(0,1fr)] bg-paper text-ink dark:bg-night dark:text-paper">
       <aside className="flex min-h-0 flex-col gap-4 border-r border-ink/10 bg-paper-deep/40 p-3 dark:border-paper/10 dark:bg-night-panel">
-        <SessionsPanel
-          sessions={data.sessions}
-          error={data.sessionsError}
-          currentId={sessionId}
-          onOpen={openSession}
-          onNew={() => void newSession()}
+        {signedIn ? (
+          <SessionsPanel
+            sessions={data.sessions}
+            error={data.sessionsError}
+            currentId={sessionId}
+            onOpen={openSession}
+            onNew={() => void newSession()}
+            onImport={() => setDialog("transfer")}
+          />
+        ) : (
+          <p className="text-sm text-ink-soft dark:text-paper/70">You are reading one session through its read-only link. Sign in to work in sessions of your own.</p>
+        )}
+        <Shelf
+          objects={objects}
+          canEdit={canEdit}
+          onInsert={insertName}
+          onRename={renameOne}
+          onDelete={deleteOne}
+          onShare={canShare ? setSharingObject : undefined}
+          onOpenShared={signedIn ? () => setDialog("shared-objects") : undefined}
         />
-        <Shelf objects={objects} canEdit={canEdit} onInsert={insertName} onRename={renameOne} onDelete={deleteOne} />
       </aside>
 
       <main className="flex min-h-0 min-w-0 flex-col">
@@ -291,7 +374,9 @@ export function Console({ initialSessionId }: { initialSessionId: string | null 
             {data.session?.title ?? (sessionId ? "…" : "No session open")}
           </h1>
           {data.session && !data.session.canEdit && (
-            <span className="rounded bg-signal-soft px-1.5 py-0.5 text-xs text-ink dark:bg-signal/30 dark:text-paper">read-only</span>
+            <span className="rounded bg-signal-soft px-1.5 py-0.5 text-xs text-ink dark:bg-signal/30 dark:text-paper" data-testid="read-only-badge">
+              {readOnlyLink ? "read-only shared link" : "read-only"}
+            </span>
           )}
           <span className="ml-auto flex items-center gap-1.5">
             <button type="button" className={buttonSecondary} onClick={() => setPaletteOpen(true)} title="Command palette">
@@ -300,18 +385,15 @@ export function Console({ initialSessionId }: { initialSessionId: string | null 
             <button type="button" className={buttonSecondary} onClick={() => setDialog("tour")} title="Guided first steps (Alt+G)">
               First steps
             </button>
-            {sessionId && (
-              <a
-                href={exportUrl(sessionId)}
-                className={buttonSecondary}
-                title="Export the transcript as Markdown (Alt+E)"
-                onClick={(e) => {
-                  e.preventDefault();
-                  void exportTranscript();
-                }}
-              >
+            {canShare && (
+              <button type="button" className={buttonSecondary} onClick={() => setDialog("share")} title="Share this session, publish a read-only link">
+                Share
+              </button>
+            )}
+            {(sessionId || signedIn) && (
+              <button type="button" className={buttonSecondary} onClick={() => setDialog("transfer")} title="Export the transcript or import a session (Alt+E)">
                 Export
-              </a>
+              </button>
             )}
             <button type="button" className={buttonSecondary} onClick={() => setDialog("help")} title="Keyboard help (Alt+/)">
               Keys
@@ -322,8 +404,18 @@ export function Console({ initialSessionId }: { initialSessionId: string | null 
           </span>
         </div>
 
+        {readOnlyLink && (
+          <p role="note" className="border-b border-signal/30 bg-signal-soft/40 px-4 py-1.5 text-sm dark:bg-signal/15" data-testid="link-banner">
+            You are reading {data.session?.ownerName ? `${data.session.ownerName}'s session` : "this session"} through a read-only shared link:
+            the transcript and named objects can be read and exported, nothing can be run.
+          </p>
+        )}
         <section aria-label="Transcript" tabIndex={0} className={`min-h-0 flex-1 overflow-y-auto px-4 ${focusRing}`}>
-          {data.sessionError && <p role="alert" className="py-3 text-sm text-red-700 dark:text-red-300">{data.sessionError}</p>}
+          {data.sessionError && (
+            <p role="alert" className="py-3 text-sm text-red-700 dark:text-red-300">
+              {link && data.sessionStatus === 404 ? "This read-only link does not open a session: it was revoked, or the address is incomplete." : data.sessionError}
+            </p>
+          )}
           {data.cellsError && !data.sessionError && <p role="alert" className="py-3 text-sm text-red-700 dark:text-red-300">{data.cellsError}</p>}
           {empty && <EmptySessionWelcome onInsert={insertExample} onOpenTour={() => setDialog("tour")} canRun={canEdit} />}
           {sessionId === null && data.sessions?.length === 0 && (
@@ -373,7 +465,9 @@ export function Console({ initialSessionId }: { initialSessionId: string | null 
             </div>
           ) : (
             <p className="py-2 text-sm text-ink-soft dark:text-paper/70">
-              You can read this session; running cells needs edit access, which its owner can give you.
+              {readOnlyLink
+                ? "This is a read-only shared link: cells cannot be run through it."
+                : "You can read this session; running cells needs edit access, which its owner can give you."}
             </p>
           )}
         </section>
@@ -393,6 +487,25 @@ export function Console({ initialSessionId }: { initialSessionId: string | null 
         <div className="max-h-[70vh] overflow-y-auto pr-1">
           <TourList onInsert={insertExample} canRun={canEdit} />
         </div>
+      </Modal>
+      <Modal open={dialog === "share" && sessionId !== null} title={`Share “${data.session?.title ?? "this session"}”`} onClose={() => setDialog(null)}>
+        {sessionId && <ShareSessionPanel sessionId={sessionId} onChanged={setNotice} />}
+      </Modal>
+      <Modal open={sharingObject !== null} title={`Share the named object ${sharingObject?.name ?? ""}`} onClose={() => setSharingObject(null)}>
+        {sharingObject && <ShareObjectPanel object={sharingObject} onChanged={setNotice} />}
+      </Modal>
+      <Modal open={dialog === "shared-objects"} title="Objects shared with me" onClose={() => setDialog(null)}>
+        <SharedObjectsPanel
+          targetSessionId={canEdit ? sessionId : null}
+          onImported={(notice) => {
+            setNotice(notice);
+            setDialog(null);
+            void data.refreshObjects();
+          }}
+        />
+      </Modal>
+      <Modal open={dialog === "transfer"} title={signedIn ? "Export or import" : "Export the transcript"} onClose={() => setDialog(null)}>
+        <TransferPanel canExport={sessionId !== null} canImport={signedIn} onExport={exportTranscript} onImport={importFromFile} />
       </Modal>
       <Modal open={dialog === "help"} title="Keyboard" onClose={() => setDialog(null)}>
         <KeyboardHelp />

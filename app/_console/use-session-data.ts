@@ -1,6 +1,7 @@
 "use client";
 /// The session's documents through SWR: the session list, the open session, its cells
-/// and its named objects, with their errors as messages.
+/// and its named objects, with their errors as messages. A read-only link's token is part
+/// of every key, so the holder's requests carry it; a signed-out visitor has no session list.
 import useSWR from "swr";
 import { ApiError, fetchJson, keys } from "./api/client";
 import type { Cell, NamedObject, SessionDetail, SessionSummary } from "./api/types";
@@ -9,20 +10,22 @@ const messageOf = (e: unknown): string | null =>
   e === undefined || e === null ? null : e instanceof ApiError ? e.message : "The server could not be reached.";
 
 /// Everything the console reads about `sessionId` (null: no session open).
-export function useSessionData(sessionId: string | null) {
-  const sessions = useSWR<{ sessions: SessionSummary[] }>(keys.sessions, fetchJson);
-  const session = useSWR<{ session: SessionDetail }>(sessionId ? keys.session(sessionId) : null, fetchJson);
-  const cells = useSWR<{ cells: Cell[] }>(sessionId ? keys.cells(sessionId) : null, fetchJson);
-  const objects = useSWR<{ objects: NamedObject[] }>(sessionId ? keys.objects(sessionId) : null, fetchJson);
+export function useSessionData(sessionId: string | null, link: string | null, signedIn: boolean) {
+  const sessions = useSWR<{ sessions: SessionSummary[] }>(signedIn ? keys.sessions : null, fetchJson);
+  const session = useSWR<{ session: SessionDetail }>(sessionId ? keys.session(sessionId, link) : null, fetchJson);
+  const cells = useSWR<{ cells: Cell[] }>(sessionId ? keys.cells(sessionId, link) : null, fetchJson);
+  const objects = useSWR<{ objects: NamedObject[] }>(sessionId ? keys.objects(sessionId, link) : null, fetchJson);
   return {
     sessions: sessions.data?.sessions,
     sessionsError: messageOf(sessions.error),
     session: session.data?.session,
     sessionError: messageOf(session.error),
+    sessionStatus: session.error instanceof ApiError ? session.error.status : null,
     cells: cells.data?.cells,
     cellsError: messageOf(cells.error),
     objects: objects.data?.objects,
     refreshSessions: () => sessions.mutate(),
+    refreshSession: () => session.mutate(),
     refreshCells: () => cells.mutate(),
     refreshObjects: () => objects.mutate(),
   };

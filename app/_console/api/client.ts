@@ -28,7 +28,14 @@ export async function errorOf(res: Response): Promise<ApiError> {
   return new ApiError(res.status, code, message);
 }
 
-async function send<T>(url: string, init?: RequestInit): Promise<T> {
+/// Adds a read-only link's token to an API address: every call made for a link holder
+/// carries it (`?link=`), or the server cannot tell the holder from a stranger.
+export function withLink(url: string, link: string | null): string {
+  if (!link) return url;
+  return `${url}${url.includes("?") ? "&" : "?"}link=${encodeURIComponent(link)}`;
+}
+
+export async function send<T>(url: string, init?: RequestInit): Promise<T> {
   const res = await fetch(url, {
     ...init,
     headers: { accept: "application/json", ...(init?.body ? { "content-type": "application/json" } : {}) },
@@ -40,12 +47,17 @@ async function send<T>(url: string, init?: RequestInit): Promise<T> {
 /// The SWR fetcher: GET a JSON document.
 export const fetchJson = <T>(url: string): Promise<T> => send<T>(url);
 
-/// SWR keys of the documents the console reads.
+/// SWR keys of the documents the console reads; `link` is the page's read-only link
+/// token (null when the visitor came without one).
 export const keys = {
   sessions: "/api/sessions",
-  session: (id: string) => `/api/sessions/${id}`,
-  cells: (id: string) => `/api/sessions/${id}/cells`,
-  objects: (id: string) => `/api/sessions/${id}/objects`,
+  session: (id: string, link: string | null = null) => withLink(`/api/sessions/${id}`, link),
+  cells: (id: string, link: string | null = null) => withLink(`/api/sessions/${id}/cells`, link),
+  objects: (id: string, link: string | null = null) => withLink(`/api/sessions/${id}/objects`, link),
+  sharedObjects: "/api/objects",
+  teams: "/api/teams",
+  sessionShares: (id: string) => `/api/sessions/${id}/shares`,
+  objectShares: (objectId: string) => `/api/objects/${objectId}/shares`,
 } as const;
 
 /// Creates a session.
@@ -74,5 +86,9 @@ export const renameObject = (sessionId: string, objectId: string, name: string) 
 export const deleteObject = (sessionId: string, objectId: string) =>
   send<{ deleted: true }>(`/api/sessions/${sessionId}/objects/${objectId}`, { method: "DELETE" });
 
-/// The transcript export address (the route arrives in a later issue).
-export const exportUrl = (sessionId: string) => `/api/sessions/${sessionId}/export?format=markdown`;
+/// The transcript export formats of GET /api/sessions/:id/export.
+export type ExportFormat = "latex" | "markdown" | "json";
+
+/// The transcript export address in `format`, carrying the link token when there is one.
+export const exportUrl = (sessionId: string, format: ExportFormat, link: string | null = null) =>
+  withLink(`/api/sessions/${sessionId}/export?format=${format}`, link);

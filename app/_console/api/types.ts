@@ -72,7 +72,17 @@ export interface NamedObject {
   readonly summary: string;
   readonly source: string;
   readonly sourceCellId: string | null;
+  /// where an imported copy came from (a shared object or a JSON export); null otherwise
+  readonly origin?: ObjectOrigin | null;
   readonly updatedAt: string;
+}
+
+export interface ObjectOrigin {
+  readonly kind: string;
+  readonly sessionTitle?: string;
+  readonly name?: string;
+  readonly ownerName?: string;
+  readonly importedAt?: string;
 }
 
 export type Access = "owner" | "editor" | "viewer";
@@ -92,6 +102,8 @@ export interface SessionDetail {
   readonly visibility: string;
   readonly access: Access;
   readonly canEdit: boolean;
+  /// the owner or a lead of the session's team: may change its shares and its link
+  readonly canManageSharing?: boolean;
 }
 
 /// One line of the cell stream.

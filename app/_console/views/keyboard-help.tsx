@@ -16,7 +16,7 @@ export const SHORTCUTS: readonly (readonly [string, string])[] = [
   ["Alt+S", "go to the named objects"],
   ["Alt+I", "go to the input"],
   ["Alt+G", "guided first steps"],
-  ["Alt+E", "export the transcript (Markdown)"],
+  ["Alt+E", "export the transcript or import a session"],
   ["Alt+T", "switch between light and dark"],
   ["Alt+/", "this help"],
   ["Escape", "close a dialog or the completion list"],

@@ -1,5 +1,5 @@
 "use client";
-/// The list of sessions the user can open, with a New session button.
+/// The list of sessions the user can open, with New session and Import buttons.
 import type { SessionSummary } from "../api/types";
 import { buttonQuiet, focusRing, panelHeading } from "./styles";
 
@@ -9,17 +9,24 @@ export interface SessionsPanelProps {
   readonly currentId: string | null;
   readonly onOpen: (id: string) => void;
   readonly onNew: () => void;
+  /// opens the import of a JSON export
+  readonly onImport: () => void;
 }
 
 /// Sessions, newest first as the API lists them; the current one is marked.
-export function SessionsPanel({ sessions, error, currentId, onOpen, onNew }: SessionsPanelProps) {
+export function SessionsPanel({ sessions, error, currentId, onOpen, onNew, onImport }: SessionsPanelProps) {
   return (
     <section aria-label="Sessions" className="flex min-h-0 flex-1 flex-col gap-2">
       <div className="flex items-center justify-between">
         <h2 className={panelHeading}>Sessions</h2>
-        <button type="button" onClick={onNew} className={buttonQuiet} title="New session (Alt+N)">
-          + New session
-        </button>
+        <span className="flex gap-0.5">
+          <button type="button" onClick={onImport} className={buttonQuiet} title="Import a session from a JSON export (Alt+E)">
+            Import
+          </button>
+          <button type="button" onClick={onNew} className={buttonQuiet} title="New session (Alt+N)">
+            + New session
+          </button>
+        </span>
       </div>
       {error && <p role="alert" className="text-sm text-red-700 dark:text-red-300">{error}</p>}
       {!sessions && !error && <p className="text-sm text-ink/50 dark:text-paper/50">Loading…</p>}

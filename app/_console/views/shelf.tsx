@@ -1,8 +1,9 @@
 "use client";
 /// The named-object shelf: every object of the session with its type and one-line
-/// summary. Clicking a name inserts it into the input; rename and delete ask first.
+/// summary (and, for an imported copy, where it came from). Clicking a name inserts it
+/// into the input; rename and delete ask first; Share opens the object's sharing dialog.
 import { useState } from "react";
-import type { NamedObject } from "../api/types";
+import type { NamedObject, ObjectOrigin } from "../api/types";
 import { Modal } from "./modal";
 import { buttonPrimary, buttonQuiet, buttonSecondary, focusRing, panelHeading, textInput } from "./styles";
 
@@ -12,12 +13,25 @@ export interface ShelfProps {
   readonly onInsert: (name: string) => void;
   readonly onRename: (o: NamedObject, name: string) => Promise<string | null>;
   readonly onDelete: (o: NamedObject) => Promise<string | null>;
+  /// present when I may share the session's objects (its owner or a lead of its team)
+  readonly onShare?: (o: NamedObject) => void;
+  /// present when I am signed in: opens the objects others shared with me
+  readonly onOpenShared?: () => void;
+}
+
+/// "from Ada's session “Harbour ideals” (b)": where an imported copy came from.
+function originLine(origin: ObjectOrigin): string {
+  if (origin.kind === "object") {
+    const whose = origin.ownerName ? `${origin.ownerName}'s session` : "the session";
+    return `from ${whose} “${origin.sessionTitle ?? ""}”${origin.name ? ` (${origin.name})` : ""}`;
+  }
+  return `from an imported export${origin.sessionTitle ? ` of “${origin.sessionTitle}”` : ""}`;
 }
 
 const NAME = /^[A-Za-z][A-Za-z0-9_']*$/;
 
 /// The shelf of named objects.
-export function Shelf({ objects, canEdit, onInsert, onRename, onDelete }: ShelfProps) {
+export function Shelf({ objects, canEdit, onInsert, onRename, onDelete, onShare, onOpenShared }: ShelfProps) {
   const [renaming, setRenaming] = useState<NamedObject | null>(null);
   const [deleting, setDeleting] = useState<NamedObject | null>(null);
   const [newName, setNewName] = useState("");
@@ -57,7 +71,14 @@ export function Shelf({ objects, canEdit, onInsert, onRename, onDelete }: ShelfP
 
   return (
     <section aria-label="Shelf" className="flex min-h-0 flex-1 flex-col gap-2">
-      <h2 className={panelHeading}>Named objects</h2>
+      <div className="flex items-center justify-between">
+        <h2 className={panelHeading}>Named objects</h2>
+        {onOpenShared && (
+          <button type="button" className={buttonQuiet} onClick={onOpenShared} title="Objects others shared with you">
+            Shared with me
+          </button>
+        )}
+      </div>
       {objects && objects.length === 0 && (
         <p className="text-sm text-ink/60 dark:text-paper/60">
           Nothing yet. <code className="font-mono">name := …</code> puts a value here.
@@ -78,28 +99,42 @@ export function Shelf({ objects, canEdit, onInsert, onRename, onDelete }: ShelfP
               <span className="rounded bg-ink/10 px-1.5 text-[0.7rem] uppercase tracking-wide text-ink-soft dark:bg-paper/10 dark:text-paper/70">
                 {o.type}
               </span>
-              {canEdit && (
+              {(canEdit || onShare) && (
                 <span className="ml-auto flex gap-0.5">
-                  <button
-                    type="button"
-                    className={buttonQuiet}
-                    aria-label={`Rename ${o.name}`}
-                    onClick={() => {
-                      setNewName(o.name);
-                      setRenaming(o);
-                    }}
-                  >
-                    Rename
-                  </button>
-                  <button type="button" className={buttonQuiet} aria-label={`Delete ${o.name}`} onClick={() => setDeleting(o)}>
-                    Delete
-                  </button>
+                  {onShare && (
+                    <button type="button" className={buttonQuiet} aria-label={`Share ${o.name}`} onClick={() => onShare(o)}>
+                      Share
+                    </button>
+                  )}
+                  {canEdit && (
+                    <button
+                      type="button"
+                      className={buttonQuiet}
+                      aria-label={`Rename ${o.name}`}
+                      onClick={() => {
+                        setNewName(o.name);
+                        setRenaming(o);
+                      }}
+                    >
+                      Rename
+                    </button>
+                  )}
+                  {canEdit && (
+                    <button type="button" className={buttonQuiet} aria-label={`Delete ${o.name}`} onClick={() => setDeleting(o)}>
+                      Delete
+                    </button>
+                  )}
                 </span>
               )}
             </div>
             <p className="truncate pl-1 text-xs text-ink/60 dark:text-paper/60" title={o.summary}>
               {o.summary}
             </p>
+            {o.origin && (
+              <p className="truncate pl-1 text-[0.7rem] italic text-ink-soft dark:text-signal-soft" data-testid="object-origin" title={originLine(o.origin)}>
+                {originLine(o.origin)}
+              </p>
+            )}
           </li>
         ))}
       </ul>

@@ -4,6 +4,7 @@ import { requireSessionAccess } from "@/lib/auth/access";
 import { route } from "@/lib/http/errors";
 import { linkToken } from "@/lib/sessions/link-token";
 import { ownerName } from "@/lib/sessions/store";
+import { canManageSharing } from "@/lib/sharing/shares";
 
 type Context = { params: Promise<{ id: string }> };
 
@@ -20,6 +21,7 @@ export const GET = route(async (req, { params }: Context) => {
       visibility: session.visibility,
       access: role,
       canEdit: role === "owner" || role === "editor",
+      canManageSharing: user !== null && (await canManageSharing(user, session)),
     },
   });
 });

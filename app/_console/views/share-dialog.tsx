@@ -1,0 +1,131 @@
+"use client";
+/// Sharing one session: grant a person or a team a role, see and revoke the current
+/// shares, and publish, copy or revoke the read-only link. Only the owner or a lead of the
+/// session's team may (the server answers 403 to anyone else, shown as it says).
+import { useRef, useState } from "react";
+import useSWR from "swr";
+import { ApiError, fetchJson, keys } from "../api/client";
+import { publishLink, revokeLink, revokeSessionShare, shareSession, type SessionSharing, type TeamSummary } from "../api/sharing";
+import { ShareForm } from "./share-form";
+import { ShareList } from "./share-list";
+import { buttonPrimary, buttonSecondary, panelHeading, textInput } from "./styles";
+
+const messageOf = (e: unknown) => (e instanceof ApiError || e instanceof Error ? e.message : String(e));
+
+/// The dialog's body for the session `sessionId` (rendered inside a Modal).
+export function ShareSessionPanel({ sessionId, onChanged }: { sessionId: string; onChanged: (notice: string) => void }) {
+  const sharing = useSWR<SessionSharing>(keys.sessionShares(sessionId), fetchJson);
+  const teams = useSWR<{ teams: TeamSummary[] }>(keys.teams, fetchJson);
+  const [linkProblem, setLinkProblem] = useState<string | null>(null);
+  const [copied, setCopied] = useState<string | null>(null);
+  const urlField = useRef<HTMLInputElement>(null);
+
+  if (sharing.error) {
+    return (
+      <p role="alert" className="text-sm text-red-700 dark:text-red-300">
+        {messageOf(sharing.error)}
+      </p>
+    );
+  }
+  const shareable = (teams.data?.teams ?? []).filter((t) => t.role !== "guest");
+  const url = sharing.data?.link.url ?? null;
+
+  const linkAction = async (what: () => Promise<unknown>, done: string) => {
+    setLinkProblem(null);
+    setCopied(null);
+    try {
+      await what();
+      await sharing.mutate();
+      onChanged(done);
+    } catch (e) {
+      setLinkProblem(messageOf(e));
+    }
+  };
+
+  const copy = async () => {
+    if (!url) return;
+    try {
+      await navigator.clipboard.writeText(url);
+      setCopied("Copied the link.");
+    } catch {
+      // No clipboard permission: select the address so Ctrl+C copies it.
+      urlField.current?.select();
+      setCopied("Selected the link: press Ctrl+C to copy it.");
+    }
+  };
+
+  return (
+    <div className="flex flex-col gap-4">
+      <section aria-label="People and teams" className="flex flex-col gap-2">
+        <h3 className={panelHeading}>People and teams</h3>
+        <ShareForm
+          teams={shareable}
+          onShare={async (grantee, role) => {
+            try {
+              const { share } = await shareSession(sessionId, grantee, role);
+              await sharing.mutate();
+              onChanged(`Shared with ${share.grantee.name || ("email" in grantee ? grantee.email : "the team")} as ${share.role}.`);
+              return null;
+            } catch (e) {
+              return messageOf(e);
+            }
+          }}
+        />
+        <ShareList
+          shares={sharing.data?.shares}
+          onRevoke={async (s) => {
+            try {
+              await revokeSessionShare(sessionId, s.id);
+              await sharing.mutate();
+              onChanged(`Revoked the share of ${s.grantee.name}.`);
+              return null;
+            } catch (e) {
+              return messageOf(e);
+            }
+          }}
+        />
+      </section>
+
+      <section aria-label="Read-only link" className="flex flex-col gap-2">
+        <h3 className={panelHeading}>Read-only link</h3>
+        <p className="text-xs text-ink/60 dark:text-paper/60">
+          Anyone holding the link reads the transcript and the named objects, signed in or not; nobody runs cells through it.
+          Revoking it stops the address at once.
+        </p>
+        {url ? (
+          <>
+            <label className="text-sm">
+              Link address
+              <input ref={urlField} readOnly className={`${textInput} font-mono text-xs`} value={url} onFocus={(e) => e.currentTarget.select()} />
+            </label>
+            <div className="flex gap-2">
+              <button type="button" className={buttonSecondary} onClick={() => void copy()}>
+                Copy the link
+              </button>
+              <button type="button" className={buttonSecondary} onClick={() => void linkAction(() => revokeLink(sessionId), "The read-only link is revoked.")}>
+                Revoke the link
+              </button>
+            </div>
+          </>
+        ) : (
+          <div>
+            <button
+              type="button"
+              className={buttonPrimary}
+              disabled={!sharing.data}
+              onClick={() => void linkAction(() => publishLink(sessionId), "Published a read-only link.")}
+            >
+              Publish a read-only link
+            </button>
+          </div>
+        )}
+        {copied && <p className="text-xs text-ink-soft dark:text-signal-soft">{copied}</p>}
+        {linkProblem && (
+          <p role="alert" className="text-sm text-red-700 dark:text-red-300">
+            {linkProblem}
+          </p>
+        )}
+      </section>
+    </div>
+  );
+}

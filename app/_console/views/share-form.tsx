@@ -1,0 +1,91 @@
+"use client";
+/// The form that grants a role: to a person by e-mail or to one of my teams, as a reader
+/// (viewer) or as someone who may run cells (editor). Used for sessions and named objects.
+import { useState } from "react";
+import type { GranteeInput, ShareRole, TeamSummary } from "../api/sharing";
+import { buttonPrimary, textInput } from "./styles";
+
+export interface ShareFormProps {
+  /// teams I may share with (lead or member; guests cannot share with their team)
+  readonly teams: readonly TeamSummary[];
+  readonly onShare: (grantee: GranteeInput, role: ShareRole) => Promise<string | null>;
+}
+
+const EMAIL = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
+
+/// Grantee and role, then "Share"; the server's refusal is shown under the form.
+export function ShareForm({ teams, onShare }: ShareFormProps) {
+  const [kind, setKind] = useState<"user" | "team">(teams.length > 0 ? "team" : "user");
+  const [email, setEmail] = useState("");
+  const [teamId, setTeamId] = useState(teams[0]?.id ?? "");
+  const [role, setRole] = useState<ShareRole>("viewer");
+  const [problem, setProblem] = useState<string | null>(null);
+  const [busy, setBusy] = useState(false);
+
+  const submit = async () => {
+    if (kind === "user" && !EMAIL.test(email.trim())) return setProblem("Type the e-mail address of a Ringside account.");
+    if (kind === "team" && !teamId) return setProblem("Choose one of your teams.");
+    setBusy(true);
+    setProblem(null);
+    const err = await onShare(kind === "user" ? { email: email.trim() } : { teamId }, role);
+    setBusy(false);
+    if (err) setProblem(err);
+    else setEmail("");
+  };
+
+  return (
+    <form
+      aria-label="Share with"
+      className="flex flex-col gap-2"
+      onSubmit={(e) => {
+        e.preventDefault();
+        void submit();
+      }}
+    >
+      <fieldset className="flex gap-4 text-sm">
+        <legend className="sr-only">Share with a person or a team</legend>
+        <label className="flex items-center gap-1">
+          <input type="radio" name="grantee-kind" checked={kind === "user"} onChange={() => setKind("user")} /> A person
+        </label>
+        <label className="flex items-center gap-1">
+          <input type="radio" name="grantee-kind" checked={kind === "team"} disabled={teams.length === 0} onChange={() => setKind("team")} /> A team
+        </label>
+      </fieldset>
+      <div className="flex items-end gap-2">
+        {kind === "user" ? (
+          <label className="min-w-0 flex-1 text-sm">
+            E-mail address
+            <input className={textInput} type="email" value={email} onChange={(e) => setEmail(e.target.value)} placeholder="name@example.org" />
+          </label>
+        ) : (
+          <label className="min-w-0 flex-1 text-sm">
+            Team
+            <select className={textInput} value={teamId} onChange={(e) => setTeamId(e.target.value)}>
+              {teams.map((t) => (
+                <option key={t.id} value={t.id}>
+                  {t.name}
+                </option>
+              ))}
+            </select>
+          </label>
+        )}
+        <label className="text-sm">
+          Role
+          <select className={textInput} value={role} onChange={(e) => setRole(e.target.value as ShareRole)}>
+            <option value="viewer">viewer — reads</option>
+            <option value="editor">editor — also changes it</option>
+          </select>
+        </label>
+        <button type="submit" className={buttonPrimary} disabled={busy}>
+          Share
+        </button>
+      </div>
+      {teams.length === 0 && <p className="text-xs text-ink/60 dark:text-paper/60">You lead or belong to no team yet; share with a person by e-mail.</p>}
+      {problem && (
+        <p role="alert" className="text-sm text-red-700 dark:text-red-300">
+          {problem}
+        </p>
+      )}
+    </form>
+  );
+}
