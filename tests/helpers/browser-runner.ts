@@ -1,5 +1,6 @@
 /// Runs every tests/browser/*.ts file in Debian's chromium through playwright-core and
 /// writes `{ numPassedTests, numFailedTests }` to the file named by the first argument.
+/// Further arguments name the files to run alone (e.g. `sharing.ts`), for iterating on one.
 import { mkdir, mkdtemp, readdir, rm, writeFile } from "node:fs/promises";
 import os from "node:os";
 import path from "node:path";
@@ -28,7 +29,8 @@ async function main(): Promise<number> {
   const artifactsDir = path.join(root, "tests", "artifacts");
   await mkdir(artifactsDir, { recursive: true });
 
-  for (const file of (await readdir(browserDir)).filter((f) => f.endsWith(".ts")).sort()) {
+  const only = process.argv.slice(3);
+  for (const file of (await readdir(browserDir)).filter((f) => f.endsWith(".ts") && (only.length === 0 || only.includes(f))).sort()) {
     await import(path.join(browserDir, file));
   }
 

@@ -1,7 +1,7 @@
 "use client";
 /// The form that grants a role: to a person by e-mail or to one of my teams, as a reader
 /// (viewer) or as someone who may run cells (editor). Used for sessions and named objects.
-import { useState } from "react";
+import { useId, useState } from "react";
 import type { GranteeInput, ShareRole, TeamSummary } from "../api/sharing";
 import { buttonPrimary, textInput } from "./styles";
 
@@ -15,9 +15,13 @@ const EMAIL = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
 
 /// Grantee and role, then "Share"; the server's refusal is shown under the form.
 export function ShareForm({ teams, onShare }: ShareFormProps) {
-  const [kind, setKind] = useState<"user" | "team">(teams.length > 0 ? "team" : "user");
+  // Until chosen, a team when I have one (the teams may arrive after the first render).
+  const [chosenKind, setKind] = useState<"user" | "team" | null>(null);
+  const kind = chosenKind ?? (teams.length > 0 ? "team" : "user");
   const [email, setEmail] = useState("");
-  const [teamId, setTeamId] = useState(teams[0]?.id ?? "");
+  const [chosenTeam, setTeamId] = useState("");
+  const teamId = teams.some((t) => t.id === chosenTeam) ? chosenTeam : (teams[0]?.id ?? "");
+  const id = useId();
   const [role, setRole] = useState<ShareRole>("viewer");
   const [problem, setProblem] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
@@ -53,29 +57,29 @@ export function ShareForm({ teams, onShare }: ShareFormProps) {
       </fieldset>
       <div className="flex items-end gap-2">
         {kind === "user" ? (
-          <label className="min-w-0 flex-1 text-sm">
-            E-mail address
-            <input className={textInput} type="email" value={email} onChange={(e) => setEmail(e.target.value)} placeholder="name@example.org" />
-          </label>
+          <div className="min-w-0 flex-1 text-sm">
+            <label htmlFor={`${id}-email`}>E-mail address</label>
+            <input id={`${id}-email`} className={textInput} type="email" value={email} onChange={(e) => setEmail(e.target.value)} placeholder="name@example.org" />
+          </div>
         ) : (
-          <label className="min-w-0 flex-1 text-sm">
-            Team
-            <select className={textInput} value={teamId} onChange={(e) => setTeamId(e.target.value)}>
+          <div className="min-w-0 flex-1 text-sm">
+            <label htmlFor={`${id}-team`}>Team</label>
+            <select id={`${id}-team`} className={textInput} value={teamId} onChange={(e) => setTeamId(e.target.value)}>
               {teams.map((t) => (
                 <option key={t.id} value={t.id}>
                   {t.name}
                 </option>
               ))}
             </select>
-          </label>
+          </div>
         )}
-        <label className="text-sm">
-          Role
-          <select className={textInput} value={role} onChange={(e) => setRole(e.target.value as ShareRole)}>
+        <div className="text-sm">
+          <label htmlFor={`${id}-role`}>Role</label>
+          <select id={`${id}-role`} className={textInput} value={role} onChange={(e) => setRole(e.target.value as ShareRole)}>
             <option value="viewer">viewer — reads</option>
             <option value="editor">editor — also changes it</option>
           </select>
-        </label>
+        </div>
         <button type="submit" className={buttonPrimary} disabled={busy}>
           Share
         </button>
