@@ -1,9 +1,11 @@
 /// The console's sharing dialogs end to end (issue 8): the lead opens the share dialog from
 /// the palette and shares a session with the team; a member opens it from their own
-/// sessions list and reads the transcript; a guest reads it but cannot run a cell; the
+/// sessions list, reads the transcript and runs a cell; a guest reads it but cannot run a cell; the
 /// lead publishes a read-only link, which a signed-out visitor reads read-only until the
 /// lead revokes it. A named object shared from the shelf is imported by the member into a
-/// session of their own, its origin shown. Screenshots in tests/artifacts/.
+/// session of their own, its origin shown; the export dialog downloads LaTeX and JSON, and
+/// the JSON file imports as a new session. Screenshots in tests/artifacts/.
+import { readFile } from "node:fs/promises";
 import path from "node:path";
 import type { Page } from "playwright-core";
 import { db } from "@/db/client";
@@ -85,6 +87,12 @@ browserTest("share dialog: the lead shares with the team; a member reads it, a g
   await page.getByRole("region", { name: "Transcript" }).getByText("tide := 6 * 7").waitFor();
   await page.getByRole("region", { name: "Transcript" }).getByText("42").first().waitFor();
   check((await page.getByLabel("Ringside input").count()) === 1, "a member (editor through the team share) is not offered the input");
+  // an editor runs cells in the shared session
+  await page.getByLabel("Ringside input").click();
+  await page.keyboard.type("tide + 1");
+  await page.keyboard.press("Escape");
+  await page.keyboard.press("Enter");
+  await page.getByRole("region", { name: "Transcript" }).getByText("43", { exact: true }).first().waitFor();
   await shot(page, artifactsDir, "share-dialogs-2-member-reads.png");
 
   // a guest of the team reads it (a team share leaves guests viewers) but cannot run a cell
@@ -172,4 +180,32 @@ browserTest("object sharing: shared from the shelf, imported by a member with it
   const origin = page.getByRole("region", { name: "Shelf" }).getByTestId("object-origin");
   await origin.filter({ hasText: `from ${TEST_ACCOUNTS.lead.name}'s session “${title}”` }).waitFor();
   await shot(page, artifactsDir, "share-dialogs-8-object-imported.png");
+});
+
+browserTest("export dialog: LaTeX and JSON downloads; the JSON file imports as a new session", async ({ page, baseUrl, artifactsDir }) => {
+  const title = `Tidepool ledger ${Date.now().toString(36)}`;
+  const { id } = await leadSession(title);
+  await signIn(page, baseUrl, "lead", `/?session=${id}`);
+  await page.getByTestId("session-title").filter({ hasText: title }).waitFor();
+  await page.getByRole("button", { name: "Export", exact: true }).click();
+  const dialog = page.getByRole("dialog", { name: "Export or import" });
+
+  const download = async (label: string) => {
+    const [file] = await Promise.all([page.waitForEvent("download"), dialog.getByRole("button", { name: label, exact: true }).click()]);
+    const where = await file.path();
+    return { name: file.suggestedFilename(), where, text: await readFile(where, "utf8") };
+  };
+  const tex = await download("LaTeX");
+  check(tex.name.endsWith(".tex"), `the LaTeX download is named ${tex.name}`);
+  check(tex.text.includes("\\begin{document}") && tex.text.includes("tide := 6 * 7"), "the LaTeX download lacks the document or the cell source");
+  const json = await download("JSON");
+  check(json.name.endsWith(".json") && JSON.parse(json.text).format === "ringside.session", `the JSON download is not our export: ${json.name}`);
+  await shot(page, artifactsDir, "share-dialogs-9-export-dialog.png");
+
+  await dialog.getByLabel(/A JSON export file/).setInputFiles(json.where);
+  await page.getByTestId("console-notice").filter({ hasText: `Imported “${title}”` }).waitFor();
+  await page.getByTestId("session-title").filter({ hasText: title }).waitFor();
+  await page.getByRole("region", { name: "Transcript" }).getByText("tide := 6 * 7").waitFor();
+  check(new URL(page.url()).searchParams.get("session") !== id, "the import did not open a new session");
+  await shot(page, artifactsDir, "share-dialogs-10-imported.png");
 });
