@@ -254,7 +254,7 @@ export function Console({ initialSessionId, linkToken, signedIn }: ConsoleProps)
 
   const commands = useMemo((): PaletteCommand[] => {
     const list: PaletteCommand[] = [
-      // a signed-out link visitor has no sessions of their own: newSession does nothing for them
+      // a signed-out link visitor has no sessions of their own: the command sends them to sign in
       { id: "new-session", group: "Session", label: signedIn ? "New session" : "New session (sign in first)", shortcut: "Alt+N", run: () => (signedIn ? void newSession() : window.location.assign("/sign-in")) },
       { id: "transfer", group: "Session", label: signedIn ? "Export or import…" : "Export the transcript…", shortcut: "Alt+E", run: () => setDialog("transfer") },
       { id: "history", group: "Input", label: "Search the input history", shortcut: "Alt+R", run: () => setDialog("history") },

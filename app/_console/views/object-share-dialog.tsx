@@ -27,19 +27,23 @@ export function ShareObjectPanel({ object, onChanged }: { object: NamedObject; o
         <span className="font-mono font-semibold">{object.name}</span> ({object.type}): whoever you share it with can read it and
         import a copy into a session of their own; the copy says where it came from.
       </p>
-      <ShareForm
-        teams={(teams.data?.teams ?? []).filter((t) => t.role !== "guest")}
-        onShare={async (grantee, role) => {
-          try {
-            const { share } = await shareObject(object.id, grantee, role);
-            await shares.mutate();
-            onChanged(`Shared ${object.name} with ${share.grantee.name || "them"} as ${share.role}.`);
-            return null;
-          } catch (e) {
-            return messageOf(e);
-          }
-        }}
-      />
+      {teams.data || teams.error ? (
+        <ShareForm
+          teams={(teams.data?.teams ?? []).filter((t) => t.role !== "guest")}
+          onShare={async (grantee, role) => {
+            try {
+              const { share } = await shareObject(object.id, grantee, role);
+              await shares.mutate();
+              onChanged(`Shared ${object.name} with ${share.grantee.name || "them"} as ${share.role}.`);
+              return null;
+            } catch (e) {
+              return messageOf(e);
+            }
+          }}
+        />
+      ) : (
+        <p className="text-sm text-ink/50 dark:text-paper/50">Loading your teams…</p>
+      )}
       <ShareList
         shares={shares.data?.shares}
         onRevoke={async (s) => {

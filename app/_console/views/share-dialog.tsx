@@ -58,19 +58,23 @@ export function ShareSessionPanel({ sessionId, onChanged }: { sessionId: string;
     <div className="flex flex-col gap-4">
       <section aria-label="People and teams" className="flex flex-col gap-2">
         <h3 className={panelHeading}>People and teams</h3>
-        <ShareForm
-          teams={shareable}
-          onShare={async (grantee, role) => {
-            try {
-              const { share } = await shareSession(sessionId, grantee, role);
-              await sharing.mutate();
-              onChanged(`Shared with ${share.grantee.name || ("email" in grantee ? grantee.email : "the team")} as ${share.role}.`);
-              return null;
-            } catch (e) {
-              return messageOf(e);
-            }
-          }}
-        />
+        {teams.data || teams.error ? (
+          <ShareForm
+            teams={shareable}
+            onShare={async (grantee, role) => {
+              try {
+                const { share } = await shareSession(sessionId, grantee, role);
+                await sharing.mutate();
+                onChanged(`Shared with ${share.grantee.name || ("email" in grantee ? grantee.email : "the team")} as ${share.role}.`);
+                return null;
+              } catch (e) {
+                return messageOf(e);
+              }
+            }}
+          />
+        ) : (
+          <p className="text-sm text-ink/50 dark:text-paper/50">Loading your teams…</p>
+        )}
         <ShareList
           shares={sharing.data?.shares}
           onRevoke={async (s) => {

@@ -6,7 +6,8 @@ import type { GranteeInput, ShareRole, TeamSummary } from "../api/sharing";
 import { buttonPrimary, textInput } from "./styles";
 
 export interface ShareFormProps {
-  /// teams I may share with (lead or member; guests cannot share with their team)
+  /// teams I may share with (lead or member; guests cannot share with their team), loaded
+  /// before the form is drawn
   readonly teams: readonly TeamSummary[];
   readonly onShare: (grantee: GranteeInput, role: ShareRole) => Promise<string | null>;
 }
@@ -15,9 +16,9 @@ const EMAIL = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
 
 /// Grantee and role, then "Share"; the server's refusal is shown under the form.
 export function ShareForm({ teams, onShare }: ShareFormProps) {
-  // Until chosen, a team when I have one (the teams may arrive after the first render).
-  const [chosenKind, setKind] = useState<"user" | "team" | null>(null);
-  const kind = chosenKind ?? (teams.length > 0 ? "team" : "user");
+  // A team when I have one. The form is drawn once my teams are known, so this never
+  // changes under the user's hands.
+  const [kind, setKind] = useState<"user" | "team">(teams.length > 0 ? "team" : "user");
   const [email, setEmail] = useState("");
   const [chosenTeam, setTeamId] = useState("");
   const teamId = teams.some((t) => t.id === chosenTeam) ? chosenTeam : (teams[0]?.id ?? "");
