@@ -1,9 +1,7 @@
 import Link from "next/link";
 import { redirect } from "next/navigation";
-import { eq } from "drizzle-orm";
-import { db } from "@/db/client";
-import { memberships, teams } from "@/db/schema";
 import { currentUser } from "@/lib/auth/current-user";
+import { listTeams } from "@/lib/sharing/teams";
 import { Console } from "./_console/console";
 
 // Badges past this many would push the header wider than the window.
@@ -23,12 +21,7 @@ export default async function ConsolePage({ searchParams }: { searchParams: Prom
     if (!session || !link) redirect("/sign-in");
     return <LinkVisitorPage sessionId={session} link={link} />;
   }
-  const teamRows = await db()
-    .select({ id: teams.id, name: teams.name, role: memberships.role })
-    .from(memberships)
-    .innerJoin(teams, eq(teams.id, memberships.teamId))
-    .where(eq(memberships.userId, user.id))
-    .orderBy(teams.name);
+  const teamRows = await listTeams(user);
 
   return (
     <div className="flex h-screen flex-col">
