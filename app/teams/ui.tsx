@@ -3,27 +3,15 @@
 /// that turns the API's `{error: {code, message}}` into a message, and a notice line.
 import Link from "next/link";
 import type { ReactNode } from "react";
+import { send } from "../_console/api/client";
 
-export class ApiError extends Error {
-  constructor(
-    readonly status: number,
-    readonly code: string,
-    message: string,
-  ) {
-    super(message);
-  }
-}
-
-/// Calls the API and returns its JSON, or throws ApiError with the server's message.
-export async function api<T>(path: string, init: { method?: string; body?: unknown } = {}): Promise<T> {
-  const response = await fetch(path, {
+/// Calls the API and returns its JSON, or throws the console's ApiError with the server's
+/// message (one error shape for every page).
+export function api<T>(path: string, init: { method?: string; body?: unknown } = {}): Promise<T> {
+  return send<T>(path, {
     method: init.method ?? (init.body === undefined ? "GET" : "POST"),
-    headers: init.body === undefined ? undefined : { "Content-Type": "application/json" },
     body: init.body === undefined ? undefined : JSON.stringify(init.body),
   });
-  const data = (await response.json().catch(() => null)) as { error?: { code: string; message: string } } | null;
-  if (!response.ok) throw new ApiError(response.status, data?.error?.code ?? "error", data?.error?.message ?? `The server answered ${response.status}.`);
-  return data as T;
 }
 
 export function PageFrame({ title, children, back = true }: { title: string; children: ReactNode; back?: boolean }) {
