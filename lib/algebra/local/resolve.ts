@@ -4,8 +4,8 @@ import { Echelon, kernelBasis } from "../graded/echelon";
 import { gradedQuotient, type GradedQuotient } from "../graded/piece";
 import { type Ideal, idealGroebnerBasis, idealSum } from "../ideal";
 import { checkLimit, checkpoint, type ComputeOptions } from "../options";
-import { degree, type Poly, type PolyRing } from "../index";
-import { GradedFree } from "./free";
+import { degree, type Poly, type PolyRing, terms } from "../index";
+import { densify, GradedFree, type Sparse, sparsify } from "./free";
 
 /// β_{i,j} for one homological degree i.
 export interface BettiColumn {
@@ -38,7 +38,10 @@ export interface DegreeData<C> {
   i: number;
   j: number;
   F: GradedFree<C>;
-  /// A basis of (K_i)_j and of (m·K_i)_j, vectors of F_j.
+  /// The global coordinates of F_j of the group (one multidegree, or all of F_j) that the
+  /// vectors below live in, densely.
+  block: readonly number[];
+  /// A basis of (K_i)_j and of (m·K_i)_j inside that group.
   kernel: Echelon<C>;
   decomposable: Echelon<C>;
 }
@@ -54,12 +57,29 @@ export interface ResolveRequest<C> {
   inspect?: (d: DegreeData<C>) => void;
 }
 
+/// Whether every element of a Gröbner basis is a monomial (then the ideal is monomial and
+/// everything below is Z^n-graded).
+function isMonomialIdeal(I: Ideal): boolean {
+  return idealGroebnerBasis(I).every((g) => terms(I.ring, g).length === 1);
+}
+
+/// The multidegree one variable lower, or null when it leaves N^n.
+function lowerKey(key: string, v: number): string | null {
+  if (key === "*") return key;
+  const e = key.split(",").map(Number);
+  if (e[v] === 0) return null;
+  e[v]--;
+  return e.join(",");
+}
+
 /// The minimal graded free resolution of R/I over R = S/J up to homological degree
 /// `length`, computed degree by degree by linear algebra on the graded pieces R_d: in
 /// degree j the syzygies K_{i,j} of the last module are known; those of the form
 /// x_v·K_{i,j−w_v} span the decomposable part and a complement of it in K_{i,j} gives the
 /// new generators of F_{i+1} (graded Nakayama). dim K_{i,j} follows from exactness, so
 /// the kernel is computed by elimination only in degrees where new generators appear.
+/// When J and I are monomial ideals every module and map is Z^n-graded, and each degree
+/// splits into independent blocks, one per multidegree (common practice).
 export function resolveDegreewise<C>(req: ResolveRequest<C>): QuotientResolution {
   const { opts } = req;
   const S = req.ring.ring;
@@ -71,13 +91,16 @@ export function resolveDegreewise<C>(req: ResolveRequest<C>): QuotientResolution
   if (!Number.isInteger(n) || n < 0) throw new AlgebraError("runtime", "resolution: the length must be a non-negative integer");
   const plan = degreePlan(S, R, Q, req.module, n, req.degree);
   checkLimit(opts, "maxDegree", plan.D === Infinity ? 0 : plan.D, "the internal degree of the resolution");
+  const multi = isMonomialIdeal(req.ring) && isMonomialIdeal(req.module);
+  const origin = new Array<number>(R.n).fill(0);
+  const maxW = Math.max(...R.weights);
 
   // F_{−1} = the module R/I itself, as one generator over the pieces of S/(J + I).
-  let target = new GradedFree<C>(Q);
-  target.addGenerator(0, []);
-  let F = new GradedFree<C>(R);
-  F.addGenerator(0, [K.one]);
-  let prevKernelDims = new Map<number, number>();
+  let target = new GradedFree<C>(Q, multi);
+  target.addGenerator(0, { idx: [], val: [] }, origin);
+  let F = new GradedFree<C>(R, multi);
+  F.addGenerator(0, { idx: [0], val: [K.one] }, origin);
+  let prevKernelDims = new Map<string, number>();
   const columns: BettiColumn[] = [];
   const push = (c: BettiColumn) => {
     columns.push(c);
@@ -87,9 +110,10 @@ export function resolveDegreewise<C>(req: ResolveRequest<C>): QuotientResolution
   let prevComplete = true;
 
   for (let i = 0; i < n; i++) {
-    const next = new GradedFree<C>(R);
-    const kernels = new Map<number, Echelon<C>>();
-    const kernelDims = new Map<number, number>();
+    const next = new GradedFree<C>(R, multi);
+    /// Kernel bases by degree, then by group.
+    const kernels = new Map<number, Map<string, Echelon<C>>>();
+    const kernelDims = new Map<string, number>();
     const images = new ImageCache(F, target);
     const jmin = Math.min(...F.degrees);
     const natural = R.isArtinian ? Math.max(...F.degrees) + R.topDegree()! : Infinity;
@@ -97,46 +121,58 @@ export function resolveDegreewise<C>(req: ResolveRequest<C>): QuotientResolution
     for (let j = jmin; j <= jmax; j++) {
       const info = () => ({ stage: "resolution over a quotient ring", detail: `homological degree ${i + 1}, internal degree ${j}`, fraction: n > 0 ? i / n : 1 });
       checkpoint(opts, info);
-      const dimF = F.dim(j);
-      checkLimit(opts, "maxBasisSize", dimF, "a graded piece of the resolution");
-      // d_i maps F_i onto K_{i−1} (onto the module itself for i = 0).
-      const expected = dimF - (i === 0 ? target.dim(j) : (prevKernelDims.get(j) ?? 0));
-      const P = new Echelon<C>(K, dimF);
-      // Products beyond rank `expected` add nothing: they all lie in K_{i,j}.
-      products: for (let v = 0; v < R.n; v++) {
-        const low = kernels.get(j - R.weights[v]);
-        if (!low) continue;
-        for (const b of low.rows) {
-          if (P.rank >= expected) break products;
-          checkpoint(opts, info);
-          P.insert(F.mulVar(v, j - R.weights[v], b));
+      checkLimit(opts, "maxBasisSize", F.dim(j), "a graded piece of the resolution");
+      const L = F.layout(j);
+      const TL = target.layout(j);
+      const here = new Map<string, Echelon<C>>();
+      kernels.set(j, here);
+      for (const [key, block] of L.blocks) {
+        const dimF = block.length;
+        const tBlock = TL.blocks.get(key) ?? [];
+        // d_i maps F_i onto K_{i−1} (onto the module itself for i = 0).
+        const expected = dimF - (i === 0 ? tBlock.length : (prevKernelDims.get(`${j}|${key}`) ?? 0));
+        const P = new Echelon<C>(K, dimF);
+        // Products beyond rank `expected` add nothing: they all lie in K_{i,j}.
+        products: for (let v = 0; v < R.n && expected > 0; v++) {
+          const lk = lowerKey(key, v);
+          const jl = j - R.weights[v];
+          const low = lk === null ? undefined : kernels.get(jl)?.get(lk);
+          if (!low) continue;
+          const from = F.layout(jl).blocks.get(lk!)!;
+          for (const b of low.rows) {
+            if (P.rank >= expected) break products;
+            checkpoint(opts, info);
+            P.insert(F.mulVarBlock(v, jl, from, b, dimF));
+          }
         }
+        if (P.rank > expected) throw new AlgebraError("runtime", "resolution: internal inconsistency (syzygies exceed the kernel)");
+        let decomposable = P;
+        if (P.rank < expected) {
+          if (req.inspect) {
+            decomposable = new Echelon<C>(K, dimF);
+            for (const r of P.rows) decomposable.insert(r);
+          }
+          // K_{i,j} = P ⊕ (K_{i,j} ∩ C) for C spanned by the unit vectors off the pivots of P,
+          // and d vanishes on P: the new syzygies are the kernel of d restricted to C.
+          const pivots = new Set(P.pivots);
+          const free: number[] = [];
+          for (let k = 0; k < dimF; k++) if (!pivots.has(k)) free.push(k);
+          const cols = free.map((k) => densify(K, images.of(j, block[k]), TL, tBlock.length));
+          const ker = kernelBasis(K, tBlock.length, cols, () => checkpoint(opts, info));
+          if (ker.length !== expected - P.rank) throw new AlgebraError("runtime", "resolution: internal inconsistency (kernel dimension)");
+          const md = key === "*" ? undefined : key.split(",").map(Number);
+          for (const c of ker) {
+            const z = new Array<C>(dimF).fill(K.zero);
+            c.forEach((a, k) => (z[free[k]] = a));
+            P.insert(z);
+            next.addGenerator(j, sparsify(K, z, block), md);
+          }
+        }
+        here.set(key, P);
+        kernelDims.set(`${j}|${key}`, P.rank);
+        req.inspect?.({ i, j, F, block, kernel: P, decomposable });
       }
-      if (P.rank > expected) throw new AlgebraError("runtime", "resolution: internal inconsistency (syzygies exceed the kernel)");
-      let decomposable = P;
-      if (P.rank < expected) {
-        if (req.inspect) {
-          decomposable = new Echelon<C>(K, dimF);
-          for (const r of P.rows) decomposable.insert(r);
-        }
-        // K_{i,j} = P ⊕ (K_{i,j} ∩ C) for C spanned by the unit vectors off the pivots of P,
-        // and d vanishes on P: the new syzygies are the kernel of d restricted to C.
-        const pivots = new Set(P.pivots);
-        const free = Array.from({ length: dimF }, (_, k) => k).filter((k) => !pivots.has(k));
-        const all = images.all(j);
-        const ker = kernelBasis(K, target.dim(j), free.map((k) => all[k]), () => checkpoint(opts, info));
-        if (ker.length !== expected - P.rank) throw new AlgebraError("runtime", "resolution: internal inconsistency (kernel dimension)");
-        for (const c of ker) {
-          const z = new Array<C>(dimF).fill(K.zero);
-          c.forEach((a, k) => (z[free[k]] = a));
-          P.insert(z);
-          next.addGenerator(j, z);
-        }
-      }
-      kernels.set(j, P);
-      kernelDims.set(j, P.rank);
-      req.inspect?.({ i, j, F, kernel: P, decomposable });
-      kernels.delete(j - Math.max(...R.weights));
+      kernels.delete(j - maxW);
     }
     const degs = next.degrees;
     const entries = countDegrees(degs);
@@ -166,17 +202,17 @@ function countDegrees(degs: readonly number[]): { degree: number; count: number 
   return [...m.entries()].sort((a, b) => a[0] - b[0]).map(([degree, count]) => ({ degree, count }));
 }
 
-/// Images under the differential of the basis elements u·g of F_j (u a standard
-/// monomial), built from lower degrees one variable at a time.
+/// Images under the differential of the basis elements u·g of F (u a standard monomial),
+/// sparse vectors of the target, built from lower degrees one variable at a time.
 class ImageCache<C> {
-  private readonly memo = new Map<string, C[][]>();
+  private readonly memo = new Map<string, Sparse<C>[]>();
 
   constructor(
     private readonly F: GradedFree<C>,
     private readonly T: GradedFree<C>,
   ) {}
 
-  private ofGenerator(g: number, e: number): C[][] {
+  private ofGenerator(g: number, e: number): Sparse<C>[] {
     const key = `${g}:${e}`;
     let out = this.memo.get(key);
     if (out) return out;
@@ -190,19 +226,18 @@ class ImageCache<C> {
         const w = u.slice();
         w[v]--;
         const below = this.ofGenerator(g, e - A.weights[v]);
-        return this.T.mulVar(v, a + e - A.weights[v], below[A.indexOf(e - A.weights[v], w)]);
+        return this.T.mulVarSparse(v, a + e - A.weights[v], below[A.indexOf(e - A.weights[v], w)]);
       });
     }
     this.memo.set(key, out);
     return out;
   }
 
-  all(j: number): C[][] {
-    const out: C[][] = [];
-    this.F.degrees.forEach((a, g) => {
-      if (j - a >= 0) out.push(...this.ofGenerator(g, j - a));
-    });
-    return out;
+  /// d of the global coordinate idx of F_j.
+  of(j: number, idx: number): Sparse<C> {
+    const L = this.F.layout(j);
+    const g = L.generator[idx];
+    return this.ofGenerator(g, j - this.F.degrees[g])[idx - L.offsets[g]];
   }
 }
 

@@ -2,6 +2,7 @@ import { kernelBasis } from "../graded/echelon";
 import type { Ideal } from "../ideal";
 import type { ComputeOptions } from "../options";
 import { variablesOf } from "./residue";
+import { sparsify } from "./free";
 import { resolveDegreewise } from "./resolve";
 
 /// Whether the residue field k is a direct summand of the p-th syzygy Ω^p(R/I) over
@@ -17,22 +18,37 @@ export function residueSplitsFromSyzygy(J: Ideal, p: number, I?: Ideal, opts?: C
     length: p,
     degree: opts?.degree,
     opts,
-    inspect: ({ i, j, F, kernel, decomposable }) => {
+    inspect: ({ i, j, F, block, kernel, decomposable }) => {
       if (i !== p - 1 || splits || kernel.rank === 0) return;
-      const A = F.A;
-      const images = kernel.rows.map((b) => {
-        const parts: unknown[] = [];
-        for (let v = 0; v < A.n; v++) parts.push(...F.mulVar(v, j, b));
-        return parts;
+      const K = F.K;
+      // The socle of K_j: combinations of the kernel rows killed by every variable. The
+      // images x_v·b are sparse; their coordinates are numbered compactly.
+      const position = new Map<string, number>();
+      const sparse = kernel.rows.map((b) => {
+        const w = sparsify(K, b, block);
+        const out: { at: number; c: unknown }[] = [];
+        for (let v = 0; v < F.A.n; v++) {
+          const img = F.mulVarSparse(v, j, w);
+          img.idx.forEach((x, k) => {
+            const key = `${v}:${x}`;
+            if (!position.has(key)) position.set(key, position.size);
+            out.push({ at: position.get(key)!, c: img.val[k] });
+          });
+        }
+        return out;
       });
-      const total = images.length > 0 ? images[0].length : 0;
-      for (const c of kernelBasis(A.K, total, images)) {
-        const s = new Array(F.dim(j)).fill(A.K.zero);
+      const images = sparse.map((entries) => {
+        const d = new Array(position.size).fill(K.zero);
+        for (const { at, c } of entries) d[at] = c;
+        return d;
+      });
+      for (const c of kernelBasis(K, position.size, images)) {
+        const s = new Array(block.length).fill(K.zero);
         c.forEach((x, r) => {
-          if (A.K.isZero(x)) return;
-          kernel.rows[r].forEach((y, k) => (s[k] = A.K.add(s[k], A.K.mul(x, y))));
+          if (K.isZero(x)) return;
+          kernel.rows[r].forEach((y, k) => (s[k] = K.add(s[k], K.mul(x, y))));
         });
-        if (decomposable.reduce(s).some((x) => !A.K.isZero(x))) splits = true;
+        if (decomposable.reduce(s).some((x) => !K.isZero(x))) splits = true;
       }
     },
   });
