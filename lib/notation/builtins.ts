@@ -42,6 +42,7 @@ import type { Frame, Interpreter } from "./interpreter";
 import { addValues } from "./operators";
 import { pendingError } from "./pending";
 import { COMPLEX_PROPERTIES, resolveValue } from "./resolutions";
+import { QUOTIENT_FUNCTIONS, QUOTIENT_PROPERTIES } from "./quotients";
 import { valueType } from "./value-type";
 import { list, type HilbertSeriesValue, type IdealValue, type RingValue, type Value } from "./values";
 
@@ -180,6 +181,7 @@ const FUNCTION_IMPLS: Record<string, FunctionImpl> = {
   "all(List<Bool>)": ([xs]) => Bool((xs as { items: readonly Value[] }).items.every((x) => x.type === "Bool" && x.value)),
   "any(List<Bool>)": ([xs]) => Bool((xs as { items: readonly Value[] }).items.some((x) => x.type === "Bool" && x.value)),
   "resolve(Module or Ring)": resolveValue,
+  ...QUOTIENT_FUNCTIONS,
 };
 
 function matrixArg(v: Value, span: Span): Extract<Value, { type: "Matrix" }> {
@@ -320,6 +322,7 @@ const PROPERTY_IMPLS: Record<string, PropertyImpl> = {
     return list(t.rows.map((row) => row[k]));
   },
   ...COMPLEX_PROPERTIES,
+  ...QUOTIENT_PROPERTIES,
 };
 
 /// Keys of everything the evaluator implements (read by the pending-names test).

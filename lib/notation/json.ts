@@ -59,7 +59,7 @@ export const ModuleJson = z.object({
   ...ringRef,
 });
 const BettiEntries = z.array(z.tuple([count, z.number().int(), z.number().int().positive()]));
-export const BettiTableJson = z.object({ type: z.literal("BettiTable"), text, entries: BettiEntries, complete: z.boolean() });
+export const BettiTableJson = z.object({ type: z.literal("BettiTable"), text, entries: BettiEntries, complete: z.boolean(), note: z.string().optional() });
 export const ComplexJson = z.object({
   type: z.literal("Complex"),
   text,
@@ -68,6 +68,8 @@ export const ComplexJson = z.object({
   complete: z.boolean(),
   /// an addition: the differentials, when known
   maps: z.array(MatrixJson).nullable(),
+  /// an addition: which ranks a bound cut, when incomplete
+  note: z.string().optional(),
   ...ringRef,
 });
 export const HilbertSeriesJson = z.object({
@@ -81,6 +83,12 @@ export const SeriesJson = z.object({
   text,
   coefficients: z.array(intText),
   rational: z.string().nullable(),
+  /// additions: the guessed numerator and denominator (ascending in t), the number of
+  /// terms they were checked against, and how many leading coefficients are exact
+  numerator: z.array(intText).optional(),
+  denominator: z.array(intText).optional(),
+  checked: count.optional(),
+  exact: count.optional(),
 });
 export const NoneJson = z.object({ type: z.literal("None"), text });
 
@@ -245,13 +253,27 @@ export function encodeValue(v: Value): ValueJson {
         complete: v.complete,
         maps: v.maps && v.maps.map(encodeMatrix),
         ring: encodeRing(v.ring),
+        ...(v.note !== undefined ? { note: v.note } : {}),
       };
     case "BettiTable":
-      return { type: "BettiTable", text: t, entries: v.entries.map(([i, j, b]) => [i, j, b] as [number, number, number]), complete: v.complete };
+      return {
+        type: "BettiTable",
+        text: t,
+        entries: v.entries.map(([i, j, b]) => [i, j, b] as [number, number, number]),
+        complete: v.complete,
+        ...(v.note !== undefined ? { note: v.note } : {}),
+      };
     case "HilbertSeries":
       return { type: "HilbertSeries", text: t, numerator: v.series.numerator.map(String), denominator: formatHilbertDenominator(v.series.weights) };
     case "Series":
-      return { type: "Series", text: t, coefficients: v.coefficients.map(String), rational: v.rational };
+      return {
+        type: "Series",
+        text: t,
+        coefficients: v.coefficients.map(String),
+        rational: v.rational,
+        ...(v.guess ? { numerator: v.guess.numerator.map(String), denominator: v.guess.denominator.map(String), checked: v.guess.checked } : {}),
+        ...(v.exact !== undefined ? { exact: v.exact } : {}),
+      };
     case "List":
       return { type: "List", text: t, items: v.items.map(encodeValue) };
     case "Record":
@@ -326,8 +348,8 @@ function decodeMatrix(j: z.infer<typeof MatrixJson>, ctx: DecodeContext): Matrix
   return { type: "Matrix", ring, rows: j.rows.map((row) => row.map((f) => readPoly(ring, f, "Matrix"))), cols: j.cols };
 }
 
-function decodeBetti(entries: readonly (readonly [number, number, number])[], complete: boolean): BettiTableValue {
-  return { type: "BettiTable", entries: entries.map(([i, j, b]) => [i, j, b] as const), complete };
+function decodeBetti(entries: readonly (readonly [number, number, number])[], complete: boolean, note?: string): BettiTableValue {
+  return { type: "BettiTable", entries: entries.map(([i, j, b]) => [i, j, b] as const), complete, ...(note !== undefined ? { note } : {}) };
 }
 
 function decodeIdeal(j: z.infer<typeof IdealJson>, ctx: DecodeContext): IdealValue {
@@ -364,18 +386,27 @@ function decodeValidated(j: ValueJson, ctx: DecodeContext): Value {
         type: "Complex",
         ring: decodeRing(j.ring, ctx),
         ranks: j.ranks,
-        betti: decodeBetti(j.betti, j.complete),
+        betti: decodeBetti(j.betti, j.complete, j.note),
         complete: j.complete,
         maps: j.maps && j.maps.map((m) => decodeMatrix(m, ctx)),
+        ...(j.note !== undefined ? { note: j.note } : {}),
       };
     case "BettiTable":
-      return decodeBetti(j.entries, j.complete);
+      return decodeBetti(j.entries, j.complete, j.note);
     case "HilbertSeries": {
       const denominator = parseDenominator(j.denominator) ?? fail("HilbertSeries", `bad denominator ${j.denominator}`);
       return { type: "HilbertSeries", series: hilbertSeriesFromNumerator(j.numerator.map((c) => BigInt(c)), denominator) };
     }
     case "Series":
-      return { type: "Series", coefficients: j.coefficients.map((c) => BigInt(c)), rational: j.rational };
+      return {
+        type: "Series",
+        coefficients: j.coefficients.map((c) => BigInt(c)),
+        rational: j.rational,
+        ...(j.numerator && j.denominator && j.checked !== undefined
+          ? { guess: { numerator: j.numerator.map((c) => BigInt(c)), denominator: j.denominator.map((c) => BigInt(c)), checked: j.checked } }
+          : {}),
+        ...(j.exact !== undefined ? { exact: j.exact } : {}),
+      };
     case "List":
       return { type: "List", items: j.items.map((x) => decodeValidated(x, ctx)) };
     case "Record":

@@ -6,6 +6,7 @@ import { bettiNumber, bettiTotals, ideal as engineIdeal, resolveQuotient, type R
 import { limit, runtime } from "./errors";
 import type { CallContext } from "./builtins";
 import { pendingError } from "./pending";
+import { resolveOverQuotient } from "./quotients";
 import type { BettiTableValue, ComplexValue, MatrixValue, RingValue, Value } from "./values";
 
 const Int = (value: number): Value => ({ type: "Int", value: BigInt(value) });
@@ -34,9 +35,8 @@ function complexOf(r: Resolution, ring: RingValue): ComplexValue {
 export function resolveValue([m]: readonly Value[], c: CallContext): Value {
   if (m.type === "Module") throw pendingError("resolve of a module given by a presentation", 2, c.span);
   if (m.type !== "Ring") throw runtime(`resolve expects a Module or a quotient ring, got ${m.type}`, c.argSpans[0] ?? c.span);
-  if (m.over) {
-    throw pendingError("resolve over a quotient ring (the ring this quotient was formed from is itself a quotient)", 3, c.argSpans[0] ?? c.span);
-  }
+  // over a quotient ring (the ring this quotient was formed from is itself one): engine part 3
+  if (m.over) return resolveOverQuotient(m, c);
   const S = c.interp.session.rings.ambient(m);
   const length = bound(c, "length", 1000);
   const degree = bound(c, "degree", 100_000);

@@ -34,7 +34,20 @@ export function matrixText(m: MatrixValue): string {
 
 export function bettiText(b: BettiTableValue): string {
   const entries = b.entries.map(([i, j, n]) => `β(${i},${j})=${n}`).join(", ");
-  return `Betti numbers ${entries === "" ? "all zero" : entries}${b.complete ? "" : " (truncated)"}`;
+  return `Betti numbers ${entries === "" ? "all zero" : entries}${b.complete ? "" : b.note ? ` (truncated: ${b.note})` : " (truncated)"}`;
+}
+
+/// A truncated series, saying which coefficients are lower bounds and how the rational
+/// function (if any) was found.
+function seriesText(v: Extract<Value, { type: "Series" }>): string {
+  const n = v.coefficients.length;
+  let out = `${ascendingText(v.coefficients)}+O(t^${n})`;
+  if (v.exact !== undefined && v.exact < n) out += ` (the coefficients of t^${v.exact} and beyond are lower bounds: a degree bound cut the resolution)`;
+  if (v.rational !== null) {
+    const k = v.guess?.checked;
+    out += `; guessed rational function ${v.rational}${k !== undefined ? `, fitting all ${k} exact terms computed` : ""}`;
+  }
+  return out;
 }
 
 export function valueText(v: Value): string {
@@ -59,13 +72,13 @@ export function valueText(v: Value): string {
     case "Module":
       return v.presentation ? `coker ${matrixText(v.presentation)} over ${ringText(v.ring)}` : `module over ${ringText(v.ring)}`;
     case "Complex":
-      return `complex of ranks ${v.ranks.join(", ")}${v.complete ? "" : " (truncated)"}`;
+      return `complex of ranks ${v.ranks.join(", ")}${v.complete ? "" : v.note ? ` (truncated: ${v.note})` : " (truncated)"}`;
     case "BettiTable":
       return bettiText(v);
     case "HilbertSeries":
       return hilbertText(v.series);
     case "Series":
-      return `${ascendingText(v.coefficients)}+O(t^${v.coefficients.length})`;
+      return seriesText(v);
     case "List":
       return `[${v.items.map(valueText).join(", ")}]`;
     case "Record":

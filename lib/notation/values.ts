@@ -55,6 +55,8 @@ export interface BettiTableValue {
   /// nonzero β_{i,j}, sorted by i then j; j is the internal degree
   readonly entries: readonly BettiEntry[];
   readonly complete: boolean;
+  /// when incomplete: which numbers a bound cut (shown in the text)
+  readonly note?: string;
 }
 
 export interface ComplexValue {
@@ -65,6 +67,8 @@ export interface ComplexValue {
   readonly complete: boolean;
   /// matrices of the differentials F_i → F_{i−1}, i = 1…length, when known
   readonly maps: readonly MatrixValue[] | null;
+  /// when incomplete: which ranks a bound cut (shown in the text)
+  readonly note?: string;
 }
 
 export interface HilbertSeriesValue {
@@ -77,6 +81,11 @@ export interface SeriesValue {
   readonly coefficients: readonly bigint[];
   /// a rational function fitting every computed term, as text; null when none was found
   readonly rational: string | null;
+  /// the guessed numerator and denominator (ascending coefficients in t) and how many
+  /// leading coefficients they were checked against
+  readonly guess?: { readonly numerator: readonly bigint[]; readonly denominator: readonly bigint[]; readonly checked: number };
+  /// how many leading coefficients are exact (the rest are lower bounds); all when absent
+  readonly exact?: number;
 }
 
 export interface ListValue {

@@ -40,28 +40,17 @@ const PART_2 = [
   "Module.length",
   "Module.presentation",
   "Module.min_gens",
-  "Complex.minors",
   "Ring ^ Int",
   "Ring ^ List<Int>",
 ];
 
 /// Waiting for engine part 3 (quotient-ring and Artinian invariants, Burch, Poincaré, families).
 const PART_3 = [
-  "poincare(Module or Ring)",
-  "burch_index(Ring)",
-  "eventual_period(List<Any>)",
   "random_ideals(Ring)",
   "monomial_ideals(Ring)",
   "sweep(Family, Function(Ideal) -> Any)",
-  "Ring.socle",
-  "Ring.burch_index",
-  "Ring.is_burch",
-  "Ring.splits_residue",
   "Module.socle",
   "Module.splits_residue",
-  "Series.coefficients",
-  "Series.rational",
-  "Series.at",
   "Family.length",
 ];
 

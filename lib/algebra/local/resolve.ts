@@ -4,7 +4,7 @@ import { Echelon, kernelBasis } from "../graded/echelon";
 import { gradedQuotient, type GradedQuotient } from "../graded/piece";
 import { type Ideal, idealGroebnerBasis, idealSum } from "../ideal";
 import { checkLimit, checkpoint, type ComputeOptions } from "../options";
-import { degree, type Poly, type PolyRing, terms } from "../index";
+import { add, degree, monomial, type Poly, type PolyRing, terms, zero } from "../index";
 import { densify, GradedFree, type Sparse, sparsify } from "./free";
 
 /// β_{i,j} for one homological degree i.
@@ -25,6 +25,9 @@ export interface QuotientResolution {
   complete: boolean;
   /// How completeness of each column was decided.
   reason: string;
+  /// With `keepMaps`: the matrices of d_i : F_i → F_{i−1} (i = 1…), entries in S
+  /// (representatives of elements of R = S/J), rank_{i−1} rows × rank_i columns.
+  maps?: Poly[][][];
 }
 
 export interface LocalResolveOptions extends ComputeOptions {
@@ -55,6 +58,9 @@ export interface ResolveRequest<C> {
   degree?: number;
   opts?: LocalResolveOptions;
   inspect?: (d: DegreeData<C>) => void;
+  /// Keep the differentials as matrices while Σ rank_{i−1}·rank_i stays within this many
+  /// entries; past it no map is kept (`maps` absent).
+  keepMaps?: number;
 }
 
 /// Whether every element of a Gröbner basis is a monomial (then the ideal is monomial and
@@ -108,6 +114,8 @@ export function resolveDegreewise<C>(req: ResolveRequest<C>): QuotientResolution
   };
   push({ index: 0, entries: [{ degree: 0, count: 1 }], total: 1, complete: true });
   let prevComplete = true;
+  let maps: Poly[][][] | null | undefined;
+  let mapEntries = 0;
 
   for (let i = 0; i < n; i++) {
     const next = new GradedFree<C>(R, multi);
@@ -174,6 +182,10 @@ export function resolveDegreewise<C>(req: ResolveRequest<C>): QuotientResolution
       }
       kernels.delete(j - maxW);
     }
+    if (req.keepMaps !== undefined && maps !== null) {
+      mapEntries += F.rank * next.rank;
+      maps = mapEntries <= req.keepMaps ? [...(maps ?? []), matrixOf(S, F, next)] : null;
+    }
     const degs = next.degrees;
     const entries = countDegrees(degs);
     const complete: boolean = plan.bound(i + 1) <= plan.D || (prevComplete && natural <= plan.D);
@@ -193,7 +205,26 @@ export function resolveDegreewise<C>(req: ResolveRequest<C>): QuotientResolution
     exactThroughDegree: plan.D,
     complete: columns.every((c) => c.complete),
     reason: plan.reason,
+    ...(maps ? { maps } : {}),
   };
+}
+
+/// The matrix of F_{i+1} → F_i: column g holds the boundary of generator g of `next`,
+/// read back from coordinates (a standard monomial u times a generator h of F) as Σ c·x^u.
+function matrixOf<C>(S: PolyRing, F: GradedFree<C>, next: GradedFree<C>): Poly[][] {
+  const K = F.K;
+  const rows = Array.from({ length: F.rank }, () => Array.from({ length: next.rank }, () => zero(S)));
+  next.boundary.forEach((b, g) => {
+    const j = next.degrees[g];
+    const L = F.layout(j);
+    for (let k = 0; k < b.idx.length; k++) {
+      const h = L.generator[b.idx[k]];
+      const u = F.A.basis(j - F.degrees[h])[b.idx[k] - L.offsets[h]];
+      const q = K.toRational(b.val[k]);
+      rows[h][g] = add(S, rows[h][g], monomial(S, u, q.num, q.den));
+    }
+  });
+  return rows;
 }
 
 function countDegrees(degs: readonly number[]): { degree: number; count: number }[] {

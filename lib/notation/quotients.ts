@@ -1,0 +1,300 @@
+/// Engine part 3 in the notation: resolutions over quotient rings (degree by degree, see
+/// lib/algebra/local), Poincaré series, socles, the residue field as a summand, Burch
+/// index, minors along a resolution and eventual periods.
+import type { Span } from "../../grammar/ast";
+import {
+  burchIndexOfRing,
+  guessRational,
+  idealColon,
+  idealIsHomogeneous,
+  idealIsSubset,
+  idealSum,
+  ideal as engineIdeal,
+  minors,
+  resolveDegreewise,
+  resolveQuotient,
+  truncatedSeries,
+  eventualPeriod,
+  variable,
+  type Ideal,
+  type QuotientResolution,
+} from "../algebra/index";
+import type { CallContext } from "./builtins";
+import { limit, runtime } from "./errors";
+import { colonOf, groebnerOf, idealValue } from "./ideals";
+import { encodeValue } from "./json";
+import { ascendingText } from "./series-text";
+import { QQ, add, formatPoly, monomial, zero } from "../algebra/index";
+import type { BettiEntry, ComplexValue, IdealValue, MatrixValue, RingValue, SeriesValue, Value } from "./values";
+import { list } from "./values";
+
+const Int = (value: number | bigint): Value => ({ type: "Int", value: BigInt(value) });
+const Bool = (value: boolean): Value => ({ type: "Bool", value });
+const opts = (c: CallContext) => c.interp.session.compute;
+
+/// Differentials are kept as matrices while the resolution has at most this many matrix
+/// entries in all (beyond it C.map and C.minors say they were not kept).
+const MAX_MAP_ENTRIES = 200_000;
+
+/// A quotient ring m = A / I read as the cyclic A-module A/I (notation.md §5): the defining
+/// ideal J of A and the ideal I + J of m, both in the ambient polynomial ring S.
+interface CyclicModule {
+  base: RingValue;
+  J: Ideal;
+  I: Ideal;
+}
+
+function cyclicModule(m: RingValue, c: CallContext): CyclicModule {
+  const base = m.over ?? c.interp.session.rings.ambient(m);
+  return { base, J: engineIdeal(base.poly, base.ideal), I: engineIdeal(m.poly, m.ideal) };
+}
+
+function requireGraded(M: CyclicModule, what: string, span: Span, c: CallContext): void {
+  if (!idealIsHomogeneous(M.J, opts(c)) || !idealIsHomogeneous(M.I, opts(c))) {
+    throw runtime(
+      `${what} over a quotient ring needs homogeneous ideals (a graded ring and module); for a local Artinian ring given by a non-homogeneous ideal only the socle and the Burch index are available`,
+      span,
+    );
+  }
+}
+
+/// A named bound: a non-negative Int at most `max`.
+function bound(c: CallContext, name: string, max: number): number | undefined {
+  const v = c.named.get(name);
+  if (v === undefined) return undefined;
+  if (v.type !== "Int") throw runtime(`${name} must be an Int, got ${v.type}`, c.span);
+  if (v.value < 0n) throw runtime(`${name} must be at least 0, got ${v.value}`, c.span);
+  if (v.value > BigInt(max)) throw limit(`${name} = ${v.value} is beyond the limit ${max}`, c.span);
+  return Number(v.value);
+}
+
+/// The first column that a degree bound may have cut (its total and all later ones are
+/// lower bounds), or null when every column is exact.
+function firstInexact(r: QuotientResolution): number | null {
+  const k = r.columns.findIndex((col) => !col.complete);
+  return k < 0 ? null : k;
+}
+
+/// What a truncated resolution leaves out, said plainly.
+function truncationNote(r: QuotientResolution, length: number): string | undefined {
+  const k = firstInexact(r);
+  if (k !== null) {
+    const d = r.exactThroughDegree;
+    return `internal degrees above ${d} were not computed, so β_i for i ≥ ${k} are lower bounds (β_{i,j} with j ≤ ${d} are exact)`;
+  }
+  const last = r.columns[r.columns.length - 1];
+  if (last.total > 0) return `only homological degrees ≤ ${length} were computed; the resolution goes on`;
+  return undefined;
+}
+
+type BettiColumn = QuotientResolution["columns"][number];
+
+function entriesOf(columns: readonly BettiColumn[]): BettiEntry[] {
+  return columns.flatMap((col) => col.entries.map((e) => [col.index, e.degree, e.count] as const));
+}
+
+/// resolve(A / I, length = n, degree = d) for A itself a quotient S/J: the minimal graded
+/// free resolution of A/I over A, degree by degree.
+export function resolveOverQuotient(m: RingValue, c: CallContext): ComplexValue {
+  const span = c.argSpans[0] ?? c.span;
+  const M = cyclicModule(m, c);
+  requireGraded(M, "resolve", span, c);
+  const length = bound(c, "length", 1000);
+  if (length === undefined) {
+    throw runtime("over a quotient ring a resolution is usually infinite: give a bound, e.g. resolve(M, length = 6)", c.span);
+  }
+  const degree = bound(c, "degree", 100_000);
+  const partial = c.interp.session.partial;
+  const r = resolveDegreewise({
+    ring: M.J,
+    module: M.I,
+    length,
+    degree,
+    keepMaps: MAX_MAP_ENTRIES,
+    opts: {
+      ...opts(c),
+      // each finished column streams as a one-column, still-incomplete Betti table
+      partial: partial
+        ? (col) => partial({ type: "BettiTable", entries: entriesOf([col]), complete: false, note: "the resolution is still running" })
+        : undefined,
+    },
+  });
+  const complete = r.complete && r.columns[r.columns.length - 1].total === 0;
+  const note = complete ? undefined : truncationNote(r, length);
+  const ranks = r.columns.map((col) => col.total);
+  const maps: MatrixValue[] | null = r.maps
+    ? r.maps.map((rows, i) => ({ type: "Matrix", ring: M.base, rows, cols: ranks[i + 1] }))
+    : null;
+  return {
+    type: "Complex",
+    ring: M.base,
+    ranks,
+    betti: { type: "BettiTable", entries: entriesOf(r.columns), complete, ...(note ? { note } : {}) },
+    complete,
+    maps,
+    ...(note ? { note } : {}),
+  };
+}
+
+/// poincare(M, terms = n): Σ β_i t^i for i < n, with a guessed rational function that fits
+/// every exact term (Berlekamp–Massey, accepted only when further terms confirm it).
+export function poincareValue([M]: readonly Value[], c: CallContext): Value {
+  const span = c.argSpans[0] ?? c.span;
+  if (M.type === "Module") {
+    throw runtime("poincare of a module given by a presentation is not available yet; write the module as a quotient ring A / I", span);
+  }
+  if (M.type !== "Ring") throw runtime(`poincare expects a Module or a quotient ring, got ${M.type}`, span);
+  const terms = bound(c, "terms", 1000) ?? 10;
+  if (terms < 1) throw runtime("terms must be at least 1", c.span);
+  const mod = cyclicModule(M, c);
+  requireGraded(mod, "poincare", span, c);
+  let totals: number[];
+  let exact: number;
+  if (!M.over) {
+    // over a polynomial ring the resolution is finite (part 2), every term exact
+    const r = resolveQuotient(mod.I, { ...opts(c), length: terms - 1 });
+    totals = Array.from({ length: terms }, (_, i) => r.ranks[i] ?? 0);
+    exact = terms;
+  } else {
+    const r = resolveDegreewise({ ring: mod.J, module: mod.I, length: terms - 1, opts: opts(c) });
+    totals = Array.from({ length: terms }, (_, i) => r.columns[i]?.total ?? 0);
+    exact = firstInexact(r) ?? terms;
+  }
+  return seriesValue(totals.map(BigInt), exact);
+}
+
+function seriesValue(coeffs: readonly bigint[], exact: number): SeriesValue {
+  const g = guessRational(truncatedSeries(coeffs.slice(0, exact)));
+  const rational = g ? `(${ascendingText(g.numerator)})/(${ascendingText(g.denominator)})` : null;
+  return {
+    type: "Series",
+    coefficients: coeffs,
+    rational,
+    ...(g ? { guess: { numerator: g.numerator, denominator: g.denominator, checked: g.checkedOn } } : {}),
+    ...(exact < coeffs.length ? { exact } : {}),
+  };
+}
+
+/// A polynomial in t over Q from ascending integer coefficients.
+function tPoly(c: CallContext, coeffs: readonly bigint[]): Value {
+  const R = c.interp.session.rings.polynomialRing(QQ, ["t"]);
+  let f = zero(R.poly);
+  coeffs.forEach((a, i) => {
+    if (a !== 0n) f = add(R.poly, f, monomial(R.poly, [i], a, 1n));
+  });
+  return { type: "Poly", ring: R, poly: f };
+}
+
+function series(v: Value): SeriesValue {
+  return v as SeriesValue;
+}
+
+/// The ideal of R generated by its variables.
+function maximalOf(r: RingValue, c: CallContext): IdealValue {
+  return idealValue(r, r.poly.vars.map((_, i) => variable(r.poly, i)), opts(c));
+}
+
+/// The Burch index of R = S/J (engine: depth 0 by the definition, positive depth after
+/// general linear forms chosen at random from a recorded seed). The random choice is
+/// reported as progress; an Int cannot carry it.
+function burchOf(v: Value, c: CallContext) {
+  const r = v as RingValue;
+  const res = burchIndexOfRing(engineIdeal(r.poly, r.ideal), opts(c));
+  if (res.random) {
+    opts(c).progress?.({
+      stage: "Burch index",
+      detail: `depth ${res.depth}: factored out general linear forms chosen at random (seed ${res.random.seed}): ${res.random.forms.join(", ")}`,
+    });
+  }
+  return res;
+}
+
+/// Whether k is a direct summand of the cyclic module A/I = S/(I + J): its socle
+/// ((I + J) : m)/(I + J) is not inside m·(A/I) = (m + I + J)/(I + J) (common practice: a
+/// socle element outside mM generates a copy of k that splits off).
+function splitsResidue(m: RingValue, c: CallContext): boolean {
+  const M = cyclicModule(m, c);
+  requireGraded(M, "splits_residue", c.span, c);
+  const S = m.poly;
+  const mS = engineIdeal(S, S.vars.map((_, i) => variable(S, i)));
+  if (idealIsSubset(engineIdeal(S, [monomial(S, S.vars.map(() => 0), 1n, 1n)]), M.I, opts(c))) return false; // the zero module
+  const socle = idealColon(M.I, mS, opts(c));
+  return !idealIsSubset(socle, idealSum(mS, M.I), opts(c));
+}
+
+/// A key under which equal values compare equal: ideals by their reduced Gröbner basis
+/// (so I_k(φ_i) that agree as ideals count as equal), everything else by its encoding.
+function valueKey(v: Value, c: CallContext): string {
+  if (v.type === "Ideal") return `Ideal:${groebnerOf(v, opts(c)).map((f) => formatPoly(v.ring.poly, f)).join(",")}`;
+  if (v.type === "List") return `[${v.items.map((x) => valueKey(x, c)).join(";")}]`;
+  return JSON.stringify(encodeValue(v));
+}
+
+function complexMaps(v: Value, c: CallContext): readonly MatrixValue[] {
+  const C = v as ComplexValue;
+  if (C.maps === null) throw runtime("the differentials of this resolution were not kept (too large); minors need them", c.span);
+  return C.maps;
+}
+
+export const QUOTIENT_FUNCTIONS: Record<string, (args: readonly Value[], c: CallContext) => Value> = {
+  "poincare(Module or Ring)": poincareValue,
+  "burch_index(Ring)": ([R], c) => Int(burchOf(R, c).index),
+  "eventual_period(List<Any>)": ([xs], c) => {
+    const items = (xs as { items: readonly Value[] }).items;
+    const keys = items.map((x) => valueKey(x, c));
+    const p = eventualPeriod(keys);
+    const none: Value = { type: "None" };
+    return { type: "Record", fields: new Map([["start", p ? Int(p.start) : none], ["period", p ? Int(p.period) : none]]) };
+  },
+};
+
+export const QUOTIENT_PROPERTIES: Record<string, (obj: Value, args: readonly Value[], c: CallContext) => Value> = {
+  "Ring.socle": (v, _a, c) => {
+    const r = v as RingValue;
+    // given by its reduced Gröbner basis (the colon's own generators repeat)
+    return idealValue(r, groebnerOf(colonOf(idealValue(r, []), maximalOf(r, c), c.span, opts(c)), opts(c)), opts(c));
+  },
+  "Ring.burch_index": (v, _a, c) => Int(burchOf(v, c).index),
+  "Ring.is_burch": (v, _a, c) => Bool(burchOf(v, c).isBurch),
+  "Ring.splits_residue": (v, _a, c) => Bool(splitsResidue(v as RingValue, c)),
+  "Series.coefficients": (v) => list(series(v).coefficients.map(Int)),
+  "Series.rational": (v, _a, c) => {
+    const g = series(v).guess;
+    if (!g) return { type: "None" };
+    return {
+      type: "Record",
+      fields: new Map([
+        ["numerator", tPoly(c, g.numerator)],
+        ["denominator", tPoly(c, g.denominator)],
+        ["checked", Int(g.checked)],
+      ]),
+    };
+  },
+  "Series.at": (v, [i], c) => {
+    const s = series(v);
+    const k = (i as { value: bigint }).value;
+    const n = s.coefficients.length;
+    const span = c.argSpans[0] ?? c.span;
+    if (k < 0n) throw runtime(`the index must be at least 0, got ${k}`, span);
+    if (k >= BigInt(n)) throw runtime(`only the coefficients of t^0 … t^${n - 1} were computed; ask for more terms`, span);
+    if (s.exact !== undefined && k >= BigInt(s.exact)) {
+      throw runtime(`the coefficient of t^${k} is only a lower bound (a degree bound cut the resolution); t^0 … t^${s.exact - 1} are exact`, span);
+    }
+    return Int(s.coefficients[Number(k)]);
+  },
+  "Complex.minors": (v, [k], c) => {
+    const maps = complexMaps(v, c);
+    const size = (k as { value: bigint }).value;
+    if (size < 1n) throw runtime(`the size of the minors must be at least 1, got ${size}`, c.argSpans[0] ?? c.span);
+    return list(
+      maps.map((A) => {
+        // I_k(φ) = 0 when φ has fewer than k rows or columns (common practice)
+        if (size > BigInt(Math.min(A.rows.length, A.cols))) return idealValue(A.ring, []);
+        // the minors, given by the reduced Gröbner basis of the ideal they generate (their list
+        // repeats entries up to sign)
+        const all = idealValue(A.ring, minors(A.ring.poly, A.rows, Number(size), opts(c)), opts(c));
+        return idealValue(A.ring, groebnerOf(all, opts(c)), opts(c));
+      }),
+    );
+  },
+};
