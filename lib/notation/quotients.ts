@@ -165,7 +165,8 @@ export function poincareValue([M]: readonly Value[], c: CallContext): Value {
 
 function seriesValue(coeffs: readonly bigint[], exact: number): SeriesValue {
   const g = guessRational(truncatedSeries(coeffs.slice(0, exact)));
-  const rational = g ? `(${ascendingText(g.numerator)})/(${ascendingText(g.denominator)})` : null;
+  const wrap = (c: readonly bigint[]) => (c.filter((x) => x !== 0n).length > 1 ? `(${ascendingText(c)})` : ascendingText(c));
+  const rational = g ? (g.denominator.length === 1 && g.denominator[0] === 1n ? ascendingText(g.numerator) : `${wrap(g.numerator)}/${wrap(g.denominator)}`) : null;
   return {
     type: "Series",
     coefficients: coeffs,
