@@ -40,6 +40,7 @@ import { limit, runtime } from "./errors";
 import { colonOf, eliminationOf, groebnerOf, idealProductOf, idealValue, quotientIdeal, saturationByElement, saturationOf } from "./ideals";
 import type { Frame, Interpreter } from "./interpreter";
 import { addValues } from "./operators";
+import { MODULE_FUNCTIONS, RESIDUE_PROPERTY } from "./modules";
 import { pendingError } from "./pending";
 import { COMPLEX_PROPERTIES, resolveValue } from "./resolutions";
 import { valueType } from "./value-type";
@@ -180,6 +181,7 @@ const FUNCTION_IMPLS: Record<string, FunctionImpl> = {
   "all(List<Bool>)": ([xs]) => Bool((xs as { items: readonly Value[] }).items.every((x) => x.type === "Bool" && x.value)),
   "any(List<Bool>)": ([xs]) => Bool((xs as { items: readonly Value[] }).items.some((x) => x.type === "Bool" && x.value)),
   "resolve(Module or Ring)": resolveValue,
+  ...MODULE_FUNCTIONS,
 };
 
 function matrixArg(v: Value, span: Span): Extract<Value, { type: "Matrix" }> {
@@ -320,6 +322,7 @@ const PROPERTY_IMPLS: Record<string, PropertyImpl> = {
     return list(t.rows.map((row) => row[k]));
   },
   ...COMPLEX_PROPERTIES,
+  ...RESIDUE_PROPERTY,
 };
 
 /// Keys of everything the evaluator implements (read by the pending-names test).

@@ -10,10 +10,6 @@ import { pendingError } from "@/lib/notation/pending";
 
 /// Waiting for engine part 2 (modules, resolutions, Tor/Ext, depth, pd, regularity).
 const PART_2 = [
-  "coker(Matrix)",
-  "image(Matrix)",
-  "ker(Matrix)",
-  "module(Ideal)",
   "syzygy(Module or Ring, Int)",
   "koszul(Ring)",
   "koszul(Ideal)",
@@ -22,7 +18,6 @@ const PART_2 = [
   "hilbert(Module)",
   "serre(Module or Ring, Module or Ring)",
   "tor_lengths(Module or Ring, Module or Ring)",
-  "Ring.residue",
   "Ring.rank",
   "Ring.pd",
   "Ring.reg",
@@ -41,8 +36,6 @@ const PART_2 = [
   "Module.presentation",
   "Module.min_gens",
   "Complex.minors",
-  "Ring ^ Int",
-  "Ring ^ List<Int>",
 ];
 
 /// Waiting for engine part 3 (quotient-ring and Artinian invariants, Burch, Poincaré, families).
