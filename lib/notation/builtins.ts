@@ -40,6 +40,7 @@ import { limit, runtime } from "./errors";
 import { colonOf, eliminationOf, groebnerOf, idealProductOf, idealValue, quotientIdeal, saturationByElement, saturationOf } from "./ideals";
 import type { Frame, Interpreter } from "./interpreter";
 import { addValues } from "./operators";
+import { HOMOLOGY_FUNCTIONS, MODULE_PROPERTIES } from "./homology";
 import { MODULE_FUNCTIONS, RESIDUE_PROPERTY } from "./modules";
 import { pendingError } from "./pending";
 import { COMPLEX_PROPERTIES, resolveValue } from "./resolutions";
@@ -182,6 +183,7 @@ const FUNCTION_IMPLS: Record<string, FunctionImpl> = {
   "any(List<Bool>)": ([xs]) => Bool((xs as { items: readonly Value[] }).items.some((x) => x.type === "Bool" && x.value)),
   "resolve(Module or Ring)": resolveValue,
   ...MODULE_FUNCTIONS,
+  ...HOMOLOGY_FUNCTIONS,
 };
 
 function matrixArg(v: Value, span: Span): Extract<Value, { type: "Matrix" }> {
@@ -323,6 +325,7 @@ const PROPERTY_IMPLS: Record<string, PropertyImpl> = {
   },
   ...COMPLEX_PROPERTIES,
   ...RESIDUE_PROPERTY,
+  ...MODULE_PROPERTIES,
 };
 
 /// Keys of everything the evaluator implements (read by the pending-names test).
