@@ -40,6 +40,8 @@ import { limit, runtime } from "./errors";
 import { colonOf, eliminationOf, groebnerOf, idealProductOf, idealValue, quotientIdeal, saturationByElement, saturationOf } from "./ideals";
 import type { Frame, Interpreter } from "./interpreter";
 import { addValues } from "./operators";
+import { HOMOLOGY_FUNCTIONS, MODULE_PROPERTIES } from "./homology";
+import { MODULE_FUNCTIONS, RESIDUE_PROPERTY } from "./modules";
 import { pendingError } from "./pending";
 import { COMPLEX_PROPERTIES, resolveValue } from "./resolutions";
 import { QUOTIENT_FUNCTIONS, QUOTIENT_PROPERTIES } from "./quotients";
@@ -181,6 +183,8 @@ const FUNCTION_IMPLS: Record<string, FunctionImpl> = {
   "all(List<Bool>)": ([xs]) => Bool((xs as { items: readonly Value[] }).items.every((x) => x.type === "Bool" && x.value)),
   "any(List<Bool>)": ([xs]) => Bool((xs as { items: readonly Value[] }).items.some((x) => x.type === "Bool" && x.value)),
   "resolve(Module or Ring)": resolveValue,
+  ...MODULE_FUNCTIONS,
+  ...HOMOLOGY_FUNCTIONS,
   ...QUOTIENT_FUNCTIONS,
 };
 
@@ -322,6 +326,8 @@ const PROPERTY_IMPLS: Record<string, PropertyImpl> = {
     return list(t.rows.map((row) => row[k]));
   },
   ...COMPLEX_PROPERTIES,
+  ...RESIDUE_PROPERTY,
+  ...MODULE_PROPERTIES,
   ...QUOTIENT_PROPERTIES,
 };
 

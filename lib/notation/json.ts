@@ -13,6 +13,7 @@ import type {
   FunctionValue,
   IdealValue,
   MatrixValue,
+  ModuleValue,
   RingValue,
   Value,
 } from "./values";
@@ -55,7 +56,10 @@ export const MatrixJson = z.object({
 export const ModuleJson = z.object({
   type: z.literal("Module"),
   text,
+  /// §9 allows null; Ringside always writes a presentation (and cannot restore a module without one)
   presentation: MatrixJson.nullable(),
+  /// an addition: the degrees of the generators, one per row of the presentation
+  degrees: z.array(z.number().int()),
   ...ringRef,
 });
 const BettiEntries = z.array(z.tuple([count, z.number().int(), z.number().int().positive()]));
@@ -243,7 +247,7 @@ export function encodeValue(v: Value): ValueJson {
     case "Matrix":
       return encodeMatrix(v);
     case "Module":
-      return { type: "Module", text: t, presentation: v.presentation && encodeMatrix(v.presentation), ring: encodeRing(v.ring) };
+      return { type: "Module", text: t, presentation: encodeMatrix(v.presentation), degrees: [...v.degrees], ring: encodeRing(v.ring) };
     case "Complex":
       return {
         type: "Complex",
@@ -352,6 +356,17 @@ function decodeBetti(entries: readonly (readonly [number, number, number])[], co
   return { type: "BettiTable", entries: entries.map(([i, j, b]) => [i, j, b] as const), complete, ...(note !== undefined ? { note } : {}) };
 }
 
+function decodeModule(j: z.infer<typeof ModuleJson>, ctx: DecodeContext): ModuleValue {
+  if (!j.presentation) fail("Module", "a module needs its presentation to be restored");
+  const ring = decodeRing(j.ring, ctx);
+  const presentation = decodeMatrix(j.presentation, ctx);
+  if (presentation.ring !== ring) fail("Module", "the presentation lives in a different ring than the module");
+  if (presentation.rows.length !== j.degrees.length) {
+    fail("Module", `degrees lists ${j.degrees.length} generators but the presentation has ${presentation.rows.length} rows`);
+  }
+  return { type: "Module", ring, presentation, degrees: j.degrees };
+}
+
 function decodeIdeal(j: z.infer<typeof IdealJson>, ctx: DecodeContext): IdealValue {
   const ring = decodeRing(j.ring, ctx);
   return { type: "Ideal", ring, gens: j.gens.map((g) => readPoly(ring, g, "Ideal")) };
@@ -380,7 +395,7 @@ function decodeValidated(j: ValueJson, ctx: DecodeContext): Value {
     case "Matrix":
       return decodeMatrix(j, ctx);
     case "Module":
-      return { type: "Module", ring: decodeRing(j.ring, ctx), presentation: j.presentation && decodeMatrix(j.presentation, ctx) };
+      return decodeModule(j, ctx);
     case "Complex":
       return {
         type: "Complex",

@@ -20,6 +20,7 @@ import {
   isSubsetOf,
 } from "./ideals";
 import type { Frame, Interpreter } from "./interpreter";
+import { MODULE_OPERATORS } from "./modules";
 import { pendingError } from "./pending";
 import { rational, ratAdd, ratCompare, ratDiv, ratMul, ratNeg, ratSub, type Rational } from "./rational";
 import { ringText } from "./text";
@@ -225,6 +226,7 @@ const BINARY: Record<string, BinaryImpl> = {
     return Bool(containsPoly(I, toPoly(l, I.ring, c.leftSpan, opts), opts));
   },
   "T in List<T>": (l, r, c) => Bool(r.type === "List" && r.items.some((x) => c.interp.equal(l, x, c.span))),
+  ...MODULE_OPERATORS,
 };
 
 /// f^k in a quotient ring by repeated squaring, reducing after every product so the

@@ -2,7 +2,7 @@
 import { formatPoly, type Field, type OrderSpec } from "../algebra/index";
 import { ascendingText, hilbertText } from "./series-text";
 import { ratToString } from "./rational";
-import type { BettiTableValue, MatrixValue, RingValue, Value } from "./values";
+import type { BettiTableValue, MatrixValue, ModuleValue, RingValue, Value } from "./values";
 
 export function fieldText(f: Field): string {
   return f.kind === "Q" ? "Q" : `GF(${f.p})`;
@@ -30,6 +30,19 @@ export function ringText(r: RingValue): string {
 export function matrixText(m: MatrixValue): string {
   if (m.rows.length === 0) return `matrix(0 × ${m.cols})`;
   return `[${m.rows.map((row) => row.map((f) => formatPoly(m.ring.poly, f)).join(", ")).join("; ")}]`;
+}
+
+/// A free module as `R^n` or `R^[d1, …]`; otherwise `coker([…]) over R`, with the generators'
+/// degrees when they are not all 0.
+export function moduleText(m: ModuleValue): string {
+  const ring = ringText(m.ring);
+  const r = m.degrees.length;
+  const zeroDegrees = m.degrees.every((d) => d === 0);
+  const base = m.ring.ideal.length > 0 ? `(${ring})` : ring;
+  if (r === 0) return `the zero module over ${ring}`;
+  if (m.presentation.cols === 0) return zeroDegrees ? `${base}^${r}` : `${base}^[${m.degrees.join(", ")}]`;
+  const degs = zeroDegrees ? "" : `, generators in degrees [${m.degrees.join(", ")}]`;
+  return `coker(${matrixText(m.presentation)}) over ${ring}${degs}`;
 }
 
 export function bettiText(b: BettiTableValue): string {
@@ -70,7 +83,7 @@ export function valueText(v: Value): string {
     case "Matrix":
       return matrixText(v);
     case "Module":
-      return v.presentation ? `coker ${matrixText(v.presentation)} over ${ringText(v.ring)}` : `module over ${ringText(v.ring)}`;
+      return moduleText(v);
     case "Complex":
       return `complex of ranks ${v.ranks.join(", ")}${v.complete ? "" : v.note ? ` (truncated: ${v.note})` : " (truncated)"}`;
     case "BettiTable":

@@ -41,11 +41,16 @@ export interface MatrixValue {
   readonly cols: number;
 }
 
-/// A finitely presented module over `ring`: coker of `presentation` (null: not yet known).
+/// A finitely generated graded module over `ring`, always held by a presentation: the
+/// cokernel of `presentation`, whose rows are the generators (in the degrees `degrees`, one
+/// per row) and whose columns are the relations. image, ker, Tor and Ext are computed into
+/// this form when they are made (lib/notation/modules.ts).
 export interface ModuleValue {
   readonly type: "Module";
   readonly ring: RingValue;
-  readonly presentation: MatrixValue | null;
+  readonly presentation: MatrixValue;
+  /// the degrees of the generators, one per row of the presentation
+  readonly degrees: readonly number[];
 }
 
 export type BettiEntry = readonly [homological: number, internal: number, betti: number];

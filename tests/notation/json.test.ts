@@ -79,10 +79,24 @@ describe("§9 encoding of each type", () => {
     expect(j).toMatchObject({ type: "Matrix", text: "[x, y, z; y, z, w]", rows });
   });
 
-  it("Module: presentation matrix or null", () => {
+  it("Module: presentation matrix and the degrees of the generators", () => {
     const A = { type: "Matrix" as const, ring: S, rows: [[P(S, "x"), P(S, "y")]], cols: 2 };
-    expect(roundTrip({ type: "Module", ring: S, presentation: A })).toMatchObject({ type: "Module", presentation: { type: "Matrix", rows: [["x", "y"]] } });
-    expect(roundTrip({ type: "Module", ring: S, presentation: null })).toMatchObject({ type: "Module", presentation: null });
+    expect(roundTrip({ type: "Module", ring: S, presentation: A, degrees: [0] })).toMatchObject({
+      type: "Module",
+      text: "coker([x, y]) over GF(32003)[x, y, z, w]",
+      presentation: { type: "Matrix", rows: [["x", "y"]] },
+      degrees: [0],
+    });
+    const F = { type: "Matrix" as const, ring: S, rows: [[], []], cols: 0 };
+    expect(roundTrip({ type: "Module", ring: S, presentation: F, degrees: [0, 2] })).toMatchObject({ text: "GF(32003)[x, y, z, w]^[0, 2]", degrees: [0, 2] });
+  });
+
+  it("Module: a presentation of null, or degrees that do not match its rows, do not restore", () => {
+    const ring = encodeValue(S);
+    const bad = { type: "Module", text: "?", presentation: null, degrees: [], ring };
+    expect(() => decodeValue(bad, { rings: new RingRegistry() })).toThrow(/needs its presentation/);
+    const A = encodeValue({ type: "Matrix", ring: S, rows: [[P(S, "x")]], cols: 1 });
+    expect(() => decodeValue({ ...bad, presentation: A, degrees: [0, 1] }, { rings: new RingRegistry() })).toThrow(/2 generators but the presentation has 1 rows/);
   });
 
   it("BettiTable and Complex: entries [i, j, b] with j the internal degree", () => {
