@@ -5,7 +5,9 @@ import { gradedQuotient, type GradedQuotient } from "../graded/piece";
 import { type Ideal, idealGroebnerBasis, idealSum } from "../ideal";
 import { checkLimit, checkpoint, type ComputeOptions } from "../options";
 import { add, degree, monomial, type Poly, type PolyRing, terms, zero } from "../index";
-import { densify, GradedFree, type Sparse, sparsify } from "./free";
+import { compact, densify, GradedFree, type Sparse, sparsify } from "./free";
+import { freeModule, moduleHilbertSeries } from "../module";
+import { hilbertFunctionValues, hilbertPolynomial } from "../hilbert";
 
 /// β_{i,j} for one homological degree i.
 export interface BettiColumn {
@@ -53,7 +55,10 @@ export interface ResolveRequest<C> {
   /// R = S/J, J homogeneous.
   ring: Ideal;
   /// The module R/I (I an ideal of S; the residue field when I is the ideal of the variables).
-  module: Ideal;
+  module?: Ideal;
+  /// Or a module given by a presentation: coker of a matrix over R (entries in S, read
+  /// modulo J, homogeneous), its rows the generators in the given degrees (≥ 0).
+  presentation?: ModulePresentation;
   length: number;
   degree?: number;
   opts?: LocalResolveOptions;
@@ -61,6 +66,12 @@ export interface ResolveRequest<C> {
   /// Keep the differentials as matrices while Σ rank_{i−1}·rank_i stays within this many
   /// entries; past it no map is kept (`maps` absent).
   keepMaps?: number;
+}
+
+export interface ModulePresentation {
+  rows: readonly (readonly Poly[])[];
+  /// The degree of each generator (row).
+  degrees: readonly number[];
 }
 
 /// Whether every element of a Gröbner basis is a monomial (then the ideal is monomial and
@@ -90,29 +101,37 @@ export function resolveDegreewise<C>(req: ResolveRequest<C>): QuotientResolution
   const { opts } = req;
   const S = req.ring.ring;
   const R = gradedQuotient(req.ring) as GradedQuotient<C>;
-  const Mring = idealSum(req.ring, req.module);
-  const Q = gradedQuotient(Mring) as GradedQuotient<C>;
   const K = R.K;
   const n = req.length;
   if (!Number.isInteger(n) || n < 0) throw new AlgebraError("runtime", "resolution: the length must be a non-negative integer");
-  const plan = degreePlan(S, R, Q, req.module, n, req.degree);
+  if ((req.module === undefined) === (req.presentation === undefined)) throw new AlgebraError("runtime", "resolution: give either an ideal or a presentation");
+  const pres = req.presentation ? presentationVectors(S, R, req.presentation) : null;
+  const Q = req.module ? (gradedQuotient(idealSum(req.ring, req.module)) as GradedQuotient<C>) : null;
+  const top = Q ? Q.topDegree() : topDegreeOf(S, req.ring, req.presentation!, opts);
+  const gensDeg = Q ? Math.max(1, ...idealGroebnerBasis(req.module!).map((f: Poly) => degree(S, f))) : Math.max(1, ...pres!.columns.map((c) => c.degree));
+  const plan = degreePlan(S, R, top, gensDeg, pres ? Math.max(0, ...req.presentation!.degrees) : 0, n, req.degree);
   checkLimit(opts, "maxDegree", plan.D === Infinity ? 0 : plan.D, "the internal degree of the resolution");
-  const multi = isMonomialIdeal(req.ring) && isMonomialIdeal(req.module);
+  const multi = !pres && isMonomialIdeal(req.ring) && isMonomialIdeal(req.module!);
   const origin = new Array<number>(R.n).fill(0);
   const maxW = Math.max(...R.weights);
 
-  // F_{−1} = the module R/I itself, as one generator over the pieces of S/(J + I).
-  let target = new GradedFree<C>(Q, multi);
-  target.addGenerator(0, { idx: [], val: [] }, origin);
+  // F_{−1} = the module R/I itself, as one generator over the pieces of S/(J + I); for a
+  // presented module there is no target: K_0 is the span of the relations.
+  let target = new GradedFree<C>(Q ?? R, multi);
   let F = new GradedFree<C>(R, multi);
-  F.addGenerator(0, { idx: [0], val: [K.one] }, origin);
+  if (pres) {
+    req.presentation!.degrees.forEach((d) => F.addGenerator(d, { idx: [], val: [] }));
+  } else {
+    target.addGenerator(0, { idx: [], val: [] }, origin);
+    F.addGenerator(0, { idx: [0], val: [K.one] }, origin);
+  }
   let prevKernelDims = new Map<string, number>();
   const columns: BettiColumn[] = [];
   const push = (c: BettiColumn) => {
     columns.push(c);
     opts?.partial?.(c);
   };
-  push({ index: 0, entries: [{ degree: 0, count: 1 }], total: 1, complete: true });
+  push({ index: 0, entries: countDegrees(F.degrees), total: F.rank, complete: true });
   let prevComplete = true;
   let maps: Poly[][][] | null | undefined;
   let mapEntries = 0;
@@ -123,6 +142,11 @@ export function resolveDegreewise<C>(req: ResolveRequest<C>): QuotientResolution
     const kernels = new Map<number, Map<string, Echelon<C>>>();
     const kernelDims = new Map<string, number>();
     const images = new ImageCache(F, target);
+    if (F.rank === 0) {
+      // M = 0 (a free module of rank 0): every column is zero.
+      for (let k = i + 1; k <= n; k++) push({ index: k, entries: [], total: 0, complete: true });
+      break;
+    }
     const jmin = Math.min(...F.degrees);
     const natural = R.isArtinian ? Math.max(...F.degrees) + R.topDegree()! : Infinity;
     const jmax = Math.min(plan.D, natural);
@@ -138,7 +162,10 @@ export function resolveDegreewise<C>(req: ResolveRequest<C>): QuotientResolution
         const dimF = block.length;
         const tBlock = TL.blocks.get(key) ?? [];
         // d_i maps F_i onto K_{i−1} (onto the module itself for i = 0).
-        const expected = dimF - (i === 0 ? tBlock.length : (prevKernelDims.get(`${j}|${key}`) ?? 0));
+        const relations = i === 0 && pres ? pres.columns.filter((c) => c.degree === j) : null;
+        const expected = relations
+          ? dimF
+          : dimF - (i === 0 ? tBlock.length : (prevKernelDims.get(`${j}|${key}`) ?? 0));
         const P = new Echelon<C>(K, dimF);
         // Products beyond rank `expected` add nothing: they all lie in K_{i,j}.
         products: for (let v = 0; v < R.n && expected > 0; v++) {
@@ -155,7 +182,18 @@ export function resolveDegreewise<C>(req: ResolveRequest<C>): QuotientResolution
         }
         if (P.rank > expected) throw new AlgebraError("runtime", "resolution: internal inconsistency (syzygies exceed the kernel)");
         let decomposable = P;
-        if (P.rank < expected) {
+        if (relations) {
+          // K_{0,j} = m·K_0 in degree j plus the relations of degree j; those outside the
+          // span so far are minimal relations (graded Nakayama).
+          if (req.inspect) {
+            decomposable = new Echelon<C>(K, dimF);
+            for (const r of P.rows) decomposable.insert(r);
+          }
+          for (const rel of relations) {
+            const z = densify(K, rel.vector, L, dimF);
+            if (P.insert(z)) next.addGenerator(j, rel.vector);
+          }
+        } else if (P.rank < expected) {
           if (req.inspect) {
             decomposable = new Echelon<C>(K, dimF);
             for (const r of P.rows) decomposable.insert(r);
@@ -289,14 +327,13 @@ interface DegreePlan {
 ///   cited from memory).
 /// * M of finite length with top degree s: Tor_i(M, k) is a subquotient of M ⊗ F_i(k), so
 ///   t_i(M) ≤ t_i(k) + s.
-function degreePlan<C>(S: PolyRing, R: GradedQuotient<C>, Q: GradedQuotient<C>, I: Ideal, n: number, degreeBound?: number): DegreePlan {
+function degreePlan<C>(S: PolyRing, R: GradedQuotient<C>, s: number | null, gensDeg: number, top0: number, n: number, degreeBound?: number): DegreePlan {
   const standard = S.degrees.every((w) => w === 1);
   const g = Math.max(2, R.initialDegree);
-  const s = Q.topDegree();
   let bound: (i: number) => number = () => Infinity;
   let reason = "no degree bound is known for this module: columns beyond the computed degrees are lower bounds";
   if (standard && s !== null) {
-    bound = (i) => (i === 0 ? 0 : 1 + (i - 1) * (g - 1) + s);
+    bound = (i) => (i === 0 ? top0 : 1 + (i - 1) * (g - 1) + s);
     reason = "degrees bounded by the rate of R (Backelin) plus the top degree of the module";
   }
   if (R.isArtinian) reason = "R is Artinian: every graded piece beyond the computed ones is zero";
@@ -307,6 +344,58 @@ function degreePlan<C>(S: PolyRing, R: GradedQuotient<C>, Q: GradedQuotient<C>, 
   if (R.isArtinian) return { D: Infinity, bound, reason };
   if (bound(n) < Infinity) return { D: bound(n), bound, reason };
   // No proven bound: a generous guess, and the columns say they may be incomplete.
-  const gensDeg = Math.max(1, ...idealGroebnerBasis(I).map((f: Poly) => degree(S, f)));
   return { D: 1 + n * Math.max(g, gensDeg), bound, reason };
+}
+
+/// The columns of a presentation as sparse vectors of F_0 = ⊕ R(−a_p), each in its degree
+/// (the entries reduced to normal form modulo J).
+function presentationVectors<C>(S: PolyRing, R: GradedQuotient<C>, P: ModulePresentation): { columns: { degree: number; vector: Sparse<C> }[] } {
+  const degs = P.degrees;
+  if (degs.some((d) => !Number.isInteger(d) || d < 0)) throw new AlgebraError("runtime", "resolution: generator degrees must be integers ≥ 0");
+  if (P.rows.length !== degs.length) throw new AlgebraError("runtime", "resolution: one degree per row of the presentation is needed");
+  const cols = P.rows[0]?.length ?? 0;
+  const K = R.K;
+  const out: { degree: number; vector: Sparse<C> }[] = [];
+  for (let q = 0; q < cols; q++) {
+    let d: number | null = null;
+    for (let p = 0; p < degs.length; p++) {
+      for (const t of terms(S, P.rows[p][q])) {
+        const e = degs[p] + t.exps.reduce((a, x, v) => a + x * S.degrees[v], 0);
+        if (d !== null && d !== e) throw new AlgebraError("runtime", `resolution: column ${q + 1} of the presentation is not homogeneous`);
+        d = e;
+      }
+    }
+    if (d === null) continue; // a zero column
+    const acc = new Map<number, C>();
+    let offset = 0;
+    for (let p = 0; p < degs.length; p++) {
+      for (const t of terms(S, P.rows[p][q])) {
+        const nf = R.reduceMonomial(d - degs[p], t.exps);
+        const c = K.fromRational(t.num, t.den);
+        nf.idx.forEach((k, r) => acc.set(offset + k, K.add(acc.get(offset + k) ?? K.zero, K.mul(c, nf.val[r]))));
+      }
+      offset += R.dim(d - degs[p]);
+    }
+    const vector = compact(K, acc);
+    if (vector.idx.length > 0) out.push({ degree: d, vector });
+  }
+  return { columns: out };
+}
+
+/// The top degree of a presented module M over S/J when M has finite length (null
+/// otherwise), from its Hilbert series as an S-module presented by [A | J·1].
+function topDegreeOf(S: PolyRing, J: Ideal, P: ModulePresentation, opts?: ComputeOptions): number | null {
+  const r = P.degrees.length;
+  const gens: Poly[][] = [];
+  const cols = P.rows[0]?.length ?? 0;
+  for (let q = 0; q < cols; q++) gens.push(P.rows.map((row) => row[q]));
+  for (const g of idealGroebnerBasis(J)) for (let p = 0; p < r; p++) gens.push(P.degrees.map((_, k) => (k === p ? g : zero(S))));
+  const hs = moduleHilbertSeries(freeModule(S, P.degrees), gens, opts);
+  if (hilbertPolynomial(hs).some((c) => c.num !== 0n)) return null;
+  let top = -1;
+  const N = hs.numerator.length + 1;
+  hilbertFunctionValues(hs, N, opts).forEach((v, d) => {
+    if (v !== 0n) top = d;
+  });
+  return top < 0 ? null : top;
 }
