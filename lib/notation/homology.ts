@@ -28,6 +28,7 @@ import { limit, runtime } from "./errors";
 import { matrixOf, moduleOf, moduleValue, presentationOverS } from "./modules";
 import { pendingError } from "./pending";
 import { bound, complexOf } from "./resolutions";
+import { resolveOverQuotient, syzygyOverQuotient } from "./quotients";
 import { ringText } from "./text";
 import type { ComplexValue, IdealValue, ModuleValue, RingValue, Value } from "./values";
 
@@ -176,7 +177,8 @@ export const MODULE_PROPERTIES: Record<string, PropertyImpl> = {
 
 /// resolve(M) for a presented module over a polynomial ring.
 export function resolveModule(M: ModuleValue, c: CallContext): ComplexValue {
-  overPolynomialRing(M, "resolve", c.argSpans[0] ?? c.span);
+  // over a quotient ring: degree by degree (engine part 3, quotients.ts)
+  if (M.ring.ideal.length > 0) return resolveOverQuotient(M, c);
   const { P, shift } = shiftedOverS(M, c.span);
   const length = bound(c, "length", 1000);
   const degree = bound(c, "degree", 100_000);
@@ -244,9 +246,10 @@ function koszulValue(ring: RingValue, fs: readonly Poly[], c: CallContext): Comp
 export const HOMOLOGY_FUNCTIONS: Record<string, FunctionImpl> = {
   "hilbert(Module)": ([M], c) => hilbertOf(asModule(M, c, c.argSpans[0]), c, c.argSpans[0]),
   "syzygy(Module or Ring, Int)": ([m, p], c) => {
-    const M = asModule(m, c, c.argSpans[0]);
-    overPolynomialRing(M, "syzygy", c.argSpans[0]);
     const k = indexArg(p, c.argSpans[1], "the syzygy index");
+    // over a quotient ring (a module over S/J, or (S/J)/I read as a module): engine part 3
+    if ((m.type === "Ring" && m.over) || (m.type === "Module" && m.ring.ideal.length > 0)) return syzygyOverQuotient(m, k, c);
+    const M = asModule(m, c, c.argSpans[0]);
     const { P, shift } = shiftedOverS(M, c.span);
     const C = resolveCoker(M.ring.poly, P.rows, P.rowDegrees, { ...opts(c), length: k + 1 });
     const Z = syzygyPresentation(C, k);

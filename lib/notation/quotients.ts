@@ -11,7 +11,9 @@ import {
   idealSum,
   ideal as engineIdeal,
   minors,
+  moduleSocle,
   resolveDegreewise,
+  type ModulePresentation,
   resolveQuotient,
   truncatedSeries,
   eventualPeriod,
@@ -25,7 +27,8 @@ import { colonOf, groebnerOf, idealValue } from "./ideals";
 import { encodeValue } from "./json";
 import { ascendingText } from "./series-text";
 import { QQ, add, formatPoly, monomial, zero } from "../algebra/index";
-import type { BettiEntry, ComplexValue, IdealValue, MatrixValue, RingValue, SeriesValue, Value } from "./values";
+import type { BettiEntry, ComplexValue, IdealValue, MatrixValue, ModuleValue, RingValue, SeriesValue, Value } from "./values";
+import { moduleValue } from "./modules";
 import { list } from "./values";
 
 const Int = (value: number | bigint): Value => ({ type: "Int", value: BigInt(value) });
@@ -76,10 +79,10 @@ function firstInexact(r: QuotientResolution): number | null {
 }
 
 /// What a truncated resolution leaves out, said plainly.
-function truncationNote(r: QuotientResolution, length: number): string | undefined {
+function truncationNote(r: QuotientResolution, length: number, shift: number): string | undefined {
   const k = firstInexact(r);
   if (k !== null) {
-    const d = r.exactThroughDegree;
+    const d = r.exactThroughDegree - shift;
     return `internal degrees above ${d} were not computed, so β_i for i ≥ ${k} are lower bounds (β_{i,j} with j ≤ ${d} are exact)`;
   }
   const last = r.columns[r.columns.length - 1];
@@ -89,78 +92,112 @@ function truncationNote(r: QuotientResolution, length: number): string | undefin
 
 type BettiColumn = QuotientResolution["columns"][number];
 
-function entriesOf(columns: readonly BettiColumn[]): BettiEntry[] {
-  return columns.flatMap((col) => col.entries.map((e) => [col.index, e.degree, e.count] as const));
+function entriesOf(columns: readonly BettiColumn[], shift = 0): BettiEntry[] {
+  return columns.flatMap((col) => col.entries.map((e) => [col.index, e.degree - shift, e.count] as const));
 }
 
-/// resolve(A / I, length = n, degree = d) for A itself a quotient S/J: the minimal graded
-/// free resolution of A/I over A, degree by degree.
-export function resolveOverQuotient(m: RingValue, c: CallContext): ComplexValue {
-  const span = c.argSpans[0] ?? c.span;
+/// What to resolve over A = S/J: R/I given by I, or a presented module (generators moved
+/// up by `shift` into degrees ≥ 0; the Betti numbers are moved back).
+interface Target {
+  base: RingValue;
+  J: Ideal;
+  module?: Ideal;
+  presentation?: ModulePresentation;
+  shift: number;
+}
+
+function targetOfRing(m: RingValue, span: Span, what: string, c: CallContext): Target {
   const M = cyclicModule(m, c);
-  requireGraded(M, "resolve", span, c);
+  requireGraded(M, what, span, c);
+  return { base: M.base, J: M.J, module: M.I, shift: 0 };
+}
+
+function targetOfModule(M: ModuleValue, span: Span, what: string, c: CallContext): Target {
+  const J = engineIdeal(M.ring.poly, M.ring.ideal);
+  if (!idealIsHomogeneous(J, opts(c))) throw runtime(`${what} over a quotient ring needs a homogeneous defining ideal`, span);
+  const shift = -Math.min(0, ...M.degrees);
+  return { base: M.ring, J, presentation: { rows: M.presentation.rows, degrees: M.degrees.map((d) => d + shift) }, shift };
+}
+
+function degreewise(t: Target, length: number, degree: number | undefined, c: CallContext, stream: boolean, keepMaps?: number): QuotientResolution {
+  const partial = stream ? c.interp.session.partial : undefined;
+  return resolveDegreewise({
+    ring: t.J,
+    ...(t.module ? { module: t.module } : { presentation: t.presentation! }),
+    length,
+    degree: degree === undefined ? undefined : degree + t.shift,
+    keepMaps,
+    opts: {
+      ...opts(c),
+      // each finished column streams as a one-column, still-incomplete Betti table
+      partial: partial
+        ? (col) => partial({ type: "BettiTable", entries: entriesOf([col], t.shift), complete: false, note: "the resolution is still running" })
+        : undefined,
+    },
+  });
+}
+
+/// resolve(M, length = n, degree = d) over a quotient ring A = S/J, degree by degree: M a
+/// quotient A / I (A itself a quotient) or a module presented over A.
+export function resolveOverQuotient(m: RingValue | ModuleValue, c: CallContext): ComplexValue {
+  const span = c.argSpans[0] ?? c.span;
+  const t = m.type === "Ring" ? targetOfRing(m, span, "resolve", c) : targetOfModule(m, span, "resolve", c);
   const length = bound(c, "length", 1000);
   if (length === undefined) {
     throw runtime("over a quotient ring a resolution is usually infinite: give a bound, e.g. resolve(M, length = 6)", c.span);
   }
   const degree = bound(c, "degree", 100_000);
-  const partial = c.interp.session.partial;
-  const r = resolveDegreewise({
-    ring: M.J,
-    module: M.I,
-    length,
-    degree,
-    keepMaps: MAX_MAP_ENTRIES,
-    opts: {
-      ...opts(c),
-      // each finished column streams as a one-column, still-incomplete Betti table
-      partial: partial
-        ? (col) => partial({ type: "BettiTable", entries: entriesOf([col]), complete: false, note: "the resolution is still running" })
-        : undefined,
-    },
-  });
+  const r = degreewise(t, length, degree, c, true, MAX_MAP_ENTRIES);
   const complete = r.complete && r.columns[r.columns.length - 1].total === 0;
-  const note = complete ? undefined : truncationNote(r, length);
+  const note = complete ? undefined : truncationNote(r, length, t.shift);
   const ranks = r.columns.map((col) => col.total);
   const maps: MatrixValue[] | null = r.maps
-    ? r.maps.map((rows, i) => ({ type: "Matrix", ring: M.base, rows, cols: ranks[i + 1] }))
+    ? r.maps.map((rows, i) => ({ type: "Matrix", ring: t.base, rows, cols: ranks[i + 1] }))
     : null;
   return {
     type: "Complex",
-    ring: M.base,
+    ring: t.base,
     ranks,
-    betti: { type: "BettiTable", entries: entriesOf(r.columns), complete, ...(note ? { note } : {}) },
+    betti: { type: "BettiTable", entries: entriesOf(r.columns, t.shift), complete, ...(note ? { note } : {}) },
     complete,
     maps,
     ...(note ? { note } : {}),
   };
 }
 
+/// syzygy(M, p) over a quotient ring: Ω^p M = image of d_p ≅ coker(d_{p+1}), generated in
+/// the degrees of F_p. Needs the columns p and p + 1 exact.
+export function syzygyOverQuotient(m: RingValue | ModuleValue, p: number, c: CallContext): ModuleValue {
+  const span = c.argSpans[0] ?? c.span;
+  const t = m.type === "Ring" ? targetOfRing(m, span, "syzygy", c) : targetOfModule(m, span, "syzygy", c);
+  const r = degreewise(t, p + 1, undefined, c, false, Number.MAX_SAFE_INTEGER);
+  const k = firstInexact(r);
+  if (k !== null && k <= p + 1) {
+    throw runtime(`syzygy: no degree bound is known that makes F_${k} of this resolution exact (the module has infinite length over a ring that is not Artinian)`, span);
+  }
+  const degrees = (r.columns[p]?.entries ?? []).flatMap((e) => Array.from({ length: e.count }, () => e.degree - t.shift));
+  const rows = r.maps && r.maps[p] ? r.maps[p] : degrees.map(() => []);
+  return moduleValue(t.base, rows, degrees);
+}
+
 /// poincare(M, terms = n): Σ β_i t^i for i < n, with a guessed rational function that fits
 /// every exact term (Berlekamp–Massey, accepted only when further terms confirm it).
 export function poincareValue([M]: readonly Value[], c: CallContext): Value {
   const span = c.argSpans[0] ?? c.span;
-  if (M.type === "Module") {
-    throw runtime("poincare of a module given by a presentation is not available yet; write the module as a quotient ring A / I", span);
-  }
-  if (M.type !== "Ring") throw runtime(`poincare expects a Module or a quotient ring, got ${M.type}`, span);
+  if (M.type !== "Ring" && M.type !== "Module") throw runtime(`poincare expects a Module or a quotient ring, got ${M.type}`, span);
   const terms = bound(c, "terms", 1000) ?? 10;
   if (terms < 1) throw runtime("terms must be at least 1", c.span);
-  const mod = cyclicModule(M, c);
-  requireGraded(mod, "poincare", span, c);
-  let totals: number[];
-  let exact: number;
-  if (!M.over) {
+  if (M.type === "Ring" && !M.over) {
     // over a polynomial ring the resolution is finite (part 2), every term exact
+    const mod = cyclicModule(M, c);
+    requireGraded(mod, "poincare", span, c);
     const r = resolveQuotient(mod.I, { ...opts(c), length: terms - 1 });
-    totals = Array.from({ length: terms }, (_, i) => r.ranks[i] ?? 0);
-    exact = terms;
-  } else {
-    const r = resolveDegreewise({ ring: mod.J, module: mod.I, length: terms - 1, opts: opts(c) });
-    totals = Array.from({ length: terms }, (_, i) => r.columns[i]?.total ?? 0);
-    exact = firstInexact(r) ?? terms;
+    return seriesValue(Array.from({ length: terms }, (_, i) => BigInt(r.ranks[i] ?? 0)), terms);
   }
-  return seriesValue(totals.map(BigInt), exact);
+  const t = M.type === "Ring" ? targetOfRing(M, span, "poincare", c) : targetOfModule(M, span, "poincare", c);
+  const r = degreewise(t, terms - 1, undefined, c, false);
+  const totals = Array.from({ length: terms }, (_, i) => BigInt(r.columns[i]?.total ?? 0));
+  return seriesValue(totals, firstInexact(r) ?? terms);
 }
 
 function seriesValue(coeffs: readonly bigint[], exact: number): SeriesValue {
@@ -249,7 +286,24 @@ export const QUOTIENT_FUNCTIONS: Record<string, (args: readonly Value[], c: Call
   },
 };
 
+/// The socle of a module (degrees of a basis) and whether k splits off, degree by degree.
+function socleOf(M: ModuleValue, c: CallContext): { degrees: number[]; splits: boolean } {
+  const t = targetOfModule(M, c.span, "the socle", c);
+  const s = moduleSocle(t.J, t.presentation!, opts(c));
+  return { degrees: s.degrees.map((d) => d - t.shift), splits: s.splits };
+}
+
 export const QUOTIENT_PROPERTIES: Record<string, (obj: Value, args: readonly Value[], c: CallContext) => Value> = {
+  // (0 :_M m) is a k-vector space: ⊕ k(−j), one copy per basis element, as a module over M's ring
+  "Module.socle": (v, _a, c) => {
+    const M = v as ModuleValue;
+    const { degrees } = socleOf(M, c);
+    const P = M.ring.poly;
+    // relations x_i·e_g for every generator g and variable x_i
+    const rows = degrees.map((_, g) => degrees.flatMap((__, h) => P.vars.map((___, i) => (g === h ? variable(P, i) : zero(P)))));
+    return moduleValue(M.ring, rows, degrees);
+  },
+  "Module.splits_residue": (v, _a, c) => Bool(socleOf(v as ModuleValue, c).splits),
   "Ring.socle": (v, _a, c) => {
     const r = v as RingValue;
     // given by its reduced Gröbner basis (the colon's own generators repeat)

@@ -17,8 +17,6 @@ const PART_3 = [
   "random_ideals(Ring)",
   "monomial_ideals(Ring)",
   "sweep(Family, Function(Ideal) -> Any)",
-  "Module.socle",
-  "Module.splits_residue",
   "Family.length",
 ];
 
