@@ -261,7 +261,8 @@ describe("modules over quotient rings", () => {
 
   it("depth 0: k is a summand of Ω^2 k for a Burch ring, not for a non-Burch one", async () => {
     // H. Dao, T. Kobayashi, R. Takahashi, "Burch ideals and Burch rings", Algebra & Number
-    // Theory 14 (2020) (the statement of issue 6). k[x,y]/(x^2, xy, y^3): I : m = (x, y^2) and
+    // Theory 14 (2020), as quoted by H. Dao, D. Eisenbud, Bull. Iranian Math. Soc. 2023 (arXiv
+    // 2208.05427, introduction): a depth-0 ring is Burch iff k is a direct summand of Ω^2 k. k[x,y]/(x^2, xy, y^3): I : m = (x, y^2) and
     // (m·I) : (I : m) = m^2 by hand, Burch index 2. k[x,y]/(x^2, y^2): index 0 (by hand, above).
     const v = await values(
       "S := GF(101)[x, y]\nB := S / <x^2, x*y, y^3>\nB.burch_index\nsyzygy(B.residue, 2).splits_residue\nuse S\nC := S / <x^2, y^2>\nC.burch_index\nsyzygy(C.residue, 2).splits_residue",
