@@ -12,6 +12,10 @@ import {
   ideal as engineIdeal,
   minors,
   moduleSocle,
+  componentAtOrigin,
+  idealEquals,
+  resolveLocalArtinian,
+  type LocalResolution,
   resolveDegreewise,
   type ModulePresentation,
   resolveQuotient,
@@ -55,7 +59,7 @@ function cyclicModule(m: RingValue, c: CallContext): CyclicModule {
 function requireGraded(M: CyclicModule, what: string, span: Span, c: CallContext): void {
   if (!idealIsHomogeneous(M.J, opts(c)) || !idealIsHomogeneous(M.I, opts(c))) {
     throw runtime(
-      `${what} over a quotient ring needs homogeneous ideals (a graded ring and module); for a local Artinian ring given by a non-homogeneous ideal only the socle and the Burch index are available`,
+      `${what} over a quotient ring needs homogeneous ideals (a graded ring and module); a ring given by a non-homogeneous ideal is read at the origin only by resolve, poincare, socle and the Burch index, and only when the origin is an isolated point`,
       span,
     );
   }
@@ -137,15 +141,40 @@ function degreewise(t: Target, length: number, degree: number | undefined, c: Ca
   });
 }
 
+const isGraded = (M: CyclicModule, c: CallContext) => idealIsHomogeneous(M.J, opts(c)) && idealIsHomogeneous(M.I, opts(c));
+
+/// A quotient A / I with A or I not homogeneous, read over the local ring of A at the origin
+/// (Artinian there: the origin an isolated point), ungraded, by linear algebra on that ring.
+function localResolution(m: RingValue, length: number, c: CallContext): { r: LocalResolution; sameRing: boolean; base: RingValue } {
+  const M = cyclicModule(m, c);
+  const Q = componentAtOrigin(M.J, opts(c)).ideal;
+  return { r: resolveLocalArtinian(Q, idealSum(Q, M.I), length, opts(c)), sameRing: idealEquals(Q, M.J, opts(c)), base: M.base };
+}
+
+const LOCAL_NOTE = "over the local ring at the origin, ungraded: the Betti table lists β_i under internal degree 0";
+
+function localComplex(m: RingValue, length: number, c: CallContext): ComplexValue {
+  const { r, sameRing, base } = localResolution(m, length, c);
+  const note = r.complete ? LOCAL_NOTE : `only homological degrees ≤ ${length} were computed; the resolution goes on; ${LOCAL_NOTE}`;
+  const entries: BettiEntry[] = r.ranks.flatMap((b, i) => (b > 0 ? [[i, 0, b] as const] : []));
+  // the maps live over the local ring; they are maps over A itself only when A is that ring
+  const maps: MatrixValue[] | null = sameRing ? r.maps.map((rows, i) => ({ type: "Matrix", ring: base, rows, cols: r.ranks[i + 1] })) : null;
+  return { type: "Complex", ring: base, ranks: r.ranks, betti: { type: "BettiTable", entries, complete: r.complete, note }, complete: r.complete, maps, note };
+}
+
 /// resolve(M, length = n, degree = d) over a quotient ring A = S/J, degree by degree: M a
 /// quotient A / I (A itself a quotient) or a module presented over A.
 export function resolveOverQuotient(m: RingValue | ModuleValue, c: CallContext): ComplexValue {
   const span = c.argSpans[0] ?? c.span;
-  const t = m.type === "Ring" ? targetOfRing(m, span, "resolve", c) : targetOfModule(m, span, "resolve", c);
   const length = bound(c, "length", 1000);
   if (length === undefined) {
     throw runtime("over a quotient ring a resolution is usually infinite: give a bound, e.g. resolve(M, length = 6)", c.span);
   }
+  if (m.type === "Ring" && !isGraded(cyclicModule(m, c), c)) {
+    if (c.named.has("degree")) throw runtime("degree bounds need a graded ring; this one is read at the origin, ungraded", c.span);
+    return localComplex(m, length, c);
+  }
+  const t = m.type === "Ring" ? targetOfRing(m, span, "resolve", c) : targetOfModule(m, span, "resolve", c);
   const degree = bound(c, "degree", 100_000);
   const r = degreewise(t, length, degree, c, true, MAX_MAP_ENTRIES);
   const complete = r.complete && r.columns[r.columns.length - 1].total === 0;
@@ -193,6 +222,10 @@ export function poincareValue([M]: readonly Value[], c: CallContext): Value {
     requireGraded(mod, "poincare", span, c);
     const r = resolveQuotient(mod.I, { ...opts(c), length: terms - 1 });
     return seriesValue(Array.from({ length: terms }, (_, i) => BigInt(r.ranks[i] ?? 0)), terms);
+  }
+  if (M.type === "Ring" && !isGraded(cyclicModule(M, c), c)) {
+    const { r } = localResolution(M, terms - 1, c);
+    return seriesValue(r.ranks.map(BigInt), terms);
   }
   const t = M.type === "Ring" ? targetOfRing(M, span, "poincare", c) : targetOfModule(M, span, "poincare", c);
   const r = degreewise(t, terms - 1, undefined, c, false);

@@ -158,10 +158,27 @@ describe("resolve over a quotient ring", () => {
     expect(limited.error?.kind).toBe("limit");
   });
 
-  it("refuses a non-homogeneous ring with a clear message", async () => {
-    const out = await run("L0 := Q[u, v]\nL := L0 / <u^2 + v^3, u*v>\nresolve(L / L.maximal, length = 3)");
-    expect(out.error?.message).toMatch(/needs homogeneous ideals/);
-    expect(out.error?.span.from).toEqual({ line: 3, col: 9 });
+  it("reads a ring given by a non-homogeneous ideal at the origin, and says so", async () => {
+    // Q[u,v]/(u^2 + v^3, uv) is a complete intersection in m^2, Artinian at the origin: Tate 1957
+    // gives P = (1+t)^2/(1−t^2)^2 = 1/(1−t)^2. (u(u−1), v^2) is k[v]/(v^2) at the origin (u − 1 is a
+    // unit there), where every β_i(k) = 1 (common practice).
+    const v = await values(
+      "L0 := Q[u, v]\nL := L0 / <u^2 + v^3, u*v>\nC := resolve(L / L.maximal, length = 4)\nC.ranks\nC.map(1) * C.map(2)\npoincare(L / L.maximal, terms = 8).rational\nuse L0\nW := L0 / <u*(u - 1), v^2>\nresolve(W / W.maximal, length = 3).ranks",
+    );
+    expect(ints(v[3])).toEqual([1n, 2n, 3n, 4n, 5n]);
+    expect(v[2].text).toMatch(/over the local ring at the origin, ungraded/);
+    expect((v[4] as unknown as { rows: string[][] }).rows.flat().every((e) => e === "0")).toBe(true);
+    const g = rationalOf(v[5]);
+    sameFunction(g.num, g.den, [1n], powZ([1n, -1n], 2));
+    expect(ints(v[8])).toEqual([1n, 1n, 1n, 1n]);
+  });
+
+  it("refuses a degree bound on an ungraded ring, and a ring whose origin is not isolated", async () => {
+    const a = await run("L0 := Q[u, v]\nL := L0 / <u^2 + v^3, u*v>\nresolve(L / L.maximal, length = 3, degree = 2)");
+    expect(a.error?.message).toMatch(/degree bounds need a graded ring/);
+    const b = await run("L0 := Q[u, v]\nL := L0 / <u^2 + v^3>\nresolve(L / L.maximal, length = 3)");
+    expect(b.error?.kind).toBe("runtime");
+    expect(b.error?.message).toMatch(/origin/);
   });
 });
 
