@@ -28,7 +28,7 @@ import { limit, runtime } from "./errors";
 import { matrixOf, moduleOf, moduleValue, presentationOverS } from "./modules";
 import { pendingError } from "./pending";
 import { bound, complexOf } from "./resolutions";
-import { resolveOverQuotient, syzygyOverQuotient } from "./quotients";
+import { pdOverQuotient, presentationOverQuotient, resolveOverQuotient, syzygyOverQuotient } from "./quotients";
 import { ringText } from "./text";
 import type { ComplexValue, IdealValue, ModuleValue, RingValue, Value } from "./values";
 
@@ -150,12 +150,13 @@ const MODULE_PROPS: Record<string, (M: ModuleValue, c: CallContext) => Value> = 
     return Int(minimalPresentation(M.ring.poly, P.rows, P.rowDegrees, opts(c)).rowDegrees.length);
   },
   presentation: (M, c) => {
-    overPolynomialRing(M, "a minimal presentation", c.span);
+    if (M.ring.ideal.length > 0) return presentationOverQuotient(M, c);
     const P = minimalPresentation(M.ring.poly, M.presentation.rows, M.degrees, opts(c));
     return matrixOf(M.ring, P.rows, P.rows[0]?.length ?? 0);
   },
   pd: (M, c) => {
-    overPolynomialRing(M, "pd", c.span);
+    // over a quotient ring: Auslander–Buchsbaum decides from a finite piece (quotients.ts)
+    if (M.ring.ideal.length > 0) return Int(pdOverQuotient(M, M.ring.poly.vars.length - projectiveDimension(asSModule(M, c), c), c));
     return Int(projectiveDimension(M, c));
   },
   // depth M = n − pd_S M (Auslander–Buchsbaum); depth is the grade of m on M, the same over S and S/J

@@ -12,6 +12,7 @@ import {
   ideal as engineIdeal,
   minors,
   moduleSocle,
+  quotientProperties,
   componentAtOrigin,
   idealEquals,
   resolveLocalArtinian,
@@ -207,6 +208,39 @@ export function syzygyOverQuotient(m: RingValue | ModuleValue, p: number, c: Cal
   const degrees = (r.columns[p]?.entries ?? []).flatMap((e) => Array.from({ length: e.count }, () => e.degree - t.shift));
   const rows = r.maps && r.maps[p] ? r.maps[p] : degrees.map(() => []);
   return moduleValue(t.base, rows, degrees);
+}
+
+/// A minimal presentation of a module over a quotient ring: the first differential of its
+/// minimal resolution (columns 0 and 1 must be exact).
+export function presentationOverQuotient(M: ModuleValue, c: CallContext): MatrixValue {
+  const t = targetOfModule(M, c.span, "a minimal presentation", c);
+  const r = degreewise(t, 1, undefined, c, false, Number.MAX_SAFE_INTEGER);
+  const k = firstInexact(r);
+  if (k !== null) throw runtime("a minimal presentation: no degree bound is known that makes the relations exact (the module has infinite length over a ring that is not Artinian)", c.span);
+  const rows = r.maps![0];
+  return { type: "Matrix", ring: M.ring, rows, cols: r.columns[1].total };
+}
+
+/// pd_R M over R = S/J. If it is finite it equals depth R − depth M (M. Auslander, D.
+/// Buchsbaum, "Homological dimension in local rings", Trans. AMS 85, 1957; the graded case is
+/// common practice), so the resolution decides: F_{d+1} = 0 for d = depth R − depth M, or
+/// the projective dimension is infinite (a runtime error: an Int cannot say so).
+export function pdOverQuotient(M: ModuleValue, depthM: number, c: CallContext): number {
+  const t = targetOfModule(M, c.span, "pd", c);
+  const d = quotientProperties(t.J, opts(c)).depth - depthM;
+  if (d < 0) throw runtime("pd: depth M exceeds depth R, so M is zero or the computation is inconsistent", c.span);
+  const r = degreewise(t, d + 1, undefined, c, false);
+  const k = firstInexact(r);
+  // a lower bound above 0 is enough to see F_{d+1} ≠ 0
+  if (k !== null && k <= d + 1 && r.columns[d + 1].total === 0) {
+    throw runtime(`pd: cannot decide: no degree bound is known that makes F_${k} exact for this module (infinite length over a ring that is not Artinian), and the degrees computed show F_${d + 1} = 0`, c.span);
+  }
+  if (r.columns[d + 1].total > 0) {
+    throw runtime(`the projective dimension over this quotient ring is infinite: F_${d + 1} ≠ 0, while a finite one would be depth R − depth M = ${d} (Auslander–Buchsbaum)`, c.span);
+  }
+  let pd = d;
+  while (pd > 0 && r.columns[pd].total === 0) pd--;
+  return pd;
 }
 
 /// poincare(M, terms = n): Σ β_i t^i for i < n, with a guessed rational function that fits

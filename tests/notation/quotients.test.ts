@@ -290,3 +290,28 @@ describe("modules over quotient rings", () => {
     expect(bool(v[7])).toBe(false);
   });
 });
+
+describe("pd and minimal presentations over quotient rings", () => {
+  it("decides pd by Auslander–Buchsbaum: finite only if F_{d+1} = 0 for d = depth R − depth M", async () => {
+    // M. Auslander, D. Buchsbaum, Trans. AMS 85 (1957): a finite pd equals depth R − depth M.
+    // Over the Artinian T = k[x,y,z]/(x^2,y^2,z^2) (depth 0) a finite pd is 0: T^2 is free, and
+    // k and T/(x) are not (x·T/(x) ≠ 0 has a nonzero annihilator: F_1 ≠ 0).
+    const v = await values("S := GF(101)[x, y, z]\nT := S / <x^2, y^2, z^2>\n(T^2).pd\nT.residue.presentation");
+    expect(v[2]).toMatchObject({ value: "0" });
+    expect((v[3] as unknown as { rows: string[][] }).rows).toEqual([["x", "y", "z"]]);
+    for (const m of ["T.residue", "(T / <x>)"]) {
+      const out = await run(`S := GF(101)[x, y, z]\nT := S / <x^2, y^2, z^2>\n${m}.pd`);
+      expect(out.error?.message).toMatch(/projective dimension over this quotient ring is infinite: F_1 ≠ 0/);
+    }
+  });
+
+  it("sees an infinite pd from lower bounds, and says when it cannot decide", async () => {
+    // Over R = k[x,y,z]/(x^2) (depth 2): R/(x) has depth 2, so a finite pd would be 0, but F_1 ≠ 0
+    // (the periodic resolution ← R ←x− R ←x− …, common practice). R/(y) has pd 1 (y is regular), but
+    // no degree bound is proven for this module of positive dimension: the answer says so.
+    const a = await run("S := GF(101)[x, y, z]\nR := S / <x^2>\n(R / <x>).pd");
+    expect(a.error?.message).toMatch(/infinite/);
+    const b = await run("S := GF(101)[x, y, z]\nR := S / <x^2>\n(R / <y>).pd");
+    expect(b.error?.message).toMatch(/cannot decide/);
+  });
+});
