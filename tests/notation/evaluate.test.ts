@@ -345,7 +345,7 @@ describe("errors with kind and span", () => {
     const out = await run("S := Q[x, y]\nrandom_ideals(S)");
     expect(out.error).toMatchObject({ kind: "runtime", span: { from: { line: 2, col: 1 } } });
     expect(out.error!.message).toMatch(/engine part 3/);
-    const quotient = await run("S := Q[x, y]\n(S / <x^2>).residue.pd");
+    const quotient = await run("S := Q[x, y]\n(S / <x^2>).residue.reg");
     expect(quotient.error!.message).toMatch(/engine part 3/);
   });
 });
