@@ -6,6 +6,7 @@
 import type { Span } from "../../grammar/ast";
 import {
   AlgebraError,
+  checkpoint,
   extModule,
   freeModule,
   koszulComplex,
@@ -228,9 +229,17 @@ function finiteLength<T>(what: string, span: Span, f: () => T): T {
   }
 }
 
+/// The most entries a Koszul complex's differentials may have together (dense matrices).
+const MAX_KOSZUL_ENTRIES = 2_000_000;
+
 function koszulValue(ring: RingValue, fs: readonly Poly[], c: CallContext): ComplexValue {
   const K = koszulComplex(ring.poly, fs);
+  const entries0 = K.ranks.slice(1).reduce((s, r, k) => s + r * K.ranks[k], 0);
+  if (entries0 > MAX_KOSZUL_ENTRIES) {
+    throw limit(`the Koszul complex on ${fs.length} elements has ${entries0} matrix entries, beyond the limit ${MAX_KOSZUL_ENTRIES}`, c.span);
+  }
   const maps = Array.from({ length: K.length }, (_, k) => {
+    checkpoint(opts(c), { stage: "Koszul complex", detail: `differential ${k + 1}` });
     const A = K.map(k + 1).map((row) => row.map((f) => reduceIn(ring, f, opts(c))));
     return matrixOf(ring, A, K.ranks[k + 1]);
   });

@@ -328,6 +328,15 @@ export function valuesEqual(interp: Interpreter, a: Value, b: Value, span: Span)
       if (a.ring !== bm.ring || a.cols !== bm.cols || a.rows.length !== bm.rows.length) return false;
       return a.rows.every((row, i) => row.every((f, j) => equals(a.ring.poly, f, bm.rows[i][j])));
     }
+    case "BettiTable": {
+      const bb = b as typeof a;
+      return a.complete === bb.complete && a.entries.length === bb.entries.length && a.entries.every((e, k) => e.every((x, i) => x === bb.entries[k][i]));
+    }
+    case "HilbertSeries": {
+      // the same grading and numerator over the same full denominator
+      const x = a.series, y = (b as typeof a).series;
+      return x.weights.join(",") === y.weights.join(",") && x.numerator.join(",") === y.numerator.join(",");
+    }
     default:
       return a === b;
   }

@@ -5,6 +5,11 @@ import { describe, expect, it } from "vitest";
 import {
   QQ,
   extModule,
+  formatPoly,
+  isRegularSequence,
+  koszulComplex,
+  mul,
+  subquotientPresentation,
   freeModule,
   hilbertFunctionValues,
   ideal,
@@ -131,5 +136,36 @@ describe("Ext modules", () => {
     const M = quotientPresentation(ideal(S3, [x1]));
     const E = extModule(S3, 0, M, M);
     expect(hilbertValues(S3, E, 0, 4)).toEqual(hilbertValues(S3, M, 0, 4));
+  });
+});
+
+describe("Koszul homology", () => {
+  /// The number of minimal generators of H_i(K(f)) = ker d_i / im d_{i+1} (0 exactly when it vanishes).
+  function homologySize(R: PolyRing, fs: Poly[], i: number): number {
+    const K = koszulComplex(R, fs);
+    const Z = moduleKernel(R, K.map(i), [...K.degrees[i]], [...K.degrees[i - 1]]);
+    const Zcols = Array.from({ length: K.ranks[i] }, (_, a) => Z.map((v) => v[a]));
+    const B = i < K.length ? K.map(i + 1) : K.degrees[i].map(() => []);
+    const H = subquotientPresentation(R, Zcols, B, K.degrees[i]);
+    return H.rowDegrees.length;
+  }
+
+  it("K(f) is exact in positive degrees exactly when f is a regular sequence (D. Eisenbud, Commutative Algebra, Cor. 17.5, from memory; random seeds)", () => {
+    const R = ringOf(GF, 4);
+    const [x1, x2, x3] = vars(R);
+    const cases: Poly[][] = [[mul(R, x1, x2), mul(R, x1, x3)], [x1, mul(R, x1, x2), x3]];
+    for (const seed of [2, 9, 13]) {
+      const rand = rng(seed);
+      cases.push([randomForm(R, 2, 4, rand), randomForm(R, 2, 4, rand), randomForm(R, 1, 3, rand)]);
+    }
+    let regular = 0;
+    for (const fs of cases) {
+      const exact = [1, 2, 3].slice(0, fs.length).every((i) => homologySize(R, fs, i) === 0);
+      expect(exact, fs.map((f) => formatPoly(R, f)).join(", ")).toBe(isRegularSequence(R, fs));
+      if (exact) regular++;
+    }
+    // both kinds occur among the cases
+    expect(regular).toBeGreaterThan(0);
+    expect(regular).toBeLessThan(cases.length);
   });
 });
