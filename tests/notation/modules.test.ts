@@ -155,10 +155,11 @@ describe("tor, ext, tor_lengths, serre", () => {
     expect(t.message).toMatch(/tor_lengths needs M ⊗ N of finite length/);
   });
 
-  it("over a quotient ring the resolution-based invariants wait for engine part 3, the S-module ones answer", async () => {
+  it("over a quotient ring the S-module invariants answer, and pd of k over a singular ring is infinite", async () => {
+    // R = k[x,y]/(xy) is not regular, so pd_R k = ∞ (Auslander–Buchsbaum–Serre; common practice)
     const out = await evaluate("S := Q[x, y]\nR := S / <x*y>\nR.residue.length\nR.residue.pd", []);
     expect(out.results.map((r) => r.value)).toMatchObject([{}, {}, { type: "Int", value: "1" }]);
-    expect(out.error?.message).toMatch(/engine part 3/);
+    expect(out.error?.message).toMatch(/projective dimension over this quotient ring is infinite/);
   });
 });
 
