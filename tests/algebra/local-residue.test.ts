@@ -70,6 +70,28 @@ describe("residue field over S/J, degree by degree", () => {
     }
   });
 
+  it("other Golod rings: powers of ideals, S/I^2 (Golod's formula again)", () => {
+    // J. Herzog, C. Huneke, "Ordinary and symbolic powers are Golod", Adv. Math. 249 (2013):
+    // for a homogeneous ideal I ≠ 0 of S (characteristic 0) and k ≥ 2, S/I^k is Golod, so
+    // P_k(t) = (1+t)^n / (1 − Σ_{i≥1} β_i^S(S/I^k) t^{i+1}) (Golod 1962). β^S from the part-2
+    // resolution over S. Neither ring below is a power of the maximal ideal.
+    const S2 = ring(2, A.QQ);
+    const [x, y] = vars(S2);
+    const S3 = ring(3, A.QQ);
+    const [a, b, c] = vars(S3);
+    const cases: [A.Ideal, number][] = [
+      [A.idealPower(A.ideal(S2, [A.mul(S2, x, x), A.mul(S2, y, y)]), 2), 6],
+      [A.idealPower(A.ideal(S3, [A.mul(S3, a, b), A.mul(S3, c, c), A.add(S3, A.mul(S3, a, c), A.mul(S3, b, b))]), 2), 4],
+    ];
+    for (const [I, len] of cases) {
+      const n = I.ring.vars.length;
+      const overS = A.resolveQuotient(I).ranks;
+      const den = [1n, 0n, ...overS.slice(1).map((r) => BigInt(-r))];
+      const golod = expandRational(polyPowZ([1n, 1n], n), den, len + 1);
+      expect(bettiTotalsOf(residueFieldResolution(I, len)).map(BigInt)).toEqual(golod);
+    }
+  });
+
   it("works over Q as over GF(p)", () => {
     // checks.md row 5 again, now with rational coefficients.
     const S = ring(2, A.QQ);
