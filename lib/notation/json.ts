@@ -38,7 +38,7 @@ export type RingJson = z.infer<typeof RingJson>;
 
 const ringRef = { ring: RingJson };
 
-export const IntJson = z.object({ type: z.literal("Int"), text, value: intText });
+export const IntJson = z.object({ type: z.literal("Int"), text, value: intText, note: z.string().optional() });
 export const RatJson = z.object({ type: z.literal("Rat"), text, value: ratText });
 export const BoolJson = z.object({ type: z.literal("Bool"), text, value: z.boolean() });
 export const StrJson = z.object({ type: z.literal("Str"), text, value: z.string() });
@@ -229,7 +229,7 @@ export function encodeValue(v: Value): ValueJson {
   const t = valueText(v);
   switch (v.type) {
     case "Int":
-      return { type: "Int", text: t, value: v.value.toString() };
+      return { type: "Int", text: t, value: v.value.toString(), ...(v.note !== undefined ? { note: v.note } : {}) };
     case "Rat":
       return { type: "Rat", text: t, value: ratToString(v.value) };
     case "Bool":
@@ -375,7 +375,7 @@ function decodeIdeal(j: z.infer<typeof IdealJson>, ctx: DecodeContext): IdealVal
 function decodeValidated(j: ValueJson, ctx: DecodeContext): Value {
   switch (j.type) {
     case "Int":
-      return { type: "Int", value: BigInt(j.value) };
+      return { type: "Int", value: BigInt(j.value), ...(j.note !== undefined ? { note: j.note } : {}) };
     case "Rat":
       return { type: "Rat", value: parseRational(j.value) ?? fail("Rat", `bad value ${j.value}`) };
     case "Bool":

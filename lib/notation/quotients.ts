@@ -300,19 +300,22 @@ function maximalOf(r: RingValue, c: CallContext): IdealValue {
 }
 
 /// The Burch index of R = S/J (engine: depth 0 by the definition, positive depth after
-/// general linear forms chosen at random from a recorded seed). The random choice is
-/// reported as progress; an Int cannot carry it.
+/// general linear forms chosen at random from a recorded seed). The random choice is stated
+/// in the Int's note (its text and JSON) and reported as progress.
 function burchOf(v: Value, c: CallContext) {
   const r = v as RingValue;
   const res = burchIndexOfRing(engineIdeal(r.poly, r.ideal), opts(c));
-  if (res.random) {
-    opts(c).progress?.({
-      stage: "Burch index",
-      detail: `depth ${res.depth}: factored out general linear forms chosen at random (seed ${res.random.seed}): ${res.random.forms.join(", ")}`,
-    });
-  }
-  return res;
+  const note = res.random
+    ? `depth ${res.depth}: computed after factoring out general linear forms chosen at random (seed ${res.random.seed}): ${res.random.forms.join(", ")}`
+    : undefined;
+  if (note) opts(c).progress?.({ stage: "Burch index", detail: note });
+  return { ...res, note };
 }
+
+const burchValue = (v: Value, c: CallContext): Value => {
+  const b = burchOf(v, c);
+  return { type: "Int", value: BigInt(b.index), ...(b.note ? { note: b.note } : {}) };
+};
 
 /// Whether k is a direct summand of the cyclic module A/I = S/(I + J): its socle
 /// ((I + J) : m)/(I + J) is not inside m·(A/I) = (m + I + J)/(I + J) (common practice: a
@@ -343,7 +346,7 @@ function complexMaps(v: Value, c: CallContext): readonly MatrixValue[] {
 
 export const QUOTIENT_FUNCTIONS: Record<string, (args: readonly Value[], c: CallContext) => Value> = {
   "poincare(Module or Ring)": poincareValue,
-  "burch_index(Ring)": ([R], c) => Int(burchOf(R, c).index),
+  "burch_index(Ring)": ([R], c) => burchValue(R, c),
   "eventual_period(List<Any>)": ([xs], c) => {
     const items = (xs as { items: readonly Value[] }).items;
     const keys = items.map((x) => valueKey(x, c));
@@ -376,7 +379,7 @@ export const QUOTIENT_PROPERTIES: Record<string, (obj: Value, args: readonly Val
     // given by its reduced Gröbner basis (the colon's own generators repeat)
     return idealValue(r, groebnerOf(colonOf(idealValue(r, []), maximalOf(r, c), c.span, opts(c)), opts(c)), opts(c));
   },
-  "Ring.burch_index": (v, _a, c) => Int(burchOf(v, c).index),
+  "Ring.burch_index": (v, _a, c) => burchValue(v, c),
   "Ring.is_burch": (v, _a, c) => Bool(burchOf(v, c).isBurch),
   "Ring.splits_residue": (v, _a, c) => Bool(splitsResidue(v as RingValue, c)),
   "Series.coefficients": (v) => list(series(v).coefficients.map(Int)),

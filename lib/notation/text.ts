@@ -66,6 +66,7 @@ function seriesText(v: Extract<Value, { type: "Series" }>): string {
 export function valueText(v: Value): string {
   switch (v.type) {
     case "Int":
+      return v.note ? `${v.value} (${v.note})` : String(v.value);
     case "Bool":
       return String(v.value);
     case "Rat":

@@ -133,7 +133,8 @@ export interface TableValue {
 }
 
 export type Value =
-  | { readonly type: "Int"; readonly value: bigint }
+  /// `note`: how the number was found when that matters (a random choice); shown in the text
+  | { readonly type: "Int"; readonly value: bigint; readonly note?: string }
   | { readonly type: "Rat"; readonly value: Rational }
   | { readonly type: "Bool"; readonly value: boolean }
   | { readonly type: "Str"; readonly value: string }

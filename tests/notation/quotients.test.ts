@@ -221,6 +221,13 @@ describe("Burch index", () => {
     const out = await run("S := GF(32003)[x, y, z]\n(S / <x*y>).burch_index");
     const notes = out.events.filter((e) => e.event === "progress" && /chosen at random \(seed 1\)/.test((e as { detail?: string }).detail ?? ""));
     expect(notes.length).toBe(1);
+    // the result itself says so (text and JSON), with the two forms factored out (depth 2)
+    const r = out.results[1].value as unknown as { value: string; text: string; note: string };
+    expect(r.value).toBe("1");
+    expect(r.text).toMatch(/^1 \(depth 2: computed after factoring out general linear forms chosen at random \(seed 1\): .+, .+\)$/);
+    expect(r.note).toMatch(/seed 1/);
+    // in depth 0 there is nothing random to say
+    expect((await last("S := GF(32003)[x, y, z]\nburch_index(S / S.maximal^2)")).text).toBe("3");
   });
 });
 
