@@ -262,7 +262,7 @@ export function poincareValue([M]: readonly Value[], c: CallContext): Value {
     return seriesValue(r.ranks.map(BigInt), terms);
   }
   const t = M.type === "Ring" ? targetOfRing(M, span, "poincare", c) : targetOfModule(M, span, "poincare", c);
-  const r = degreewise(t, terms - 1, undefined, c, false);
+  const r = degreewise(t, terms - 1, undefined, c, true);
   const totals = Array.from({ length: terms }, (_, i) => BigInt(r.columns[i]?.total ?? 0));
   return seriesValue(totals, firstInexact(r) ?? terms);
 }
