@@ -3,38 +3,41 @@
 /// index, minors along a resolution and eventual periods.
 import type { Span } from "../../grammar/ast";
 import {
+  QQ,
+  add,
   burchIndexOfRing,
+  componentAtOrigin,
+  eventualPeriod,
+  formatPoly,
   guessRational,
+  ideal as engineIdeal,
   idealColon,
+  idealEquals,
   idealIsHomogeneous,
   idealIsSubset,
   idealSum,
-  ideal as engineIdeal,
   minors,
   moduleSocle,
+  monomial,
   quotientProperties,
-  componentAtOrigin,
-  idealEquals,
-  resolveLocalArtinian,
-  type LocalResolution,
   resolveDegreewise,
-  type ModulePresentation,
+  resolveLocalArtinian,
   resolveQuotient,
   truncatedSeries,
-  eventualPeriod,
   variable,
+  zero,
   type Ideal,
+  type LocalResolution,
+  type ModulePresentation,
   type QuotientResolution,
 } from "../algebra/index";
 import type { CallContext } from "./builtins";
 import { limit, runtime } from "./errors";
 import { colonOf, groebnerOf, idealValue } from "./ideals";
 import { encodeValue } from "./json";
-import { ascendingText } from "./series-text";
-import { QQ, add, formatPoly, monomial, zero } from "../algebra/index";
-import type { BettiEntry, ComplexValue, IdealValue, MatrixValue, ModuleValue, RingValue, SeriesValue, Value } from "./values";
 import { moduleValue } from "./modules";
-import { list } from "./values";
+import { ascendingText } from "./series-text";
+import { list, type BettiEntry, type ComplexValue, type IdealValue, type MatrixValue, type ModuleValue, type RingValue, type SeriesValue, type Value } from "./values";
 
 const Int = (value: number | bigint): Value => ({ type: "Int", value: BigInt(value) });
 const Bool = (value: boolean): Value => ({ type: "Bool", value });
