@@ -403,9 +403,9 @@ export const PROPERTIES: readonly PropertySig[] = [
   prop(
     "Series",
     "rational",
-    orNone(T.record({ numerator: T.Poly, denominator: T.Poly })),
+    orNone(T.record({ numerator: T.Poly, denominator: T.Poly, checked: T.Int })),
     3,
-    "a rational function fitting every computed term, or none",
+    "a guessed rational function fitting every computed term (checked: against how many), or none",
   ),
   prop("Series", "at", T.Int, 3, "the coefficient of t^i", [p("i", T.Int)]),
   prop("List", "length", T.Int, 0, "the number of items"),

@@ -189,6 +189,8 @@ export {
   cyclicResolution,
   bettiTotalsOf,
   residueSplitsFromSyzygy,
+  moduleSocle,
+  type ModulePresentation,
   GradedFree,
   type DegreeData,
   type LocalResolveOptions,

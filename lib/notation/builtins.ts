@@ -40,8 +40,11 @@ import { limit, runtime } from "./errors";
 import { colonOf, eliminationOf, groebnerOf, idealProductOf, idealValue, quotientIdeal, saturationByElement, saturationOf } from "./ideals";
 import type { Frame, Interpreter } from "./interpreter";
 import { addValues } from "./operators";
+import { HOMOLOGY_FUNCTIONS, MODULE_PROPERTIES } from "./homology";
+import { MODULE_FUNCTIONS, RESIDUE_PROPERTY } from "./modules";
 import { pendingError } from "./pending";
 import { COMPLEX_PROPERTIES, resolveValue } from "./resolutions";
+import { QUOTIENT_FUNCTIONS, QUOTIENT_PROPERTIES } from "./quotients";
 import { valueType } from "./value-type";
 import { list, type HilbertSeriesValue, type IdealValue, type RingValue, type Value } from "./values";
 
@@ -180,6 +183,9 @@ const FUNCTION_IMPLS: Record<string, FunctionImpl> = {
   "all(List<Bool>)": ([xs]) => Bool((xs as { items: readonly Value[] }).items.every((x) => x.type === "Bool" && x.value)),
   "any(List<Bool>)": ([xs]) => Bool((xs as { items: readonly Value[] }).items.some((x) => x.type === "Bool" && x.value)),
   "resolve(Module or Ring)": resolveValue,
+  ...MODULE_FUNCTIONS,
+  ...HOMOLOGY_FUNCTIONS,
+  ...QUOTIENT_FUNCTIONS,
 };
 
 function matrixArg(v: Value, span: Span): Extract<Value, { type: "Matrix" }> {
@@ -320,6 +326,9 @@ const PROPERTY_IMPLS: Record<string, PropertyImpl> = {
     return list(t.rows.map((row) => row[k]));
   },
   ...COMPLEX_PROPERTIES,
+  ...RESIDUE_PROPERTY,
+  ...MODULE_PROPERTIES,
+  ...QUOTIENT_PROPERTIES,
 };
 
 /// Keys of everything the evaluator implements (read by the pending-names test).

@@ -13,6 +13,7 @@ import type {
   FunctionValue,
   IdealValue,
   MatrixValue,
+  ModuleValue,
   RingValue,
   Value,
 } from "./values";
@@ -37,7 +38,7 @@ export type RingJson = z.infer<typeof RingJson>;
 
 const ringRef = { ring: RingJson };
 
-export const IntJson = z.object({ type: z.literal("Int"), text, value: intText });
+export const IntJson = z.object({ type: z.literal("Int"), text, value: intText, note: z.string().optional() });
 export const RatJson = z.object({ type: z.literal("Rat"), text, value: ratText });
 export const BoolJson = z.object({ type: z.literal("Bool"), text, value: z.boolean() });
 export const StrJson = z.object({ type: z.literal("Str"), text, value: z.string() });
@@ -55,11 +56,14 @@ export const MatrixJson = z.object({
 export const ModuleJson = z.object({
   type: z.literal("Module"),
   text,
+  /// §9 allows null; Ringside always writes a presentation (and cannot restore a module without one)
   presentation: MatrixJson.nullable(),
+  /// an addition: the degrees of the generators, one per row of the presentation
+  degrees: z.array(z.number().int()),
   ...ringRef,
 });
 const BettiEntries = z.array(z.tuple([count, z.number().int(), z.number().int().positive()]));
-export const BettiTableJson = z.object({ type: z.literal("BettiTable"), text, entries: BettiEntries, complete: z.boolean() });
+export const BettiTableJson = z.object({ type: z.literal("BettiTable"), text, entries: BettiEntries, complete: z.boolean(), note: z.string().optional() });
 export const ComplexJson = z.object({
   type: z.literal("Complex"),
   text,
@@ -68,6 +72,8 @@ export const ComplexJson = z.object({
   complete: z.boolean(),
   /// an addition: the differentials, when known
   maps: z.array(MatrixJson).nullable(),
+  /// an addition: which ranks a bound cut, when incomplete
+  note: z.string().optional(),
   ...ringRef,
 });
 export const HilbertSeriesJson = z.object({
@@ -81,6 +87,12 @@ export const SeriesJson = z.object({
   text,
   coefficients: z.array(intText),
   rational: z.string().nullable(),
+  /// additions: the guessed numerator and denominator (ascending in t), the number of
+  /// terms they were checked against, and how many leading coefficients are exact
+  numerator: z.array(intText).optional(),
+  denominator: z.array(intText).optional(),
+  checked: count.optional(),
+  exact: count.optional(),
 });
 export const NoneJson = z.object({ type: z.literal("None"), text });
 
@@ -217,7 +229,7 @@ export function encodeValue(v: Value): ValueJson {
   const t = valueText(v);
   switch (v.type) {
     case "Int":
-      return { type: "Int", text: t, value: v.value.toString() };
+      return { type: "Int", text: t, value: v.value.toString(), ...(v.note !== undefined ? { note: v.note } : {}) };
     case "Rat":
       return { type: "Rat", text: t, value: ratToString(v.value) };
     case "Bool":
@@ -235,7 +247,7 @@ export function encodeValue(v: Value): ValueJson {
     case "Matrix":
       return encodeMatrix(v);
     case "Module":
-      return { type: "Module", text: t, presentation: v.presentation && encodeMatrix(v.presentation), ring: encodeRing(v.ring) };
+      return { type: "Module", text: t, presentation: encodeMatrix(v.presentation), degrees: [...v.degrees], ring: encodeRing(v.ring) };
     case "Complex":
       return {
         type: "Complex",
@@ -245,13 +257,27 @@ export function encodeValue(v: Value): ValueJson {
         complete: v.complete,
         maps: v.maps && v.maps.map(encodeMatrix),
         ring: encodeRing(v.ring),
+        ...(v.note !== undefined ? { note: v.note } : {}),
       };
     case "BettiTable":
-      return { type: "BettiTable", text: t, entries: v.entries.map(([i, j, b]) => [i, j, b] as [number, number, number]), complete: v.complete };
+      return {
+        type: "BettiTable",
+        text: t,
+        entries: v.entries.map(([i, j, b]) => [i, j, b] as [number, number, number]),
+        complete: v.complete,
+        ...(v.note !== undefined ? { note: v.note } : {}),
+      };
     case "HilbertSeries":
       return { type: "HilbertSeries", text: t, numerator: v.series.numerator.map(String), denominator: formatHilbertDenominator(v.series.weights) };
     case "Series":
-      return { type: "Series", text: t, coefficients: v.coefficients.map(String), rational: v.rational };
+      return {
+        type: "Series",
+        text: t,
+        coefficients: v.coefficients.map(String),
+        rational: v.rational,
+        ...(v.guess ? { numerator: v.guess.numerator.map(String), denominator: v.guess.denominator.map(String), checked: v.guess.checked } : {}),
+        ...(v.exact !== undefined ? { exact: v.exact } : {}),
+      };
     case "List":
       return { type: "List", text: t, items: v.items.map(encodeValue) };
     case "Record":
@@ -326,8 +352,19 @@ function decodeMatrix(j: z.infer<typeof MatrixJson>, ctx: DecodeContext): Matrix
   return { type: "Matrix", ring, rows: j.rows.map((row) => row.map((f) => readPoly(ring, f, "Matrix"))), cols: j.cols };
 }
 
-function decodeBetti(entries: readonly (readonly [number, number, number])[], complete: boolean): BettiTableValue {
-  return { type: "BettiTable", entries: entries.map(([i, j, b]) => [i, j, b] as const), complete };
+function decodeBetti(entries: readonly (readonly [number, number, number])[], complete: boolean, note?: string): BettiTableValue {
+  return { type: "BettiTable", entries: entries.map(([i, j, b]) => [i, j, b] as const), complete, ...(note !== undefined ? { note } : {}) };
+}
+
+function decodeModule(j: z.infer<typeof ModuleJson>, ctx: DecodeContext): ModuleValue {
+  if (!j.presentation) fail("Module", "a module needs its presentation to be restored");
+  const ring = decodeRing(j.ring, ctx);
+  const presentation = decodeMatrix(j.presentation, ctx);
+  if (presentation.ring !== ring) fail("Module", "the presentation lives in a different ring than the module");
+  if (presentation.rows.length !== j.degrees.length) {
+    fail("Module", `degrees lists ${j.degrees.length} generators but the presentation has ${presentation.rows.length} rows`);
+  }
+  return { type: "Module", ring, presentation, degrees: j.degrees };
 }
 
 function decodeIdeal(j: z.infer<typeof IdealJson>, ctx: DecodeContext): IdealValue {
@@ -338,7 +375,7 @@ function decodeIdeal(j: z.infer<typeof IdealJson>, ctx: DecodeContext): IdealVal
 function decodeValidated(j: ValueJson, ctx: DecodeContext): Value {
   switch (j.type) {
     case "Int":
-      return { type: "Int", value: BigInt(j.value) };
+      return { type: "Int", value: BigInt(j.value), ...(j.note !== undefined ? { note: j.note } : {}) };
     case "Rat":
       return { type: "Rat", value: parseRational(j.value) ?? fail("Rat", `bad value ${j.value}`) };
     case "Bool":
@@ -358,24 +395,33 @@ function decodeValidated(j: ValueJson, ctx: DecodeContext): Value {
     case "Matrix":
       return decodeMatrix(j, ctx);
     case "Module":
-      return { type: "Module", ring: decodeRing(j.ring, ctx), presentation: j.presentation && decodeMatrix(j.presentation, ctx) };
+      return decodeModule(j, ctx);
     case "Complex":
       return {
         type: "Complex",
         ring: decodeRing(j.ring, ctx),
         ranks: j.ranks,
-        betti: decodeBetti(j.betti, j.complete),
+        betti: decodeBetti(j.betti, j.complete, j.note),
         complete: j.complete,
         maps: j.maps && j.maps.map((m) => decodeMatrix(m, ctx)),
+        ...(j.note !== undefined ? { note: j.note } : {}),
       };
     case "BettiTable":
-      return decodeBetti(j.entries, j.complete);
+      return decodeBetti(j.entries, j.complete, j.note);
     case "HilbertSeries": {
       const denominator = parseDenominator(j.denominator) ?? fail("HilbertSeries", `bad denominator ${j.denominator}`);
       return { type: "HilbertSeries", series: hilbertSeriesFromNumerator(j.numerator.map((c) => BigInt(c)), denominator) };
     }
     case "Series":
-      return { type: "Series", coefficients: j.coefficients.map((c) => BigInt(c)), rational: j.rational };
+      return {
+        type: "Series",
+        coefficients: j.coefficients.map((c) => BigInt(c)),
+        rational: j.rational,
+        ...(j.numerator && j.denominator && j.checked !== undefined
+          ? { guess: { numerator: j.numerator.map((c) => BigInt(c)), denominator: j.denominator.map((c) => BigInt(c)), checked: j.checked } }
+          : {}),
+        ...(j.exact !== undefined ? { exact: j.exact } : {}),
+      };
     case "List":
       return { type: "List", items: j.items.map((x) => decodeValidated(x, ctx)) };
     case "Record":

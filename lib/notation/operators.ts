@@ -20,6 +20,7 @@ import {
   isSubsetOf,
 } from "./ideals";
 import type { Frame, Interpreter } from "./interpreter";
+import { MODULE_OPERATORS } from "./modules";
 import { pendingError } from "./pending";
 import { rational, ratAdd, ratCompare, ratDiv, ratMul, ratNeg, ratSub, type Rational } from "./rational";
 import { ringText } from "./text";
@@ -225,6 +226,7 @@ const BINARY: Record<string, BinaryImpl> = {
     return Bool(containsPoly(I, toPoly(l, I.ring, c.leftSpan, opts), opts));
   },
   "T in List<T>": (l, r, c) => Bool(r.type === "List" && r.items.some((x) => c.interp.equal(l, x, c.span))),
+  ...MODULE_OPERATORS,
 };
 
 /// f^k in a quotient ring by repeated squaring, reducing after every product so the
@@ -325,6 +327,15 @@ export function valuesEqual(interp: Interpreter, a: Value, b: Value, span: Span)
       const bm = b as typeof a;
       if (a.ring !== bm.ring || a.cols !== bm.cols || a.rows.length !== bm.rows.length) return false;
       return a.rows.every((row, i) => row.every((f, j) => equals(a.ring.poly, f, bm.rows[i][j])));
+    }
+    case "BettiTable": {
+      const bb = b as typeof a;
+      return a.complete === bb.complete && a.entries.length === bb.entries.length && a.entries.every((e, k) => e.every((x, i) => x === bb.entries[k][i]));
+    }
+    case "HilbertSeries": {
+      // the same grading and numerator over the same full denominator
+      const x = a.series, y = (b as typeof a).series;
+      return x.weights.join(",") === y.weights.join(",") && x.numerator.join(",") === y.numerator.join(",");
     }
     default:
       return a === b;

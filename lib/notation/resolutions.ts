@@ -5,13 +5,15 @@ import type { Span } from "../../grammar/ast";
 import { bettiNumber, bettiTotals, ideal as engineIdeal, resolveQuotient, type Resolution } from "../algebra/index";
 import { limit, runtime } from "./errors";
 import type { CallContext } from "./builtins";
+import { resolveModule } from "./homology";
 import { pendingError } from "./pending";
+import { resolveOverQuotient } from "./quotients";
 import type { BettiTableValue, ComplexValue, MatrixValue, RingValue, Value } from "./values";
 
 const Int = (value: number): Value => ({ type: "Int", value: BigInt(value) });
 
 /// A bound given as a named option: a non-negative Int, at most `max`.
-function bound(c: CallContext, name: string, max: number): number | undefined {
+export function bound(c: CallContext, name: string, max: number): number | undefined {
   const v = c.named.get(name);
   if (v === undefined) return undefined;
   if (v.type !== "Int") throw runtime(`${name} must be an Int, got ${v.type}`, c.span);
@@ -20,23 +22,25 @@ function bound(c: CallContext, name: string, max: number): number | undefined {
   return Number(v.value);
 }
 
-function complexOf(r: Resolution, ring: RingValue): ComplexValue {
+/// The Complex value of a resolution; `shift`: how far the module was moved up in degree
+/// before resolving (its Betti numbers are moved back).
+export function complexOf(r: Resolution, ring: RingValue, shift = 0): ComplexValue {
   const maps: MatrixValue[] = [];
   for (let i = 1; i <= r.length; i++) {
     const rows = r.map(i);
     maps.push({ type: "Matrix", ring, rows, cols: r.ranks[i] ?? 0 });
   }
-  const betti: BettiTableValue = { type: "BettiTable", entries: r.betti.entries, complete: r.complete };
+  const entries = shift === 0 ? r.betti.entries : r.betti.entries.map(([i, j, b]) => [i, j - shift, b] as const);
+  const betti: BettiTableValue = { type: "BettiTable", entries, complete: r.complete };
   return { type: "Complex", ring, ranks: r.ranks, betti, complete: r.complete, maps };
 }
 
 /// resolve(A / I) for A a polynomial ring: the resolution of the cyclic module S/I over S.
 export function resolveValue([m]: readonly Value[], c: CallContext): Value {
-  if (m.type === "Module") throw pendingError("resolve of a module given by a presentation", 2, c.span);
+  if (m.type === "Module") return resolveModule(m, c);
   if (m.type !== "Ring") throw runtime(`resolve expects a Module or a quotient ring, got ${m.type}`, c.argSpans[0] ?? c.span);
-  if (m.over) {
-    throw pendingError("resolve over a quotient ring (the ring this quotient was formed from is itself a quotient)", 3, c.argSpans[0] ?? c.span);
-  }
+  // over a quotient ring (the ring this quotient was formed from is itself one): engine part 3
+  if (m.over) return resolveOverQuotient(m, c);
   const S = c.interp.session.rings.ambient(m);
   const length = bound(c, "length", 1000);
   const degree = bound(c, "degree", 100_000);

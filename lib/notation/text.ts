@@ -2,7 +2,7 @@
 import { formatPoly, type Field, type OrderSpec } from "../algebra/index";
 import { ascendingText, hilbertText } from "./series-text";
 import { ratToString } from "./rational";
-import type { BettiTableValue, MatrixValue, RingValue, Value } from "./values";
+import type { BettiTableValue, MatrixValue, ModuleValue, RingValue, Value } from "./values";
 
 export function fieldText(f: Field): string {
   return f.kind === "Q" ? "Q" : `GF(${f.p})`;
@@ -32,14 +32,41 @@ export function matrixText(m: MatrixValue): string {
   return `[${m.rows.map((row) => row.map((f) => formatPoly(m.ring.poly, f)).join(", ")).join("; ")}]`;
 }
 
+/// A free module as `R^n` or `R^[d1, …]`; otherwise `coker([…]) over R`, with the generators'
+/// degrees when they are not all 0.
+export function moduleText(m: ModuleValue): string {
+  const ring = ringText(m.ring);
+  const r = m.degrees.length;
+  const zeroDegrees = m.degrees.every((d) => d === 0);
+  const base = m.ring.ideal.length > 0 ? `(${ring})` : ring;
+  if (r === 0) return `the zero module over ${ring}`;
+  if (m.presentation.cols === 0) return zeroDegrees ? `${base}^${r}` : `${base}^[${m.degrees.join(", ")}]`;
+  const degs = zeroDegrees ? "" : `, generators in degrees [${m.degrees.join(", ")}]`;
+  return `coker(${matrixText(m.presentation)}) over ${ring}${degs}`;
+}
+
 export function bettiText(b: BettiTableValue): string {
   const entries = b.entries.map(([i, j, n]) => `β(${i},${j})=${n}`).join(", ");
-  return `Betti numbers ${entries === "" ? "all zero" : entries}${b.complete ? "" : " (truncated)"}`;
+  return `Betti numbers ${entries === "" ? "all zero" : entries}${b.complete ? "" : b.note ? ` (truncated: ${b.note})` : " (truncated)"}`;
+}
+
+/// A truncated series, saying which coefficients are lower bounds and how the rational
+/// function (if any) was found.
+function seriesText(v: Extract<Value, { type: "Series" }>): string {
+  const n = v.coefficients.length;
+  let out = `${ascendingText(v.coefficients)}+O(t^${n})`;
+  if (v.exact !== undefined && v.exact < n) out += ` (the coefficients of t^${v.exact} and beyond are lower bounds: a degree bound cut the resolution)`;
+  if (v.rational !== null) {
+    const k = v.guess?.checked;
+    out += `; guessed rational function ${v.rational}${k !== undefined ? `, fitting all ${k} exact terms computed` : ""}`;
+  }
+  return out;
 }
 
 export function valueText(v: Value): string {
   switch (v.type) {
     case "Int":
+      return v.note ? `${v.value} (${v.note})` : String(v.value);
     case "Bool":
       return String(v.value);
     case "Rat":
@@ -57,15 +84,15 @@ export function valueText(v: Value): string {
     case "Matrix":
       return matrixText(v);
     case "Module":
-      return v.presentation ? `coker ${matrixText(v.presentation)} over ${ringText(v.ring)}` : `module over ${ringText(v.ring)}`;
+      return moduleText(v);
     case "Complex":
-      return `complex of ranks ${v.ranks.join(", ")}${v.complete ? "" : " (truncated)"}`;
+      return `complex of ranks ${v.ranks.join(", ")}${v.complete ? "" : v.note ? ` (truncated: ${v.note})` : " (truncated)"}`;
     case "BettiTable":
       return bettiText(v);
     case "HilbertSeries":
       return hilbertText(v.series);
     case "Series":
-      return `${ascendingText(v.coefficients)}+O(t^${v.coefficients.length})`;
+      return seriesText(v);
     case "List":
       return `[${v.items.map(valueText).join(", ")}]`;
     case "Record":

@@ -41,11 +41,16 @@ export interface MatrixValue {
   readonly cols: number;
 }
 
-/// A finitely presented module over `ring`: coker of `presentation` (null: not yet known).
+/// A finitely generated graded module over `ring`, always held by a presentation: the
+/// cokernel of `presentation`, whose rows are the generators (in the degrees `degrees`, one
+/// per row) and whose columns are the relations. image, ker, Tor and Ext are computed into
+/// this form when they are made (lib/notation/modules.ts).
 export interface ModuleValue {
   readonly type: "Module";
   readonly ring: RingValue;
-  readonly presentation: MatrixValue | null;
+  readonly presentation: MatrixValue;
+  /// the degrees of the generators, one per row of the presentation
+  readonly degrees: readonly number[];
 }
 
 export type BettiEntry = readonly [homological: number, internal: number, betti: number];
@@ -55,6 +60,8 @@ export interface BettiTableValue {
   /// nonzero β_{i,j}, sorted by i then j; j is the internal degree
   readonly entries: readonly BettiEntry[];
   readonly complete: boolean;
+  /// when incomplete: which numbers a bound cut (shown in the text)
+  readonly note?: string;
 }
 
 export interface ComplexValue {
@@ -65,6 +72,8 @@ export interface ComplexValue {
   readonly complete: boolean;
   /// matrices of the differentials F_i → F_{i−1}, i = 1…length, when known
   readonly maps: readonly MatrixValue[] | null;
+  /// when incomplete: which ranks a bound cut (shown in the text)
+  readonly note?: string;
 }
 
 export interface HilbertSeriesValue {
@@ -77,6 +86,11 @@ export interface SeriesValue {
   readonly coefficients: readonly bigint[];
   /// a rational function fitting every computed term, as text; null when none was found
   readonly rational: string | null;
+  /// the guessed numerator and denominator (ascending coefficients in t) and how many
+  /// leading coefficients they were checked against
+  readonly guess?: { readonly numerator: readonly bigint[]; readonly denominator: readonly bigint[]; readonly checked: number };
+  /// how many leading coefficients are exact (the rest are lower bounds); all when absent
+  readonly exact?: number;
 }
 
 export interface ListValue {
@@ -119,7 +133,8 @@ export interface TableValue {
 }
 
 export type Value =
-  | { readonly type: "Int"; readonly value: bigint }
+  /// `note`: how the number was found when that matters (a random choice); shown in the text
+  | { readonly type: "Int"; readonly value: bigint; readonly note?: string }
   | { readonly type: "Rat"; readonly value: Rational }
   | { readonly type: "Bool"; readonly value: boolean }
   | { readonly type: "Str"; readonly value: string }

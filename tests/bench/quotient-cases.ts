@@ -19,11 +19,10 @@ function seeded(seed: number): () => number {
 }
 
 
-/// The dense linear algebra of lib/algebra/local needs memory ~ (size of a graded piece)^2;
-/// the limit turns what would be an out-of-memory crash into a reported stop.
-const MAX_PIECE = 2500;
+/// A guard only: with sparse vectors and per-multidegree blocks both cases finish far below it.
+const MAX_PIECE = 200000;
 
-function residueCase(name: string, J: () => A.Ideal, length: number): BenchCase {
+function residueCase(name: string, J: () => A.Ideal, length: number, before: string): BenchCase {
   return {
     name,
     run: () => {
@@ -34,7 +33,7 @@ function residueCase(name: string, J: () => A.Ideal, length: number): BenchCase 
         if (!(e instanceof A.AlgebraError && e.kind === "limit")) throw e;
         return { size: done.reduce((s, b) => s + b, 0), label: `stopped by maxBasisSize ${MAX_PIECE} after Betti totals ${done.join(",")}, sum` };
       }
-      return { size: done.reduce((s, b) => s + b, 0), label: `Betti totals ${done.join(",")}, sum` };
+      return { size: done.reduce((s, b) => s + b, 0), label: `(before sparse blocks: ${before}) Betti totals ${done.join(",")}, sum` };
     },
   };
 }
@@ -46,8 +45,8 @@ export const quotientCases: BenchCase[] = [
     const S = ring(4);
     const next = seeded(2026);
     return A.ideal(S, [0, 1, 2, 3].map(() => randomForm(S, 2, next)));
-  }, 10),
-  residueCase("residue field over k[x,y,z]/m^3, length 8", () => A.idealPower(maximal(ring(3)), 3), 8),
+  }, 10, "5.5 s"),
+  residueCase("residue field over k[x,y,z]/m^3, length 8", () => A.idealPower(maximal(ring(3)), 3), 8, "stopped by the piece-size limit 2500 after β_5 in 0.8 s; dense pieces of ~58 000 coordinates"),
   {
     name: "Burch index of a random m-primary ideal in 4 variables",
     run: () => {

@@ -124,7 +124,7 @@ const CASES: Case[] = [
   ["§6 H.values(d)", WITH_COMPLEX, "H.values(5)", "(call (. H values) 5)", "List<Int>"],
   ["§6 poincare", WITH_IDEALS, "poincare(R.residue, terms = 8)", "(call poincare (. R residue) (= terms 8))", "Series"],
   ["§6 series coefficients", WITH_COMPLEX, "P.coefficients", "(. P coefficients)", "List<Int>"],
-  ["§6 series rational", WITH_COMPLEX, "P.rational", "(. P rational)", "Record{numerator: Poly, denominator: Poly} or None"],
+  ["§6 series rational", WITH_COMPLEX, "P.rational", "(. P rational)", "Record{numerator: Poly, denominator: Poly, checked: Int} or None"],
   ["§6 series at", WITH_COMPLEX, "P.at(2)", "(call (. P at) 2)", "Int"],
   ["§6 serre", WITH_IDEALS, "serre(S / I, S / J)", "(call serre (/ S I) (/ S J))", "Int"],
   ["§6 tor_lengths", WITH_IDEALS, "tor_lengths(S / I, S / J)", "(call tor_lengths (/ S I) (/ S J))", "List<Int>"],

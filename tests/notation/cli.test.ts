@@ -60,6 +60,17 @@ describe("ringside eval", () => {
     expect(objs[3]).toEqual({ type: "HilbertSeries", text: "(1-4*t^2+4*t^3-t^4)/(1-t)^4", numerator: ["1", "0", "-4", "4", "-1"], denominator: "(1-t)^4" });
   });
 
+  it("resolves over a quotient ring and guesses the Poincaré series (engine part 3)", async () => {
+    // J. Tate, Illinois J. Math. 1957: k over k[x,y]/(x^2, y^2) has β_i = i + 1 and P = 1/(1−t)^2
+    const src = "S := GF(101)[x, y]\nR := S / <x^2, y^2>\nresolve(R / R.maximal, length = 3).ranks\nP := poincare(R / R.maximal, terms = 6)\n";
+    const r = await cli(["eval", "--json", file("quot.rs", src)]);
+    expect(r.status).toBe(0);
+    const objs = r.lines.map((l) => JSON.parse(l));
+    for (const o of objs) expect(ValueJson.safeParse(o).success, JSON.stringify(o)).toBe(true);
+    expect(objs[2].text).toBe("[1, 2, 3, 4]");
+    expect(objs[3]).toMatchObject({ type: "Series", coefficients: ["1", "2", "3", "4", "5", "6"], rational: "1/(1-2*t+t^2)", checked: 6 });
+  });
+
   it("reads standard input when FILE is omitted or -", async () => {
     expect((await cli(["eval"], "2^10\n")).lines).toEqual(["1024"]);
     expect((await cli(["eval", "-"], "3/6\n")).lines).toEqual(["1/2"]);

@@ -79,10 +79,24 @@ describe("§9 encoding of each type", () => {
     expect(j).toMatchObject({ type: "Matrix", text: "[x, y, z; y, z, w]", rows });
   });
 
-  it("Module: presentation matrix or null", () => {
+  it("Module: presentation matrix and the degrees of the generators", () => {
     const A = { type: "Matrix" as const, ring: S, rows: [[P(S, "x"), P(S, "y")]], cols: 2 };
-    expect(roundTrip({ type: "Module", ring: S, presentation: A })).toMatchObject({ type: "Module", presentation: { type: "Matrix", rows: [["x", "y"]] } });
-    expect(roundTrip({ type: "Module", ring: S, presentation: null })).toMatchObject({ type: "Module", presentation: null });
+    expect(roundTrip({ type: "Module", ring: S, presentation: A, degrees: [0] })).toMatchObject({
+      type: "Module",
+      text: "coker([x, y]) over GF(32003)[x, y, z, w]",
+      presentation: { type: "Matrix", rows: [["x", "y"]] },
+      degrees: [0],
+    });
+    const F = { type: "Matrix" as const, ring: S, rows: [[], []], cols: 0 };
+    expect(roundTrip({ type: "Module", ring: S, presentation: F, degrees: [0, 2] })).toMatchObject({ text: "GF(32003)[x, y, z, w]^[0, 2]", degrees: [0, 2] });
+  });
+
+  it("Module: a presentation of null, or degrees that do not match its rows, do not restore", () => {
+    const ring = encodeValue(S);
+    const bad = { type: "Module", text: "?", presentation: null, degrees: [], ring };
+    expect(() => decodeValue(bad, { rings: new RingRegistry() })).toThrow(/needs its presentation/);
+    const A = encodeValue({ type: "Matrix", ring: S, rows: [[P(S, "x")]], cols: 1 });
+    expect(() => decodeValue({ ...bad, presentation: A, degrees: [0, 1] }, { rings: new RingRegistry() })).toThrow(/2 generators but the presentation has 1 rows/);
   });
 
   it("BettiTable and Complex: entries [i, j, b] with j the internal degree", () => {
@@ -114,6 +128,17 @@ describe("§9 encoding of each type", () => {
       rational: null,
     });
     expect(roundTrip({ type: "Series", coefficients: [1n, 2n], rational: "1/(1-t)^2" })).toMatchObject({ rational: "1/(1-t)^2" });
+  });
+
+  it("additions of engine part 3 survive the round trip: guessed function, exact terms, notes", () => {
+    const guess = { numerator: [1n], denominator: [1n, -2n, 1n], checked: 6 };
+    const s = roundTrip({ type: "Series", coefficients: [1n, 2n, 3n, 4n, 5n, 6n, 7n], rational: "1/(1-2*t+t^2)", guess, exact: 6 });
+    expect(s).toMatchObject({ numerator: ["1"], denominator: ["1", "-2", "1"], checked: 6, exact: 6 });
+    expect(s.text).toMatch(/t\^6 and beyond are lower bounds.*fitting all 6 exact terms/);
+    const n = roundTrip({ type: "Int", value: 1n, note: "chosen at random (seed 1)" });
+    expect(n).toEqual({ type: "Int", text: "1 (chosen at random (seed 1))", value: "1", note: "chosen at random (seed 1)" });
+    const b = roundTrip({ type: "BettiTable", entries: [[0, 0, 1]], complete: false, note: "β_1 is a lower bound" });
+    expect(b.text).toBe("Betti numbers β(0,0)=1 (truncated: β_1 is a lower bound)");
   });
 
   it("List, Record and Table nest encodings", () => {

@@ -9,59 +9,14 @@ import { IMPLEMENTED_OPERATORS, operatorKey } from "@/lib/notation/operators";
 import { pendingError } from "@/lib/notation/pending";
 
 /// Waiting for engine part 2 (modules, resolutions, Tor/Ext, depth, pd, regularity).
-const PART_2 = [
-  "coker(Matrix)",
-  "image(Matrix)",
-  "ker(Matrix)",
-  "module(Ideal)",
-  "syzygy(Module or Ring, Int)",
-  "koszul(Ring)",
-  "koszul(Ideal)",
-  "tor(Int, Module or Ring, Module or Ring)",
-  "ext(Int, Module or Ring, Module or Ring)",
-  "hilbert(Module)",
-  "serre(Module or Ring, Module or Ring)",
-  "tor_lengths(Module or Ring, Module or Ring)",
-  "Ring.residue",
-  "Ring.rank",
-  "Ring.pd",
-  "Ring.reg",
-  "Ring.degree",
-  "Ring.length",
-  "Ring.presentation",
-  "Ring.min_gens",
-  "Module.dim",
-  "Module.depth",
-  "Module.hilbert",
-  "Module.rank",
-  "Module.pd",
-  "Module.reg",
-  "Module.degree",
-  "Module.length",
-  "Module.presentation",
-  "Module.min_gens",
-  "Complex.minors",
-  "Ring ^ Int",
-  "Ring ^ List<Int>",
+const PART_2: string[] = [
 ];
 
 /// Waiting for engine part 3 (quotient-ring and Artinian invariants, Burch, Poincaré, families).
 const PART_3 = [
-  "poincare(Module or Ring)",
-  "burch_index(Ring)",
-  "eventual_period(List<Any>)",
   "random_ideals(Ring)",
   "monomial_ideals(Ring)",
   "sweep(Family, Function(Ideal) -> Any)",
-  "Ring.socle",
-  "Ring.burch_index",
-  "Ring.is_burch",
-  "Ring.splits_residue",
-  "Module.socle",
-  "Module.splits_residue",
-  "Series.coefficients",
-  "Series.rational",
-  "Series.at",
   "Family.length",
 ];
 

@@ -60,18 +60,20 @@ describe("resolve over a polynomial ring", () => {
     expect(partial.map((col) => col.map(([, , b]) => b).reduce((s, b) => s + b, 0))).toEqual([1, 4, 6, 4, 1]);
   });
 
-  it("refuses to read (S/J)/I as a module over S, and says which engine part will resolve it", async () => {
+  it("reads (S/J)/I as a module over S/J, and asks for a length bound there", async () => {
     const out = await run("S := GF(7)[x, y]\nA := S / <x^2>\nB := A / <y^2>\nresolve(B)");
     expect(out.error?.kind).toBe("runtime");
-    expect(out.error?.message).toMatch(/quotient ring.*engine part 3/);
-    expect(out.error?.span.from).toEqual({ line: 4, col: 9 });
+    expect(out.error?.message).toMatch(/quotient ring.*give a bound/);
+    expect(out.error?.span.from).toEqual({ line: 4, col: 1 });
   });
 
   it("restores a quotient of a quotient from its JSON with the ring it was formed from", async () => {
     const first = await run("S := GF(7)[x, y]\nA := S / <x^2>\nB := A / <y^2>");
     const B = first.objects.find((o) => o.name === "B")!;
     expect(B.value).toMatchObject({ ideal: ["x^2", "y^2"], over: 1 });
-    const second = await evaluate("resolve(B)", first.objects.map((o) => ({ name: o.name, value: o.value })), { currentRing: "B" });
-    expect(second.error?.message).toMatch(/engine part 3/);
+    // y^2 is a nonzerodivisor on A = S/(x^2): A/(y^2) has the resolution 0 → A(−2) → A (common practice)
+    const second = await evaluate("resolve(B, length = 3).ranks", first.objects.map((o) => ({ name: o.name, value: o.value })), { currentRing: "B" });
+    expect(second.error).toBeNull();
+    expect(second.results[0].value).toMatchObject({ items: [{ value: "1" }, { value: "1" }, { value: "0" }, { value: "0" }] });
   });
 });

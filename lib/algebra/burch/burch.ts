@@ -10,9 +10,14 @@ import { cutByLinearForm } from "./substitute";
 // Theory 14 (2020): an ideal I of a local ring (S, m) is Burch when m·I ≠ m·(I : m); a
 // local ring of depth t is Burch when, after factoring out a maximal regular sequence, its
 // completion is S/I with S regular local and I a Burch ideal (their Definitions 2.1 and
-// 2.7, cited from memory). m·(I : m) ⊄ m·I exactly when m ⊄ (m·I) : (I : m) = B(I), so I is
-// Burch exactly when the Burch index dim_k m/B(I) is at least 1; m²·(I : m) ⊆ m·I, so
-// m² ⊆ B(I) ⊆ m and the index lies between 0 and the number of variables.
+// 2.7, cited from memory). The Burch index: H. Dao, D. Eisenbud, "Burch index, summands of
+// syzygies and linearity in resolutions", Bull. Iranian Math. Soc. 49 (2023), arXiv
+// 2208.05427, checked against their introduction: for R = S/I of depth 0, S regular local
+// with maximal ideal n, n² ⊆ In : (I : n) ⊆ n and Burch_S(R) = dim_k n/(In : (I : n)); R is
+// Burch in the sense of DKT exactly when this index is ≥ 1, and (DKT, as quoted there) a
+// depth-0 ring is Burch if and only if k is a direct summand of the second syzygy of k; for
+// positive depth the index is defined by reducing to depth 0. m·(I : m) ⊄ m·I exactly when
+// m ⊄ (m·I) : (I : m) = B(I), so the index lies between 0 and the number of variables.
 
 /// The Burch ideal B(I) = (m·I) : (I : m), m the ideal of the origin. For I not homogeneous,
 /// I is first replaced by its component at the origin (the ideal of the local ring there).

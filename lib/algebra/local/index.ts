@@ -5,7 +5,8 @@ export {
   type LocalResolveOptions,
   type QuotientResolution,
   type ResolveRequest,
+  type ModulePresentation,
 } from "./resolve";
 export { GradedFree } from "./free";
 export { residueFieldResolution, cyclicResolution, bettiTotalsOf, variablesOf } from "./residue";
-export { residueSplitsFromSyzygy } from "./summand";
+export { residueSplitsFromSyzygy, moduleSocle } from "./summand";

@@ -4,3 +4,4 @@ export { projectiveDimension, depthByAuslanderBuchsbaum, regularity } from "./in
 export { type Presentation, syzygyPresentation } from "./syzygy";
 export { resolutionHilbertSeries } from "./hilbert";
 export { type QuotientProperties, quotientProperties } from "./quotient";
+export { columnDegrees, minimalPresentation, subquotientPresentation } from "./presentation";

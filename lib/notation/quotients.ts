@@ -1,0 +1,428 @@
+/// Engine part 3 in the notation: resolutions over quotient rings (degree by degree, see
+/// lib/algebra/local), Poincaré series, socles, the residue field as a summand, Burch
+/// index, minors along a resolution and eventual periods.
+import type { Span } from "../../grammar/ast";
+import {
+  QQ,
+  add,
+  burchIndexOfRing,
+  componentAtOrigin,
+  eventualPeriod,
+  formatPoly,
+  guessRational,
+  ideal as engineIdeal,
+  idealColon,
+  idealEquals,
+  idealIsHomogeneous,
+  idealIsSubset,
+  idealSum,
+  minors,
+  moduleSocle,
+  monomial,
+  quotientProperties,
+  resolveDegreewise,
+  resolveLocalArtinian,
+  resolveQuotient,
+  truncatedSeries,
+  variable,
+  zero,
+  type Ideal,
+  type LocalResolution,
+  type ModulePresentation,
+  type QuotientResolution,
+} from "../algebra/index";
+import type { CallContext } from "./builtins";
+import { limit, runtime } from "./errors";
+import { colonOf, groebnerOf, idealValue } from "./ideals";
+import { encodeValue } from "./json";
+import { moduleValue } from "./modules";
+import { ascendingText } from "./series-text";
+import { list, type BettiEntry, type ComplexValue, type IdealValue, type MatrixValue, type ModuleValue, type RingValue, type SeriesValue, type Value } from "./values";
+
+const Int = (value: number | bigint): Value => ({ type: "Int", value: BigInt(value) });
+const Bool = (value: boolean): Value => ({ type: "Bool", value });
+const opts = (c: CallContext) => c.interp.session.compute;
+
+/// Differentials are kept as matrices while the resolution has at most this many matrix
+/// entries in all (beyond it C.map and C.minors say they were not kept).
+const MAX_MAP_ENTRIES = 200_000;
+
+/// A quotient ring m = A / I read as the cyclic A-module A/I (notation.md §5): the defining
+/// ideal J of A and the ideal I + J of m, both in the ambient polynomial ring S.
+interface CyclicModule {
+  base: RingValue;
+  J: Ideal;
+  I: Ideal;
+}
+
+function cyclicModule(m: RingValue, c: CallContext): CyclicModule {
+  const base = m.over ?? c.interp.session.rings.ambient(m);
+  return { base, J: engineIdeal(base.poly, base.ideal), I: engineIdeal(m.poly, m.ideal) };
+}
+
+function requireGraded(M: CyclicModule, what: string, span: Span, c: CallContext): void {
+  if (!idealIsHomogeneous(M.J, opts(c)) || !idealIsHomogeneous(M.I, opts(c))) {
+    throw runtime(
+      `${what} over a quotient ring needs homogeneous ideals (a graded ring and module); a ring given by a non-homogeneous ideal is read at the origin only by resolve, poincare, socle and the Burch index, and only when the origin is an isolated point`,
+      span,
+    );
+  }
+}
+
+/// A named bound: a non-negative Int at most `max`.
+function bound(c: CallContext, name: string, max: number): number | undefined {
+  const v = c.named.get(name);
+  if (v === undefined) return undefined;
+  if (v.type !== "Int") throw runtime(`${name} must be an Int, got ${v.type}`, c.span);
+  if (v.value < 0n) throw runtime(`${name} must be at least 0, got ${v.value}`, c.span);
+  if (v.value > BigInt(max)) throw limit(`${name} = ${v.value} is beyond the limit ${max}`, c.span);
+  return Number(v.value);
+}
+
+/// The first column that a degree bound may have cut (its total and all later ones are
+/// lower bounds), or null when every column is exact.
+function firstInexact(r: QuotientResolution): number | null {
+  const k = r.columns.findIndex((col) => !col.complete);
+  return k < 0 ? null : k;
+}
+
+/// What a truncated resolution leaves out, said plainly.
+function truncationNote(r: QuotientResolution, length: number, shift: number): string | undefined {
+  const k = firstInexact(r);
+  if (k !== null) {
+    const d = r.exactThroughDegree - shift;
+    return `internal degrees above ${d} were not computed, so β_i for i ≥ ${k} are lower bounds (β_{i,j} with j ≤ ${d} are exact)`;
+  }
+  const last = r.columns[r.columns.length - 1];
+  if (last.total > 0) return `only homological degrees ≤ ${length} were computed; the resolution goes on`;
+  return undefined;
+}
+
+type BettiColumn = QuotientResolution["columns"][number];
+
+function entriesOf(columns: readonly BettiColumn[], shift = 0): BettiEntry[] {
+  return columns.flatMap((col) => col.entries.map((e) => [col.index, e.degree - shift, e.count] as const));
+}
+
+/// What to resolve over A = S/J: R/I given by I, or a presented module (generators moved
+/// up by `shift` into degrees ≥ 0; the Betti numbers are moved back).
+interface Target {
+  base: RingValue;
+  J: Ideal;
+  module?: Ideal;
+  presentation?: ModulePresentation;
+  shift: number;
+}
+
+function targetOfRing(m: RingValue, span: Span, what: string, c: CallContext): Target {
+  const M = cyclicModule(m, c);
+  requireGraded(M, what, span, c);
+  return { base: M.base, J: M.J, module: M.I, shift: 0 };
+}
+
+function targetOfModule(M: ModuleValue, span: Span, what: string, c: CallContext): Target {
+  const J = engineIdeal(M.ring.poly, M.ring.ideal);
+  if (!idealIsHomogeneous(J, opts(c))) throw runtime(`${what} over a quotient ring needs a homogeneous defining ideal`, span);
+  const shift = -Math.min(0, ...M.degrees);
+  return { base: M.ring, J, presentation: { rows: M.presentation.rows, degrees: M.degrees.map((d) => d + shift) }, shift };
+}
+
+function degreewise(t: Target, length: number, degree: number | undefined, c: CallContext, stream: boolean, keepMaps?: number): QuotientResolution {
+  const partial = stream ? c.interp.session.partial : undefined;
+  return resolveDegreewise({
+    ring: t.J,
+    ...(t.module ? { module: t.module } : { presentation: t.presentation! }),
+    length,
+    degree: degree === undefined ? undefined : degree + t.shift,
+    keepMaps,
+    opts: {
+      ...opts(c),
+      // each finished column streams as a one-column, still-incomplete Betti table
+      partial: partial
+        ? (col) => partial({ type: "BettiTable", entries: entriesOf([col], t.shift), complete: false, note: "the resolution is still running" })
+        : undefined,
+    },
+  });
+}
+
+const isGraded = (M: CyclicModule, c: CallContext) => idealIsHomogeneous(M.J, opts(c)) && idealIsHomogeneous(M.I, opts(c));
+
+/// A quotient A / I with A or I not homogeneous, read over the local ring of A at the origin
+/// (Artinian there: the origin an isolated point), ungraded, by linear algebra on that ring.
+function localResolution(m: RingValue, length: number, c: CallContext): { r: LocalResolution; sameRing: boolean; base: RingValue } {
+  const M = cyclicModule(m, c);
+  const Q = componentAtOrigin(M.J, opts(c)).ideal;
+  return { r: resolveLocalArtinian(Q, idealSum(Q, M.I), length, opts(c)), sameRing: idealEquals(Q, M.J, opts(c)), base: M.base };
+}
+
+const LOCAL_NOTE = "over the local ring at the origin, ungraded: the Betti table lists β_i under internal degree 0";
+
+function localComplex(m: RingValue, length: number, c: CallContext): ComplexValue {
+  const { r, sameRing, base } = localResolution(m, length, c);
+  const note = r.complete ? LOCAL_NOTE : `only homological degrees ≤ ${length} were computed; the resolution goes on; ${LOCAL_NOTE}`;
+  const entries: BettiEntry[] = r.ranks.flatMap((b, i) => (b > 0 ? [[i, 0, b] as const] : []));
+  // the maps live over the local ring; they are maps over A itself only when A is that ring
+  const maps: MatrixValue[] | null = sameRing ? r.maps.map((rows, i) => ({ type: "Matrix", ring: base, rows, cols: r.ranks[i + 1] })) : null;
+  return { type: "Complex", ring: base, ranks: r.ranks, betti: { type: "BettiTable", entries, complete: r.complete, note }, complete: r.complete, maps, note };
+}
+
+/// resolve(M, length = n, degree = d) over a quotient ring A = S/J, degree by degree: M a
+/// quotient A / I (A itself a quotient) or a module presented over A.
+export function resolveOverQuotient(m: RingValue | ModuleValue, c: CallContext): ComplexValue {
+  const span = c.argSpans[0] ?? c.span;
+  const length = bound(c, "length", 1000);
+  if (length === undefined) {
+    throw runtime("over a quotient ring a resolution is usually infinite: give a bound, e.g. resolve(M, length = 6)", c.span);
+  }
+  if (m.type === "Ring" && !isGraded(cyclicModule(m, c), c)) {
+    if (c.named.has("degree")) throw runtime("degree bounds need a graded ring; this one is read at the origin, ungraded", c.span);
+    return localComplex(m, length, c);
+  }
+  const t = m.type === "Ring" ? targetOfRing(m, span, "resolve", c) : targetOfModule(m, span, "resolve", c);
+  const degree = bound(c, "degree", 100_000);
+  const r = degreewise(t, length, degree, c, true, MAX_MAP_ENTRIES);
+  const complete = r.complete && r.columns[r.columns.length - 1].total === 0;
+  const note = complete ? undefined : truncationNote(r, length, t.shift);
+  const ranks = r.columns.map((col) => col.total);
+  const maps: MatrixValue[] | null = r.maps
+    ? r.maps.map((rows, i) => ({ type: "Matrix", ring: t.base, rows, cols: ranks[i + 1] }))
+    : null;
+  return {
+    type: "Complex",
+    ring: t.base,
+    ranks,
+    betti: { type: "BettiTable", entries: entriesOf(r.columns, t.shift), complete, ...(note ? { note } : {}) },
+    complete,
+    maps,
+    ...(note ? { note } : {}),
+  };
+}
+
+/// syzygy(M, p) over a quotient ring: Ω^p M = image of d_p ≅ coker(d_{p+1}), generated in
+/// the degrees of F_p. Needs the columns p and p + 1 exact.
+export function syzygyOverQuotient(m: RingValue | ModuleValue, p: number, c: CallContext): ModuleValue {
+  const span = c.argSpans[0] ?? c.span;
+  const t = m.type === "Ring" ? targetOfRing(m, span, "syzygy", c) : targetOfModule(m, span, "syzygy", c);
+  const r = degreewise(t, p + 1, undefined, c, false, Number.MAX_SAFE_INTEGER);
+  const k = firstInexact(r);
+  if (k !== null && k <= p + 1) {
+    throw runtime(`syzygy: no degree bound is known that makes F_${k} of this resolution exact (the module has infinite length over a ring that is not Artinian)`, span);
+  }
+  const degrees = (r.columns[p]?.entries ?? []).flatMap((e) => Array.from({ length: e.count }, () => e.degree - t.shift));
+  const rows = r.maps && r.maps[p] ? r.maps[p] : degrees.map(() => []);
+  return moduleValue(t.base, rows, degrees);
+}
+
+/// A minimal presentation of a module over a quotient ring: the first differential of its
+/// minimal resolution (columns 0 and 1 must be exact).
+export function presentationOverQuotient(M: ModuleValue, c: CallContext): MatrixValue {
+  const t = targetOfModule(M, c.span, "a minimal presentation", c);
+  const r = degreewise(t, 1, undefined, c, false, Number.MAX_SAFE_INTEGER);
+  const k = firstInexact(r);
+  if (k !== null) throw runtime("a minimal presentation: no degree bound is known that makes the relations exact (the module has infinite length over a ring that is not Artinian)", c.span);
+  const rows = r.maps![0];
+  return { type: "Matrix", ring: M.ring, rows, cols: r.columns[1].total };
+}
+
+/// pd_R M over R = S/J. If it is finite it equals depth R − depth M (M. Auslander, D.
+/// Buchsbaum, "Homological dimension in local rings", Trans. AMS 85, 1957; the graded case is
+/// common practice), so the resolution decides: F_{d+1} = 0 for d = depth R − depth M, or
+/// the projective dimension is infinite (a runtime error: an Int cannot say so).
+export function pdOverQuotient(M: ModuleValue, depthM: number, c: CallContext): number {
+  const t = targetOfModule(M, c.span, "pd", c);
+  const d = quotientProperties(t.J, opts(c)).depth - depthM;
+  if (d < 0) throw runtime("pd: depth M exceeds depth R, so M is zero or the computation is inconsistent", c.span);
+  const r = degreewise(t, d + 1, undefined, c, false);
+  const k = firstInexact(r);
+  // a lower bound above 0 is enough to see F_{d+1} ≠ 0
+  if (k !== null && k <= d + 1 && r.columns[d + 1].total === 0) {
+    throw runtime(`pd: cannot decide: no degree bound is known that makes F_${k} exact for this module (infinite length over a ring that is not Artinian), and the degrees computed show F_${d + 1} = 0`, c.span);
+  }
+  if (r.columns[d + 1].total > 0) {
+    throw runtime(`the projective dimension over this quotient ring is infinite: F_${d + 1} ≠ 0, while a finite one would be depth R − depth M = ${d} (Auslander–Buchsbaum)`, c.span);
+  }
+  let pd = d;
+  while (pd > 0 && r.columns[pd].total === 0) pd--;
+  return pd;
+}
+
+/// poincare(M, terms = n): Σ β_i t^i for i < n, with a guessed rational function that fits
+/// every exact term (Berlekamp–Massey, accepted only when further terms confirm it).
+export function poincareValue([M]: readonly Value[], c: CallContext): Value {
+  const span = c.argSpans[0] ?? c.span;
+  if (M.type !== "Ring" && M.type !== "Module") throw runtime(`poincare expects a Module or a quotient ring, got ${M.type}`, span);
+  const terms = bound(c, "terms", 1000) ?? 10;
+  if (terms < 1) throw runtime("terms must be at least 1", c.span);
+  if (M.type === "Ring" && !M.over) {
+    // over a polynomial ring the resolution is finite (part 2), every term exact
+    const mod = cyclicModule(M, c);
+    requireGraded(mod, "poincare", span, c);
+    const r = resolveQuotient(mod.I, { ...opts(c), length: terms - 1 });
+    return seriesValue(Array.from({ length: terms }, (_, i) => BigInt(r.ranks[i] ?? 0)), terms);
+  }
+  if (M.type === "Ring" && !isGraded(cyclicModule(M, c), c)) {
+    const { r } = localResolution(M, terms - 1, c);
+    return seriesValue(r.ranks.map(BigInt), terms);
+  }
+  const t = M.type === "Ring" ? targetOfRing(M, span, "poincare", c) : targetOfModule(M, span, "poincare", c);
+  const r = degreewise(t, terms - 1, undefined, c, true);
+  const totals = Array.from({ length: terms }, (_, i) => BigInt(r.columns[i]?.total ?? 0));
+  return seriesValue(totals, firstInexact(r) ?? terms);
+}
+
+function seriesValue(coeffs: readonly bigint[], exact: number): SeriesValue {
+  const g = guessRational(truncatedSeries(coeffs.slice(0, exact)));
+  const wrap = (c: readonly bigint[]) => (c.filter((x) => x !== 0n).length > 1 ? `(${ascendingText(c)})` : ascendingText(c));
+  const rational = g ? (g.denominator.length === 1 && g.denominator[0] === 1n ? ascendingText(g.numerator) : `${wrap(g.numerator)}/${wrap(g.denominator)}`) : null;
+  return {
+    type: "Series",
+    coefficients: coeffs,
+    rational,
+    ...(g ? { guess: { numerator: g.numerator, denominator: g.denominator, checked: g.checkedOn } } : {}),
+    ...(exact < coeffs.length ? { exact } : {}),
+  };
+}
+
+/// A polynomial in t over Q from ascending integer coefficients.
+function tPoly(c: CallContext, coeffs: readonly bigint[]): Value {
+  const R = c.interp.session.rings.polynomialRing(QQ, ["t"]);
+  let f = zero(R.poly);
+  coeffs.forEach((a, i) => {
+    if (a !== 0n) f = add(R.poly, f, monomial(R.poly, [i], a, 1n));
+  });
+  return { type: "Poly", ring: R, poly: f };
+}
+
+function series(v: Value): SeriesValue {
+  return v as SeriesValue;
+}
+
+/// The ideal of R generated by its variables.
+function maximalOf(r: RingValue, c: CallContext): IdealValue {
+  return idealValue(r, r.poly.vars.map((_, i) => variable(r.poly, i)), opts(c));
+}
+
+/// The Burch index of R = S/J (engine: depth 0 by the definition, positive depth after
+/// general linear forms chosen at random from a recorded seed). The random choice is stated
+/// in the Int's note (its text and JSON) and reported as progress.
+function burchOf(v: Value, c: CallContext) {
+  const r = v as RingValue;
+  const res = burchIndexOfRing(engineIdeal(r.poly, r.ideal), opts(c));
+  const note = res.random
+    ? `depth ${res.depth}: computed after factoring out general linear forms chosen at random (seed ${res.random.seed}): ${res.random.forms.join(", ")}`
+    : undefined;
+  if (note) opts(c).progress?.({ stage: "Burch index", detail: note });
+  return { ...res, note };
+}
+
+const burchValue = (v: Value, c: CallContext): Value => {
+  const b = burchOf(v, c);
+  return { type: "Int", value: BigInt(b.index), ...(b.note ? { note: b.note } : {}) };
+};
+
+/// Whether k is a direct summand of the cyclic module A/I = S/(I + J): its socle
+/// ((I + J) : m)/(I + J) is not inside m·(A/I) = (m + I + J)/(I + J) (common practice: a
+/// socle element outside mM generates a copy of k that splits off).
+function splitsResidue(m: RingValue, c: CallContext): boolean {
+  const M = cyclicModule(m, c);
+  requireGraded(M, "splits_residue", c.span, c);
+  const S = m.poly;
+  const mS = engineIdeal(S, S.vars.map((_, i) => variable(S, i)));
+  if (idealIsSubset(engineIdeal(S, [monomial(S, S.vars.map(() => 0), 1n, 1n)]), M.I, opts(c))) return false; // the zero module
+  const socle = idealColon(M.I, mS, opts(c));
+  return !idealIsSubset(socle, idealSum(mS, M.I), opts(c));
+}
+
+/// A key under which equal values compare equal: ideals by their reduced Gröbner basis
+/// (so I_k(φ_i) that agree as ideals count as equal), everything else by its encoding.
+function valueKey(v: Value, c: CallContext): string {
+  if (v.type === "Ideal") return `Ideal:${groebnerOf(v, opts(c)).map((f) => formatPoly(v.ring.poly, f)).join(",")}`;
+  if (v.type === "List") return `[${v.items.map((x) => valueKey(x, c)).join(";")}]`;
+  return JSON.stringify(encodeValue(v));
+}
+
+function complexMaps(v: Value, c: CallContext): readonly MatrixValue[] {
+  const C = v as ComplexValue;
+  if (C.maps === null) throw runtime("the differentials of this resolution were not kept (too large); minors need them", c.span);
+  return C.maps;
+}
+
+export const QUOTIENT_FUNCTIONS: Record<string, (args: readonly Value[], c: CallContext) => Value> = {
+  "poincare(Module or Ring)": poincareValue,
+  "burch_index(Ring)": ([R], c) => burchValue(R, c),
+  "eventual_period(List<Any>)": ([xs], c) => {
+    const items = (xs as { items: readonly Value[] }).items;
+    const keys = items.map((x) => valueKey(x, c));
+    const p = eventualPeriod(keys);
+    const none: Value = { type: "None" };
+    return { type: "Record", fields: new Map([["start", p ? Int(p.start) : none], ["period", p ? Int(p.period) : none]]) };
+  },
+};
+
+/// The socle of a module (degrees of a basis) and whether k splits off, degree by degree.
+function socleOf(M: ModuleValue, c: CallContext): { degrees: number[]; splits: boolean } {
+  const t = targetOfModule(M, c.span, "the socle", c);
+  const s = moduleSocle(t.J, t.presentation!, opts(c));
+  return { degrees: s.degrees.map((d) => d - t.shift), splits: s.splits };
+}
+
+export const QUOTIENT_PROPERTIES: Record<string, (obj: Value, args: readonly Value[], c: CallContext) => Value> = {
+  // (0 :_M m) is a k-vector space: ⊕ k(−j), one copy per basis element, as a module over M's ring
+  "Module.socle": (v, _a, c) => {
+    const M = v as ModuleValue;
+    const { degrees } = socleOf(M, c);
+    const P = M.ring.poly;
+    // relations x_i·e_g for every generator g and variable x_i
+    const rows = degrees.map((_, g) => degrees.flatMap((__, h) => P.vars.map((___, i) => (g === h ? variable(P, i) : zero(P)))));
+    return moduleValue(M.ring, rows, degrees);
+  },
+  "Module.splits_residue": (v, _a, c) => Bool(socleOf(v as ModuleValue, c).splits),
+  "Ring.socle": (v, _a, c) => {
+    const r = v as RingValue;
+    // given by its reduced Gröbner basis (the colon's own generators repeat)
+    return idealValue(r, groebnerOf(colonOf(idealValue(r, []), maximalOf(r, c), c.span, opts(c)), opts(c)), opts(c));
+  },
+  "Ring.burch_index": (v, _a, c) => burchValue(v, c),
+  "Ring.is_burch": (v, _a, c) => Bool(burchOf(v, c).isBurch),
+  "Ring.splits_residue": (v, _a, c) => Bool(splitsResidue(v as RingValue, c)),
+  "Series.coefficients": (v) => list(series(v).coefficients.map(Int)),
+  "Series.rational": (v, _a, c) => {
+    const g = series(v).guess;
+    if (!g) return { type: "None" };
+    return {
+      type: "Record",
+      fields: new Map([
+        ["numerator", tPoly(c, g.numerator)],
+        ["denominator", tPoly(c, g.denominator)],
+        ["checked", Int(g.checked)],
+      ]),
+    };
+  },
+  "Series.at": (v, [i], c) => {
+    const s = series(v);
+    const k = (i as { value: bigint }).value;
+    const n = s.coefficients.length;
+    const span = c.argSpans[0] ?? c.span;
+    if (k < 0n) throw runtime(`the index must be at least 0, got ${k}`, span);
+    if (k >= BigInt(n)) throw runtime(`only the coefficients of t^0 … t^${n - 1} were computed; ask for more terms`, span);
+    if (s.exact !== undefined && k >= BigInt(s.exact)) {
+      throw runtime(`the coefficient of t^${k} is only a lower bound (a degree bound cut the resolution); t^0 … t^${s.exact - 1} are exact`, span);
+    }
+    return Int(s.coefficients[Number(k)]);
+  },
+  "Complex.minors": (v, [k], c) => {
+    const maps = complexMaps(v, c);
+    const size = (k as { value: bigint }).value;
+    if (size < 1n) throw runtime(`the size of the minors must be at least 1, got ${size}`, c.argSpans[0] ?? c.span);
+    return list(
+      maps.map((A) => {
+        // I_k(φ) = 0 when φ has fewer than k rows or columns (common practice)
+        if (size > BigInt(Math.min(A.rows.length, A.cols))) return idealValue(A.ring, []);
+        // the minors, given by the reduced Gröbner basis of the ideal they generate (their list
+        // repeats entries up to sign)
+        const all = idealValue(A.ring, minors(A.ring.poly, A.rows, Number(size), opts(c)), opts(c));
+        return idealValue(A.ring, groebnerOf(all, opts(c)), opts(c));
+      }),
+    );
+  },
+};
