@@ -84,6 +84,9 @@ class Checker {
   /// Every definition in order, to rebuild the environment before any statement.
   readonly definitions: [string, Type][] = [];
   private currentRing: string | null;
+  /// While checking the right side of `A / …` with A a Ring: its literals and variables are
+  /// read in A (the text of the left side, and A's variables when known), not the current ring.
+  private readIn: { readonly label: string; readonly vars: readonly string[] | null } | null = null;
   private locals: Map<string, Type>[] = [];
   private lambdaDepth = 0;
   private seen = new Set<string>();
@@ -131,7 +134,13 @@ class Checker {
     return this.currentRing ?? "S";
   }
 
+  /// The ring literals are read in: the left side of an enclosing quotient, else the current ring.
+  private readingRing(): string | null {
+    return this.readIn ? this.readIn.label : this.currentRing;
+  }
+
   private currentVars(): readonly string[] | null {
+    if (this.readIn) return this.readIn.vars;
     if (this.currentRing === null) return null;
     const t = this.bindings.get(this.currentRing);
     return t && t.kind === "Ring" ? t.vars : null;
@@ -283,7 +292,7 @@ class Checker {
     const vars = this.currentVars();
     const index = vars ? vars.indexOf(n) : -1;
     if (vars && index >= 0) {
-      this.names.set(e, { kind: "variable", ring: this.currentRing!, index });
+      this.names.set(e, { kind: "variable", ring: this.readingRing()!, index });
       return T.Poly;
     }
     const bound = this.bindings.get(n);
@@ -301,9 +310,10 @@ class Checker {
       this.error(e.span, `${n} is a built-in function: call it, as in ${lookupFunction(n)!.example}`);
       return T.Any;
     }
-    if (this.currentRing !== null && vars === null) {
-      // The current ring's variables are not known statically: leave it to run time.
-      this.names.set(e, { kind: "variable", ring: this.currentRing, index: -1 });
+    const reading = this.readingRing();
+    if (reading !== null && vars === null) {
+      // The ring's variables are not known statically: leave it to run time.
+      this.names.set(e, { kind: "variable", ring: reading, index: -1 });
       return T.Poly;
     }
     this.names.set(e, { kind: "unknown" });
@@ -319,6 +329,9 @@ class Checker {
     const candidates = [...(vars ?? []), ...this.bindings.keys(), ...this.locals.flatMap((m) => [...m.keys()])];
     const guess = nearest(n, candidates);
     const hint = guess ? ` — did you mean ${guess}?` : "";
+    if (this.readIn) {
+      return `unknown name ${n}: it is not defined and not a variable of ${this.readIn.label}, the ring on the left of / (variables: ${(vars ?? []).join(", ")})${hint}`;
+    }
     if (this.currentRing === null) {
       return `unknown name ${n}: it is not defined, and there is no current ring to read it as a variable — define a ring first, e.g. S := Q[${n}]${hint}`;
     }
@@ -326,7 +339,7 @@ class Checker {
   }
 
   private needRing(e: A.Expr, what: string): void {
-    if (this.currentRing === null) {
+    if (this.readingRing() === null) {
       this.error(e.span, `${what} is read in the current ring, and there is none — define a ring first, e.g. S := Q[x, y]`);
     }
   }
@@ -417,9 +430,10 @@ class Checker {
     }
     const info = this.lambdas.get(f);
     if (!info || this.lambdaDepth >= MAX_LAMBDA_DEPTH) return f.result;
-    const saved = { locals: this.locals, ring: this.currentRing };
+    const saved = { locals: this.locals, ring: this.currentRing, readIn: this.readIn };
     this.locals = [...info.locals];
     this.currentRing = info.ring;
+    this.readIn = null;
     this.lambdaDepth++;
     try {
       const t = this.lambda(info.node, args);
@@ -428,6 +442,7 @@ class Checker {
       this.lambdaDepth--;
       this.locals = saved.locals;
       this.currentRing = saved.ring;
+      this.readIn = saved.readIn;
     }
   }
 
@@ -473,7 +488,7 @@ class Checker {
   }
 
   private binaryStep(e: A.Binary, l: Type): Type {
-    const r = this.infer(e.right);
+    const r = e.op === "/" && l.kind === "Ring" ? this.inferReadIn(e.right, this.text(e.left), l.vars) : this.infer(e.right);
     if (e.op === "^" && this.checkExponent(e, r)) return l.kind === "Ideal" || l.kind === "Poly" ? l : T.Any;
     if (e.op === "/" && constValue(e.right) === 0n) {
       this.error(e.right.span, `division by zero: ${this.text(e)} divides by ${this.text(e.right)}, which is 0`);
@@ -488,6 +503,17 @@ class Checker {
     if (t !== undefined) return t;
     this.error(e.opSpan, this.operatorMessage(e, l, r));
     return T.Any;
+  }
+
+  /// `A / <f, …>` reads its ideal in A, whatever ring is current (notation: grammar/README.md).
+  private inferReadIn(e: A.Expr, label: string, vars: readonly string[] | null): Type {
+    const saved = this.readIn;
+    this.readIn = { label, vars };
+    try {
+      return this.infer(e);
+    } finally {
+      this.readIn = saved;
+    }
   }
 
   /// Reports a bad exponent; true when it did.

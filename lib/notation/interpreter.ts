@@ -87,7 +87,12 @@ export class Interpreter {
           if (e.op === "and" ? !l : l) return { type: "Bool", value: l };
           return { type: "Bool", value: this.bool(this.eval(e.right, f), e.right.span) };
         }
-        return applyBinary(this, e, this.eval(e.left, f), this.eval(e.right, f), f);
+        {
+          const left = this.eval(e.left, f);
+          // A / e reads e in A, as the checker does (the ideal of a quotient lives in A).
+          const rightFrame = e.op === "/" && left.type === "Ring" ? { ...f, ring: left } : f;
+          return applyBinary(this, e, left, this.eval(e.right, rightFrame), f);
+        }
       case "Unary":
         return applyUnary(this, e, this.eval(e.operand, f), f);
       case "Range":

@@ -161,6 +161,17 @@ describe("quotient rings", () => {
     const v = await values("S := Q[x, y]\nR := S / <x*y>\nx^2*y in <y^3>\nx + y in <x, y>\n<x> & <y>");
     expect(v.slice(2).map((x) => x.text)).toEqual(["true", "true", "<0>"]);
   });
+
+  it("A / <…> reads its ideal in A, whichever ring is current (grammar/README.md)", async () => {
+    // after k := R / R.maximal the current ring is k, yet S / <x^3> is a quotient of S:
+    // its Hilbert function is h(d) = min(d + 1, 3)
+    // (count the monomials x^a y^b of degree d with a < 3; common practice)
+    const v = await values("S := Q[x, y]\nR := S / <x^2, y^2>\nk := R / R.maximal\nT := S / <x^3>\nT.hilbert.values(4)\nU := Q[a, b]\n(S / <y^5>).ideal");
+    expect(v[4].text).toBe("[1, 2, 3, 3, 3]");
+    expect(v[6].text).toBe("<y^5>");
+    const out = await run("S := Q[x, y]\nU := Q[a, b]\nS / <a>");
+    expect(out.error?.text).toMatch(/unknown name a: .*not a variable of S, the ring on the left of \/ \(variables: x, y\)/);
+  });
 });
 
 describe("numbers, lists, records, functions", () => {
