@@ -1,6 +1,7 @@
 /// A transcript as Markdown: sources in fenced blocks, results as their text, Betti tables
 /// as Markdown tables, polynomials and ideals in `$…$` math, truncation notes as quotes.
 import { bettiGrid, mathText, TRUNCATED_BETTI } from "./tex";
+import { notesOf, plainText, seriesPrefixText } from "./annotations";
 import type { Transcript, TranscriptCell, ValueJsonLike } from "./transcript";
 
 function fence(text: string, lang = ""): string {
@@ -22,13 +23,22 @@ function bettiMarkdown(entries: [number, number, number][], complete: boolean): 
 }
 
 function valueMarkdown(v: ValueJsonLike): string {
+  const notes = notesOf(v)
+    .map((n) => `\n\n> ${n.before}${n.math ? `$${mathText(n.math)}$` : ""}${n.after ?? ""}`)
+    .join("");
+  return valueBodyMarkdown(v) + notes;
+}
+
+function valueBodyMarkdown(v: ValueJsonLike): string {
   switch (v.type) {
     case "Int":
     case "Rat":
     case "Poly":
+      return `$${mathText(plainText(v))}$`;
     case "HilbertSeries":
-    case "Series":
       return `$${mathText(v.text)}$`;
+    case "Series":
+      return `$${mathText(seriesPrefixText(Array.isArray(v.coefficients) ? (v.coefficients as string[]) : []))}$`;
     case "Ideal": {
       const gens = Array.isArray(v.gens) ? (v.gens as string[]) : [];
       return gens.length === 0 ? "$\\langle 0 \\rangle$" : `$\\langle ${gens.map(mathText).join(", ")} \\rangle$`;

@@ -1,6 +1,7 @@
 /// Typesetting §9 values as LaTeX: polynomials, ideals and matrices in math mode, Betti
 /// tables as `tabular` (rows j−i, columns i, as in Eisenbud, *The Geometry of Syzygies*,
 /// Springer GTM 229, 2005, §1B), truncation kept as a note under the value.
+import { notesOf, plainText, seriesPrefixText } from "./annotations";
 import type { ValueJsonLike } from "./transcript";
 
 const SPECIAL: Record<string, string> = {
@@ -109,11 +110,18 @@ export function bettiTabular(entries: [number, number, number][], complete: bool
 
 /// One value as LaTeX (a paragraph's worth; display material where it helps).
 export function valueTex(v: ValueJsonLike): string {
+  const notes = notesOf(v)
+    .map((n) => `\n\n\\emph{${escapeTex(n.before)}}${n.math ? `$${mathText(n.math)}$` : ""}${n.after ? `\\emph{${escapeTex(n.after)}}` : ""}`)
+    .join("");
+  return valueBodyTex(v) + notes;
+}
+
+function valueBodyTex(v: ValueJsonLike): string {
   switch (v.type) {
     case "Int":
     case "Rat":
     case "Poly":
-      return `$${mathText(v.text)}$`;
+      return `$${mathText(plainText(v))}$`;
     case "Bool":
     case "Field":
       return `$\\mathrm{${escapeTex(v.text)}}$`;
@@ -138,10 +146,9 @@ export function valueTex(v: ValueJsonLike): string {
       );
     }
     case "HilbertSeries":
-    case "Series": {
-      const note = v.type === "Series" ? `\n\n\\emph{Shown to ${(field(v, "coefficients", isStrings) ?? []).length} terms.}` : "";
-      return `$${mathText(v.text)}$${note}`;
-    }
+      return `$${mathText(v.text)}$`;
+    case "Series":
+      return `$${mathText(seriesPrefixText(field(v, "coefficients", isStrings) ?? []))}$`;
     case "List": {
       const items = field(v, "items", isValues) ?? [];
       if (items.length === 0) return "(empty list)";
