@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { viewOfValue } from "@/app/_console/render/view-model";
+import { noteOfValue, viewOfValue } from "@/app/_console/render/view-model";
 
 describe("viewOfValue", () => {
   it("turns a §9 BettiTable into a grid, truncated when incomplete", () => {
@@ -18,7 +18,19 @@ describe("viewOfValue", () => {
     expect(ring).toEqual({ kind: "tex", tex: "\\mathbb{F}_{32003}[x, y] / \\left\\langle xy \\right\\rangle" });
     const s = viewOfValue({ type: "Series", text: "", coefficients: ["1", "2", "4"], rational: "1/(1-2*t)" });
     expect(s.kind).toBe("series");
-    if (s.kind === "series") expect(s.note).toContain("3 terms");
+    if (s.kind === "series") expect(s.note).toBe("guessed: fits all 3 computed terms (not a proof)");
+    const checked = viewOfValue({ type: "Series", text: "", coefficients: ["1", "2", "4", "8"], rational: "1/(1-2*t)", checked: 4 });
+    if (checked.kind === "series") expect(checked.note).toContain("all 4 computed terms");
+    const none = viewOfValue({ type: "Series", text: "", coefficients: ["1", "2"], rational: null });
+    expect(none).toMatchObject({ kind: "series", note: "2 terms computed; no rational function found that fits them" });
+  });
+
+  it("a value's own warning is shown in words under it", () => {
+    expect(noteOfValue({ type: "Int", text: "0 (…)", value: "0", note: "depth 1: computed after factoring out random forms" })).toBe(
+      "depth 1: computed after factoring out random forms",
+    );
+    expect(noteOfValue({ type: "Int", text: "3", value: "3" })).toBeNull();
+    expect(viewOfValue({ type: "Int", text: "0 (depth 1: …)", value: "0", note: "depth 1: …" })).toEqual({ kind: "text", text: "0" });
   });
 
   it("falls back to text for unknown types and malformed values", () => {

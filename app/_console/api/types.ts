@@ -23,9 +23,12 @@ export interface ValueJson {
   readonly entries?: readonly (readonly [number, number, number])[];
   readonly complete?: boolean;
   readonly numerator?: readonly string[];
-  readonly denominator?: string;
+  readonly denominator?: string | readonly string[];
   readonly coefficients?: readonly string[];
   readonly rational?: string | null;
+  /// additions of lib/notation: a value's warning in words; how many terms a guess fits
+  readonly note?: string;
+  readonly checked?: number;
   readonly items?: readonly ValueJson[];
   readonly fields?: Readonly<Record<string, ValueJson>>;
   readonly columns?: readonly string[];

@@ -47,6 +47,9 @@ export function viewOfValue(v: ValueJson): ValueView {
   switch (v.type) {
     case "Poly":
       return { kind: "tex", tex: texOrVerbatim(v.text) };
+    case "Int":
+      // the number alone; its note, if any, is drawn under it (noteOfValue)
+      return { kind: "text", text: typeof v.value === "string" ? v.value : v.text };
     case "Rat": {
       const t = typeof v.value === "string" ? v.value : v.text;
       return { kind: "tex", tex: texOfExpression(t) ?? texOrVerbatim(t) };
@@ -75,19 +78,20 @@ export function viewOfValue(v: ValueJson): ValueView {
       };
     }
     case "HilbertSeries":
-      if (!v.numerator || v.denominator === undefined) return { kind: "text", text: v.text };
+      if (!v.numerator || typeof v.denominator !== "string") return { kind: "text", text: v.text };
       return { kind: "tex", tex: texOfHilbertSeries(v.numerator, v.denominator) };
     case "Series": {
       const coefficients = v.coefficients ?? [];
       const terms = `${coefficients.length} term${coefficients.length === 1 ? "" : "s"}`;
       if (v.rational) {
+        const checked = typeof v.checked === "number" ? v.checked : coefficients.length;
         return {
           kind: "series",
           tex: texOrVerbatim(v.rational),
-          note: `rational function fitting all ${terms} computed`,
+          note: `guessed: fits all ${checked} computed terms (not a proof)`,
         };
       }
-      return { kind: "series", tex: texOfSeriesPrefix(coefficients), note: `${terms} computed; no rational function fits them` };
+      return { kind: "series", tex: texOfSeriesPrefix(coefficients), note: `${terms} computed; no rational function found that fits them` };
     }
     case "List":
       return { kind: "list", items: (v.items ?? []).map(viewOfValue) };
@@ -104,4 +108,10 @@ export function viewOfValue(v: ValueJson): ValueView {
     default:
       return { kind: "text", text: v.text };
   }
+}
+
+/// The value's own warning (a bound that cut it, a random choice behind it), shown under it
+/// in words: the `text` carries it too, but the typeset view would otherwise hide it.
+export function noteOfValue(v: ValueJson): string | null {
+  return typeof v.note === "string" && v.note !== "" ? v.note : null;
 }

@@ -2,7 +2,7 @@
 /// Draws one §9 value for people: typeset algebra, Betti tables, chains of ranks,
 /// series with their number of terms, lists, records and tables.
 import type { ValueJson } from "../api/types";
-import { viewOfValue, type ValueView as View } from "../render/view-model";
+import { noteOfValue, viewOfValue, type ValueView as View } from "../render/view-model";
 import { BettiTable } from "./betti-table";
 import { Tex } from "./tex";
 
@@ -91,6 +91,11 @@ export function ValueView({ value }: { value: ValueJson }) {
       </span>
       <div className="min-w-0 overflow-x-auto">
         <Draw view={viewOfValue(value)} text={value.text} />
+        {noteOfValue(value) && (
+          <p className="mt-1 text-xs text-ink-soft dark:text-paper/70" data-testid="value-note">
+            {noteOfValue(value)}
+          </p>
+        )}
       </div>
     </div>
   );
