@@ -8,8 +8,11 @@ const SMALL = 2n ** 53n;
 /// Bits of the leading part Lehmer's method works on: every intermediate value stays below 2^53.
 const LEAD_BITS = 50;
 
+/// The bit length of a > 0, up to one either way (all Lehmer's method needs: a shift that
+/// leaves about 50 leading bits).
 function bitLength(a: bigint): number {
-  return a.toString(16).length * 4;
+  const f = Number(a);
+  return f === Infinity ? a.toString(16).length * 4 : Math.floor(Math.log2(f)) + 1;
 }
 
 /// gcd of two numbers below 2^53 in floating point (exact there).
