@@ -33,6 +33,18 @@ function cancelled(): AlgebraError {
   return new AlgebraError("cancelled", "computation cancelled");
 }
 
+/// Reports a milestone at once (not held back by the ~100 ms interval) and checks the signal:
+/// for the few steps a caller should always hear about, such as each new homological and
+/// internal degree of a resolution.
+export function announce(opts: ComputeOptions | undefined, info: ProgressInfo): void {
+  if (!opts) return;
+  if (opts.progress) {
+    lastReport.set(opts, Date.now());
+    opts.progress(info);
+  }
+  if (opts.signal?.aborted) throw cancelled();
+}
+
 /// A checkpoint for hot loops: the clock and the signal are read only every `every` ticks.
 export class Ticker {
   private count = 0;

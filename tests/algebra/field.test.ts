@@ -3,6 +3,7 @@ import fc from "fast-check";
 import * as A from "@/lib/algebra";
 import { gfCoeffs, qCoeffs } from "@/lib/algebra/field/coeffs";
 import { mulModLarge } from "@/lib/algebra/field/gfp";
+import { bigGcd, rat, ratAdd, ratMul, ratSub } from "@/lib/algebra/field/rational";
 
 describe("coefficient fields", () => {
   it("accepts primes below 2^31 and rejects everything else with a clear message", () => {
@@ -59,5 +60,46 @@ describe("coefficient fields", () => {
     expect(G.fromRational(1n, 2n)).toBe(4); // 2·4 = 8 ≡ 1 (mod 7)
     expect(() => G.fromRational(1n, 14n)).toThrow(/denominator 14 is 0 in GF\(7\)/);
     expect(() => K.fromRational(1n, 0n)).toThrow(/division by zero/);
+  });
+});
+
+describe("rational arithmetic (Lehmer gcd, Henrici's sums and products)", () => {
+  const euclid = (a: bigint, b: bigint): bigint => {
+    a = a < 0n ? -a : a;
+    b = b < 0n ? -b : b;
+    while (b !== 0n) [a, b] = [b, a % b];
+    return a;
+  };
+  // numbers of up to ~600 bits, often sharing a large common factor
+  const big = fc.bigInt({ min: -(2n ** 600n), max: 2n ** 600n });
+  const factor = fc.bigInt({ min: 1n, max: 2n ** 200n });
+
+  it("bigGcd agrees with the plain Euclidean algorithm (Knuth vol. 2, §4.5.2: both compute the gcd)", () => {
+    fc.assert(
+      fc.property(big, big, factor, (a, b, g) => {
+        expect(bigGcd(a * g, b * g)).toBe(euclid(a * g, b * g));
+        expect(bigGcd(a, b)).toBe(euclid(a, b));
+      }),
+      { numRuns: 2000 },
+    );
+    for (const [a, b] of [[0n, 0n], [0n, 7n], [2n ** 53n, 2n ** 53n + 1n], [2n ** 64n, 2n ** 32n], [3n ** 300n, 3n ** 299n * 2n], [3n ** 700n * 5n + 1n, 3n ** 699n * 7n]] as const) {
+      expect(bigGcd(a, b)).toBe(euclid(a, b));
+    }
+  });
+
+  it("sums, differences and products are the reduced fractions of the schoolbook formulas (common practice)", () => {
+    const reduced = (n: bigint, d: bigint) => {
+      const g = euclid(n, d) || 1n;
+      return d < 0n ? { n: -n / g, d: -d / g } : { n: n / g, d: d / g };
+    };
+    const frac = fc.tuple(big, fc.bigInt({ min: 1n, max: 2n ** 300n }), factor).map(([n, d, g]) => rat(n * g, d * g));
+    fc.assert(
+      fc.property(frac, frac, (a, b) => {
+        expect(ratAdd(a, b)).toEqual(reduced(a.n * b.d + b.n * a.d, a.d * b.d));
+        expect(ratSub(a, b)).toEqual(reduced(a.n * b.d - b.n * a.d, a.d * b.d));
+        expect(ratMul(a, b)).toEqual(reduced(a.n * b.n, a.d * b.d));
+      }),
+      { numRuns: 2000 },
+    );
   });
 });

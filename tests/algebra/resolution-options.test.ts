@@ -19,6 +19,13 @@ function kind(f: () => unknown): string | undefined {
 }
 
 describe("resolution options", () => {
+  it("reports every homological and internal degree of the frame, however fast it runs", () => {
+    const details: string[] = [];
+    resolveQuotient(koszulIdeal(4), { progress: (p) => p.stage === "resolution" && p.detail && details.push(p.detail) });
+    // the Koszul complex on 4 variables: F_i lives in internal degree i (checks.md row 1)
+    for (const i of [2, 3, 4]) expect(details).toContain(`homological degree ${i}, internal degree ${i}`);
+  });
+
   it("an aborted signal cancels, also when aborted from the progress callback", () => {
     const ac = new AbortController();
     ac.abort();

@@ -7,8 +7,32 @@ import type { BenchCase } from "./cases";
 
 const F = A.gf(32003);
 
-function ring(n: number, name = "x"): A.PolyRing {
-  return A.polyRing(F, Array.from({ length: n }, (_, i) => `${name}${i + 1}`));
+function ring(n: number, name = "x", field: A.Field = F): A.PolyRing {
+  return A.polyRing(field, Array.from({ length: n }, (_, i) => `${name}${i + 1}`));
+}
+
+/// `count` random quadrics with coefficients in [−9, 9] (a fixed linear congruential
+/// sequence, common practice) in k[x_1..x_n]: their reduced Gröbner basis over Q has large
+/// coefficients, which is what the rational case measures.
+export function randomQuadrics(n: number, count: number, field: A.Field): A.Ideal {
+  const R = ring(n, "x", field);
+  let seed = 12345;
+  const next = () => (seed = (seed * 1103515245 + 12345) % 2147483648) / 2147483648;
+  const gens: A.Poly[] = [];
+  for (let g = 0; g < count; g++) {
+    let f = A.zero(R);
+    for (let i = 0; i < n; i++) {
+      for (let j = i; j < n; j++) {
+        const c = BigInt(Math.floor(next() * 19) - 9);
+        const e = new Array<number>(n).fill(0);
+        e[i]++;
+        e[j]++;
+        if (c !== 0n) f = A.add(R, f, A.monomial(R, e, c));
+      }
+    }
+    gens.push(f);
+  }
+  return A.ideal(R, gens);
 }
 
 function resolutionCase(name: string, build: () => A.Ideal): BenchCase {
@@ -22,8 +46,8 @@ function resolutionCase(name: string, build: () => A.Ideal): BenchCase {
 }
 
 /// The 2×2 minors of the generic 2×c matrix.
-export function genericMinors2(c: number): A.Ideal {
-  const R = ring(2 * c);
+export function genericMinors2(c: number, field: A.Field = F): A.Ideal {
+  const R = ring(2 * c, "x", field);
   const M = [0, 1].map((r) => Array.from({ length: c }, (_, j) => A.variable(R, r * c + j)));
   return A.ideal(R, minors(R, M, 2));
 }
@@ -61,4 +85,9 @@ export const resolutionCases: BenchCase[] = [
   resolutionCase("resolution: m^4 in 5 variables, GF(32003)", () => maximalPower(5, 4)),
   resolutionCase("resolution: Koszul complex on 10 variables, GF(32003)", () => variablesIdeal(10)),
   resolutionCase("resolution: Pluecker ideal of G(2,6), GF(32003)", () => pluckerIdeal(6)),
+  // over Q: the same ideal as over GF(32003), and random quadrics (coefficient growth)
+  resolutionCase("resolution: 2x2 minors of generic 2x6, over Q", () => genericMinors2(6, A.QQ)),
+  resolutionCase("resolution: 2x2 minors of generic 2x6, GF(32003)", () => genericMinors2(6)),
+  resolutionCase("resolution: 4 random quadrics in 5 variables, over Q", () => randomQuadrics(5, 4, A.QQ)),
+  resolutionCase("resolution: 4 random quadrics in 5 variables, GF(32003)", () => randomQuadrics(5, 4, F)),
 ];

@@ -1,5 +1,5 @@
 import { limitError } from "../errors";
-import { checkLimit, checkpoint, Ticker, type ComputeOptions } from "../options";
+import { announce, checkLimit, checkpoint, Ticker, type ComputeOptions } from "../options";
 import type { RingCtx } from "../poly/ring";
 import { divisorsOf } from "../module/divide";
 import { schreyerOrder, type ModuleOrder } from "../module/order";
@@ -78,7 +78,10 @@ export function schreyerResolution<C>(
     done = 0;
     total = kept.length;
     for (const p of byDegree) {
-      degree = keptDegs[p];
+      if (keptDegs[p] !== degree || p === byDegree[0]) {
+        degree = keptDegs[p];
+        announce(opts, info());
+      }
       const limit = opts?.limits?.maxDegree;
       if (limit !== undefined && degree > limit) {
         throw limitError("maxDegree", `the resolution reached internal degree ${degree}, above the limit maxDegree = ${limit}`);
