@@ -27,7 +27,6 @@ import type { CallContext } from "./builtins";
 import { reduceIn } from "./coerce";
 import { limit, runtime } from "./errors";
 import { matrixOf, moduleOf, moduleValue, presentationOverS } from "./modules";
-import { pendingError } from "./pending";
 import { bound, complexOf } from "./resolutions";
 import { pdOverQuotient, presentationOverQuotient, resolveOverQuotient, syzygyOverQuotient } from "./quotients";
 import { ringText } from "./text";
@@ -41,9 +40,15 @@ const opts = (c: CallContext) => c.interp.session.compute;
 /// The largest homological index of tor, ext and syzygy.
 const MAX_INDEX = 1000;
 
-/// Ends with the part-3 pending Error when M lives over a quotient ring.
+/// rank, reg, Tor, Ext and Serre's multiplicity are computed over polynomial rings only: over
+/// S/J a resolution is usually infinite, so say what can be computed there instead.
 function overPolynomialRing(M: ModuleValue, what: string, span: Span): void {
-  if (M.ring.ideal.length > 0) throw pendingError(`${what} of a module over a quotient ring`, 3, span);
+  if (M.ring.ideal.length > 0) {
+    throw runtime(
+      `${what} is computed for modules over a polynomial ring only, and this module lives over the quotient ring ${ringText(M.ring)} — there, read its Betti numbers from resolve(M, length = n) or poincare(M, terms = n)`,
+      span,
+    );
+  }
 }
 
 const asModule = (v: Value, c: CallContext, span = c.span) => moduleOf(v, span, c);

@@ -352,12 +352,16 @@ describe("errors with kind and span", () => {
     expect(out.events[0]).toMatchObject({ event: "checked" });
   });
 
-  it("names still pending (engine parts 2 and 3) end with a runtime error saying which part", async () => {
+  it("names still pending (the families) end with a runtime error saying which part", async () => {
     const out = await run("S := Q[x, y]\nrandom_ideals(S)");
     expect(out.error).toMatchObject({ kind: "runtime", span: { from: { line: 2, col: 1 } } });
     expect(out.error!.message).toMatch(/engine part 3/);
+  });
+
+  it("invariants computed over polynomial rings only say so, and what to use, over a quotient ring", async () => {
     const quotient = await run("S := Q[x, y]\n(S / <x^2>).residue.reg");
-    expect(quotient.error!.message).toMatch(/engine part 3/);
+    expect(quotient.error).toMatchObject({ kind: "runtime", span: { from: { line: 2, col: 1 } } });
+    expect(quotient.error!.message).toMatch(/reg is computed for modules over a polynomial ring only, .*quotient ring Q\[x, y\] \/ <x\^2>.*resolve\(M, length = n\)/);
   });
 });
 
