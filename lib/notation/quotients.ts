@@ -7,6 +7,8 @@ import {
   add,
   burchIndexOfRing,
   componentAtOrigin,
+  equals,
+  localAlgebraAtOrigin,
   eventualPeriod,
   formatPoly,
   guessRational,
@@ -147,17 +149,51 @@ function degreewise(t: Target, length: number, degree: number | undefined, c: Ca
 
 const isGraded = (M: CyclicModule, c: CallContext) => idealIsHomogeneous(M.J, opts(c)) && idealIsHomogeneous(M.I, opts(c));
 
+/// The cyclic module to read at the origin, ungraded, when the ring or the module is not
+/// graded (a non-homogeneous ideal); null when both are graded (the degree-by-degree way).
+/// A module given by a presentation counts when it has one generator: coker of a row
+/// [g1, …, gk] over A is A/(g1, …, gk).
+function localCyclic(m: RingValue | ModuleValue, what: string, c: CallContext): CyclicModule | null {
+  if (m.type === "Ring") {
+    const M = cyclicModule(m, c);
+    return isGraded(M, c) ? null : M;
+  }
+  const J = engineIdeal(m.ring.poly, m.ring.ideal);
+  if (idealIsHomogeneous(J, opts(c))) return null;
+  if (m.presentation.rows.length !== 1) {
+    throw runtime(
+      `${what} over a ring given by a non-homogeneous ideal is computed at the origin for cyclic modules only (one generator, such as R.residue or R / I); this module has ${m.presentation.rows.length} generators`,
+      c.argSpans[0] ?? c.span,
+    );
+  }
+  return { base: m.ring, J, I: engineIdeal(m.ring.poly, [...m.presentation.rows[0], ...m.ring.ideal]) };
+}
+
+/// The finite-dimensional local algebra (A/I) at the origin, with the socle of A/I as a
+/// module (0 :_M m is the same whether M = A/I is read as a ring or as an A-module) and
+/// whether k splits off it (a socle element outside m·M; common practice).
+function localSocle(M: CyclicModule, c: CallContext): { dim: number; splits: boolean } {
+  const A = localAlgebraAtOrigin(M.I, opts(c));
+  const socle = A.socle();
+  const n = A.S.vars.length;
+  const mA = A.basis.flatMap((_, k) => {
+    const unit = new Array(A.dim).fill(A.K.zero);
+    unit[k] = A.K.one;
+    return Array.from({ length: n }, (_, v) => A.mulVector(v, unit));
+  });
+  return { dim: socle.length, splits: A.rank([...mA, ...socle]) > A.rank(mA) };
+}
+
 /// A quotient A / I with A or I not homogeneous, read over the local ring of A at the origin
 /// (Artinian there: the origin an isolated point), ungraded, by linear algebra on that ring.
-function localResolution(m: RingValue, length: number, c: CallContext): { r: LocalResolution; sameRing: boolean; base: RingValue } {
-  const M = cyclicModule(m, c);
+function localResolution(M: CyclicModule, length: number, c: CallContext): { r: LocalResolution; sameRing: boolean; base: RingValue } {
   const Q = componentAtOrigin(M.J, opts(c)).ideal;
   return { r: resolveLocalArtinian(Q, idealSum(Q, M.I), length, opts(c)), sameRing: idealEquals(Q, M.J, opts(c)), base: M.base };
 }
 
 const LOCAL_NOTE = "over the local ring at the origin, ungraded: the Betti table lists β_i under internal degree 0";
 
-function localComplex(m: RingValue, length: number, c: CallContext): ComplexValue {
+function localComplex(m: CyclicModule, length: number, c: CallContext): ComplexValue {
   const { r, sameRing, base } = localResolution(m, length, c);
   const note = r.complete ? LOCAL_NOTE : `only homological degrees ≤ ${length} were computed; the resolution goes on; ${LOCAL_NOTE}`;
   const entries: BettiEntry[] = r.ranks.flatMap((b, i) => (b > 0 ? [[i, 0, b] as const] : []));
@@ -174,9 +210,10 @@ export function resolveOverQuotient(m: RingValue | ModuleValue, c: CallContext):
   if (length === undefined) {
     throw runtime("over a quotient ring a resolution is usually infinite: give a bound, e.g. resolve(M, length = 6)", c.span);
   }
-  if (m.type === "Ring" && !isGraded(cyclicModule(m, c), c)) {
+  const local = localCyclic(m, "resolve", c);
+  if (local) {
     if (c.named.has("degree")) throw runtime("degree bounds need a graded ring; this one is read at the origin, ungraded", c.span);
-    return localComplex(m, length, c);
+    return localComplex(local, length, c);
   }
   const t = m.type === "Ring" ? targetOfRing(m, span, "resolve", c) : targetOfModule(m, span, "resolve", c);
   const degree = bound(c, "degree", 100_000);
@@ -260,8 +297,9 @@ export function poincareValue([M]: readonly Value[], c: CallContext): Value {
     const r = resolveQuotient(mod.I, { ...opts(c), length: terms - 1 });
     return seriesValue(Array.from({ length: terms }, (_, i) => BigInt(r.ranks[i] ?? 0)), terms);
   }
-  if (M.type === "Ring" && !isGraded(cyclicModule(M, c), c)) {
-    const { r } = localResolution(M, terms - 1, c);
+  const local = localCyclic(M, "poincare", c);
+  if (local) {
+    const { r } = localResolution(local, terms - 1, c);
     return seriesValue(r.ranks.map(BigInt), terms);
   }
   const t = M.type === "Ring" ? targetOfRing(M, span, "poincare", c) : targetOfModule(M, span, "poincare", c);
@@ -324,8 +362,9 @@ const burchValue = (v: Value, c: CallContext): Value => {
 /// ((I + J) : m)/(I + J) is not inside m·(A/I) = (m + I + J)/(I + J) (common practice: a
 /// socle element outside mM generates a copy of k that splits off).
 function splitsResidue(m: RingValue, c: CallContext): boolean {
+  const local = localCyclic(m, "splits_residue", c);
+  if (local) return localSocle(local, c).splits;
   const M = cyclicModule(m, c);
-  requireGraded(M, "splits_residue", c.span, c);
   const S = m.poly;
   const mS = engineIdeal(S, S.vars.map((_, i) => variable(S, i)));
   if (idealIsSubset(engineIdeal(S, [monomial(S, S.vars.map(() => 0), 1n, 1n)]), M.I, opts(c))) return false; // the zero module
@@ -361,6 +400,12 @@ export const QUOTIENT_FUNCTIONS: Record<string, (args: readonly Value[], c: Call
 
 /// The socle of a module (degrees of a basis) and whether k splits off, degree by degree.
 function socleOf(M: ModuleValue, c: CallContext): { degrees: number[]; splits: boolean } {
+  const local = localCyclic(M, "the socle", c);
+  if (local) {
+    // ungraded: every socle element is put in degree 0
+    const s = localSocle(local, c);
+    return { degrees: new Array<number>(s.dim).fill(0), splits: s.splits };
+  }
   const t = targetOfModule(M, c.span, "the socle", c);
   const s = moduleSocle(t.J, t.presentation!, opts(c));
   return { degrees: s.degrees.map((d) => d - t.shift), splits: s.splits };
@@ -379,8 +424,12 @@ export const QUOTIENT_PROPERTIES: Record<string, (obj: Value, args: readonly Val
   "Module.splits_residue": (v, _a, c) => Bool(socleOf(v as ModuleValue, c).splits),
   "Ring.socle": (v, _a, c) => {
     const r = v as RingValue;
-    // given by its reduced Gröbner basis (the colon's own generators repeat)
-    return idealValue(r, groebnerOf(colonOf(idealValue(r, []), maximalOf(r, c), c.span, opts(c)), opts(c)), opts(c));
+    // given by its reduced Gröbner basis (the colon's own generators repeat); two basis
+    // elements can have one normal form modulo the defining ideal (y^3 and x^2 when
+    // x^2 − y^3 ∈ J), so equal generators are kept once
+    const I = idealValue(r, groebnerOf(colonOf(idealValue(r, []), maximalOf(r, c), c.span, opts(c)), opts(c)), opts(c));
+    const gens = I.gens.filter((g, i) => I.gens.findIndex((h) => equals(r.poly, g, h)) === i);
+    return { ...I, gens };
   },
   "Ring.burch_index": (v, _a, c) => burchValue(v, c),
   "Ring.is_burch": (v, _a, c) => Bool(burchOf(v, c).isBurch),
