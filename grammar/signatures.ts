@@ -151,7 +151,14 @@ export const FUNCTIONS: readonly FunctionSig[] = [
   {
     name: "coker",
     overloads: [ov([p("A", T.Matrix)], T.Module, 2)],
-    options: [],
+    options: [
+      {
+        name: "degrees",
+        type: T.list(T.Int),
+        default: null,
+        description: "degrees of the generators (one per row); by default each block of rows starts in degree 0",
+      },
+    ],
     description: "the cokernel of A, the module presented by A",
     example: "coker([x, y; z, w])",
   },

@@ -95,6 +95,37 @@ export function rowGrading(A: MatrixValue, span: Span): number[] {
   return rowDeg.map((d) => d ?? 0);
 }
 
+/// The row degrees a user gave to coker (degrees = [d1, …]): one Int per row, such that every
+/// column has one degree (entry degree + row degree) — so that coker(C.map(i), degrees = …)
+/// keeps the twists of a resolution's free module instead of starting again at degree 0.
+function givenRowDegrees(A: MatrixValue, v: Value, c: CallContext): number[] {
+  const span = c.span;
+  if (v.type !== "List" || v.items.some((x) => x.type !== "Int")) throw runtime("degrees must be a List of Int, one per row", span);
+  if (v.items.length !== A.rows.length) {
+    throw runtime(`degrees gives ${v.items.length} degree${v.items.length === 1 ? "" : "s"}, but the matrix has ${A.rows.length} row${A.rows.length === 1 ? "" : "s"}`, span);
+  }
+  const degrees = v.items.map((x) => {
+    const d = (x as { value: bigint }).value;
+    if (d < -100_000n || d > 100_000n) throw runtime(`the degree ${d} is out of range (|d| ≤ 100000)`, span);
+    return Number(d);
+  });
+  const R = A.ring.poly;
+  for (let q = 0; q < A.cols; q++) {
+    let col: number | null = null;
+    A.rows.forEach((row, a) => {
+      const f = row[q];
+      if (isZero(f)) return;
+      if (!isHomogeneous(R, f)) throw runtime(`entry (${a + 1}, ${q + 1}) of the matrix is not homogeneous`, c.argSpans[0] ?? span);
+      const d = degree(R, f) + degrees[a];
+      if (col === null) col = d;
+      else if (col !== d) {
+        throw runtime(`with these degrees column ${q + 1} is not homogeneous: its entries have degrees ${col} and ${d} once the row degrees are added`, span);
+      }
+    });
+  }
+  return degrees;
+}
+
 const inconsistent = (span: Span) =>
   runtime("no degrees of the rows make this matrix homogeneous (every column must have one degree: entry degree + row degree)", span);
 
@@ -205,7 +236,9 @@ export const MODULE_OPERATORS: Record<string, (l: Value, r: Value, c: OpContext)
 export const MODULE_FUNCTIONS: Record<string, (args: readonly Value[], c: CallContext) => Value> = {
   "coker(Matrix)": ([A], c) => {
     const M = matrixArg(A, c.argSpans[0]);
-    return moduleValue(M.ring, M.rows, rowGrading(M, c.argSpans[0]));
+    const given = c.named.get("degrees");
+    if (given === undefined) return moduleValue(M.ring, M.rows, rowGrading(M, c.argSpans[0]));
+    return moduleValue(M.ring, M.rows, givenRowDegrees(M, given, c));
   },
   "image(Matrix)": ([A], c) => imageOf(matrixArg(A, c.argSpans[0]), c.argSpans[0], c.interp.session.compute),
   "ker(Matrix)": ([A], c) => kernelModule(matrixArg(A, c.argSpans[0]), c.argSpans[0], c.interp.session.compute),

@@ -22,6 +22,7 @@ const num = (v: ValueJson) => Number((v as unknown as { value: string }).value);
 const ints = (v: ValueJson) => (v as unknown as { items: { value: string }[] }).items.map((i) => Number(i.value));
 const entries = (v: ValueJson) => (v as unknown as { entries: [number, number, number][] }).entries;
 const text = (v: ValueJson) => v.text;
+const bool = (v: ValueJson) => (v as unknown as { value: boolean }).value;
 
 describe("making modules", () => {
   it("R^n and R^[d1, …] are free: rank, generators, pd 0, depth n, Hilbert series Σ t^{d_i}/(1−t)^n (common practice)", async () => {
@@ -40,6 +41,19 @@ describe("making modules", () => {
       [0, 0, 2],
       [1, 1, 2],
     ]);
+  });
+
+  it("coker(A, degrees = …) keeps the twists of a resolution: coker of the second map is the ideal itself", async () => {
+    // twisted cubic: 0 ← S/I ← S ← S(−2)^3 ← S(−3)^2 ← 0 (checks.md row 2), so coker of the
+    // second differential with its rows in degree 2 is F_1 / im d_2 ≅ im d_1 = I (exactness);
+    // reg I = reg(S/I) + 1 = 2 (common practice)
+    const v = await values(
+      "S := Q[x, y, z, w]\nI := minors([x, y, z; y, z, w], 2)\nC := resolve(S / I)\nM := coker(C.map(2), degrees = [2, 2, 2])\nM.hilbert == module(I).hilbert\ncoker(C.map(2)).hilbert == module(I).hilbert\nM.reg",
+    );
+    expect(v[3]).toMatchObject({ degrees: [2, 2, 2] });
+    expect([bool(v[4]), bool(v[5]), num(v[6])]).toEqual([true, false, 2]);
+    expect((await failure("S := Q[x, y]\ncoker(matrix([x, y]), degrees = [0, 1])")).message).toMatch(/2 degrees, but the matrix has 1 row/);
+    expect((await failure("S := Q[x, y]\ncoker([x, y^2; y, x], degrees = [0, 0])")).message).toMatch(/column 2 is not homogeneous: its entries have degrees 2 and 1/);
   });
 
   it("grades the rows of a matrix so that it is homogeneous, and says when no grading exists", async () => {
