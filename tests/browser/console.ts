@@ -101,6 +101,27 @@ browserTest("console: resolve(S / <x*y, y*z>).betti shows a Betti table", async 
   await shot(page, artifactsDir, "console-betti.png");
 });
 
+browserTest("console: a truncated resolution and a guessed Poincaré series say so in words", async ({ page, baseUrl, artifactsDir }) => {
+  await ensureTestGroup();
+  await freshSession(page, baseUrl);
+  // R = k[x,y,z]/(x^2, yz) is a complete intersection of two quadrics: Tate 1957 gives
+  // P_k(t) = (1+t)^3/(1−t^2)^2 = (1+t)/(1−t)^2, so β_i(k) = 2i + 1 and the resolution of k
+  // never ends — a length bound must cut it, and the page must say that it did.
+  await typeInput(page, ["S := GF(101)[x, y, z]", "R := S / <x^2, y*z>", "resolve(R / R.maximal, length = 3)", "poincare(R.residue, terms = 8)"]);
+  await runAndWait(page, 1);
+  const cell = cells(page).last();
+  const table = cell.locator("table", { has: page.locator("caption", { hasText: "Betti table" }) });
+  await table.waitFor();
+  check((await table.locator("caption").textContent())?.includes("truncated"), "the Betti table of a cut resolution is not marked truncated");
+  const totals = await table.locator("tfoot td").allTextContents();
+  check(totals.join(",") === "1,3,5,7", `unexpected totals ${totals.join(",")}`);
+  const notes = await cell.getByTestId("value-note").allTextContents();
+  check(notes.some((n) => /only homological degrees ≤ 3 were computed/.test(n)), `no truncation note under the resolution: ${JSON.stringify(notes)}`);
+  const series = await cell.locator('[data-value-type="Series"]').textContent();
+  check(/guessed: fits all 8 computed terms \(not a proof\)/.test(series ?? ""), `the Poincaré series is not called a guess: ${series}`);
+  await shot(page, artifactsDir, "console-truncated-and-guessed.png");
+});
+
 browserTest("console: Ctrl+K inserts a guided example that runs", async ({ page, baseUrl, artifactsDir }) => {
   await ensureTestGroup();
   await freshSession(page, baseUrl);
