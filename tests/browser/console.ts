@@ -118,7 +118,7 @@ browserTest("console: a truncated resolution and a guessed Poincaré series say 
   const notes = await cell.getByTestId("value-note").allTextContents();
   check(notes.some((n) => /only homological degrees ≤ 3 were computed/.test(n)), `no truncation note under the resolution: ${JSON.stringify(notes)}`);
   const series = await cell.locator('[data-value-type="Series"]').textContent();
-  check(/guessed: fits all 8 computed terms \(not a proof\)/.test(series ?? ""), `the Poincaré series is not called a guess: ${series}`);
+  check(/guessed rational function: fits all 8 computed terms \(not a proof\)/.test(series ?? ""), `the Poincaré series is not called a guess: ${series}`);
   await shot(page, artifactsDir, "console-truncated-and-guessed.png");
 });
 

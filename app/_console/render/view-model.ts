@@ -85,10 +85,11 @@ export function viewOfValue(v: ValueJson): ValueView {
       const terms = `${coefficients.length} term${coefficients.length === 1 ? "" : "s"}`;
       if (v.rational) {
         const checked = typeof v.checked === "number" ? v.checked : coefficients.length;
+        // the computed terms first, then the guess beside them: the guess is not the answer
         return {
           kind: "series",
-          tex: texOrVerbatim(v.rational),
-          note: `guessed: fits all ${checked} computed terms (not a proof)`,
+          tex: `${texOfSeriesPrefix(coefficients)} \\qquad ${texOrVerbatim(v.rational)}`,
+          note: `guessed rational function: fits all ${checked} computed terms (not a proof)`,
         };
       }
       return { kind: "series", tex: texOfSeriesPrefix(coefficients), note: `${terms} computed; no rational function found that fits them` };
