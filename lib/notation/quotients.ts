@@ -34,7 +34,8 @@ import {
   type QuotientResolution,
 } from "../algebra/index";
 import type { CallContext } from "./builtins";
-import { limit, runtime } from "./errors";
+import { bound } from "./named-options";
+import { runtime } from "./errors";
 import { colonOf, groebnerOf, idealValue } from "./ideals";
 import { encodeValue } from "./json";
 import { moduleValue } from "./modules";
@@ -71,15 +72,6 @@ function requireGraded(M: CyclicModule, what: string, span: Span, c: CallContext
   }
 }
 
-/// A named bound: a non-negative Int at most `max`.
-function bound(c: CallContext, name: string, max: number): number | undefined {
-  const v = c.named.get(name);
-  if (v === undefined) return undefined;
-  if (v.type !== "Int") throw runtime(`${name} must be an Int, got ${v.type}`, c.span);
-  if (v.value < 0n) throw runtime(`${name} must be at least 0, got ${v.value}`, c.span);
-  if (v.value > BigInt(max)) throw limit(`${name} = ${v.value} is beyond the limit ${max}`, c.span);
-  return Number(v.value);
-}
 
 /// The first column that a degree bound may have cut (its total and all later ones are
 /// lower bounds), or null when every column is exact.

@@ -3,24 +3,15 @@
 /// lib/algebra/resolution). Resolutions over quotient rings belong to engine part 3.
 import type { Span } from "../../grammar/ast";
 import { bettiNumber, bettiTotals, ideal as engineIdeal, resolveQuotient, type Resolution } from "../algebra/index";
-import { limit, runtime } from "./errors";
+import { runtime } from "./errors";
 import type { CallContext } from "./builtins";
+import { bound } from "./named-options";
 import { resolveModule } from "./homology";
-import { pendingError } from "./pending";
 import { resolveOverQuotient } from "./quotients";
 import type { BettiTableValue, ComplexValue, MatrixValue, RingValue, Value } from "./values";
 
 const Int = (value: number): Value => ({ type: "Int", value: BigInt(value) });
 
-/// A bound given as a named option: a non-negative Int, at most `max`.
-export function bound(c: CallContext, name: string, max: number): number | undefined {
-  const v = c.named.get(name);
-  if (v === undefined) return undefined;
-  if (v.type !== "Int") throw runtime(`${name} must be an Int, got ${v.type}`, c.span);
-  if (v.value < 0n) throw runtime(`${name} must be at least 0, got ${v.value}`, c.span);
-  if (v.value > BigInt(max)) throw limit(`${name} = ${v.value} is beyond the limit ${max}`, c.span);
-  return Number(v.value);
-}
 
 /// The Complex value of a resolution; `shift`: how far the module was moved up in degree
 /// before resolving (its Betti numbers are moved back).

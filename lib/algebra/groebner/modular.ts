@@ -1,5 +1,4 @@
 import { gf } from "../field/field";
-import { gfCoeffs } from "../field/coeffs";
 import { bigToMod, invMod } from "../field/gfp";
 import { previousPrime } from "../field/prime";
 import { rat, type Rat } from "../field/rational";

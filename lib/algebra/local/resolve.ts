@@ -1,5 +1,4 @@
 import { AlgebraError } from "../errors";
-import type { Coeffs } from "../field/coeffs";
 import { Echelon, kernelBasis } from "../graded/echelon";
 import { gradedQuotient, type GradedQuotient } from "../graded/piece";
 import { type Ideal, idealGroebnerBasis, idealSum } from "../ideal";

@@ -1,0 +1,13 @@
+/// Reading the named options of a built-in call (`length = 6`, `terms = 8`).
+import type { CallContext } from "./builtins";
+import { limit, runtime } from "./errors";
+
+/// A bound given as a named option: a non-negative Int, at most `max`; undefined when absent.
+export function bound(c: CallContext, name: string, max: number): number | undefined {
+  const v = c.named.get(name);
+  if (v === undefined) return undefined;
+  if (v.type !== "Int") throw runtime(`${name} must be an Int, got ${v.type}`, c.span);
+  if (v.value < 0n) throw runtime(`${name} must be at least 0, got ${v.value}`, c.span);
+  if (v.value > BigInt(max)) throw limit(`${name} = ${v.value} is beyond the limit ${max}`, c.span);
+  return Number(v.value);
+}
