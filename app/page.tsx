@@ -1,4 +1,5 @@
 import Link from "next/link";
+import type { ReactNode } from "react";
 import { redirect } from "next/navigation";
 import { currentUser } from "@/lib/auth/current-user";
 import { listTeams } from "@/lib/sharing/teams";
@@ -24,40 +25,35 @@ export default async function ConsolePage({ searchParams }: { searchParams: Prom
   const teamRows = await listTeams(user);
 
   return (
-    <div className="flex h-screen flex-col">
-      <header className="flex items-center justify-between border-b border-ink/10 bg-white px-5 py-3 dark:border-paper/10 dark:bg-night-panel dark:text-paper">
-        <p className="font-mono text-lg font-semibold tracking-tight">
-          Ringside<span className="text-signal">.</span>
-        </p>
-        <nav className="flex items-center gap-4 text-sm">
-          {teamRows.slice(0, TEAMS_SHOWN).map((t) => (
-            <span key={t.id} className="whitespace-nowrap rounded-full bg-paper-deep px-2 py-0.5 text-ink-soft">
-              {t.name} · {t.role}
-            </span>
-          ))}
-          {teamRows.length > TEAMS_SHOWN && (
-            <span className="whitespace-nowrap text-ink-soft" title={teamRows.map((t) => `${t.name} · ${t.role}`).join("\n")}>
-              +{teamRows.length - TEAMS_SHOWN} more teams
-            </span>
-          )}
-          <Link href="/teams" className="text-ink-soft underline">
-            Teams
-          </Link>
-          {user.siteRole === "admin" && (
-            <Link href="/mailbox" className="text-ink-soft underline">
-              Mailbox
-            </Link>
-          )}
-          <span className="font-medium" data-testid="user-name">
-            {user.displayName}
+    <PageShell>
+      <nav className="flex items-center gap-4 text-sm">
+        {teamRows.slice(0, TEAMS_SHOWN).map((t) => (
+          <span key={t.id} className="whitespace-nowrap rounded-full bg-paper-deep px-2 py-0.5 text-ink-soft">
+            {t.name} · {t.role}
           </span>
-          <Link href="/sign-out" className="text-ink-soft underline">
-            Sign out
+        ))}
+        {teamRows.length > TEAMS_SHOWN && (
+          <span className="whitespace-nowrap text-ink-soft" title={teamRows.map((t) => `${t.name} · ${t.role}`).join("\n")}>
+            +{teamRows.length - TEAMS_SHOWN} more teams
+          </span>
+        )}
+        <Link href="/teams" className="text-ink-soft underline">
+          Teams
+        </Link>
+        {user.siteRole === "admin" && (
+          <Link href="/mailbox" className="text-ink-soft underline">
+            Mailbox
           </Link>
-        </nav>
-      </header>
+        )}
+        <span className="font-medium" data-testid="user-name">
+          {user.displayName}
+        </span>
+        <Link href="/sign-out" className="text-ink-soft underline">
+          Sign out
+        </Link>
+      </nav>
       <Console initialSessionId={session} linkToken={link} signedIn />
-    </div>
+    </PageShell>
   );
 }
 
@@ -65,19 +61,30 @@ export default async function ConsolePage({ searchParams }: { searchParams: Prom
 function LinkVisitorPage({ sessionId, link }: { sessionId: string; link: string }) {
   const back = `/?session=${encodeURIComponent(sessionId)}&link=${encodeURIComponent(link)}`;
   return (
+    <PageShell>
+      <nav className="flex items-center gap-4 text-sm">
+        <span className="text-ink-soft">Visiting through a read-only link</span>
+        <Link href={`/sign-in?callbackUrl=${encodeURIComponent(back)}`} className="text-ink-soft underline">
+          Sign in
+        </Link>
+      </nav>
+      <Console initialSessionId={sessionId} linkToken={link} signedIn={false} />
+    </PageShell>
+  );
+}
+
+/// The page frame: the header with the product's name, its navigation, then the console.
+function PageShell({ children }: { children: [ReactNode, ReactNode] }) {
+  const [nav, body] = children;
+  return (
     <div className="flex h-screen flex-col">
       <header className="flex items-center justify-between border-b border-ink/10 bg-white px-5 py-3 dark:border-paper/10 dark:bg-night-panel dark:text-paper">
         <p className="font-mono text-lg font-semibold tracking-tight">
           Ringside<span className="text-signal">.</span>
         </p>
-        <nav className="flex items-center gap-4 text-sm">
-          <span className="text-ink-soft">Visiting through a read-only link</span>
-          <Link href={`/sign-in?callbackUrl=${encodeURIComponent(back)}`} className="text-ink-soft underline">
-            Sign in
-          </Link>
-        </nav>
+        {nav}
       </header>
-      <Console initialSessionId={sessionId} linkToken={link} signedIn={false} />
+      {body}
     </div>
   );
 }

@@ -7,16 +7,8 @@ import type { Page } from "playwright-core";
 import { db } from "@/db/client";
 import { sessions } from "@/db/schema";
 import { browserTest, check } from "../helpers/browser";
-import { ensureTestGroup, TEST_ACCOUNTS, type FixtureKey } from "../helpers/fixtures";
-
-async function signIn(page: Page, baseUrl: string, who: FixtureKey) {
-  const account = TEST_ACCOUNTS[who];
-  await page.goto(`${baseUrl}/sign-in`);
-  await page.getByLabel("Email").fill(account.email);
-  await page.getByLabel("Password").fill(account.password);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.getByRole("region", { name: "Transcript" }).waitFor();
-}
+import { ensureTestGroup } from "../helpers/fixtures";
+import { signIn } from "../helpers/browser-sign-in";
 
 /// Signs in and starts a fresh session, so each test reads only its own cells.
 async function freshSession(page: Page, baseUrl: string) {

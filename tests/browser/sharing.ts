@@ -6,17 +6,8 @@ import type { Page } from "playwright-core";
 import { db } from "@/db/client";
 import { cells, sessions } from "@/db/schema";
 import { browserTest, check } from "../helpers/browser";
-import { ensureTestGroup, TEST_ACCOUNTS, type FixtureKey } from "../helpers/fixtures";
-
-async function signIn(page: Page, baseUrl: string, who: FixtureKey) {
-  await page.context().clearCookies();
-  const account = TEST_ACCOUNTS[who];
-  await page.goto(`${baseUrl}/sign-in`);
-  await page.getByLabel("Email").fill(account.email);
-  await page.getByLabel("Password").fill(account.password);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.getByRole("region", { name: "Transcript" }).waitFor();
-}
+import { ensureTestGroup } from "../helpers/fixtures";
+import { signIn } from "../helpers/browser-sign-in";
 
 const shot = (page: Page, dir: string, name: string) => page.screenshot({ path: path.join(dir, name), fullPage: true });
 
