@@ -1,4 +1,5 @@
 import type { GFCoeffs } from "../field/coeffs";
+import { invMod } from "../field/gfp";
 import { monoDiv, monoOne, type Mono } from "../monomial/monomial";
 import { checkLimit, checkpoint } from "../options";
 import { asTyped, type Poly } from "../poly/poly";
@@ -144,7 +145,7 @@ export const reduceF4: ReductionStep = <C>(...[R, batch, inputs, basis, opts, ti
     if (lead < 0) continue;
     checkLimit(opts, "maxTerms", nonzero, "a polynomial's number of terms");
     const cols = new Int32Array(nonzero), vals = new Float64Array(nonzero);
-    const inv = invOf(dense[lead], p);
+    const inv = invMod(dense[lead], p);
     let k = 0;
     for (let c = lead; c < ncols; c++) {
       const v = dense[c];
@@ -158,13 +159,3 @@ export const reduceF4: ReductionStep = <C>(...[R, batch, inputs, basis, opts, ti
   }
   return out;
 };
-
-function invOf(a: number, p: number): number {
-  let r0 = p, r1 = a, s0 = 0, s1 = 1;
-  while (r1 !== 0) {
-    const q = Math.floor(r0 / r1);
-    [r0, r1] = [r1, r0 - q * r1];
-    [s0, s1] = [s1, s0 - q * s1];
-  }
-  return s0 < 0 ? s0 + p : s0;
-}
