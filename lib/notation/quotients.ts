@@ -24,6 +24,8 @@ import {
   quotientProperties,
   resolveDegreewise,
   resolveLocalArtinian,
+  projectiveDimension,
+  resolveCoker,
   resolveQuotient,
   truncatedSeries,
   variable,
@@ -38,7 +40,7 @@ import { bound } from "./named-options";
 import { runtime } from "./errors";
 import { colonOf, groebnerOf, idealValue } from "./ideals";
 import { encodeValue } from "./json";
-import { moduleValue } from "./modules";
+import { moduleValue, presentationOverS } from "./modules";
 import { ascendingText } from "./series-text";
 import { list, type BettiEntry, type ComplexValue, type IdealValue, type MatrixValue, type ModuleValue, type RingValue, type SeriesValue, type Value } from "./values";
 
@@ -400,7 +402,22 @@ function socleOf(M: ModuleValue, c: CallContext): { degrees: number[]; splits: b
   }
   const t = targetOfModule(M, c.span, "the socle", c);
   const s = moduleSocle(t.J, t.presentation!, opts(c));
-  return { degrees: s.degrees.map((d) => d - t.shift), splits: s.splits };
+  if (s) return { degrees: s.degrees.map((d) => d - t.shift), splits: s.splits };
+  // Not of finite length over a ring that is not Artinian: 0 :_M m = 0 exactly when depth M > 0
+  // (m is then not an associated prime of M; common practice), and depth is read over S.
+  if (depthOverS(M, c) > 0) return { degrees: [], splits: false };
+  throw runtime(
+    "the socle of a module of depth 0 that is not of finite length, over a ring that is not Artinian, is not computed here (its degrees are not bounded in advance)",
+    c.span,
+  );
+}
+
+/// depth M = n − pd_S M (Auslander–Buchsbaum over S; depth, the grade of m on M, is the same over S and S/J).
+function depthOverS(M: ModuleValue, c: CallContext): number {
+  const { rows, degrees } = presentationOverS(M, c.span);
+  const shift = -Math.min(0, ...degrees);
+  const C = resolveCoker(M.ring.poly, rows, degrees.map((d) => d + shift), opts(c));
+  return M.ring.poly.vars.length - projectiveDimension(C);
 }
 
 export const QUOTIENT_PROPERTIES: Record<string, (obj: Value, args: readonly Value[], c: CallContext) => Value> = {

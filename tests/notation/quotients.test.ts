@@ -205,6 +205,21 @@ describe("resolve over a quotient ring", () => {
 });
 
 describe("socles, the residue field as a summand", () => {
+  it("a module of positive depth has no socle, so k is not a summand of it", async () => {
+    // R = k[x,y,z]/(xy, z^3) is a complete intersection (xy, z^3 share no variable) of
+    // dimension 1, so Cohen–Macaulay of depth 1; the depth lemma gives depth Ω^i k ≥
+    // min(i, depth R) = 1 for i ≥ 1 (common practice), so 0 :_{Ω²k} m = 0. Over
+    // U = S/(x^2, xy), coker[x, y] = k[z] has depth 1 as well.
+    const v = await values("S := GF(32003)[x, y, z]\nT := S / <x*y, z^3>\nT.depth\nO := syzygy(T.residue, 2)\nO.depth\nO.socle\nO.splits_residue\nU := S / <x^2, x*y>\ncoker(matrix([x, y])).socle");
+    expect([v[2].text, v[4].text]).toEqual(["1", "1"]);
+    expect(v[5].text).toMatch(/^the zero module over /);
+    expect(bool(v[6])).toBe(false);
+    expect(v[8].text).toMatch(/^the zero module over /);
+    // k[x,y]/(x^2, xy) over U: depth 0 (x is in its socle) but not of finite length — refused
+    const refused = await run("S := GF(32003)[x, y, z]\nU := S / <x^2, x*y>\ncoker(matrix([z])).socle");
+    expect(refused.error?.message).toMatch(/depth 0 that is not of finite length/);
+  });
+
   it("socles of Artinian rings, graded and local", async () => {
     // k[x,y,z]/(x^2,y^2,z^2) is Gorenstein with socle spanned by xyz (common practice); the local
     // ring Q[u,v]/(u^2 + v^3, uv) has basis 1, u, v, v^2, v^3 = −u^2 and socle (u^2) (by hand)

@@ -1,4 +1,3 @@
-import { AlgebraError } from "../errors";
 import { Echelon, kernelBasis } from "../graded/echelon";
 import type { Ideal } from "../ideal";
 import { checkpoint, type ComputeOptions } from "../options";
@@ -60,7 +59,9 @@ export function residueSplitsFromSyzygy(J: Ideal, p: number, I?: Ideal, opts?: C
 /// R Artinian): the degrees of a basis of (0 :_M m), with multiplicity, and whether the
 /// residue field is a direct summand of M (the socle is not inside m·M, as above). Computed
 /// degree by degree: M_j = F_j / K_j with K = image of A, read from the resolution's first step.
-export function moduleSocle(J: Ideal, presentation: ModulePresentation, opts?: ComputeOptions): { degrees: number[]; splits: boolean } {
+/// null when the pieces computed cannot decide (M not of finite length over a ring that is not
+/// Artinian): the caller may know more (a module of positive depth has no socle).
+export function moduleSocle(J: Ideal, presentation: ModulePresentation, opts?: ComputeOptions): { degrees: number[]; splits: boolean } | null {
   const kernels = new Map<number, Echelon<unknown>>();
   let Fm: GradedFree<unknown> | null = null;
   const r = resolveDegreewise<unknown>({
@@ -74,9 +75,7 @@ export function moduleSocle(J: Ideal, presentation: ModulePresentation, opts?: C
       kernels.set(j, kernel);
     },
   });
-  if (!r.complete && !r.columns.every((c) => c.complete)) {
-    throw new AlgebraError("runtime", "socle: the module must have finite length (or the ring be Artinian) for its socle to be found degree by degree");
-  }
+  if (!r.complete && !r.columns.every((c) => c.complete)) return null;
   const degrees: number[] = [];
   let splits = false;
   const F = Fm as GradedFree<unknown> | null;
