@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { noteOfValue, viewOfValue } from "@/app/_console/render/view-model";
+import { noteOfValue, texOfModule, viewOfValue } from "@/app/_console/render/view-model";
 
 describe("viewOfValue", () => {
   it("turns a §9 BettiTable into a grid, truncated when incomplete", () => {
@@ -25,6 +25,17 @@ describe("viewOfValue", () => {
     if (s.kind === "series") expect(s.tex).toMatch(/^1 \+ 2 ?t \+ 4 ?t\^\{2\} \+ O.*\\qquad /);
     const none = viewOfValue({ type: "Series", text: "", coefficients: ["1", "2"], rational: null });
     expect(none).toMatchObject({ kind: "series", note: "2 terms computed; no rational function found that fits them" });
+  });
+
+  it("draws modules: 0, graded free modules with their twists, a cokernel with its generators' degrees", () => {
+    const S = { type: "Ring", text: "Q[x, y]", field: "Q", vars: ["x", "y"], ideal: [] };
+    expect(texOfModule([], [], S)).toBe("0");
+    // R^[0, 1, 1] = R ⊕ R(−1)^2 (the twist R(−d) is generated in degree d; common practice)
+    expect(texOfModule([[], [], []], [0, 1, 1], S)).toBe("\\mathbb{Q}[x, y] \\oplus \\mathbb{Q}[x, y](-1)^{2}");
+    expect(texOfModule([["x", "y"]], [0], S)).toMatch(/^\\operatorname\{coker\} /);
+    expect(texOfModule([["x"], ["y"]], [0, 1], S)).toMatch(/generators in degrees 0, 1/);
+    const R = { ...S, text: "Q[x, y] / <x*y>", ideal: ["x*y"] };
+    expect(texOfModule([[]], [2], R)).toMatch(/^\\left\(.*\\right\)\(-2\)$/);
   });
 
   it("a value's own warning is shown in words under it", () => {

@@ -33,6 +33,24 @@ export function texOfRing(v: ValueJson): string {
   return ideal.length ? `${base} / ${texOfIdeal(ideal)}` : base;
 }
 
+/// TeX of a presented module: 0, a graded free module ⊕ R(−d)^m when there are no
+/// relations, else coker of the presentation with the generators' degrees when not all 0.
+export function texOfModule(rows: readonly (readonly string[])[], degrees: readonly number[], ring?: ValueJson): string {
+  if (rows.length === 0) return "0";
+  const R = ring?.vars ? texOfRing(ring) : "R";
+  const base = ring?.ideal?.some((g) => g !== "0") ? `\\left(${R}\\right)` : R;
+  if (rows.every((r) => r.length === 0)) {
+    const counts = new Map<number, number>();
+    rows.forEach((_, a) => counts.set(degrees[a] ?? 0, (counts.get(degrees[a] ?? 0) ?? 0) + 1));
+    return [...counts]
+      .sort(([d], [e]) => d - e)
+      .map(([d, m]) => `${base}${d === 0 ? "" : `(${-d})`}${m === 1 ? "" : `^{${m}}`}`)
+      .join(" \\oplus ");
+  }
+  const shifted = degrees.some((d) => d !== 0) ? ` \\quad \\text{(generators in degrees ${degrees.join(", ")})}` : "";
+  return `\\operatorname{coker} ${texOfMatrix(rows)}${shifted}`;
+}
+
 const entriesOf = (v: ValueJson): BettiEntry[] =>
   ((v.entries ?? v.betti ?? []) as readonly BettiEntry[]).filter(
     (e) => Array.isArray(e) && e.length === 3 && e.every((n) => typeof n === "number"),
@@ -64,8 +82,8 @@ export function viewOfValue(v: ValueJson): ValueView {
       return isStringRows(v.rows) ? { kind: "tex", tex: texOfMatrix(v.rows) } : { kind: "text", text: v.text };
     case "Module": {
       const p = v.presentation;
-      if (p && isStringRows(p.rows)) return { kind: "tex", tex: `\\operatorname{coker} ${texOfMatrix(p.rows)}` };
-      return { kind: "text", text: v.text };
+      if (!p || !isStringRows(p.rows)) return { kind: "text", text: v.text };
+      return { kind: "tex", tex: texOfModule(p.rows, v.degrees ?? [], v.ring) };
     }
     case "BettiTable":
       return { kind: "betti", grid: bettiGrid(entriesOf(v), v.complete !== false) };
