@@ -33,38 +33,53 @@ export async function sessionRole(
   const grants: SessionRole[] = [];
   if (opts.linkToken && session.shareToken && sameToken(opts.linkToken, session.shareToken)) grants.push("viewer");
   if (user) grants.push(...(await memberGrants(user, session)));
-  const role = grants.reduce<SessionRole | null>((best, r) => (best === null || RANK[r] > RANK[best] ? r : best), null);
-  return { session, role };
+  return { session, role: strongestRole(grants) };
+}
+
+/// The strongest of some roles (owner > editor > viewer), null when there is none.
+export function strongestRole(roles: readonly (SessionRole | null)[]): SessionRole | null {
+  return roles.reduce<SessionRole | null>((best, r) => (r !== null && (best === null || RANK[r] > RANK[best]) ? r : best), null);
 }
 
 /// What a signed-in user holds through the session's team and through shares.
 async function memberGrants(user: CurrentUser, session: SessionRow): Promise<SessionRole[]> {
-  const database = db();
-  const teamRoles = await database
-    .select({ teamId: memberships.teamId, role: memberships.role })
-    .from(memberships)
-    .where(eq(memberships.userId, user.id));
-  const roleIn = new Map(teamRoles.map((m) => [m.teamId, m.role]));
+  const roleIn = await teamRolesOf(user);
   const grants: SessionRole[] = [];
   if (session.visibility === "team" && session.teamId && roleIn.has(session.teamId)) {
     grants.push(roleIn.get(session.teamId) === "guest" ? "viewer" : "editor");
   }
-  const teamIds = [...roleIn.keys()];
-  const shareRows = await database
+  grants.push(...(await shareGrants(user, { sessionId: session.id }, roleIn)));
+  return grants;
+}
+
+/// The user's role in each of their teams, by team id.
+async function teamRolesOf(user: CurrentUser): Promise<Map<string, TeamRole>> {
+  const rows = await db()
+    .select({ teamId: memberships.teamId, role: memberships.role })
+    .from(memberships)
+    .where(eq(memberships.userId, user.id));
+  return new Map(rows.map((m) => [m.teamId, m.role]));
+}
+
+/// The roles that shares of one session or one named object grant the user, directly or
+/// through a team; a share to a team never lifts that team's guests above viewer.
+export async function shareGrants(
+  user: CurrentUser,
+  target: { sessionId: string } | { objectId: string },
+  roleIn?: Map<string, TeamRole>,
+): Promise<SessionRole[]> {
+  const teams = roleIn ?? (await teamRolesOf(user));
+  const teamIds = [...teams.keys()];
+  const rows = await db()
     .select({ role: shares.role, teamId: shares.teamId })
     .from(shares)
     .where(
       and(
-        eq(shares.sessionId, session.id),
+        "sessionId" in target ? eq(shares.sessionId, target.sessionId) : eq(shares.objectId, target.objectId),
         teamIds.length > 0 ? or(eq(shares.userId, user.id), inArray(shares.teamId, teamIds)) : eq(shares.userId, user.id),
       ),
     );
-  for (const s of shareRows) {
-    // A share to a team never lifts that team's guests above viewer.
-    const guest = s.teamId !== null && roleIn.get(s.teamId) === "guest";
-    grants.push(guest ? "viewer" : s.role);
-  }
-  return grants;
+  return rows.map((s) => (s.teamId !== null && teams.get(s.teamId) === "guest" ? "viewer" : s.role));
 }
 
 export async function canRead(user: CurrentUser, sessionId: string, opts: { linkToken?: string | null } = {}): Promise<boolean> {

@@ -1,10 +1,10 @@
 /// Sharing a session or a named object with a user (by e-mail) or a team as viewer or
 /// editor, and publishing a session as a read-only link. Only the session's owner or a
 /// lead of the session's team changes sharing; other readers get 403, non-readers 404.
-import { and, eq, inArray, or, sql } from "drizzle-orm";
+import { and, eq, sql } from "drizzle-orm";
 import { db } from "@/db/client";
 import { memberships, namedObjects, sessions, shares, teams, users, type ShareRole } from "@/db/schema";
-import { requireSessionAccess, sessionRole, type SessionRole } from "@/lib/auth/access";
+import { requireSessionAccess, sessionRole, shareGrants, strongestRole, type SessionRole } from "@/lib/auth/access";
 import type { CurrentUser } from "@/lib/auth/types";
 import { forbidden, HttpError, notFound } from "@/lib/http/errors";
 import { auditSharing, isUniqueViolation, newToken, requireUuid } from "./common";
@@ -12,8 +12,6 @@ import { auditSharing, isUniqueViolation, newToken, requireUuid } from "./common
 type SessionRow = typeof sessions.$inferSelect;
 type ObjectRow = typeof namedObjects.$inferSelect;
 export type Grantee = { email: string } | { teamId: string };
-
-const RANK: Record<SessionRole, number> = { viewer: 1, editor: 2, owner: 3 };
 
 /// Whether the user may change the sharing of `session`: its owner, or a lead of its team.
 export async function canManageSharing(user: CurrentUser, session: SessionRow): Promise<boolean> {
@@ -218,24 +216,8 @@ export async function objectRole(
   if (!object) return null;
   const viaSession = await sessionRole(user, object.sessionId, opts);
   if (!viaSession) return null;
-  let best = viaSession.role;
-  if (!user) return { object, session: viaSession.session, role: best };
-  const teamRows = await database.select({ teamId: memberships.teamId, role: memberships.role }).from(memberships).where(eq(memberships.userId, user.id));
-  const roleIn = new Map(teamRows.map((m) => [m.teamId, m.role]));
-  const teamIds = [...roleIn.keys()];
-  const rows = await database
-    .select({ role: shares.role, teamId: shares.teamId })
-    .from(shares)
-    .where(
-      and(
-        eq(shares.objectId, objectId),
-        teamIds.length > 0 ? or(eq(shares.userId, user.id), inArray(shares.teamId, teamIds)) : eq(shares.userId, user.id),
-      ),
-    );
-  for (const s of rows) {
-    const r: SessionRole = s.teamId !== null && roleIn.get(s.teamId) === "guest" ? "viewer" : s.role;
-    if (best === null || RANK[r] > RANK[best]) best = r;
-  }
+  const direct = user ? await shareGrants(user, { objectId }) : [];
+  const best = strongestRole([viaSession.role, ...direct]);
   return { object, session: viaSession.session, role: best };
 }
 
