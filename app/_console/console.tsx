@@ -8,7 +8,7 @@ import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { mutate } from "swr";
 import { envFromObjects } from "@/lib/editor/notation-env";
 import { GUIDED_TOUR, type GuidedExample } from "@/lib/examples/tour";
-import { ApiError, cancelCell, createSession, deleteObject, errorOf, exportUrl, keys, renameObject, type ExportFormat } from "./api/client";
+import { cancelCell, createSession, deleteObject, errorOf, exportUrl, keys, messageOf, renameObject, type ExportFormat } from "./api/client";
 import { importSession } from "./api/sharing";
 import { runCell } from "./api/cell-stream";
 import type { NamedObject } from "./api/types";
@@ -32,7 +32,6 @@ import { EmptySessionWelcome, TourList } from "./views/tour";
 
 type DialogName = "history" | "tour" | "help" | "share" | "transfer" | "shared-objects" | null;
 
-const messageOf = (e: unknown) => (e instanceof ApiError ? e.message : e instanceof Error ? e.message : String(e));
 
 /// Keeps the open session in the address (?session=…), so a reload reopens it; the link
 /// token stays only while its own session is open.

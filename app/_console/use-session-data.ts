@@ -6,7 +6,7 @@ import useSWR from "swr";
 import { ApiError, fetchJson, keys } from "./api/client";
 import type { Cell, NamedObject, SessionDetail, SessionSummary } from "./api/types";
 
-const messageOf = (e: unknown): string | null =>
+const loadProblemOf = (e: unknown): string | null =>
   e === undefined || e === null ? null : e instanceof ApiError ? e.message : "The server could not be reached.";
 
 /// Everything the console reads about `sessionId` (null: no session open).
@@ -17,12 +17,12 @@ export function useSessionData(sessionId: string | null, link: string | null, si
   const objects = useSWR<{ objects: NamedObject[] }>(sessionId ? keys.objects(sessionId, link) : null, fetchJson);
   return {
     sessions: sessions.data?.sessions,
-    sessionsError: messageOf(sessions.error),
+    sessionsError: loadProblemOf(sessions.error),
     session: session.data?.session,
-    sessionError: messageOf(session.error),
+    sessionError: loadProblemOf(session.error),
     sessionStatus: session.error instanceof ApiError ? session.error.status : null,
     cells: cells.data?.cells,
-    cellsError: messageOf(cells.error),
+    cellsError: loadProblemOf(cells.error),
     objects: objects.data?.objects,
     refreshSessions: () => sessions.mutate(),
     refreshSession: () => session.mutate(),

@@ -28,6 +28,9 @@ export async function errorOf(res: Response): Promise<ApiError> {
   return new ApiError(res.status, code, message);
 }
 
+/// The words to show for a failed call: the server's message, or the error's own.
+export const messageOf = (e: unknown): string => (e instanceof Error ? e.message : String(e));
+
 /// Adds a read-only link's token to an API address: every call made for a link holder
 /// carries it (`?link=`), or the server cannot tell the holder from a stranger.
 export function withLink(url: string, link: string | null): string {

@@ -4,18 +4,14 @@
 /// session's team may (the server answers 403 to anyone else, shown as it says).
 import { useRef, useState } from "react";
 import useSWR from "swr";
-import { ApiError, fetchJson, keys } from "../api/client";
-import { publishLink, revokeLink, revokeSessionShare, shareSession, type SessionSharing, type TeamSummary } from "../api/sharing";
-import { ShareForm } from "./share-form";
-import { ShareList } from "./share-list";
+import { fetchJson, keys, messageOf } from "../api/client";
+import { publishLink, revokeLink, revokeSessionShare, shareSession, type SessionSharing } from "../api/sharing";
+import { GrantsEditor } from "./grants-editor";
 import { buttonPrimary, buttonSecondary, panelHeading, textInput } from "./styles";
-
-const messageOf = (e: unknown) => (e instanceof ApiError || e instanceof Error ? e.message : String(e));
 
 /// The dialog's body for the session `sessionId` (rendered inside a Modal).
 export function ShareSessionPanel({ sessionId, onChanged }: { sessionId: string; onChanged: (notice: string) => void }) {
   const sharing = useSWR<SessionSharing>(keys.sessionShares(sessionId), fetchJson);
-  const teams = useSWR<{ teams: TeamSummary[] }>(keys.teams, fetchJson);
   const [linkProblem, setLinkProblem] = useState<string | null>(null);
   const [copied, setCopied] = useState<string | null>(null);
   const urlField = useRef<HTMLInputElement>(null);
@@ -27,7 +23,6 @@ export function ShareSessionPanel({ sessionId, onChanged }: { sessionId: string;
       </p>
     );
   }
-  const shareable = (teams.data?.teams ?? []).filter((t) => t.role !== "guest");
   const url = sharing.data?.link.url ?? null;
 
   const linkAction = async (what: () => Promise<unknown>, done: string) => {
@@ -58,34 +53,19 @@ export function ShareSessionPanel({ sessionId, onChanged }: { sessionId: string;
     <div className="flex flex-col gap-4">
       <section aria-label="People and teams" className="flex flex-col gap-2">
         <h3 className={panelHeading}>People and teams</h3>
-        {teams.data || teams.error ? (
-          <ShareForm
-            teams={shareable}
-            onShare={async (grantee, role) => {
-              try {
-                const { share } = await shareSession(sessionId, grantee, role);
-                await sharing.mutate();
-                onChanged(`Shared with ${share.grantee.name || ("email" in grantee ? grantee.email : "the team")} as ${share.role}.`);
-                return null;
-              } catch (e) {
-                return messageOf(e);
-              }
-            }}
-          />
-        ) : (
-          <p className="text-sm text-ink/50 dark:text-paper/50">Loading your teams…</p>
-        )}
-        <ShareList
+        <GrantsEditor
           shares={sharing.data?.shares}
-          onRevoke={async (s) => {
-            try {
-              await revokeSessionShare(sessionId, s.id);
-              await sharing.mutate();
-              onChanged(`Revoked the share of ${s.grantee.name}.`);
-              return null;
-            } catch (e) {
-              return messageOf(e);
-            }
+          grant={async (grantee, role) => {
+            const { share } = await shareSession(sessionId, grantee, role);
+            return `Shared with ${share.grantee.name || ("email" in grantee ? grantee.email : "the team")} as ${share.role}.`;
+          }}
+          revoke={async (s) => {
+            await revokeSessionShare(sessionId, s.id);
+            return `Revoked the share of ${s.grantee.name}.`;
+          }}
+          onChanged={async (notice) => {
+            await sharing.mutate();
+            onChanged(notice);
           }}
         />
       </section>
