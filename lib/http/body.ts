@@ -33,13 +33,24 @@ export async function readJson<S extends z.ZodType>(
   return parsed.data;
 }
 
+/// Bodies up to this size are read to the end before a 413 is sent. A server that answers
+/// and closes while the client is still sending makes the client's write fail (EPIPE or
+/// ECONNRESET) before it can read the answer, so the client sees "fetch failed" instead of
+/// 413 (common practice: servers drain modest bodies before refusing them). Beyond this the
+/// connection is closed early: a client sending megabytes to a JSON route gets no courtesy.
+const DRAIN_LIMIT = 1024 * 1024;
+
 async function readLimited(req: Request, maxBytes: number): Promise<string> {
-  // The rest of the body is never read, so the connection cannot carry another request:
-  // `Connection: close` keeps keep-alive clients from reusing it.
+  // The connection is closed after a 413 either way: `Connection: close` keeps keep-alive
+  // clients from reusing it.
   const tooLarge = () =>
     new HttpError(413, "body_too_large", `The body is larger than ${maxBytes} bytes.`, undefined, { Connection: "close" });
   const declared = Number(req.headers.get("content-length"));
-  if (Number.isFinite(declared) && declared > maxBytes) throw tooLarge();
+  const drainLimit = Math.max(DRAIN_LIMIT, maxBytes);
+  if (Number.isFinite(declared) && declared > maxBytes) {
+    if (declared <= drainLimit) await drain(req, drainLimit);
+    throw tooLarge();
+  }
   if (!req.body) return "";
   // Counted while streaming: Content-Length may be absent (chunked) or wrong.
   const reader = req.body.getReader();
@@ -50,10 +61,28 @@ async function readLimited(req: Request, maxBytes: number): Promise<string> {
     if (done) break;
     total += value.byteLength;
     if (total > maxBytes) {
-      await reader.cancel();
+      await drainReader(reader, drainLimit - total);
       throw tooLarge();
     }
     chunks.push(value);
   }
   return Buffer.concat(chunks).toString("utf8");
+}
+
+async function drain(req: Request, limit: number): Promise<void> {
+  if (req.body) await drainReader(req.body.getReader(), limit);
+}
+
+/// Reads and discards up to `budget` more bytes, then cancels the stream.
+async function drainReader(reader: ReadableStreamDefaultReader<Uint8Array>, budget: number): Promise<void> {
+  try {
+    while (budget > 0) {
+      const { done, value } = await reader.read();
+      if (done) return;
+      budget -= value.byteLength;
+    }
+    await reader.cancel();
+  } catch {
+    // A client that hangs up mid-body needs no answer.
+  }
 }
