@@ -2,6 +2,8 @@
 # npm test: a throw-away PostgreSQL cluster, SMTP sink and production server of its own,
 # then the type check, every vitest suite under tests/ and the browser tests.
 # Ends with one line "N passed, N failed"; exits non-zero on any failure.
+# `npm test -- FILTER…` runs only the vitest files matching the filters and skips the
+# browser tests unless RINGSIDE_BROWSER_ONLY names some (comma-separated file names).
 set -euo pipefail
 source "$(dirname "$0")/common.sh"
 cd "$ROOT"
@@ -105,7 +107,7 @@ count_json() {
 
 log "vitest"
 VITEST_OK=0
-npx vitest run --reporter=default --reporter=json --outputFile.json="$T/vitest.json" || VITEST_OK=1
+npx vitest run "$@" --reporter=default --reporter=json --outputFile.json="$T/vitest.json" || VITEST_OK=1
 if [ -s "$T/vitest.json" ]; then
   read -r p f < <(count_json "$T/vitest.json")
   PASSED=$((PASSED + p)); FAILED=$((FAILED + f))
@@ -115,9 +117,15 @@ else
 fi
 
 [ "$BUILD_OK" = 1 ] || exit 1
+BROWSER_FILES=()
+[ -z "${RINGSIDE_BROWSER_ONLY:-}" ] || IFS=, read -r -a BROWSER_FILES <<<"$RINGSIDE_BROWSER_ONLY"
+if [ "$#" -gt 0 ] && [ "${#BROWSER_FILES[@]}" = 0 ]; then
+  log "vitest filters given: browser tests skipped (RINGSIDE_BROWSER_ONLY=file.ts runs some)"
+  exit 0
+fi
 log "browser tests"
 BROWSER_OK=0
-node --import tsx tests/helpers/browser-runner.ts "$T/browser.json" || BROWSER_OK=1
+node --import tsx tests/helpers/browser-runner.ts "$T/browser.json" "${BROWSER_FILES[@]}" || BROWSER_OK=1
 if [ -s "$T/browser.json" ]; then
   read -r p f < <(count_json "$T/browser.json")
   PASSED=$((PASSED + p)); FAILED=$((FAILED + f))
