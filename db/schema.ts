@@ -44,6 +44,13 @@ export const users = pgTable(
     displayName: text("display_name").notNull(),
     passwordHash: text("password_hash").notNull(),
     siteRole: siteRole("site_role").notNull().default("member"),
+    /// When the owner of the address confirmed it through the mailed link; null until then.
+    /// The default marks accounts that existed before verification (and accounts made by
+    /// administrators' scripts) as confirmed; sign-up sets null explicitly.
+    emailVerifiedAt: timestamp("email_verified_at", { withTimezone: true }).defaultNow(),
+    /// Carried in every sign-in token and compared on each request; signing out increments
+    /// it, so every token issued before stops working at once.
+    sessionVersion: integer("session_version").notNull().default(0),
     createdAt: createdAt(),
   },
   (t) => [
@@ -215,6 +222,21 @@ export const auditLog = pgTable(
 
 /// One row per sign-in attempt; the rate limiter counts recent failures per account and
 /// per client address here, so every web server shares the same counts.
+/// A pending confirmation of a new account's e-mail address: the SHA-256 of the mailed
+/// token (the token itself is never stored), valid until `expiresAt`.
+export const emailVerifications = pgTable(
+  "email_verifications",
+  {
+    tokenHash: text("token_hash").primaryKey(),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [index("email_verifications_user_idx").on(t.userId)],
+);
+
 export const signInAttempts = pgTable(
   "sign_in_attempts",
   {

@@ -5,7 +5,7 @@ import { auditLog } from "@/db/schema";
 
 export type Executor = Database | Parameters<Parameters<Database["transaction"]>[0]>[0];
 
-export type AuditEvent = "signup" | "signin_success" | "signin_failure" | "signin_rate_limited";
+export type AuditEvent = "signup" | "signup_address_taken" | "signin_success" | "signin_failure" | "signin_rate_limited" | "signout";
 
 export async function recordAudit(
   exec: Executor,

@@ -8,17 +8,20 @@ import { forbidden, unauthorized } from "@/lib/http/errors";
 import { authOptions } from "./options";
 import type { CurrentUser } from "./types";
 
-/// The signed-in user, or null. Reads the user row on every call, so a deleted account or a
-/// changed site role takes effect at once rather than when the JWT expires.
+/// The signed-in user, or null. Reads the user row on every call, so a deleted account, a
+/// changed site role or a sign-out elsewhere (the token's session version is no longer the
+/// user's) takes effect at once rather than when the JWT expires.
 export async function currentUser(): Promise<CurrentUser | null> {
   const session = await getServerSession(authOptions);
   const id = session?.user?.id;
   if (!id) return null;
   const [row] = await db()
-    .select({ id: users.id, email: users.email, displayName: users.displayName, siteRole: users.siteRole })
+    .select({ id: users.id, email: users.email, displayName: users.displayName, siteRole: users.siteRole, sv: users.sessionVersion })
     .from(users)
     .where(eq(users.id, id));
-  return row ?? null;
+  if (!row || row.sv !== (session.user.sv ?? 0)) return null;
+  const { sv: _version, ...user } = row;
+  return user;
 }
 
 export async function requireUser(): Promise<CurrentUser> {

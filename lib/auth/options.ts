@@ -1,7 +1,7 @@
 /// next-auth configuration: Credentials provider, JWT sessions, our own pages.
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
-import { eq } from "drizzle-orm";
+import { and, eq, sql } from "drizzle-orm";
 import { db } from "@/db/client";
 import { users } from "@/db/schema";
 import { clientAddress } from "@/lib/http/client-address";
@@ -18,10 +18,11 @@ export const authOptions: NextAuthOptions = {
     CredentialsProvider({
       name: "Email and password",
       credentials: { email: { label: "Email", type: "email" }, password: { label: "Password", type: "password" } },
-      // The rate limit is checked before this runs (app/api/auth/[...nextauth]/route.ts).
+      // The rate limit and the shape of the body are checked before this runs
+      // (app/api/auth/[...nextauth]/route.ts).
       async authorize(credentials, req) {
-        const email = normalizeEmail(credentials?.email ?? "");
-        const password = credentials?.password ?? "";
+        const email = normalizeEmail(typeof credentials?.email === "string" ? credentials.email : "");
+        const password = typeof credentials?.password === "string" ? credentials.password : "";
         const address = clientAddress(req.headers ?? {});
         const [user] = email ? await db().select().from(users).where(eq(users.email, email)) : [];
         const ok = await verifyPassword(password, user?.passwordHash ?? (await decoyHash()));
@@ -35,14 +36,42 @@ export const authOptions: NextAuthOptions = {
           details: succeeded ? {} : { reason: user ? "wrong_password" : "unknown_account" },
         });
         if (!succeeded) return null;
-        return { id: user.id, email: user.email, name: user.displayName };
+        return { id: user.id, email: user.email, name: user.displayName, sessionVersion: user.sessionVersion };
       },
     }),
   ],
   callbacks: {
+    jwt({ token, user }) {
+      // At sign-in, remember which session version the token belongs to.
+      if (user && "sessionVersion" in user) token.sv = (user as { sessionVersion: number }).sessionVersion;
+      return token;
+    },
     session({ session, token }) {
-      if (token.sub) session.user = { ...session.user, id: token.sub };
+      if (token.sub) session.user = { ...session.user, id: token.sub, sv: typeof token.sv === "number" ? token.sv : 0 };
       return session;
+    },
+    // Only destinations on this site, compared as parsed URLs (a string prefix check lets
+    // "/\t/evil.example" through, which a browser reads as //evil.example).
+    redirect({ url, baseUrl }) {
+      try {
+        const target = new URL(url, baseUrl);
+        return target.origin === new URL(baseUrl).origin ? target.toString() : baseUrl;
+      } catch {
+        return baseUrl;
+      }
+    },
+  },
+  events: {
+    /// Signing out revokes every token issued to the user so far, not just this cookie:
+    /// a copied token stops working too (lib/auth/current-user.ts compares the version).
+    async signOut({ token }) {
+      if (!token?.sub) return;
+      const sv = typeof token.sv === "number" ? token.sv : 0;
+      await db()
+        .update(users)
+        .set({ sessionVersion: sql`${users.sessionVersion} + 1` })
+        .where(and(eq(users.id, token.sub), eq(users.sessionVersion, sv)));
+      await recordAudit(db(), { event: "signout", userId: token.sub });
     },
   },
 };

@@ -1,12 +1,17 @@
-/// Account creation: validation, one transaction for the user row and its audit entry.
+/// Account creation: validation, one transaction for the user row, its audit entry and its
+/// e-mail verification token. The answer never says whether the address already had an
+/// account: both cases answer alike, and the mailbox owner learns which case it was.
+import { eq } from "drizzle-orm";
 import { z } from "zod";
 import { db } from "@/db/client";
 import { users } from "@/db/schema";
 import { HttpError } from "@/lib/http/errors";
+import { sendMail } from "@/lib/mail/send";
 import { recordAudit } from "./audit";
+import { issueVerificationToken, verificationLink } from "./email-verification";
+import { HashQueueFull } from "./hash-slots";
 import { normalizeEmail } from "./options";
 import { hashPassword, passwordProblem, PASSWORD_RULE } from "./password";
-import type { CurrentUser } from "./types";
 
 export const signUpBody = z.object({
   email: z.string().transform(normalizeEmail).pipe(z.email({ message: "not a valid e-mail address" }).max(254)),
@@ -16,19 +21,70 @@ export const signUpBody = z.object({
 
 export type SignUpInput = z.infer<typeof signUpBody>;
 
-/// Throws HttpError 400 (weak password, with the rule) or 409 (e-mail taken).
-export async function createAccount(input: SignUpInput, address: string): Promise<CurrentUser> {
-  const problem = passwordProblem(input.password);
+/// What every sign-up with a valid body and an acceptable password answers.
+export const SIGN_UP_ACCEPTED = "Check your mailbox: we sent a link that confirms this address.";
+
+/// Throws HttpError 400 (weak password, with the rule) or 503 (too many password checks at
+/// once). Creates the account and mails the confirmation link, or, when the address is
+/// taken, mails its owner a notice instead; the caller cannot tell the two apart.
+export async function signUp(input: SignUpInput, address: string, base: string): Promise<void> {
+  const problem = passwordProblem(input.password, [input.email, input.name]);
   if (problem) throw new HttpError(400, "weak_password", `${problem} ${PASSWORD_RULE}`);
-  const passwordHash = await hashPassword(input.password);
-  return db().transaction(async (tx) => {
+  let passwordHash: string;
+  try {
+    // Hashed in both cases, so the answer takes as long whether or not the address is taken.
+    passwordHash = await hashPassword(input.password);
+  } catch (error) {
+    if (error instanceof HashQueueFull) throw new HttpError(503, "busy", error.message, undefined, { "Retry-After": "5" });
+    throw error;
+  }
+  const created = await db().transaction(async (tx) => {
     const [user] = await tx
       .insert(users)
-      .values({ email: input.email, displayName: input.name, passwordHash })
+      .values({ email: input.email, displayName: input.name, passwordHash, emailVerifiedAt: null })
       .onConflictDoNothing({ target: users.email })
-      .returning({ id: users.id, email: users.email, displayName: users.displayName, siteRole: users.siteRole });
-    if (!user) throw new HttpError(409, "email_taken", "An account with this e-mail address already exists.");
+      .returning({ id: users.id, email: users.email, displayName: users.displayName });
+    if (!user) {
+      await recordAudit(tx, { event: "signup_address_taken", email: input.email, address });
+      return null;
+    }
     await recordAudit(tx, { event: "signup", userId: user.id, email: user.email, address });
-    return user;
+    return { user, token: await issueVerificationToken(tx, user.id) };
   });
+  const mail = created
+    ? welcomeMail(input.email, input.name, verificationLink(base, created.token))
+    : takenMail(input.email, base);
+  // The answer is the same whether or not the mail goes out; the log says when it did not.
+  await sendMail(mail).catch((error: Error) => console.error(`[ringside] sign-up mail failed: ${error.message}`));
+}
+
+function welcomeMail(to: string, name: string, link: string) {
+  return {
+    to,
+    subject: "Welcome to Ringside",
+    text:
+      `Hello ${name},\n\n` +
+      "your Ringside account is ready. Sign in with this e-mail address and the password you chose.\n\n" +
+      `Before teams can invite you or colleagues can share with you, confirm that this address is yours:\n${link}\n\n` +
+      "The link works for 48 hours. If you did not create this account, ignore this message.\n\n" +
+      "Ringside\n",
+  };
+}
+
+function takenMail(to: string, base: string) {
+  return {
+    to,
+    subject: "Someone tried to create a Ringside account with your address",
+    text:
+      "Hello,\n\n" +
+      "someone tried to create a Ringside account with this e-mail address, which already has one; nothing was changed.\n" +
+      `If it was you, sign in at ${base}/sign-in instead.\n\n` +
+      "Ringside\n",
+  };
+}
+
+/// Looks up whether an address belongs to a confirmed account (for sharing by e-mail).
+export async function confirmedAccountId(email: string): Promise<string | null> {
+  const [row] = await db().select({ id: users.id, verified: users.emailVerifiedAt }).from(users).where(eq(users.email, normalizeEmail(email)));
+  return row && row.verified ? row.id : null;
 }

@@ -40,6 +40,11 @@ export async function readJson<S extends z.ZodType>(
 /// connection is closed early: a client sending megabytes to a JSON route gets no courtesy.
 const DRAIN_LIMIT = 1024 * 1024;
 
+/// The body as text, at most `maxBytes` bytes (413 beyond, as readJson).
+export function readText(req: Request, maxBytes: number): Promise<string> {
+  return readLimited(req, maxBytes);
+}
+
 async function readLimited(req: Request, maxBytes: number): Promise<string> {
   // The connection is closed after a 413 either way: `Connection: close` keeps keep-alive
   // clients from reusing it.

@@ -12,14 +12,3 @@ function transport() {
 export async function sendMail(message: { to: string; subject: string; text: string }): Promise<void> {
   await transport().sendMail({ from: FROM, ...message });
 }
-
-export function sendWelcome(to: string, name: string): Promise<void> {
-  return sendMail({
-    to,
-    subject: "Welcome to Ringside",
-    text:
-      `Hello ${name},\n\n` +
-      "your Ringside account is ready. Sign in with this e-mail address and the password you chose.\n\n" +
-      "Ringside\n",
-  });
-}

@@ -1,7 +1,7 @@
 /// The development SMTP sink: accepts every message on 127.0.0.1 and stores it as a JSON
 /// file in the mail folder, where the admin mailbox page (app/mailbox) reads it.
 import { randomUUID } from "node:crypto";
-import { mkdir, rename, writeFile } from "node:fs/promises";
+import { chmod, mkdir, rename, writeFile } from "node:fs/promises";
 import path from "node:path";
 import { SMTPServer } from "smtp-server";
 import { parseRawMessage, type StoredMessage } from "./message";
@@ -47,10 +47,14 @@ export function startMailSink(opts: { port: number; dir: string }): Promise<SMTP
   });
 }
 
+/// Messages hold sign-up and invitation links, which are as good as passwords: the folder
+/// is readable by its owner only (700) and so is every message (600), whatever the umask.
 async function storeMessage(dir: string, message: StoredMessage): Promise<void> {
-  await mkdir(dir, { recursive: true });
+  await mkdir(dir, { recursive: true, mode: 0o700 });
+  await chmod(dir, 0o700);
   const file = path.join(dir, `${message.id}.json`);
   // Written beside, then renamed, so a reader never sees half a message.
-  await writeFile(`${file}.tmp`, JSON.stringify(message, null, 2));
+  await writeFile(`${file}.tmp`, JSON.stringify(message, null, 2), { mode: 0o600 });
+  await chmod(`${file}.tmp`, 0o600);
   await rename(`${file}.tmp`, file);
 }

@@ -105,6 +105,10 @@ database_url() {
   printf 'postgres://postgres:%s@127.0.0.1:%s/%s' "$(cat "$pwfile")" "$port" "$name"
 }
 
+# serve_web PORT: the production server on 127.0.0.1:PORT (lib/ops/web-server.ts: Next's
+# handler behind node:http, so the client address comes from the socket).
+serve_web() { (cd "$ROOT" && exec node --import tsx lib/ops/web-server.ts --host 127.0.0.1 --port "$1"); }
+
 node_ts() { (cd "$ROOT" && node --import tsx "$@"); }
 
 # build_if_stale: `next build` unless .next holds a build of exactly the current sources

@@ -57,7 +57,7 @@ wait_port "$SMTP_PORT" 30 "$SINK_PID"
 
 build_if_stale || die "cannot serve without a production build"
 
-node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$WEB_PORT" &
+serve_web "$WEB_PORT" &
 WEB_PID=$!
 wait_http "http://127.0.0.1:$WEB_PORT/sign-in" 60 "$WEB_PID"
 log "Ringside is serving on http://127.0.0.1:$WEB_PORT (mailbox: /mailbox, Ctrl-C stops)"

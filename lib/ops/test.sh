@@ -66,6 +66,11 @@ export RINGSIDE_BCRYPT_COST=4
 # A short cell time limit so the API test of the limit finishes quickly.
 export RINGSIDE_CELL_TIME_LIMIT_MS=8000
 export NEXT_TELEMETRY_DISABLED=1
+# The suites connect from 127.0.0.1 and act as a proxy for invented client addresses
+# (X-Forwarded-For: testAddress(n)), so each file has its own rate-limit bucket; a client
+# connecting from any other loopback address (127.0.0.2 …) is untrusted, which is how
+# tests/integration/sign-in-protection.test.ts shows that a spoofed header changes nothing.
+export RINGSIDE_TRUSTED_PROXIES=127.0.0.1
 export NEXTAUTH_SECRET
 NEXTAUTH_SECRET="$(secret_file "$T/nextauth-secret")"
 
@@ -87,7 +92,7 @@ export RINGSIDE_TEST_BASE_URL="$NEXTAUTH_URL"
 export RINGSIDE_TEST_SERVER_LOG="$T/web.log"
 : >"$T/web.log"
 if [ "$BUILD_OK" = 1 ]; then
-  node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$WEB_PORT" >"$T/web.log" 2>&1 &
+  serve_web "$WEB_PORT" >"$T/web.log" 2>&1 &
   WEB_PID=$!
   wait_http "$NEXTAUTH_URL/sign-in" 60 "$WEB_PID"
 else

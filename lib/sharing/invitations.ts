@@ -155,9 +155,18 @@ export async function inspectInvitation(token: string) {
 }
 
 /// Makes the signed-in invitee a member (or guest) of the team. Refuses with 404 (unknown
-/// token), 410 (used, revoked, expired) or 403 (signed in with another address).
+/// token), 410 (used, revoked, expired) or 403 (signed in with another address, or an
+/// address not yet confirmed through the mailed link).
 export async function acceptInvitation(user: CurrentUser, token: string, address: string) {
   if (!TOKEN_SHAPE.test(token)) throw notFound("The invitation");
+  const [me] = await db().select({ verified: users.emailVerifiedAt }).from(users).where(eq(users.id, user.id));
+  if (!me?.verified) {
+    throw new HttpError(
+      403,
+      "email_unverified",
+      `Confirm that ${user.email} is yours first: open the link in the welcome mail, then accept the invitation again.`,
+    );
+  }
   const hash = tokenHash(token);
   const outcome = await db().transaction(async (tx) => {
     const [row] = await tx.select().from(invitations).where(eq(invitations.tokenHash, hash)).for("update");

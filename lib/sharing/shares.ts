@@ -36,8 +36,15 @@ async function resolveGrantee(user: CurrentUser, grantee: Grantee, ownerId: stri
   const database = db();
   if ("email" in grantee) {
     const email = grantee.email.toLowerCase();
-    const [target] = await database.select({ id: users.id, name: users.displayName }).from(users).where(eq(users.email, email));
-    if (!target) throw new HttpError(404, "no_account", `No Ringside account uses ${email}; invite them to a team first.`);
+    const [target] = await database
+      .select({ id: users.id, name: users.displayName, verified: users.emailVerifiedAt })
+      .from(users)
+      .where(eq(users.email, email));
+    // An account whose address is not confirmed yet is treated as no account: whoever
+    // signed up with someone else's address must not receive what is shared with them.
+    if (!target || !target.verified) {
+      throw new HttpError(404, "no_account", `No Ringside account uses ${email}; invite them to a team first.`);
+    }
     if (target.id === ownerId) throw new HttpError(409, "is_owner", "That is the owner, who has every right already.");
     return { userId: target.id, teamId: null, label: email };
   }

@@ -14,6 +14,9 @@ export class TestClient {
   async request(path: string, init: RequestInit = {}): Promise<Response> {
     const headers = new Headers(init.headers);
     headers.set("X-Forwarded-For", this.address);
+    // As a browser does on every fetch that changes something: the server refuses
+    // state-changing requests without a same-origin Origin (lib/http/same-origin.ts).
+    if (!headers.has("Origin")) headers.set("Origin", new URL(this.base).origin);
     if (this.cookies.size > 0) headers.set("Cookie", [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; "));
     const response = await fetch(new URL(path, this.base), { ...init, headers, redirect: "manual" });
     for (const line of response.headers.getSetCookie()) {

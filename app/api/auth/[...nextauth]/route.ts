@@ -1,9 +1,13 @@
 import NextAuth from "next-auth";
+import { NextRequest } from "next/server";
 import { recordAudit } from "@/lib/auth/audit";
+import { hashQueueFull } from "@/lib/auth/hash-slots";
 import { authOptions, normalizeEmail } from "@/lib/auth/options";
 import { checkSignInRate } from "@/lib/auth/rate-limit";
 import { db } from "@/db/client";
+import { readText } from "@/lib/http/body";
 import { clientAddress } from "@/lib/http/client-address";
+import { errorResponse, jsonError } from "@/lib/http/errors";
 
 type Context = { params: Promise<{ nextauth: string[] }> };
 
@@ -11,13 +15,44 @@ const handler = NextAuth(authOptions) as (req: Request, context: Context) => Pro
 
 export const GET = handler;
 
-/// Sign-in attempts pass the rate limiter first, so a blocked account or address gets a
-/// clear 429 before any password is checked.
+const MAX_CREDENTIALS_BYTES = 8 * 1024;
+
+/// The fields of a credentials body, read exactly as next-auth reads them
+/// (next-auth/next/utils getBody: JSON when the type mentions application/json, else
+/// URL-encoded form), so the rate limit sees the same address next-auth will check.
+/// null when next-auth would find no credentials in it at all.
+function credentialFields(contentType: string, text: string): Record<string, unknown> | null {
+  if (contentType.includes("application/json")) {
+    try {
+      const value: unknown = JSON.parse(text);
+      return value !== null && typeof value === "object" && !Array.isArray(value) ? (value as Record<string, unknown>) : null;
+    } catch {
+      return null;
+    }
+  }
+  if (contentType.includes("application/x-www-form-urlencoded")) return Object.fromEntries(new URLSearchParams(text));
+  return null;
+}
+
+/// Every sign-in attempt, whatever its encoding, passes the rate limiter first, so a
+/// blocked account or address gets a clear 429 before any password is checked; a body
+/// next-auth could not read is refused here with 400/415 rather than reaching it.
 export async function POST(req: Request, context: Context): Promise<Response> {
   const { nextauth } = await context.params;
-  if (nextauth[0] === "callback" && nextauth[1] === "credentials") {
-    const form = await req.clone().formData().catch(() => null);
-    const email = normalizeEmail(String(form?.get("email") ?? ""));
+  if (nextauth[0] !== "callback" || nextauth[1] !== "credentials") return handler(req, context);
+  try {
+    const contentType = req.headers.get("content-type") ?? "";
+    const text = await readText(req, MAX_CREDENTIALS_BYTES);
+    const fields = credentialFields(contentType, text);
+    if (fields === null) {
+      return contentType.includes("json") || contentType.includes("form-urlencoded")
+        ? jsonError(400, "invalid_body", "Send the credentials as a JSON object or a URL-encoded form.")
+        : jsonError(415, "unsupported_media_type", "Send the credentials as JSON or as a URL-encoded form.");
+    }
+    if (typeof fields.email !== "string" || typeof fields.password !== "string") {
+      return jsonError(400, "invalid_body", "The fields email and password must be strings.");
+    }
+    const email = normalizeEmail(fields.email);
     const address = clientAddress(req.headers);
     const decision = await checkSignInRate(email, address);
     if (decision.limited) {
@@ -32,6 +67,15 @@ export async function POST(req: Request, context: Context): Promise<Response> {
         { status: 429, headers: { "Retry-After": String(decision.retryAfterSeconds) } },
       );
     }
+    if (hashQueueFull()) {
+      return jsonError(503, "busy", "Too many sign-ins are being checked right now; try again in a few seconds.", undefined, {
+        "Retry-After": "5",
+      });
+    }
+    // The body has been read: hand next-auth an identical request with the same bytes.
+    const replay = new NextRequest(req.url, { method: "POST", headers: req.headers, body: text });
+    return handler(replay, context);
+  } catch (error) {
+    return errorResponse(error);
   }
-  return handler(req, context);
 }

@@ -1,17 +1,15 @@
-import { createAccount, signUpBody } from "@/lib/auth/signup";
+import { SIGN_UP_ACCEPTED, signUp, signUpBody } from "@/lib/auth/signup";
 import { readJson } from "@/lib/http/body";
 import { clientAddress } from "@/lib/http/client-address";
 import { route } from "@/lib/http/errors";
-import { sendWelcome } from "@/lib/mail/send";
+import { publicBase } from "@/lib/sharing/common";
 
 const MAX_BODY_BYTES = 8 * 1024;
 
+/// 201 with the same body whether the address was free or already had an account (the
+/// mailbox's owner is told which): the answer reveals no accounts.
 export const POST = route(async (req) => {
   const input = await readJson(req, signUpBody, { maxBytes: MAX_BODY_BYTES });
-  const user = await createAccount(input, clientAddress(req.headers));
-  // The account exists whether or not the welcome mail goes out.
-  await sendWelcome(user.email, user.displayName).catch((error: Error) =>
-    console.error(`[ringside] welcome mail to a new account failed: ${error.message}`),
-  );
-  return Response.json({ user: { id: user.id, email: user.email, name: user.displayName, siteRole: user.siteRole } }, { status: 201 });
+  await signUp(input, clientAddress(req.headers), publicBase(req));
+  return Response.json({ user: { email: input.email, name: input.name }, message: SIGN_UP_ACCEPTED }, { status: 201 });
 });
