@@ -46,6 +46,13 @@ export class TestClient {
     });
   }
 
+  /// Another client holding the same cookies, as someone who copied the session cookie would.
+  copy(address = this.address): TestClient {
+    const other = new TestClient(address, this.base);
+    for (const [k, v] of this.cookies) other.cookies.set(k, v);
+    return other;
+  }
+
   hasSession(): boolean {
     return [...this.cookies.keys()].some((k) => k.endsWith("next-auth.session-token"));
   }

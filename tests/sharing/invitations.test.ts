@@ -11,15 +11,19 @@ import { tokenHash } from "@/lib/sharing/common";
 import { TEST_ACCOUNTS, ensureTestGroup, uniqueEmail } from "../helpers/fixtures";
 import { testEnv } from "../helpers/env";
 import { TestClient, testAddress } from "../helpers/http";
+import { confirmAddress } from "../helpers/mail";
 
 const lead = new TestClient(testAddress(180));
 const wrong = new TestClient(testAddress(181));
 let teamId = "";
 
-async function signUp(client: TestClient, email: string, password = "invitee-pass-4412") {
+/// A new account whose address is confirmed through the mailed link (only confirmed
+/// accounts may accept invitations; "waits for its confirmation" below checks that).
+async function signUp(client: TestClient, email: string, password = "invitee-pass-4412", confirm = true) {
   const r = await client.json("/api/auth/signup", { email, password, name: "Ines Invitee" });
   expect(r.status).toBe(201);
   expect((await client.signIn(email, password)).status).toBe(200);
+  if (confirm) await confirmAddress(client, email);
 }
 
 /// Waits (bounded) for the sink to have stored a message to `to`, newest first.
@@ -100,6 +104,20 @@ describe("invitations", () => {
     // no audit entry holds the token
     const all = await db().select({ details: auditLog.details }).from(auditLog);
     expect(JSON.stringify(all)).not.toContain(token);
+  });
+
+  it("waits for its confirmation: an account whose address is unconfirmed cannot accept", async () => {
+    const email = uniqueEmail("unconfirmed");
+    await invite(email);
+    const token = tokenFrom((await mailTo(email)).text);
+    const invitee = new TestClient(testAddress(186));
+    await signUp(invitee, email, "invitee-pass-4412", false);
+    const early = await invitee.request(`/api/invitations/${token}/accept`, { method: "POST" });
+    expect(early.status).toBe(403);
+    expect(((await early.json()) as { error: { code: string; message: string } }).error).toMatchObject({ code: "email_unverified" });
+    await confirmAddress(invitee, email);
+    const accepted = await invitee.request(`/api/invitations/${token}/accept`, { method: "POST" });
+    expect(accepted.status).toBe(200);
   });
 
   it("refuses an expired invitation", async () => {
