@@ -17,6 +17,7 @@ import { applyCellEvent, startedCell, type RunningCell } from "./state/running-c
 import { useTheme } from "./theme";
 import { useSessionData } from "./use-session-data";
 import { CellView, RunningCellView } from "./views/cell-view";
+import { CellErrorBoundary } from "./views/cell-error-boundary";
 import { CommandPalette, type PaletteCommand } from "./views/command-palette";
 import { HistorySearch } from "./views/history-search";
 import { KeyboardHelp } from "./views/keyboard-help";
@@ -421,7 +422,9 @@ export function Console({ initialSessionId, linkToken, signedIn }: ConsoleProps)
             <EmptySessionWelcome onInsert={insertExample} onOpenTour={() => setDialog("tour")} canRun />
           )}
           {shownCells.map((c) => (
-            <CellView key={c.id} cell={c} />
+            <CellErrorBoundary key={c.id} position={c.position} source={c.source}>
+              <CellView cell={c} />
+            </CellErrorBoundary>
           ))}
           {running && <RunningCellView cell={running} onCancel={() => void cancelRunning()} />}
           <div ref={transcriptEnd} />

@@ -1,6 +1,7 @@
 /// Ringside's own JSON export of a session ("ringside.session", version 1; README.md in
 /// this folder documents it) and its zod schema, used by POST /api/sessions/import.
 import { z } from "zod";
+import { INT4_MAX } from "@/lib/http/json-guard";
 
 export const EXPORT_FORMAT = "ringside.session";
 export const EXPORT_VERSION = 1;
@@ -8,7 +9,9 @@ export const EXPORT_VERSION = 1;
 /// Limits an import enforces besides the request size limit.
 export const IMPORT_LIMITS = { cells: 2000, objects: 2000, sourceChars: 100_000 } as const;
 
-const point = z.object({ line: z.number().int().positive(), col: z.number().int().positive() });
+// Integers stored in PostgreSQL `integer` columns or compared with them stay within int4.
+const int4 = () => z.number().int().nonnegative().max(INT4_MAX, { message: `is larger than ${INT4_MAX}` });
+const point = z.object({ line: int4().positive(), col: int4().positive() });
 const span = z.object({ from: point, to: point });
 
 /// A §9 value: checked for its outer shape here ("type" and "text"); the evaluator decodes
@@ -19,16 +22,16 @@ export const ExportedValue = z
 
 export const ExportedCell = z
   .object({
-    position: z.number().int().nonnegative(),
+    position: int4(),
     source: z.string().max(IMPORT_LIMITS.sourceChars),
     status: z.enum(["done", "error", "cancelled"]),
-    results: z.array(z.object({ statement: z.number().int().nonnegative(), span: span.nullable(), value: ExportedValue }).strict()),
+    results: z.array(z.object({ statement: int4(), span: span.nullable(), value: ExportedValue }).strict()),
     error: z
       .object({ type: z.literal("Error"), kind: z.string(), message: z.string(), span: span.optional() })
       .passthrough()
       .nullable(),
     currentRing: z.string().nullable(),
-    durationMs: z.number().int().nonnegative().nullable(),
+    durationMs: int4().nullable(),
     engineVersion: z.string().nullable(),
   })
   .strict();
@@ -42,7 +45,7 @@ export const ExportedObject = z
     value: ExportedValue,
     source: z.string().max(IMPORT_LIMITS.sourceChars),
     /// position of the cell that bound it, or null
-    cell: z.number().int().nonnegative().nullable(),
+    cell: int4().nullable(),
     origin: z.record(z.string(), z.unknown()).nullable(),
   })
   .strict();

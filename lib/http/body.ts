@@ -1,11 +1,14 @@
 /// Reads a JSON request body with a size limit and validates it with a zod schema.
 import type { z } from "zod";
 import { HttpError } from "./errors";
+import { nestingProblem, valueProblem } from "./json-guard";
 
 export const DEFAULT_BODY_LIMIT = 64 * 1024;
 
-/// Throws HttpError 413 (body too large), 415 (not JSON), 400 (malformed JSON or a body
-/// that fails the schema; `details` lists each failing field path and why).
+/// Throws HttpError 413 (body too large), 415 (not JSON), 400 (malformed JSON, nesting
+/// deeper than MAX_JSON_DEPTH, a NUL or lone surrogate in any string, a number JSON cannot
+/// carry exactly — lib/http/json-guard.ts — or a body that fails the schema; `details`
+/// lists each failing field path and why).
 export async function readJson<S extends z.ZodType>(
   req: Request,
   schema: S,
@@ -17,6 +20,8 @@ export async function readJson<S extends z.ZodType>(
     throw new HttpError(415, "unsupported_media_type", "Send the body as JSON (Content-Type: application/json).");
   }
   const text = await readLimited(req, maxBytes);
+  const deep = nestingProblem(text);
+  if (deep) throw new HttpError(400, "too_deep", deep);
   let value: unknown;
   try {
     value = JSON.parse(text);
@@ -24,6 +29,8 @@ export async function readJson<S extends z.ZodType>(
     const where = error instanceof SyntaxError ? error.message : "unknown position";
     throw new HttpError(400, "malformed_json", `The body is not valid JSON: ${where}.`);
   }
+  const bad = valueProblem(value);
+  if (bad) throw new HttpError(400, "invalid_body", `Invalid field ${bad.path}: ${bad.message}.`, [bad]);
   const parsed = schema.safeParse(value);
   if (!parsed.success) {
     const details = parsed.error.issues.map((i) => ({ path: i.path.join(".") || "(body)", message: i.message }));

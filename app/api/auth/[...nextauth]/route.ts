@@ -8,6 +8,7 @@ import { db } from "@/db/client";
 import { readText } from "@/lib/http/body";
 import { clientAddress } from "@/lib/http/client-address";
 import { errorResponse, jsonError } from "@/lib/http/errors";
+import { textProblem } from "@/lib/http/json-guard";
 
 type Context = { params: Promise<{ nextauth: string[] }> };
 
@@ -51,6 +52,10 @@ export async function POST(req: Request, context: Context): Promise<Response> {
     }
     if (typeof fields.email !== "string" || typeof fields.password !== "string") {
       return jsonError(400, "invalid_body", "The fields email and password must be strings.");
+    }
+    for (const field of ["email", "password"] as const) {
+      const why = textProblem(fields[field] as string);
+      if (why) return jsonError(400, "invalid_body", `Invalid field ${field}: ${why}.`);
     }
     const email = normalizeEmail(fields.email);
     const address = clientAddress(req.headers);
