@@ -13,7 +13,10 @@ const client = new TestClient(testAddress(130));
 let sessionId = "";
 let objectId = "";
 
+/// 100 000 levels: 200 kB, so routes with a smaller body limit answer 413 before reading it;
+/// 20 000 levels (40 kB) fits under every limit and must be refused for its depth.
 const DEEP = `${"[".repeat(100_000)}${"]".repeat(100_000)}`;
+const DEEP_SMALL = `${"[".repeat(20_000)}${"]".repeat(20_000)}`;
 
 /// A body with `text` spliced in raw where the placeholder "@" stands, so numbers such as
 /// 1e400 reach the server as written (JSON.stringify would have turned them into null).
@@ -84,11 +87,11 @@ describe("each boundary answers 400 with the place and the reason", () => {
   const cases: [string, () => [string, string, string?], RegExp][] = [
     ["a title with NUL", () => ["/api/sessions", raw({ title: "@" }, NUL)], /title.*NUL/],
     ["a title with a lone surrogate", () => ["/api/sessions", raw({ title: "@" }, LONE)], /title.*surrogate/],
-    ["a title nested 100 000 deep", () => ["/api/sessions", raw({ title: "@" }, DEEP)], /more than 64 levels/],
+    ["a title nested 20 000 deep", () => ["/api/sessions", raw({ title: "@" }, DEEP_SMALL)], /more than 64 levels/],
     ["a title that is 1e400", () => ["/api/sessions", raw({ title: "@" }, "1e400")], /title.*too large/],
     ["a cell source with NUL", () => [`/api/sessions/${sessionId}/cells`, raw({ source: "@" }, JSON.stringify("1 +\u0000 1"))], /source.*NUL/],
     ["a cell source with a lone low surrogate", () => [`/api/sessions/${sessionId}/cells`, raw({ source: "@" }, LONE_LOW)], /source.*surrogate/],
-    ["a cell source nested 100 000 deep", () => [`/api/sessions/${sessionId}/cells`, raw({ source: "@" }, DEEP)], /levels deep/],
+    ["a cell source nested 20 000 deep", () => [`/api/sessions/${sessionId}/cells`, raw({ source: "@" }, DEEP_SMALL)], /levels deep/],
     ["an object name with NUL", () => [`/api/sessions/${objectId}`, raw({ name: "@" }, JSON.stringify("K\u0000")), "PATCH"], /name.*NUL/],
     ["a team name with a lone surrogate", () => ["/api/teams", raw({ name: "@" }, LONE)], /name.*surrogate/],
     ["a sign-up name with NUL", () => ["/api/auth/signup", raw({ email: uniqueEmail("nul"), password: "boundary-check-4471", name: "@" }, NUL)], /name.*NUL/],
@@ -107,6 +110,14 @@ describe("each boundary answers 400 with the place and the reason", () => {
     const r = await send(path, body, method);
     expect(r.status).toBe(400);
     expect(r.error.message).toMatch(message);
+  });
+
+  it("answers 413 for 100 000 levels where the body limit is smaller than the body", async () => {
+    for (const path of ["/api/sessions", `/api/sessions/${sessionId}/cells`]) {
+      const r = await send(path, raw({ title: "@" }, DEEP));
+      expect(r.status).toBe(413);
+      expect(r.error.code).toBe("body_too_large");
+    }
   });
 
   it("refuses credentials with NUL (form) or a lone surrogate (JSON) with 400", async () => {
