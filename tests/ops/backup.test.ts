@@ -5,7 +5,7 @@
 /// holds exactly the same rows afterwards. The source is a database of its own, so suites
 /// running at the same time cannot change it between the dump and the comparison.
 import { execFile } from "node:child_process";
-import { mkdtemp, rm, stat } from "node:fs/promises";
+import { chmod, mkdtemp, rm, stat } from "node:fs/promises";
 import net from "node:net";
 import path from "node:path";
 import { promisify } from "node:util";
@@ -63,6 +63,9 @@ async function fingerprint(url: string): Promise<Record<string, { rows: number; 
 
 beforeAll(async () => {
   work = await mkdtemp(path.join(ROOT, ".data", "backup-test-"));
+  // The postgres user must traverse it to reach the fresh cluster; what is secret inside
+  // (the archive's folder, the password file) has modes of its own.
+  await chmod(work, 0o755);
   restoreDir = path.join(work, "pg");
   const admin = postgres(testEnv("DATABASE_URL"), { max: 1, onnotice: () => {} });
   await admin.unsafe(`CREATE DATABASE ${SOURCE_DB}`);
