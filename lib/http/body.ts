@@ -69,7 +69,14 @@ async function readLimited(req: Request, maxBytes: number): Promise<string> {
   const chunks: Uint8Array[] = [];
   let total = 0;
   for (;;) {
-    const { done, value } = await reader.read();
+    let chunk: ReadableStreamReadResult<Uint8Array>;
+    try {
+      chunk = await reader.read();
+    } catch {
+      // The client hung up mid-body: nobody reads the answer, but it is not a server fault.
+      throw new HttpError(400, "aborted", "The connection closed before the body was complete.");
+    }
+    const { done, value } = chunk;
     if (done) break;
     total += value.byteLength;
     if (total > maxBytes) {
