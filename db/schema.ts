@@ -169,14 +169,20 @@ export const shares = pgTable(
     objectId: uuid("object_id").references(() => namedObjects.id, { onDelete: "cascade" }),
     userId: uuid("user_id").references(() => users.id, { onDelete: "cascade" }),
     teamId: uuid("team_id").references(() => teams.id, { onDelete: "cascade" }),
+    /// A share to an address with no confirmed account yet: it grants nothing until an
+    /// account confirms this address, when it becomes a share to that user. Kept so that
+    /// sharing answers alike whether or not the address has an account.
+    email: text("email"),
     role: shareRole("role").notNull(),
     createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
     createdAt: createdAt(),
   },
   (t) => [
     check("shares_one_target", sql`num_nonnulls(${t.sessionId}, ${t.objectId}) = 1`),
-    check("shares_one_grantee", sql`num_nonnulls(${t.userId}, ${t.teamId}) = 1`),
-    unique("shares_target_grantee_unique").on(t.sessionId, t.objectId, t.userId, t.teamId).nullsNotDistinct(),
+    check("shares_one_grantee_or_address", sql`num_nonnulls(${t.userId}, ${t.teamId}, ${t.email}) = 1`),
+    check("shares_email_lower", sql`${t.email} = lower(${t.email})`),
+    unique("shares_target_grantee_address_unique").on(t.sessionId, t.objectId, t.userId, t.teamId, t.email).nullsNotDistinct(),
+    index("shares_email_idx").on(t.email),
     index("shares_user_idx").on(t.userId),
     index("shares_team_idx").on(t.teamId),
   ],

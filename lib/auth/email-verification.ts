@@ -1,11 +1,11 @@
 /// Confirming a new account's e-mail address through a mailed link. Until confirmed, an
-/// account can sign in and work in its own sessions, but cannot accept team invitations and
-/// is not found by e-mail when someone shares with it, so nobody can claim another
-/// person's address to receive what was meant for them.
+/// account can sign in and work in its own sessions, but cannot accept team invitations,
+/// and shares made to its address wait (lib/sharing/shares.ts) until it is confirmed, so
+/// nobody can claim another person's address to receive what was meant for them.
 import { createHash, randomBytes } from "node:crypto";
 import { and, eq, gt, isNull, lt } from "drizzle-orm";
 import { db } from "@/db/client";
-import { emailVerifications, users } from "@/db/schema";
+import { emailVerifications, shares, users } from "@/db/schema";
 import type { Executor } from "./audit";
 
 export const VERIFICATION_LIFETIME_MS = 48 * 3600_000;
@@ -43,7 +43,11 @@ export async function confirmEmail(token: string): Promise<VerificationOutcome> 
       .where(and(eq(users.id, row.userId), isNull(users.emailVerifiedAt)))
       .returning({ email: users.email });
     await tx.delete(emailVerifications).where(lt(emailVerifications.expiresAt, new Date()));
-    if (user) return { ok: true as const, email: user.email };
+    if (user) {
+      // Shares made to this address while it had no confirmed account now reach the user.
+      await tx.update(shares).set({ userId: row.userId, email: null }).where(eq(shares.email, user.email));
+      return { ok: true as const, email: user.email };
+    }
     const [already] = await tx.select({ email: users.email }).from(users).where(eq(users.id, row.userId));
     return already ? { ok: true as const, email: already.email } : { ok: false as const, why: "unknown" as const };
   });

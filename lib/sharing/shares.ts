@@ -37,16 +37,16 @@ async function resolveGrantee(user: CurrentUser, grantee: Grantee, ownerId: stri
   if ("email" in grantee) {
     const email = grantee.email.toLowerCase();
     const [target] = await database
-      .select({ id: users.id, name: users.displayName, verified: users.emailVerifiedAt })
+      .select({ id: users.id, verified: users.emailVerifiedAt })
       .from(users)
       .where(eq(users.email, email));
-    // An account whose address is not confirmed yet is treated as no account: whoever
-    // signed up with someone else's address must not receive what is shared with them.
-    if (!target || !target.verified) {
-      throw new HttpError(404, "no_account", `No Ringside account uses ${email}; invite them to a team first.`);
-    }
-    if (target.id === ownerId) throw new HttpError(409, "is_owner", "That is the owner, who has every right already.");
-    return { userId: target.id, teamId: null, label: email };
+    if (target?.id === ownerId) throw new HttpError(409, "is_owner", "That is the owner, who has every right already.");
+    // Without a confirmed account the share waits for the address (and grants nothing
+    // until an account confirms it); the answer is the same either way, so sharing does
+    // not reveal which addresses have accounts. An unconfirmed account counts as none:
+    // whoever signed up with someone else's address must not receive what is meant for them.
+    if (!target || !target.verified) return { userId: null, teamId: null, email, label: email };
+    return { userId: target.id, teamId: null, email: null, label: email };
   }
   requireUuid(grantee.teamId, "The team");
   const [team] = await database.select({ id: teams.id, name: teams.name }).from(teams).where(eq(teams.id, grantee.teamId));
@@ -56,30 +56,33 @@ async function resolveGrantee(user: CurrentUser, grantee: Grantee, ownerId: stri
     .from(memberships)
     .where(and(eq(memberships.teamId, team.id), eq(memberships.userId, user.id)));
   if (!m || m.role === "guest") throw forbidden("Share with a team you are a lead or member of.");
-  return { userId: null, teamId: team.id, label: team.name };
+  return { userId: null, teamId: team.id, email: null, label: team.name };
 }
 
+/// A share as managers see it. A person is shown by the address the share was made to,
+/// whether or not that address has (or has confirmed) an account, so the list reveals no
+/// more than the answer to the share did.
 export interface ShareView {
   id: string;
   role: ShareRole;
-  grantee: { kind: "user"; userId: string; email: string; name: string } | { kind: "team"; teamId: string; name: string };
+  grantee: { kind: "user"; email: string } | { kind: "team"; teamId: string; name: string };
   createdAt: string;
 }
 
 async function sharesOf(target: { sessionId: string } | { objectId: string }): Promise<ShareView[]> {
   const rows = await db()
-    .select({ share: shares, email: users.email, userName: users.displayName, teamName: teams.name })
+    .select({ share: shares, email: users.email, teamName: teams.name })
     .from(shares)
     .leftJoin(users, eq(users.id, shares.userId))
     .leftJoin(teams, eq(teams.id, shares.teamId))
     .where("sessionId" in target ? eq(shares.sessionId, target.sessionId) : eq(shares.objectId, target.objectId))
     .orderBy(shares.createdAt);
-  return rows.map(({ share, email, userName, teamName }) => ({
+  return rows.map(({ share, email, teamName }) => ({
     id: share.id,
     role: share.role,
-    grantee: share.userId
-      ? { kind: "user" as const, userId: share.userId, email: email ?? "", name: userName ?? "" }
-      : { kind: "team" as const, teamId: share.teamId!, name: teamName ?? "" },
+    grantee: share.teamId
+      ? { kind: "team" as const, teamId: share.teamId, name: teamName ?? "" }
+      : { kind: "user" as const, email: share.email ?? email ?? "" },
     createdAt: share.createdAt.toISOString(),
   }));
 }
@@ -96,7 +99,7 @@ async function upsertShare(
   const g = await resolveGrantee(user, grantee, ownerId);
   const targetCol = "sessionId" in target ? shares.sessionId : shares.objectId;
   const targetId = "sessionId" in target ? target.sessionId : target.objectId;
-  const granteeCond = g.userId ? eq(shares.userId, g.userId) : eq(shares.teamId, g.teamId!);
+  const granteeCond = g.userId ? eq(shares.userId, g.userId) : g.teamId ? eq(shares.teamId, g.teamId) : eq(shares.email, g.email!);
   const { id, created } = await db().transaction(async (tx) => {
     const [existing] = await tx.select().from(shares).where(and(eq(targetCol, targetId), granteeCond)).for("update");
     if (existing) {
@@ -106,21 +109,21 @@ async function upsertShare(
         userId: user.id,
         email: user.email,
         address,
-        details: { ...target, shareId: existing.id, grantee: g.label, userId: g.userId, teamId: g.teamId, from: existing.role, to: role },
+        details: { ...target, shareId: existing.id, grantee: g.label, userId: g.userId, teamId: g.teamId, pending: g.email !== null, from: existing.role, to: role },
       });
       return { id: existing.id, created: false };
     }
     try {
       const [row] = await tx
         .insert(shares)
-        .values({ ...target, userId: g.userId, teamId: g.teamId, role, createdBy: user.id })
+        .values({ ...target, userId: g.userId, teamId: g.teamId, email: g.email, role, createdBy: user.id })
         .returning({ id: shares.id });
       await auditSharing(tx, {
         event: "share_created",
         userId: user.id,
         email: user.email,
         address,
-        details: { ...target, shareId: row!.id, grantee: g.label, userId: g.userId, teamId: g.teamId, role },
+        details: { ...target, shareId: row!.id, grantee: g.label, userId: g.userId, teamId: g.teamId, pending: g.email !== null, role },
       });
       return { id: row!.id, created: true };
     } catch (error) {

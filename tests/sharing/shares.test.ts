@@ -93,12 +93,31 @@ describe("session shares", () => {
       { role: "viewer" },
       { email: TEST_ACCOUNTS.guest.email, teamId: w.group.teamId, role: "viewer" },
       { email: TEST_ACCOUNTS.guest.email, role: "owner" },
-      { email: "nobody-at-all@harbor.test.example", role: "viewer" },
       { email: EXTRA_OWNER, role: "viewer" },
     ];
     const statuses = [];
     for (const body of cases) statuses.push((await w.clients.owner.json(`/api/sessions/${sessionId}/shares`, body)).status);
-    expect(statuses).toEqual([400, 400, 400, 404, 409]);
+    expect(statuses).toEqual([400, 400, 400, 409]);
+  });
+
+  // Issue 13 replaced the old 404 "no_account": a share to an address without an account
+  // answers exactly like a share to an account (201 and the same shape), and grants
+  // nothing until an account confirms that address (tests/integration/web-hardening.test.ts).
+  it("answers a share to an unknown address like any other, revealing no accounts", async () => {
+    const unknown = await w.clients.owner.json(`/api/sessions/${sessionId}/shares`, { email: "Nobody-At-All@harbor.test.example", role: "viewer" });
+    const known = await w.clients.owner.json(`/api/sessions/${sessionId}/shares`, { email: TEST_ACCOUNTS.guest.email, role: "viewer" });
+    expect(unknown.status).toBe(201);
+    expect(known.status).toBe(201);
+    type Answer = { share: { id: string; role: string; grantee: Record<string, unknown>; createdAt: string } };
+    const a = ((await unknown.json()) as Answer).share;
+    const b = ((await known.json()) as Answer).share;
+    expect(Object.keys(a).sort()).toEqual(Object.keys(b).sort());
+    expect(Object.keys(a.grantee).sort()).toEqual(Object.keys(b.grantee).sort());
+    expect(a.grantee).toEqual({ kind: "user", email: "nobody-at-all@harbor.test.example" });
+    const list = (await (await w.clients.owner.request(`/api/sessions/${sessionId}/shares`)).json()) as { shares: Answer["share"][] };
+    const rows = list.shares.filter((x) => x.id === a.id || x.id === b.id);
+    expect(rows.map((x) => Object.keys(x.grantee).sort())).toEqual([Object.keys(b.grantee).sort(), Object.keys(b.grantee).sort()]);
+    for (const id of [a.id, b.id]) expect((await w.clients.owner.request(`/api/sessions/${sessionId}/shares/${id}`, { method: "DELETE" })).status).toBe(200);
   });
 });
 

@@ -12,9 +12,15 @@ export interface Share {
   readonly id: string;
   readonly role: ShareRole;
   readonly grantee:
-    | { readonly kind: "user"; readonly userId: string; readonly email: string; readonly name: string }
+    // a person, shown by the address the share was made to (whether or not it has an account)
+    | { readonly kind: "user"; readonly email: string }
     | { readonly kind: "team"; readonly teamId: string; readonly name: string };
   readonly createdAt: string;
+}
+
+/// How a share's grantee is named in notices: the address for a person, "team …" for a team.
+export function granteeLabel(g: Share["grantee"]): string {
+  return g.kind === "user" ? g.email : `team ${g.name}`;
 }
 
 export interface SessionSharing {

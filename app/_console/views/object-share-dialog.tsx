@@ -3,7 +3,7 @@
 /// import a copy into their own sessions), see and revoke the current shares.
 import useSWR from "swr";
 import { fetchJson, keys, messageOf } from "../api/client";
-import { revokeObjectShare, shareObject, type Share } from "../api/sharing";
+import { granteeLabel, revokeObjectShare, shareObject, type Share } from "../api/sharing";
 import type { NamedObject } from "../api/types";
 import { GrantsEditor } from "./grants-editor";
 
@@ -27,11 +27,11 @@ export function ShareObjectPanel({ object, onChanged }: { object: NamedObject; o
         shares={shares.data?.shares}
         grant={async (grantee, role) => {
           const { share } = await shareObject(object.id, grantee, role);
-          return `Shared ${object.name} with ${share.grantee.name || "them"} as ${share.role}.`;
+          return `Shared ${object.name} with ${granteeLabel(share.grantee)} as ${share.role}.`;
         }}
         revoke={async (s) => {
           await revokeObjectShare(object.id, s.id);
-          return `Revoked the share of ${object.name} with ${s.grantee.name}.`;
+          return `Revoked the share of ${object.name} with ${granteeLabel(s.grantee)}.`;
         }}
         onChanged={async (notice) => {
           await shares.mutate();

@@ -5,7 +5,7 @@
 import { useRef, useState } from "react";
 import useSWR from "swr";
 import { fetchJson, keys, messageOf } from "../api/client";
-import { publishLink, revokeLink, revokeSessionShare, shareSession, type SessionSharing } from "../api/sharing";
+import { granteeLabel, publishLink, revokeLink, revokeSessionShare, shareSession, type SessionSharing } from "../api/sharing";
 import { GrantsEditor } from "./grants-editor";
 import { buttonPrimary, buttonSecondary, panelHeading, textInput } from "./styles";
 
@@ -57,11 +57,11 @@ export function ShareSessionPanel({ sessionId, onChanged }: { sessionId: string;
           shares={sharing.data?.shares}
           grant={async (grantee, role) => {
             const { share } = await shareSession(sessionId, grantee, role);
-            return `Shared with ${share.grantee.name || ("email" in grantee ? grantee.email : "the team")} as ${share.role}.`;
+            return `Shared with ${granteeLabel(share.grantee)} as ${share.role}.`;
           }}
           revoke={async (s) => {
             await revokeSessionShare(sessionId, s.id);
-            return `Revoked the share of ${s.grantee.name}.`;
+            return `Revoked the share of ${granteeLabel(s.grantee)}.`;
           }}
           onChanged={async (notice) => {
             await sharing.mutate();

@@ -15,7 +15,7 @@ export function ShareList({ shares, onRevoke }: { shares: readonly Share[] | und
       ) : (
         <ul aria-label="Current shares" className="divide-y divide-ink/10 rounded-md border border-ink/10 dark:divide-paper/10 dark:border-paper/10">
           {shares.map((s) => {
-            const who = s.grantee.kind === "user" ? `${s.grantee.name} (${s.grantee.email})` : `team ${s.grantee.name}`;
+            const who = s.grantee.kind === "user" ? s.grantee.email : `team ${s.grantee.name}`;
             return (
               <li key={s.id} className="flex items-center gap-2 px-2 py-1 text-sm" data-testid="share-row">
                 <span className="min-w-0 flex-1 truncate">{who}</span>
