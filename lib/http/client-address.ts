@@ -12,6 +12,18 @@ import { BlockList, isIP } from "node:net";
 
 export const CLIENT_ADDRESS_HEADER = "x-ringside-client-address";
 
+// Set by web-server.ts in its own process (Next runs the routes in that process). Without
+// it (`next dev`, a bare `next start`) nobody overwrote the header, so it is not believed.
+const SERVER_RESOLVES = Symbol.for("ringside.serverResolvesClientAddress");
+
+export function markClientAddressResolved(): void {
+  (globalThis as Record<symbol, unknown>)[SERVER_RESOLVES] = true;
+}
+
+function serverResolves(): boolean {
+  return (globalThis as Record<symbol, unknown>)[SERVER_RESOLVES] === true;
+}
+
 type HeaderSource = Headers | Record<string, string | string[] | undefined>;
 
 function header(headers: HeaderSource, name: string): string | undefined {
@@ -25,7 +37,7 @@ function header(headers: HeaderSource, name: string): string | undefined {
 /// a development server can do. In production without web-server.ts the answer is
 /// "unknown": the address is never taken from a header the client controls.
 export function clientAddress(headers: HeaderSource): string {
-  const resolved = header(headers, CLIENT_ADDRESS_HEADER)?.trim();
+  const resolved = serverResolves() ? header(headers, CLIENT_ADDRESS_HEADER)?.trim() : undefined;
   if (resolved) return resolved.slice(0, 100);
   if (process.env.NODE_ENV === "development") {
     const forwarded = header(headers, "x-forwarded-for")?.split(",")[0]?.trim();

@@ -5,7 +5,7 @@
 import { createServer } from "node:http";
 import path from "node:path";
 import next from "next";
-import { CLIENT_ADDRESS_HEADER, parseTrustedProxies, resolveClientAddress } from "../http/client-address";
+import { CLIENT_ADDRESS_HEADER, markClientAddressResolved, parseTrustedProxies, resolveClientAddress } from "../http/client-address";
 
 function option(name: string, fallback: string): string {
   const i = process.argv.indexOf(`--${name}`);
@@ -17,6 +17,7 @@ const port = Number(option("port", process.env.PORT ?? "3000"));
 const trusted = parseTrustedProxies(process.env.RINGSIDE_TRUSTED_PROXIES);
 
 async function main(): Promise<void> {
+  markClientAddressResolved();
   const app = next({ dev: false, hostname: host, port, dir: path.resolve(__dirname, "../..") });
   const handle = app.getRequestHandler();
   await app.prepare();

@@ -3,7 +3,7 @@
 /// suites in tests/integration show the same rules on the running server.
 import { describe, expect, it } from "vitest";
 import { safeCallback } from "@/app/(auth)/safe-callback";
-import { parseTrustedProxies, resolveClientAddress } from "@/lib/http/client-address";
+import { CLIENT_ADDRESS_HEADER, clientAddress, markClientAddressResolved, parseTrustedProxies, resolveClientAddress } from "@/lib/http/client-address";
 import { nestingProblem, textProblem, valueProblem } from "@/lib/http/json-guard";
 import { checkSameOrigin } from "@/lib/http/same-origin";
 
@@ -29,6 +29,16 @@ describe("resolveClientAddress", () => {
   it("refuses a malformed proxy list instead of trusting nothing or everything", () => {
     expect(() => parseTrustedProxies("127.0.0.1, localhost")).toThrow(/localhost/);
     expect(() => parseTrustedProxies("10.0.0.0/33")).toThrow(/prefix/);
+  });
+});
+
+describe("clientAddress", () => {
+  it("believes the resolved-address header only when web-server.ts set it in this process", () => {
+    const headers = new Headers({ [CLIENT_ADDRESS_HEADER]: "203.0.113.9", "X-Forwarded-For": "198.51.100.1" });
+    expect(clientAddress(headers)).toBe("unknown");
+    markClientAddressResolved();
+    expect(clientAddress(headers)).toBe("203.0.113.9");
+    expect(clientAddress(new Headers({ "X-Forwarded-For": "198.51.100.1" }))).toBe("unknown");
   });
 });
 
