@@ -1,27 +1,10 @@
 import type { NextConfig } from "next";
 
-/// Content-Security-Policy for every answer. KaTeX and CodeMirror need inline styles
-/// (KaTeX sets sizes in `style` attributes, CodeMirror injects <style> elements); fonts and
-/// scripts come from this origin only. Next.js's App Router puts its bootstrap data in
-/// inline <script> tags, so scripts also allow 'unsafe-inline' (a nonce would force every
-/// page to render per request); no origin other than ours may run or load anything, and
-/// `next dev` alone gets 'unsafe-eval' for its hot reloader.
-const dev = process.env.NODE_ENV === "development";
-const CONTENT_SECURITY_POLICY = [
-  "default-src 'self'",
-  `script-src 'self' 'unsafe-inline'${dev ? " 'unsafe-eval'" : ""}`,
-  "style-src 'self' 'unsafe-inline'",
-  "img-src 'self' data: blob:",
-  "font-src 'self' data:",
-  `connect-src 'self'${dev ? " ws:" : ""}`,
-  "object-src 'none'",
-  "base-uri 'self'",
-  "form-action 'self'",
-  "frame-ancestors 'none'",
-].join("; ");
+import { contentSecurityPolicy } from "./lib/http/content-security";
 
+// Pages get their Content-Security-Policy, with a per-request nonce, from proxy.ts; every
+// other answer (API, static files) gets the same policy without one.
 const SECURITY_HEADERS = [
-  { key: "Content-Security-Policy", value: CONTENT_SECURITY_POLICY },
   { key: "X-Content-Type-Options", value: "nosniff" },
   { key: "Referrer-Policy", value: "same-origin" },
   // For browsers without frame-ancestors support.
@@ -36,7 +19,12 @@ const nextConfig: NextConfig = {
   poweredByHeader: false,
   reactStrictMode: true,
   async headers() {
-    return [{ source: "/:path*", headers: SECURITY_HEADERS }];
+    const noNonce = [{ key: "Content-Security-Policy", value: contentSecurityPolicy(null) }];
+    return [
+      { source: "/:path*", headers: SECURITY_HEADERS },
+      { source: "/api/:path*", headers: noNonce },
+      { source: "/_next/:path*", headers: noNonce },
+    ];
   },
 };
 

@@ -131,6 +131,28 @@ describe("security headers", () => {
     expect(csp).toContain("object-src 'none'");
     expect(r.headers.get("x-content-type-options")).toBe("nosniff");
     expect(r.headers.get("referrer-policy")).toBe("same-origin");
+    const scripts = /script-src ([^;]*)/.exec(csp)?.[1] ?? "";
+    expect(scripts).not.toContain("unsafe-inline");
+    expect(scripts).not.toContain("unsafe-eval");
+  });
+
+  it("give every page view its own script nonce, used on the page's scripts", async () => {
+    const nonces: string[] = [];
+    for (let i = 0; i < 2; i++) {
+      const r = await member.request("/reference");
+      const csp = r.headers.get("content-security-policy") ?? "";
+      const nonce = /'nonce-([^']+)'/.exec(csp)?.[1];
+      expect(nonce).toBeDefined();
+      expect(csp).toContain("'strict-dynamic'");
+      const html = await r.text();
+      expect(html).toContain(`nonce="${nonce}"`);
+      // every script tag of the page carries it
+      const tags = html.match(/<script\b[^>]*>/g) ?? [];
+      expect(tags.length).toBeGreaterThan(0);
+      for (const tag of tags) expect(tag).toContain(`nonce="${nonce}"`);
+      nonces.push(nonce!);
+    }
+    expect(nonces[0]).not.toBe(nonces[1]);
   });
 });
 
