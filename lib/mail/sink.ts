@@ -42,6 +42,10 @@ export function startMailSink(opts: { port: number; dir: string }): Promise<SMTP
     },
   });
   return new Promise((resolve, reject) => {
+    // A folder left from an older version may be readable by others: close it at start.
+    mkdir(opts.dir, { recursive: true, mode: 0o700 })
+      .then(() => chmod(opts.dir, 0o700))
+      .catch((error: Error) => console.error(`[ringside] cannot make the mail folder private: ${error.message}`));
     server.once("error", reject);
     server.listen(opts.port, "127.0.0.1", () => resolve(server));
   });
