@@ -1,7 +1,7 @@
 /// The development SMTP sink: accepts every message on 127.0.0.1 and stores it as a JSON
 /// file in the mail folder, where the admin mailbox page (app/mailbox) reads it.
 import { randomUUID } from "node:crypto";
-import { chmod, mkdir, rename, writeFile } from "node:fs/promises";
+import { chmod, mkdir, readdir, rename, writeFile } from "node:fs/promises";
 import path from "node:path";
 import { SMTPServer } from "smtp-server";
 import { parseRawMessage, type StoredMessage } from "./message";
@@ -42,9 +42,12 @@ export function startMailSink(opts: { port: number; dir: string }): Promise<SMTP
     },
   });
   return new Promise((resolve, reject) => {
-    // A folder left from an older version may be readable by others: close it at start.
+    // A folder (and messages) left from an older version may be readable by others: close
+    // them at start.
     mkdir(opts.dir, { recursive: true, mode: 0o700 })
       .then(() => chmod(opts.dir, 0o700))
+      .then(() => readdir(opts.dir))
+      .then((names) => Promise.all(names.map((n) => chmod(path.join(opts.dir, n), 0o600))))
       .catch((error: Error) => console.error(`[ringside] cannot make the mail folder private: ${error.message}`));
     server.once("error", reject);
     server.listen(opts.port, "127.0.0.1", () => resolve(server));
