@@ -1,7 +1,8 @@
 import { AlgebraError } from "../errors";
 import { Echelon, kernelBasis } from "../graded/echelon";
-import { type Ideal, idealGroebnerBasis } from "../ideal";
-import { add, monomial, mul, type Poly, zero } from "../index";
+import { type Ideal, idealGroebnerBasis } from "../ideal/ideal";
+import { add, monomial, mul, zero } from "../poly/checked";
+import { type Poly } from "../poly/poly";
 import { checkLimit, checkpoint, type ComputeOptions } from "../options";
 import { FiniteAlgebra } from "./algebra";
 

@@ -1,6 +1,10 @@
-import { type HilbertSeries, hilbertSeriesOfMonomials, type RationalNumber } from "../hilbert";
+import { type HilbertSeries, hilbertSeriesOfMonomials } from "../hilbert/series";
+import { type RationalNumber } from "../hilbert/rational";
 import type { ComputeOptions } from "../options";
-import { type Poly, type PolyRing, groebnerBasis, isHomogeneous, leadExponents, monomial } from "./engine";
+import { type Poly } from "../poly/poly";
+import { type PolyRing } from "../poly/ring";
+import { groebnerBasis } from "../groebner/checked";
+import { isHomogeneous, leadExponents, monomial } from "../poly/checked";
 import { ideal, idealGroebnerBasis, type Ideal } from "./ideal";
 import { grevlexRing, identityMap, mapPoly } from "./transfer";
 

@@ -1,5 +1,5 @@
 import { Echelon, kernelBasis } from "../graded/echelon";
-import type { Ideal } from "../ideal";
+import type { Ideal } from "../ideal/ideal";
 import { checkpoint, type ComputeOptions } from "../options";
 import { variablesOf } from "./residue";
 import { densify, type GradedFree, sparsify } from "./free";

@@ -1,4 +1,5 @@
-import { idealDimension, type Ideal } from "../ideal";
+import { idealDimension } from "../ideal/invariants";
+import { type Ideal } from "../ideal/ideal";
 import type { ComputeOptions } from "../options";
 import { bettiTotals } from "./betti";
 import { depthByAuslanderBuchsbaum, projectiveDimension } from "./invariants";

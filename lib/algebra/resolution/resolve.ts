@@ -1,6 +1,6 @@
 import { runtimeError } from "../errors";
-import type { Ideal } from "../ideal";
-import { idealGroebnerBasis } from "../ideal";
+import type { Ideal } from "../ideal/ideal";
+import { idealGroebnerBasis } from "../ideal/ideal";
 import { checkpoint, type ComputeOptions } from "../options";
 import type { Poly } from "../poly/poly";
 import { ringCtx, type PolyRing, type RingCtx } from "../poly/ring";
