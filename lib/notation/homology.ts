@@ -23,12 +23,12 @@ import {
   type Presentation,
   type Resolution,
 } from "../algebra/index";
-import type { CallContext } from "./builtins";
+import type { CallContext } from "./context";
 import { reduceIn } from "./coerce";
 import { limit, runtime } from "./errors";
 import { matrixOf, moduleOf, moduleValue, presentationOverS } from "./modules";
 import { bound } from "./named-options";
-import { complexOf } from "./resolutions";
+import { complexOf } from "./complex";
 import { pdOverQuotient, presentationOverQuotient, resolveOverQuotient, syzygyOverQuotient } from "./quotients";
 import { ringText } from "./text";
 import type { ComplexValue, IdealValue, ModuleValue, RingValue, Value } from "./values";

@@ -35,7 +35,7 @@ import {
   type ModulePresentation,
   type QuotientResolution,
 } from "../algebra/index";
-import type { CallContext } from "./builtins";
+import type { CallContext } from "./context";
 import { bound } from "./named-options";
 import { runtime } from "./errors";
 import { colonOf, groebnerOf, idealValue } from "./ideals";

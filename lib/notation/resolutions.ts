@@ -2,29 +2,17 @@
 /// minimal graded free resolution over a polynomial ring (Schreyer frame, minimised; see
 /// lib/algebra/resolution). Resolutions over quotient rings belong to engine part 3.
 import type { Span } from "../../grammar/ast";
-import { bettiNumber, bettiTotals, ideal as engineIdeal, resolveQuotient, type Resolution } from "../algebra/index";
+import { bettiNumber, bettiTotals, ideal as engineIdeal, resolveQuotient } from "../algebra/index";
 import { runtime } from "./errors";
-import type { CallContext } from "./builtins";
+import type { CallContext } from "./context";
 import { bound } from "./named-options";
 import { resolveModule } from "./homology";
 import { resolveOverQuotient } from "./quotients";
-import type { BettiTableValue, ComplexValue, MatrixValue, RingValue, Value } from "./values";
+import { complexOf } from "./complex";
+import type { BettiTableValue, ComplexValue, Value } from "./values";
 
 const Int = (value: number): Value => ({ type: "Int", value: BigInt(value) });
 
-
-/// The Complex value of a resolution; `shift`: how far the module was moved up in degree
-/// before resolving (its Betti numbers are moved back).
-export function complexOf(r: Resolution, ring: RingValue, shift = 0): ComplexValue {
-  const maps: MatrixValue[] = [];
-  for (let i = 1; i <= r.length; i++) {
-    const rows = r.map(i);
-    maps.push({ type: "Matrix", ring, rows, cols: r.ranks[i] ?? 0 });
-  }
-  const entries = shift === 0 ? r.betti.entries : r.betti.entries.map(([i, j, b]) => [i, j - shift, b] as const);
-  const betti: BettiTableValue = { type: "BettiTable", entries, complete: r.complete };
-  return { type: "Complex", ring, ranks: r.ranks, betti, complete: r.complete, maps };
-}
 
 /// resolve(A / I) for A a polynomial ring: the resolution of the cyclic module S/I over S.
 export function resolveValue([m]: readonly Value[], c: CallContext): Value {
