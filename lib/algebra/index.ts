@@ -37,24 +37,9 @@ export * from "./hilbert";
 export * from "./ideal";
 export * from "./quotient";
 export * from "./module";
-export * from "./resolution";
+export * from "./resolution/index";
 export * from "./invariants";
 export * from "./graded";
 export * from "./artinian";
 export * from "./series";
 export * from "./burch";
-// local/'s BettiColumn is its own shape (per-degree data over S/J); it stays under local/.
-export {
-  resolveDegreewise,
-  residueFieldResolution,
-  cyclicResolution,
-  bettiTotalsOf,
-  residueSplitsFromSyzygy,
-  moduleSocle,
-  type ModulePresentation,
-  GradedFree,
-  type DegreeData,
-  type LocalResolveOptions,
-  type QuotientResolution,
-  type ResolveRequest,
-} from "./local";

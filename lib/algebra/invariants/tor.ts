@@ -5,9 +5,9 @@ import { moduleHilbertSeries } from "../module/hilbert";
 import type { ComputeOptions } from "../options";
 import { makePoly, type Poly } from "../poly/poly";
 import { ringCtx, sameRing, type PolyRing } from "../poly/ring";
-import { regularity } from "../resolution/invariants";
-import { resolveCoker } from "../resolution/resolve";
-import { type Presentation } from "../resolution/syzygy";
+import { regularity } from "../resolution/schreyer/invariants";
+import { resolveCoker } from "../resolution/schreyer/resolve";
+import { type Presentation } from "../resolution/schreyer/syzygy";
 import { gradedModule, gradedPiece, gradedRank } from "./graded";
 
 /// The presentation of S/I: the 1×m matrix of I's generators.

@@ -1,17 +1,17 @@
-import { AlgebraError } from "../errors";
-import { Echelon, kernelBasis } from "../graded/echelon";
-import { gradedQuotient, type GradedQuotient } from "../graded/piece";
-import { type Ideal, idealGroebnerBasis } from "../ideal/ideal";
-import { idealSum } from "../ideal/arith";
-import { checkLimit, checkpoint, type ComputeOptions } from "../options";
-import { add, degree, monomial, terms, zero } from "../poly/checked";
-import { type Poly } from "../poly/poly";
-import { type PolyRing } from "../poly/ring";
+import { AlgebraError } from "../../errors";
+import { Echelon, kernelBasis } from "../../graded/echelon";
+import { gradedQuotient, type GradedQuotient } from "../../graded/piece";
+import { type Ideal, idealGroebnerBasis } from "../../ideal/ideal";
+import { idealSum } from "../../ideal/arith";
+import { checkLimit, checkpoint, type ComputeOptions } from "../../options";
+import { add, degree, monomial, terms, zero } from "../../poly/checked";
+import { type Poly } from "../../poly/poly";
+import { type PolyRing } from "../../poly/ring";
 import { compact, densify, GradedFree, type Sparse, sparsify } from "./free";
-import { freeModule } from "../module/free";
-import { moduleHilbertSeries } from "../module/hilbert";
-import { hilbertFunctionValues } from "../hilbert/series";
-import { hilbertPolynomial } from "../hilbert/polynomial";
+import { freeModule } from "../../module/free";
+import { moduleHilbertSeries } from "../../module/hilbert";
+import { hilbertFunctionValues } from "../../hilbert/series";
+import { hilbertPolynomial } from "../../hilbert/polynomial";
 
 /// β_{i,j} for one homological degree i.
 export interface BettiColumn {

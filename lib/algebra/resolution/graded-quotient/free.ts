@@ -1,5 +1,5 @@
-import type { Coeffs } from "../field/coeffs";
-import type { GradedQuotient, SparseColumn } from "../graded/piece";
+import type { Coeffs } from "../../field/coeffs";
+import type { GradedQuotient, SparseColumn } from "../../graded/piece";
 
 /// A sparse vector: (index, coefficient) pairs.
 export type Sparse<C> = SparseColumn<C>;

@@ -1,10 +1,10 @@
-import { limitError } from "../errors";
-import { announce, checkLimit, checkpoint, Ticker, type ComputeOptions } from "../options";
-import type { RingCtx } from "../poly/ring";
-import { divisorsOf } from "../module/divide";
-import { schreyerOrder, type ModuleOrder } from "../module/order";
-import { schreyerFrame, schreyerSort, schreyerSyzygy } from "../module/syzygy";
-import type { Vec } from "../module/vector";
+import { limitError } from "../../errors";
+import { announce, checkLimit, checkpoint, Ticker, type ComputeOptions } from "../../options";
+import type { RingCtx } from "../../poly/ring";
+import { divisorsOf } from "../../module/divide";
+import { schreyerOrder, type ModuleOrder } from "../../module/order";
+import { schreyerFrame, schreyerSort, schreyerSyzygy } from "../../module/syzygy";
+import type { Vec } from "../../module/vector";
 
 /// The Schreyer resolution F_0 ← F_1 ← … of a module F_0 / ⟨g⟩: level k holds the columns of
 /// d_k (vectors in F_{k−1}) and the degrees of the basis of F_k.
