@@ -22,7 +22,7 @@ import {
 import type { Evaluator, Frame, OpContext } from "./context";
 import { MODULE_OPERATORS } from "./modules";
 import { pendingError } from "./pending";
-import { rational, ratAdd, ratCompare, ratDiv, ratMul, ratNeg, ratSub, type Rational } from "./rational";
+import { rational, ratAdd, ratCompare, ratDiv, ratMul, ratNeg, ratSub, type Rational } from "../algebra/index";
 import { ringText } from "./text";
 import { valueType } from "./value-type";
 import type { MatrixValue, RingValue, Value } from "./values";

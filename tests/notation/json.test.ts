@@ -3,7 +3,7 @@
 import { describe, expect, it } from "vitest";
 import { QQ, gf, hilbertSeriesFromNumerator, parsePoly } from "@/lib/algebra/index";
 import { DecodeError, ValueJson, ValueJsonSchemas, decodeValue, encodeValue, type ValueJson as Json } from "@/lib/notation/json";
-import { rational } from "@/lib/notation/rational";
+import { rational } from "@/lib/algebra";
 import { RingRegistry } from "@/lib/notation/rings";
 import type { FunctionValue, RingValue, Value } from "@/lib/notation/values";
 

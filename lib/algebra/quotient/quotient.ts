@@ -1,6 +1,6 @@
 import { runtimeError } from "../errors";
 import { type HilbertSeries } from "../hilbert/series";
-import { type RationalNumber } from "../hilbert/rational";
+import { type Rational } from "../field/rational-number";
 import { type Ideal, ideal, idealGroebnerBasis, idealIsUnit } from "../ideal/ideal";
 import { idealDimension, idealDegree, idealHilbertSeries } from "../ideal/invariants";
 import { idealSum } from "../ideal/arith";
@@ -113,6 +113,6 @@ export function quotientDimension(A: AnyRing, opts?: ComputeOptions): number {
 }
 
 /// The degree (multiplicity) of A.
-export function quotientDegree(A: AnyRing, opts?: ComputeOptions): RationalNumber {
+export function quotientDegree(A: AnyRing, opts?: ComputeOptions): Rational {
   return idealDegree(definingIdeal(A), opts);
 }
