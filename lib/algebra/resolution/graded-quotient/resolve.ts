@@ -12,6 +12,7 @@ import { freeModule } from "../../module/free";
 import { moduleHilbertSeries } from "../../module/hilbert";
 import { hilbertFunctionValues } from "../../hilbert/series";
 import { hilbertPolynomial } from "../../hilbert/polynomial";
+import { lowerKey, multidegreeOf, PerDegreeBlock, type BlockKey } from "./multidegree";
 
 /// β_{i,j} for one homological degree i.
 export interface BettiColumn {
@@ -84,15 +85,6 @@ function isMonomialIdeal(I: Ideal): boolean {
   return idealGroebnerBasis(I).every((g) => terms(I.ring, g).length === 1);
 }
 
-/// The multidegree one variable lower, or null when it leaves N^n.
-function lowerKey(key: string, v: number): string | null {
-  if (key === "*") return key;
-  const e = key.split(",").map(Number);
-  if (e[v] === 0) return null;
-  e[v]--;
-  return e.join(",");
-}
-
 /// The minimal graded free resolution of R/I over R = S/J up to homological degree
 /// `length`, computed degree by degree by linear algebra on the graded pieces R_d: in
 /// degree j the syzygies K_{i,j} of the last module are known; those of the form
@@ -129,7 +121,7 @@ export function resolveDegreewise<C>(req: ResolveRequest<C>): QuotientResolution
     target.addGenerator(0, { idx: [], val: [] }, origin);
     F.addGenerator(0, { idx: [0], val: [K.one] }, origin);
   }
-  let prevKernelDims = new Map<string, number>();
+  let prevKernelDims = new PerDegreeBlock();
   const columns: BettiColumn[] = [];
   const push = (c: BettiColumn) => {
     columns.push(c);
@@ -143,8 +135,8 @@ export function resolveDegreewise<C>(req: ResolveRequest<C>): QuotientResolution
   for (let i = 0; i < n; i++) {
     const next = new GradedFree<C>(R, multi);
     /// Kernel bases by degree, then by group.
-    const kernels = new Map<number, Map<string, Echelon<C>>>();
-    const kernelDims = new Map<string, number>();
+    const kernels = new Map<number, Map<BlockKey, Echelon<C>>>();
+    const kernelDims = new PerDegreeBlock();
     const images = new ImageCache(F, target);
     if (F.rank === 0) {
       // M = 0 (a free module of rank 0): every column is zero.
@@ -160,7 +152,7 @@ export function resolveDegreewise<C>(req: ResolveRequest<C>): QuotientResolution
       checkLimit(opts, "maxBasisSize", F.dim(j), "a graded piece of the resolution");
       const L = F.layout(j);
       const TL = target.layout(j);
-      const here = new Map<string, Echelon<C>>();
+      const here = new Map<BlockKey, Echelon<C>>();
       kernels.set(j, here);
       for (const [key, block] of L.blocks) {
         const dimF = block.length;
@@ -169,7 +161,7 @@ export function resolveDegreewise<C>(req: ResolveRequest<C>): QuotientResolution
         const relations = i === 0 && pres ? pres.columns.filter((c) => c.degree === j) : null;
         const expected = relations
           ? dimF
-          : dimF - (i === 0 ? tBlock.length : (prevKernelDims.get(`${j}|${key}`) ?? 0));
+          : dimF - (i === 0 ? tBlock.length : (prevKernelDims.get(j, key) ?? 0));
         const P = new Echelon<C>(K, dimF);
         // Products beyond rank `expected` add nothing: they all lie in K_{i,j}.
         products: for (let v = 0; v < R.n && expected > 0; v++) {
@@ -210,7 +202,7 @@ export function resolveDegreewise<C>(req: ResolveRequest<C>): QuotientResolution
           const cols = free.map((k) => densify(K, images.of(j, block[k]), TL, tBlock.length));
           const ker = kernelBasis(K, tBlock.length, cols, () => checkpoint(opts, info));
           if (ker.length !== expected - P.rank) throw new AlgebraError("runtime", "resolution: internal inconsistency (kernel dimension)");
-          const md = key === "*" ? undefined : key.split(",").map(Number);
+          const md = multidegreeOf(key);
           for (const c of ker) {
             const z = new Array<C>(dimF).fill(K.zero);
             c.forEach((a, k) => (z[free[k]] = a));
@@ -219,7 +211,7 @@ export function resolveDegreewise<C>(req: ResolveRequest<C>): QuotientResolution
           }
         }
         here.set(key, P);
-        kernelDims.set(`${j}|${key}`, P.rank);
+        kernelDims.set(j, key, P.rank);
         req.inspect?.({ i, j, F, block, kernel: P, decomposable });
       }
       kernels.delete(j - maxW);
