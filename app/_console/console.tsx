@@ -11,7 +11,7 @@ import { GUIDED_TOUR, type GuidedExample } from "@/lib/examples/tour";
 import { cancelCell, createSession, deleteObject, errorOf, exportUrl, keys, messageOf, renameObject, type ExportFormat } from "./api/client";
 import { importSession } from "./api/sharing";
 import { runCell } from "./api/cell-stream";
-import type { NamedObject } from "./api/types";
+import type { NamedObject } from "@/lib/wire/reading";
 import { InputEditor, type EditorHandle } from "./input-editor";
 import { applyCellEvent, startedCell, type RunningCell } from "./state/running-cell";
 import { useTheme } from "./theme";

@@ -4,7 +4,8 @@
 /// of every key, so the holder's requests carry it; a signed-out visitor has no session list.
 import useSWR from "swr";
 import { ApiError, fetchJson, keys } from "./api/client";
-import type { Cell, NamedObject, SessionDetail, SessionSummary } from "./api/types";
+import type { Cell } from "@/lib/wire/reading";
+import type { NamedObject, SessionDetail, SessionSummary } from "@/lib/wire/reading";
 
 const loadProblemOf = (e: unknown): string | null =>
   e === undefined || e === null ? null : e instanceof ApiError ? e.message : "The server could not be reached.";

@@ -1,6 +1,6 @@
 /// Calls to the sessions API (app/api/README.md): a JSON fetcher for SWR that turns the
 /// API's `{error: {code, message}}` answers into thrown ApiErrors, and the mutations.
-import type { NamedObject } from "./types";
+import type { NamedObject } from "@/lib/wire/reading";
 
 /// An error answer of the API, with its HTTP status and the server's message.
 export class ApiError extends Error {

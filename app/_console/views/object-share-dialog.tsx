@@ -4,7 +4,7 @@
 import useSWR from "swr";
 import { fetchJson, keys, messageOf } from "../api/client";
 import { revokeObjectShare, shareObject, type Share } from "../api/sharing";
-import type { NamedObject } from "../api/types";
+import type { NamedObject } from "@/lib/wire/reading";
 import { GrantsEditor } from "./grants-editor";
 
 /// The dialog's body for `object` (rendered inside a Modal).
