@@ -3,7 +3,8 @@
 /// and its named objects, with their errors as messages. A read-only link's token is part
 /// of every key, so the holder's requests carry it; a signed-out visitor has no session list.
 import useSWR from "swr";
-import { ApiError, fetchJson, keys } from "./api/client";
+import { keys } from "./api/client";
+import { ApiError, fetchJson } from "@/app/_client/fetch";
 import type { Cell } from "@/lib/wire/reading";
 import type { NamedObject, SessionDetail, SessionSummary } from "@/lib/wire/reading";
 
