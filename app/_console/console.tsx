@@ -26,6 +26,7 @@ const focusFirst = (selector: string) => document.querySelector<HTMLElement>(sel
 export function Console(props: ConsoleProps) {
   const c = useConsole(props);
   const { signedIn, sessionId, data, objects, running, editor, setDialog, setSharingObject, newSession, cancelRunning } = c;
+  const { canEdit, canShare, exportTranscript, runInput, insertExample, openSession, insertName } = c;
   const { theme, toggle: toggleTheme } = useTheme();
   const [paletteOpen, setPaletteOpen] = useState(false);
   const openDialog = useCallback((d: Exclude<DialogName, null>) => setDialog(d), [setDialog]);
@@ -35,8 +36,8 @@ export function Console(props: ConsoleProps) {
     () =>
       paletteCommands({
         signedIn,
-        canEdit: c.canEdit,
-        canShare: c.canShare,
+        canEdit,
+        canShare,
         sessionId,
         running: running !== null,
         theme,
@@ -46,18 +47,37 @@ export function Console(props: ConsoleProps) {
           newSession: () => void newSession(),
           openDialog,
           toggleTheme,
-          exportTranscript: (format) => void c.exportTranscript(format),
+          exportTranscript: (format) => void exportTranscript(format),
           shareObject: setSharingObject,
-          runInput: c.runInput,
+          runInput,
           cancelRunning: () => void cancelRunning(),
-          insertExample: c.insertExample,
-          openSession: c.openSession,
-          insertName: c.insertName,
+          insertExample,
+          openSession,
+          insertName,
           goTo: (path) => window.location.assign(path),
           openInNewTab: (path) => void window.open(path, "_blank"),
         },
       }),
-    [signedIn, c.canEdit, c.canShare, sessionId, running, theme, data.sessions, objects, newSession, openDialog, toggleTheme, c.exportTranscript, setSharingObject, c.runInput, cancelRunning, c.insertExample, c.openSession, c.insertName],
+    [
+      signedIn,
+      canEdit,
+      canShare,
+      sessionId,
+      running,
+      theme,
+      data.sessions,
+      objects,
+      newSession,
+      openDialog,
+      toggleTheme,
+      exportTranscript,
+      setSharingObject,
+      runInput,
+      cancelRunning,
+      insertExample,
+      openSession,
+      insertName,
+    ],
   );
 
   const togglePalette = useCallback(() => setPaletteOpen((o) => !o), []);
@@ -96,7 +116,9 @@ export function Console(props: ConsoleProps) {
             onImport={() => setDialog("transfer")}
           />
         ) : (
-          <p className="text-sm text-ink-soft dark:text-paper/70">You are reading one session through its read-only link. Sign in to work in sessions of your own.</p>
+          <p className="text-sm text-ink-soft dark:text-paper/70">
+            You are reading one session through its read-only link. Sign in to work in sessions of your own.
+          </p>
         )}
         <Shelf
           objects={objects}
@@ -132,7 +154,12 @@ export function Console(props: ConsoleProps) {
           onOpenTour={() => setDialog("tour")}
           onCancel={() => void cancelRunning()}
         />
-        <p role="status" aria-live="polite" className="min-h-[1.25rem] px-4 text-sm text-ink-soft dark:text-signal-soft" data-testid="console-notice">
+        <p
+          role="status"
+          aria-live="polite"
+          className="min-h-[1.25rem] px-4 text-sm text-ink-soft dark:text-signal-soft"
+          data-testid="console-notice"
+        >
           {c.notice}
         </p>
         <InputBar

@@ -59,7 +59,11 @@ export function hoverDoc(options: NotationCompletionOptions, source: string, pos
   while (dot >= 0 && /[ \t]/.test(source[dot])) dot--;
   if (dot >= 0 && source[dot] === "." && source[dot - 1] !== ".") {
     const t = typeBefore(options, source, dot);
-    const owned = t ? ownerKinds(t).map((k) => lookupProperty(k, word)).filter((q): q is PropertySig => q !== undefined) : [];
+    const owned = t
+      ? ownerKinds(t)
+          .map((k) => lookupProperty(k, word))
+          .filter((q): q is PropertySig => q !== undefined)
+      : [];
     return propertyDoc(owned.length ? owned : PROPERTIES.filter((q) => q.name === word), from, to);
   }
   if (completionPlace(source, to).kind === "ring-option") {

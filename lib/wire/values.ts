@@ -50,7 +50,13 @@ export const ModuleJson = z.object({
   ...ringRef,
 });
 const BettiEntries = z.array(z.tuple([count, z.number().int(), z.number().int().positive()]));
-export const BettiTableJson = z.object({ type: z.literal("BettiTable"), text, entries: BettiEntries, complete: z.boolean(), note: z.string().optional() });
+export const BettiTableJson = z.object({
+  type: z.literal("BettiTable"),
+  text,
+  entries: BettiEntries,
+  complete: z.boolean(),
+  note: z.string().optional(),
+});
 export const ComplexJson = z.object({
   type: z.literal("Complex"),
   text,
@@ -110,9 +116,22 @@ type Leaf =
   | z.infer<typeof SeriesJson>
   | z.infer<typeof NoneJson>;
 
-export interface ListJson { type: "List"; text: string; items: ValueJson[] }
-export interface RecordJson { type: "Record"; text: string; fields: Record<string, ValueJson> }
-export interface TableJson { type: "Table"; text: string; columns: string[]; rows: ValueJson[][] }
+export interface ListJson {
+  type: "List";
+  text: string;
+  items: ValueJson[];
+}
+export interface RecordJson {
+  type: "Record";
+  text: string;
+  fields: Record<string, ValueJson>;
+}
+export interface TableJson {
+  type: "Table";
+  text: string;
+  columns: string[];
+  rows: ValueJson[][];
+}
 /// Functions carry their source, parameters, the values of the names they captured and
 /// the ring their literals are read in, so a later cell can rebuild the closure.
 export interface FunctionJson {
@@ -162,10 +181,26 @@ export const FamilyJson: z.ZodType<FamilyJson> = z.object({
 });
 
 const byType = {
-  Int: IntJson, Rat: RatJson, Bool: BoolJson, Str: StrJson, Field: FieldJson, Ring: RingJson,
-  Poly: PolyJson, Ideal: IdealJson, Matrix: MatrixJson, Module: ModuleJson, Complex: ComplexJson,
-  BettiTable: BettiTableJson, HilbertSeries: HilbertSeriesJson, Series: SeriesJson, List: ListJson,
-  Record: RecordJson, Table: TableJson, Function: FunctionJson, Family: FamilyJson, None: NoneJson,
+  Int: IntJson,
+  Rat: RatJson,
+  Bool: BoolJson,
+  Str: StrJson,
+  Field: FieldJson,
+  Ring: RingJson,
+  Poly: PolyJson,
+  Ideal: IdealJson,
+  Matrix: MatrixJson,
+  Module: ModuleJson,
+  Complex: ComplexJson,
+  BettiTable: BettiTableJson,
+  HilbertSeries: HilbertSeriesJson,
+  Series: SeriesJson,
+  List: ListJson,
+  Record: RecordJson,
+  Table: TableJson,
+  Function: FunctionJson,
+  Family: FamilyJson,
+  None: NoneJson,
 } as const;
 /// The schema of each value type's encoding, by type name.
 export const ValueJsonSchemas: { readonly [K in ValueJson["type"]]: z.ZodType<Extract<ValueJson, { type: K }>> } = byType;

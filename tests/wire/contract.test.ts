@@ -27,7 +27,17 @@ describe("lib/wire", () => {
       createdAt: "2026-01-01T00:00:00.000Z",
     };
     expect(Cell.parse(cell)).toEqual(cell);
-    const object = { id: "o1", name: "R", type: "Ring", value: ring, summary: "Q[x, y]", source: "R := Q[x, y]", sourceCellId: "c1", origin: null, updatedAt: "2026-01-01T00:00:00.000Z" };
+    const object = {
+      id: "o1",
+      name: "R",
+      type: "Ring",
+      value: ring,
+      summary: "Q[x, y]",
+      source: "R := Q[x, y]",
+      sourceCellId: "c1",
+      origin: null,
+      updatedAt: "2026-01-01T00:00:00.000Z",
+    };
     expect(NamedObject.parse(object)).toEqual(object);
   });
 

@@ -47,7 +47,11 @@ export function ConsoleDialogs(props: {
       <Modal open={dialog === "share" && sessionId !== null} title={`Share “${session?.title ?? "this session"}”`} onClose={onClose}>
         {sessionId && <ShareSessionPanel sessionId={sessionId} onChanged={props.onNotice} />}
       </Modal>
-      <Modal open={sharingObject !== null} title={`Share the named object ${sharingObject?.name ?? ""}`} onClose={props.onCloseSharingObject}>
+      <Modal
+        open={sharingObject !== null}
+        title={`Share the named object ${sharingObject?.name ?? ""}`}
+        onClose={props.onCloseSharingObject}
+      >
         {sharingObject && <ShareObjectPanel object={sharingObject} onChanged={props.onNotice} />}
       </Modal>
       <Modal open={dialog === "shared-objects"} title="Objects shared with me" onClose={onClose}>

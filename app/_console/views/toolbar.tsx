@@ -25,7 +25,10 @@ export function Toolbar(props: {
           {session?.title ?? (sessionId ? "…" : "No session open")}
         </h1>
         {session && !session.canEdit && (
-          <span className="rounded bg-signal-soft px-1.5 py-0.5 text-xs text-ink dark:bg-signal/30 dark:text-paper" data-testid="read-only-badge">
+          <span
+            className="rounded bg-signal-soft px-1.5 py-0.5 text-xs text-ink dark:bg-signal/30 dark:text-paper"
+            data-testid="read-only-badge"
+          >
             {readOnlyLink ? "read-only shared link" : "read-only"}
           </span>
         )}
@@ -37,28 +40,48 @@ export function Toolbar(props: {
             First steps
           </button>
           {canShare && (
-            <button type="button" className={buttonSecondary} onClick={() => onDialog("share")} title="Share this session, publish a read-only link">
+            <button
+              type="button"
+              className={buttonSecondary}
+              onClick={() => onDialog("share")}
+              title="Share this session, publish a read-only link"
+            >
               Share
             </button>
           )}
           {(sessionId || signedIn) && (
-            <button type="button" className={buttonSecondary} onClick={() => onDialog("transfer")} title="Export the transcript or import a session (Alt+E)">
+            <button
+              type="button"
+              className={buttonSecondary}
+              onClick={() => onDialog("transfer")}
+              title="Export the transcript or import a session (Alt+E)"
+            >
               Export
             </button>
           )}
           <button type="button" className={buttonSecondary} onClick={() => onDialog("help")} title="Keyboard help (Alt+/)">
             Keys
           </button>
-          <button type="button" className={buttonSecondary} onClick={onToggleTheme} aria-pressed={theme === "dark"} title="Switch theme (Alt+T)">
+          <button
+            type="button"
+            className={buttonSecondary}
+            onClick={onToggleTheme}
+            aria-pressed={theme === "dark"}
+            title="Switch theme (Alt+T)"
+          >
             {theme === "dark" ? "Light" : "Dark"}
           </button>
         </span>
       </div>
 
       {readOnlyLink && (
-        <p role="note" className="border-b border-signal/30 bg-signal-soft/40 px-4 py-1.5 text-sm dark:bg-signal/15" data-testid="link-banner">
-          You are reading {session?.ownerName ? `${session.ownerName}'s session` : "this session"} through a read-only shared link:
-          the transcript and named objects can be read and exported, nothing can be run.
+        <p
+          role="note"
+          className="border-b border-signal/30 bg-signal-soft/40 px-4 py-1.5 text-sm dark:bg-signal/15"
+          data-testid="link-banner"
+        >
+          You are reading {session?.ownerName ? `${session.ownerName}'s session` : "this session"} through a read-only shared link: the
+          transcript and named objects can be read and exported, nothing can be run.
         </p>
       )}
     </>

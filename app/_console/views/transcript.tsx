@@ -36,7 +36,11 @@ export function Transcript(props: {
           {sessionError}
         </p>
       )}
-      {cellsError && !sessionError && <p role="alert" className="py-3 text-sm text-red-700 dark:text-red-300">{cellsError}</p>}
+      {cellsError && !sessionError && (
+        <p role="alert" className="py-3 text-sm text-red-700 dark:text-red-300">
+          {cellsError}
+        </p>
+      )}
       {empty && <EmptySessionWelcome onInsert={onInsertExample} onOpenTour={onOpenTour} canRun={canEdit} />}
       {noSessions && <EmptySessionWelcome onInsert={onInsertExample} onOpenTour={onOpenTour} canRun />}
       {shownCells.map((c) => (
