@@ -205,10 +205,7 @@ export const invitations = pgTable(
     acceptedAt: timestamp("accepted_at", { withTimezone: true }),
     createdAt: createdAt(),
   },
-  (t) => [
-    index("invitations_team_idx").on(t.teamId),
-    check("invitations_email_lower", sql`${t.email} = lower(${t.email})`),
-  ],
+  (t) => [index("invitations_team_idx").on(t.teamId), check("invitations_email_lower", sql`${t.email} = lower(${t.email})`)],
 );
 
 /// Security-relevant events. `details` never holds a password or a token.
@@ -252,8 +249,5 @@ export const signInAttempts = pgTable(
     address: text("address").notNull(),
     succeeded: boolean("succeeded").notNull(),
   },
-  (t) => [
-    index("sign_in_attempts_email_idx").on(t.email, t.at),
-    index("sign_in_attempts_address_idx").on(t.address, t.at),
-  ],
+  (t) => [index("sign_in_attempts_email_idx").on(t.email, t.at), index("sign_in_attempts_address_idx").on(t.address, t.at)],
 );

@@ -18,7 +18,9 @@ function digest(token: string): string {
 /// A fresh token for the user (32 random bytes, base64url); only its SHA-256 is stored.
 export async function issueVerificationToken(exec: Executor, userId: string): Promise<string> {
   const token = randomBytes(32).toString("base64url");
-  await exec.insert(emailVerifications).values({ tokenHash: digest(token), userId, expiresAt: new Date(Date.now() + VERIFICATION_LIFETIME_MS) });
+  await exec
+    .insert(emailVerifications)
+    .values({ tokenHash: digest(token), userId, expiresAt: new Date(Date.now() + VERIFICATION_LIFETIME_MS) });
   return token;
 }
 

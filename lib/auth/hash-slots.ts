@@ -39,7 +39,8 @@ export async function withHashSlot<T>(work: () => Promise<T>): Promise<T> {
     return await work();
   } finally {
     const next = state.waiting.shift();
-    if (next) next(); // the slot passes straight to the next caller
+    if (next)
+      next(); // the slot passes straight to the next caller
     else state.running -= 1;
   }
 }

@@ -1,12 +1,10 @@
 /// Account creation: validation, one transaction for the user row, its audit entry and its
 /// e-mail verification token. The answer never says whether the address already had an
 /// account: both cases answer alike, and the mailbox owner learns which case it was.
-import { eq } from "drizzle-orm";
 import { z } from "zod";
 import { db } from "@/db/client";
 import { users } from "@/db/schema";
 import { HttpError } from "@/lib/http/errors";
-import { sendMail } from "@/lib/mail/send";
 import { recordAudit } from "./audit";
 import { issueVerificationToken, verificationLink } from "./email-verification";
 import { HashQueueFull } from "./hash-slots";
@@ -14,7 +12,10 @@ import { normalizeEmail } from "./options";
 import { hashPassword, passwordProblem, PASSWORD_RULE } from "./password";
 
 export const signUpBody = z.object({
-  email: z.string().transform(normalizeEmail).pipe(z.email({ message: "not a valid e-mail address" }).max(254)),
+  email: z
+    .string()
+    .transform(normalizeEmail)
+    .pipe(z.email({ message: "not a valid e-mail address" }).max(254)),
   name: z.string().trim().min(1, { message: "is empty" }).max(100, { message: "is longer than 100 characters" }),
   password: z.string(),
 });
@@ -24,10 +25,17 @@ export type SignUpInput = z.infer<typeof signUpBody>;
 /// What every sign-up with a valid body and an acceptable password answers.
 export const SIGN_UP_ACCEPTED = "Check your mailbox: we sent a link that confirms this address.";
 
+export interface OutgoingMail {
+  to: string;
+  subject: string;
+  text: string;
+}
+
 /// Throws HttpError 400 (weak password, with the rule) or 503 (too many password checks at
-/// once). Creates the account and mails the confirmation link, or, when the address is
-/// taken, mails its owner a notice instead; the caller cannot tell the two apart.
-export async function signUp(input: SignUpInput, address: string, base: string): Promise<void> {
+/// once). Creates the account and returns the welcome mail with its confirmation link, or,
+/// when the address is taken, a notice to its owner instead; the route sends either and
+/// answers alike, so the caller cannot tell the two apart.
+export async function signUp(input: SignUpInput, address: string, base: string): Promise<OutgoingMail> {
   const problem = passwordProblem(input.password, [input.email, input.name]);
   if (problem) throw new HttpError(400, "weak_password", `${problem} ${PASSWORD_RULE}`);
   let passwordHash: string;
@@ -51,14 +59,10 @@ export async function signUp(input: SignUpInput, address: string, base: string):
     await recordAudit(tx, { event: "signup", userId: user.id, email: user.email, address });
     return { user, token: await issueVerificationToken(tx, user.id) };
   });
-  const mail = created
-    ? welcomeMail(input.email, input.name, verificationLink(base, created.token))
-    : takenMail(input.email, base);
-  // The answer is the same whether or not the mail goes out; the log says when it did not.
-  await sendMail(mail).catch((error: Error) => console.error(`[ringside] sign-up mail failed: ${error.message}`));
+  return created ? welcomeMail(input.email, input.name, verificationLink(base, created.token)) : takenMail(input.email, base);
 }
 
-function welcomeMail(to: string, name: string, link: string) {
+function welcomeMail(to: string, name: string, link: string): OutgoingMail {
   return {
     to,
     subject: "Welcome to Ringside",
@@ -71,7 +75,7 @@ function welcomeMail(to: string, name: string, link: string) {
   };
 }
 
-function takenMail(to: string, base: string) {
+function takenMail(to: string, base: string): OutgoingMail {
   return {
     to,
     subject: "Someone tried to create a Ringside account with your address",
@@ -81,10 +85,4 @@ function takenMail(to: string, base: string) {
       `If it was you, sign in at ${base}/sign-in instead.\n\n` +
       "Ringside\n",
   };
-}
-
-/// Looks up whether an address belongs to a confirmed account (for sharing by e-mail).
-export async function confirmedAccountId(email: string): Promise<string | null> {
-  const [row] = await db().select({ id: users.id, verified: users.emailVerifiedAt }).from(users).where(eq(users.email, normalizeEmail(email)));
-  return row && row.verified ? row.id : null;
 }

@@ -10,7 +10,12 @@ export const EXPORT_VERSION = 1;
 export const IMPORT_LIMITS = { cells: 2000, objects: 2000, sourceChars: 100_000 } as const;
 
 // Integers stored in PostgreSQL `integer` columns or compared with them stay within int4.
-const int4 = () => z.number().int().nonnegative().max(INT4_MAX, { message: `is larger than ${INT4_MAX}` });
+const int4 = () =>
+  z
+    .number()
+    .int()
+    .nonnegative()
+    .max(INT4_MAX, { message: `is larger than ${INT4_MAX}` });
 const point = z.object({ line: int4().positive(), col: int4().positive() });
 const span = z.object({ from: point, to: point });
 
@@ -63,7 +68,8 @@ export const SessionExport = z
   .superRefine((doc, ctx) => {
     const positions = new Set<number>();
     doc.cells.forEach((c, i) => {
-      if (positions.has(c.position)) ctx.addIssue({ code: "custom", path: ["cells", i, "position"], message: "two cells share this position" });
+      if (positions.has(c.position))
+        ctx.addIssue({ code: "custom", path: ["cells", i, "position"], message: "two cells share this position" });
       positions.add(c.position);
     });
     const names = new Set<string>();

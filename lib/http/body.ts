@@ -9,11 +9,7 @@ export const DEFAULT_BODY_LIMIT = 64 * 1024;
 /// deeper than MAX_JSON_DEPTH, a NUL or lone surrogate in any string, a number JSON cannot
 /// carry exactly — lib/http/json-guard.ts — or a body that fails the schema; `details`
 /// lists each failing field path and why).
-export async function readJson<S extends z.ZodType>(
-  req: Request,
-  schema: S,
-  opts: { maxBytes?: number } = {},
-): Promise<z.infer<S>> {
+export async function readJson<S extends z.ZodType>(req: Request, schema: S, opts: { maxBytes?: number } = {}): Promise<z.infer<S>> {
   const maxBytes = opts.maxBytes ?? DEFAULT_BODY_LIMIT;
   const type = req.headers.get("content-type") ?? "";
   if (!/^application\/(.+\+)?json\b/i.test(type)) {

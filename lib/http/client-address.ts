@@ -62,7 +62,8 @@ export function parseTrustedProxies(spec: string | undefined): BlockList {
     if (!entry) continue;
     const [addr, bits, extra] = entry.split("/");
     const family = isIP(addr ?? "");
-    if (family === 0 || extra !== undefined) throw new Error(`RINGSIDE_TRUSTED_PROXIES: ${JSON.stringify(entry)} is not an address or CIDR block`);
+    if (family === 0 || extra !== undefined)
+      throw new Error(`RINGSIDE_TRUSTED_PROXIES: ${JSON.stringify(entry)} is not an address or CIDR block`);
     const type = family === 4 ? "ipv4" : "ipv6";
     if (bits === undefined) {
       list.addAddress(addr!, type);

@@ -22,7 +22,8 @@ export function nestingProblem(text: string, maxDepth = MAX_JSON_DEPTH): string 
   for (let i = 0; i < text.length; i++) {
     const c = text.charCodeAt(i);
     if (inString) {
-      if (c === 0x5c) i++; // backslash: skip the escaped character
+      if (c === 0x5c)
+        i++; // backslash: skip the escaped character
       else if (c === 0x22) inString = false;
     } else if (c === 0x22) {
       inString = true;
@@ -65,10 +66,18 @@ export function valueProblem(root: unknown): { path: string; message: string } |
     } else if (value !== null && typeof value === "object") {
       for (const [k, v] of Object.entries(value)) {
         const why = textProblem(k);
-        if (why) return { path: where([...path, k.replace(/[\u0000\uD800-\uDFFF]/g, "?")]), message: `has a key that ${why}` };
+        if (why) return { path: where([...path, printableKey(k)]), message: `has a key that ${why}` };
         stack.push({ value: v, path: [...path, k] });
       }
     }
   }
   return null;
+}
+
+/// A key fit to show in a message: NUL and surrogate code units become "?".
+function printableKey(k: string): string {
+  return Array.from(k, (c) => {
+    const code = c.charCodeAt(0);
+    return code === 0 || (code >= 0xd800 && code <= 0xdfff && c.length === 1) ? "?" : c;
+  }).join("");
 }

@@ -90,7 +90,11 @@ function invitationView(row: typeof invitations.$inferSelect) {
 
 export async function listInvitations(user: CurrentUser, teamId: string) {
   await requireTeamRole(user, teamId, ["lead"]);
-  const rows = await db().select().from(invitations).where(eq(invitations.teamId, teamId)).orderBy(sql`${invitations.createdAt} DESC`);
+  const rows = await db()
+    .select()
+    .from(invitations)
+    .where(eq(invitations.teamId, teamId))
+    .orderBy(sql`${invitations.createdAt} DESC`);
   return rows.map((r) => invitationView({ ...r, status: r.status === "pending" && r.expiresAt <= new Date() ? "expired" : r.status }));
 }
 
@@ -179,7 +183,11 @@ export async function acceptInvitation(user: CurrentUser, token: string, address
     }
     if (row.email !== user.email) {
       return {
-        error: new HttpError(403, "invitation_wrong_account", `This invitation is for ${row.email}; sign in with that address to accept it.`),
+        error: new HttpError(
+          403,
+          "invitation_wrong_account",
+          `This invitation is for ${row.email}; sign in with that address to accept it.`,
+        ),
         audit: { ...base, reason: "wrong_account" },
       };
     }
@@ -190,7 +198,13 @@ export async function acceptInvitation(user: CurrentUser, token: string, address
     // Someone already in the team keeps their role (an invitation never demotes a lead).
     if (!existing) await tx.insert(memberships).values({ teamId: row.teamId, userId: user.id, role: row.role });
     await tx.update(invitations).set({ status: "accepted", acceptedAt: new Date() }).where(eq(invitations.id, row.id));
-    await auditSharing(tx, { event: "invitation_accepted", userId: user.id, email: user.email, address, details: { ...base, role: row.role } });
+    await auditSharing(tx, {
+      event: "invitation_accepted",
+      userId: user.id,
+      email: user.email,
+      address,
+      details: { ...base, role: row.role },
+    });
     return { result: { teamId: row.teamId, role: existing?.role ?? row.role } };
   });
   if ("error" in outcome && outcome.error) {

@@ -36,10 +36,7 @@ async function resolveGrantee(user: CurrentUser, grantee: Grantee, ownerId: stri
   const database = db();
   if ("email" in grantee) {
     const email = grantee.email.toLowerCase();
-    const [target] = await database
-      .select({ id: users.id, verified: users.emailVerifiedAt })
-      .from(users)
-      .where(eq(users.email, email));
+    const [target] = await database.select({ id: users.id, verified: users.emailVerifiedAt }).from(users).where(eq(users.email, email));
     if (target?.id === ownerId) throw new HttpError(409, "is_owner", "That is the owner, who has every right already.");
     // Without a confirmed account the share waits for the address (and grants nothing
     // until an account confirms it); the answer is the same either way, so sharing does
@@ -101,7 +98,11 @@ async function upsertShare(
   const targetId = "sessionId" in target ? target.sessionId : target.objectId;
   const granteeCond = g.userId ? eq(shares.userId, g.userId) : g.teamId ? eq(shares.teamId, g.teamId) : eq(shares.email, g.email!);
   const { id, created } = await db().transaction(async (tx) => {
-    const [existing] = await tx.select().from(shares).where(and(eq(targetCol, targetId), granteeCond)).for("update");
+    const [existing] = await tx
+      .select()
+      .from(shares)
+      .where(and(eq(targetCol, targetId), granteeCond))
+      .for("update");
     if (existing) {
       if (existing.role !== role) await tx.update(shares).set({ role }).where(eq(shares.id, existing.id));
       await auditSharing(tx, {
@@ -109,7 +110,16 @@ async function upsertShare(
         userId: user.id,
         email: user.email,
         address,
-        details: { ...target, shareId: existing.id, grantee: g.label, userId: g.userId, teamId: g.teamId, pending: g.email !== null, from: existing.role, to: role },
+        details: {
+          ...target,
+          shareId: existing.id,
+          grantee: g.label,
+          userId: g.userId,
+          teamId: g.teamId,
+          pending: g.email !== null,
+          from: existing.role,
+          to: role,
+        },
       });
       return { id: existing.id, created: false };
     }
@@ -145,7 +155,10 @@ async function deleteShare(
   const targetCol = "sessionId" in target ? shares.sessionId : shares.objectId;
   const targetId = "sessionId" in target ? target.sessionId : target.objectId;
   await db().transaction(async (tx) => {
-    const [row] = await tx.delete(shares).where(and(eq(shares.id, shareId), eq(targetCol, targetId))).returning();
+    const [row] = await tx
+      .delete(shares)
+      .where(and(eq(shares.id, shareId), eq(targetCol, targetId)))
+      .returning();
     if (!row) throw notFound("The share");
     await auditSharing(tx, {
       event: "share_revoked",
@@ -161,17 +174,27 @@ async function deleteShare(
 
 /// The read-only link's address while one is published (the token is the link).
 export function linkUrl(base: string, session: SessionRow): string | null {
-  return session.shareToken
-    ? `${base}/?session=${session.id}&link=${encodeURIComponent(session.shareToken)}`
-    : null;
+  return session.shareToken ? `${base}/?session=${session.id}&link=${encodeURIComponent(session.shareToken)}` : null;
 }
 
 export async function listSessionShares(user: CurrentUser, sessionId: string, base: string, linkToken?: string | null) {
   const session = await requireSharingManager(user, sessionId, linkToken);
-  return { shares: await sharesOf({ sessionId }), link: { url: linkUrl(base, session) }, teamId: session.teamId, visibility: session.visibility };
+  return {
+    shares: await sharesOf({ sessionId }),
+    link: { url: linkUrl(base, session) },
+    teamId: session.teamId,
+    visibility: session.visibility,
+  };
 }
 
-export async function shareSession(user: CurrentUser, sessionId: string, grantee: Grantee, role: ShareRole, address: string, linkToken?: string | null) {
+export async function shareSession(
+  user: CurrentUser,
+  sessionId: string,
+  grantee: Grantee,
+  role: ShareRole,
+  address: string,
+  linkToken?: string | null,
+) {
   const session = await requireSharingManager(user, sessionId, linkToken);
   return upsertShare(user, { sessionId }, grantee, role, session.ownerId, address);
 }
@@ -188,11 +211,7 @@ export async function publishLink(user: CurrentUser, sessionId: string, base: st
     const [session] = await tx.select().from(sessions).where(eq(sessions.id, sessionId)).for("update");
     if (session!.shareToken) return { url: linkUrl(base, session!)!, created: false };
     // Only the token changes: a link never opens the session to its team (visibility).
-    const [row] = await tx
-      .update(sessions)
-      .set({ shareToken: newToken() })
-      .where(eq(sessions.id, sessionId))
-      .returning();
+    const [row] = await tx.update(sessions).set({ shareToken: newToken() }).where(eq(sessions.id, sessionId)).returning();
     await auditSharing(tx, { event: "link_published", userId: user.id, email: user.email, address, details: { sessionId } });
     return { url: linkUrl(base, row!)!, created: true };
   });
@@ -248,7 +267,14 @@ export async function listObjectShares(user: CurrentUser, objectId: string, link
   return sharesOf({ objectId });
 }
 
-export async function shareObject(user: CurrentUser, objectId: string, grantee: Grantee, role: ShareRole, address: string, linkToken?: string | null) {
+export async function shareObject(
+  user: CurrentUser,
+  objectId: string,
+  grantee: Grantee,
+  role: ShareRole,
+  address: string,
+  linkToken?: string | null,
+) {
   const { session } = await requireObjectManager(user, objectId, linkToken);
   return upsertShare(user, { objectId }, grantee, role, session.ownerId, address);
 }
@@ -319,7 +345,15 @@ export async function importObject(
     return await db().transaction(async (tx) => {
       const [row] = await tx
         .insert(namedObjects)
-        .values({ sessionId: input.sessionId, ownerId: user.id, name, type: object.type, value: object.value, source: object.source, origin })
+        .values({
+          sessionId: input.sessionId,
+          ownerId: user.id,
+          name,
+          type: object.type,
+          value: object.value,
+          source: object.source,
+          origin,
+        })
         .returning();
       await tx.update(sessions).set({ updatedAt: new Date() }).where(eq(sessions.id, input.sessionId));
       await auditSharing(tx, {
@@ -338,4 +372,3 @@ export async function importObject(
     throw error;
   }
 }
-

@@ -20,7 +20,12 @@ describe("withHashSlot", () => {
         return i;
       });
     const total = HASH_SLOTS + MAX_WAITING + 3;
-    const outcomes = Array.from({ length: total }, (_, i) => task(i).then((v) => ({ ok: v }), (e: unknown) => ({ error: e })));
+    const outcomes = Array.from({ length: total }, (_, i) =>
+      task(i).then(
+        (v) => ({ ok: v }),
+        (e: unknown) => ({ error: e }),
+      ),
+    );
     await new Promise((r) => setTimeout(r, 10));
     expect(running).toBe(HASH_SLOTS);
     expect(hashQueueFull()).toBe(true);

@@ -42,7 +42,11 @@ browserTest("a crafted import renders: bad values fail in their own cells only",
   });
   await signIn(page, baseUrl, "member");
   const answer = await page.evaluate(async (doc) => {
-    const r = await fetch("/api/sessions/import", { method: "POST", headers: { "Content-Type": "application/json" }, body: JSON.stringify(doc) });
+    const r = await fetch("/api/sessions/import", {
+      method: "POST",
+      headers: { "Content-Type": "application/json" },
+      body: JSON.stringify(doc),
+    });
     return { status: r.status, body: (await r.json()) as { session?: { id: string } } };
   }, CRAFTED);
   check(answer.status === 201 && Boolean(answer.body.session?.id), `the import answered ${answer.status}`);

@@ -3,7 +3,13 @@
 /// suites in tests/integration show the same rules on the running server.
 import { describe, expect, it } from "vitest";
 import { safeCallback } from "@/app/(auth)/safe-callback";
-import { CLIENT_ADDRESS_HEADER, clientAddress, markClientAddressResolved, parseTrustedProxies, resolveClientAddress } from "@/lib/http/client-address";
+import {
+  CLIENT_ADDRESS_HEADER,
+  clientAddress,
+  markClientAddressResolved,
+  parseTrustedProxies,
+  resolveClientAddress,
+} from "@/lib/http/client-address";
 import { nestingProblem, textProblem, valueProblem } from "@/lib/http/json-guard";
 import { checkSameOrigin } from "@/lib/http/same-origin";
 
@@ -65,10 +71,16 @@ describe("checkSameOrigin", () => {
 });
 
 describe("safeCallback", () => {
-  it.each(["/\t/evil.example", "//evil.example", "/\\evil.example", "/\\/evil.example", "/\n/evil.example", "https://evil.example", "javascript:alert(1)", ""])(
-    "sends %j home",
-    (v) => expect(safeCallback(v)).toBe("/"),
-  );
+  it.each([
+    "/\t/evil.example",
+    "//evil.example",
+    "/\\evil.example",
+    "/\\/evil.example",
+    "/\n/evil.example",
+    "https://evil.example",
+    "javascript:alert(1)",
+    "",
+  ])("sends %j home", (v) => expect(safeCallback(v)).toBe("/"));
 
   it("keeps same-site paths, queries and fragments", () => {
     expect(safeCallback("/teams?x=1#top")).toBe("/teams?x=1#top");

@@ -23,7 +23,10 @@ async function errorOf(response: Response): Promise<{ code: string; message: str
 
 async function rowsFor(email: string) {
   const u = await db().select().from(users).where(eq(users.email, email));
-  const a = await db().select().from(auditLog).where(sql`${auditLog.email} = ${email} AND ${auditLog.event} = 'signup'`);
+  const a = await db()
+    .select()
+    .from(auditLog)
+    .where(sql`${auditLog.email} = ${email} AND ${auditLog.event} = 'signup'`);
   return { users: u.length, audits: a.length };
 }
 
@@ -88,7 +91,11 @@ describe("sign-up with bad input", () => {
   it("answers 413 for an oversized body, declared or streamed", async () => {
     const email = uniqueEmail("huge");
     const big = JSON.stringify({ email, name: "x".repeat(20_000), password: GOOD_PASSWORD });
-    const declared = await client().request("/api/auth/signup", { method: "POST", headers: { "Content-Type": "application/json" }, body: big });
+    const declared = await client().request("/api/auth/signup", {
+      method: "POST",
+      headers: { "Content-Type": "application/json" },
+      body: big,
+    });
     expect(declared.status).toBe(413);
     expect(declared.headers.get("connection")).toBe("close");
     expect((await errorOf(declared)).code).toBe("body_too_large");

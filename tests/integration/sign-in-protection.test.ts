@@ -18,7 +18,9 @@ const PASSWORD = "bounded-hashing-8217";
 
 async function newAccount(): Promise<string> {
   const email = uniqueEmail("guard");
-  expect((await new TestClient(testAddress(90)).json("/api/auth/signup", { email, name: "Guard Tester", password: PASSWORD })).status).toBe(201);
+  expect((await new TestClient(testAddress(90)).json("/api/auth/signup", { email, name: "Guard Tester", password: PASSWORD })).status).toBe(
+    201,
+  );
   return email;
 }
 
@@ -59,9 +61,18 @@ describe("the sign-in rate limit covers every encoding", () => {
   it("refuses a credentials body whose fields are not strings with 400, before any check", async () => {
     const client = new TestClient(testAddress(107));
     const csrf = (await (await client.request("/api/auth/csrf")).json()) as { csrfToken: string };
-    const r = await client.json("/api/auth/callback/credentials", { csrfToken: csrf.csrfToken, email: ["a@b.example"], password: PASSWORD, json: "true" });
+    const r = await client.json("/api/auth/callback/credentials", {
+      csrfToken: csrf.csrfToken,
+      email: ["a@b.example"],
+      password: PASSWORD,
+      json: "true",
+    });
     expect(r.status).toBe(400);
-    const other = await client.request("/api/auth/callback/credentials", { method: "POST", headers: { "Content-Type": "text/plain" }, body: "email=x" });
+    const other = await client.request("/api/auth/callback/credentials", {
+      method: "POST",
+      headers: { "Content-Type": "text/plain" },
+      body: "email=x",
+    });
     expect(other.status).toBe(415);
   });
 });
@@ -73,14 +84,25 @@ class PeerClient {
   private readonly cookies = new Map<string, string>();
   constructor(readonly localAddress: string) {}
 
-  request(path: string, opts: { method?: string; headers?: Record<string, string>; body?: string } = {}): Promise<{ status: number; text: string }> {
+  request(
+    path: string,
+    opts: { method?: string; headers?: Record<string, string>; body?: string } = {},
+  ): Promise<{ status: number; text: string }> {
     const base = new URL(testEnv("RINGSIDE_TEST_BASE_URL"));
     const headers: Record<string, string> = { Origin: base.origin, ...opts.headers };
     if (this.cookies.size > 0) headers.Cookie = [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; ");
     if (opts.body !== undefined) headers["Content-Length"] = String(Buffer.byteLength(opts.body));
     return new Promise((resolve, reject) => {
       const req = http.request(
-        { host: base.hostname, port: base.port, path, method: opts.method ?? "GET", headers, localAddress: this.localAddress, agent: false },
+        {
+          host: base.hostname,
+          port: base.port,
+          path,
+          method: opts.method ?? "GET",
+          headers,
+          localAddress: this.localAddress,
+          agent: false,
+        },
         (res) => {
           for (const line of res.headers["set-cookie"] ?? []) {
             const [pair] = line.split(";");
@@ -99,7 +121,9 @@ class PeerClient {
   }
 
   async signIn(email: string, password: string, spoofed: string): Promise<number> {
-    const csrf = JSON.parse((await this.request("/api/auth/csrf", { headers: { "X-Forwarded-For": spoofed } })).text) as { csrfToken: string };
+    const csrf = JSON.parse((await this.request("/api/auth/csrf", { headers: { "X-Forwarded-For": spoofed } })).text) as {
+      csrfToken: string;
+    };
     const body = new URLSearchParams({ csrfToken: csrf.csrfToken, email, password, json: "true" }).toString();
     const r = await this.request("/api/auth/callback/credentials", {
       method: "POST",

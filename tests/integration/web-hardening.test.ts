@@ -35,7 +35,9 @@ describe("callbackUrl", () => {
 
   it("keeps a same-site path with its query", async () => {
     const r = await member.request(`/sign-in?callbackUrl=${encodeURIComponent("/teams?x=1")}`);
-    expect(new URL(r.headers.get("location")!, member.base).pathname + new URL(r.headers.get("location")!, member.base).search).toBe("/teams?x=1");
+    expect(new URL(r.headers.get("location")!, member.base).pathname + new URL(r.headers.get("location")!, member.base).search).toBe(
+      "/teams?x=1",
+    );
   });
 
   it.each(ESCAPES)("is refused by the credentials callback too (%j)", async (escape) => {
@@ -79,7 +81,9 @@ describe("cross-origin requests", () => {
       body: JSON.stringify({ name: "forged" }),
     });
     expect(patch.status).toBe(403);
-    const titles = ((await (await member.request("/api/sessions")).json()) as { sessions: { title: string }[] }).sessions.map((s) => s.title);
+    const titles = ((await (await member.request("/api/sessions")).json()) as { sessions: { title: string }[] }).sessions.map(
+      (s) => s.title,
+    );
     expect(titles).not.toContain("forged");
     // the link published from our own origin is still there
     const session = (await (await member.request(`/api/sessions/${id}`)).json()) as { session: Record<string, unknown> };
@@ -94,7 +98,11 @@ describe("cross-origin requests", () => {
       body: JSON.stringify({ title: "x" }),
     });
     expect(site.status).toBe(403);
-    const opaque = await member.request("/api/sessions", { method: "POST", headers: { Origin: "null", "Content-Type": "application/json" }, body: "{}" });
+    const opaque = await member.request("/api/sessions", {
+      method: "POST",
+      headers: { Origin: "null", "Content-Type": "application/json" },
+      body: "{}",
+    });
     expect(opaque.status).toBe(403);
     const bare = await fetch(new URL("/api/auth/signup", member.base), {
       method: "POST",
@@ -110,7 +118,12 @@ describe("cross-origin requests", () => {
     const r = await client.request("/api/auth/callback/credentials", {
       method: "POST",
       headers: { Origin: "https://evil.example", "Content-Type": "application/x-www-form-urlencoded" },
-      body: new URLSearchParams({ csrfToken: csrf.csrfToken, email: TEST_ACCOUNTS.guest.email, password: TEST_ACCOUNTS.guest.password, json: "true" }).toString(),
+      body: new URLSearchParams({
+        csrfToken: csrf.csrfToken,
+        email: TEST_ACCOUNTS.guest.email,
+        password: TEST_ACCOUNTS.guest.password,
+        json: "true",
+      }).toString(),
     });
     expect(r.status).toBe(403);
     expect(client.hasSession()).toBe(false);
@@ -159,7 +172,9 @@ describe("security headers", () => {
 describe("the mail sink", () => {
   it("keeps its folder at mode 700 and every message at 600", async () => {
     const email = uniqueEmail("sink");
-    expect((await new TestClient(testAddress(123)).json("/api/auth/signup", { email, name: "Sink", password: "private-mailbox-5531" })).status).toBe(201);
+    expect(
+      (await new TestClient(testAddress(123)).json("/api/auth/signup", { email, name: "Sink", password: "private-mailbox-5531" })).status,
+    ).toBe(201);
     await waitForMail(email);
     const dir = testEnv("RINGSIDE_MAIL_DIR");
     expect((await stat(dir)).mode & 0o777).toBe(0o700);
@@ -176,7 +191,11 @@ describe("accounts stay private", () => {
       name: "Impostor",
       password: "impostor-attempt-9921",
     });
-    const free = await new TestClient(testAddress(124)).json("/api/auth/signup", { email: uniqueEmail("free"), name: "Impostor", password: "impostor-attempt-9921" });
+    const free = await new TestClient(testAddress(124)).json("/api/auth/signup", {
+      email: uniqueEmail("free"),
+      name: "Impostor",
+      password: "impostor-attempt-9921",
+    });
     expect(taken.status).toBe(free.status);
     const a = (await taken.json()) as { message: string; user: { email: string } };
     const b = (await free.json()) as { message: string; user: { email: string } };
@@ -196,7 +215,11 @@ describe("accounts stay private", () => {
     const nobody = await member.json(`/api/sessions/${id}/shares`, { email: uniqueEmail("nobody"), role: "viewer" });
     const known = await member.json(`/api/sessions/${id}/shares`, { email: TEST_ACCOUNTS.guest.email, role: "viewer" });
     expect([early.status, nobody.status, known.status]).toEqual([201, 201, 201]);
-    const shapes = await Promise.all([early, nobody, known].map(async (r) => JSON.stringify(Object.keys(((await r.json()) as { share: { grantee: object } }).share.grantee).sort())));
+    const shapes = await Promise.all(
+      [early, nobody, known].map(async (r) =>
+        JSON.stringify(Object.keys(((await r.json()) as { share: { grantee: object } }).share.grantee).sort()),
+      ),
+    );
     expect(new Set(shapes).size).toBe(1);
     // someone who signed up with an address they do not own receives nothing
     expect((await claimant.request(`/api/sessions/${id}`)).status).toBe(404);

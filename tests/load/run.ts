@@ -87,7 +87,11 @@ interface PhaseReport {
   failures: Record<string, number>;
 }
 
-async function phase(name: string, users: User[], make: (u: User, n: number) => { method: "GET" | "POST"; path: string; body?: string }): Promise<PhaseReport> {
+async function phase(
+  name: string,
+  users: User[],
+  make: (u: User, n: number) => { method: "GET" | "POST"; path: string; body?: string },
+): Promise<PhaseReport> {
   let n = 0;
   const latencies: number[] = [];
   const failures: Record<string, number> = {};
@@ -169,7 +173,10 @@ async function main(): Promise<void> {
   console.log("| phase | requests | per second | p50 ms | p95 ms | p99 ms | failures |");
   console.log("|---|---|---|---|---|---|---|");
   for (const p of report.phases) {
-    const f = Object.entries(p.failures).map(([k, v]) => `${v} × ${k}`).join("; ") || "none";
+    const f =
+      Object.entries(p.failures)
+        .map(([k, v]) => `${v} × ${k}`)
+        .join("; ") || "none";
     console.log(`| ${p.phase} | ${p.requests} | ${p.perSecond} | ${p.latencyMs.p50} | ${p.latencyMs.p95} | ${p.latencyMs.p99} | ${f} |`);
   }
   console.error(`[load] written to ${path.relative(process.cwd(), out)}`);

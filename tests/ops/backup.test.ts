@@ -74,10 +74,16 @@ beforeAll(async () => {
   await run("node", ["--import", "tsx", "db/migrate.ts"], { cwd: ROOT, env: { ...process.env, DATABASE_URL: sourceUrl } });
 
   const sql = postgres(sourceUrl, { max: 1, onnotice: () => {} });
-  const [user] = await sql`INSERT INTO users (email, display_name, password_hash) VALUES ('keeper@backup.test.example', 'Kira Keeper', '$2b$04$abcdefghijklmnopqrstuv') RETURNING id`;
-  const [other] = await sql`INSERT INTO users (email, display_name, password_hash, email_verified_at) VALUES ('reader@backup.test.example', 'Rui Reader', 'x', NULL) RETURNING id`;
-  const [session] = await sql`INSERT INTO sessions (title, owner_id) VALUES ('Syzygies of three points — Grüße ∂', ${user!.id}) RETURNING id`;
-  const result = { statements: [{ statement: 0, span: null, value: { type: "Poly", text: "x^2 + y^2", nested: { deep: [1, [2, [3]]] } } }], currentRing: "QQ[x,y]" };
+  const [user] =
+    await sql`INSERT INTO users (email, display_name, password_hash) VALUES ('keeper@backup.test.example', 'Kira Keeper', '$2b$04$abcdefghijklmnopqrstuv') RETURNING id`;
+  const [other] =
+    await sql`INSERT INTO users (email, display_name, password_hash, email_verified_at) VALUES ('reader@backup.test.example', 'Rui Reader', 'x', NULL) RETURNING id`;
+  const [session] =
+    await sql`INSERT INTO sessions (title, owner_id) VALUES ('Syzygies of three points — Grüße ∂', ${user!.id}) RETURNING id`;
+  const result = {
+    statements: [{ statement: 0, span: null, value: { type: "Poly", text: "x^2 + y^2", nested: { deep: [1, [2, [3]]] } } }],
+    currentRing: "QQ[x,y]",
+  };
   const [cell] = await sql`INSERT INTO cells (session_id, position, source, status, result, duration_ms)
     VALUES (${session!.id}, 0, ${"R = QQ[x, y]\nf = x^2 + y^2 -- 𝔽 and ü"}, 'done', ${sql.json(result)}, 12) RETURNING id`;
   await sql`INSERT INTO cells (session_id, position, source, status, error) VALUES (${session!.id}, 1, 'bad(', 'error', ${sql.json({ type: "Error", kind: "syntax", message: "unexpected end" })})`;
@@ -88,7 +94,8 @@ beforeAll(async () => {
 }, 120_000);
 
 afterAll(async () => {
-  if (restoreDir) await run("runuser", ["-u", "postgres", "--", `${PG_BIN}/pg_ctl`, "-D", restoreDir, "-m", "fast", "-w", "stop"]).catch(() => undefined);
+  if (restoreDir)
+    await run("runuser", ["-u", "postgres", "--", `${PG_BIN}/pg_ctl`, "-D", restoreDir, "-m", "fast", "-w", "stop"]).catch(() => undefined);
   const admin = postgres(testEnv("DATABASE_URL"), { max: 1, onnotice: () => {} });
   await admin.unsafe(`DROP DATABASE IF EXISTS ${SOURCE_DB} WITH (FORCE)`).catch(() => undefined);
   await admin.end();
@@ -98,7 +105,10 @@ afterAll(async () => {
 describe("npm run backup and npm run restore", () => {
   it("round-trip every table into a fresh cluster", async () => {
     const archive = path.join(work, "backups", "ringside.dump");
-    const backup = await run("npm", ["run", "--silent", "backup", "--", archive], { cwd: ROOT, env: { ...process.env, DATABASE_URL: sourceUrl } });
+    const backup = await run("npm", ["run", "--silent", "backup", "--", archive], {
+      cwd: ROOT,
+      env: { ...process.env, DATABASE_URL: sourceUrl },
+    });
     expect(backup.stderr).toContain("backup written");
     expect((await stat(archive)).mode & 0o777).toBe(0o600);
     expect((await stat(path.dirname(archive))).mode & 0o777).toBe(0o700);
@@ -122,7 +132,14 @@ describe("npm run backup and npm run restore", () => {
 
     const before = await fingerprint(sourceUrl);
     const after = await fingerprint(restoredUrl);
-    for (const table of ["public.users", "public.sessions", "public.cells", "public.named_objects", "public.shares", "drizzle.__drizzle_migrations"]) {
+    for (const table of [
+      "public.users",
+      "public.sessions",
+      "public.cells",
+      "public.named_objects",
+      "public.shares",
+      "drizzle.__drizzle_migrations",
+    ]) {
       expect(before[table], table).toBeDefined();
     }
     expect(before["public.cells"]!.rows).toBe(2);

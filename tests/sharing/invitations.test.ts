@@ -86,7 +86,10 @@ describe("invitations", () => {
     expect(((await stolen.json()) as { error: { code: string } }).error.code).toBe("invitation_wrong_account");
 
     const peek = await invitee.request(`/api/invitations/${token}`);
-    expect(((await peek.json()) as { invitation: { status: string; role: string } }).invitation).toMatchObject({ status: "pending", role: "guest" });
+    expect(((await peek.json()) as { invitation: { status: string; role: string } }).invitation).toMatchObject({
+      status: "pending",
+      role: "guest",
+    });
 
     const accepted = await invitee.request(`/api/invitations/${token}/accept`, { method: "POST" });
     expect(accepted.status).toBe(200);
@@ -124,13 +127,19 @@ describe("invitations", () => {
     const email = uniqueEmail("late");
     const invitation = await invite(email);
     const token = tokenFrom((await mailTo(email)).text);
-    await db().update(invitations).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(invitations.id, invitation.id));
+    await db()
+      .update(invitations)
+      .set({ expiresAt: new Date(Date.now() - 1000) })
+      .where(eq(invitations.id, invitation.id));
     const invitee = new TestClient(testAddress(183));
     await signUp(invitee, email);
     const r = await invitee.request(`/api/invitations/${token}/accept`, { method: "POST" });
     expect(r.status).toBe(410);
     expect(((await r.json()) as { error: { code: string } }).error.code).toBe("invitation_expired");
-    const [m] = await db().select().from(memberships).where(and(eq(memberships.teamId, teamId)));
+    const [m] = await db()
+      .select()
+      .from(memberships)
+      .where(and(eq(memberships.teamId, teamId)));
     expect(m).toBeDefined(); // the lead
     const detail = (await (await lead.request(`/api/teams/${teamId}`)).json()) as { members: { email: string }[] };
     expect(detail.members.map((x) => x.email)).not.toContain(email);

@@ -45,7 +45,10 @@ const canEdit = async (who: keyof World["clients"] | "anonymous", query = "") =>
 describe("session shares", () => {
   it("grant, change and revoke a role by e-mail", async () => {
     expect(await canEdit("outsider")).toBe(404);
-    const r = await w.clients.owner.json(`/api/sessions/${sessionId}/shares`, { email: TEST_ACCOUNTS.outsider.email.toUpperCase(), role: "viewer" });
+    const r = await w.clients.owner.json(`/api/sessions/${sessionId}/shares`, {
+      email: TEST_ACCOUNTS.outsider.email.toUpperCase(),
+      role: "viewer",
+    });
     expect(r.status).toBe(201);
     const { share } = (await r.json()) as { share: { id: string; role: string; grantee: { kind: string; email: string } } };
     expect(share).toMatchObject({ role: "viewer", grantee: { kind: "user", email: TEST_ACCOUNTS.outsider.email } });
@@ -104,7 +107,10 @@ describe("session shares", () => {
   // answers exactly like a share to an account (201 and the same shape), and grants
   // nothing until an account confirms that address (tests/integration/web-hardening.test.ts).
   it("answers a share to an unknown address like any other, revealing no accounts", async () => {
-    const unknown = await w.clients.owner.json(`/api/sessions/${sessionId}/shares`, { email: "Nobody-At-All@harbor.test.example", role: "viewer" });
+    const unknown = await w.clients.owner.json(`/api/sessions/${sessionId}/shares`, {
+      email: "Nobody-At-All@harbor.test.example",
+      role: "viewer",
+    });
     const known = await w.clients.owner.json(`/api/sessions/${sessionId}/shares`, { email: TEST_ACCOUNTS.guest.email, role: "viewer" });
     expect(unknown.status).toBe(201);
     expect(known.status).toBe(201);
@@ -117,10 +123,10 @@ describe("session shares", () => {
     const list = (await (await w.clients.owner.request(`/api/sessions/${sessionId}/shares`)).json()) as { shares: Answer["share"][] };
     const rows = list.shares.filter((x) => x.id === a.id || x.id === b.id);
     expect(rows.map((x) => Object.keys(x.grantee).sort())).toEqual([Object.keys(b.grantee).sort(), Object.keys(b.grantee).sort()]);
-    for (const id of [a.id, b.id]) expect((await w.clients.owner.request(`/api/sessions/${sessionId}/shares/${id}`, { method: "DELETE" })).status).toBe(200);
+    for (const id of [a.id, b.id])
+      expect((await w.clients.owner.request(`/api/sessions/${sessionId}/shares/${id}`, { method: "DELETE" })).status).toBe(200);
   });
 });
-
 
 describe("read-only link", () => {
   it("lets a holder, signed in or not, read until revoked, never run", async () => {
@@ -137,7 +143,9 @@ describe("read-only link", () => {
     const q = `?link=${encodeURIComponent(token)}`;
     expect(await canEdit("linkHolder", q)).toBe("read");
     expect(await canEdit("linkHolder", "?link=wrong-token")).toBe(404);
-    expect((await w.clients.linkHolder.request(`/api/sessions/${sessionId}/export?format=markdown&link=${encodeURIComponent(token)}`)).status).toBe(200);
+    expect(
+      (await w.clients.linkHolder.request(`/api/sessions/${sessionId}/export?format=markdown&link=${encodeURIComponent(token)}`)).status,
+    ).toBe(200);
     // a holder is known to read the session, so running a cell is refused as read-only
     const run = await w.clients.linkHolder.json(`/api/sessions/${sessionId}/cells${q}`, { source: "1 + 1" });
     expect(run.status).toBe(403);
@@ -162,7 +170,8 @@ describe("read-only link", () => {
 
   it("opens a private session of a team to link holders only, not to the team", async () => {
     const [s] = await db().insert(sessions).values({ title: "sharing flows", ownerId: w.ids.lead, teamId: w.group.teamId }).returning();
-    const teamRead = async () => Promise.all((["member", "guest"] as const).map(async (who) => (await w.clients[who].request(`/api/sessions/${s!.id}`)).status));
+    const teamRead = async () =>
+      Promise.all((["member", "guest"] as const).map(async (who) => (await w.clients[who].request(`/api/sessions/${s!.id}`)).status));
     expect(await teamRead()).toEqual([404, 404]);
     const r = await w.clients.lead.request(`/api/sessions/${s!.id}/link`, { method: "POST" });
     expect(r.status).toBe(201);
@@ -196,7 +205,14 @@ describe("shared objects", () => {
     const { object } = (await imported.json()) as { object: { id: string; name: string; value: unknown; origin: Record<string, unknown> } };
     expect(object.name).toBe("J_copy");
     expect(object.value).toEqual({ type: "Int", text: "7", value: "7" });
-    expect(object.origin).toMatchObject({ kind: "object", objectId, sessionId, sessionTitle: "sharing flows", name: "J", ownerName: "Olga Owner" });
+    expect(object.origin).toMatchObject({
+      kind: "object",
+      objectId,
+      sessionId,
+      sessionTitle: "sharing flows",
+      name: "J",
+      ownerName: "Olga Owner",
+    });
     const [row] = await db().select().from(namedObjects).where(eq(namedObjects.id, object.id));
     expect(row!.sessionId).toBe(target);
     expect(row!.ownerId).toBe(w.ids.viewer);
@@ -207,4 +223,3 @@ describe("shared objects", () => {
     expect((await lastAudit("object_imported")).details).toMatchObject({ from: objectId, to: object.id });
   });
 });
-

@@ -18,9 +18,7 @@ export default async function VerifyEmailPage({ searchParams }: { searchParams: 
     <>
       <h1 className="mb-2 text-lg font-semibold">{outcome.ok ? "Address confirmed" : "Cannot confirm this address"}</h1>
       <p role={outcome.ok ? "status" : "alert"} className="mb-4 text-sm text-ink-soft">
-        {outcome.ok
-          ? `${outcome.email} is confirmed: teams can now invite you and colleagues can share with you.`
-          : WHY[outcome.why]}
+        {outcome.ok ? `${outcome.email} is confirmed: teams can now invite you and colleagues can share with you.` : WHY[outcome.why]}
       </p>
       <Link className="font-medium text-ink underline" href="/">
         Open Ringside

@@ -1,7 +1,8 @@
 /// Calls to the collaboration API (README.md, "Collaboration API"): shares of the session
 /// and of its named objects, the read-only link, teams, objects shared with me, imports.
-import { keys, send } from "./client";
-import type { NamedObject } from "./types";
+import { send } from "@/app/_client/fetch";
+import { keys } from "./client";
+import type { NamedObject } from "@/lib/wire/reading";
 
 export type ShareRole = "viewer" | "editor";
 
@@ -13,8 +14,7 @@ export interface Share {
   readonly role: ShareRole;
   readonly grantee:
     // a person, shown by the address the share was made to (whether or not it has an account)
-    | { readonly kind: "user"; readonly email: string }
-    | { readonly kind: "team"; readonly teamId: string; readonly name: string };
+    { readonly kind: "user"; readonly email: string } | { readonly kind: "team"; readonly teamId: string; readonly name: string };
   readonly createdAt: string;
 }
 

@@ -2,9 +2,10 @@
 /// Sharing one named object: grant a person or a team a role on it (they can read it and
 /// import a copy into their own sessions), see and revoke the current shares.
 import useSWR from "swr";
-import { fetchJson, keys, messageOf } from "../api/client";
+import { keys } from "../api/client";
+import { fetchJson, messageOf } from "@/app/_client/fetch";
 import { granteeLabel, revokeObjectShare, shareObject, type Share } from "../api/sharing";
-import type { NamedObject } from "../api/types";
+import type { NamedObject } from "@/lib/wire/reading";
 import { GrantsEditor } from "./grants-editor";
 
 /// The dialog's body for `object` (rendered inside a Modal).
@@ -20,8 +21,8 @@ export function ShareObjectPanel({ object, onChanged }: { object: NamedObject; o
   return (
     <div className="flex flex-col gap-3">
       <p className="text-sm">
-        <span className="font-mono font-semibold">{object.name}</span> ({object.type}): whoever you share it with can read it and
-        import a copy into a session of their own; the copy says where it came from.
+        <span className="font-mono font-semibold">{object.name}</span> ({object.type}): whoever you share it with can read it and import a
+        copy into a session of their own; the copy says where it came from.
       </p>
       <GrantsEditor
         shares={shares.data?.shares}

@@ -4,7 +4,8 @@
 /// session's team may (the server answers 403 to anyone else, shown as it says).
 import { useRef, useState } from "react";
 import useSWR from "swr";
-import { fetchJson, keys, messageOf } from "../api/client";
+import { keys } from "../api/client";
+import { fetchJson, messageOf } from "@/app/_client/fetch";
 import { granteeLabel, publishLink, revokeLink, revokeSessionShare, shareSession, type SessionSharing } from "../api/sharing";
 import { GrantsEditor } from "./grants-editor";
 import { buttonPrimary, buttonSecondary, panelHeading, textInput } from "./styles";
@@ -73,20 +74,30 @@ export function ShareSessionPanel({ sessionId, onChanged }: { sessionId: string;
       <section aria-label="Read-only link" className="flex flex-col gap-2">
         <h3 className={panelHeading}>Read-only link</h3>
         <p className="text-xs text-ink/60 dark:text-paper/60">
-          Anyone holding the link reads the transcript and the named objects, signed in or not; nobody runs cells through it.
-          Revoking it stops the address at once.
+          Anyone holding the link reads the transcript and the named objects, signed in or not; nobody runs cells through it. Revoking it
+          stops the address at once.
         </p>
         {url ? (
           <>
             <label className="text-sm">
               Link address
-              <input ref={urlField} readOnly className={`${textInput} font-mono text-xs`} value={url} onFocus={(e) => e.currentTarget.select()} />
+              <input
+                ref={urlField}
+                readOnly
+                className={`${textInput} font-mono text-xs`}
+                value={url}
+                onFocus={(e) => e.currentTarget.select()}
+              />
             </label>
             <div className="flex gap-2">
               <button type="button" className={buttonSecondary} onClick={() => void copy()}>
                 Copy the link
               </button>
-              <button type="button" className={buttonSecondary} onClick={() => void linkAction(() => revokeLink(sessionId), "The read-only link is revoked.")}>
+              <button
+                type="button"
+                className={buttonSecondary}
+                onClick={() => void linkAction(() => revokeLink(sessionId), "The read-only link is revoked.")}
+              >
                 Revoke the link
               </button>
             </div>

@@ -13,7 +13,10 @@ export function ShareList({ shares, onRevoke }: { shares: readonly Share[] | und
       {shares.length === 0 ? (
         <p className="text-sm text-ink/60 dark:text-paper/60">Not shared with anyone yet.</p>
       ) : (
-        <ul aria-label="Current shares" className="divide-y divide-ink/10 rounded-md border border-ink/10 dark:divide-paper/10 dark:border-paper/10">
+        <ul
+          aria-label="Current shares"
+          className="divide-y divide-ink/10 rounded-md border border-ink/10 dark:divide-paper/10 dark:border-paper/10"
+        >
           {shares.map((s) => {
             const who = s.grantee.kind === "user" ? s.grantee.email : `team ${s.grantee.name}`;
             return (

@@ -1,10 +1,9 @@
 import NextAuth from "next-auth";
 import { NextRequest } from "next/server";
-import { recordAudit } from "@/lib/auth/audit";
+import { recordAuditEvent } from "@/lib/auth/audit-log";
 import { hashQueueFull } from "@/lib/auth/hash-slots";
 import { authOptions, normalizeEmail } from "@/lib/auth/options";
 import { checkSignInRate } from "@/lib/auth/rate-limit";
-import { db } from "@/db/client";
 import { readText } from "@/lib/http/body";
 import { clientAddress } from "@/lib/http/client-address";
 import { errorResponse, jsonError } from "@/lib/http/errors";
@@ -61,7 +60,7 @@ export async function POST(req: Request, context: Context): Promise<Response> {
     const address = clientAddress(req.headers);
     const decision = await checkSignInRate(email, address);
     if (decision.limited) {
-      await recordAudit(db(), { event: "signin_rate_limited", email, address, details: { scope: decision.scope } });
+      await recordAuditEvent({ event: "signin_rate_limited", email, address, details: { scope: decision.scope } });
       const minutes = Math.ceil(decision.retryAfterSeconds / 60);
       const who = decision.scope === "account" ? "this account" : "your address";
       const message = `Too many failed sign-in attempts for ${who}. Try again in ${minutes} minutes.`;
