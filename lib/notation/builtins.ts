@@ -24,6 +24,7 @@ import {
   idealDimension,
   idealHilbertSeries,
   idealIsHomogeneous,
+  idealIsUnit,
   initialIdeal,
   isHomogeneous,
   monomial,
@@ -33,6 +34,8 @@ import {
   terms,
   variable,
   type HilbertSeries,
+  type Ideal,
+  type RationalNumber,
   type Poly,
 } from "../algebra/index";
 import { reduceIn, ringOfOperands, toPoly } from "./coerce";
@@ -109,19 +112,68 @@ function tPoly(c: CallContext, coeffs: readonly { num: bigint; den: bigint }[]):
 
 const addPoly = (R: RingValue, f: Poly, g: Poly): Poly => add(R.poly, f, g);
 
-function hilbertValue(series: HilbertSeries): HilbertSeriesValue {
-  return { type: "HilbertSeries", series };
+function hilbertValue(series: HilbertSeries, note?: string): HilbertSeriesValue {
+  return { type: "HilbertSeries", series, ...(note ? { note } : {}) };
+}
+
+/// The Hilbert series of S/I. For a non-homogeneous I the engine's answer is the series of
+/// S/in(I); under an order that refines the grading this is the associated graded ring of S/I
+/// for the degree filtration, whose values are the increments of the affine Hilbert function
+/// d ↦ dim_k S_{≤d}/I_{≤d} (D. Cox, J. Little, D. O'Shea, Ideals, Varieties, and Algorithms,
+/// ch. 9 §3): the value's note says so. Under lex or a weight order it depends on the order and
+/// is refused.
+function hilbertOfIdeal(I: Ideal, c: CallContext): HilbertSeriesValue {
+  if (idealIsHomogeneous(I, opts(c))) return hilbertValue(idealHilbertSeries(I, opts(c)));
+  const order = I.ring.order.kind;
+  if (order !== "grevlex" && order !== "glex") {
+    throw runtime(`the ideal is not homogeneous, and under the ${order} order its initial ideal does not describe S/I degree by degree: use a grevlex or glex ring, or localize(…).samuel for the local Hilbert–Samuel function`, c.span);
+  }
+  return hilbertValue(
+    idealHilbertSeries(I, opts(c)),
+    "the ideal is not homogeneous: this is the series of S/in(I), the associated graded ring for the degree filtration, whose values are the increments d ↦ dim S_{≤d}/I_{≤d} − dim S_{≤d−1}/I_{≤d−1} of the affine Hilbert function",
+  );
 }
 
 function series(v: Value): HilbertSeries {
   return (v as HilbertSeriesValue).series;
 }
 
+/// How far a Hilbert series value is moved up (its generators' lowest degree is −shift).
+const shiftOf = (v: Value): number => (v as HilbertSeriesValue).shift ?? 0;
+
+/// The polynomial p(t + s) for p given by ascending rational coefficients (Taylor shift).
+function shiftPolynomial(p: readonly RationalNumber[], s: number): RationalNumber[] {
+  let out: RationalNumber[] = [];
+  // Horner: out = out·(t + s) + p_i, from the top coefficient down
+  for (let i = p.length - 1; i >= 0; i--) {
+    const next: RationalNumber[] = new Array(out.length + 1).fill(null).map(() => ({ num: 0n, den: 1n }));
+    out.forEach((q, k) => {
+      next[k + 1] = ratAdd(next[k + 1], q);
+      next[k] = ratAdd(next[k], { num: q.num * BigInt(s), den: q.den });
+    });
+    next[0] = ratAdd(next[0], p[i]);
+    out = next;
+  }
+  return out;
+}
+
+function ratAdd(a: RationalNumber, b: RationalNumber): RationalNumber {
+  const num = a.num * b.den + b.num * a.den, den = a.den * b.den;
+  const g = gcdBig(num < 0n ? -num : num, den);
+  return g === 0n ? { num: 0n, den: 1n } : { num: num / g, den: den / g };
+}
+
+function gcdBig(a: bigint, b: bigint): bigint {
+  while (b !== 0n) [a, b] = [b, a % b];
+  return a;
+}
+
 function hilbertDegree(v: Value, span: Span, c: CallContext): number {
   if (v.type !== "Int") throw runtime(`expected an Int degree, got ${v.type}`, span);
   const max = c.interp.session.limits.maxHilbertDegree;
   if (v.value > BigInt(max)) throw limit(`degree ${v.value} is beyond the limit ${max}`, span);
-  return Number(v.value < -1n ? -1n : v.value);
+  // below the lowest generator degree every value is 0; clamping keeps the number small
+  return Number(v.value < -(1n << 30n) ? -(1n << 30n) : v.value);
 }
 
 /// Krull dimension of R = S/J.
@@ -158,6 +210,10 @@ const FUNCTION_IMPLS: Record<string, FunctionImpl> = {
   },
   "minors(Matrix, Int)": ([A, k], c) => {
     const M = matrixArg(A, c.argSpans[0]);
+    // I_k(A) = 0 when k exceeds the number of rows or columns (common practice; C.minors(k)
+    // follows the same rule)
+    const size = (k as { value: bigint }).value;
+    if (size >= 1n && size > BigInt(Math.min(M.rows.length, M.cols))) return idealValue(M.ring, []);
     return idealValue(M.ring, minors(M.ring.poly, M.rows, sizeArg(k, c.argSpans[1], Math.min(M.rows.length, M.cols)), opts(c)), opts(c));
   },
   "pfaffians(Matrix, Int)": ([A, k], c) => {
@@ -174,7 +230,7 @@ const FUNCTION_IMPLS: Record<string, FunctionImpl> = {
     const { polys } = polyList(xs, c.argSpans[1], J.ring);
     return eliminationOf(J, polys.map((f) => variableIndex(J.ring, f, c.argSpans[1])), opts(c));
   },
-  "hilbert(Ring)": ([R], c) => hilbertValue(idealHilbertSeries(engineIdeal(ring(R, c.argSpans[0]).poly, (R as RingValue).ideal), opts(c))),
+  "hilbert(Ring)": ([R], c) => hilbertOfIdeal(engineIdeal(ring(R, c.argSpans[0]).poly, (R as RingValue).ideal), c),
   "sum(List<T>)": ([xs], c) => {
     const items = (xs as { items: readonly Value[] }).items;
     if (items.length === 0) return Int(0);
@@ -206,7 +262,10 @@ const propertiesCache = new WeakMap<RingValue, QuotientProperties>();
 function ringProperties(r: RingValue, c: CallContext): QuotientProperties {
   let q = propertiesCache.get(r);
   if (!q) {
-    q = quotientProperties(engineIdeal(r.poly, r.ideal), opts(c));
+    const J = engineIdeal(r.poly, r.ideal);
+    // the zero ring has no maximal ideal: its depth (∞ by convention) is not an Int
+    if (idealIsUnit(J, opts(c))) throw runtime("this is the zero ring (its defining ideal contains 1): depth, Cohen–Macaulay, Gorenstein and complete intersection are not defined for it", c.span);
+    q = quotientProperties(J, opts(c));
     propertiesCache.set(r, q);
   }
   return q;
@@ -256,7 +315,7 @@ const PROPERTY_IMPLS: Record<string, PropertyImpl> = {
   "Ring.is_cm": (v, _a, c) => Bool(ringProperties(v as RingValue, c).cohenMacaulay),
   "Ring.is_gorenstein": (v, _a, c) => Bool(ringProperties(v as RingValue, c).gorenstein),
   "Ring.is_ci": (v, _a, c) => Bool(ringProperties(v as RingValue, c).completeIntersection),
-  "Ring.hilbert": (v, _a, c) => hilbertValue(idealHilbertSeries(engineIdeal((v as RingValue).poly, (v as RingValue).ideal), opts(c))),
+  "Ring.hilbert": (v, _a, c) => hilbertOfIdeal(engineIdeal((v as RingValue).poly, (v as RingValue).ideal), c),
   "Poly.degree": (v) => Int(degree((v as { ring: RingValue }).ring.poly, (v as { poly: Poly }).poly)),
   "Poly.is_homogeneous": (v) => Bool(isHomogeneous((v as { ring: RingValue }).ring.poly, (v as { poly: Poly }).poly)),
   "Ideal.gens": (v) => {
@@ -278,7 +337,7 @@ const PROPERTY_IMPLS: Record<string, PropertyImpl> = {
   },
   "Ideal.dim": (v, _a, c) => Int(idealDimension(quotientIdeal(v as IdealValue), opts(c))),
   "Ideal.degree": (v, _a, c) => integerDegree(idealDegree(quotientIdeal(v as IdealValue), opts(c)), c),
-  "Ideal.hilbert": (v, _a, c) => hilbertValue(idealHilbertSeries(quotientIdeal(v as IdealValue), opts(c))),
+  "Ideal.hilbert": (v, _a, c) => hilbertOfIdeal(quotientIdeal(v as IdealValue), c),
   // B(I) = (m·I) : (I : m) (H. Dao, T. Kobayashi, R. Takahashi, "Burch ideals and Burch
   // rings", Algebra & Number Theory 2020, Def. 2.1), from the ideal operations alone
   "Ideal.burch": (v, _a, c) => {
@@ -298,19 +357,24 @@ const PROPERTY_IMPLS: Record<string, PropertyImpl> = {
     const A = v as Extract<Value, { type: "Matrix" }>;
     return idealValue(A.ring, A.rows.flat());
   },
-  "HilbertSeries.numerator": (v, _a, c) => tPoly(c, series(v).numerator.map((num) => ({ num, den: 1n }))),
+  "HilbertSeries.numerator": (v, _a, c) => {
+    if (shiftOf(v) > 0) throw runtime(`the numerator has negative powers of t (it starts at t^-${shiftOf(v)}), so it is not a polynomial; t^${shiftOf(v)} times it is the numerator of the module moved into degrees ≥ 0`, c.span);
+    return tPoly(c, series(v).numerator.map((num) => ({ num, den: 1n })));
+  },
   "HilbertSeries.denominator": (v, _a, c) => {
     const R = c.interp.session.rings.polynomialRing(QQ, ["t"]);
     const f = series(v).weights.reduce((acc, w) => mul(R.poly, acc, sub(R.poly, one(R.poly), monomial(R.poly, [w]))), one(R.poly));
     return { type: "Poly", ring: R, poly: f };
   },
-  "HilbertSeries.at": (v, [d], c) => Int(hilbertFunctionAt(series(v), hilbertDegree(d, c.argSpans[0], c), opts(c))),
+  "HilbertSeries.at": (v, [d], c) => Int(hilbertFunctionAt(series(v), hilbertDegree(d, c.argSpans[0], c) + shiftOf(v), opts(c))),
   "HilbertSeries.values": (v, [d], c) => {
     const n = hilbertDegree(d, c.argSpans[0], c);
     if (n < 0) throw runtime("values(d) needs d ≥ 0", c.argSpans[0]);
-    return list(hilbertFunctionValues(series(v), n, opts(c)).map((x) => Int(x)));
+    const s = shiftOf(v);
+    return list(hilbertFunctionValues(series(v), n + s, opts(c)).slice(s).map((x) => Int(x)));
   },
-  "HilbertSeries.polynomial": (v, _a, c) => tPoly(c, hilbertPolynomial(series(v))),
+  // the module moved up by s has Hilbert polynomial p; the module itself has p(t + s)
+  "HilbertSeries.polynomial": (v, _a, c) => tPoly(c, shiftPolynomial(hilbertPolynomial(series(v)), shiftOf(v))),
   "List.length": (v) => Int((v as { items: readonly Value[] }).items.length),
   "Str.length": (v) => Int([...(v as { value: string }).value].length),
   "Table.columns": (v) => list((v as Extract<Value, { type: "Table" }>).columns.map((s) => ({ type: "Str", value: s }) as Value)),

@@ -81,14 +81,20 @@ export const HilbertSeriesJson = z.object({
   text,
   numerator: z.array(intText),
   denominator: z.string(),
+  /// additions: the power of t of the numerator's first coefficient when it is negative (a
+  /// module generated in negative degrees), and what the series is of when that could mislead
+  lowest: z.number().int().max(-1).optional(),
+  note: z.string().optional(),
 });
 export const SeriesJson = z.object({
   type: z.literal("Series"),
   text,
   coefficients: z.array(intText),
   rational: z.string().nullable(),
-  /// additions: the guessed numerator and denominator (ascending in t), the number of
-  /// terms they were checked against, and how many leading coefficients are exact
+  /// additions: `guessed: true` whenever `rational` is set (it is a guess, not a proof), the
+  /// guessed numerator and denominator (ascending in t), the number of computed terms it
+  /// reproduces beyond those the fit used, and how many leading coefficients are exact
+  guessed: z.literal(true).optional(),
   numerator: z.array(intText).optional(),
   denominator: z.array(intText).optional(),
   checked: count.optional(),
@@ -268,13 +274,21 @@ export function encodeValue(v: Value): ValueJson {
         ...(v.note !== undefined ? { note: v.note } : {}),
       };
     case "HilbertSeries":
-      return { type: "HilbertSeries", text: t, numerator: v.series.numerator.map(String), denominator: formatHilbertDenominator(v.series.weights) };
+      return {
+        type: "HilbertSeries",
+        text: t,
+        numerator: v.series.numerator.map(String),
+        denominator: formatHilbertDenominator(v.series.weights),
+        ...(v.shift ? { lowest: -v.shift } : {}),
+        ...(v.note ? { note: v.note } : {}),
+      };
     case "Series":
       return {
         type: "Series",
         text: t,
         coefficients: v.coefficients.map(String),
         rational: v.rational,
+        ...(v.rational !== null ? { guessed: true as const } : {}),
         ...(v.guess ? { numerator: v.guess.numerator.map(String), denominator: v.guess.denominator.map(String), checked: v.guess.checked } : {}),
         ...(v.exact !== undefined ? { exact: v.exact } : {}),
       };
@@ -410,7 +424,12 @@ function decodeValidated(j: ValueJson, ctx: DecodeContext): Value {
       return decodeBetti(j.entries, j.complete, j.note);
     case "HilbertSeries": {
       const denominator = parseDenominator(j.denominator) ?? fail("HilbertSeries", `bad denominator ${j.denominator}`);
-      return { type: "HilbertSeries", series: hilbertSeriesFromNumerator(j.numerator.map((c) => BigInt(c)), denominator) };
+      return {
+        type: "HilbertSeries",
+        series: hilbertSeriesFromNumerator(j.numerator.map((c) => BigInt(c)), denominator),
+        ...(j.lowest !== undefined ? { shift: -j.lowest } : {}),
+        ...(j.note !== undefined ? { note: j.note } : {}),
+      };
     }
     case "Series":
       return {

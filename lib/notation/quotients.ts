@@ -302,15 +302,18 @@ export function poincareValue([M]: readonly Value[], c: CallContext): Value {
   return seriesValue(totals, firstInexact(r) ?? terms);
 }
 
-function seriesValue(coeffs: readonly bigint[], exact: number): SeriesValue {
-  const g = guessRational(truncatedSeries(coeffs.slice(0, exact)));
+/// A Series with the rational function guessed from its exact terms: a guess as soon as the
+/// terms determine one (2L terms for a recurrence of length L), `checked` counting only the
+/// terms beyond those 2L, which it reproduces without having been fitted to them.
+export function seriesValue(coeffs: readonly bigint[], exact: number): SeriesValue {
+  const g = guessRational(truncatedSeries(coeffs.slice(0, exact)), 0);
   const wrap = (c: readonly bigint[]) => (c.filter((x) => x !== 0n).length > 1 ? `(${ascendingText(c)})` : ascendingText(c));
   const rational = g ? (g.denominator.length === 1 && g.denominator[0] === 1n ? ascendingText(g.numerator) : `${wrap(g.numerator)}/${wrap(g.denominator)}`) : null;
   return {
     type: "Series",
     coefficients: coeffs,
     rational,
-    ...(g ? { guess: { numerator: g.numerator, denominator: g.denominator, checked: g.checkedOn } } : {}),
+    ...(g ? { guess: { numerator: g.numerator, denominator: g.denominator, checked: g.checkedOn - g.determinedBy } } : {}),
     ...(exact < coeffs.length ? { exact } : {}),
   };
 }

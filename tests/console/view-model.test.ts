@@ -18,9 +18,10 @@ describe("viewOfValue", () => {
     expect(ring).toEqual({ kind: "tex", tex: "\\mathbb{F}_{32003}[x, y] / \\left\\langle xy \\right\\rangle" });
     const s = viewOfValue({ type: "Series", text: "", coefficients: ["1", "2", "4"], rational: "1/(1-2*t)" });
     expect(s.kind).toBe("series");
-    if (s.kind === "series") expect(s.note).toBe("guessed rational function: fits all 3 computed terms (not a proof)");
-    const checked = viewOfValue({ type: "Series", text: "", coefficients: ["1", "2", "4", "8"], rational: "1/(1-2*t)", checked: 4 });
-    if (checked.kind === "series") expect(checked.note).toContain("all 4 computed terms");
+    // issue 16: `checked` counts the terms beyond those the fit used; absent means none
+    if (s.kind === "series") expect(s.note).toBe("guessed rational function (not a proof): it reproduces 0 computed terms beyond those it was fitted to");
+    const checked = viewOfValue({ type: "Series", text: "", coefficients: ["1", "2", "4", "8"], rational: "1/(1-2*t)", checked: 2 });
+    if (checked.kind === "series") expect(checked.note).toContain("reproduces 2 computed terms beyond");
     // the computed terms are shown, with the guess beside them
     if (s.kind === "series") expect(s.tex).toMatch(/^1 \+ 2 ?t \+ 4 ?t\^\{2\} \+ O.*\\qquad /);
     const none = viewOfValue({ type: "Series", text: "", coefficients: ["1", "2"], rational: null });

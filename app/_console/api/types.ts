@@ -26,7 +26,8 @@ export interface ValueJson {
   readonly denominator?: string | readonly string[];
   readonly coefficients?: readonly string[];
   readonly rational?: string | null;
-  /// additions of lib/notation: a value's warning in words; how many terms a guess fits
+  /// additions of lib/notation: a value's warning in words; how many computed terms a guess
+  /// reproduces beyond those it was fitted to
   readonly note?: string;
   readonly checked?: number;
   readonly items?: readonly ValueJson[];

@@ -102,12 +102,12 @@ export function viewOfValue(v: ValueJson): ValueView {
       const coefficients = v.coefficients ?? [];
       const terms = `${coefficients.length} term${coefficients.length === 1 ? "" : "s"}`;
       if (v.rational) {
-        const checked = typeof v.checked === "number" ? v.checked : coefficients.length;
+        const checked = typeof v.checked === "number" ? v.checked : 0;
         // the computed terms first, then the guess beside them: the guess is not the answer
         return {
           kind: "series",
           tex: `${texOfSeriesPrefix(coefficients)} \\qquad ${texOrVerbatim(v.rational)}`,
-          note: `guessed rational function: fits all ${checked} computed terms (not a proof)`,
+          note: `guessed rational function (not a proof): it reproduces ${checked} computed term${checked === 1 ? "" : "s"} beyond those it was fitted to`,
         };
       }
       return { kind: "series", tex: texOfSeriesPrefix(coefficients), note: `${terms} computed; no rational function found that fits them` };

@@ -1,10 +1,10 @@
 import { runtimeError } from "../errors";
 import { componentAtOrigin, originIdeal } from "../artinian/origin";
 import { FiniteAlgebra } from "../artinian/algebra";
-import { type Ideal, idealColon, idealColonElement, idealEquals, idealIsHomogeneous, idealIsSubset, idealPower, idealProduct } from "../ideal";
+import { type Ideal, idealGroebnerBasis, idealColon, idealColonElement, idealEquals, idealIsHomogeneous, idealIsSubset, idealPower, idealProduct } from "../ideal";
 import { add, constant, formatPoly, mul, type Poly, type PolyRing, variable, zero } from "../index";
 import { checkpoint, type ComputeOptions } from "../options";
-import { cutByLinearForm } from "./substitute";
+import { cutByLinearForm, eliminateByElement } from "./substitute";
 
 // H. Dao, T. Kobayashi, R. Takahashi, "Burch ideals and Burch rings", Algebra & Number
 // Theory 14 (2020): an ideal I of a local ring (S, m) is Burch when m·I ≠ m·(I : m); a
@@ -51,11 +51,25 @@ export function burchIndexOfRing(I: Ideal, opts?: ComputeOptions & { seed?: numb
   const next = lcg(seed);
   const S = I.ring;
   let J = idealIsHomogeneous(I) ? I : componentAtOrigin(I, opts).ideal;
-  if (!idealIsSubset(J, idealPower(originIdeal(J), 2, opts), opts)) {
-    throw runtimeError("burch_index", "the presentation is not minimal: the ideal has an element of order 1 at the origin");
+  let T: PolyRing = S;
+  // One rule for every presentation: linear forms in I are eliminated first (S/I ≅ S'/I'
+  // with one variable fewer per form), so S/m and S/0 both reach the field k = k[]/0,
+  // whose index is 0.
+  for (;;) {
+    if (idealIsSubset(J, idealPower(originIdeal(J), 2, opts), opts)) break;
+    // an element a·x_c + h with h free of x_c (a linear form, or x − y^2 …) removes x_c
+    let cut: { ideal: Ideal; ring: PolyRing } | null = null;
+    for (const g of [...idealGroebnerBasis(J, opts), ...J.gens]) {
+      cut = eliminateByElement(J, g);
+      if (cut) break;
+    }
+    if (!cut) {
+      throw runtimeError("burch_index", "the ideal has an element of order 1 at the origin whose variable cannot be solved for polynomially; eliminating it needs power series, which are not implemented here");
+    }
+    J = cut.ideal;
+    T = cut.ring;
   }
   const forms: string[] = [];
-  let T: PolyRing = S;
   for (;;) {
     checkpoint(opts, { stage: "Burch index", detail: `depth ${forms.length}` });
     const m = originIdeal(J);
