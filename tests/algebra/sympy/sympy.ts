@@ -5,7 +5,8 @@ import path from "node:path";
 export interface SympySystem {
   vars: string[];
   gens: string[];
-  order: "grevlex" | "lex" | "grlex";
+  /// "lazard": lex on the first variable, then grevlex on the others (groebner_batch.py)
+  order: "grevlex" | "lex" | "grlex" | "lazard";
   modulus: number | null;
 }
 
