@@ -48,6 +48,7 @@ import { MODULE_FUNCTIONS, RESIDUE_PROPERTY } from "./modules";
 import { pendingError } from "./pending";
 import { COMPLEX_PROPERTIES, resolveValue } from "./resolutions";
 import { QUOTIENT_FUNCTIONS, QUOTIENT_PROPERTIES } from "./quotients";
+import { LOCAL_FUNCTIONS, LOCAL_GENERAL_PROPERTIES, localFunction, localProperty } from "./local-dispatch";
 import { valueType } from "./value-type";
 import { list, type HilbertSeriesValue, type IdealValue, type RingValue, type Value } from "./values";
 
@@ -242,6 +243,7 @@ const FUNCTION_IMPLS: Record<string, FunctionImpl> = {
   ...MODULE_FUNCTIONS,
   ...HOMOLOGY_FUNCTIONS,
   ...QUOTIENT_FUNCTIONS,
+  ...LOCAL_FUNCTIONS,
 };
 
 function matrixArg(v: Value, span: Span): Extract<Value, { type: "Matrix" }> {
@@ -393,6 +395,7 @@ const PROPERTY_IMPLS: Record<string, PropertyImpl> = {
   ...RESIDUE_PROPERTY,
   ...MODULE_PROPERTIES,
   ...QUOTIENT_PROPERTIES,
+  ...LOCAL_GENERAL_PROPERTIES,
 };
 
 /// Keys of everything the evaluator implements (read by the pending-names test).
@@ -410,7 +413,7 @@ export function callFunction(interp: Interpreter, name: string, args: Value[], n
   const sig = lookupFunction(name)!;
   const o = sig.overloads.find((x) => matchesOverload(x, args));
   if (!o) throw runtime(`${name} does not accept (${args.map((a) => a.type).join(", ")})`, e.span);
-  const impl = FUNCTION_IMPLS[overloadKey(sig, o)];
+  const impl = localFunction(overloadKey(sig, o), args) ?? FUNCTION_IMPLS[overloadKey(sig, o)];
   if (!impl) throw pendingError(name, o.part, e.span);
   return impl(args, { interp, frame, span: e.span, argSpans: e.args.map((a) => a.span), named });
 }
@@ -427,7 +430,7 @@ function propertySig(obj: Value, name: string, span: Span): PropertySig {
 export function getProperty(interp: Interpreter, obj: Value, name: string, e: Property, frame: Frame): Value {
   const sig = propertySig(obj, name, e.name.span);
   if (sig.params) throw runtime(`${name} takes arguments: write ${name}(…)`, e.name.span);
-  const impl = PROPERTY_IMPLS[propertyKey(sig)];
+  const impl = localProperty(obj, propertyKey(sig)) ?? PROPERTY_IMPLS[propertyKey(sig)];
   if (!impl) throw pendingError(`${obj.type}.${name}`, sig.part, e.span);
   return impl(obj, [], { interp, frame, span: e.span, argSpans: [], named: new Map() });
 }
@@ -441,7 +444,7 @@ export function callMethod(interp: Interpreter, obj: Value, name: string, args: 
     return interp.applyFunction(fn, args, e.span, frame);
   }
   if (args.length !== sig.params.length) throw runtime(`${name} takes ${sig.params.length} argument(s), got ${args.length}`, e.span);
-  const impl = PROPERTY_IMPLS[propertyKey(sig)];
+  const impl = localProperty(obj, propertyKey(sig)) ?? PROPERTY_IMPLS[propertyKey(sig)];
   if (!impl) throw pendingError(`${obj.type}.${name}`, sig.part, e.span);
   return impl(obj, args, { interp, frame, span: e.span, argSpans: e.args.map((a) => a.span), named: new Map() });
 }

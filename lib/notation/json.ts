@@ -33,6 +33,8 @@ export const RingJson = z.object({
   ideal: z.array(z.string()),
   /// for A / I with A itself a quotient: how many leading generators of `ideal` define A
   over: count.optional(),
+  /// a local ring (notation.md §11): the point it is localised at, one rational per variable
+  local: z.object({ at: z.array(ratText) }).optional(),
 });
 export type RingJson = z.infer<typeof RingJson>;
 
@@ -215,7 +217,8 @@ export function encodeRing(r: RingValue): RingJson {
     degrees: [...r.poly.degrees],
     order: orderText(r.poly.order),
     ideal: r.ideal.map((f) => formatPoly(r.poly, f)),
-    ...(r.over ? { over: r.over.ideal.length } : {}),
+    ...(r.over && r.over.ideal.length > 0 ? { over: r.over.ideal.length } : {}),
+    ...(r.local ? { local: { at: r.local.at.map(ratToString) } } : {}),
   };
 }
 
@@ -343,7 +346,9 @@ function fail(where: string, message: string): never {
 export function decodeRing(j: RingJson, ctx: DecodeContext): RingValue {
   const field = parseField(j.field) ?? fail("Ring", `unknown field ${j.field}`);
   const order = parseOrder(j.order) ?? fail("Ring", `unknown monomial order ${j.order}`);
-  const base = ctx.rings.polynomialRing(field, j.vars, { order, degrees: j.degrees });
+  const global = ctx.rings.polynomialRing(field, j.vars, { order, degrees: j.degrees });
+  if (j.local && j.local.at.length !== j.vars.length) fail("Ring", `the point of a local ring needs ${j.vars.length} coordinates, got ${j.local.at.length}`);
+  const base = j.local ? ctx.rings.localize(global, j.local.at.map((a) => parseRational(a) ?? fail("Ring", `bad coordinate ${a}`))) : global;
   if (j.ideal.length === 0) return base;
   const gens = j.ideal.map((g) => readPoly(base, g, "Ring ideal"));
   const over = j.over ?? 0;

@@ -23,8 +23,10 @@ export function polyRingText(r: RingValue): string {
 
 export function ringText(r: RingValue): string {
   const base = polyRingText(r);
-  if (r.ideal.length === 0) return base;
-  return `${base} / <${r.ideal.map((f) => formatPoly(r.poly, f)).join(", ")}>`;
+  const global = r.ideal.length === 0 ? base : `${base} / <${r.ideal.map((f) => formatPoly(r.poly, f)).join(", ")}>`;
+  if (!r.local) return global;
+  const origin = r.local.at.every((a) => a.num === 0n);
+  return `localize(${global}${origin ? "" : `, at = [${r.local.at.map(ratToString).join(", ")}]`})`;
 }
 
 export function matrixText(m: MatrixValue): string {
