@@ -392,11 +392,11 @@ export const PROPERTIES: readonly PropertySig[] = [
   prop("Ring", "is_ci", T.Bool, 2, "whether R is a complete intersection"),
   prop("Ring", "is_gorenstein", T.Bool, 2, "whether R is Gorenstein"),
   prop("Ring", "is_cm", T.Bool, 2, "whether R is Cohen–Macaulay"),
+  ...moduleProps("Ring", "R as the cyclic module A/I"),
   // notation.md §11: read at the point of a local ring, at the irrelevant ideal of a graded one
   prop("Ring", "multiplicity", T.Int, 3, "the Hilbert–Samuel multiplicity e(m, R)"),
   prop("Ring", "samuel", T.HilbertSeries, 3, "the Hilbert–Samuel function: .at(d) = length R/m^(d+1), .values(d)"),
   prop("Ring", "tangent_cone", T.Ring, 3, "the tangent cone (associated graded ring), a graded Ring"),
-  ...moduleProps("Ring", "R as the cyclic module A/I"),
   prop("Poly", "degree", T.Int, 1, "the (weighted) degree; -1 for 0", null, true),
   prop("Poly", "is_homogeneous", T.Bool, 1, "whether the polynomial is homogeneous", null, true),
   prop("Ideal", "gens", T.list(T.Poly), 1, "the given generators"),

@@ -5,6 +5,7 @@
 import type { CallContext } from "./builtins";
 import { runtime } from "./errors";
 import { LOCAL_FUNCTIONS, LOCAL_GENERAL_PROPERTIES, LOCAL_RING_PROPERTIES } from "./local";
+import { LOCAL_HOMOLOGY_FUNCTIONS, LOCAL_HOMOLOGY_PROPERTIES } from "./local-homology";
 import type { RingValue, Value } from "./values";
 
 export { LOCAL_FUNCTIONS, LOCAL_GENERAL_PROPERTIES };
@@ -24,14 +25,8 @@ const localRingOf = (v: Value): RingValue | null => {
   return null;
 };
 
-/// Local properties registered by the other local modules (kept apart so that each file stays small).
-const EXTRA_PROPERTIES: Record<string, PropertyImpl> = {};
-const EXTRA_FUNCTIONS: Record<string, FunctionImpl> = {};
-
-export function registerLocal(props: Record<string, PropertyImpl>, fns: Record<string, FunctionImpl>): void {
-  Object.assign(EXTRA_PROPERTIES, props);
-  Object.assign(EXTRA_FUNCTIONS, fns);
-}
+const EXTRA_PROPERTIES: Record<string, PropertyImpl> = LOCAL_HOMOLOGY_PROPERTIES;
+const EXTRA_FUNCTIONS: Record<string, FunctionImpl> = LOCAL_HOMOLOGY_FUNCTIONS;
 
 export function localProperty(obj: Value, key: string): PropertyImpl | undefined {
   if (!localRingOf(obj)) return undefined;

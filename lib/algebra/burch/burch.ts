@@ -1,7 +1,7 @@
 import { runtimeError } from "../errors";
 import { componentAtOrigin, originIdeal } from "../artinian/origin";
 import { FiniteAlgebra } from "../artinian/algebra";
-import { type Ideal, idealGroebnerBasis, idealColon, idealColonElement, idealEquals, idealIsHomogeneous, idealIsSubset, idealPower, idealProduct } from "../ideal";
+import { type Ideal, idealGroebnerBasis, idealSum, idealColon, idealColonElement, idealEquals, idealIsHomogeneous, idealIsSubset, idealPower, idealProduct } from "../ideal";
 import { add, constant, formatPoly, mul, type Poly, type PolyRing, variable, zero } from "../index";
 import { checkpoint, type ComputeOptions } from "../options";
 import { cutByLinearForm, eliminateByElement } from "./substitute";
@@ -33,6 +33,16 @@ export function burchIndexOfIdeal(I: Ideal, opts?: ComputeOptions): number {
   return new FiniteAlgebra(B.ring, B, opts).dim - 1;
 }
 
+/// dim_k m/B(I) at the origin for any I ⊆ m (no isolated point needed): B(I) is formed from
+/// products and colons, which commute with localisation, and m² ⊆ B(I) locally (Dao–Eisenbud,
+/// above), so m/B(I)_m = m/(B(I) + m²), a finite-dimensional space computed globally.
+function burchIndexAtOrigin(I: Ideal, opts?: ComputeOptions): number {
+  const m = originIdeal(I);
+  const B = idealColon(idealProduct(m, I, opts), idealColon(I, m, opts), opts);
+  const Q = idealSum(B, idealPower(m, 2, opts));
+  return new FiniteAlgebra(Q.ring, Q, opts).dim - 1;
+}
+
 /// The Burch index of R = S/I at the origin, for I ⊆ m² (a minimal presentation).
 export interface BurchIndex {
   index: number;
@@ -50,7 +60,9 @@ export function burchIndexOfRing(I: Ideal, opts?: ComputeOptions & { seed?: numb
   const seed = opts?.seed ?? 1;
   const next = lcg(seed);
   const S = I.ring;
-  let J = idealIsHomogeneous(I) ? I : componentAtOrigin(I, opts).ideal;
+  // the origin's ring: every step below (colons, products, substitutions) commutes with
+  // localisation at the origin, so I itself serves, isolated point or not
+  let J = I;
   let T: PolyRing = S;
   // One rule for every presentation: linear forms in I are eliminated first (S/I ≅ S'/I'
   // with one variable fewer per form), so S/m and S/0 both reach the field k = k[]/0,
@@ -88,7 +100,7 @@ export function burchIndexOfRing(I: Ideal, opts?: ComputeOptions & { seed?: numb
     }
     if (!found) throw runtimeError("burch_index", "no regular linear form was found (the field may be too small)");
   }
-  const index = burchIndexOfIdeal(J, opts);
+  const index = idealIsHomogeneous(J) ? burchIndexOfIdeal(J, opts) : burchIndexAtOrigin(J, opts);
   return { index, isBurch: index >= 1, depth: forms.length, random: forms.length > 0 ? { seed, forms } : null };
 }
 

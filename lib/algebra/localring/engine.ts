@@ -14,6 +14,9 @@ export {
   variable,
   zero,
   formatPoly,
+  groebnerBasis,
+  normalForm,
 } from "../index";
+export { moduleKernel, moduleGroebnerBasis, freeModule } from "../module";
 export { hilbertSeriesOfMonomials, hilbertFunctionValues, type HilbertSeries } from "../hilbert";
-export { standardBasis, initialForm, type StandardBasis } from "../standard";
+export { standardBasis, initialForm, type StandardBasis, homogenisation, homogenise, dehomogenise, totalDegree } from "../standard";

@@ -11,3 +11,6 @@ export {
   tjurinaNumber,
   type LocalAnalysis,
 } from "./local";
+export { localResolution, isLocalUnit, type LocalFreeResolution } from "./resolve";
+export { localTorLengths } from "./tor";
+export { kernelColumns, localModuleNumerator, localQuotientLength, type Columns } from "./modules";

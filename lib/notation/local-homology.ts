@@ -1,0 +1,217 @@
+/// Homological algebra over local rings in the notation (issue 16): resolutions, Poincaré
+/// series, syzygies, Tor lengths and Serre's intersection multiplicity over R_m, R = S/J
+/// localised at a point; depth, Cohen–Macaulay, Gorenstein and complete intersection of a
+/// local ring; the Burch index at the point. Engine: lib/algebra/localring (minimal free
+/// resolutions by cancelling units in global resolutions; lengths from tangent cones).
+import { burchIndexOfRing, ideal as engineIdeal } from "../algebra/index";
+import { localResolution, localTorLengths, translate, type LocalFreeResolution, type Point } from "../algebra/localring/index";
+import { localDimension } from "../algebra/localring/index";
+import type { Poly, PolyRing } from "../algebra/index";
+import type { CallContext } from "./builtins";
+import { runtime } from "./errors";
+import { analysisOf } from "./local";
+import { moduleValue } from "./modules";
+import { bound } from "./named-options";
+import { seriesValue } from "./quotients";
+import { list, type ComplexValue, type MatrixValue, type RingValue, type Value } from "./values";
+
+const Int = (value: number | bigint): Value => ({ type: "Int", value: BigInt(value) });
+const Bool = (value: boolean): Value => ({ type: "Bool", value });
+const opts = (c: CallContext) => c.interp.session.compute;
+
+const originOf = (at: Point) => at.every((a) => a.num === 0n);
+const moveIn = (S: PolyRing, at: Point, f: Poly) => (originOf(at) ? f : translate(S, f, at));
+const moveOut = (S: PolyRing, at: Point, f: Poly) => (originOf(at) ? f : translate(S, f, at.map((a) => ({ num: -a.num, den: a.den }))));
+
+/// What is resolved over the local ring A_m (A = S/J): a presentation (by columns) moved to the origin.
+interface LocalTarget {
+  base: RingValue;
+  S: PolyRing;
+  at: Point;
+  J: Poly[];
+  rows: number;
+  columns: Poly[][];
+}
+
+function targetOf(m: Value, c: CallContext, span = c.argSpans[0] ?? c.span): LocalTarget {
+  if (m.type === "Ring") {
+    const base = m.over ?? c.interp.session.rings.localize(c.interp.session.rings.ambient(m), m.local!.at);
+    const at = m.local!.at;
+    const S = m.poly;
+    const J = base.ideal.map((f) => moveIn(S, at, f));
+    const I = m.ideal.slice(base.ideal.length).map((f) => moveIn(S, at, f));
+    return { base, S, at, J, rows: 1, columns: I.map((f) => [f]) };
+  }
+  if (m.type === "Module") {
+    const r = m.ring;
+    const at = r.local!.at;
+    const S = r.poly;
+    const P = m.presentation;
+    const columns = Array.from({ length: P.cols }, (_, k) => P.rows.map((row) => moveIn(S, at, row[k])));
+    return { base: r, S, at, J: r.ideal.map((f) => moveIn(S, at, f)), rows: P.rows.length, columns };
+  }
+  throw runtime(`expected a Module or a quotient ring, got ${m.type}`, span);
+}
+
+const resolutions = new WeakMap<object, Map<number, LocalFreeResolution>>();
+function resolveTarget(m: Value, t: LocalTarget, length: number, c: CallContext): LocalFreeResolution {
+  let byLength = resolutions.get(m);
+  if (!byLength) resolutions.set(m, (byLength = new Map()));
+  let F = byLength.get(length);
+  if (!F) {
+    F = localResolution(t.S, t.rows, t.columns, t.J, length, opts(c));
+    byLength.set(length, F);
+  }
+  return F;
+}
+
+/// The length bound: required over a local quotient ring (resolutions are usually infinite);
+/// over the local ring of S at a point the resolution ends by n + 1 (Hilbert's syzygy theorem).
+function lengthOf(t: LocalTarget, c: CallContext, what: string): number {
+  const n = bound(c, "length", 1000);
+  if (n !== undefined) return n;
+  if (t.J.length === 0) return t.S.vars.length + 1;
+  throw runtime(`over a local quotient ring a ${what} is usually infinite: give a bound, e.g. ${what}(M, length = 6)`, c.span);
+}
+
+const pointText = (at: Point) => (originOf(at) ? "the origin" : `(${at.map((a) => (a.den === 1n ? `${a.num}` : `${a.num}/${a.den}`)).join(", ")})`);
+
+function complexValue(t: LocalTarget, F: LocalFreeResolution, length: number): ComplexValue {
+  const where = `over the local ring at ${pointText(t.at)}, ungraded: the Betti table lists β_i under internal degree 0; the maps are determined up to units of the local ring`;
+  const note = F.complete ? where : `only homological degrees ≤ ${length} were computed; the resolution goes on; ${where}`;
+  const ranks = F.ranks.slice(0, length + 1);
+  const maps: MatrixValue[] = F.maps.slice(0, length).map((rows, i) => ({
+    type: "Matrix",
+    ring: t.base,
+    rows: rows.map((row) => row.map((f) => moveOut(t.S, t.at, f))),
+    cols: ranks[i + 1],
+  }));
+  const entries = ranks.flatMap((b, i) => (b > 0 ? [[i, 0, b] as const] : []));
+  return { type: "Complex", ring: t.base, ranks, betti: { type: "BettiTable", entries, complete: F.complete, note }, complete: F.complete, maps, note };
+}
+
+/// The minimal resolution of S/I over S_m (I the defining ideal of the local ring r).
+function ringResolution(r: RingValue, c: CallContext): LocalFreeResolution {
+  const L = analysisOf(r, c);
+  if (L.zero) throw runtime("this local ring is zero (its point is not on the zero set of the ideal): depth, Cohen–Macaulay, Gorenstein and complete intersection are not defined for it", c.span);
+  const S = r.poly;
+  const columns = L.ideal.map((f) => [f]);
+  let byLength = resolutions.get(r);
+  if (!byLength) resolutions.set(r, (byLength = new Map()));
+  let F = byLength.get(-1);
+  if (!F) {
+    F = localResolution(S, 1, columns, [], S.vars.length + 1, opts(c));
+    byLength.set(-1, F);
+  }
+  return F;
+}
+
+/// Depth and friends of the local ring S_m/I from its minimal resolution over the regular
+/// local ring S_m: depth = n − pd (M. Auslander, D. Buchsbaum, Trans. AMS 85, 1957), CM when
+/// depth = dim, Gorenstein when CM with last Betti number 1 and complete intersection when
+/// β_1 = codim (D. Eisenbud, Commutative Algebra, Cor. 21.16 and §21.2; from memory).
+function ringInvariants(r: RingValue, c: CallContext) {
+  const F = ringResolution(r, c);
+  const n = r.poly.vars.length;
+  let pd = F.ranks.length - 1;
+  while (pd > 0 && F.ranks[pd] === 0) pd--;
+  const depth = n - pd;
+  const dim = localDimension(analysisOf(r, c));
+  const cm = depth === dim;
+  return { depth, dim, cm, gorenstein: cm && F.ranks[pd] === 1, ci: (F.ranks[1] ?? 0) === n - dim };
+}
+
+function torLengths(a: Value, b: Value, length: number, c: CallContext): bigint[] {
+  const ta = targetOf(a, c, c.argSpans[0]);
+  if (b.type !== "Ring") throw runtime("over a local ring tor_lengths and serre take a quotient ring as their second argument (a cyclic module L / I)", c.argSpans[1] ?? c.span);
+  const tb = targetOf(b, c, c.argSpans[1]);
+  const sameBase = ta.base === tb.base || (ta.base.ideal.length === tb.base.ideal.length && ta.base.ideal.every((f, i) => f === tb.base.ideal[i]) && ta.at.every((x, i) => x.num === tb.at[i].num && x.den === tb.at[i].den));
+  if (!sameBase) throw runtime("both modules must live over the same local ring", c.span);
+  // F resolved one step further, so that the image of d_{length+1} is known
+  const F = resolveTarget(a, ta, length + 1, c);
+  const K = tb.columns.map((col) => col[0]);
+  return localTorLengths(ta.S, F, ta.J, K, length, opts(c));
+}
+
+/// A finite sum needs M ⊗ N of finite length: checked through the length of the quotient.
+function requireFiniteLength(a: Value, b: Value, c: CallContext, what: string): void {
+  if (a.type !== "Ring" || b.type !== "Ring") return;
+  const rings = c.interp.session.rings;
+  const sum = rings.quotient(a, b.ideal.slice((b.over ?? b).ideal.length === b.ideal.length ? 0 : (b.over?.ideal.length ?? 0)));
+  const L = analysisOf(sum, c);
+  if (!L.zero && L.tangentSeries.dimension > 0) {
+    throw runtime(`${what}: M ⊗ N does not have finite length at ${pointText(a.local!.at)} (the ideals' sum is not primary to the maximal ideal there), so the intersection multiplicity is not defined`, c.span);
+  }
+}
+
+type PropertyImpl = (obj: Value, args: readonly Value[], c: CallContext) => Value;
+type FunctionImpl = (args: readonly Value[], c: CallContext) => Value;
+
+export const LOCAL_HOMOLOGY_PROPERTIES: Record<string, PropertyImpl> = {
+    "Ring.depth": (v, _a, c) => Int(ringInvariants(v as RingValue, c).depth),
+    "Ring.is_cm": (v, _a, c) => Bool(ringInvariants(v as RingValue, c).cm),
+    "Ring.is_gorenstein": (v, _a, c) => Bool(ringInvariants(v as RingValue, c).gorenstein),
+    "Ring.is_ci": (v, _a, c) => Bool(ringInvariants(v as RingValue, c).ci),
+    "Ring.burch_index": (v, _a, c) => burchValue(v as RingValue, c),
+    "Ring.is_burch": (v, _a, c) => Bool((burchValue(v as RingValue, c) as { value: bigint }).value >= 1n),
+    "Ring.min_gens": (v, _a, c) => {
+      const t = targetOf(v, c, c.span);
+      return Int(resolveTarget(v, t, 0, c).ranks[0]);
+    },
+    "Module.min_gens": (v, _a, c) => {
+      const t = targetOf(v, c, c.span);
+      return Int(resolveTarget(v, t, 0, c).ranks[0]);
+    },
+};
+
+export const LOCAL_HOMOLOGY_FUNCTIONS: Record<string, FunctionImpl> = {
+    "resolve(Module or Ring)": ([m], c) => {
+      const t = targetOf(m, c);
+      const length = lengthOf(t, c, "resolve");
+      if (c.named.has("degree")) throw runtime("degree bounds need a graded ring; a local ring is ungraded", c.span);
+      return complexValue(t, resolveTarget(m, t, length, c), length);
+    },
+    "poincare(Module or Ring)": ([m], c) => {
+      const t = targetOf(m, c);
+      const terms = bound(c, "terms", 1000) ?? 10;
+      if (terms < 1) throw runtime("terms must be at least 1", c.span);
+      const F = resolveTarget(m, t, terms - 1, c);
+      return seriesValue(Array.from({ length: terms }, (_, i) => BigInt(F.ranks[i] ?? 0)), terms);
+    },
+    "syzygy(Module or Ring, Int)": ([m, p], c) => {
+      const t = targetOf(m, c);
+      const k = Number((p as { value: bigint }).value);
+      if (k < 0) throw runtime("the syzygy index must be at least 0", c.argSpans[1] ?? c.span);
+      const F = resolveTarget(m, t, k + 1, c);
+      const rank = F.ranks[k] ?? 0;
+      const rows = (F.maps[k] ?? Array.from({ length: rank }, () => [])).map((row) => row.map((f) => moveOut(t.S, t.at, f)));
+      return moduleValue(t.base, rows, new Array<number>(rank).fill(0));
+    },
+    "tor_lengths(Module or Ring, Module or Ring)": ([a, b], c) => {
+      const t = targetOf(a, c);
+      const length = lengthOf(t, c, "tor_lengths");
+      requireFiniteLength(a, b, c, "tor_lengths");
+      return list(torLengths(a, b, length, c).map(Int));
+    },
+    "serre(Module or Ring, Module or Ring)": ([a, b], c) => {
+      const t = targetOf(a, c);
+      if (t.J.length > 0) throw runtime("serre over a local quotient ring: Tor need not vanish in high degrees there, so the alternating sum is not defined; use the local ring of a polynomial ring", c.span);
+      requireFiniteLength(a, b, c, "serre");
+      const lengths = torLengths(a, b, t.S.vars.length, c);
+      return Int(lengths.reduce((acc, x, i) => (i % 2 === 0 ? acc + x : acc - x), 0n));
+    },
+    "burch_index(Ring)": ([r], c) => burchValue(r as RingValue, c),
+};
+
+/// The Burch index at the point (the ideal moved to the origin; positive depth: general linear
+/// forms chosen at random, recorded in the note as for graded rings).
+function burchValue(r: RingValue, c: CallContext): Value {
+  const at = r.local!.at;
+  const I = engineIdeal(r.poly, r.ideal.map((f) => moveIn(r.poly, at, f)));
+  const res = burchIndexOfRing(I, opts(c));
+  const note = res.random
+    ? `depth ${res.depth}: computed after factoring out general linear forms chosen at random (seed ${res.random.seed}): ${res.random.forms.join(", ")}`
+    : undefined;
+  if (note) opts(c).progress?.({ stage: "Burch index", detail: note });
+  return { type: "Int", value: BigInt(res.index), ...(note ? { note } : {}) };
+}
