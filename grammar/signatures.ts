@@ -348,6 +348,13 @@ export const FUNCTIONS: readonly FunctionSig[] = [
     description: "the Tjurina number dim_k of the local ring modulo f and its partial derivatives (an Error when the singularity is not isolated)",
     example: "tjurina(x^3 + y^7 + x*y^5)",
   },
+  {
+    name: "bass",
+    overloads: [ov([M, p("i", T.Int)], T.Int, 3)],
+    options: [],
+    description: "the Bass number μ_i(M) = dim_k Ext^i(k, M) over the ring M lives over, at its point (the origin of a graded ring)",
+    example: "bass(R.residue, 0)",
+  },
 ];
 
 const prop = (

@@ -4,11 +4,17 @@
 /// never answered by the graded code (which would silently read the ring globally).
 import type { CallContext } from "./builtins";
 import { runtime } from "./errors";
-import { LOCAL_FUNCTIONS, LOCAL_GENERAL_PROPERTIES, LOCAL_RING_PROPERTIES } from "./local";
+import { LOCAL_FUNCTIONS as LOCAL_FUNCTIONS_OF_RINGS, LOCAL_GENERAL_PROPERTIES, LOCAL_RING_PROPERTIES } from "./local";
 import { LOCAL_HOMOLOGY_FUNCTIONS, LOCAL_HOMOLOGY_PROPERTIES } from "./local-homology";
 import type { RingValue, Value } from "./values";
 
-export { LOCAL_FUNCTIONS, LOCAL_GENERAL_PROPERTIES };
+export { LOCAL_GENERAL_PROPERTIES };
+
+/// Functions of local rings, and bass (which reads any ring at its point: the origin of a graded one).
+export const LOCAL_FUNCTIONS: Record<string, FunctionImpl> = {
+  ...LOCAL_FUNCTIONS_OF_RINGS,
+  "bass(Module or Ring, Int)": LOCAL_HOMOLOGY_FUNCTIONS["bass(Module or Ring, Int)"],
+};
 
 type PropertyImpl = (obj: Value, args: readonly Value[], c: CallContext) => Value;
 type FunctionImpl = (args: readonly Value[], c: CallContext) => Value;
@@ -39,12 +45,28 @@ export function localProperty(obj: Value, key: string): PropertyImpl | undefined
 }
 
 /// Functions whose arguments include a local ring (or a module over one).
-const LOCAL_AWARE = new Set(["localize(Ring)", "milnor(Poly)", "tjurina(Poly)"]);
+const LOCAL_AWARE = new Set(["localize(Ring)", "milnor(Poly)", "tjurina(Poly)", "bass(Module or Ring, Int)"]);
+
+/// Over a graded quotient ring R = S/J these are read at the origin by the local code: the
+/// lengths of finite-length graded modules are those of their localisations at the
+/// irrelevant ideal (common practice).
+const GRADED_QUOTIENT = new Set(["tor_lengths(Module or Ring, Module or Ring)", "serre(Module or Ring, Module or Ring)"]);
+
+const overQuotient = (v: Value): boolean =>
+  (v.type === "Ring" && v.over !== undefined && v.over.ideal.length > 0) || (v.type === "Module" && v.ring.ideal.length > 0);
+
+/// The local implementation of a function over a graded quotient ring, when it has one.
+function gradedQuotientFunction(key: string, args: readonly Value[]): FunctionImpl | undefined {
+  if (!GRADED_QUOTIENT.has(key) || !args.some(overQuotient) || args.some((a) => localRingOf(a))) return undefined;
+  return EXTRA_FUNCTIONS[key];
+}
 
 /// Ideals, matrices and polynomials of a local ring are kept by global representatives, and
 /// ideal operations (sums, products, colons, minors) commute with localisation, so only
 /// functions of a local Ring or Module are redirected.
 export function localFunction(key: string, args: readonly Value[]): FunctionImpl | undefined {
+  const graded = gradedQuotientFunction(key, args);
+  if (graded) return graded;
   if (LOCAL_AWARE.has(key)) return undefined;
   if (!args.some((a) => (a.type === "Ring" || a.type === "Module") && localRingOf(a))) return undefined;
   const impl = EXTRA_FUNCTIONS[key];

@@ -3,8 +3,8 @@
 /// localised at a point; depth, Cohen–Macaulay, Gorenstein and complete intersection of a
 /// local ring; the Burch index at the point. Engine: lib/algebra/localring (minimal free
 /// resolutions by cancelling units in global resolutions; lengths from tangent cones).
-import { burchIndexOfRing, ideal as engineIdeal } from "../algebra/index";
-import { localResolution, localTorLengths, translate, type LocalFreeResolution, type Point } from "../algebra/localring/index";
+import { burchIndexOfRing, ideal as engineIdeal, variable } from "../algebra/index";
+import { bassNumbers, localResolution, localTorLengths, translate, type LocalFreeResolution, type Point } from "../algebra/localring/index";
 import { localDimension } from "../algebra/localring/index";
 import type { Poly, PolyRing } from "../algebra/index";
 import type { CallContext } from "./builtins";
@@ -35,8 +35,10 @@ interface LocalTarget {
 
 function targetOf(m: Value, c: CallContext, span = c.argSpans[0] ?? c.span): LocalTarget {
   if (m.type === "Ring") {
-    const base = m.over ?? c.interp.session.rings.localize(c.interp.session.rings.ambient(m), m.local!.at);
-    const at = m.local!.at;
+    // a graded ring (not localised) is read at the origin, its irrelevant ideal
+    const at = m.local?.at ?? m.poly.vars.map(() => ({ num: 0n, den: 1n }));
+    const rings = c.interp.session.rings;
+    const base = m.over ?? (m.local ? rings.localize(rings.ambient(m), at) : rings.ambient(m));
     const S = m.poly;
     const J = base.ideal.map((f) => moveIn(S, at, f));
     const I = m.ideal.slice(base.ideal.length).map((f) => moveIn(S, at, f));
@@ -44,7 +46,7 @@ function targetOf(m: Value, c: CallContext, span = c.argSpans[0] ?? c.span): Loc
   }
   if (m.type === "Module") {
     const r = m.ring;
-    const at = r.local!.at;
+    const at = r.local?.at ?? r.poly.vars.map(() => ({ num: 0n, den: 1n }));
     const S = r.poly;
     const P = m.presentation;
     const columns = Array.from({ length: P.cols }, (_, k) => P.rows.map((row) => moveIn(S, at, row[k])));
@@ -123,13 +125,17 @@ function ringInvariants(r: RingValue, c: CallContext) {
 
 function torLengths(a: Value, b: Value, length: number, c: CallContext): bigint[] {
   const ta = targetOf(a, c, c.argSpans[0]);
-  if (b.type !== "Ring") throw runtime("over a local ring tor_lengths and serre take a quotient ring as their second argument (a cyclic module L / I)", c.argSpans[1] ?? c.span);
+  // the second module must be cyclic: a quotient ring L / I, or coker of one row (R.residue)
+  if (b.type !== "Ring" && !(b.type === "Module" && b.presentation.rows.length === 1)) {
+    throw runtime("over a local or quotient ring tor_lengths and serre take a cyclic second module: a quotient ring L / I or a module with one generator", c.argSpans[1] ?? c.span);
+  }
   const tb = targetOf(b, c, c.argSpans[1]);
   const sameBase = ta.base === tb.base || (ta.base.ideal.length === tb.base.ideal.length && ta.base.ideal.every((f, i) => f === tb.base.ideal[i]) && ta.at.every((x, i) => x.num === tb.at[i].num && x.den === tb.at[i].den));
   if (!sameBase) throw runtime("both modules must live over the same local ring", c.span);
   // F resolved one step further, so that the image of d_{length+1} is known
   const F = resolveTarget(a, ta, length + 1, c);
   const K = tb.columns.map((col) => col[0]);
+  // tb.J is the ring's ideal, the same as ta.J; K adds the module's own relations
   return localTorLengths(ta.S, F, ta.J, K, length, opts(c));
 }
 
@@ -137,10 +143,10 @@ function torLengths(a: Value, b: Value, length: number, c: CallContext): bigint[
 function requireFiniteLength(a: Value, b: Value, c: CallContext, what: string): void {
   if (a.type !== "Ring" || b.type !== "Ring") return;
   const rings = c.interp.session.rings;
-  const sum = rings.quotient(a, b.ideal.slice((b.over ?? b).ideal.length === b.ideal.length ? 0 : (b.over?.ideal.length ?? 0)));
+  const sum = rings.quotient(a, b.ideal);
   const L = analysisOf(sum, c);
   if (!L.zero && L.tangentSeries.dimension > 0) {
-    throw runtime(`${what}: M ⊗ N does not have finite length at ${pointText(a.local!.at)} (the ideals' sum is not primary to the maximal ideal there), so the intersection multiplicity is not defined`, c.span);
+    throw runtime(`${what}: M ⊗ N does not have finite length at ${pointText(a.local?.at ?? a.poly.vars.map(() => ({ num: 0n, den: 1n })))} (the ideals' sum is not primary to the maximal ideal there), so the intersection multiplicity is not defined`, c.span);
   }
 }
 
@@ -195,13 +201,29 @@ export const LOCAL_HOMOLOGY_FUNCTIONS: Record<string, FunctionImpl> = {
     },
     "serre(Module or Ring, Module or Ring)": ([a, b], c) => {
       const t = targetOf(a, c);
-      if (t.J.length > 0) throw runtime("serre over a local quotient ring: Tor need not vanish in high degrees there, so the alternating sum is not defined; use the local ring of a polynomial ring", c.span);
       requireFiniteLength(a, b, c, "serre");
-      const lengths = torLengths(a, b, t.S.vars.length, c);
+      // over a quotient ring the sum is finite when M has finite projective dimension, which is
+      // then at most depth R ≤ n (Auslander–Buchsbaum): a resolution still going at n + 1 says not
+      const n = t.S.vars.length;
+      if (t.J.length > 0 && !resolveTarget(a, t, n + 1, c).complete) {
+        throw runtime(`serre: the first module has infinite projective dimension over this quotient ring (its minimal resolution goes beyond ${n + 1} steps), so Σ (−1)^i length Tor_i is not a finite sum; tor_lengths(M, N, length = …) gives the lengths`, c.span);
+      }
+      const lengths = torLengths(a, b, n, c);
       return Int(lengths.reduce((acc, x, i) => (i % 2 === 0 ? acc + x : acc - x), 0n));
     },
     "burch_index(Ring)": ([r], c) => burchValue(r as RingValue, c),
+    "bass(Module or Ring, Int)": ([m, i], c) => bassValue(m, Number((i as { value: bigint }).value), c),
 };
+
+/// μ_i(M) = dim_k Ext^i_R(k, M) at the point (the origin for a graded ring), R the ring M lives over.
+function bassValue(m: Value, i: number, c: CallContext): Value {
+  if (i < 0) throw runtime("bass: the index must be at least 0", c.argSpans[1] ?? c.span);
+  const t = targetOf(m, c);
+  const S = t.S;
+  // the residue field of the base ring at the point, resolved over it
+  const F = localResolution(S, 1, S.vars.map((_, v) => [variable(S, v)]), t.J, i + 1, opts(c));
+  return Int(bassNumbers(S, F, t.J, t.rows, t.columns, i, opts(c))[i]);
+}
 
 /// The Burch index at the point (the ideal moved to the origin; positive depth: general linear
 /// forms chosen at random, recorded in the note as for graded rings).
