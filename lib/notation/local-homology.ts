@@ -3,8 +3,8 @@
 /// localised at a point; depth, Cohen–Macaulay, Gorenstein and complete intersection of a
 /// local ring; the Burch index at the point. Engine: lib/algebra/localring (minimal free
 /// resolutions by cancelling units in global resolutions; lengths from tangent cones).
-import { burchIndexOfRing, ideal as engineIdeal, variable } from "../algebra/index";
-import { bassNumbers, localResolution, localTorLengths, translate, type LocalFreeResolution, type Point } from "../algebra/localring/index";
+import { burchIndexOfRing, ideal as engineIdeal, variable, zero as zeroOf } from "../algebra/index";
+import { bassNumbers, kernelColumns, localResolution, localTorLengths, translate, type LocalFreeResolution, type Point } from "../algebra/localring/index";
 import { localDimension } from "../algebra/localring/index";
 import type { Poly, PolyRing } from "../algebra/index";
 import type { CallContext } from "./builtins";
@@ -13,7 +13,7 @@ import { analysisOf } from "./local";
 import { moduleValue } from "./modules";
 import { bound } from "./named-options";
 import { seriesValue } from "./quotients";
-import { list, type ComplexValue, type MatrixValue, type RingValue, type Value } from "./values";
+import { list, type ModuleValue, type ComplexValue, type MatrixValue, type RingValue, type Value } from "./values";
 
 const Int = (value: number | bigint): Value => ({ type: "Int", value: BigInt(value) });
 const Bool = (value: boolean): Value => ({ type: "Bool", value });
@@ -160,6 +160,18 @@ export const LOCAL_HOMOLOGY_PROPERTIES: Record<string, PropertyImpl> = {
     "Ring.is_ci": (v, _a, c) => Bool(ringInvariants(v as RingValue, c).ci),
     "Ring.burch_index": (v, _a, c) => burchValue(v as RingValue, c),
     "Ring.is_burch": (v, _a, c) => Bool((burchValue(v as RingValue, c) as { value: bigint }).value >= 1n),
+    "Module.socle": (v, _a, c) => {
+      // the k-vector space 0 :_M m as a module: one copy of k per basis element (ungraded)
+      const M = v as ModuleValue;
+      const { dim } = socleData(M, c);
+      const P = M.ring.poly;
+      const at = M.ring.local?.at ?? P.vars.map(() => ({ num: 0n, den: 1n }));
+      const mGens = P.vars.map((_, i) => moveOut(P, at, variable(P, i)));
+      const rows = Array.from({ length: dim }, (_, g) => Array.from({ length: dim }, (__, h) => mGens.map((x) => (g === h ? x : zeroOf(P)))).flat());
+      return moduleValue(M.ring, rows, new Array<number>(dim).fill(0));
+    },
+    "Module.splits_residue": (v, _a, c) => Bool(socleData(v, c).splits),
+    "Ring.splits_residue": (v, _a, c) => Bool(socleData(v, c).splits),
     "Ring.min_gens": (v, _a, c) => {
       const t = targetOf(v, c, c.span);
       return Int(resolveTarget(v, t, 0, c).ranks[0]);
@@ -214,6 +226,22 @@ export const LOCAL_HOMOLOGY_FUNCTIONS: Record<string, FunctionImpl> = {
     "burch_index(Ring)": ([r], c) => burchValue(r as RingValue, c),
     "bass(Module or Ring, Int)": ([m, i], c) => bassValue(m, Number((i as { value: bigint }).value), c),
 };
+
+/// dim_k of the socle 0 :_M m = Hom(k, M) (μ_0), and whether k is a direct summand of M: a
+/// socle element outside m·M, i.e. dim soc M > dim soc(m·M), since soc(m·M) = soc M ∩ m·M
+/// (common practice). m·M = (m·F + U)/U is presented by the syzygies of [x_i·e_j | U] over R.
+function socleData(m: Value, c: CallContext): { dim: number; splits: boolean } {
+  const t = targetOf(m, c);
+  const S = t.S;
+  const F = localResolution(S, 1, S.vars.map((_, v) => [variable(S, v)]), t.J, 1, opts(c));
+  const dim = Number(bassNumbers(S, F, t.J, t.rows, t.columns, 0, opts(c))[0]);
+  if (dim === 0) return { dim, splits: false };
+  const gens: Poly[][] = [];
+  for (let j = 0; j < t.rows; j++) for (let v = 0; v < S.vars.length; v++) gens.push(Array.from({ length: t.rows }, (_, k) => (k === j ? variable(S, v) : zeroOf(S))));
+  const rel = kernelColumns(S, t.rows, [...gens, ...t.columns], t.J, opts(c)).map((col) => col.slice(0, gens.length));
+  const inner = Number(bassNumbers(S, F, t.J, gens.length, rel, 0, opts(c))[0]);
+  return { dim, splits: dim > inner };
+}
 
 /// μ_i(M) = dim_k Ext^i_R(k, M) at the point (the origin for a graded ring), R the ring M lives over.
 function bassValue(m: Value, i: number, c: CallContext): Value {

@@ -139,6 +139,22 @@ describe("resolutions over local rings", () => {
     expect(ints(v[4])).toEqual([1, 3, 2, 0, 0, 0]);
     expect(v[5].value).toBe(true);
   });
+  it("socles and splits_residue over a non-Artinian local ring: depth 0 k[[x,y]]/(x^2, xy) (x^2 + x^3 locally x^2)", async () => {
+    // soc R = (x) (x·m = 0); R is cyclic and not k, so k does not split off R; k splits off k;
+    // a depth-0 ring is Burch exactly when k is a summand of Ω^2 k (H. Dao, T. Kobayashi,
+    // R. Takahashi, Algebra & Number Theory 2020; from memory): compare with the Burch index
+    const v = await values(
+      "S := Q[x, y]\nR := localize(S / <x^2 + x^3, x*y>)\nR.socle\n[R.splits_residue, R.residue.splits_residue]\nR.residue.socle.min_gens\nsyzygy(R.residue, 2).splits_residue\nR.burch_index",
+    );
+    expect(v[2].text).toBe("<x^2+x>");
+    expect(v[3].text).toBe("[false, true]");
+    expect(v[4].value).toBe("1");
+    expect(v[5].value).toBe(Number(v[6].value) >= 1);
+    // depth 1: the socle of Ω^1 k = m is 0 and k does not split off Ω^2 k over the cusp
+    const w = await values("S := Q[x, y]\nT := localize(S / <y^2 - x^3>)\nsyzygy(T.residue, 1).socle.min_gens\nsyzygy(T.residue, 2).splits_residue");
+    expect([w[2].value, w[3].value]).toEqual(["0", false]);
+  });
+
   it("a local ring is encoded with its point and restored from JSON", async () => {
     const v = await values("S := Q[x, y]\nL := localize(S / <y^2 - x^3>, at = [0, 0])\nM := localize(S, at = [1/2, 3])");
     expect(v[1]).toMatchObject({ local: { at: ["0", "0"] }, text: "localize(Q[x, y] / <-x^3+y^2>)" });
