@@ -55,10 +55,21 @@ const GRADED_QUOTIENT = new Set(["tor_lengths(Module or Ring, Module or Ring)", 
 const overQuotient = (v: Value): boolean =>
   (v.type === "Ring" && v.over !== undefined && v.over.ideal.length > 0) || (v.type === "Module" && v.ring.ideal.length > 0);
 
-/// The local implementation of a function over a graded quotient ring, when it has one.
+const weighted = (v: Value): boolean => {
+  if (v.type === "Ring") return v.poly.degrees.some((d) => d !== 1);
+  if (v.type === "Module") return v.ring.poly.degrees.some((d) => d !== 1);
+  return false;
+};
+
+/// The local implementation of a function over a graded quotient ring, when it has one. The
+/// Poincaré series over a quotient of a weighted polynomial ring also goes there: its total
+/// Betti numbers are those of the localisation at the irrelevant ideal, exact without the
+/// degree bound that only the standard grading has (Backelin's rate).
 function gradedQuotientFunction(key: string, args: readonly Value[]): FunctionImpl | undefined {
-  if (!GRADED_QUOTIENT.has(key) || !args.some(overQuotient) || args.some((a) => localRingOf(a))) return undefined;
-  return EXTRA_FUNCTIONS[key];
+  if (args.some((a) => localRingOf(a)) || !args.some(overQuotient)) return undefined;
+  if (GRADED_QUOTIENT.has(key)) return EXTRA_FUNCTIONS[key];
+  if (key === "poincare(Module or Ring)" && args.some(weighted)) return EXTRA_FUNCTIONS[key];
+  return undefined;
 }
 
 /// Ideals, matrices and polynomials of a local ring are kept by global representatives, and

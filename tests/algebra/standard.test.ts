@@ -145,3 +145,27 @@ describe("standard bases agree with SymPy via Lazard's homogenisation", () => {
     });
   });
 });
+
+describe("standard bases: progress, abort and limits", () => {
+  const R = polyRing(gf(P), ["x", "y", "z"]);
+  const gens = ["x^5+y^6+z^7+x*y*z^3", "x^4*y-z^6+y^3*z^2", "y^5-x^2*z^3+x*y^4*z"].map((g) => p(R, g));
+  it("an aborted signal ends it with kind cancelled", () => {
+    const ctl = new AbortController();
+    ctl.abort();
+    expect(() => standardBasis(R, gens, { signal: ctl.signal })).toThrow(/cancelled/);
+  });
+  it("a basis-size limit ends it with kind limit", () => {
+    let err: unknown = null;
+    try {
+      standardBasis(R, gens, { limits: { maxBasisSize: 2 } });
+    } catch (e) {
+      err = e;
+    }
+    expect(err).toMatchObject({ kind: "limit" });
+  });
+  it("reports progress while it runs", () => {
+    const stages: string[] = [];
+    standardBasis(R, gens, { progress: (q) => stages.push(q.stage) });
+    expect(stages.length).toBeGreaterThan(0);
+  });
+});
