@@ -35,13 +35,15 @@ import {
   variable,
   type HilbertSeries,
   type Ideal,
-  type RationalNumber,
+  type Rational,
+  rational,
+  ratAdd,
   type Poly,
 } from "../algebra/index";
 import { reduceIn, ringOfOperands, toPoly } from "./coerce";
 import { limit, runtime } from "./errors";
 import { colonOf, eliminationOf, groebnerOf, idealProductOf, idealValue, quotientIdeal, saturationByElement, saturationOf } from "./ideals";
-import type { Frame, Interpreter } from "./interpreter";
+import type { CallContext, Evaluator, Frame } from "./context";
 import { addValues } from "./operators";
 import { HOMOLOGY_FUNCTIONS, MODULE_PROPERTIES } from "./homology";
 import { MODULE_FUNCTIONS, RESIDUE_PROPERTY } from "./modules";
@@ -51,14 +53,6 @@ import { QUOTIENT_FUNCTIONS, QUOTIENT_PROPERTIES } from "./quotients";
 import { LOCAL_FUNCTIONS, LOCAL_GENERAL_PROPERTIES, localFunction, localProperty } from "./local-dispatch";
 import { valueType } from "./value-type";
 import { list, type HilbertSeriesValue, type IdealValue, type RingValue, type Value } from "./values";
-
-export interface CallContext {
-  readonly interp: Interpreter;
-  readonly frame: Frame;
-  readonly span: Span;
-  readonly argSpans: readonly Span[];
-  readonly named: ReadonlyMap<string, Value>;
-}
 
 type FunctionImpl = (args: readonly Value[], c: CallContext) => Value;
 type PropertyImpl = (obj: Value, args: readonly Value[], c: CallContext) => Value;
@@ -143,30 +137,19 @@ function series(v: Value): HilbertSeries {
 const shiftOf = (v: Value): number => (v as HilbertSeriesValue).shift ?? 0;
 
 /// The polynomial p(t + s) for p given by ascending rational coefficients (Taylor shift).
-function shiftPolynomial(p: readonly RationalNumber[], s: number): RationalNumber[] {
-  let out: RationalNumber[] = [];
+function shiftPolynomial(p: readonly Rational[], s: number): Rational[] {
+  let out: Rational[] = [];
   // Horner: out = out·(t + s) + p_i, from the top coefficient down
   for (let i = p.length - 1; i >= 0; i--) {
-    const next: RationalNumber[] = new Array(out.length + 1).fill(null).map(() => ({ num: 0n, den: 1n }));
+    const next: Rational[] = Array.from({ length: out.length + 1 }, () => rational(0n));
     out.forEach((q, k) => {
       next[k + 1] = ratAdd(next[k + 1], q);
-      next[k] = ratAdd(next[k], { num: q.num * BigInt(s), den: q.den });
+      next[k] = ratAdd(next[k], rational(q.num * BigInt(s), q.den));
     });
     next[0] = ratAdd(next[0], p[i]);
     out = next;
   }
   return out;
-}
-
-function ratAdd(a: RationalNumber, b: RationalNumber): RationalNumber {
-  const num = a.num * b.den + b.num * a.den, den = a.den * b.den;
-  const g = gcdBig(num < 0n ? -num : num, den);
-  return g === 0n ? { num: 0n, den: 1n } : { num: num / g, den: den / g };
-}
-
-function gcdBig(a: bigint, b: bigint): bigint {
-  while (b !== 0n) [a, b] = [b, a % b];
-  return a;
 }
 
 function hilbertDegree(v: Value, span: Span, c: CallContext): number {
@@ -409,7 +392,7 @@ function matchesOverload(o: Overload, args: readonly Value[]): boolean {
   return args.every((a, i) => isAssignable(valueType(a), i < o.params.length ? o.params[i].type : o.rest!.type));
 }
 
-export function callFunction(interp: Interpreter, name: string, args: Value[], named: Map<string, Value>, e: Call, frame: Frame): Value {
+export function callFunction(interp: Evaluator, name: string, args: Value[], named: Map<string, Value>, e: Call, frame: Frame): Value {
   const sig = lookupFunction(name)!;
   const o = sig.overloads.find((x) => matchesOverload(x, args));
   if (!o) throw runtime(`${name} does not accept (${args.map((a) => a.type).join(", ")})`, e.span);
@@ -427,7 +410,7 @@ function propertySig(obj: Value, name: string, span: Span): PropertySig {
   return sig;
 }
 
-export function getProperty(interp: Interpreter, obj: Value, name: string, e: Property, frame: Frame): Value {
+export function getProperty(interp: Evaluator, obj: Value, name: string, e: Property, frame: Frame): Value {
   const sig = propertySig(obj, name, e.name.span);
   if (sig.params) throw runtime(`${name} takes arguments: write ${name}(…)`, e.name.span);
   const impl = localProperty(obj, propertyKey(sig)) ?? PROPERTY_IMPLS[propertyKey(sig)];
@@ -435,7 +418,7 @@ export function getProperty(interp: Interpreter, obj: Value, name: string, e: Pr
   return impl(obj, [], { interp, frame, span: e.span, argSpans: [], named: new Map() });
 }
 
-export function callMethod(interp: Interpreter, obj: Value, name: string, args: Value[], e: Call, frame: Frame): Value {
+export function callMethod(interp: Evaluator, obj: Value, name: string, args: Value[], e: Call, frame: Frame): Value {
   const nameSpan = e.callee.kind === "Property" ? e.callee.name.span : e.span;
   const sig = propertySig(obj, name, nameSpan);
   if (!sig.params) {

@@ -2,7 +2,7 @@
 /// made by `localize` is read at its point by the implementations in local.ts and
 /// local-homology.ts; names that have no local reading are refused there with the reason,
 /// never answered by the graded code (which would silently read the ring globally).
-import type { CallContext } from "./builtins";
+import type { CallContext } from "./context";
 import { runtime } from "./errors";
 import { LOCAL_FUNCTIONS as LOCAL_FUNCTIONS_OF_RINGS, LOCAL_GENERAL_PROPERTIES, LOCAL_RING_PROPERTIES } from "./local";
 import { LOCAL_HOMOLOGY_FUNCTIONS, LOCAL_HOMOLOGY_PROPERTIES } from "./local-homology";

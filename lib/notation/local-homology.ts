@@ -4,10 +4,10 @@
 /// local ring; the Burch index at the point. Engine: lib/algebra/localring (minimal free
 /// resolutions by cancelling units in global resolutions; lengths from tangent cones).
 import { burchIndexOfRing, ideal as engineIdeal, variable, zero as zeroOf } from "../algebra/index";
-import { bassNumbers, kernelColumns, localResolution, localTorLengths, translate, type LocalFreeResolution, type Point } from "../algebra/localring/index";
-import { localDimension } from "../algebra/localring/index";
+import { bassNumbers, kernelColumns, localResolution, localTorLengths, translate, type LocalFreeResolution, type Point } from "../algebra/index";
+import { localDimension } from "../algebra/index";
 import type { Poly, PolyRing } from "../algebra/index";
-import type { CallContext } from "./builtins";
+import type { CallContext } from "./context";
 import { runtime } from "./errors";
 import { analysisOf } from "./local";
 import { moduleValue } from "./modules";

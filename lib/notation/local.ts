@@ -13,14 +13,14 @@ import {
   tjurinaNumber,
   type LocalAnalysis,
   type Point,
-} from "../algebra/localring/index";
-import { hilbertSeriesFromNumerator } from "../algebra/hilbert/index";
+} from "../algebra/index";
+import { hilbertSeriesFromNumerator } from "../algebra/index";
 import { constant, sub as subPoly, variable } from "../algebra/index";
-import type { CallContext } from "./builtins";
+import type { CallContext } from "./context";
 import { runtime } from "./errors";
 import { colonOf, idealValue } from "./ideals";
 import { moduleValue } from "./modules";
-import { rational, ratToString, type Rational } from "./rational";
+import { rational, ratToString, type Rational } from "../algebra/index";
 import { type HilbertSeriesValue, type RingValue, type Value } from "./values";
 
 const Int = (value: number | bigint): Value => ({ type: "Int", value: BigInt(value) });

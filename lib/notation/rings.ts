@@ -3,7 +3,7 @@
 /// Gröbner basis is computed once.
 import { QQ, formatPoly, gf, polyRing, type Field, type OrderSpec, type Poly, type PolyRing } from "../algebra/index";
 import { fieldText, orderText } from "./text";
-import type { Rational } from "./rational";
+import type { Rational } from "../algebra/index";
 import type { RingValue } from "./values";
 
 export function parseField(text: string): Field | null {

@@ -1,5 +1,7 @@
 import type { ComputeOptions } from "../options";
-import { type Poly, type PolyRing, constant, zero } from "./engine";
+import { type Poly } from "../poly/poly";
+import { type PolyRing } from "../poly/ring";
+import { constant, zero } from "../poly/checked";
 import { kernelColumns, localQuotientLength, type Columns } from "./modules";
 import type { LocalFreeResolution } from "./resolve";
 

@@ -1,6 +1,10 @@
 import { runtimeError } from "../errors";
 import type { ComputeOptions } from "../options";
-import { type Poly, type PolyRing, type HilbertSeries, type StandardBasis, hilbertFunctionValues, hilbertSeriesOfMonomials, initialForm, monomial, polyRing, add, zero, standardBasis } from "./engine";
+import { type Poly } from "../poly/poly";
+import { type PolyRing, polyRing } from "../poly/ring";
+import { type HilbertSeries, hilbertFunctionValues, hilbertSeriesOfMonomials } from "../hilbert/series";
+import { type StandardBasis, initialForm, standardBasis } from "../standard/basis";
+import { monomial, add, zero } from "../poly/checked";
 import { derivative, translate, type Point } from "./translate";
 
 /// The local ring S_m/I·S_m of S/I at a rational point, read through a standard basis of the

@@ -1,23 +1,15 @@
 import { runtimeError } from "../errors";
 import type { ComputeOptions } from "../options";
 import { tpolyAtOne, tpolyDivOneMinusT } from "../hilbert/tpoly";
-import {
-  type Poly,
-  type PolyRing,
-  dehomogenise,
-  freeModule,
-  groebnerBasis,
-  hilbertSeriesOfMonomials,
-  homogenisation,
-  homogenise,
-  isZero,
-  moduleGroebnerBasis,
-  moduleKernel,
-  normalForm,
-  terms,
-  totalDegree,
-  zero,
-} from "./engine";
+import { type Poly } from "../poly/poly";
+import { type PolyRing } from "../poly/ring";
+import { dehomogenise, homogenisation, homogenise, totalDegree } from "../standard/homogenize";
+import { freeModule } from "../module/free";
+import { groebnerBasis, normalForm } from "../groebner/checked";
+import { hilbertSeriesOfMonomials } from "../hilbert/series";
+import { isZero, terms, zero } from "../poly/checked";
+import { moduleGroebnerBasis } from "../module/api";
+import { moduleKernel } from "../module/kernel";
 
 /// A matrix by its columns: each column a vector of `rows` polynomials.
 export type Columns = Poly[][];

@@ -1,6 +1,8 @@
 import { AlgebraError } from "../errors";
 import { checkpoint, type ComputeOptions } from "../options";
-import { type Poly, type PolyRing, isZero, mul, sub, terms } from "./engine";
+import { type Poly } from "../poly/poly";
+import { type PolyRing } from "../poly/ring";
+import { isZero, mul, sub, terms } from "../poly/checked";
 import { kernelColumns, reduceVector, type Columns } from "./modules";
 
 /// A minimal free resolution over the local ring R_m, R = S/J (J = 0: S itself), at the origin.

@@ -1,5 +1,7 @@
 import { runtimeError } from "../errors";
-import { type Poly, type PolyRing, add, constant, mul, pow, terms, variable, zero } from "./engine";
+import { type Poly } from "../poly/poly";
+import { type PolyRing } from "../poly/ring";
+import { add, constant, mul, pow, terms, variable, zero } from "../poly/checked";
 
 /// A rational point, coordinate by coordinate.
 export type Point = readonly { readonly num: bigint; readonly den: bigint }[];

@@ -1,5 +1,7 @@
 import { runtimeError } from "../errors";
-import { type Poly, type PolyRing, isZero, monomial, polyRing, terms, zero, add } from "./engine";
+import { type Poly } from "../poly/poly";
+import { type PolyRing, polyRing } from "../poly/ring";
+import { isZero, monomial, terms, zero, add } from "../poly/checked";
 
 /// The ring K[h, x_1..x_n] of Lazard's homogenisation for a local degree order on K[x]: standard
 /// degrees, and the order weights(2, 1, …, 1) with grevlex ties. On forms of one total degree D,
