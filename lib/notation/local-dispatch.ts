@@ -50,7 +50,12 @@ const LOCAL_AWARE = new Set(["localize(Ring)", "milnor(Poly)", "tjurina(Poly)", 
 /// Over a graded quotient ring R = S/J these are read at the origin by the local code: the
 /// lengths of finite-length graded modules are those of their localisations at the
 /// irrelevant ideal (common practice).
-const GRADED_QUOTIENT = new Set(["tor_lengths(Module or Ring, Module or Ring)", "serre(Module or Ring, Module or Ring)"]);
+const GRADED_QUOTIENT = new Set([
+  "tor_lengths(Module or Ring, Module or Ring)",
+  "serre(Module or Ring, Module or Ring)",
+  "tor(Int, Module or Ring, Module or Ring)",
+  "ext(Int, Module or Ring, Module or Ring)",
+]);
 
 const overQuotient = (v: Value): boolean =>
   (v.type === "Ring" && v.over !== undefined && v.over.ideal.length > 0) || (v.type === "Module" && v.ring.ideal.length > 0);

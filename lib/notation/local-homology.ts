@@ -3,7 +3,20 @@
 /// localised at a point; depth, Cohen–Macaulay, Gorenstein and complete intersection of a
 /// local ring; the Burch index at the point. Engine: lib/algebra/localring (minimal free
 /// resolutions by cancelling units in global resolutions; lengths from tangent cones).
-import { burchIndexOfRing, ideal as engineIdeal, variable, zero as zeroOf } from "../algebra/index";
+import {
+  burchIndexOfRing,
+  constant,
+  equals as equalsPoly,
+  homologyModule,
+  ideal as engineIdeal,
+  localModuleNumerator,
+  localQuotientLength,
+  scalarBlocks,
+  terms as termsOf,
+  variable,
+  zero as zeroOf,
+} from "../algebra/index";
+
 import { bassNumbers, kernelColumns, localResolution, localTorLengths, translate, type LocalFreeResolution, type Point } from "../algebra/index";
 import { localDimension } from "../algebra/index";
 import type { Poly, PolyRing } from "../algebra/index";
@@ -15,6 +28,7 @@ import { bound } from "./named-options";
 import { seriesValue } from "./quotients";
 import { list, type ModuleValue, type ComplexValue, type MatrixValue, type RingValue, type Value } from "./values";
 
+const oneOf = (S: PolyRing) => constant(S, 1n);
 const Int = (value: number | bigint): Value => ({ type: "Int", value: BigInt(value) });
 const Bool = (value: boolean): Value => ({ type: "Bool", value });
 const opts = (c: CallContext) => c.interp.session.compute;
@@ -160,6 +174,38 @@ export const LOCAL_HOMOLOGY_PROPERTIES: Record<string, PropertyImpl> = {
     "Ring.is_ci": (v, _a, c) => Bool(ringInvariants(v as RingValue, c).ci),
     "Ring.burch_index": (v, _a, c) => burchValue(v as RingValue, c),
     "Ring.is_burch": (v, _a, c) => Bool((burchValue(v as RingValue, c) as { value: bigint }).value >= 1n),
+    // ℓ(M_m), dim and depth of M at the point, read as a module over S_m presented by [U | J·1]:
+    // length and dimension from the tangent cone of M; depth = n − pd over the regular ring S_m
+    // (Auslander–Buchsbaum; the grade of m on M is the same over S_m and R_m)
+    "Module.length": (v, _a, c) => {
+      const t = targetOf(v, c, c.span);
+      const all = [...t.columns, ...scalarBlocks(t.S, t.rows, t.J)];
+      const units = Array.from({ length: t.rows }, (_, k) => Array.from({ length: t.rows }, (__, j) => (j === k ? oneOf(t.S) : zeroOf(t.S))));
+      try {
+        return Int(localQuotientLength(t.S, t.rows, units, all, opts(c)));
+      } catch {
+        throw runtime("the module does not have finite length at the point", c.span);
+      }
+    },
+    "Module.dim": (v, _a, c) => {
+      const t = targetOf(v, c, c.span);
+      let num = localModuleNumerator(t.S, t.rows, [...t.columns, ...scalarBlocks(t.S, t.rows, t.J)], opts(c));
+      if (num.every((x) => x === 0n)) return Int(-1);
+      let d = t.S.vars.length;
+      while (d > 0 && num.reduce((a, x) => a + x, 0n) === 0n) {
+        num = divideOneMinusT(num);
+        d--;
+      }
+      return Int(d);
+    },
+    "Module.depth": (v, _a, c) => {
+      const t = targetOf(v, c, c.span);
+      const F = localResolution(t.S, t.rows, [...t.columns, ...scalarBlocks(t.S, t.rows, t.J)], [], t.S.vars.length + 1, opts(c));
+      if (F.ranks[0] === 0) throw runtime("the module is zero at the point: its depth is not defined", c.span);
+      let pd = F.ranks.length - 1;
+      while (pd > 0 && F.ranks[pd] === 0) pd--;
+      return Int(t.S.vars.length - pd);
+    },
     "Module.socle": (v, _a, c) => {
       // the k-vector space 0 :_M m as a module: one copy of k per basis element (ungraded)
       const M = v as ModuleValue;
@@ -224,6 +270,8 @@ export const LOCAL_HOMOLOGY_FUNCTIONS: Record<string, FunctionImpl> = {
       return Int(lengths.reduce((acc, x, i) => (i % 2 === 0 ? acc + x : acc - x), 0n));
     },
     "burch_index(Ring)": ([r], c) => burchValue(r as RingValue, c),
+    "tor(Int, Module or Ring, Module or Ring)": ([i, a, b], c) => homologyValue("tor", Number((i as { value: bigint }).value), a, b, c),
+    "ext(Int, Module or Ring, Module or Ring)": ([i, a, b], c) => homologyValue("ext", Number((i as { value: bigint }).value), a, b, c),
     "bass(Module or Ring, Int)": ([m, i], c) => bassValue(m, Number((i as { value: bigint }).value), c),
 };
 
@@ -241,6 +289,66 @@ function socleData(m: Value, c: CallContext): { dim: number; splits: boolean } {
   const rel = kernelColumns(S, t.rows, [...gens, ...t.columns], t.J, opts(c)).map((col) => col.slice(0, gens.length));
   const inner = Number(bassNumbers(S, F, t.J, gens.length, rel, 0, opts(c))[0]);
   return { dim, splits: dim > inner };
+}
+
+/// f/(1 − t) for f(1) = 0, ascending coefficients.
+function divideOneMinusT(f: readonly bigint[]): bigint[] {
+  const out: bigint[] = [];
+  let acc = 0n;
+  for (let k = 0; k < f.length - 1; k++) {
+    acc += f[k];
+    out.push(acc);
+  }
+  return out;
+}
+
+/// The degrees of the bases of F_0 … F_top, when every map is homogeneous (a graded ring and
+/// module); null otherwise (a local ring: everything ungraded, in degree 0).
+function resolutionDegrees(S: PolyRing, F: LocalFreeResolution, degrees0: readonly number[], top: number): number[][] | null {
+  const degOf = (f: Poly): number | null => {
+    const ds = new Set(termsOf(S, f).map((t) => t.exps.reduce((a, e, i) => a + e * S.degrees[i], 0)));
+    return ds.size === 1 ? [...ds][0] : ds.size === 0 ? null : NaN;
+  };
+  const out: number[][] = [[...degrees0]];
+  for (let i = 1; i <= top; i++) {
+    const d = F.maps[i - 1];
+    const cols = F.ranks[i] ?? 0;
+    const row: number[] = [];
+    for (let k = 0; k < cols; k++) {
+      let deg: number | null = null;
+      for (let r = 0; r < (F.ranks[i - 1] ?? 0); r++) {
+        const e = degOf(d[r][k]);
+        if (e === null) continue;
+        if (Number.isNaN(e)) return null;
+        const candidate = e + out[i - 1][r];
+        if (deg !== null && deg !== candidate) return null;
+        deg = candidate;
+      }
+      row.push(deg ?? 0);
+    }
+    out.push(row);
+  }
+  return out;
+}
+
+/// tor(i, M, N) and ext(i, M, N) over a local ring or a quotient ring, as presented modules
+/// over the ring M lives over (graded when everything is; over a local ring in degree 0).
+function homologyValue(kind: "tor" | "ext", i: number, a: Value, b: Value, c: CallContext): Value {
+  if (i < 0) throw runtime(`${kind}: the index must be at least 0`, c.argSpans[0] ?? c.span);
+  const ta = targetOf(a, c, c.argSpans[1]);
+  const tb = targetOf(b, c, c.argSpans[2]);
+  const sameBase = ta.base === tb.base || (ta.J.length === tb.J.length && ta.J.every((f, k) => equalsPoly(ta.S, f, tb.J[k])));
+  if (!sameBase) throw runtime(`${kind}: both modules must live over the same ring`, c.span);
+  const S = ta.S;
+  const F = resolveTarget(a, ta, i + 1, c);
+  const graded = !ta.base.local;
+  const degA = a.type === "Module" ? a.degrees : [0];
+  const degB = b.type === "Module" ? b.degrees : [0];
+  const fDeg = (graded ? resolutionDegrees(S, F, degA, i + 1) : null) ?? Array.from({ length: i + 2 }, (_, k) => new Array<number>(F.ranks[k] ?? 0).fill(0));
+  const nDeg = graded && fDeg !== null ? degB : degB.map(() => 0);
+  const P = homologyModule(S, ta.J, F, fDeg, tb.rows, tb.columns, nDeg, i, kind, opts(c));
+  const rows = Array.from({ length: P.generators }, (_, j) => P.relations.map((col) => moveOut(S, ta.at, col[j])));
+  return moduleValue(ta.base, rows, P.degrees);
 }
 
 /// μ_i(M) = dim_k Ext^i_R(k, M) at the point (the origin for a graded ring), R the ring M lives over.

@@ -35,6 +35,27 @@ describe("Tor over a graded quotient ring", () => {
   });
 });
 
+describe("tor and ext as modules over a quotient ring", () => {
+  it("over the cone xy = z^2: Tor_1(R/(x,z), R/(y,z)) = k(−1) and Tor_2 = k(−2); Ext^1(R/(x,z), R) ≅ R/(x,z) (by hand from the rank-one matrix factorisation; R Gorenstein, so Ext^1 of the ruling is its canonical module — Eisenbud, Commutative Algebra, §21.1, from memory)", async () => {
+    const t = await texts(
+      "S := Q[x, y, z]\nT := S / <x*y - z^2>\nA := tor(1, T / <x, z>, T / <y, z>)\n[A.length, A.min_gens]\nA.hilbert\ntor(2, T / <x, z>, T / <y, z>).hilbert\next(1, T / <x, z>, T^1).hilbert",
+    );
+    expect(t[3]).toBe("[1, 1]");
+    expect(t[4]).toBe("(t-3*t^2+3*t^3-t^4)/(1-t)^3"); // = t
+    expect(t[5]).toBe("(t^2-3*t^3+3*t^4-t^5)/(1-t)^3"); // = t^2
+    expect(t[6]).toBe("(1-2*t+t^2)/(1-t)^3"); // = 1/(1−t), the Hilbert series of k[y]
+  });
+  it("the modules agree with tor_lengths (Tate's closed form over x^2, y^2, z^2) and Ext^i(k, R) of an Artinian Gorenstein ring is k, 0, 0", async () => {
+    const t = await texts("S := Q[x, y, z]\nR := S / <x^2, y^2, z^2>\n[tor(i, R.residue, R.residue).length for i in 0..3]\n[ext(i, R.residue, R^1).length for i in 0..2]");
+    expect(t[2]).toBe("[1, 3, 6, 10]");
+    expect(t[3]).toBe("[1, 0, 0]");
+  });
+  it("over a local ring: Tor_1(k, k) over the cusp has length 2 = embdim, Tor_2 length 2 (Tate: (1+t)^2/(1−t^2))", async () => {
+    const t = await texts("S := Q[x, y]\nL := localize(S / <y^2 - x^3>)\n[tor(1, L.residue, L.residue).length, tor(2, L.residue, L.residue).length]");
+    expect(t[2]).toBe("[2, 2]");
+  });
+});
+
 describe("Bass numbers", () => {
   it("a Gorenstein ring of dimension 1 has μ_i(R) = 1 exactly for i = 1 (H. Bass, Math. Z. 82, 1963); μ_i(k) = β_i(k) over the same ring (Ext(k, k))", async () => {
     const t = await texts("S := Q[x, y, z]\nR := S / <x^2, y^2>\n[bass(R^1, i) for i in 0..3]\n[bass(R.residue, i) for i in 0..3]");

@@ -1,7 +1,7 @@
 import type { ComputeOptions } from "../options";
 import { type Poly } from "../poly/poly";
 import { type PolyRing } from "../poly/ring";
-import { constant, zero } from "../poly/checked";
+import { constant, isZero, mul, sub, terms, zero } from "../poly/checked";
 import { kernelColumns, localQuotientLength, type Columns } from "./modules";
 import type { LocalFreeResolution } from "./resolve";
 
@@ -77,4 +77,122 @@ export function bassNumbers(S: PolyRing, F: LocalFreeResolution, J: readonly Pol
     out.push(subquotientLength(S, r, next, next ? rel(i + 1) : [], incoming, rel(i), opts));
   }
   return out;
+}
+
+/// A module given by generators (vectors of some free module, each with a degree) and the
+/// relations among them: coker of `relations` (columns of length = number of generators).
+export interface PresentedModule {
+  readonly generators: number;
+  readonly relations: Columns;
+  readonly degrees: number[];
+}
+
+/// The degree of a homogeneous vector whose coordinate k sits in degree `coordDegrees[k]`.
+function vectorDegree(S: PolyRing, v: readonly Poly[], coordDegrees: readonly number[]): number {
+  for (let k = 0; k < v.length; k++) {
+    const ts = terms(S, v[k]);
+    if (ts.length > 0) return ts[0].exps.reduce((a, e, i) => a + e * S.degrees[i], 0) + coordDegrees[k];
+  }
+  return 0;
+}
+
+/// Tor_i^R(M, N) or Ext^i_R(M, N) as a presented module, R = S/J, from a minimal free resolution
+/// F of M (maps with entries in R_m; homogeneous when M is graded, and then so is everything
+/// below) and N = coker(U) with q generators in degrees `nDegrees`:
+///   Tor_i = H_i(F ⊗ N), with F_i ⊗ N = N^{β_i} and the maps d_i ⊗ 1;
+///   Ext^i = H^i(Hom(F, N)), with Hom(F_i, N) = N^{β_i} and the maps d_{i+1}^T ⊗ 1
+/// (D. Eisenbud, Commutative Algebra, §A3.11–A3.12; the computation is common practice).
+/// Generators: the kernel of the outgoing map modulo the relations; relations: the syzygies
+/// that land in the image of the incoming map plus the relations. `fDegrees[i]` are the degrees
+/// of the basis of F_i. F must be resolved to i + 1.
+export function homologyModule(
+  S: PolyRing,
+  J: readonly Poly[],
+  F: LocalFreeResolution,
+  fDegrees: readonly (readonly number[])[],
+  q: number,
+  U: Columns,
+  nDegrees: readonly number[],
+  i: number,
+  kind: "tor" | "ext",
+  opts?: ComputeOptions,
+): PresentedModule {
+  const beta = (k: number) => (k < 0 ? 0 : F.ranks[k] ?? 0);
+  const rank = (k: number) => beta(k) * q;
+  const r = rank(i);
+  if (r === 0) return { generators: 0, relations: [], degrees: [] };
+  const coordDegrees = (k: number) =>
+    Array.from({ length: rank(k) }, (_, idx) => (kind === "tor" ? fDegrees[k][Math.floor(idx / q)] + nDegrees[idx % q] : nDegrees[idx % q] - fDegrees[k][Math.floor(idx / q)]));
+  const rel = (k: number): Columns => {
+    const b = beta(k);
+    const cols: Columns = [];
+    for (let a = 0; a < b; a++) for (const u of U) cols.push(Array.from({ length: b * q }, (_, idx) => (Math.floor(idx / q) === a ? u[idx % q] : zero(S))));
+    return [...cols, ...scalarBlocks(S, b * q, J)];
+  };
+  // d_k ⊗ 1 : F_k ⊗ N → F_{k−1} ⊗ N (columns indexed (a, r), a ∈ F_k)
+  const straight = (k: number): Columns => {
+    const d = F.maps[k - 1];
+    const cols: Columns = [];
+    for (let a = 0; a < beta(k); a++) {
+      for (let t = 0; t < q; t++) cols.push(Array.from({ length: rank(k - 1) }, (_, idx) => (idx % q === t ? d[Math.floor(idx / q)][a] : zero(S))));
+    }
+    return cols;
+  };
+  // d_k^T ⊗ 1 : Hom(F_{k−1}, N) → Hom(F_k, N) (columns indexed (c, r), c ∈ F_{k−1})
+  const dual = (k: number): Columns => {
+    const d = F.maps[k - 1];
+    const cols: Columns = [];
+    for (let c = 0; c < beta(k - 1); c++) {
+      for (let t = 0; t < q; t++) cols.push(Array.from({ length: rank(k) }, (_, idx) => (idx % q === t ? d[c][Math.floor(idx / q)] : zero(S))));
+    }
+    return cols;
+  };
+  let out: { rows: number; cols: Columns; target: number } | null;
+  let incoming: Columns;
+  if (kind === "tor") {
+    out = i > 0 && rank(i - 1) > 0 ? { rows: rank(i - 1), cols: straight(i), target: i - 1 } : null;
+    incoming = rank(i + 1) > 0 ? straight(i + 1) : [];
+  } else {
+    out = rank(i + 1) > 0 ? { rows: rank(i + 1), cols: dual(i + 1), target: i + 1 } : null;
+    incoming = i > 0 && rank(i - 1) > 0 ? dual(i) : [];
+  }
+  const unit = (k: number) => Array.from({ length: r }, (_, j) => (j === k ? constant(S, 1n) : zero(S)));
+  const gens: Columns = out === null ? Array.from({ length: r }, (_, k) => unit(k)) : kernelOf(S, out, rel(out.target), opts);
+  const within = [...incoming, ...rel(i)];
+  const syz = kernelColumns(S, r, [...gens, ...within], [], opts).map((v) => v.slice(0, gens.length)).filter((v) => v.some((f) => !isZero(f)));
+  const cd = coordDegrees(i);
+  return prune(S, { generators: gens.length, relations: syz, degrees: gens.map((g) => vectorDegree(S, g, cd)) });
+}
+
+/// Removes generators that a relation with a nonzero constant coefficient expresses through
+/// the others: with v_j = c, e_j = −(1/c)·Σ_{k≠j} v_k e_k, every other relation w becomes
+/// w − (w_j/c)·v without coordinate j, and v is dropped (a presentation of the same module).
+export function prune(S: PolyRing, P: PresentedModule): PresentedModule {
+  let relations = P.relations.map((v) => [...v]);
+  let degrees = [...P.degrees];
+  for (;;) {
+    let found: { v: number; j: number; c: { num: bigint; den: bigint } } | null = null;
+    for (let v = 0; v < relations.length && !found; v++) {
+      for (let j = 0; j < relations[v].length; j++) {
+        const ts = terms(S, relations[v][j]);
+        if (ts.length === 1 && ts[0].exps.every((e) => e === 0)) {
+          found = { v, j, c: { num: ts[0].num, den: ts[0].den } };
+          break;
+        }
+      }
+    }
+    if (!found) break;
+    const { v, j, c } = found;
+    const pivot = relations[v];
+    relations = relations
+      .filter((_, k) => k !== v)
+      .map((w) => {
+        const f = w[j];
+        const out = isZero(f) ? w : w.map((g, k) => sub(S, g, mul(S, mul(S, f, constant(S, c.den, c.num)), pivot[k])));
+        return out.filter((_, k) => k !== j);
+      })
+      .filter((w) => w.some((g) => !isZero(g)));
+    degrees = degrees.filter((_, k) => k !== j);
+  }
+  return { generators: degrees.length, relations, degrees };
 }

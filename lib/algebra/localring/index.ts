@@ -14,4 +14,4 @@ export {
 export { localResolution, isLocalUnit, type LocalFreeResolution } from "./resolve";
 export { localTorLengths } from "./tor";
 export { kernelColumns, localModuleNumerator, localQuotientLength, type Columns } from "./modules";
-export { subquotientLength, scalarBlocks, bassNumbers } from "./homology";
+export { subquotientLength, scalarBlocks, bassNumbers, homologyModule, type PresentedModule } from "./homology";
