@@ -163,6 +163,12 @@ describe("resolutions over local rings", () => {
     expect(out.error).toBeNull();
     expect(out.results[0].value).toMatchObject({ value: "2" });
   });
+  it("membership, containment and equality of ideals are decided at the point (x − 1 is a unit at the origin)", async () => {
+    const v = await values("S := Q[x, y]\nL := localize(S)\n[x in <x*(x - 1)>, <x*(1 + y)> == <x>, <x> <= <x^2 - x>, x in <x^2>]\nuse S\nx in <x*(x - 1)>");
+    expect(v[2].text).toBe("[true, true, true, false]");
+    expect(v[4].value).toBe(false);
+  });
+
   it("names without a local reading are refused, not answered globally", async () => {
     const out = await evaluate("S := Q[x, y]\nR := localize(S / <y^2 - x^3>)\nR.hilbert", [], {});
     expect(out.error?.message).toMatch(/local ring.*samuel/);
