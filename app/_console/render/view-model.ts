@@ -97,7 +97,7 @@ export function viewOfValue(v: ValueJson): ValueView {
     }
     case "HilbertSeries":
       if (!v.numerator || typeof v.denominator !== "string") return { kind: "text", text: v.text };
-      return { kind: "tex", tex: texOfHilbertSeries(v.numerator, v.denominator) };
+      return { kind: "tex", tex: texOfHilbertSeries(v.numerator, v.denominator, typeof v.lowest === "number" ? v.lowest : 0) };
     case "Series": {
       const coefficients = v.coefficients ?? [];
       const terms = `${coefficients.length} term${coefficients.length === 1 ? "" : "s"}`;
