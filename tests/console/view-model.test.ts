@@ -13,6 +13,14 @@ describe("viewOfValue", () => {
     expect(v.grid.truncated).toBe(true);
   });
 
+  it("a local ring is drawn localised at its point, not as the global ring (issue 16)", () => {
+    const origin = viewOfValue({ type: "Ring", text: "", field: "Q", vars: ["x", "y"], ideal: ["y^2-x^3"], local: { at: ["0", "0"] } });
+    expect(origin).toMatchObject({ kind: "tex" });
+    if (origin.kind === "tex") expect(origin.tex).toMatch(/_\{\\mathfrak\{m\}_\{0\}\}$/);
+    const point = viewOfValue({ type: "Ring", text: "", field: "Q", vars: ["x", "y"], ideal: [], local: { at: ["1/2", "3"] } });
+    if (point.kind === "tex") expect(point.tex).toContain("\\mathfrak{m}_{(\\tfrac{1}{2}, 3)}");
+  });
+
   it("typesets rings, ideals and a Series with its number of computed terms", () => {
     const ring = viewOfValue({ type: "Ring", text: "", field: "GF(32003)", vars: ["x", "y"], ideal: ["x*y"] });
     expect(ring).toEqual({ kind: "tex", tex: "\\mathbb{F}_{32003}[x, y] / \\left\\langle xy \\right\\rangle" });

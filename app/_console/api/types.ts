@@ -30,6 +30,8 @@ export interface ValueJson {
   /// reproduces beyond those it was fitted to
   readonly note?: string;
   readonly checked?: number;
+  /// a local ring: the point it is localised at
+  readonly local?: { readonly at: readonly string[] };
   /// HilbertSeries of a module generated in negative degrees: the power of t of the numerator's first coefficient
   readonly lowest?: number;
   readonly items?: readonly ValueJson[];

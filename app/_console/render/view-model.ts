@@ -30,7 +30,12 @@ export function texOfRing(v: ValueJson): string {
   const vars = (v.vars ?? []).map(texOfVariable).join(", ");
   const base = `${texOfField(v.field ?? "?")}[${vars}]`;
   const ideal = (v.ideal ?? []).filter((g) => g !== "0");
-  return ideal.length ? `${base} / ${texOfIdeal(ideal)}` : base;
+  const global = ideal.length ? `${base} / ${texOfIdeal(ideal)}` : base;
+  // a local ring (notation.md §11): the ring localised at the maximal ideal of its point
+  const at = v.local?.at;
+  if (!at) return global;
+  const point = at.every((a) => a === "0") ? "0" : `(${at.map((a) => (a.includes("/") ? `\\tfrac{${a.split("/")[0]}}{${a.split("/")[1]}}` : a)).join(", ")})`;
+  return `\\left(${global}\\right)_{\\mathfrak{m}_{${point}}}`;
 }
 
 /// TeX of a presented module: 0, a graded free module ⊕ R(−d)^m when there are no
