@@ -155,6 +155,21 @@ describe("resolutions over local rings", () => {
     expect([w[2].value, w[3].value]).toEqual(["0", false]);
   });
 
+  it("presented modules over the local ring of S: coker, ker and image need no grading", async () => {
+    // coker of a 2×3 matrix whose minors have codimension 2: the Buchsbaum–Rim complex
+    // 0 → R → R^3 → R^2 (D. Eisenbud, Commutative Algebra, Appendix A2.6; from memory),
+    // depth = dim = 1; z − 1 is a unit at the origin, so that column splits off a generator;
+    // ker(x, y, z) is the second syzygy of k, 3 generators and one Koszul relation
+    const v = await values(
+      "S := Q[x, y, z]\nL := localize(S)\nN := coker(matrix([x, y, z], [y, z, x^2]))\nresolve(N).ranks\n[N.depth, N.dim]\nresolve(coker(matrix([x, y, z - 1], [y, z, x]))).ranks\nK := ker(matrix([x, y, z]))\n[K.min_gens, image(matrix([x*(1 + y), y])).min_gens]\nresolve(K).ranks",
+    );
+    expect(ints(v[3])).toEqual([2, 3, 1, 0, 0]);
+    expect(v[4].text).toBe("[1, 1]");
+    expect(ints(v[5])).toEqual([1, 2, 1, 0, 0]);
+    expect(v[7].text).toBe("[3, 2]");
+    expect(ints(v[8])).toEqual([3, 1, 0, 0, 0]);
+  });
+
   it("a local ring is encoded with its point and restored from JSON", async () => {
     const v = await values("S := Q[x, y]\nL := localize(S / <y^2 - x^3>, at = [0, 0])\nM := localize(S, at = [1/2, 3])");
     expect(v[1]).toMatchObject({ local: { at: ["0", "0"] }, text: "localize(Q[x, y] / <-x^3+y^2>)" });
