@@ -20,14 +20,24 @@ type PropertyImpl = (obj: Value, args: readonly Value[], c: CallContext) => Valu
 type FunctionImpl = (args: readonly Value[], c: CallContext) => Value;
 
 /// Ring properties that mean the same locally and globally (they do not depend on the point).
-const POINT_FREE = new Set(["Ring.field", "Ring.vars", "Ring.ngens", "Ring.ideal", "Ring.ambient", "Ring.multiplicity", "Ring.samuel", "Ring.tangent_cone"]);
+const POINT_FREE = new Set([
+  "Ring.field",
+  "Ring.vars",
+  "Ring.ngens",
+  "Ring.ideal",
+  "Ring.ambient",
+  "Ring.multiplicity",
+  "Ring.samuel",
+  "Ring.tangent_cone",
+]);
 
 /// Module and complex properties computed by the evaluator from the value alone.
 const VALUE_ONLY = new Set(["Complex.betti", "Complex.ranks", "Complex.length", "Complex.map", "Complex.complete", "Complex.minors"]);
 
 const localRingOf = (v: Value): RingValue | null => {
   if (v.type === "Ring") return v.local ? v : null;
-  if (v.type === "Module" || v.type === "Complex" || v.type === "Ideal" || v.type === "Matrix" || v.type === "Poly") return v.ring.local ? v.ring : null;
+  if (v.type === "Module" || v.type === "Complex" || v.type === "Ideal" || v.type === "Matrix" || v.type === "Poly")
+    return v.ring.local ? v.ring : null;
   return null;
 };
 
@@ -40,7 +50,10 @@ export function localProperty(obj: Value, key: string): PropertyImpl | undefined
   if (impl) return impl;
   if (POINT_FREE.has(key) || VALUE_ONLY.has(key) || obj.type === "Ideal" || obj.type === "Poly" || obj.type === "Matrix") return undefined;
   return (_v, _a, c) => {
-    throw runtime(`${key.replace(/^\w+\./, "")} is not computed over a local ring yet (it would be read at the point, not globally)`, c.span);
+    throw runtime(
+      `${key.replace(/^\w+\./, "")} is not computed over a local ring yet (it would be read at the point, not globally)`,
+      c.span,
+    );
   };
 }
 
@@ -88,6 +101,9 @@ export function localFunction(key: string, args: readonly Value[]): FunctionImpl
   const impl = EXTRA_FUNCTIONS[key];
   if (impl) return impl;
   return (_a, c) => {
-    throw runtime(`${key.replace(/\(.*$/, "")} is not computed over a local ring yet (it would be read at the point, not globally)`, c.span);
+    throw runtime(
+      `${key.replace(/\(.*$/, "")} is not computed over a local ring yet (it would be read at the point, not globally)`,
+      c.span,
+    );
   };
 }

@@ -17,7 +17,15 @@ import {
   zero as zeroOf,
 } from "../algebra/index";
 
-import { bassNumbers, kernelColumns, localResolution, localTorLengths, translate, type LocalFreeResolution, type Point } from "../algebra/index";
+import {
+  bassNumbers,
+  kernelColumns,
+  localResolution,
+  localTorLengths,
+  translate,
+  type LocalFreeResolution,
+  type Point,
+} from "../algebra/index";
 import { localDimension } from "../algebra/index";
 import type { Poly, PolyRing } from "../algebra/index";
 import type { CallContext } from "./context";
@@ -35,7 +43,14 @@ const opts = (c: CallContext) => c.interp.session.compute;
 
 const originOf = (at: Point) => at.every((a) => a.num === 0n);
 const moveIn = (S: PolyRing, at: Point, f: Poly) => (originOf(at) ? f : translate(S, f, at));
-const moveOut = (S: PolyRing, at: Point, f: Poly) => (originOf(at) ? f : translate(S, f, at.map((a) => ({ num: -a.num, den: a.den }))));
+const moveOut = (S: PolyRing, at: Point, f: Poly) =>
+  originOf(at)
+    ? f
+    : translate(
+        S,
+        f,
+        at.map((a) => ({ num: -a.num, den: a.den })),
+      );
 
 /// What is resolved over the local ring A_m (A = S/J): a presentation (by columns) moved to the origin.
 interface LocalTarget {
@@ -90,7 +105,8 @@ function lengthOf(t: LocalTarget, c: CallContext, what: string): number {
   throw runtime(`over a local quotient ring a ${what} is usually infinite: give a bound, e.g. ${what}(M, length = 6)`, c.span);
 }
 
-const pointText = (at: Point) => (originOf(at) ? "the origin" : `(${at.map((a) => (a.den === 1n ? `${a.num}` : `${a.num}/${a.den}`)).join(", ")})`);
+const pointText = (at: Point) =>
+  originOf(at) ? "the origin" : `(${at.map((a) => (a.den === 1n ? `${a.num}` : `${a.num}/${a.den}`)).join(", ")})`;
 
 function complexValue(t: LocalTarget, F: LocalFreeResolution, length: number): ComplexValue {
   const where = `over the local ring at ${pointText(t.at)}, ungraded: the Betti table lists β_i under internal degree 0; the maps are determined up to units of the local ring`;
@@ -103,13 +119,25 @@ function complexValue(t: LocalTarget, F: LocalFreeResolution, length: number): C
     cols: ranks[i + 1],
   }));
   const entries = ranks.flatMap((b, i) => (b > 0 ? [[i, 0, b] as const] : []));
-  return { type: "Complex", ring: t.base, ranks, betti: { type: "BettiTable", entries, complete: F.complete, note }, complete: F.complete, maps, note };
+  return {
+    type: "Complex",
+    ring: t.base,
+    ranks,
+    betti: { type: "BettiTable", entries, complete: F.complete, note },
+    complete: F.complete,
+    maps,
+    note,
+  };
 }
 
 /// The minimal resolution of S/I over S_m (I the defining ideal of the local ring r).
 function ringResolution(r: RingValue, c: CallContext): LocalFreeResolution {
   const L = analysisOf(r, c);
-  if (L.zero) throw runtime("this local ring is zero (its point is not on the zero set of the ideal): depth, Cohen–Macaulay, Gorenstein and complete intersection are not defined for it", c.span);
+  if (L.zero)
+    throw runtime(
+      "this local ring is zero (its point is not on the zero set of the ideal): depth, Cohen–Macaulay, Gorenstein and complete intersection are not defined for it",
+      c.span,
+    );
   const S = r.poly;
   const columns = L.ideal.map((f) => [f]);
   let byLength = resolutions.get(r);
@@ -141,10 +169,17 @@ function torLengths(a: Value, b: Value, length: number, c: CallContext): bigint[
   const ta = targetOf(a, c, c.argSpans[0]);
   // the second module must be cyclic: a quotient ring L / I, or coker of one row (R.residue)
   if (b.type !== "Ring" && !(b.type === "Module" && b.presentation.rows.length === 1)) {
-    throw runtime("over a local or quotient ring tor_lengths and serre take a cyclic second module: a quotient ring L / I or a module with one generator", c.argSpans[1] ?? c.span);
+    throw runtime(
+      "over a local or quotient ring tor_lengths and serre take a cyclic second module: a quotient ring L / I or a module with one generator",
+      c.argSpans[1] ?? c.span,
+    );
   }
   const tb = targetOf(b, c, c.argSpans[1]);
-  const sameBase = ta.base === tb.base || (ta.base.ideal.length === tb.base.ideal.length && ta.base.ideal.every((f, i) => f === tb.base.ideal[i]) && ta.at.every((x, i) => x.num === tb.at[i].num && x.den === tb.at[i].den));
+  const sameBase =
+    ta.base === tb.base ||
+    (ta.base.ideal.length === tb.base.ideal.length &&
+      ta.base.ideal.every((f, i) => f === tb.base.ideal[i]) &&
+      ta.at.every((x, i) => x.num === tb.at[i].num && x.den === tb.at[i].den));
   if (!sameBase) throw runtime("both modules must live over the same local ring", c.span);
   // F resolved one step further, so that the image of d_{length+1} is known
   const F = resolveTarget(a, ta, length + 1, c);
@@ -160,7 +195,10 @@ function requireFiniteLength(a: Value, b: Value, c: CallContext, what: string): 
   const sum = rings.quotient(a, b.ideal);
   const L = analysisOf(sum, c);
   if (!L.zero && L.tangentSeries.dimension > 0) {
-    throw runtime(`${what}: M ⊗ N does not have finite length at ${pointText(a.local?.at ?? a.poly.vars.map(() => ({ num: 0n, den: 1n })))} (the ideals' sum is not primary to the maximal ideal there), so the intersection multiplicity is not defined`, c.span);
+    throw runtime(
+      `${what}: M ⊗ N does not have finite length at ${pointText(a.local?.at ?? a.poly.vars.map(() => ({ num: 0n, den: 1n })))} (the ideals' sum is not primary to the maximal ideal there), so the intersection multiplicity is not defined`,
+      c.span,
+    );
   }
 }
 
@@ -168,111 +206,119 @@ type PropertyImpl = (obj: Value, args: readonly Value[], c: CallContext) => Valu
 type FunctionImpl = (args: readonly Value[], c: CallContext) => Value;
 
 export const LOCAL_HOMOLOGY_PROPERTIES: Record<string, PropertyImpl> = {
-    "Ring.depth": (v, _a, c) => Int(ringInvariants(v as RingValue, c).depth),
-    "Ring.is_cm": (v, _a, c) => Bool(ringInvariants(v as RingValue, c).cm),
-    "Ring.is_gorenstein": (v, _a, c) => Bool(ringInvariants(v as RingValue, c).gorenstein),
-    "Ring.is_ci": (v, _a, c) => Bool(ringInvariants(v as RingValue, c).ci),
-    "Ring.burch_index": (v, _a, c) => burchValue(v as RingValue, c),
-    "Ring.is_burch": (v, _a, c) => Bool((burchValue(v as RingValue, c) as { value: bigint }).value >= 1n),
-    // ℓ(M_m), dim and depth of M at the point, read as a module over S_m presented by [U | J·1]:
-    // length and dimension from the tangent cone of M; depth = n − pd over the regular ring S_m
-    // (Auslander–Buchsbaum; the grade of m on M is the same over S_m and R_m)
-    "Module.length": (v, _a, c) => {
-      const t = targetOf(v, c, c.span);
-      const all = [...t.columns, ...scalarBlocks(t.S, t.rows, t.J)];
-      const units = Array.from({ length: t.rows }, (_, k) => Array.from({ length: t.rows }, (__, j) => (j === k ? oneOf(t.S) : zeroOf(t.S))));
-      try {
-        return Int(localQuotientLength(t.S, t.rows, units, all, opts(c)));
-      } catch {
-        throw runtime("the module does not have finite length at the point", c.span);
-      }
-    },
-    "Module.dim": (v, _a, c) => {
-      const t = targetOf(v, c, c.span);
-      let num = localModuleNumerator(t.S, t.rows, [...t.columns, ...scalarBlocks(t.S, t.rows, t.J)], opts(c));
-      if (num.every((x) => x === 0n)) return Int(-1);
-      let d = t.S.vars.length;
-      while (d > 0 && num.reduce((a, x) => a + x, 0n) === 0n) {
-        num = divideOneMinusT(num);
-        d--;
-      }
-      return Int(d);
-    },
-    "Module.depth": (v, _a, c) => {
-      const t = targetOf(v, c, c.span);
-      const F = localResolution(t.S, t.rows, [...t.columns, ...scalarBlocks(t.S, t.rows, t.J)], [], t.S.vars.length + 1, opts(c));
-      if (F.ranks[0] === 0) throw runtime("the module is zero at the point: its depth is not defined", c.span);
-      let pd = F.ranks.length - 1;
-      while (pd > 0 && F.ranks[pd] === 0) pd--;
-      return Int(t.S.vars.length - pd);
-    },
-    "Module.socle": (v, _a, c) => {
-      // the k-vector space 0 :_M m as a module: one copy of k per basis element (ungraded)
-      const M = v as ModuleValue;
-      const { dim } = socleData(M, c);
-      const P = M.ring.poly;
-      const at = M.ring.local?.at ?? P.vars.map(() => ({ num: 0n, den: 1n }));
-      const mGens = P.vars.map((_, i) => moveOut(P, at, variable(P, i)));
-      const rows = Array.from({ length: dim }, (_, g) => Array.from({ length: dim }, (__, h) => mGens.map((x) => (g === h ? x : zeroOf(P)))).flat());
-      return moduleValue(M.ring, rows, new Array<number>(dim).fill(0));
-    },
-    "Module.splits_residue": (v, _a, c) => Bool(socleData(v, c).splits),
-    "Ring.splits_residue": (v, _a, c) => Bool(socleData(v, c).splits),
-    "Ring.min_gens": (v, _a, c) => {
-      const t = targetOf(v, c, c.span);
-      return Int(resolveTarget(v, t, 0, c).ranks[0]);
-    },
-    "Module.min_gens": (v, _a, c) => {
-      const t = targetOf(v, c, c.span);
-      return Int(resolveTarget(v, t, 0, c).ranks[0]);
-    },
+  "Ring.depth": (v, _a, c) => Int(ringInvariants(v as RingValue, c).depth),
+  "Ring.is_cm": (v, _a, c) => Bool(ringInvariants(v as RingValue, c).cm),
+  "Ring.is_gorenstein": (v, _a, c) => Bool(ringInvariants(v as RingValue, c).gorenstein),
+  "Ring.is_ci": (v, _a, c) => Bool(ringInvariants(v as RingValue, c).ci),
+  "Ring.burch_index": (v, _a, c) => burchValue(v as RingValue, c),
+  "Ring.is_burch": (v, _a, c) => Bool((burchValue(v as RingValue, c) as { value: bigint }).value >= 1n),
+  // ℓ(M_m), dim and depth of M at the point, read as a module over S_m presented by [U | J·1]:
+  // length and dimension from the tangent cone of M; depth = n − pd over the regular ring S_m
+  // (Auslander–Buchsbaum; the grade of m on M is the same over S_m and R_m)
+  "Module.length": (v, _a, c) => {
+    const t = targetOf(v, c, c.span);
+    const all = [...t.columns, ...scalarBlocks(t.S, t.rows, t.J)];
+    const units = Array.from({ length: t.rows }, (_, k) => Array.from({ length: t.rows }, (__, j) => (j === k ? oneOf(t.S) : zeroOf(t.S))));
+    try {
+      return Int(localQuotientLength(t.S, t.rows, units, all, opts(c)));
+    } catch {
+      throw runtime("the module does not have finite length at the point", c.span);
+    }
+  },
+  "Module.dim": (v, _a, c) => {
+    const t = targetOf(v, c, c.span);
+    let num = localModuleNumerator(t.S, t.rows, [...t.columns, ...scalarBlocks(t.S, t.rows, t.J)], opts(c));
+    if (num.every((x) => x === 0n)) return Int(-1);
+    let d = t.S.vars.length;
+    while (d > 0 && num.reduce((a, x) => a + x, 0n) === 0n) {
+      num = divideOneMinusT(num);
+      d--;
+    }
+    return Int(d);
+  },
+  "Module.depth": (v, _a, c) => {
+    const t = targetOf(v, c, c.span);
+    const F = localResolution(t.S, t.rows, [...t.columns, ...scalarBlocks(t.S, t.rows, t.J)], [], t.S.vars.length + 1, opts(c));
+    if (F.ranks[0] === 0) throw runtime("the module is zero at the point: its depth is not defined", c.span);
+    let pd = F.ranks.length - 1;
+    while (pd > 0 && F.ranks[pd] === 0) pd--;
+    return Int(t.S.vars.length - pd);
+  },
+  "Module.socle": (v, _a, c) => {
+    // the k-vector space 0 :_M m as a module: one copy of k per basis element (ungraded)
+    const M = v as ModuleValue;
+    const { dim } = socleData(M, c);
+    const P = M.ring.poly;
+    const at = M.ring.local?.at ?? P.vars.map(() => ({ num: 0n, den: 1n }));
+    const mGens = P.vars.map((_, i) => moveOut(P, at, variable(P, i)));
+    const rows = Array.from({ length: dim }, (_, g) =>
+      Array.from({ length: dim }, (__, h) => mGens.map((x) => (g === h ? x : zeroOf(P)))).flat(),
+    );
+    return moduleValue(M.ring, rows, new Array<number>(dim).fill(0));
+  },
+  "Module.splits_residue": (v, _a, c) => Bool(socleData(v, c).splits),
+  "Ring.splits_residue": (v, _a, c) => Bool(socleData(v, c).splits),
+  "Ring.min_gens": (v, _a, c) => {
+    const t = targetOf(v, c, c.span);
+    return Int(resolveTarget(v, t, 0, c).ranks[0]);
+  },
+  "Module.min_gens": (v, _a, c) => {
+    const t = targetOf(v, c, c.span);
+    return Int(resolveTarget(v, t, 0, c).ranks[0]);
+  },
 };
 
 export const LOCAL_HOMOLOGY_FUNCTIONS: Record<string, FunctionImpl> = {
-    "resolve(Module or Ring)": ([m], c) => {
-      const t = targetOf(m, c);
-      const length = lengthOf(t, c, "resolve");
-      if (c.named.has("degree")) throw runtime("degree bounds need a graded ring; a local ring is ungraded", c.span);
-      return complexValue(t, resolveTarget(m, t, length, c), length);
-    },
-    "poincare(Module or Ring)": ([m], c) => {
-      const t = targetOf(m, c);
-      const terms = bound(c, "terms", 1000) ?? 10;
-      if (terms < 1) throw runtime("terms must be at least 1", c.span);
-      const F = resolveTarget(m, t, terms - 1, c);
-      return seriesValue(Array.from({ length: terms }, (_, i) => BigInt(F.ranks[i] ?? 0)), terms);
-    },
-    "syzygy(Module or Ring, Int)": ([m, p], c) => {
-      const t = targetOf(m, c);
-      const k = Number((p as { value: bigint }).value);
-      if (k < 0) throw runtime("the syzygy index must be at least 0", c.argSpans[1] ?? c.span);
-      const F = resolveTarget(m, t, k + 1, c);
-      const rank = F.ranks[k] ?? 0;
-      const rows = (F.maps[k] ?? Array.from({ length: rank }, () => [])).map((row) => row.map((f) => moveOut(t.S, t.at, f)));
-      return moduleValue(t.base, rows, new Array<number>(rank).fill(0));
-    },
-    "tor_lengths(Module or Ring, Module or Ring)": ([a, b], c) => {
-      const t = targetOf(a, c);
-      const length = lengthOf(t, c, "tor_lengths");
-      requireFiniteLength(a, b, c, "tor_lengths");
-      return list(torLengths(a, b, length, c).map(Int));
-    },
-    "serre(Module or Ring, Module or Ring)": ([a, b], c) => {
-      const t = targetOf(a, c);
-      requireFiniteLength(a, b, c, "serre");
-      // over a quotient ring the sum is finite when M has finite projective dimension, which is
-      // then at most depth R ≤ n (Auslander–Buchsbaum): a resolution still going at n + 1 says not
-      const n = t.S.vars.length;
-      if (t.J.length > 0 && !resolveTarget(a, t, n + 1, c).complete) {
-        throw runtime(`serre: the first module has infinite projective dimension over this quotient ring (its minimal resolution goes beyond ${n + 1} steps), so Σ (−1)^i length Tor_i is not a finite sum; tor_lengths(M, N, length = …) gives the lengths`, c.span);
-      }
-      const lengths = torLengths(a, b, n, c);
-      return Int(lengths.reduce((acc, x, i) => (i % 2 === 0 ? acc + x : acc - x), 0n));
-    },
-    "burch_index(Ring)": ([r], c) => burchValue(r as RingValue, c),
-    "tor(Int, Module or Ring, Module or Ring)": ([i, a, b], c) => homologyValue("tor", Number((i as { value: bigint }).value), a, b, c),
-    "ext(Int, Module or Ring, Module or Ring)": ([i, a, b], c) => homologyValue("ext", Number((i as { value: bigint }).value), a, b, c),
-    "bass(Module or Ring, Int)": ([m, i], c) => bassValue(m, Number((i as { value: bigint }).value), c),
+  "resolve(Module or Ring)": ([m], c) => {
+    const t = targetOf(m, c);
+    const length = lengthOf(t, c, "resolve");
+    if (c.named.has("degree")) throw runtime("degree bounds need a graded ring; a local ring is ungraded", c.span);
+    return complexValue(t, resolveTarget(m, t, length, c), length);
+  },
+  "poincare(Module or Ring)": ([m], c) => {
+    const t = targetOf(m, c);
+    const terms = bound(c, "terms", 1000) ?? 10;
+    if (terms < 1) throw runtime("terms must be at least 1", c.span);
+    const F = resolveTarget(m, t, terms - 1, c);
+    return seriesValue(
+      Array.from({ length: terms }, (_, i) => BigInt(F.ranks[i] ?? 0)),
+      terms,
+    );
+  },
+  "syzygy(Module or Ring, Int)": ([m, p], c) => {
+    const t = targetOf(m, c);
+    const k = Number((p as { value: bigint }).value);
+    if (k < 0) throw runtime("the syzygy index must be at least 0", c.argSpans[1] ?? c.span);
+    const F = resolveTarget(m, t, k + 1, c);
+    const rank = F.ranks[k] ?? 0;
+    const rows = (F.maps[k] ?? Array.from({ length: rank }, () => [])).map((row) => row.map((f) => moveOut(t.S, t.at, f)));
+    return moduleValue(t.base, rows, new Array<number>(rank).fill(0));
+  },
+  "tor_lengths(Module or Ring, Module or Ring)": ([a, b], c) => {
+    const t = targetOf(a, c);
+    const length = lengthOf(t, c, "tor_lengths");
+    requireFiniteLength(a, b, c, "tor_lengths");
+    return list(torLengths(a, b, length, c).map(Int));
+  },
+  "serre(Module or Ring, Module or Ring)": ([a, b], c) => {
+    const t = targetOf(a, c);
+    requireFiniteLength(a, b, c, "serre");
+    // over a quotient ring the sum is finite when M has finite projective dimension, which is
+    // then at most depth R ≤ n (Auslander–Buchsbaum): a resolution still going at n + 1 says not
+    const n = t.S.vars.length;
+    if (t.J.length > 0 && !resolveTarget(a, t, n + 1, c).complete) {
+      throw runtime(
+        `serre: the first module has infinite projective dimension over this quotient ring (its minimal resolution goes beyond ${n + 1} steps), so Σ (−1)^i length Tor_i is not a finite sum; tor_lengths(M, N, length = …) gives the lengths`,
+        c.span,
+      );
+    }
+    const lengths = torLengths(a, b, n, c);
+    return Int(lengths.reduce((acc, x, i) => (i % 2 === 0 ? acc + x : acc - x), 0n));
+  },
+  "burch_index(Ring)": ([r], c) => burchValue(r as RingValue, c),
+  "tor(Int, Module or Ring, Module or Ring)": ([i, a, b], c) => homologyValue("tor", Number((i as { value: bigint }).value), a, b, c),
+  "ext(Int, Module or Ring, Module or Ring)": ([i, a, b], c) => homologyValue("ext", Number((i as { value: bigint }).value), a, b, c),
+  "bass(Module or Ring, Int)": ([m, i], c) => bassValue(m, Number((i as { value: bigint }).value), c),
 };
 
 /// dim_k of the socle 0 :_M m = Hom(k, M) (μ_0), and whether k is a direct summand of M: a
@@ -281,11 +327,19 @@ export const LOCAL_HOMOLOGY_FUNCTIONS: Record<string, FunctionImpl> = {
 function socleData(m: Value, c: CallContext): { dim: number; splits: boolean } {
   const t = targetOf(m, c);
   const S = t.S;
-  const F = localResolution(S, 1, S.vars.map((_, v) => [variable(S, v)]), t.J, 1, opts(c));
+  const F = localResolution(
+    S,
+    1,
+    S.vars.map((_, v) => [variable(S, v)]),
+    t.J,
+    1,
+    opts(c),
+  );
   const dim = Number(bassNumbers(S, F, t.J, t.rows, t.columns, 0, opts(c))[0]);
   if (dim === 0) return { dim, splits: false };
   const gens: Poly[][] = [];
-  for (let j = 0; j < t.rows; j++) for (let v = 0; v < S.vars.length; v++) gens.push(Array.from({ length: t.rows }, (_, k) => (k === j ? variable(S, v) : zeroOf(S))));
+  for (let j = 0; j < t.rows; j++)
+    for (let v = 0; v < S.vars.length; v++) gens.push(Array.from({ length: t.rows }, (_, k) => (k === j ? variable(S, v) : zeroOf(S))));
   const rel = kernelColumns(S, t.rows, [...gens, ...t.columns], t.J, opts(c)).map((col) => col.slice(0, gens.length));
   const inner = Number(bassNumbers(S, F, t.J, gens.length, rel, 0, opts(c))[0]);
   return { dim, splits: dim > inner };
@@ -344,7 +398,9 @@ function homologyValue(kind: "tor" | "ext", i: number, a: Value, b: Value, c: Ca
   const graded = !ta.base.local;
   const degA = a.type === "Module" ? a.degrees : [0];
   const degB = b.type === "Module" ? b.degrees : [0];
-  const fDeg = (graded ? resolutionDegrees(S, F, degA, i + 1) : null) ?? Array.from({ length: i + 2 }, (_, k) => new Array<number>(F.ranks[k] ?? 0).fill(0));
+  const fDeg =
+    (graded ? resolutionDegrees(S, F, degA, i + 1) : null) ??
+    Array.from({ length: i + 2 }, (_, k) => new Array<number>(F.ranks[k] ?? 0).fill(0));
   const nDeg = graded && fDeg !== null ? degB : degB.map(() => 0);
   const P = homologyModule(S, ta.J, F, fDeg, tb.rows, tb.columns, nDeg, i, kind, opts(c));
   const rows = Array.from({ length: P.generators }, (_, j) => P.relations.map((col) => moveOut(S, ta.at, col[j])));
@@ -357,7 +413,14 @@ function bassValue(m: Value, i: number, c: CallContext): Value {
   const t = targetOf(m, c);
   const S = t.S;
   // the residue field of the base ring at the point, resolved over it
-  const F = localResolution(S, 1, S.vars.map((_, v) => [variable(S, v)]), t.J, i + 1, opts(c));
+  const F = localResolution(
+    S,
+    1,
+    S.vars.map((_, v) => [variable(S, v)]),
+    t.J,
+    i + 1,
+    opts(c),
+  );
   return Int(bassNumbers(S, F, t.J, t.rows, t.columns, i, opts(c))[i]);
 }
 
@@ -365,7 +428,10 @@ function bassValue(m: Value, i: number, c: CallContext): Value {
 /// forms chosen at random, recorded in the note as for graded rings).
 function burchValue(r: RingValue, c: CallContext): Value {
   const at = r.local!.at;
-  const I = engineIdeal(r.poly, r.ideal.map((f) => moveIn(r.poly, at, f)));
+  const I = engineIdeal(
+    r.poly,
+    r.ideal.map((f) => moveIn(r.poly, at, f)),
+  );
   const res = burchIndexOfRing(I, opts(c));
   const note = res.random
     ? `depth ${res.depth}: computed after factoring out general linear forms chosen at random (seed ${res.random.seed}): ${res.random.forms.join(", ")}`

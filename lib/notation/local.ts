@@ -101,9 +101,11 @@ export const LOCAL_GENERAL_PROPERTIES: Record<string, (obj: Value, args: readonl
 };
 
 /// A property that needs the grading, refused over a local ring with what to use instead.
-const refuse = (what: string, instead: string) => (_v: Value, _a: readonly Value[], c: CallContext): Value => {
-  throw runtime(`${what} is not defined for a local ring (it has no grading)${instead ? `: ${instead}` : ""}`, c.span);
-};
+const refuse =
+  (what: string, instead: string) =>
+  (_v: Value, _a: readonly Value[], c: CallContext): Value => {
+    throw runtime(`${what} is not defined for a local ring (it has no grading)${instead ? `: ${instead}` : ""}`, c.span);
+  };
 
 /// Ring properties read at the point of a local ring; these take precedence over the graded
 /// ones for a ring made by `localize`.
@@ -145,7 +147,11 @@ export const LOCAL_FUNCTIONS: Record<string, (args: readonly Value[], c: CallCon
 function singularityNumber(f: Value, c: CallContext, which: "milnor" | "tjurina"): Value {
   const p = f as Extract<Value, { type: "Poly" }>;
   const r = p.ring;
-  if (r.ideal.length > 0) throw runtime(`${which} needs a polynomial of a polynomial ring (or of a local polynomial ring), not of a quotient ring`, c.argSpans[0] ?? c.span);
+  if (r.ideal.length > 0)
+    throw runtime(
+      `${which} needs a polynomial of a polynomial ring (or of a local polynomial ring), not of a quotient ring`,
+      c.argSpans[0] ?? c.span,
+    );
   const at = pointOption(c, r.poly.vars.length, r.local ? r.local.at : null);
   const point = at.every((a) => a.num === 0n) ? null : at;
   try {

@@ -1,9 +1,30 @@
 // Standard bases for a local degree order (lib/algebra/standard, Lazard's homogenisation) and
 // invariants of local rings (lib/algebra/localring), each checked against a named source.
 import { beforeAll, describe, expect, it } from "vitest";
-import { formatPoly, gf, ideal, initialIdeal, parsePoly, polyRing, QQ, terms, type Poly, type PolyRing, idealHilbertSeries } from "@/lib/algebra";
+import {
+  formatPoly,
+  gf,
+  ideal,
+  initialIdeal,
+  parsePoly,
+  polyRing,
+  QQ,
+  terms,
+  type Poly,
+  type PolyRing,
+  idealHilbertSeries,
+} from "@/lib/algebra";
 import { homogenisation, homogenise, standardBasis } from "@/lib/algebra/standard";
-import { localAnalysis, localDimension, localEmbeddingDimension, localLength, localMultiplicity, milnorNumber, samuelValues, tjurinaNumber } from "@/lib/algebra/localring";
+import {
+  localAnalysis,
+  localDimension,
+  localEmbeddingDimension,
+  localLength,
+  localMultiplicity,
+  milnorNumber,
+  samuelValues,
+  tjurinaNumber,
+} from "@/lib/algebra/localring";
 import { assertSympyAvailable, runSympyBatch, type SympyResult } from "./sympy/sympy";
 
 const P = 32003;
@@ -13,7 +34,11 @@ const p = (R: PolyRing, s: string) => parsePoly(R, s);
 const mu = (R: PolyRing, f: string) => Number(milnorNumber(R, p(R, f), null));
 const tau = (R: PolyRing, f: string) => Number(tjurinaNumber(R, p(R, f), null));
 const local = (R: PolyRing, gens: string[], at: bigint[] | null = null) =>
-  localAnalysis(R, gens.map((g) => p(R, g)), at ? at.map((num) => ({ num, den: 1n })) : null);
+  localAnalysis(
+    R,
+    gens.map((g) => p(R, g)),
+    at ? at.map((num) => ({ num, den: 1n })) : null,
+  );
 
 describe("Milnor and Tjurina numbers", () => {
   // The simple singularities and their normal forms: V. I. Arnold, "Normal forms of functions
@@ -43,7 +68,10 @@ describe("Milnor and Tjurina numbers", () => {
   });
   it("at another point: the cusp moved to (1, −2) keeps μ = τ = 2; a smooth point gives 0", () => {
     const f = "(x-1)^3+(y+2)^2";
-    const at = [{ num: 1n, den: 1n }, { num: -2n, den: 1n }];
+    const at = [
+      { num: 1n, den: 1n },
+      { num: -2n, den: 1n },
+    ];
     expect(Number(milnorNumber(S2, p(S2, f), at))).toBe(2);
     expect(Number(tjurinaNumber(S2, p(S2, f), at))).toBe(2);
     expect(Number(milnorNumber(S2, p(S2, "x+y^2"), null))).toBe(0);
@@ -71,7 +99,12 @@ describe("Hilbert–Samuel function and multiplicity at the origin", () => {
     expect(localMultiplicity(local(S2, ["y^2-x^3"]))).toBe(2n);
   });
   it("surfaces: A_1 x^2+y^2+z^2 (e = 2), D_4 x^2*y + y^3 + z^2 (e = 2), E_6 x^3+y^4+z^2 (e = 2), x^3+y^3+z^3+x*y*z^2 (cone over a cubic, e = 3)", () => {
-    expect(["x^2+y^2+z^2", "x^2*y+y^3+z^2", "x^3+y^4+z^2", "x^3+y^3+z^3+x^2*y*z"].map((f) => localMultiplicity(local(S3, [f])))).toEqual([2n, 2n, 2n, 3n]);
+    expect(["x^2+y^2+z^2", "x^2*y+y^3+z^2", "x^3+y^4+z^2", "x^3+y^3+z^3+x^2*y*z"].map((f) => localMultiplicity(local(S3, [f])))).toEqual([
+      2n,
+      2n,
+      2n,
+      3n,
+    ]);
   });
   it("the space curve (t^3, t^4, t^5): e = 3 (the smallest exponent; from memory)", () => {
     expect(localMultiplicity(local(S3, ["x^3-y*z", "y^2-x*z", "z^2-x^2*y"]))).toBe(3n);
@@ -93,13 +126,22 @@ describe("Hilbert–Samuel function and multiplicity at the origin", () => {
 describe("standard bases agree with graded results on homogeneous input", () => {
   // For homogeneous I the local degree order agrees with grevlex degree by degree, so the
   // leading ideal is the grevlex initial ideal and the tangent cone is S/I itself.
-  const cases = [["x^2*y-z^3", "x*y^2-z^2*x"], ["x*z-y^2", "y*w-z^2", "x*w-y*z"], ["x^3", "y^3", "z^3", "x*y*z"]];
+  const cases = [
+    ["x^2*y-z^3", "x*y^2-z^2*x"],
+    ["x*z-y^2", "y*w-z^2", "x*w-y*z"],
+    ["x^3", "y^3", "z^3", "x*y*z"],
+  ];
   for (const gens of cases) {
     it(`<${gens.join(", ")}>`, () => {
       const R = polyRing(QQ, ["x", "y", "z", "w"]);
-      const I = ideal(R, gens.map((g) => p(R, g)));
+      const I = ideal(
+        R,
+        gens.map((g) => p(R, g)),
+      );
       const sb = standardBasis(R, I.gens);
-      const graded = initialIdeal(I).gens.map((g) => terms(R, g)[0].exps.join(",")).sort();
+      const graded = initialIdeal(I)
+        .gens.map((g) => terms(R, g)[0].exps.join(","))
+        .sort();
       expect(sb.leadIdeal.map((e) => e.join(",")).sort()).toEqual(graded);
       const L = localAnalysis(R, I.gens, null);
       const hs = idealHilbertSeries(I);
@@ -138,9 +180,18 @@ describe("standard bases agree with SymPy via Lazard's homogenisation", () => {
       if ("error" in r) throw new Error(r.error);
       const norm = (ts: [string, string, number[]][]) => JSON.stringify(ts.map(([c, , e]) => [c, e.slice(1)]).sort());
       const theirs = r.basis.map(norm).sort();
-      const ours = standardBasis(R, gens.map((g) => p(R, g))).basis.map((f: Poly) =>
-        norm(terms(R, f).map((t) => [String(((t.num % BigInt(P)) + BigInt(P)) % BigInt(P)), "1", [0, ...t.exps]] as [string, string, number[]])),
-      ).sort();
+      const ours = standardBasis(
+        R,
+        gens.map((g) => p(R, g)),
+      )
+        .basis.map((f: Poly) =>
+          norm(
+            terms(R, f).map(
+              (t) => [String(((t.num % BigInt(P)) + BigInt(P)) % BigInt(P)), "1", [0, ...t.exps]] as [string, string, number[]],
+            ),
+          ),
+        )
+        .sort();
       expect(ours).toEqual(theirs);
     });
   });

@@ -40,7 +40,9 @@ describe("intersection multiplicities at a point (Serre's Tor formula)", () => {
     expect([v[2].value, v[3].value]).toEqual(["2", "1"]);
   });
   it("at a singular point: node with a non-tangent line m_P(F)·m_P(G) = 2, cusp with its tangent 3 (Fulton §3.3 property (5))", async () => {
-    const v = await values("S := Q[x, y]\nL := localize(S)\nserre(L / <y^2 - x^2 - x^3>, L / <y>)\nserre(L / <y^2 - x^3>, L / <y>)\nserre(L / <y^2 - x^3>, L / <x>)");
+    const v = await values(
+      "S := Q[x, y]\nL := localize(S)\nserre(L / <y^2 - x^2 - x^3>, L / <y>)\nserre(L / <y^2 - x^3>, L / <y>)\nserre(L / <y^2 - x^3>, L / <x>)",
+    );
     expect(v.slice(2).map((x) => x.value)).toEqual(["2", "3", "2"]);
   });
   it("Fulton's worked example: E = (x^2+y^2)^2 + 3x^2y − y^3, F = (x^2+y^2)^3 − 4x^2y^2 meet at the origin with multiplicity 14 (§3.3)", async () => {
@@ -97,7 +99,8 @@ describe("local invariants", () => {
     expect(ints(v[3])).toEqual([0, 0, 0]);
   });
   it("homogeneous input: the local ring at the origin has the graded ring's dim, multiplicity, depth and CM-ness", async () => {
-    const src = (l: string) => `S := Q[x, y, z, w]\nR := ${l}(S / <x*z - y^2, y*w - z^2, x*w - y*z>)\n[R.dim, R.depth, R.is_cm, R.is_gorenstein, R.is_ci]`;
+    const src = (l: string) =>
+      `S := Q[x, y, z, w]\nR := ${l}(S / <x*z - y^2, y*w - z^2, x*w - y*z>)\n[R.dim, R.depth, R.is_cm, R.is_gorenstein, R.is_ci]`;
     const graded = await lastText(src(""));
     expect(await lastText(src("localize"))).toBe(graded);
     expect(await lastText("S := Q[x, y, z, w]\nR := localize(S / <x*z - y^2, y*w - z^2, x*w - y*z>)\nR.multiplicity")).toBe("3");
@@ -151,7 +154,9 @@ describe("resolutions over local rings", () => {
     expect(v[4].value).toBe("1");
     expect(v[5].value).toBe(Number(v[6].value) >= 1);
     // depth 1: the socle of Ω^1 k = m is 0 and k does not split off Ω^2 k over the cusp
-    const w = await values("S := Q[x, y]\nT := localize(S / <y^2 - x^3>)\nsyzygy(T.residue, 1).socle.min_gens\nsyzygy(T.residue, 2).splits_residue");
+    const w = await values(
+      "S := Q[x, y]\nT := localize(S / <y^2 - x^3>)\nsyzygy(T.residue, 1).socle.min_gens\nsyzygy(T.residue, 2).splits_residue",
+    );
     expect([w[2].value, w[3].value]).toEqual(["0", false]);
   });
 
@@ -179,7 +184,9 @@ describe("resolutions over local rings", () => {
     expect(out.results[0].value).toMatchObject({ value: "2" });
   });
   it("membership, containment and equality of ideals are decided at the point (x − 1 is a unit at the origin)", async () => {
-    const v = await values("S := Q[x, y]\nL := localize(S)\n[x in <x*(x - 1)>, <x*(1 + y)> == <x>, <x> <= <x^2 - x>, x in <x^2>]\nuse S\nx in <x*(x - 1)>");
+    const v = await values(
+      "S := Q[x, y]\nL := localize(S)\n[x in <x*(x - 1)>, <x*(1 + y)> == <x>, <x> <= <x^2 - x>, x in <x^2>]\nuse S\nx in <x*(x - 1)>",
+    );
     expect(v[2].text).toBe("[true, true, true, false]");
     expect(v[4].value).toBe(false);
   });

@@ -22,7 +22,9 @@ describe("loose ends of engine part 3 (issue 16)", () => {
     // R = k[x,y]/(x^2, y^2) with deg y = 2 is a complete intersection of two elements of m^2:
     // J. Tate, "Homology of Noetherian rings and local rings", Illinois J. Math. 1957 gives
     // P_k(t) = (1+t)^2/(1−t^2)^2 = 1/(1−t)^2, whatever the grading.
-    const v = await values("S := Q[x, y; degrees = (1, 2)]\nR := S / <x^2, y^2>\nP := poincare(R.residue, terms = 6)\nP.coefficients\nresolve(R.residue, length = 3).ranks\nsyzygy(R.residue, 1).min_gens");
+    const v = await values(
+      "S := Q[x, y; degrees = (1, 2)]\nR := S / <x^2, y^2>\nP := poincare(R.residue, terms = 6)\nP.coefficients\nresolve(R.residue, length = 3).ranks\nsyzygy(R.residue, 1).min_gens",
+    );
     expect(ints(v[3])).toEqual([1, 2, 3, 4, 5, 6]);
     expect(ints(v[4])).toEqual([1, 2, 3, 4]);
     expect(v[5]).toMatchObject({ value: "2" });
@@ -45,7 +47,9 @@ describe("loose ends of engine part 3 (issue 16)", () => {
     // I = (y^2): I : n = (y), n·I = (y^3), B(I) = (y^3) : (y) = (y^2), dim_k n/B(I) = 1 (by hand).
     // x + y^2 lets x be solved for as well: k[x,y]/(x + y^2, y^3) ≅ k[y]/(y^3), index 1 (same
     // computation with I = (y^3)).
-    const v = await values("S := Q[x, y]\nburch_index(S / S.maximal)\nburch_index(S / <0>)\nburch_index(S / <x, y^2>)\nburch_index(S / <x + y^2, y^3>)");
+    const v = await values(
+      "S := Q[x, y]\nburch_index(S / S.maximal)\nburch_index(S / <0>)\nburch_index(S / <x, y^2>)\nburch_index(S / <x + y^2, y^3>)",
+    );
     expect(v.slice(1).map((x) => x.value)).toEqual(["0", "0", "1", "1"]);
   });
 

@@ -13,7 +13,9 @@ describe("Tor over a graded quotient ring", () => {
   it("balance: Tor^R(R/(x,z), R/(y,z)) and Tor^R(R/(y,z), R/(x,z)) over the quadric cone xy = z^2 are k in every degree", async () => {
     // the two rulings of the cone; each has the periodic resolution of a rank-one matrix
     // factorisation of xy − z^2 (D. Eisenbud, Trans. AMS 260, 1980), so every Tor_i is k (by hand)
-    const t = await texts("S := Q[x, y, z]\nT := S / <x*y - z^2>\ntor_lengths(T / <x, z>, T / <y, z>, length = 5)\ntor_lengths(T / <y, z>, T / <x, z>, length = 5)");
+    const t = await texts(
+      "S := Q[x, y, z]\nT := S / <x*y - z^2>\ntor_lengths(T / <x, z>, T / <y, z>, length = 5)\ntor_lengths(T / <y, z>, T / <x, z>, length = 5)",
+    );
     expect(t[2]).toBe("[1, 1, 1, 1, 1, 1]");
     expect(t[3]).toBe(t[2]);
   });
@@ -22,7 +24,9 @@ describe("Tor over a graded quotient ring", () => {
     expect(t[2]).toBe("[1, 3, 6, 10, 15, 21]");
   });
   it("a change of rings by hand: over R = k[x,y,z]/(x^2, y^2), R/x has the periodic resolution ←x− R ←x− R, so Tor_i(R/x, k[x]/(x^2)) = 0 for i ≥ 1; balanced", async () => {
-    const t = await texts("S := Q[x, y, z]\nR := S / <x^2, y^2>\ntor_lengths(R / <x>, R / <y, z>, length = 4)\ntor_lengths(R / <y, z>, R / <x>, length = 4)");
+    const t = await texts(
+      "S := Q[x, y, z]\nR := S / <x^2, y^2>\ntor_lengths(R / <x>, R / <y, z>, length = 4)\ntor_lengths(R / <y, z>, R / <x>, length = 4)",
+    );
     expect(t[2]).toBe("[1, 0, 0, 0, 0]");
     expect(t[3]).toBe("[1, 0, 0, 0, 0]");
   });
@@ -46,12 +50,16 @@ describe("tor and ext as modules over a quotient ring", () => {
     expect(t[6]).toBe("(1-2*t+t^2)/(1-t)^3"); // = 1/(1−t), the Hilbert series of k[y]
   });
   it("the modules agree with tor_lengths (Tate's closed form over x^2, y^2, z^2) and Ext^i(k, R) of an Artinian Gorenstein ring is k, 0, 0", async () => {
-    const t = await texts("S := Q[x, y, z]\nR := S / <x^2, y^2, z^2>\n[tor(i, R.residue, R.residue).length for i in 0..3]\n[ext(i, R.residue, R^1).length for i in 0..2]");
+    const t = await texts(
+      "S := Q[x, y, z]\nR := S / <x^2, y^2, z^2>\n[tor(i, R.residue, R.residue).length for i in 0..3]\n[ext(i, R.residue, R^1).length for i in 0..2]",
+    );
     expect(t[2]).toBe("[1, 3, 6, 10]");
     expect(t[3]).toBe("[1, 0, 0]");
   });
   it("over a local ring: Tor_1(k, k) over the cusp has length 2 = embdim, Tor_2 length 2 (Tate: (1+t)^2/(1−t^2))", async () => {
-    const t = await texts("S := Q[x, y]\nL := localize(S / <y^2 - x^3>)\n[tor(1, L.residue, L.residue).length, tor(2, L.residue, L.residue).length]");
+    const t = await texts(
+      "S := Q[x, y]\nL := localize(S / <y^2 - x^3>)\n[tor(1, L.residue, L.residue).length, tor(2, L.residue, L.residue).length]",
+    );
     expect(t[2]).toBe("[2, 2]");
   });
 });
@@ -64,7 +72,9 @@ describe("Bass numbers", () => {
     expect(t[3]).toBe("[1, 3, 5, 7]");
   });
   it("over a polynomial ring in 3 variables: μ_i(S) = 1 exactly for i = 3; over a local ring at a point as well", async () => {
-    const t = await texts("S := Q[x, y, z]\n[bass(S^1, i) for i in 0..3]\nL := localize(S / <y - x^2>, at = [1, 1, 0])\n[bass(L^1, i) for i in 0..3]");
+    const t = await texts(
+      "S := Q[x, y, z]\n[bass(S^1, i) for i in 0..3]\nL := localize(S / <y - x^2>, at = [1, 1, 0])\n[bass(L^1, i) for i in 0..3]",
+    );
     expect(t[1]).toBe("[0, 0, 0, 1]");
     expect(t[3]).toBe("[0, 0, 1, 0]");
   });

@@ -20,7 +20,8 @@ export function subquotientLength(
   opts?: ComputeOptions,
 ): bigint {
   const unit = (k: number) => Array.from({ length: r }, (_, j) => (j === k ? one(S) : zero(S)));
-  const Z: Columns = out === null ? Array.from({ length: r }, (_, k) => unit(k)) : [...kernelOf(S, out, relTarget, opts).map((v) => v.slice(0, r)), ...relC];
+  const Z: Columns =
+    out === null ? Array.from({ length: r }, (_, k) => unit(k)) : [...kernelOf(S, out, relTarget, opts).map((v) => v.slice(0, r)), ...relC];
   return localQuotientLength(S, r, Z, [...inCols, ...relC], opts);
 }
 
@@ -44,7 +45,15 @@ export function scalarBlocks(S: PolyRing, r: number, J: readonly Poly[]): Column
 /// over R_m (length + 1 steps): Hom(F_i, M) = M^{β_i} with the maps d_{i+1}^T ⊗ M, and
 /// H^i is killed by m, so its length is its dimension (H. Bass, "On the ubiquity of
 /// Gorenstein rings", Math. Z. 82, 1963, for the numbers; the computation is common practice).
-export function bassNumbers(S: PolyRing, F: LocalFreeResolution, J: readonly Poly[], p: number, U: Columns, length: number, opts?: ComputeOptions): bigint[] {
+export function bassNumbers(
+  S: PolyRing,
+  F: LocalFreeResolution,
+  J: readonly Poly[],
+  p: number,
+  U: Columns,
+  length: number,
+  opts?: ComputeOptions,
+): bigint[] {
   const rank = (i: number) => (F.ranks[i] ?? 0) * p;
   // relations of M^{β_i}: U in every block, and J on every coordinate
   const rel = (i: number): Columns => {
@@ -58,7 +67,8 @@ export function bassNumbers(S: PolyRing, F: LocalFreeResolution, J: readonly Pol
   // d^T ⊗ id_M for d = d_i : F_i → F_{i−1} (rows β_{i−1}), as columns of M^{β_{i−1}} → M^{β_i}
   const dualColumns = (i: number): Columns => {
     const d = F.maps[i - 1];
-    const src = F.ranks[i - 1] ?? 0, tgt = F.ranks[i] ?? 0;
+    const src = F.ranks[i - 1] ?? 0,
+      tgt = F.ranks[i] ?? 0;
     const cols: Columns = [];
     for (let c = 0; c < src; c++) {
       for (let r = 0; r < p; r++) cols.push(Array.from({ length: tgt * p }, (_, k) => (k % p === r ? d[c][Math.floor(k / p)] : zero(S))));
@@ -117,16 +127,19 @@ export function homologyModule(
   kind: "tor" | "ext",
   opts?: ComputeOptions,
 ): PresentedModule {
-  const beta = (k: number) => (k < 0 ? 0 : F.ranks[k] ?? 0);
+  const beta = (k: number) => (k < 0 ? 0 : (F.ranks[k] ?? 0));
   const rank = (k: number) => beta(k) * q;
   const r = rank(i);
   if (r === 0) return { generators: 0, relations: [], degrees: [] };
   const coordDegrees = (k: number) =>
-    Array.from({ length: rank(k) }, (_, idx) => (kind === "tor" ? fDegrees[k][Math.floor(idx / q)] + nDegrees[idx % q] : nDegrees[idx % q] - fDegrees[k][Math.floor(idx / q)]));
+    Array.from({ length: rank(k) }, (_, idx) =>
+      kind === "tor" ? fDegrees[k][Math.floor(idx / q)] + nDegrees[idx % q] : nDegrees[idx % q] - fDegrees[k][Math.floor(idx / q)],
+    );
   const rel = (k: number): Columns => {
     const b = beta(k);
     const cols: Columns = [];
-    for (let a = 0; a < b; a++) for (const u of U) cols.push(Array.from({ length: b * q }, (_, idx) => (Math.floor(idx / q) === a ? u[idx % q] : zero(S))));
+    for (let a = 0; a < b; a++)
+      for (const u of U) cols.push(Array.from({ length: b * q }, (_, idx) => (Math.floor(idx / q) === a ? u[idx % q] : zero(S))));
     return [...cols, ...scalarBlocks(S, b * q, J)];
   };
   // d_k ⊗ 1 : F_k ⊗ N → F_{k−1} ⊗ N (columns indexed (a, r), a ∈ F_k)
@@ -134,7 +147,8 @@ export function homologyModule(
     const d = F.maps[k - 1];
     const cols: Columns = [];
     for (let a = 0; a < beta(k); a++) {
-      for (let t = 0; t < q; t++) cols.push(Array.from({ length: rank(k - 1) }, (_, idx) => (idx % q === t ? d[Math.floor(idx / q)][a] : zero(S))));
+      for (let t = 0; t < q; t++)
+        cols.push(Array.from({ length: rank(k - 1) }, (_, idx) => (idx % q === t ? d[Math.floor(idx / q)][a] : zero(S))));
     }
     return cols;
   };
@@ -143,7 +157,8 @@ export function homologyModule(
     const d = F.maps[k - 1];
     const cols: Columns = [];
     for (let c = 0; c < beta(k - 1); c++) {
-      for (let t = 0; t < q; t++) cols.push(Array.from({ length: rank(k) }, (_, idx) => (idx % q === t ? d[c][Math.floor(idx / q)] : zero(S))));
+      for (let t = 0; t < q; t++)
+        cols.push(Array.from({ length: rank(k) }, (_, idx) => (idx % q === t ? d[c][Math.floor(idx / q)] : zero(S))));
     }
     return cols;
   };
@@ -159,7 +174,9 @@ export function homologyModule(
   const unit = (k: number) => Array.from({ length: r }, (_, j) => (j === k ? constant(S, 1n) : zero(S)));
   const gens: Columns = out === null ? Array.from({ length: r }, (_, k) => unit(k)) : kernelOf(S, out, rel(out.target), opts);
   const within = [...incoming, ...rel(i)];
-  const syz = kernelColumns(S, r, [...gens, ...within], [], opts).map((v) => v.slice(0, gens.length)).filter((v) => v.some((f) => !isZero(f)));
+  const syz = kernelColumns(S, r, [...gens, ...within], [], opts)
+    .map((v) => v.slice(0, gens.length))
+    .filter((v) => v.some((f) => !isZero(f)));
   const cd = coordDegrees(i);
   return prune(S, { generators: gens.length, relations: syz, degrees: gens.map((g) => vectorDegree(S, g, cd)) });
 }

@@ -29,7 +29,11 @@ export function localAnalysis(S: PolyRing, gens: readonly Poly[], at: Point | nu
   const I = at ? gens.map((f) => translate(S, f, at)) : [...gens];
   const standard = standardBasis(S, I, opts);
   const zeroRing = standard.leads.some((e) => e.every((x) => x === 0));
-  const tangentSeries = hilbertSeriesOfMonomials(standard.leadIdeal as number[][], S.vars.map(() => 1), opts);
+  const tangentSeries = hilbertSeriesOfMonomials(
+    standard.leadIdeal as number[][],
+    S.vars.map(() => 1),
+    opts,
+  );
   return { ring: S, ideal: I, standard, zero: zeroRing, tangentSeries };
 }
 
@@ -87,7 +91,15 @@ export function tangentConeIdeal(L: LocalAnalysis): { ring: PolyRing; gens: Poly
 /// singularity is not isolated.
 export function milnorNumber(S: PolyRing, f: Poly, at: Point | null, opts?: ComputeOptions): bigint {
   const g = at ? translate(S, f, at) : f;
-  return finiteLength(localAnalysis(S, S.vars.map((_, i) => derivative(S, g, i)), null, opts), "milnor");
+  return finiteLength(
+    localAnalysis(
+      S,
+      S.vars.map((_, i) => derivative(S, g, i)),
+      null,
+      opts,
+    ),
+    "milnor",
+  );
 }
 
 export function tjurinaNumber(S: PolyRing, f: Poly, at: Point | null, opts?: ComputeOptions): bigint {
@@ -98,7 +110,10 @@ export function tjurinaNumber(S: PolyRing, f: Poly, at: Point | null, opts?: Com
 function finiteLength(L: LocalAnalysis, what: string): bigint {
   const len = localLength(L);
   if (len === null) {
-    throw runtimeError(what, `the singularity is not isolated: the ideal of partial derivatives defines a set of dimension ${L.tangentSeries.dimension} through the point, so the number is infinite`);
+    throw runtimeError(
+      what,
+      `the singularity is not isolated: the ideal of partial derivatives defines a set of dimension ${L.tangentSeries.dimension} through the point, so the number is infinite`,
+    );
   }
   return len;
 }

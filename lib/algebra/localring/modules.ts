@@ -56,7 +56,12 @@ function localLead(S: PolyRing, v: readonly Poly[]): { comp: number; exps: numbe
   v.forEach((f, comp) => {
     for (const t of terms(S, f)) {
       const deg = t.exps.reduce((a, b) => a + b, 0);
-      if (!best || deg < best.deg || (deg === best.deg && grevlexCompare(t.exps, best.exps) > 0) || (deg === best.deg && grevlexCompare(t.exps, best.exps) === 0 && comp < best.comp)) {
+      if (
+        !best ||
+        deg < best.deg ||
+        (deg === best.deg && grevlexCompare(t.exps, best.exps) > 0) ||
+        (deg === best.deg && grevlexCompare(t.exps, best.exps) === 0 && comp < best.comp)
+      ) {
         best = { comp, exps: t.exps, deg };
       }
     }
@@ -85,7 +90,10 @@ export function localModuleNumerator(S: PolyRing, r: number, vectors: readonly (
   const G = hom.length === 0 ? [] : moduleGroebnerBasis(freeModule(Z.H, new Array<number>(r).fill(0)), hom, "top", opts);
   const leads: number[][][] = Array.from({ length: r }, () => []);
   for (const g of G) {
-    const lead = localLead(S, g.map((f) => dehomogenise(Z, f)));
+    const lead = localLead(
+      S,
+      g.map((f) => dehomogenise(Z, f)),
+    );
     if (lead) leads[lead.comp].push(lead.exps);
   }
   const ones = S.vars.map(() => 1);
@@ -102,8 +110,15 @@ export function localModuleNumerator(S: PolyRing, r: number, vectors: readonly (
 /// ℓ(Z/B) for submodules B ⊆ Z of S^r with Z/B of finite length at the origin: for large d,
 /// ℓ(S^r/(B + m^d S^r)) − ℓ(S^r/(Z + m^d S^r)) = ℓ(Z/B) (Artin–Rees), so the tangent-cone series
 /// of S^r/B and S^r/Z differ by a polynomial whose value at 1 is ℓ(Z/B).
-export function localQuotientLength(S: PolyRing, r: number, Z: readonly (readonly Poly[])[], B: readonly (readonly Poly[])[], opts?: ComputeOptions): bigint {
-  const a = localModuleNumerator(S, r, B, opts), b = localModuleNumerator(S, r, Z, opts);
+export function localQuotientLength(
+  S: PolyRing,
+  r: number,
+  Z: readonly (readonly Poly[])[],
+  B: readonly (readonly Poly[])[],
+  opts?: ComputeOptions,
+): bigint {
+  const a = localModuleNumerator(S, r, B, opts),
+    b = localModuleNumerator(S, r, Z, opts);
   let diff: bigint[] = [];
   for (let k = 0; k < Math.max(a.length, b.length); k++) diff.push((a[k] ?? 0n) - (b[k] ?? 0n));
   while (diff.length > 0 && diff[diff.length - 1] === 0n) diff.pop();

@@ -60,7 +60,14 @@ function findUnit(S: PolyRing, D: Columns): [number, number] | null {
 /// also removes the redundant generators of the previous kernel (they show up as unit
 /// syzygies; Nakayama). β_i is final once d_{i+1} is minimal, so length + 1 kernels give
 /// β_0 … β_length.
-export function localResolution(S: PolyRing, rows: number, presentation: Columns, J: readonly Poly[], length: number, opts?: ComputeOptions): LocalFreeResolution {
+export function localResolution(
+  S: PolyRing,
+  rows: number,
+  presentation: Columns,
+  J: readonly Poly[],
+  length: number,
+  opts?: ComputeOptions,
+): LocalFreeResolution {
   if (!Number.isInteger(length) || length < 0) throw new AlgebraError("runtime", "resolution: the length must be a non-negative integer");
   // d_1, minimised: a unit entry means a generator is redundant
   let d: Columns = presentation.map((v) => (J.length > 0 ? reduceVector(S, v, J, opts) : [...v])).filter((v) => v.some((f) => !isZero(f)));

@@ -10,7 +10,14 @@ import type { LocalFreeResolution } from "./resolve";
 /// Z_i = ker(d_i ⊗ R/K) + K'·F_i and B_i = im(d_{i+1}) + K'·F_i, and ℓ(Z_i/B_i) from the
 /// tangent cones of F_i/B_i and F_i/Z_i (localQuotientLength). Each Tor must have finite
 /// length (M ⊗ R/K of finite length is enough; J.-P. Serre, Algèbre locale, multiplicités, 1965).
-export function localTorLengths(S: PolyRing, F: LocalFreeResolution, J: readonly Poly[], K: readonly Poly[], length: number, opts?: ComputeOptions): bigint[] {
+export function localTorLengths(
+  S: PolyRing,
+  F: LocalFreeResolution,
+  J: readonly Poly[],
+  K: readonly Poly[],
+  length: number,
+  opts?: ComputeOptions,
+): bigint[] {
   const KJ = [...J, ...K];
   const out: bigint[] = [];
   const cols = (rows: Poly[][]): Columns => (rows.length === 0 ? [] : rows[0].map((_, k) => rows.map((row) => row[k])));

@@ -9,7 +9,8 @@ export type Point = readonly { readonly num: bigint; readonly den: bigint }[];
 /// f(x + a): the point a moved to the origin, so the local ring of S/I at a is the local ring
 /// of S/I(x + a) at the origin (common practice).
 export function translate(S: PolyRing, f: Poly, a: Point): Poly {
-  if (a.length !== S.vars.length) throw runtimeError("localize", `the point needs ${S.vars.length} coordinates, one per variable, got ${a.length}`);
+  if (a.length !== S.vars.length)
+    throw runtimeError("localize", `the point needs ${S.vars.length} coordinates, one per variable, got ${a.length}`);
   if (a.every((c) => c.num === 0n)) return f;
   const images = S.vars.map((_, i) => add(S, variable(S, i), constant(S, a[i].num, a[i].den)));
   let out = zero(S);

@@ -24,7 +24,11 @@ export interface StandardBasis {
 /// so progress, abort and limits are those of `groebnerBasis`.
 export function standardBasis(S: PolyRing, gens: readonly Poly[], opts?: ComputeOptions): StandardBasis {
   const Z = homogenisation(S);
-  const G = groebnerBasis(Z.H, gens.filter((g) => !isZero(g)).map((g) => homogenise(Z, g)), opts);
+  const G = groebnerBasis(
+    Z.H,
+    gens.filter((g) => !isZero(g)).map((g) => homogenise(Z, g)),
+    opts,
+  );
   const basis: Poly[] = [];
   const leads: number[][] = [];
   for (const g of G) {

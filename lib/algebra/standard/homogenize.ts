@@ -42,7 +42,11 @@ export function totalDegree(S: PolyRing, f: Poly): number {
 /// The lowest total degree of a term of f (its order at the origin); −1 for 0.
 export function order(S: PolyRing, f: Poly): number {
   let d = Infinity;
-  for (const t of terms(S, f)) d = Math.min(d, t.exps.reduce((a, b) => a + b, 0));
+  for (const t of terms(S, f))
+    d = Math.min(
+      d,
+      t.exps.reduce((a, b) => a + b, 0),
+    );
   return d === Infinity ? -1 : d;
 }
 
