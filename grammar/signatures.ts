@@ -326,7 +326,7 @@ export const FUNCTIONS: readonly FunctionSig[] = [
     description: "applies probe to every member of the family: a Table, one row per member, columns from the probe's Record",
     example: "sweep(F, I -> {index: burch_index(S / I), depth: (S / I).depth})",
   },
-  // notation.md §11: local rings (issue 16)
+  // local rings (grammar/README.md, "Local rings"; issue 16)
   {
     name: "localize",
     overloads: [ov([p("R", T.Ring)], T.Ring, 3)],
@@ -400,7 +400,7 @@ export const PROPERTIES: readonly PropertySig[] = [
   prop("Ring", "is_gorenstein", T.Bool, 2, "whether R is Gorenstein"),
   prop("Ring", "is_cm", T.Bool, 2, "whether R is Cohen–Macaulay"),
   ...moduleProps("Ring", "R as the cyclic module A/I"),
-  // notation.md §11: read at the point of a local ring, at the irrelevant ideal of a graded one
+  // local rings (grammar/README.md): read at the point of a local ring, at the irrelevant ideal of a graded one
   prop("Ring", "multiplicity", T.Int, 3, "the Hilbert–Samuel multiplicity e(m, R)"),
   prop("Ring", "samuel", T.HilbertSeries, 3, "the Hilbert–Samuel function: .at(d) = length R/m^(d+1), .values(d)"),
   prop("Ring", "tangent_cone", T.Ring, 3, "the tangent cone (associated graded ring), a graded Ring"),

@@ -1,4 +1,4 @@
-/// Local rings in the notation (notation.md §11, issue 16): `localize`, the properties a local
+/// Local rings in the notation (grammar/README.md, "Local rings"; issue 16): `localize`, the properties a local
 /// ring answers at its point, `milnor` and `tjurina`, and the Hilbert–Samuel function,
 /// multiplicity and tangent cone (also of a graded ring, at its irrelevant ideal). Engine:
 /// lib/algebra/localring (standard bases by Lazard's homogenisation, lib/algebra/standard).

@@ -51,7 +51,7 @@ export class RingRegistry {
     return r;
   }
 
-  /// The local ring of r at the point `at` (notation.md §11): the polynomial ring localised
+  /// The local ring of r at the point `at` (grammar/README.md, "Local rings"): the polynomial ring localised
   /// there, and r's defining ideal (and the ring it was formed from) carried over.
   localize(r: RingValue, at: readonly Rational[]): RingValue {
     if (r.local) {

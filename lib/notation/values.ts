@@ -16,7 +16,7 @@ export interface RingValue {
   /// absent for S and for quotients S / I of a polynomial ring. A quotient read as a module is
   /// a module over the ring it was formed from (notation.md §5).
   readonly over?: RingValue;
-  /// set for a local ring (notation.md §11, `localize`): the ring localised at the rational
+  /// set for a local ring (grammar/README.md, "Local rings": `localize`): the ring localised at the rational
   /// point `at` (all zeros for the origin); its properties are read there
   readonly local?: { readonly at: readonly Rational[] };
 }

@@ -20,7 +20,7 @@ export const RingJson = z.object({
   ideal: z.array(z.string()),
   /// for A / I with A itself a quotient: how many leading generators of `ideal` define A
   over: count.optional(),
-  /// a local ring (notation.md §11): the point it is localised at, one rational per variable
+  /// a local ring (grammar/README.md, "Local rings"): the point it is localised at, one rational per variable
   local: z.object({ at: z.array(ratText) }).optional(),
 });
 export type RingJson = z.infer<typeof RingJson>;

@@ -1,4 +1,4 @@
-// Local rings through the evaluator (notation.md §11, issue 16): localize, local invariants,
+// Local rings through the evaluator (grammar/README.md, "Local rings"; issue 16): localize, local invariants,
 // Milnor and Tjurina numbers, intersection multiplicities by Serre's Tor formula, resolutions
 // over local rings. Each value names its source.
 import { describe, expect, it } from "vitest";
