@@ -191,6 +191,13 @@ describe("resolutions over local rings", () => {
     expect(v[4].value).toBe(false);
   });
 
+  it("eventual_period compares ideals of a local ring at the point (x·(1 + y) and x agree there)", async () => {
+    const src = "[<x*(1 + y)>, <y>, <x>, <y*(2 + x)>, <x*(1 - y)>, <y>]";
+    const v = await values(`S := Q[x, y]\nL := localize(S)\neventual_period(${src})\nuse S\neventual_period(${src})`);
+    expect(v[2].text).toBe("{start: 0, period: 2}");
+    expect(v[4].text).toBe("{start: none, period: none}");
+  });
+
   it("names without a local reading are refused, not answered globally", async () => {
     const out = await evaluate("S := Q[x, y]\nR := localize(S / <y^2 - x^3>)\nR.hilbert", [], {});
     expect(out.error?.message).toMatch(/local ring.*samuel/);
