@@ -244,6 +244,8 @@ export const LOCAL_HOMOLOGY_PROPERTIES: Record<string, PropertyImpl> = {
     while (pd > 0 && F.ranks[pd] === 0) pd--;
     return Int(t.S.vars.length - pd);
   },
+  "Module.pd": (v, _a, c) => pdValue(v, c),
+  "Ring.pd": (v, _a, c) => pdValue(v, c),
   "Module.socle": (v, _a, c) => {
     // the k-vector space 0 :_M m as a module: one copy of k per basis element (ungraded)
     const M = v as ModuleValue;
@@ -343,6 +345,23 @@ function socleData(m: Value, c: CallContext): { dim: number; splits: boolean } {
   const rel = kernelColumns(S, t.rows, [...gens, ...t.columns], t.J, opts(c)).map((col) => col.slice(0, gens.length));
   const inner = Number(bassNumbers(S, F, t.J, gens.length, rel, 0, opts(c))[0]);
   return { dim, splits: dim > inner };
+}
+
+/// pd of M over the local ring it lives over: a finite one is at most depth R ≤ n
+/// (Auslander–Buchsbaum), so a minimal resolution still going after n + 1 steps says it is
+/// infinite (an Error: an Int cannot say so).
+function pdValue(m: Value, c: CallContext): Value {
+  const t = targetOf(m, c, c.span);
+  const n = t.S.vars.length;
+  const F = resolveTarget(m, t, n + 1, c);
+  if (!F.complete)
+    throw runtime(
+      `the projective dimension is infinite: the minimal resolution over this local ring goes beyond ${n + 1} steps, while a finite one is at most depth R ≤ ${n}`,
+      c.span,
+    );
+  let pd = F.ranks.length - 1;
+  while (pd > 0 && F.ranks[pd] === 0) pd--;
+  return Int(pd);
 }
 
 /// f/(1 − t) for f(1) = 0, ascending coefficients.

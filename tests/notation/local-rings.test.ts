@@ -191,6 +191,14 @@ describe("resolutions over local rings", () => {
     expect(v[4].value).toBe(false);
   });
 
+  it("pd over a local ring: finite over the local ring of S (Hilbert), infinite for k over the cusp", async () => {
+    // pd of S_m/(y^2 − x^3) is 1; over the cusp R, k has the periodic resolution 1, 2, 2, …
+    const v = await values("S := Q[x, y]\nL := localize(S)\n(L / <y^2 - x^3>).pd");
+    expect(v[2].value).toBe("1");
+    const out = await evaluate("S := Q[x, y]\nR := localize(S / <y^2 - x^3>)\nR.residue.pd", [], {});
+    expect(out.error?.message).toMatch(/infinite/);
+  });
+
   it("eventual_period compares ideals of a local ring at the point (x·(1 + y) and x agree there)", async () => {
     const src = "[<x*(1 + y)>, <y>, <x>, <y*(2 + x)>, <x*(1 - y)>, <y>]";
     const v = await values(`S := Q[x, y]\nL := localize(S)\neventual_period(${src})\nuse S\neventual_period(${src})`);
