@@ -44,3 +44,5 @@ export * from "./graded";
 export * from "./artinian";
 export * from "./series";
 export * from "./burch";
+export * from "./standard";
+export * from "./localring";

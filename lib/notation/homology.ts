@@ -82,11 +82,11 @@ function hilbertShifted(M: ModuleValue, c: CallContext): HilbertSeries {
 }
 
 function hilbertOf(M: ModuleValue, c: CallContext, span: Span): Value {
+  void span;
+  // generators in negative degrees (Ext modules): the series of M moved up into degrees ≥ 0,
+  // times t^low — a Laurent numerator
   const low = Math.min(0, ...M.degrees);
-  if (low < 0) {
-    throw runtime(`the module has generators in degree ${low}; its Hilbert series would need negative powers of t (shift it into degrees ≥ 0)`, span);
-  }
-  return { type: "HilbertSeries", series: hilbertShifted(M, c) };
+  return { type: "HilbertSeries", series: hilbertShifted(M, c), ...(low < 0 ? { shift: -low } : {}) };
 }
 
 function integerOf(q: Rat, span: Span, what: string): Value {

@@ -327,7 +327,7 @@ export function valuesEqual(interp: Evaluator, a: Value, b: Value, span: Span): 
     case "HilbertSeries": {
       // the same grading and numerator over the same full denominator
       const x = a.series, y = (b as typeof a).series;
-      return x.weights.join(",") === y.weights.join(",") && x.numerator.join(",") === y.numerator.join(",");
+      return x.weights.join(",") === y.weights.join(",") && x.numerator.join(",") === y.numerator.join(",") && (a.shift ?? 0) === ((b as typeof a).shift ?? 0);
     }
     default:
       return a === b;

@@ -16,6 +16,9 @@ export interface RingValue {
   /// absent for S and for quotients S / I of a polynomial ring. A quotient read as a module is
   /// a module over the ring it was formed from (notation.md §5).
   readonly over?: RingValue;
+  /// set for a local ring (grammar/README.md, "Local rings": `localize`): the ring localised at the rational
+  /// point `at` (all zeros for the origin); its properties are read there
+  readonly local?: { readonly at: readonly Rat[] };
 }
 
 export interface PolyValue {
@@ -78,7 +81,13 @@ export interface ComplexValue {
 
 export interface HilbertSeriesValue {
   readonly type: "HilbertSeries";
+  /// the series of the module moved up by `shift` into degrees ≥ 0 (the value itself is
+  /// t^(−shift) times it: a Laurent numerator for modules generated in negative degrees)
   readonly series: HilbertSeries;
+  /// generators in degree −shift (> 0): the numerator starts at t^(−shift); absent means 0
+  readonly shift?: number;
+  /// what the series is of, when that could mislead (a non-homogeneous ideal)
+  readonly note?: string;
 }
 
 export interface SeriesValue {
@@ -87,7 +96,7 @@ export interface SeriesValue {
   /// a rational function fitting every computed term, as text; null when none was found
   readonly rational: string | null;
   /// the guessed numerator and denominator (ascending coefficients in t) and how many
-  /// leading coefficients they were checked against
+  /// computed coefficients it reproduces beyond the 2L that determine it (the fit's own terms)
   readonly guess?: { readonly numerator: readonly bigint[]; readonly denominator: readonly bigint[]; readonly checked: number };
   /// how many leading coefficients are exact (the rest are lower bounds); all when absent
   readonly exact?: number;
