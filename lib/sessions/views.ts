@@ -2,13 +2,15 @@
 import type { CellRow, ObjectRow } from "./store";
 
 export function cellView(row: CellRow) {
-  const result = row.result as { statements?: unknown[] } | null;
+  const result = row.result as { statements?: unknown[]; stopped?: unknown } | null;
   return {
     id: row.id,
     position: row.position,
     source: row.source,
     status: row.status,
     results: result?.statements ?? [],
+    /// where a cancel, a limit or a lost server stopped the cell, with its work so far kept in `results`
+    stopped: typeof result?.stopped === "string" ? result.stopped : null,
     error: row.error ?? null,
     timings: { totalMs: row.durationMs },
     engineVersion: row.engineVersion,

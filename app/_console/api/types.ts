@@ -44,7 +44,7 @@ export interface ErrorJson {
   readonly span: SpanJson;
 }
 
-export type CellStatus = "running" | "done" | "error" | "cancelled";
+export type CellStatus = "running" | "done" | "error" | "cancelled" | "interrupted";
 
 /// One statement's result inside a cell. The contract names the statement's number
 /// `index`; the stored cells of the first API version call it `statement`, so both are read.
@@ -62,6 +62,8 @@ export interface Cell {
   readonly status: CellStatus;
   readonly results: readonly CellResult[];
   readonly error: ErrorJson | null;
+  /// where a cancel, a limit or a lost server stopped the cell ("stopped after homological degree 6: …")
+  readonly stopped?: string | null;
   readonly timings: { readonly totalMs: number | null } | null;
   readonly engineVersion?: string;
   readonly createdAt: string;
