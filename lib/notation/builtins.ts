@@ -120,7 +120,7 @@ function series(v: Value): HilbertSeries {
 function hilbertDegree(v: Value, span: Span, c: CallContext): number {
   if (v.type !== "Int") throw runtime(`expected an Int degree, got ${v.type}`, span);
   const max = c.interp.session.limits.maxHilbertDegree;
-  if (v.value > BigInt(max)) throw limit(`degree ${v.value} is beyond the limit ${max}`, span);
+  if (v.value > BigInt(max)) throw limit(`degree ${v.value} is beyond the limit ${max}`, span, "hilbertDegree");
   return Number(v.value < -1n ? -1n : v.value);
 }
 

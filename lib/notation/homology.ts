@@ -26,6 +26,7 @@ import {
 import type { CallContext } from "./builtins";
 import { reduceIn } from "./coerce";
 import { limit, runtime } from "./errors";
+import { LIMIT_TABLE } from "../limits";
 import { matrixOf, moduleOf, moduleValue, presentationOverS } from "./modules";
 import { bound } from "./named-options";
 import { complexOf } from "./resolutions";
@@ -39,7 +40,7 @@ type FunctionImpl = (args: readonly Value[], c: CallContext) => Value;
 const Int = (value: bigint | number): Value => ({ type: "Int", value: BigInt(value) });
 const opts = (c: CallContext) => c.interp.session.compute;
 /// The largest homological index of tor, ext and syzygy.
-const MAX_INDEX = 1000;
+const MAX_INDEX = LIMIT_TABLE.homologicalIndex.value;
 
 /// rank, reg, Tor, Ext and Serre's multiplicity are computed over polynomial rings only: over
 /// S/J a resolution is usually infinite, so say what can be computed there instead.
@@ -188,8 +189,8 @@ export function resolveModule(M: ModuleValue, c: CallContext): ComplexValue {
   // over a quotient ring: degree by degree (engine part 3, quotients.ts)
   if (M.ring.ideal.length > 0) return resolveOverQuotient(M, c);
   const { P, shift } = shiftedOverS(M, c.span);
-  const length = bound(c, "length", 1000);
-  const degree = bound(c, "degree", 100_000);
+  const length = bound(c, "length", "homologicalIndex");
+  const degree = bound(c, "degree", "internalDegree");
   const partial = c.interp.session.partial;
   const res = resolveCoker(M.ring.poly, P.rows, P.rowDegrees, {
     ...opts(c),
@@ -205,7 +206,7 @@ export function resolveModule(M: ModuleValue, c: CallContext): ComplexValue {
 function indexArg(v: Value, span: Span, what: string): number {
   const k = (v as { value: bigint }).value;
   if (k < 0n) throw runtime(`${what} must be at least 0, got ${k}`, span);
-  if (k > BigInt(MAX_INDEX)) throw limit(`${what} ${k} is beyond the limit ${MAX_INDEX}`, span);
+  if (k > BigInt(MAX_INDEX)) throw limit(`${what} ${k} is beyond the limit ${MAX_INDEX}`, span, "homologicalIndex");
   return Number(k);
 }
 
@@ -236,13 +237,13 @@ function finiteLength<T>(what: string, span: Span, f: () => T): T {
 }
 
 /// The most entries a Koszul complex's differentials may have together (dense matrices).
-const MAX_KOSZUL_ENTRIES = 2_000_000;
+const MAX_KOSZUL_ENTRIES = LIMIT_TABLE.koszulEntries.value;
 
 function koszulValue(ring: RingValue, fs: readonly Poly[], c: CallContext): ComplexValue {
   const K = koszulComplex(ring.poly, fs);
   const entries0 = K.ranks.slice(1).reduce((s, r, k) => s + r * K.ranks[k], 0);
   if (entries0 > MAX_KOSZUL_ENTRIES) {
-    throw limit(`the Koszul complex on ${fs.length} elements has ${entries0} matrix entries, beyond the limit ${MAX_KOSZUL_ENTRIES}`, c.span);
+    throw limit(`the Koszul complex on ${fs.length} elements has ${entries0} matrix entries, beyond the limit ${MAX_KOSZUL_ENTRIES}`, c.span, "koszulEntries");
   }
   const maps = Array.from({ length: K.length }, (_, k) => {
     checkpoint(opts(c), { stage: "Koszul complex", detail: `differential ${k + 1}` });
@@ -293,7 +294,7 @@ export const HOMOLOGY_FUNCTIONS: Record<string, FunctionImpl> = {
   },
   "tor_lengths(Module or Ring, Module or Ring)": ([a, b], c) => {
     const { ring, M, N } = pair(a, b, c, c.argSpans, "tor_lengths");
-    const n = bound(c, "length", MAX_INDEX);
+    const n = bound(c, "length", "homologicalIndex");
     const lengths = finiteLength("tor_lengths", c.span, () => torLengthsOf(ring.poly, nonNegative(M), nonNegative(N), opts(c)));
     return { type: "List", items: (n === undefined ? lengths : lengths.slice(0, n + 1)).map(Int) };
   },

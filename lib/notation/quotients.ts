@@ -38,6 +38,7 @@ import {
 import type { CallContext } from "./builtins";
 import { bound } from "./named-options";
 import { runtime } from "./errors";
+import { LIMIT_TABLE } from "../limits";
 import { colonOf, groebnerOf, idealValue } from "./ideals";
 import { encodeValue } from "./json";
 import { moduleValue, presentationOverS } from "./modules";
@@ -50,7 +51,7 @@ const opts = (c: CallContext) => c.interp.session.compute;
 
 /// Differentials are kept as matrices while the resolution has at most this many matrix
 /// entries in all (beyond it C.map and C.minors say they were not kept).
-const MAX_MAP_ENTRIES = 200_000;
+const MAX_MAP_ENTRIES = LIMIT_TABLE.keptMapEntries.value;
 
 /// A quotient ring m = A / I read as the cyclic A-module A/I (notation.md §5): the defining
 /// ideal J of A and the ideal I + J of m, both in the ambient polynomial ring S.
@@ -200,7 +201,7 @@ function localComplex(m: CyclicModule, length: number, c: CallContext): ComplexV
 /// quotient A / I (A itself a quotient) or a module presented over A.
 export function resolveOverQuotient(m: RingValue | ModuleValue, c: CallContext): ComplexValue {
   const span = c.argSpans[0] ?? c.span;
-  const length = bound(c, "length", 1000);
+  const length = bound(c, "length", "homologicalIndex");
   if (length === undefined) {
     throw runtime("over a quotient ring a resolution is usually infinite: give a bound, e.g. resolve(M, length = 6)", c.span);
   }
@@ -210,7 +211,7 @@ export function resolveOverQuotient(m: RingValue | ModuleValue, c: CallContext):
     return localComplex(local, length, c);
   }
   const t = m.type === "Ring" ? targetOfRing(m, span, "resolve", c) : targetOfModule(m, span, "resolve", c);
-  const degree = bound(c, "degree", 100_000);
+  const degree = bound(c, "degree", "internalDegree");
   const r = degreewise(t, length, degree, c, true, MAX_MAP_ENTRIES);
   const complete = r.complete && r.columns[r.columns.length - 1].total === 0;
   const note = complete ? undefined : truncationNote(r, length, t.shift);
@@ -282,7 +283,7 @@ export function pdOverQuotient(M: ModuleValue, depthM: number, c: CallContext): 
 export function poincareValue([M]: readonly Value[], c: CallContext): Value {
   const span = c.argSpans[0] ?? c.span;
   if (M.type !== "Ring" && M.type !== "Module") throw runtime(`poincare expects a Module or a quotient ring, got ${M.type}`, span);
-  const terms = bound(c, "terms", 1000) ?? 10;
+  const terms = bound(c, "terms", "homologicalIndex") ?? 10;
   if (terms < 1) throw runtime("terms must be at least 1", c.span);
   if (M.type === "Ring" && !M.over) {
     // over a polynomial ring the resolution is finite (part 2), every term exact

@@ -33,8 +33,8 @@ export function resolveValue([m]: readonly Value[], c: CallContext): Value {
   // over a quotient ring (the ring this quotient was formed from is itself one): engine part 3
   if (m.over) return resolveOverQuotient(m, c);
   const S = c.interp.session.rings.ambient(m);
-  const length = bound(c, "length", 1000);
-  const degree = bound(c, "degree", 100_000);
+  const length = bound(c, "length", "homologicalIndex");
+  const degree = bound(c, "degree", "internalDegree");
   const partial = c.interp.session.partial;
   const res = resolveQuotient(engineIdeal(m.poly, m.ideal), {
     ...c.interp.session.compute,
