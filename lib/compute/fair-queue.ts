@@ -29,6 +29,12 @@ export class EngineFullError extends Error {
   }
 }
 
+/// Whether `error` is an EngineFullError — also one thrown by another bundle's copy of this
+/// module (Next bundles instrumentation and routes apart; the pool is shared through globalThis).
+export function isEngineFull(error: unknown): error is EngineFullError {
+  return error instanceof EngineFullError || (error instanceof Error && error.name === "EngineFullError" && (error as { kind?: unknown }).kind === "limit");
+}
+
 export class FairQueue<T> {
   /// Users with something waiting, in serving order: a served user moves to the back.
   private readonly lines = new Map<string, T[]>();

@@ -6,7 +6,7 @@ import { limitValue } from "../limits";
 import type { CellEvent, CellJob, CellJobOutcome } from "./cell-events";
 import { SlotPool, type JobEnd } from "./slot-pool";
 
-export { EngineFullError } from "./fair-queue";
+export { EngineFullError, isEngineFull } from "./fair-queue";
 export type { JobEnd } from "./slot-pool";
 
 /// One computation: who asks (the fair queue serves users round robin) and the program.

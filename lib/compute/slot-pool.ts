@@ -6,7 +6,6 @@
 /// `slotJobs` computations or kept much memory after one.
 import { fork, type ChildProcess } from "node:child_process";
 import { readFileSync } from "node:fs";
-import os from "node:os";
 import path from "node:path";
 import { formatLimit } from "../limits";
 import { EngineFullError, FairQueue } from "./fair-queue";
@@ -194,15 +193,6 @@ export class SlotPool {
         serialization: "advanced",
       },
     ]);
-    // Computations yield the processor to the web server, so pages and small cells stay quick
-    // while slots are busy.
-    if (child.pid !== undefined) {
-      try {
-        os.setPriority(child.pid, 10);
-      } catch {
-        // not permitted here: same priority as the server
-      }
-    }
     const slot: Slot = { child, ready: false, dead: false, served: 0 };
     child.on("message", (message: SlotMessage) => this.onMessage(slot, message));
     child.on("error", () => this.onDeath(slot, null));

@@ -185,3 +185,15 @@ export async function endOrphan(cellId: string, status: "cancelled" | "interrupt
     WHERE id = ${cellId}::uuid AND status = 'running' RETURNING id`);
   return rows.length > 0;
 }
+
+/// Whether one of the session's cells or named objects holds a value whose detail is `detailId`
+/// (so a reader of the session may fetch it).
+export async function sessionHoldsDetail(sessionId: string, detailId: string): Promise<boolean> {
+  const needle = `%"id": "${detailId}"%`;
+  const rows = await db().execute(sql`
+    SELECT 1 FROM cells WHERE session_id = ${sessionId} AND result::text LIKE ${needle}
+    UNION ALL
+    SELECT 1 FROM named_objects WHERE session_id = ${sessionId} AND value::text LIKE ${needle}
+    LIMIT 1`);
+  return rows.length > 0;
+}
