@@ -3,7 +3,7 @@
 /// in an engine slot, stream its events as NDJSON while the heartbeat keeps what streamed,
 /// and write the outcome and new named objects in one transaction — also when the client
 /// goes away, the cell is cancelled or a limit stops it (then with the work done so far).
-import { EngineFullError, runInSlot, type SlotOutcome } from "@/lib/compute";
+import { isEngineFull, runInSlot, type EngineFullError, type SlotOutcome } from "@/lib/compute";
 import { errorValue, type CellEvent, type CellJob, type ErrorValue, type Span } from "@/lib/compute/cell-events";
 import { StreamedWork } from "@/lib/compute/streamed-work";
 import type { CurrentUser } from "@/lib/auth/types";
@@ -44,7 +44,7 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
       { signal: stop.signal, onEvent: (event) => (deliver ? deliver(event) : void events.push(event)) },
     );
   } catch (error) {
-    if (error instanceof EngineFullError) throw refusal(error);
+    if (isEngineFull(error)) throw refusal(error);
     throw error;
   }
 
