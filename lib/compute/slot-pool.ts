@@ -5,7 +5,8 @@
 /// server's memory. A killed or exhausted slot is replaced; so is one that served
 /// `slotJobs` computations or kept much memory after one.
 import { fork, type ChildProcess } from "node:child_process";
-import { readFileSync } from "node:fs";
+import { readdirSync, readFileSync } from "node:fs";
+import os from "node:os";
 import path from "node:path";
 import { formatLimit } from "../limits";
 import { EngineFullError, FairQueue } from "./fair-queue";
@@ -53,8 +54,15 @@ export interface SubmitOptions {
   memoryLimitMb?: number;
 }
 
+/// A computation that has run this long yields the processor: its slot's threads get a lower
+/// priority (nice 10), so short cells and the web server stay quick while long ones run.
+const YIELD_AFTER_MS = 1000;
+const YIELDING_NICE = 10;
+
 interface Job {
   id: number;
+  /// when the slot started it (performance.now())
+  startedAt?: number;
   payload: unknown;
   options: SubmitOptions;
   stop: StopReason;
@@ -74,6 +82,8 @@ interface Slot {
   served: number;
   /// being killed: takes no new job
   retired?: boolean;
+  /// its threads run at the yielding priority
+  yielding?: boolean;
   /// the engine thread reported its heap exhausted before the process exited
   heapExhausted?: boolean;
   job?: Job;
@@ -171,6 +181,7 @@ export class SlotPool {
   }
 
   private start(slot: Slot, job: Job): void {
+    job.startedAt = performance.now();
     job.timer = setTimeout(() => this.stop(job, StopReason.TimeLimit), job.options.timeLimitMs);
     slot.child.send({ type: "run", jobId: job.id, payload: job.payload }, (error) => {
       if (error && slot.job === job) this.finish(job, { status: "crashed", message: "the engine slot could not take the computation" });
@@ -256,6 +267,11 @@ export class SlotPool {
       if (rss !== null && rss > bound) {
         job.memoryKill = bound;
         void this.kill(slot);
+        continue;
+      }
+      if (!slot.yielding && job.startedAt !== undefined && performance.now() - job.startedAt > YIELD_AFTER_MS) {
+        slot.yielding = true;
+        setThreadsPriority(slot.child.pid, YIELDING_NICE);
       }
     }
   }
@@ -273,7 +289,14 @@ export class SlotPool {
       // its memory bound (fragmented heaps do not shrink back).
       const pid = slot.child.pid;
       const rss = pid === undefined ? null : residentMb(pid);
-      if (!slot.dead && (slot.served >= this.options.jobsPerSlot || (rss !== null && rss > this.options.memoryLimitMb / 2))) void this.kill(slot);
+      // A slot that yielded gets its priority back for the next job, or (where raising a
+      // priority is not permitted) is replaced.
+      let restored = true;
+      if (slot.yielding && !slot.dead) {
+        restored = pid !== undefined && setThreadsPriority(pid, 0);
+        slot.yielding = false;
+      }
+      if (!slot.dead && (!restored || slot.served >= this.options.jobsPerSlot || (rss !== null && rss > this.options.memoryLimitMb / 2))) void this.kill(slot);
     }
     job.slot = undefined;
     job.resolve(end);
@@ -296,6 +319,26 @@ type SlotMessage =
   | { type: "event"; jobId: number; event: unknown }
   | { type: "finished"; jobId: number; outcome: unknown }
   | { type: "failed"; jobId: number; message: string };
+
+/// Sets the priority of every thread of a process (on Linux a priority belongs to a thread, and
+/// the computation runs in the slot's engine thread); false when not permitted or not possible.
+function setThreadsPriority(pid: number, nice: number): boolean {
+  let tids: number[];
+  try {
+    tids = readdirSync(`/proc/${pid}/task`).map(Number);
+  } catch {
+    tids = [pid];
+  }
+  let ok = true;
+  for (const tid of tids) {
+    try {
+      os.setPriority(tid, nice);
+    } catch {
+      ok = false;
+    }
+  }
+  return ok;
+}
 
 /// A process's resident memory in MB from /proc (Linux); null when it cannot be read.
 export function residentMb(pid: number): number | null {

@@ -181,6 +181,13 @@ async function saveWithRetries(cell: CellRow, user: CurrentUser, outcome: CellOu
       return await finishCell(cell, user, outcome);
     } catch (error) {
       console.error(`[ringside] storing cell ${cell.id} failed (try ${attempt} of ${attempts}):`, (error as Error).message);
+      // PostgreSQL refused the data itself (class 22, e.g. a NUL character in a string):
+      // trying again cannot help, so the cell is marked at once, saying why.
+      const code = (error as { code?: unknown }).code;
+      if (typeof code === "string" && code.startsWith("22")) {
+        await markUnsaved(cell.id, `the result could not be stored: ${(error as Error).message}`).catch(() => {});
+        return null;
+      }
       if (attempt < attempts) await new Promise((r) => setTimeout(r, Math.min(500 * 2 ** (attempt - 1), 8000)));
     }
   }

@@ -1,5 +1,6 @@
 import { afterAll, describe, expect, it } from "vitest";
 import path from "node:path";
+import { readdirSync, readFileSync } from "node:fs";
 import { EngineFullError } from "../../lib/compute/fair-queue";
 import { residentMb, SlotPool, type SubmitOptions } from "../../lib/compute/slot-pool";
 
@@ -71,6 +72,18 @@ describe("SlotPool (engine slots as child processes)", () => {
     expect(residentMb(process.pid)!).toBeLessThan(before + 150);
     const again = await pool.submit({ kind: "echo", value: "fresh slot" }, opts()).done;
     expect(again).toEqual({ status: "finished", outcome: { echoed: "fresh slot" } });
+  });
+
+  it("lowers the priority of every thread of a slot whose computation runs long", async () => {
+    let pid = 0;
+    const handle = pool.submit({ kind: "poll-pid" }, opts({ onEvent: (e) => (pid = (e as { pid: number }).pid) }));
+    await new Promise((r) => setTimeout(r, 1800));
+    expect(pid).toBeGreaterThan(0);
+    const nices = readdirSync(`/proc/${pid}/task`).map((tid) => Number(readFileSync(`/proc/${pid}/task/${tid}/stat`, "utf8").split(") ")[1]!.split(" ")[16]));
+    expect(nices.length).toBeGreaterThan(1);
+    expect(new Set(nices)).toEqual(new Set([10]));
+    handle.cancel();
+    expect((await handle.done).status).toBe("cancelled");
   });
 
   it("reports a job that throws", async () => {
