@@ -106,25 +106,40 @@ ensure_database ${pgPort} "${dir}/pg-password" ringside_own >/dev/null 2>&1`);
     return Number(readFileSync(path.join(this.dir, "pg", "postmaster.pid"), "utf8").split("\n")[0]);
   }
 
-  /// kill -9 of the postmaster, then a start of the same cluster (crash recovery included).
+  /// kill -9 of the postmaster (restartPostgres starts the same cluster again).
   killPostmaster(): void {
-    process.kill(this.postmasterPid(), "SIGKILL");
+    const pid = this.postmasterPid();
+    this.orphanedBackends = childPids(pid);
+    process.kill(pid, "SIGKILL");
   }
 
-  /// Starts the cluster again; tries for a while, since the killed postmaster's backends may
-  /// still hold its shared memory for a moment.
+  private orphanedBackends: number[] = [];
+
+  /// Starts the cluster again once the killed postmaster's backends have gone (they hold its
+  /// shared memory until they notice), and waits until it accepts connections.
   async restartPostgres(): Promise<void> {
+    for (let i = 0; i < 120 && this.orphanedBackends.some(alive); i++) await new Promise((r) => setTimeout(r, 250));
+    const opts = `-c listen_addresses=127.0.0.1 -c port=${this.pgPort} -c unix_socket_directories=${this.dir}/pg.sock -c fsync=off -c synchronous_commit=off -c full_page_writes=off`;
     let last: unknown;
-    for (let i = 0; i < 60; i++) {
+    for (let i = 0; i < 20; i++) {
       try {
-        bash(`pg_up "${this.dir}/pg" ${this.pgPort} "${this.dir}/pg-password" "-c fsync=off -c synchronous_commit=off -c full_page_writes=off" >/dev/null 2>&1`);
+        bash(`run_pg "$PG_BIN/pg_ctl" -D "${this.dir}/pg" -l "${this.dir}/pg/server.log" -w -t 30 -o "${opts}" start >/dev/null`);
+        bash(`for i in $(seq 1 120); do "$PG_BIN/pg_isready" -q -h 127.0.0.1 -p ${this.pgPort} && exit 0; sleep 0.25; done; exit 1`);
         return;
       } catch (error) {
         last = error;
         await new Promise((r) => setTimeout(r, 500));
       }
     }
-    throw last;
+    throw new Error(`PostgreSQL did not start again: ${String(last)}\n${this.pgLog()}`);
+  }
+
+  pgLog(): string {
+    try {
+      return readFileSync(path.join(this.dir, "pg", "server.log"), "utf8").split("\n").slice(-30).join("\n");
+    } catch {
+      return "";
+    }
   }
 
   log(): string {
@@ -143,8 +158,25 @@ ensure_database ${pgPort} "${dir}/pg-password" ringside_own >/dev/null 2>&1`);
       // already down
     }
     // The log outlives the folder, for reading after a failure.
-    writeFileSync(`${this.dir}.log`, this.log());
+    writeFileSync(`${this.dir}.log`, this.log() + "\n--- PostgreSQL ---\n" + this.pgLog());
     rmSync(this.dir, { recursive: true, force: true });
+  }
+}
+
+function childPids(pid: number): number[] {
+  try {
+    return execFileSync("pgrep", ["-P", String(pid)], { encoding: "utf8" }).split("\n").filter(Boolean).map(Number);
+  } catch {
+    return [];
+  }
+}
+
+function alive(pid: number): boolean {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch {
+    return false;
   }
 }
 

@@ -165,6 +165,7 @@ describe("no user can take the server down", () => {
     } finally {
       clearInterval(sampler);
     }
+    console.log(`[robust-compute] web server resident memory peaked at ${Math.round(maxRss)} MB (bound ${SERVER_RSS_BOUND_MB} MB)`);
     expect(maxRss).toBeLessThan(SERVER_RSS_BOUND_MB);
     // The server is still serving.
     const again = await allEvents(await post(light, await newSession(light, "after"), "2 + 2"));
