@@ -223,7 +223,14 @@ export class SlotPool {
     }
     const job = slot.job;
     if (!job || message.jobId !== job.id) return;
-    if (message.type === "event") job.options.onEvent?.(message.event);
+    if (message.type === "event") {
+      // A failing listener must not take the server down (this runs in an IPC handler).
+      try {
+        job.options.onEvent?.(message.event);
+      } catch (error) {
+        console.error("[ringside] a computation's event listener failed:", error);
+      }
+    }
     else if (message.type === "finished")
       this.finish(job, job.stop === StopReason.None ? { status: "finished", outcome: message.outcome } : this.stoppedEnd(job, message.outcome));
     else this.finish(job, job.stop === StopReason.None ? { status: "crashed", message: message.message } : this.stoppedEnd(job));

@@ -71,83 +71,94 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
       };
       send({ event: "accepted", cellId: cell.id, position: cell.position });
 
-      const work = new StreamedWork();
-      const bound = new Map<string, { name: string; type: string; value: unknown; source: string }>();
-      let failure: ErrorValue | null = null;
-      const onEvent = (event: CellEvent) => {
-        work.observe(event);
-        switch (event.event) {
-          case "bound":
-            bound.set(event.name, { name: event.name, type: event.type, value: event.value, source: event.source ?? "" });
-            return;
-          case "checked":
-            return send({ event: "checked", statements: event.statements });
-          case "error":
-            failure = event.error;
-            // The evaluator sees any stop as a cancel; whether it was the user or the time
-            // limit is known only when the job ends, so that error is sent then.
-            if (event.error.kind === "cancelled") return;
-            return send(event);
-          default:
-            return send(event);
+      let untrack = () => {};
+      try {
+        const work = new StreamedWork();
+        const bound = new Map<string, { name: string; type: string; value: unknown; source: string }>();
+        let failure: ErrorValue | null = null;
+        const onEvent = (event: CellEvent) => {
+          work.observe(event);
+          switch (event.event) {
+            case "bound":
+              bound.set(event.name, { name: event.name, type: event.type, value: event.value, source: event.source ?? "" });
+              return;
+            case "checked":
+              return send({ event: "checked", statements: event.statements });
+            case "error":
+              failure = event.error;
+              // The evaluator sees any stop as a cancel; whether it was the user or the time
+              // limit is known only when the job ends, so that error is sent then.
+              if (event.error.kind === "cancelled") return;
+              return send(event);
+            default:
+              return send(event);
+          }
+        };
+        for (const event of events.splice(0)) onEvent(event);
+        deliver = onEvent;
+
+        untrack = trackRunningCell(cell.id, () => work.snapshot());
+        // Without the cancel channel the cell still runs; only cross-server cancel is lost.
+        const unregister = await registerRunningCell(cell.id, () => stop.abort()).catch((error) => {
+          console.error("[ringside] cancel channel unavailable:", error);
+          return () => {};
+        });
+        const end = await done.finally(unregister);
+
+        // A stop that the job did not report itself becomes the cell's error, placed at the
+        // statement that was running.
+        const running = work.results.length;
+        const reported = failure as ErrorValue | null;
+        const at = reported?.span ?? work.spans[running] ?? work.spans[work.spans.length - 1] ?? WHOLE_CELL;
+        if (end.status !== "finished" && (!reported || reported.kind === "cancelled")) {
+          failure =
+            end.status === "cancelled"
+              ? errorValue("cancelled", "the computation was cancelled", at)
+              : end.status === "limit"
+                ? errorValue("limit", end.message, at)
+                : errorValue("runtime", end.message, at);
+          send({ event: "error", statement: running, error: failure });
+        } else if (reported?.kind === "cancelled") {
+          send({ event: "error", statement: running, error: reported });
         }
-      };
-      for (const event of events.splice(0)) onEvent(event);
-      deliver = onEvent;
-
-      const untrack = trackRunningCell(cell.id, () => work.snapshot());
-      // Without the cancel channel the cell still runs; only cross-server cancel is lost.
-      const unregister = await registerRunningCell(cell.id, () => stop.abort()).catch((error) => {
-        console.error("[ringside] cancel channel unavailable:", error);
-        return () => {};
-      });
-      const end = await done.finally(unregister);
-
-      // A stop that the job did not report itself becomes the cell's error, placed at the
-      // statement that was running.
-      const running = work.results.length;
-      const reported = failure as ErrorValue | null;
-      const at = reported?.span ?? work.spans[running] ?? work.spans[work.spans.length - 1] ?? WHOLE_CELL;
-      if (end.status !== "finished" && (!reported || reported.kind === "cancelled")) {
-        failure =
-          end.status === "cancelled"
-            ? errorValue("cancelled", "the computation was cancelled", at)
-            : end.status === "limit"
-              ? errorValue("limit", end.message, at)
-              : errorValue("runtime", end.message, at);
-        send({ event: "error", statement: running, error: failure });
-      } else if (reported?.kind === "cancelled") {
-        send({ event: "error", statement: running, error: reported });
-      }
-      const final = failure as ErrorValue | null;
-      const status: CellOutcome["status"] = end.status === "cancelled" || final?.kind === "cancelled" ? "cancelled" : final ? "error" : "done";
-      // A cancel or a limit keeps the work done: finished statements and the running one's
-      // partial results, with where it stopped.
-      const stoppedWhy = final && (final.kind === "cancelled" || final.kind === "limit") ? (final.kind === "cancelled" ? "cancelled" : final.message) : null;
-      const kept = stoppedWhy ? work.stored(stoppedWhy) : null;
-      const durationMs = performance.now() - started;
-      const outcome: CellOutcome = {
-        status,
-        results: kept?.statements ?? work.results,
-        stopped: kept?.stopped ?? null,
-        error: failure,
-        durationMs,
-        engineVersion: ENGINE_VERSION,
-        objects: [...bound.values()],
-        // After a stop the evaluator could not report, the ring the cell started in stays current.
-        currentRing: end.outcome ? (end.outcome.currentRing ?? null) : currentRing,
-      };
-      if (kept) {
-        const partial = kept.statements.length > work.results.length ? kept.statements.at(-1) : undefined;
-        if (partial) send({ event: "result", ...partial });
-      }
-      const saved = await saveWithRetries(cell, user, outcome);
-      untrack();
-      if (saved) {
-        send({ event: "done", status, ...(outcome.stopped ? { stopped: outcome.stopped } : {}), timings: { totalMs: Math.round(durationMs) }, objects: saved.map(objectView) });
-      } else {
-        send({ event: "error", statement: null, error: errorValue("runtime", "the result could not be saved", WHOLE_CELL) });
-        send({ event: "done", status: "error", timings: { totalMs: Math.round(durationMs) }, objects: [] });
+        const final = failure as ErrorValue | null;
+        const status: CellOutcome["status"] = end.status === "cancelled" || final?.kind === "cancelled" ? "cancelled" : final ? "error" : "done";
+        // A cancel or a limit keeps the work done: finished statements and the running one's
+        // partial results, with where it stopped.
+        const stoppedWhy = final && (final.kind === "cancelled" || final.kind === "limit") ? (final.kind === "cancelled" ? "cancelled" : final.message) : null;
+        const kept = stoppedWhy ? work.stored(stoppedWhy) : null;
+        const durationMs = performance.now() - started;
+        const outcome: CellOutcome = {
+          status,
+          results: kept?.statements ?? work.results,
+          stopped: kept?.stopped ?? null,
+          error: failure,
+          durationMs,
+          engineVersion: ENGINE_VERSION,
+          objects: [...bound.values()],
+          // After a stop the evaluator could not report, the ring the cell started in stays current.
+          currentRing: end.outcome ? (end.outcome.currentRing ?? null) : currentRing,
+        };
+        if (kept) {
+          const partial = kept.statements.length > work.results.length ? kept.statements.at(-1) : undefined;
+          if (partial) send({ event: "result", ...partial });
+        }
+        const saved = await saveWithRetries(cell, user, outcome);
+        if (saved) {
+          send({ event: "done", status, ...(outcome.stopped ? { stopped: outcome.stopped } : {}), timings: { totalMs: Math.round(durationMs) }, objects: saved.map(objectView) });
+        } else {
+          send({ event: "error", statement: null, error: errorValue("runtime", "the result could not be saved", WHOLE_CELL) });
+          send({ event: "done", status: "error", timings: { totalMs: Math.round(durationMs) }, objects: [] });
+        }
+      } catch (error) {
+        // Nothing unexpected may leave the cell running: it is marked, and the stream ends.
+        console.error(`[ringside] cell ${cell.id} failed on the server:`, error);
+        stop.abort();
+        await markUnsaved(cell.id, "the server failed while finishing this cell; run it again").catch(() => {});
+        send({ event: "error", statement: null, error: errorValue("runtime", "the server failed while finishing this cell", WHOLE_CELL) });
+        send({ event: "done", status: "error", timings: { totalMs: Math.round(performance.now() - started) }, objects: [] });
+      } finally {
+        untrack();
       }
       open = false;
       try {
