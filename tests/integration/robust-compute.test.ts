@@ -28,6 +28,7 @@ const ENV = {
   RINGSIDE_CELL_TIME_LIMIT_MS: "240000",
   RINGSIDE_HEARTBEAT_MS: "500",
   RINGSIDE_ORPHAN_AFTER_MS: "4000",
+  RINGSIDE_LARGE_VALUE_BYTES: "20000",
 };
 /// The web server's resident memory must stay below this while the heavy cells run (it idles
 /// around 200–300 MB; before slots were processes one such cell took it past 18 GB).
@@ -202,6 +203,39 @@ describe("no user can take the server down", () => {
       const rows = await db().select().from(cells).where(eq(cells.sessionId, session));
       return rows.length === 4 && rows.every((r) => r.status !== "running");
     });
+  });
+});
+
+describe("the web server never holds a whole large value", () => {
+  it("stores a Complex above largeValueBytes as its Betti table with a detail marker, fetched on request and restored for later cells", async () => {
+    await noCellRunning();
+    const session = await newSession(heavy, "large value");
+    // The Koszul complex on 8 variables: its differentials take about 80 KB as JSON, the ranks
+    // are C(8, i) (common practice).
+    const events = await allEvents(await post(heavy, session, "S := GF(32003)[a, b, c, d, e, f, g, h]\nC := resolve(S / S.maximal)"));
+    expect(events.at(-1)).toMatchObject({ event: "done", status: "done" });
+    const listed = (await (await heavy.request(`/api/sessions/${session}/cells`)).json()) as {
+      cells: { results: { value: { type: string; ranks: number[]; maps: unknown; detail?: { id: string; bytes: number } } }[] }[];
+    };
+    const summary = listed.cells[0]!.results[1]!.value;
+    expect(summary.type).toBe("Complex");
+    expect(summary.ranks).toEqual([1, 8, 28, 56, 70, 56, 28, 8, 1]);
+    expect(summary.maps).toBeNull();
+    expect(summary.detail!.bytes).toBeGreaterThan(20000);
+    const detail = await heavy.request(`/api/sessions/${session}/details/${summary.detail!.id}`);
+    expect(detail.status).toBe(200);
+    const whole = (await detail.json()) as { type: string; maps: unknown[] };
+    expect(whole.type).toBe("Complex");
+    expect(whole.maps).toHaveLength(8);
+    // Only readers of the session, and only details the session holds.
+    expect((await light.request(`/api/sessions/${session}/details/${summary.detail!.id}`)).status).toBe(404);
+    const other = await newSession(heavy, "holds nothing");
+    expect((await heavy.request(`/api/sessions/${other}/details/${summary.detail!.id}`)).status).toBe(404);
+    // A later cell uses C whole: d1 ∘ d2 = 0, a 1 × 28 zero matrix.
+    const later = await allEvents(await post(heavy, session, "C.map(1) * C.map(2)"));
+    const product = later.find((e) => e.event === "result")?.value as { type: string; rows: string[][] };
+    expect(product.type).toBe("Matrix");
+    expect(product.rows).toEqual([Array(28).fill("0")]);
   });
 });
 
