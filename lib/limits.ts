@@ -25,7 +25,12 @@ function environment(): Record<string, string | undefined> {
 export const LIMIT_TABLE = {
   // computation: time and memory of one cell (or one experiment member)
   cellTimeMs: { value: 10 * 60 * 1000, unit: "ms", env: "RINGSIDE_CELL_TIME_LIMIT_MS", what: "wall-clock time of one computation" },
-  cellHeapMb: { value: 2048, unit: "MB", env: "RINGSIDE_CELL_HEAP_MB", what: "JavaScript heap of one computation (V8 old generation in its engine slot)" },
+  cellHeapMb: {
+    value: 2048,
+    unit: "MB",
+    env: "RINGSIDE_CELL_HEAP_MB",
+    what: "JavaScript heap of one computation (V8 old generation in its engine slot)",
+  },
   cellMemoryMb: {
     value: 3072,
     unit: "MB",
@@ -47,8 +52,18 @@ export const LIMIT_TABLE = {
     what: "slots one user may hold at once (unset: slots − 1, at least this default, so one slot stays free for others)",
   },
   userQueued: { value: 8, unit: "count", env: "RINGSIDE_USER_QUEUED", what: "computations one user may have waiting" },
-  slotJobs: { value: 100, unit: "count", env: "RINGSIDE_SLOT_JOBS", what: "computations a slot process serves before it is replaced by a fresh one" },
-  stopGraceMs: { value: 3000, unit: "ms", env: "RINGSIDE_STOP_GRACE_MS", what: "time a stopped computation gets to hand back its partial work before its slot is killed" },
+  slotJobs: {
+    value: 100,
+    unit: "count",
+    env: "RINGSIDE_SLOT_JOBS",
+    what: "computations a slot process serves before it is replaced by a fresh one",
+  },
+  stopGraceMs: {
+    value: 3000,
+    unit: "ms",
+    env: "RINGSIDE_STOP_GRACE_MS",
+    what: "time a stopped computation gets to hand back its partial work before its slot is killed",
+  },
   // results kept by the web server
   largeValueBytes: {
     value: 1024 * 1024,
@@ -57,9 +72,24 @@ export const LIMIT_TABLE = {
     what: "encoded size above which a value is stored as a summary, its detail kept aside and fetched on request",
   },
   // cells on the server: liveness and saving
-  heartbeatMs: { value: 2000, unit: "ms", env: "RINGSIDE_HEARTBEAT_MS", what: "interval at which a server records that its running cells are alive (with what they streamed so far)" },
-  orphanAfterMs: { value: 15_000, unit: "ms", env: "RINGSIDE_ORPHAN_AFTER_MS", what: "a running cell whose heartbeat is older than this is marked interrupted" },
-  saveAttempts: { value: 6, unit: "count", env: "RINGSIDE_SAVE_ATTEMPTS", what: "tries to store a finished cell before it is marked as not saved" },
+  heartbeatMs: {
+    value: 2000,
+    unit: "ms",
+    env: "RINGSIDE_HEARTBEAT_MS",
+    what: "interval at which a server records that its running cells are alive (with what they streamed so far)",
+  },
+  orphanAfterMs: {
+    value: 15_000,
+    unit: "ms",
+    env: "RINGSIDE_ORPHAN_AFTER_MS",
+    what: "a running cell whose heartbeat is older than this is marked interrupted",
+  },
+  saveAttempts: {
+    value: 6,
+    unit: "count",
+    env: "RINGSIDE_SAVE_ATTEMPTS",
+    what: "tries to store a finished cell before it is marked as not saved",
+  },
   // input: what the notation accepts
   cellSourceBytes: { value: 100 * 1024, unit: "bytes", what: "source text of one cell" },
   bracketNesting: { value: 200, unit: "levels", what: "brackets nested inside one statement" },

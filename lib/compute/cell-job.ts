@@ -44,6 +44,7 @@ export async function handleJob(payload: unknown, { signal, emit }: JobContext) 
   const outcome = await evaluate(job.source, bindings, { signal, onEvent, currentRing: job.currentRing ?? null });
   // The checker's type names (List<Int>, …) and the defining source replace the provisional
   // ones sent with each result.
-  for (const o of outcome.objects) send({ event: "bound", statement: o.statement, name: o.name, type: o.type, value: bounded(o.value), source: o.source });
+  for (const o of outcome.objects)
+    send({ event: "bound", statement: o.statement, name: o.name, type: o.type, value: bounded(o.value), source: o.source });
   return { status: outcome.status, currentRing: outcome.currentRing };
 }

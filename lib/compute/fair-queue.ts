@@ -32,7 +32,10 @@ export class EngineFullError extends Error {
 /// Whether `error` is an EngineFullError — also one thrown by another bundle's copy of this
 /// module (Next bundles instrumentation and routes apart; the pool is shared through globalThis).
 export function isEngineFull(error: unknown): error is EngineFullError {
-  return error instanceof EngineFullError || (error instanceof Error && error.name === "EngineFullError" && (error as { kind?: unknown }).kind === "limit");
+  return (
+    error instanceof EngineFullError ||
+    (error instanceof Error && error.name === "EngineFullError" && (error as { kind?: unknown }).kind === "limit")
+  );
 }
 
 export class FairQueue<T> {

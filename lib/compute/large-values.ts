@@ -28,15 +28,18 @@ export function detailPath(id: string): string | null {
 
 export function detailOf(value: unknown): DetailMarker | null {
   const d = (value as { detail?: Partial<DetailMarker> } | null)?.detail;
-  return d && typeof d.id === "string" && ID.test(d.id) && typeof d.bytes === "number" && typeof d.type === "string" ? (d as DetailMarker) : null;
+  return d && typeof d.id === "string" && ID.test(d.id) && typeof d.bytes === "number" && typeof d.type === "string"
+    ? (d as DetailMarker)
+    : null;
 }
 
 function megabytes(bytes: number): string {
   return bytes >= 1024 * 1024 ? `${(bytes / (1024 * 1024)).toFixed(1)} MB` : `${Math.ceil(bytes / 1024)} KB`;
 }
 
-/// The value itself when small; otherwise its summary (the detail is written first).
-export function bounded(value: unknown): unknown {
+/// The value itself when small; otherwise its summary (the detail is written first): a
+/// Complex (maps: null) or a Str, both with the extra `detail` marker.
+export function bounded<T>(value: T): T {
   if (value === null || typeof value !== "object") return value;
   const threshold = limitValue("largeValueBytes");
   const json = JSON.stringify(value);
@@ -61,9 +64,9 @@ export function bounded(value: unknown): unknown {
     // The ranks and Betti table are small; the differentials are the bulk.
     const note = v.note ? `${v.note}; ${why}` : why;
     const text = `${head.length < (v.text ?? "").length ? head + "…" : head} (${why})`;
-    return { type, text, ranks: v.ranks, betti: v.betti, complete: v.complete, maps: null, note, ring: v.ring, detail };
+    return { type, text, ranks: v.ranks, betti: v.betti, complete: v.complete, maps: null, note, ring: v.ring, detail } as T;
   }
-  return { type: "Str", value: `${type}: ${why}`, text: `${head}… (${why})`, detail };
+  return { type: "Str", value: `${type}: ${why}`, text: `${head}… (${why})`, detail } as T;
 }
 
 /// The whole value back from a summary (inside a slot, for a later cell's bindings).

@@ -31,7 +31,9 @@ export type SlotOutcome = JobEnd & { outcome?: CellJobOutcome };
 /// Engine settings in force: lib/limits.ts, with the slot count following the machine when
 /// RINGSIDE_ENGINE_WORKERS is unset, and a user's cap one below it so one slot stays free.
 export function engineSettings() {
-  const slots = process.env.RINGSIDE_ENGINE_WORKERS ? limitValue("engineSlots") : Math.max(limitValue("engineSlots"), os.availableParallelism() - 1);
+  const slots = process.env.RINGSIDE_ENGINE_WORKERS
+    ? limitValue("engineSlots")
+    : Math.max(limitValue("engineSlots"), os.availableParallelism() - 1);
   const userRunning = process.env.RINGSIDE_USER_RUNNING ? limitValue("userRunning") : Math.max(limitValue("userRunning"), slots - 1);
   return {
     slots,

@@ -154,7 +154,13 @@ export class SlotPool {
 
   private stoppedEnd(job: Job, outcome?: unknown): JobEnd {
     if (job.stop === StopReason.TimeLimit) {
-      return { status: "limit", limit: "time", name: "cellTimeMs", message: `time limit of ${formatLimit("cellTimeMs", job.options.timeLimitMs)} reached (cellTimeMs)`, outcome };
+      return {
+        status: "limit",
+        limit: "time",
+        name: "cellTimeMs",
+        message: `time limit of ${formatLimit("cellTimeMs", job.options.timeLimitMs)} reached (cellTimeMs)`,
+        outcome,
+      };
     }
     return { status: "cancelled", outcome };
   }
@@ -230,9 +236,11 @@ export class SlotPool {
       } catch (error) {
         console.error("[ringside] a computation's event listener failed:", error);
       }
-    }
-    else if (message.type === "finished")
-      this.finish(job, job.stop === StopReason.None ? { status: "finished", outcome: message.outcome } : this.stoppedEnd(job, message.outcome));
+    } else if (message.type === "finished")
+      this.finish(
+        job,
+        job.stop === StopReason.None ? { status: "finished", outcome: message.outcome } : this.stoppedEnd(job, message.outcome),
+      );
     else this.finish(job, job.stop === StopReason.None ? { status: "crashed", message: message.message } : this.stoppedEnd(job));
   }
 
@@ -254,7 +262,12 @@ export class SlotPool {
               message: `memory limit of ${job.memoryKill} MB reached: the computation's resident memory grew past it (cellMemoryMb)`,
             }
           : heap
-            ? { status: "limit", limit: "memory", name: "cellHeapMb", message: `memory limit of ${this.options.heapLimitMb} MB of heap reached (cellHeapMb)` }
+            ? {
+                status: "limit",
+                limit: "memory",
+                name: "cellHeapMb",
+                message: `memory limit of ${this.options.heapLimitMb} MB of heap reached (cellHeapMb)`,
+              }
             : job.stop !== StopReason.None
               ? this.stoppedEnd(job)
               : { status: "crashed", message: "the engine slot stopped unexpectedly" },
@@ -303,7 +316,8 @@ export class SlotPool {
         restored = pid !== undefined && setThreadsPriority(pid, 0);
         slot.yielding = false;
       }
-      if (!slot.dead && (!restored || slot.served >= this.options.jobsPerSlot || (rss !== null && rss > this.options.memoryLimitMb / 2))) void this.kill(slot);
+      if (!slot.dead && (!restored || slot.served >= this.options.jobsPerSlot || (rss !== null && rss > this.options.memoryLimitMb / 2)))
+        void this.kill(slot);
     }
     job.slot = undefined;
     job.resolve(end);

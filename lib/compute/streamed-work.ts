@@ -2,6 +2,7 @@
 /// running one (Betti columns of a resolution, items of a comprehension) — kept by whoever
 /// runs it, so that a cancel, a limit or a lost server still stores the work done and says
 /// where it stopped ("stopped after homological degree 6").
+import type { ValueJson } from "../wire/values";
 import type { CellEvent, Span } from "./cell-events";
 
 type BettiEntry = readonly [number, number, number];
@@ -9,7 +10,7 @@ type BettiEntry = readonly [number, number, number];
 export interface StatementResult {
   statement: number;
   span: Span;
-  value: unknown;
+  value: ValueJson;
 }
 
 export class StreamedWork {
@@ -17,7 +18,7 @@ export class StreamedWork {
   spans: Span[] = [];
   private partialStatement: number | null = null;
   private betti = new Map<string, BettiEntry>();
-  private items: unknown[] = [];
+  private items: ValueJson[] = [];
   private version = 0;
   private savedVersion = -1;
 
@@ -70,9 +71,24 @@ export class StreamedWork {
       const entries = [...this.betti.values()].sort((a, b) => a[0] - b[0] || a[1] - b[1]);
       // The text follows the notation's Betti table text (lib/notation/text.ts).
       const text = `Betti numbers ${entries.map(([i, j, n]) => `β(${i},${j})=${n}`).join(", ")} (truncated: ${note})`;
-      return { statement, span, value: { type: "BettiTable", text, entries, complete: false, note } };
+      return {
+        statement,
+        span,
+        value: {
+          type: "BettiTable",
+          text,
+          entries: entries.map((e) => [e[0], e[1], e[2]] as [number, number, number]),
+          complete: false,
+          note,
+        },
+      };
     }
-    return { statement, span, value: { type: "List", text: `${this.items.length} items so far (${note})`, items: this.items, note } };
+    // (a List's encoding has no note field; its text says it is partial)
+    return {
+      statement,
+      span,
+      value: { type: "List", text: `${this.items.length} items so far (${note})`, items: this.items } as ValueJson,
+    };
   }
 
   /// The statements finished, with the running one's partial results, and where it stopped.

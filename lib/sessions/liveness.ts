@@ -75,10 +75,14 @@ async function beat(): Promise<void> {
       const ids = [...l.tracked.keys()];
       if (ids.length > 0) {
         await db().execute(sql`UPDATE cells SET heartbeat_at = now()
-          WHERE status = 'running' AND id IN (${sql.join(ids.map((id) => sql`${id}::uuid`), sql`, `)})`);
+          WHERE status = 'running' AND id IN (${sql.join(
+            ids.map((id) => sql`${id}::uuid`),
+            sql`, `,
+          )})`);
         for (const [id, t] of l.tracked) {
           const snap = t.snapshot();
-          if (snap !== null) await db().execute(sql`UPDATE cells SET result = ${JSON.stringify(snap)}::jsonb WHERE id = ${id}::uuid AND status = 'running'`);
+          if (snap !== null)
+            await db().execute(sql`UPDATE cells SET result = ${JSON.stringify(snap)}::jsonb WHERE id = ${id}::uuid AND status = 'running'`);
         }
       }
       await markOrphans();
@@ -113,7 +117,14 @@ export async function markOrphans(): Promise<number> {
       result = jsonb_set(COALESCE(result, '{}'::jsonb), '{stopped}',
         to_jsonb('stopped' || COALESCE(' after ' || (result->>'progress'), '') || ': the server running this cell stopped before it finished'::text))
     WHERE status = 'running' AND (
-      ${gone.length > 0 ? sql`id IN (${sql.join(gone.map((id) => sql`${id}::uuid`), sql`, `)}) OR` : sql``}
+      ${
+        gone.length > 0
+          ? sql`id IN (${sql.join(
+              gone.map((id) => sql`${id}::uuid`),
+              sql`, `,
+            )}) OR`
+          : sql``
+      }
       COALESCE(heartbeat_at, started_at, created_at) < now() - (${staleMs} || ' milliseconds')::interval)
     RETURNING id`);
   return rows.length;

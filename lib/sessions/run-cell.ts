@@ -9,6 +9,7 @@ import { StreamedWork } from "@/lib/compute/streamed-work";
 import type { CurrentUser } from "@/lib/auth/types";
 import { HttpError } from "@/lib/http/errors";
 import { limitValue } from "@/lib/limits";
+import type { CellEvent as StreamEvent } from "@/lib/wire/cells";
 import { registerRunningCell } from "./cancel-channel";
 import { ENGINE_VERSION } from "./engine-version";
 import { serverId, trackRunningCell } from "./liveness";
@@ -61,7 +62,7 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
   const stream = new ReadableStream<Uint8Array>({
     async start(controller) {
       let open = true;
-      const send = (event: Record<string, unknown>) => {
+      const send = (event: StreamEvent) => {
         if (!open) return;
         try {
           controller.enqueue(encoder.encode(JSON.stringify(event) + "\n"));
@@ -122,10 +123,16 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
           send({ event: "error", statement: running, error: reported });
         }
         const final = failure as ErrorValue | null;
-        const status: CellOutcome["status"] = end.status === "cancelled" || final?.kind === "cancelled" ? "cancelled" : final ? "error" : "done";
+        const status: CellOutcome["status"] =
+          end.status === "cancelled" || final?.kind === "cancelled" ? "cancelled" : final ? "error" : "done";
         // A cancel or a limit keeps the work done: finished statements and the running one's
         // partial results, with where it stopped.
-        const stoppedWhy = final && (final.kind === "cancelled" || final.kind === "limit") ? (final.kind === "cancelled" ? "cancelled" : final.message) : null;
+        const stoppedWhy =
+          final && (final.kind === "cancelled" || final.kind === "limit")
+            ? final.kind === "cancelled"
+              ? "cancelled"
+              : final.message
+            : null;
         const kept = stoppedWhy ? work.stored(stoppedWhy) : null;
         const durationMs = performance.now() - started;
         const outcome: CellOutcome = {
@@ -145,7 +152,13 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
         }
         const saved = await saveWithRetries(cell, user, outcome);
         if (saved) {
-          send({ event: "done", status, ...(outcome.stopped ? { stopped: outcome.stopped } : {}), timings: { totalMs: Math.round(durationMs) }, objects: saved.map(objectView) });
+          send({
+            event: "done",
+            status,
+            ...(outcome.stopped ? { stopped: outcome.stopped } : {}),
+            timings: { totalMs: Math.round(durationMs) },
+            objects: saved.map(objectView),
+          });
         } else {
           send({ event: "error", statement: null, error: errorValue("runtime", "the result could not be saved", WHOLE_CELL) });
           send({ event: "done", status: "error", timings: { totalMs: Math.round(durationMs) }, objects: [] });

@@ -44,9 +44,19 @@ async function run(job: CellJob): Promise<CellEvent[]> {
 describe("large values", () => {
   it("are sent as a summary with the Betti table and a detail marker; the detail holds the whole value", async () => {
     // The Koszul complex of 7 variables: ranks C(7, i) (common practice).
-    const events = await run({ source: "S := GF(32003)[a, b, c, d, e, f, g]\nC := resolve(S / S.maximal)", bindings: [], currentRing: null });
+    const events = await run({
+      source: "S := GF(32003)[a, b, c, d, e, f, g]\nC := resolve(S / S.maximal)",
+      bindings: [],
+      currentRing: null,
+    });
     const result = events.find((e) => e.event === "result" && e.statement === 1) as Extract<CellEvent, { event: "result" }>;
-    const value = result.value as { type: string; ranks: number[]; maps: unknown; detail: { id: string; bytes: number; type: string }; note: string };
+    const value = result.value as unknown as {
+      type: string;
+      ranks: number[];
+      maps: unknown;
+      detail: { id: string; bytes: number; type: string };
+      note: string;
+    };
     expect(value.type).toBe("Complex");
     expect(value.ranks).toEqual([1, 7, 21, 35, 35, 21, 7, 1]);
     expect(value.maps).toBeNull();
@@ -61,7 +71,7 @@ describe("large values", () => {
     expect(whole.ranks).toEqual(value.ranks);
     // The binding carries the same summary (one file for both).
     const bound = events.filter((e) => e.event === "bound" && e.name === "C").at(-1) as Extract<CellEvent, { event: "bound" }>;
-    expect((bound.value as { detail: { id: string } }).detail.id).toBe(value.detail.id);
+    expect((bound.value as unknown as { detail: { id: string } }).detail.id).toBe(value.detail.id);
 
     // A later cell uses the summarized binding: its differentials come back from the detail.
     const ring = events.filter((e) => e.event === "bound" && e.name === "S").at(-1) as Extract<CellEvent, { event: "bound" }>;

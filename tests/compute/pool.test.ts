@@ -79,7 +79,9 @@ describe("SlotPool (engine slots as child processes)", () => {
     const handle = pool.submit({ kind: "poll-pid" }, opts({ onEvent: (e) => (pid = (e as { pid: number }).pid) }));
     await new Promise((r) => setTimeout(r, 1800));
     expect(pid).toBeGreaterThan(0);
-    const nices = readdirSync(`/proc/${pid}/task`).map((tid) => Number(readFileSync(`/proc/${pid}/task/${tid}/stat`, "utf8").split(") ")[1]!.split(" ")[16]));
+    const nices = readdirSync(`/proc/${pid}/task`).map((tid) =>
+      Number(readFileSync(`/proc/${pid}/task/${tid}/stat`, "utf8").split(") ")[1]!.split(" ")[16]),
+    );
     expect(nices.length).toBeGreaterThan(1);
     expect(new Set(nices)).toEqual(new Set([10]));
     handle.cancel();

@@ -3,14 +3,21 @@
 /// so far) and where it stopped, in words.
 import { describe, expect, it } from "vitest";
 import { StreamedWork } from "../../lib/compute/streamed-work";
-import type { CellEvent, Span } from "../../lib/compute/cell-events";
+import type { CellEvent as TypedEvent, Span } from "../../lib/compute/cell-events";
+
+// Events as plain data (values abbreviated: only what StreamedWork reads).
+type CellEvent = TypedEvent | { event: "result" | "partial"; statement: number; span?: Span; value: unknown };
 
 const span = (line: number): Span => ({ from: { line, col: 1 }, to: { line, col: 5 } });
-const column = (i: number, entries: [number, number][]) => ({ type: "BettiTable", entries: entries.map(([j, b]) => [i, j, b]), complete: false });
+const column = (i: number, entries: [number, number][]) => ({
+  type: "BettiTable",
+  entries: entries.map(([j, b]) => [i, j, b]),
+  complete: false,
+});
 
 function fed(events: CellEvent[]): StreamedWork {
   const w = new StreamedWork();
-  for (const e of events) w.observe(e);
+  for (const e of events) w.observe(e as TypedEvent);
   return w;
 }
 
@@ -23,7 +30,14 @@ describe("StreamedWork", () => {
       { event: "result", statement: 1, span: span(2), value: { type: "Ring", text: "R" } },
       { event: "partial", statement: 2, value: column(0, [[0, 1]]) },
       { event: "partial", statement: 2, value: column(1, [[1, 3]]) },
-      { event: "partial", statement: 2, value: column(2, [[2, 3], [3, 10]]) },
+      {
+        event: "partial",
+        statement: 2,
+        value: column(2, [
+          [2, 3],
+          [3, 10],
+        ]),
+      },
     ]);
     const kept = w.stored("memory limit of 220 MB reached (cellMemoryMb)");
     expect(kept.stopped).toBe("stopped after homological degree 2: memory limit of 220 MB reached (cellMemoryMb)");
@@ -36,7 +50,9 @@ describe("StreamedWork", () => {
       [2, 2, 3],
       [2, 3, 10],
     ]);
-    expect(table.text).toMatch(/^Betti numbers β\(0,0\)=1, β\(1,1\)=3, β\(2,2\)=3, β\(2,3\)=10 \(truncated: stopped after homological degree 2/);
+    expect(table.text).toMatch(
+      /^Betti numbers β\(0,0\)=1, β\(1,1\)=3, β\(2,2\)=3, β\(2,3\)=10 \(truncated: stopped after homological degree 2/,
+    );
     expect(kept.statements[2]!.span).toEqual(span(3));
   });
 
@@ -66,7 +82,7 @@ describe("StreamedWork", () => {
     ]);
     expect(w.snapshot()).toMatchObject({ progress: "homological degree 0" });
     expect(w.snapshot()).toBeNull();
-    w.observe({ event: "result", statement: 0, span: span(1), value: { type: "Complex", text: "C" } });
+    w.observe({ event: "result", statement: 0, span: span(1), value: { type: "Complex", text: "C" } } as unknown as TypedEvent);
     expect(w.snapshot()).toEqual({ statements: [{ statement: 0, span: span(1), value: { type: "Complex", text: "C" } }], progress: null });
   });
 });

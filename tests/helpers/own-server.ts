@@ -22,7 +22,11 @@ function freePort(): Promise<number> {
 }
 
 function bash(script: string, env: Record<string, string> = {}): string {
-  return execFileSync("bash", ["-c", `source lib/ops/common.sh\n${script}`], { cwd: ROOT, env: { ...process.env, ...env }, encoding: "utf8" });
+  return execFileSync("bash", ["-c", `source lib/ops/common.sh\n${script}`], {
+    cwd: ROOT,
+    env: { ...process.env, ...env },
+    encoding: "utf8",
+  });
 }
 
 export class OwnServer {
@@ -55,7 +59,11 @@ export class OwnServer {
     bash(`pg_up "${dir}/pg" ${pgPort} "${dir}/pg-password" "-c fsync=off -c synchronous_commit=off -c full_page_writes=off" >/dev/null 2>&1
 ensure_database ${pgPort} "${dir}/pg-password" ringside_own >/dev/null 2>&1`);
     const own = new OwnServer(dir, pgPort, webPort, env);
-    execFileSync("node", ["--import", "tsx", "db/migrate.ts"], { cwd: ROOT, env: { ...process.env, DATABASE_URL: own.databaseUrl }, stdio: "ignore" });
+    execFileSync("node", ["--import", "tsx", "db/migrate.ts"], {
+      cwd: ROOT,
+      env: { ...process.env, DATABASE_URL: own.databaseUrl },
+      stdio: "ignore",
+    });
     writeFileSync(path.join(dir, "secret"), "own-server-secret-" + process.pid);
     await own.startServer();
     return own;
@@ -136,7 +144,10 @@ ensure_database ${pgPort} "${dir}/pg-password" ringside_own >/dev/null 2>&1`);
 
   pgLog(): string {
     try {
-      return readFileSync(path.join(this.dir, "pg", "server.log"), "utf8").split("\n").slice(-30).join("\n");
+      return readFileSync(path.join(this.dir, "pg", "server.log"), "utf8")
+        .split("\n")
+        .slice(-30)
+        .join("\n");
     } catch {
       return "";
     }
@@ -165,7 +176,10 @@ ensure_database ${pgPort} "${dir}/pg-password" ringside_own >/dev/null 2>&1`);
 
 function childPids(pid: number): number[] {
   try {
-    return execFileSync("pgrep", ["-P", String(pid)], { encoding: "utf8" }).split("\n").filter(Boolean).map(Number);
+    return execFileSync("pgrep", ["-P", String(pid)], { encoding: "utf8" })
+      .split("\n")
+      .filter(Boolean)
+      .map(Number);
   } catch {
     return [];
   }

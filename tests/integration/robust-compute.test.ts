@@ -75,7 +75,11 @@ async function until<T>(what: string, probe: () => Promise<T | undefined | null 
 
 /// Earlier tests' cells have ended (so the user's cap and queue are free again).
 async function noCellRunning(): Promise<void> {
-  await until("every earlier cell to end", async () => (await db().select({ id: cells.id }).from(cells).where(eq(cells.status, "running"))).length === 0, 120_000);
+  await until(
+    "every earlier cell to end",
+    async () => (await db().select({ id: cells.id }).from(cells).where(eq(cells.status, "running"))).length === 0,
+    120_000,
+  );
 }
 
 async function cellRow(id: string) {
@@ -126,7 +130,15 @@ describe("no user can take the server down", () => {
       // Once the heavy cells are in (two computing, one waiting: the user's cap is 2)…
       await until("the heavy cells to be accepted", async () => accepted.length === 3);
       await until("a heavy cell to be computing", async () => {
-        const rows = await db().select().from(cells).where(sql`${cells.id} IN (${sql.join(accepted.map((id) => sql`${id}::uuid`), sql`, `)})`);
+        const rows = await db()
+          .select()
+          .from(cells)
+          .where(
+            sql`${cells.id} IN (${sql.join(
+              accepted.map((id) => sql`${id}::uuid`),
+              sql`, `,
+            )})`,
+          );
         return rows.some((r) => r.status === "running");
       });
       // …another user's cell is served by the slot kept free, at once.
@@ -137,7 +149,15 @@ describe("no user can take the server down", () => {
       expect(quick.find((e) => e.event === "result")?.value).toMatchObject({ type: "Int", value: "2" });
       expect(elapsed).toBeLessThan(2000);
       // It finished while the heavy ones were still computing.
-      const stillRunning = await db().select().from(cells).where(sql`${cells.id} IN (${sql.join(accepted.map((id) => sql`${id}::uuid`), sql`, `)}) AND ${cells.status} = 'running'`);
+      const stillRunning = await db()
+        .select()
+        .from(cells)
+        .where(
+          sql`${cells.id} IN (${sql.join(
+            accepted.map((id) => sql`${id}::uuid`),
+            sql`, `,
+          )}) AND ${cells.status} = 'running'`,
+        );
       expect(stillRunning.length).toBeGreaterThan(0);
 
       const ends = await Promise.all(runs);
@@ -152,7 +172,10 @@ describe("no user can take the server down", () => {
       for (const id of accepted) {
         const row = (await cellRow(id))!;
         expect(row.status).toBe("error");
-        const result = row.result as { stopped?: string; statements: { value: { type: string; entries?: number[][]; complete?: boolean } }[] };
+        const result = row.result as {
+          stopped?: string;
+          statements: { value: { type: string; entries?: number[][]; complete?: boolean } }[];
+        };
         expect(result.stopped).toMatch(/^stopped (after homological degree \d+|in statement \d+ of \d+): memory limit of/);
         if (row.source.includes("S.maximal^3") && /after homological degree/.test(result.stopped!)) {
           const partial = result.statements.at(-1)!.value;
@@ -259,7 +282,10 @@ describe("no cell stays running", () => {
       const degree = /^homological degree (\d+)/.exec((row?.result as { progress?: string } | null)?.progress ?? "");
       return row?.status === "running" && degree !== null && Number(degree[1]) >= 2;
     });
-    const slots = execFileSync("bash", ["-c", `pgrep -P ${own.serverPid} || true`], { encoding: "utf8" }).split("\n").filter(Boolean).map(Number);
+    const slots = execFileSync("bash", ["-c", `pgrep -P ${own.serverPid} || true`], { encoding: "utf8" })
+      .split("\n")
+      .filter(Boolean)
+      .map(Number);
     expect(slots.length).toBeGreaterThan(0);
     await own.killServer();
     expect((await cellRow(cellId))!.status).toBe("running");
@@ -267,10 +293,14 @@ describe("no cell stays running", () => {
     await until("the slot processes to exit", async () => slots.every((pid) => !processAlive(pid)), 10_000);
 
     await own.startServer();
-    const row = await until("the cell to be marked", async () => {
-      const r = await cellRow(cellId);
-      return r?.status !== "running" ? r : undefined;
-    }, 10_000);
+    const row = await until(
+      "the cell to be marked",
+      async () => {
+        const r = await cellRow(cellId);
+        return r?.status !== "running" ? r : undefined;
+      },
+      10_000,
+    );
     expect(row!.status).toBe("interrupted");
     const result = row!.result as { stopped: string; statements: { value: { type: string; complete?: boolean; entries?: number[][] } }[] };
     expect(result.stopped).toMatch(/^stopped after homological degree \d+: the server running this cell stopped/);
@@ -283,7 +313,9 @@ describe("no cell stays running", () => {
     const entries = result.statements[2]!.value.entries!;
     const total = (i: number) => entries.filter((e) => e[0] === i).reduce((s, e) => s + e[2]!, 0);
     expect([total(0), total(1), total(2)]).toEqual([1, 3, 13]);
-    const listed = (await (await heavy.request(`/api/sessions/${session}/cells`)).json()) as { cells: { status: string; stopped: string }[] };
+    const listed = (await (await heavy.request(`/api/sessions/${session}/cells`)).json()) as {
+      cells: { status: string; stopped: string }[];
+    };
     expect(listed.cells[0]).toMatchObject({ status: "interrupted" });
     expect(listed.cells[0]!.stopped).toMatch(/^stopped after homological degree/);
   });
@@ -297,7 +329,15 @@ describe("no cell stays running", () => {
     // A cell this very server lost (as after a save that kept failing): fresh heartbeat, not tracked.
     const [orphan] = await db()
       .insert(cells)
-      .values({ sessionId: session, position: 1, source: "2 + 2", status: "running", startedAt: new Date(), serverId, heartbeatAt: new Date() })
+      .values({
+        sessionId: session,
+        position: 1,
+        source: "2 + 2",
+        status: "running",
+        startedAt: new Date(),
+        serverId,
+        heartbeatAt: new Date(),
+      })
       .returning();
     const cancel = await heavy.request(`/api/sessions/${session}/cells/${orphan!.id}/cancel`, { method: "POST" });
     expect(cancel.status).toBe(200);

@@ -27,5 +27,11 @@ export const GET = route(async (req, { params }: Context) => {
     throw notFound("The value's detail");
   }
   const body = Readable.toWeb(createReadStream(file)) as ReadableStream<Uint8Array>;
-  return new Response(body, { headers: { "content-type": "application/json; charset=utf-8", "content-length": String(size), "cache-control": "private, max-age=3600" } });
+  return new Response(body, {
+    headers: {
+      "content-type": "application/json; charset=utf-8",
+      "content-length": String(size),
+      "cache-control": "private, max-age=3600",
+    },
+  });
 });
