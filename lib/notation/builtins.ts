@@ -34,6 +34,7 @@ import {
   variable,
   type HilbertSeries,
   type Poly,
+  type Rat,
 } from "../algebra/index";
 import { reduceIn, ringOfOperands, toPoly } from "./coerce";
 import { limit, runtime } from "./errors";
@@ -90,11 +91,11 @@ function variableIndex(r: RingValue, f: Poly, span: Span): number {
 }
 
 /// A polynomial in t with the given rational coefficients, in Q[t].
-function tPoly(c: CallContext, coeffs: readonly { num: bigint; den: bigint }[]): Value {
+function tPoly(c: CallContext, coeffs: readonly Rat[]): Value {
   const R = c.interp.session.rings.polynomialRing(QQ, ["t"]);
   let f = constant(R.poly, 0n);
   coeffs.forEach((q, i) => {
-    if (q.num !== 0n) f = addPoly(R, f, monomial(R.poly, [i], q.num, q.den));
+    if (q.n !== 0n) f = addPoly(R, f, monomial(R.poly, [i], q.n, q.d));
   });
   return { type: "Poly", ring: R, poly: f };
 }
@@ -225,9 +226,9 @@ function embeddingDimension(r: RingValue, c: CallContext): number {
   return n - (linear.length === 0 ? 0 : groebnerBasis(r.poly, linear, opts(c)).length);
 }
 
-function integerDegree(d: { num: bigint; den: bigint }, c: CallContext): Value {
-  if (d.den !== 1n) throw runtime(`the degree is ${d.num}/${d.den}, not an integer, in this weighted grading`, c.span);
-  return Int(d.num);
+function integerDegree(q: Rat, c: CallContext): Value {
+  if (q.d !== 1n) throw runtime(`the degree is ${q.n}/${q.d}, not an integer, in this weighted grading`, c.span);
+  return Int(q.n);
 }
 
 const PROPERTY_IMPLS: Record<string, PropertyImpl> = {
@@ -290,7 +291,7 @@ const PROPERTY_IMPLS: Record<string, PropertyImpl> = {
     const A = v as Extract<Value, { type: "Matrix" }>;
     return idealValue(A.ring, A.rows.flat());
   },
-  "HilbertSeries.numerator": (v, _a, c) => tPoly(c, series(v).numerator.map((num) => ({ num, den: 1n }))),
+  "HilbertSeries.numerator": (v, _a, c) => tPoly(c, series(v).numerator.map((n) => ({ n, d: 1n }))),
   "HilbertSeries.denominator": (v, _a, c) => {
     const R = c.interp.session.rings.polynomialRing(QQ, ["t"]);
     const f = series(v).weights.reduce((acc, w) => mul(R.poly, acc, sub(R.poly, one(R.poly), monomial(R.poly, [w]))), one(R.poly));

@@ -21,6 +21,7 @@ import {
   type HilbertSeries,
   type Poly,
   type Presentation,
+  type Rat,
   type Resolution,
 } from "../algebra/index";
 import type { CallContext } from "./context";
@@ -89,9 +90,9 @@ function hilbertOf(M: ModuleValue, c: CallContext, span: Span): Value {
   return { type: "HilbertSeries", series: hilbertShifted(M, c) };
 }
 
-function integerOf(q: { num: bigint; den: bigint }, span: Span, what: string): Value {
-  if (q.den !== 1n) throw runtime(`the ${what} is ${q.num}/${q.den}, not an integer, in this weighted grading`, span);
-  return Int(q.num);
+function integerOf(q: Rat, span: Span, what: string): Value {
+  if (q.d !== 1n) throw runtime(`the ${what} is ${q.n}/${q.d}, not an integer, in this weighted grading`, span);
+  return Int(q.n);
 }
 
 /// The minimal graded free resolution of M over S (M over a polynomial ring), cached per module.

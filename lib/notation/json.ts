@@ -5,7 +5,7 @@
 import { z } from "zod";
 import { formatHilbertDenominator, formatPoly, hilbertSeriesFromNumerator, parsePoly, type Poly } from "../algebra/index";
 import { parseDenominator } from "./series-text";
-import { parseRational, ratToString } from "../algebra/index";
+import { parseRat, ratToString } from "../algebra/index";
 import { RingRegistry, parseField, parseOrder } from "./rings";
 import { fieldText, orderText, ringText, valueText } from "./text";
 import type {
@@ -202,7 +202,7 @@ function decodeValidated(j: ValueJson, ctx: DecodeContext): Value {
     case "Int":
       return { type: "Int", value: BigInt(j.value), ...(j.note !== undefined ? { note: j.note } : {}) };
     case "Rat":
-      return { type: "Rat", value: parseRational(j.value) ?? fail("Rat", `bad value ${j.value}`) };
+      return { type: "Rat", value: parseRat(j.value) ?? fail("Rat", `bad value ${j.value}`) };
     case "Bool":
       return { type: "Bool", value: j.value };
     case "Str":

@@ -1,7 +1,7 @@
 /// Runtime values of the notation, one variant per type of notation.md §8.
 /// Engine objects (rings, polynomials) are wrapped, never copied; numbers are exact.
 import type { Field, HilbertSeries, Poly, PolyRing } from "../algebra/index";
-import type { Rational } from "../algebra/index";
+import type { Rat } from "../algebra/index";
 
 /// A ring of the notation: a polynomial ring S (its field, variables, degrees, order)
 /// together with a defining ideal of S; the ideal is empty for S itself.
@@ -135,7 +135,7 @@ export interface TableValue {
 export type Value =
   /// `note`: how the number was found when that matters (a random choice); shown in the text
   | { readonly type: "Int"; readonly value: bigint; readonly note?: string }
-  | { readonly type: "Rat"; readonly value: Rational }
+  | { readonly type: "Rat"; readonly value: Rat }
   | { readonly type: "Bool"; readonly value: boolean }
   | { readonly type: "Str"; readonly value: string }
   | { readonly type: "Field"; readonly field: Field }

@@ -3,7 +3,7 @@
 import { describe, expect, it } from "vitest";
 import { QQ, gf, hilbertSeriesFromNumerator, parsePoly } from "@/lib/algebra/index";
 import { DecodeError, ValueJson, ValueJsonSchemas, decodeValue, encodeValue, type ValueJson as Json } from "@/lib/notation/json";
-import { rational } from "@/lib/algebra";
+import { ratOf } from "@/lib/algebra";
 import { RingRegistry } from "@/lib/notation/rings";
 import type { FunctionValue, RingValue, Value } from "@/lib/notation/values";
 
@@ -27,7 +27,7 @@ describe("§9 encoding of each type", () => {
   it("Int and Rat: value is a decimal string", () => {
     expect(roundTrip({ type: "Int", value: 42n })).toEqual({ type: "Int", text: "42", value: "42" });
     expect(roundTrip({ type: "Int", value: -(10n ** 30n) })).toEqual({ type: "Int", text: `-1${"0".repeat(30)}`, value: `-1${"0".repeat(30)}` });
-    expect(roundTrip({ type: "Rat", value: rational(3n, -4n) })).toEqual({ type: "Rat", text: "-3/4", value: "-3/4" });
+    expect(roundTrip({ type: "Rat", value: ratOf(3n, -4n) })).toEqual({ type: "Rat", text: "-3/4", value: "-3/4" });
   });
 
   it("Bool and Str carry value", () => {

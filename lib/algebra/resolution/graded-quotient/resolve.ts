@@ -453,7 +453,7 @@ function topDegreeOf(S: PolyRing, J: Ideal, P: ModulePresentation, opts?: Comput
   for (let q = 0; q < cols; q++) gens.push(P.rows.map((row) => row[q]));
   for (const g of idealGroebnerBasis(J)) for (let p = 0; p < r; p++) gens.push(P.degrees.map((_, k) => (k === p ? g : zero(S))));
   const hs = moduleHilbertSeries(freeModule(S, P.degrees), gens, opts);
-  if (hilbertPolynomial(hs).some((c) => c.num !== 0n)) return null;
+  if (hilbertPolynomial(hs).some((c) => c.n !== 0n)) return null;
   let top = -1;
   const N = hs.numerator.length + 1;
   hilbertFunctionValues(hs, N, opts).forEach((v, d) => {
