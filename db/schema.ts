@@ -23,7 +23,9 @@ export const teamRole = pgEnum("team_role", ["lead", "member", "guest"]);
 /// Who sees a session besides its owner and its shares: nobody else, or its team. A published
 /// read-only link is separate (`shareToken` not null) and never opens the session to the team.
 export const visibility = pgEnum("visibility", ["private", "team"]);
-export const cellStatus = pgEnum("cell_status", ["pending", "running", "done", "error", "cancelled"]);
+/// `interrupted`: the server running the cell stopped (or lost it) before it finished; the
+/// cell keeps what had streamed.
+export const cellStatus = pgEnum("cell_status", ["pending", "running", "done", "error", "cancelled", "interrupted"]);
 export const shareRole = pgEnum("share_role", ["viewer", "editor"]);
 export const invitationStatus = pgEnum("invitation_status", ["pending", "accepted", "revoked", "expired"]);
 
@@ -118,11 +120,15 @@ export const cells = pgTable(
     finishedAt: timestamp("finished_at", { withTimezone: true }),
     durationMs: integer("duration_ms"),
     engineVersion: text("engine_version"),
+    /// the server process running the cell ("host/pid/boot nonce") and its last sign of life
+    serverId: text("server_id"),
+    heartbeatAt: timestamp("heartbeat_at", { withTimezone: true }),
     createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
     createdAt: createdAt(),
   },
   (t) => [
     unique("cells_session_position_unique").on(t.sessionId, t.position),
+    index("cells_running_idx").on(t.status).where(sql`${t.status} = 'running'`),
     check("cells_position_nonnegative", sql`${t.position} >= 0`),
     check("cells_duration_nonnegative", sql`${t.durationMs} IS NULL OR ${t.durationMs} >= 0`),
   ],

@@ -2,6 +2,7 @@
 /// environment of bindings, gives every expression a type from the signature table,
 /// and reports every misuse with where, what was expected, what was found and the
 /// obvious fix. Never throws on any AST the parser produces.
+import { LIMIT_TABLE } from "../lib/limits";
 import type * as A from "./ast";
 import type { Analysis, Diagnostic, Env, NameResolution, SubscriptInfo } from "./analysis";
 import type { ParseResult } from "./parser";
@@ -32,11 +33,11 @@ import {
 } from "./types";
 
 /// Literal exponents above this are refused before anything runs.
-export const MAX_LITERAL_EXPONENT = 1_000_000n;
+export const MAX_LITERAL_EXPONENT = BigInt(LIMIT_TABLE.literalExponent.value);
 const MAX_PRIME = 2n ** 31n;
 const MAX_LAMBDA_DEPTH = 8;
 /// Deeper expressions are refused rather than risking the call stack.
-const MAX_DEPTH = 1000;
+const MAX_DEPTH = LIMIT_TABLE.expressionNesting.value;
 
 const constantIndex = new Map(CONSTANTS.map((c) => [c.name, c]));
 const functionNames = FUNCTIONS.map((f) => f.name);

@@ -155,7 +155,7 @@ function shiftPolynomial(p: readonly Rat[], s: number): Rat[] {
 function hilbertDegree(v: Value, span: Span, c: CallContext): number {
   if (v.type !== "Int") throw runtime(`expected an Int degree, got ${v.type}`, span);
   const max = c.interp.session.limits.maxHilbertDegree;
-  if (v.value > BigInt(max)) throw limit(`degree ${v.value} is beyond the limit ${max}`, span);
+  if (v.value > BigInt(max)) throw limit(`degree ${v.value} is beyond the limit ${max}`, span, "hilbertDegree");
   // below the lowest generator degree every value is 0; clamping keeps the number small
   return Number(v.value < -(1n << 30n) ? -(1n << 30n) : v.value);
 }

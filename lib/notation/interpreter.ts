@@ -168,7 +168,7 @@ export class Interpreter implements Evaluator {
     const to = this.int(b, span);
     const n = to >= from ? to - from + 1n : 0n;
     if (n > BigInt(this.session.limits.maxListLength)) {
-      throw limit(`the range ${from}..${to} has ${n} items, beyond the limit ${this.session.limits.maxListLength}`, span);
+      throw limit(`the range ${from}..${to} has ${n} items, beyond the limit ${this.session.limits.maxListLength}`, span, "listLength");
     }
     const items: Value[] = [];
     for (let k = from; k <= to; k++) items.push({ type: "Int", value: k });
@@ -181,7 +181,7 @@ export class Interpreter implements Evaluator {
     const loop = (clauses: readonly ForClause[], scope: Scope): void => {
       if (clauses.length === 0) {
         if (out.length >= this.session.limits.maxListLength) {
-          throw limit(`the comprehension has more than ${this.session.limits.maxListLength} items`, e.span);
+          throw limit(`the comprehension has more than ${this.session.limits.maxListLength} items`, e.span, "listLength");
         }
         const v = this.eval(e.element, { ...f, scope });
         out.push(v);
@@ -222,7 +222,7 @@ export class Interpreter implements Evaluator {
         if (args.length !== params.length) {
           throw runtime(`the function ${text} takes ${params.length} argument(s), got ${args.length}`, e.span);
         }
-        if (depth > this.session.limits.maxCallDepth) throw limit(`calls nested deeper than ${this.session.limits.maxCallDepth}`, e.span);
+        if (depth > this.session.limits.maxCallDepth) throw limit(`calls nested deeper than ${this.session.limits.maxCallDepth}`, e.span, "callDepth");
         const scope = Scope.EMPTY.with(captures).with(params.map((p, i) => [p, args[i]] as [string, Value]));
         return this.eval(e.body, { scope, ring, depth: depth + 1, source });
       },
