@@ -197,3 +197,14 @@ export {
   type QuotientResolution,
   type ResolveRequest,
 } from "./local";
+
+// Families of examples for experiments (notation.md §11)
+export {
+  SeededRandom,
+  monomialsOfDegree,
+  randomIdealGenerators,
+  monomialIdeals,
+  Q_COEFF_BOUND,
+  type RandomIdealSpec,
+  type MonomialIdealSpec,
+} from "./families/index";

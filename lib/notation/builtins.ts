@@ -43,6 +43,7 @@ import { addValues } from "./operators";
 import { HOMOLOGY_FUNCTIONS, MODULE_PROPERTIES } from "./homology";
 import { MODULE_FUNCTIONS, RESIDUE_PROPERTY } from "./modules";
 import { pendingError } from "./pending";
+import { FAMILY_FUNCTIONS, FAMILY_PROPERTIES } from "./families";
 import { COMPLEX_PROPERTIES, resolveValue } from "./resolutions";
 import { QUOTIENT_FUNCTIONS, QUOTIENT_PROPERTIES } from "./quotients";
 import { valueType } from "./value-type";
@@ -186,6 +187,7 @@ const FUNCTION_IMPLS: Record<string, FunctionImpl> = {
   ...MODULE_FUNCTIONS,
   ...HOMOLOGY_FUNCTIONS,
   ...QUOTIENT_FUNCTIONS,
+  ...FAMILY_FUNCTIONS,
 };
 
 function matrixArg(v: Value, span: Span): Extract<Value, { type: "Matrix" }> {
@@ -329,6 +331,7 @@ const PROPERTY_IMPLS: Record<string, PropertyImpl> = {
   ...RESIDUE_PROPERTY,
   ...MODULE_PROPERTIES,
   ...QUOTIENT_PROPERTIES,
+  ...FAMILY_PROPERTIES,
 };
 
 /// Keys of everything the evaluator implements (read by the pending-names test).

@@ -24,7 +24,8 @@ import { reduceIn, toPoly } from "./coerce";
 import { idealValue } from "./ideals";
 import { freeNames } from "./free-names";
 import { valueText } from "./text";
-import { list, type FunctionValue, type RingValue, type Value } from "./values";
+import { list, type FamilyValue, type FunctionValue, type RingValue, type Value } from "./values";
+import { familyIndex } from "./families";
 
 /// Everything one evaluation shares: rings, session bindings, the current ring, the
 /// engine's compute options (signal, progress) and the limits.
@@ -38,6 +39,12 @@ export interface Session {
   analysis: Analysis | null;
   /// streams a piece of the running statement's value (e.g. one finished Betti column)
   readonly partial?: (value: Value) => void;
+  /// present when sweeps may become background experiments (set by the server, never by
+  /// the CLI): families longer than inlineMax, or `background = true`, go to `start`
+  readonly experiments?: {
+    readonly inlineMax: number;
+    start(family: FamilyValue, probe: FunctionValue, span: Span): Value;
+  };
 }
 
 /// Where evaluation is: the scope of locals and the ring literals are read in.
@@ -287,8 +294,9 @@ export class Interpreter {
       if (info.vars.length === 0) throw runtime("a polynomial ring needs at least one variable", e.span);
       return this.session.rings.polynomialRing(obj.field, info.vars, { order, ...(degrees ? { degrees } : {}) });
     }
-    if (obj.type !== "List") throw runtime(`only a List can be indexed, got ${obj.type}`, e.span);
+    if (obj.type !== "List" && obj.type !== "Family") throw runtime(`only a List or a Family can be indexed, got ${obj.type}`, e.span);
     if (e.items.length !== 1) throw runtime("an index is one integer: xs[i]", e.span);
+    if (obj.type === "Family") return familyIndex(obj, this.int(this.eval(e.items[0], f), e.items[0].span), e.items[0].span);
     const i = this.int(this.eval(e.items[0], f), e.items[0].span);
     if (i < 0n || i >= BigInt(obj.items.length)) {
       throw runtime(`index ${i} is out of range: the list has ${obj.items.length} item(s), indices 0…${obj.items.length - 1}`, e.items[0].span);
