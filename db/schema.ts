@@ -263,6 +263,8 @@ export const experiments = pgTable(
     /// {timeLimitMs, heapLimitMb} applied to every member
     limits: jsonb("limits").notNull(),
     total: integer("total").notNull(),
+    /// the probe's field names in the order written, from the first ok row (null before it)
+    columns: jsonb("columns"),
     sourceCellId: uuid("source_cell_id").references(() => cells.id, { onDelete: "set null" }),
     uploadId: uuid("upload_id").references(() => uploads.id, { onDelete: "set null" }),
     rerunOf: uuid("rerun_of"),
@@ -286,7 +288,7 @@ export const experimentRows = pgTable(
       .references(() => experiments.id, { onDelete: "cascade" }),
     memberIndex: integer("member_index").notNull(),
     status: experimentRowStatus("status").notNull(),
-    /// the probe's Record as [[name, §9 value], …] in the order written (jsonb objects lose order)
+    /// the probe's Record as {name: §9 value}; the column order is experiments.columns
     fields: jsonb("fields").notNull(),
     message: text("message"),
     durationMs: integer("duration_ms").notNull(),

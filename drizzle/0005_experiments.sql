@@ -30,6 +30,7 @@ CREATE TABLE "experiments" (
 	"engine_version" text NOT NULL,
 	"limits" jsonb NOT NULL,
 	"total" integer NOT NULL,
+	"columns" jsonb,
 	"source_cell_id" uuid,
 	"upload_id" uuid,
 	"rerun_of" uuid,

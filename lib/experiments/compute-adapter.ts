@@ -1,0 +1,94 @@
+/// The one place experiments reach the compute layer. Today it drives lib/compute's worker
+/// pool (bounded engine threads with the cells' time and heap limits); when lib/compute
+/// offers one slot function for cells and members, only this file changes.
+import os from "node:os";
+import path from "node:path";
+import { cellLimits } from "@/lib/compute/cell-pool";
+import { WorkerPool, type JobEnd } from "@/lib/compute/pool";
+import type { Binding } from "@/lib/notation/evaluate";
+import type { ExperimentJob, MemberOutcome, PlanOutcome, UploadOutcome } from "./experiment-job";
+
+export interface MemberLimits {
+  timeLimitMs: number;
+  heapLimitMb: number;
+}
+
+function numberFromEnv(name: string): number | undefined {
+  const v = Number(process.env[name]);
+  return Number.isFinite(v) && v > 0 ? v : undefined;
+}
+
+/// A member gets the cells' limits unless RINGSIDE_MEMBER_TIME_LIMIT_MS says otherwise.
+export function memberLimits(): MemberLimits {
+  const cell = cellLimits();
+  return { timeLimitMs: numberFromEnv("RINGSIDE_MEMBER_TIME_LIMIT_MS") ?? cell.timeLimitMs, heapLimitMb: cell.heapLimitMb };
+}
+
+const holder = globalThis as typeof globalThis & { __ringsideExperimentPool?: WorkerPool };
+
+/// Engine threads for this process's experiment work; `size` is fixed by the first caller
+/// (the worker's --concurrency; 1 plus planning headroom in the web server).
+export function experimentPool(size?: number): WorkerPool {
+  if (!holder.__ringsideExperimentPool) {
+    const root = process.env.RINGSIDE_ROOT ?? process.cwd();
+    holder.__ringsideExperimentPool = new WorkerPool({
+      entry: path.join(root, "lib", "experiments", "experiment-job.ts"),
+      size: size ?? Math.max(2, Math.min(4, os.availableParallelism() - 1)),
+      maxQueue: 256,
+      heapLimitMb: memberLimits().heapLimitMb,
+      graceMs: 3000,
+    });
+  }
+  return holder.__ringsideExperimentPool;
+}
+
+export async function closeExperimentPool(): Promise<void> {
+  const pool = holder.__ringsideExperimentPool;
+  holder.__ringsideExperimentPool = undefined;
+  await pool?.close();
+}
+
+/// Runs one member under the limits; a time or memory limit, a crash of the engine thread or
+/// a stop each become the row's status, never an exception.
+export async function runMember(probe: unknown, member: unknown, limits: MemberLimits, signal?: AbortSignal): Promise<MemberOutcome> {
+  const job: ExperimentJob = { kind: "member", probe, member };
+  const t0 = performance.now();
+  const handle = experimentPool().submit(job, { timeLimitMs: limits.timeLimitMs });
+  const onAbort = () => handle.cancel();
+  signal?.addEventListener("abort", onAbort, { once: true });
+  let end: JobEnd;
+  try {
+    end = await handle.done;
+  } finally {
+    signal?.removeEventListener("abort", onAbort);
+  }
+  const ms = Math.round(performance.now() - t0);
+  switch (end.status) {
+    case "finished":
+      return end.outcome as MemberOutcome;
+    case "limit":
+      return { kind: "member", status: "limit", fields: [], message: end.message, ms };
+    case "cancelled":
+      return { kind: "member", status: "cancelled", fields: [], message: "stopped", ms };
+    case "crashed":
+      return { kind: "member", status: "error", fields: [], message: `the engine stopped: ${end.message}`, ms };
+  }
+}
+
+/// Evaluates a program up to its first sweep and returns the family and probe (§9 JSON).
+export async function planSweep(source: string, bindings: Binding[], currentRing: string | null, timeLimitMs: number): Promise<PlanOutcome> {
+  const job: ExperimentJob = { kind: "plan", source, bindings, currentRing };
+  const end = await experimentPool().submit(job, { timeLimitMs }).done;
+  if (end.status === "finished") return end.outcome as PlanOutcome;
+  const message = end.status === "limit" ? end.message : end.status === "crashed" ? `the engine stopped: ${end.message}` : "stopped";
+  return { kind: "plan-error", error: { kind: end.status === "limit" ? "limit" : "runtime", message } };
+}
+
+/// Reads an uploaded family in an engine thread (the notation's checker and evaluator).
+export async function readUpload(ring: string, text: string, timeLimitMs: number): Promise<UploadOutcome> {
+  const job: ExperimentJob = { kind: "upload", ring, text };
+  const end = await experimentPool().submit(job, { timeLimitMs }).done;
+  if (end.status === "finished") return end.outcome as UploadOutcome;
+  const message = end.status === "limit" ? end.message : end.status === "crashed" ? `the engine stopped: ${end.message}` : "stopped";
+  return { kind: "upload-error", problems: [{ line: 0, message: `the upload could not be read: ${message}` }] };
+}
