@@ -24,28 +24,33 @@ export function memberLimits(): MemberLimits {
   return { timeLimitMs: numberFromEnv("RINGSIDE_MEMBER_TIME_LIMIT_MS") ?? cell.timeLimitMs, heapLimitMb: cell.heapLimitMb };
 }
 
-const holder = globalThis as typeof globalThis & { __ringsideExperimentPool?: WorkerPool };
+type Role = "members" | "requests";
+const holder = globalThis as typeof globalThis & { __ringsideExperimentPools?: Map<Role, WorkerPool> };
 
-/// Engine threads for this process's experiment work; `size` is fixed by the first caller
-/// (the worker's --concurrency; 1 plus planning headroom in the web server).
-export function experimentPool(size?: number): WorkerPool {
-  if (!holder.__ringsideExperimentPool) {
+/// Engine threads for experiment work, two pools per process: "members" (sized by the
+/// worker's concurrency, fixed by the first caller) and "requests" (reading uploads and
+/// planning sweeps for the API, so a long member never delays a request).
+export function experimentPool(role: Role = "members", size?: number): WorkerPool {
+  const pools = (holder.__ringsideExperimentPools ??= new Map());
+  let pool = pools.get(role);
+  if (!pool) {
     const root = process.env.RINGSIDE_ROOT ?? process.cwd();
-    holder.__ringsideExperimentPool = new WorkerPool({
+    pool = new WorkerPool({
       entry: path.join(root, "lib", "experiments", "experiment-job.ts"),
-      size: size ?? Math.max(2, Math.min(4, os.availableParallelism() - 1)),
-      maxQueue: 256,
+      size: size ?? (role === "requests" ? 1 : Math.max(1, os.availableParallelism() - 1)),
+      maxQueue: role === "requests" ? 16 : 256,
       heapLimitMb: memberLimits().heapLimitMb,
       graceMs: 3000,
     });
+    pools.set(role, pool);
   }
-  return holder.__ringsideExperimentPool;
+  return pool;
 }
 
 export async function closeExperimentPool(): Promise<void> {
-  const pool = holder.__ringsideExperimentPool;
-  holder.__ringsideExperimentPool = undefined;
-  await pool?.close();
+  const pools = holder.__ringsideExperimentPools;
+  holder.__ringsideExperimentPools = undefined;
+  await Promise.all([...(pools?.values() ?? [])].map((p) => p.close()));
 }
 
 /// Runs one member under the limits; a time or memory limit, a crash of the engine thread or
@@ -53,7 +58,7 @@ export async function closeExperimentPool(): Promise<void> {
 export async function runMember(probe: unknown, member: unknown, limits: MemberLimits, signal?: AbortSignal): Promise<MemberOutcome> {
   const job: ExperimentJob = { kind: "member", probe, member };
   const t0 = performance.now();
-  const handle = experimentPool().submit(job, { timeLimitMs: limits.timeLimitMs });
+  const handle = experimentPool("members").submit(job, { timeLimitMs: limits.timeLimitMs });
   const onAbort = () => handle.cancel();
   signal?.addEventListener("abort", onAbort, { once: true });
   let end: JobEnd;
@@ -78,7 +83,7 @@ export async function runMember(probe: unknown, member: unknown, limits: MemberL
 /// Evaluates a program up to its first sweep and returns the family and probe (§9 JSON).
 export async function planSweep(source: string, bindings: Binding[], currentRing: string | null, timeLimitMs: number): Promise<PlanOutcome> {
   const job: ExperimentJob = { kind: "plan", source, bindings, currentRing };
-  const end = await experimentPool().submit(job, { timeLimitMs }).done;
+  const end = await experimentPool("requests").submit(job, { timeLimitMs }).done;
   if (end.status === "finished") return end.outcome as PlanOutcome;
   const message = end.status === "limit" ? end.message : end.status === "crashed" ? `the engine stopped: ${end.message}` : "stopped";
   return { kind: "plan-error", error: { kind: end.status === "limit" ? "limit" : "runtime", message } };
@@ -87,7 +92,7 @@ export async function planSweep(source: string, bindings: Binding[], currentRing
 /// Reads an uploaded family in an engine thread (the notation's checker and evaluator).
 export async function readUpload(ring: string, text: string, timeLimitMs: number): Promise<UploadOutcome> {
   const job: ExperimentJob = { kind: "upload", ring, text };
-  const end = await experimentPool().submit(job, { timeLimitMs }).done;
+  const end = await experimentPool("requests").submit(job, { timeLimitMs }).done;
   if (end.status === "finished") return end.outcome as UploadOutcome;
   const message = end.status === "limit" ? end.message : end.status === "crashed" ? `the engine stopped: ${end.message}` : "stopped";
   return { kind: "upload-error", problems: [{ line: 0, message: `the upload could not be read: ${message}` }] };

@@ -39,7 +39,7 @@ function recipe(e: ExperimentRow) {
 export async function startMemberWorker(opts: WorkerOptions): Promise<RunningWorker> {
   const id = `${os.hostname()}:${process.pid}:${opts.label}`;
   const log = opts.log ?? (() => {});
-  experimentPool(opts.concurrency);
+  experimentPool("members", opts.concurrency);
   const b: PgBoss = await boss();
   let finished = 0;
   const stopping = new AbortController();
