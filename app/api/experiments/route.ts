@@ -1,9 +1,10 @@
+import { experimentRoute } from "@/lib/experiments/http";
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import { requireSessionAccess } from "@/lib/auth/access";
 import { requireUser } from "@/lib/auth/current-user";
 import { readJson } from "@/lib/http/body";
-import { HttpError, route } from "@/lib/http/errors";
+import { HttpError } from "@/lib/http/errors";
 import { createFromProgram, createFromUpload } from "@/lib/experiments/service";
 import { getExperiment, listExperiments, progressOf } from "@/lib/experiments/store";
 import { experimentView } from "@/lib/experiments/views";
@@ -13,7 +14,7 @@ const uuid = z.string().uuid();
 
 /// GET /api/experiments[?session=ID]: the experiments of one session, or of every session
 /// the caller can read; newest first.
-export const GET = route(async (req) => {
+export const GET = experimentRoute(async (req) => {
   const user = await requireUser();
   const session = new URL(req.url).searchParams.get("session");
   let ids: string[];
@@ -53,7 +54,7 @@ const CreateBody = z.union([
 ]);
 
 /// POST /api/experiments: create from a program or cell, or from an upload and a probe.
-export const POST = route(async (req) => {
+export const POST = experimentRoute(async (req) => {
   const user = await requireUser();
   const body = await readJson(req, CreateBody, { maxBytes: 256 * 1024 });
   await requireSessionAccess(user, body.sessionId, "edit");

@@ -1,9 +1,9 @@
+import { experimentRoute } from "@/lib/experiments/http";
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import { requireSessionAccess } from "@/lib/auth/access";
 import { requireUser } from "@/lib/auth/current-user";
 import { readJson } from "@/lib/http/body";
-import { route } from "@/lib/http/errors";
 import { createUpload } from "@/lib/experiments/uploads";
 
 const Body = z
@@ -20,7 +20,7 @@ const Body = z
 
 /// POST /api/experiments/uploads: a family from a file; 422 with every bad line (number and
 /// why) and nothing stored, or 201 with the upload (also saved as a named object).
-export const POST = route(async (req) => {
+export const POST = experimentRoute(async (req) => {
   const user = await requireUser();
   const body = await readJson(req, Body, { maxBytes: 3 * 1024 * 1024 });
   await requireSessionAccess(user, body.sessionId, "edit");

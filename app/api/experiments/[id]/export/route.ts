@@ -1,5 +1,6 @@
+import { experimentRoute } from "@/lib/experiments/http";
 import { NextResponse } from "next/server";
-import { HttpError, route } from "@/lib/http/errors";
+import { HttpError } from "@/lib/http/errors";
 import { requireExperimentAccess } from "@/lib/experiments/access";
 import { allRows, progressOf } from "@/lib/experiments/store";
 import { experimentView, rowView, rowsCsv, rowsJson, rowsLatex } from "@/lib/experiments/views";
@@ -7,7 +8,7 @@ import { experimentView, rowView, rowsCsv, rowsJson, rowsLatex } from "@/lib/exp
 type Context = { params: Promise<{ id: string }> };
 
 /// GET /api/experiments/:id/export?format=csv|json|latex: every row so far, in member order.
-export const GET = route(async (req, { params }: Context) => {
+export const GET = experimentRoute(async (req, { params }: Context) => {
   const { id } = await params;
   const { experiment } = await requireExperimentAccess(req, id, "read");
   const format = new URL(req.url).searchParams.get("format") ?? "csv";

@@ -1,6 +1,7 @@
+import { experimentRoute } from "@/lib/experiments/http";
 import { NextResponse } from "next/server";
 import { z } from "zod";
-import { HttpError, route } from "@/lib/http/errors";
+import { HttpError } from "@/lib/http/errors";
 import { requireExperimentAccess } from "@/lib/experiments/access";
 import { readRows } from "@/lib/experiments/store";
 import { FIXED_COLUMNS, probeColumns, rowView } from "@/lib/experiments/views";
@@ -22,7 +23,7 @@ const Query = z.object({
 
 /// GET /api/experiments/:id/rows?offset&limit&sort&order&status=ok,error&where=col:op:value
 /// (where may repeat): rows paged, sorted and filtered by the database.
-export const GET = route(async (req, { params }: Context) => {
+export const GET = experimentRoute(async (req, { params }: Context) => {
   const { id } = await params;
   const { experiment } = await requireExperimentAccess(req, id, "read");
   const sp = new URL(req.url).searchParams;
