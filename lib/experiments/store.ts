@@ -41,6 +41,12 @@ export async function getExperiment(id: string): Promise<ExperimentRow | undefin
   return row;
 }
 
+/// Only the status and size (what a worker checks before each member).
+export async function experimentState(id: string): Promise<{ status: ExperimentStatus; total: number } | undefined> {
+  const [row] = await db().select({ status: experiments.status, total: experiments.total }).from(experiments).where(eq(experiments.id, id));
+  return row;
+}
+
 /// The experiments of some sessions, newest first, without the bulky family and probe JSON.
 export async function listExperiments(sessionIds: readonly string[]) {
   if (sessionIds.length === 0) return [];

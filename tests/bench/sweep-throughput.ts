@@ -26,8 +26,8 @@ function worker(label: string): Promise<ChildProcess> {
 
 async function stop(child: ChildProcess): Promise<void> {
   if (child.exitCode !== null) return;
-  const exited = new Promise((r) => child.once("exit", r));
   child.removeAllListeners("exit");
+  const exited = new Promise((r) => child.once("exit", r));
   child.kill("SIGTERM");
   await exited;
 }
