@@ -35,7 +35,9 @@ export async function experimentsMain(args: readonly string[], stdout: Out, stde
       return 0;
     }
     if (!["status", "pause", "resume", "cancel", "rerun"].includes(command ?? "") || !id || args.length !== 2) {
-      stderr.write(`ringside: ${command ? `bad experiments command: ${args.join(" ")}` : "missing experiments command"}\n${EXPERIMENTS_USAGE}\n`);
+      stderr.write(
+        `ringside: ${command ? `bad experiments command: ${args.join(" ")}` : "missing experiments command"}\n${EXPERIMENTS_USAGE}\n`,
+      );
       return 2;
     }
     let e = await getExperiment(id);

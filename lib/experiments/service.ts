@@ -30,11 +30,15 @@ export interface CreateFromProgram {
 export async function createFromProgram(input: CreateFromProgram): Promise<ExperimentRow> {
   let source = input.source;
   if (input.cellId) {
-    const [cell] = await db().select().from(cells).where(and(eq(cells.id, input.cellId), eq(cells.sessionId, input.sessionId)));
+    const [cell] = await db()
+      .select()
+      .from(cells)
+      .where(and(eq(cells.id, input.cellId), eq(cells.sessionId, input.sessionId)));
     if (!cell) throw new ExperimentError(404, "not_found", "The cell does not exist in this session.");
     source = cell.source;
   }
-  if (!source.trim()) throw new ExperimentError(400, "invalid_body", "Give the program (source) or a cell (cellId) whose text has a sweep(family, probe).");
+  if (!source.trim())
+    throw new ExperimentError(400, "invalid_body", "Give the program (source) or a cell (cellId) whose text has a sweep(family, probe).");
   const bindings = (await listObjects(input.sessionId)).map((o) => ({ name: o.name, value: o.value }));
   const currentRing = await currentRingOf(input.sessionId);
   const plan = await planSweep(source, bindings, currentRing, PLAN_TIME_LIMIT_MS);
@@ -66,7 +70,10 @@ export interface CreateFromUpload {
 
 /// A sweep of an uploaded family: the program is `sweep(F, probe)` with F the upload.
 export async function createFromUpload(input: CreateFromUpload): Promise<ExperimentRow> {
-  const [u] = await db().select().from(uploads).where(and(eq(uploads.id, input.uploadId), eq(uploads.sessionId, input.sessionId)));
+  const [u] = await db()
+    .select()
+    .from(uploads)
+    .where(and(eq(uploads.id, input.uploadId), eq(uploads.sessionId, input.sessionId)));
   if (!u) throw new ExperimentError(404, "not_found", "The upload does not exist in this session.");
   const family = u.family as { ring: unknown };
   const ringName = input.ringName ?? "S";
@@ -76,7 +83,8 @@ export async function createFromUpload(input: CreateFromUpload): Promise<Experim
     { name: "uploaded", value: u.family },
   ];
   const plan = await planSweep(program, bindings, ringName, PLAN_TIME_LIMIT_MS);
-  if (plan.kind === "plan-error") throw new ExperimentError(422, "no_experiment", `The probe cannot run over the upload: ${plan.error.message}`);
+  if (plan.kind === "plan-error")
+    throw new ExperimentError(422, "no_experiment", `The probe cannot run over the upload: ${plan.error.message}`);
   return start({
     sessionId: input.sessionId,
     createdBy: input.userId,
@@ -116,7 +124,11 @@ async function start(e: {
     engineVersion: ENGINE_VERSION,
     limits,
   });
-  await enqueueMembers(row.id, [...row.labels as string[]].map((_, i) => i), expireSecondsFor(limits.timeLimitMs));
+  await enqueueMembers(
+    row.id,
+    [...(row.labels as string[])].map((_, i) => i),
+    expireSecondsFor(limits.timeLimitMs),
+  );
   return row;
 }
 

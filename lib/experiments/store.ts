@@ -4,6 +4,7 @@
 import { and, asc, desc, eq, inArray, sql, type SQL } from "drizzle-orm";
 import { db } from "@/db/client";
 import { experimentRows, experiments } from "@/db/schema";
+import type { Progress } from "@/lib/wire/experiments";
 
 export type ExperimentRow = typeof experiments.$inferSelect;
 export type StoredRow = typeof experimentRows.$inferSelect;
@@ -30,7 +31,12 @@ export interface NewExperiment {
 export async function insertExperiment(e: NewExperiment): Promise<ExperimentRow> {
   const [row] = await db()
     .insert(experiments)
-    .values({ ...e, total: e.labels.length, status: e.labels.length === 0 ? "done" : "queued", finishedAt: e.labels.length === 0 ? new Date() : null })
+    .values({
+      ...e,
+      total: e.labels.length,
+      status: e.labels.length === 0 ? "done" : "queued",
+      finishedAt: e.labels.length === 0 ? new Date() : null,
+    })
     .returning();
   return row;
 }
@@ -69,18 +75,7 @@ export async function listExperiments(sessionIds: readonly string[]) {
     .orderBy(desc(experiments.createdAt));
 }
 
-export interface Progress {
-  status: ExperimentStatus;
-  done: number;
-  total: number;
-  /// rows whose status is not ok
-  failures: number;
-  byStatus: Record<RowStatus, number>;
-  /// members per second over the last minute of work (null before any row)
-  rate: number | null;
-  /// seconds left at that rate (null when unknown or finished)
-  etaSeconds: number | null;
-}
+export type { Progress };
 
 export async function progressOf(e: ExperimentRow): Promise<Progress> {
   const rows = await db()
@@ -163,7 +158,10 @@ export async function readRows(e: ExperimentRow, q: RowQuery): Promise<{ rows: S
     .orderBy(...order)
     .limit(q.limit)
     .offset(q.offset);
-  const [{ n }] = await db().select({ n: sql<number>`count(*)::int` }).from(experimentRows).where(where);
+  const [{ n }] = await db()
+    .select({ n: sql<number>`count(*)::int` })
+    .from(experimentRows)
+    .where(where);
   return { rows: rows.map((r) => r.row), matched: n };
 }
 
@@ -267,5 +265,8 @@ export async function changeStatus(id: string, to: "paused" | "running" | "cance
 
 /// Experiments that still need work (for a worker that starts: re-queue what is missing).
 export async function activeExperiments(): Promise<ExperimentRow[]> {
-  return db().select().from(experiments).where(inArray(experiments.status, ["queued", "running"]));
+  return db()
+    .select()
+    .from(experiments)
+    .where(inArray(experiments.status, ["queued", "running"]));
 }

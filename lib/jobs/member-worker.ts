@@ -68,7 +68,15 @@ export async function startMemberWorker(opts: WorkerOptions): Promise<RunningWor
     const out = await runMember(r.probe, r.members[index], r.limits, stopping.signal);
     // stopped because this worker is shutting down: leave the member to another worker
     if (out.status === "cancelled" && stopping.signal.aborted) throw new Error("worker stopping");
-    const wrote = await writeRow({ experimentId, index, status: out.status, fields: out.fields, message: out.message, durationMs: out.ms, worker: id });
+    const wrote = await writeRow({
+      experimentId,
+      index,
+      status: out.status,
+      fields: out.fields,
+      message: out.message,
+      durationMs: out.ms,
+      worker: id,
+    });
     if (wrote) finished++;
   };
 
@@ -92,7 +100,10 @@ export async function startMemberWorker(opts: WorkerOptions): Promise<RunningWor
           await runJob(job.data);
           await b.complete(MEMBER_QUEUE, job.id);
         } catch (error) {
-          if (!stopping.signal.aborted) log(`member ${job.data.index} of ${job.data.experimentId} goes back to the queue: ${error instanceof Error ? error.message : error}`);
+          if (!stopping.signal.aborted)
+            log(
+              `member ${job.data.index} of ${job.data.experimentId} goes back to the queue: ${error instanceof Error ? error.message : error}`,
+            );
           await b.fail(MEMBER_QUEUE, job.id, { message: String(error) }).catch(() => {});
         }
       }

@@ -16,7 +16,10 @@ const MEMBERS = 1000;
 
 function worker(label: string): Promise<ChildProcess> {
   return new Promise((resolve, reject) => {
-    const child = spawn("node", ["--import", "tsx", "lib/jobs/worker.ts", "--concurrency", "1", "--label", label], { cwd: ROOT, stdio: ["ignore", "pipe", "inherit"] });
+    const child = spawn("node", ["--import", "tsx", "lib/jobs/worker.ts", "--concurrency", "1", "--label", label], {
+      cwd: ROOT,
+      stdio: ["ignore", "pipe", "inherit"],
+    });
     child.stdout!.on("data", (d: Buffer) => {
       if (d.toString().includes("takes members")) resolve(child);
     });
@@ -33,8 +36,12 @@ async function stop(child: ChildProcess): Promise<void> {
 }
 
 export async function sweepThroughput(): Promise<string[]> {
-  if (!process.env.DATABASE_URL) return ["sweep throughput: skipped (set DATABASE_URL to a migrated database, e.g. the one npm start uses)"];
-  const [u] = await db().insert(users).values({ email: `bench-${Date.now()}@bench.invalid`, displayName: "Bench", passwordHash: "x" }).returning();
+  if (!process.env.DATABASE_URL)
+    return ["sweep throughput: skipped (set DATABASE_URL to a migrated database, e.g. the one npm start uses)"];
+  const [u] = await db()
+    .insert(users)
+    .values({ email: `bench-${Date.now()}@bench.invalid`, displayName: "Bench", passwordHash: "x" })
+    .returning();
   const [s] = await db().insert(sessions).values({ title: "sweep throughput", ownerId: u.id }).returning();
   const lines: string[] = [];
   try {
@@ -52,7 +59,10 @@ export async function sweepThroughput(): Promise<string[]> {
         await new Promise((r) => setTimeout(r, 200));
       }
       const seconds = (performance.now() - t0) / 1000;
-      const [{ n: rows }] = await db().select({ n: sql<number>`count(*)::int` }).from(experimentRows).where(eq(experimentRows.experimentId, e.id));
+      const [{ n: rows }] = await db()
+        .select({ n: sql<number>`count(*)::int` })
+        .from(experimentRows)
+        .where(eq(experimentRows.experimentId, e.id));
       lines.push(`| ${n} worker${n > 1 ? "s" : ""} | ${MEMBERS} | ${rows} | ${seconds.toFixed(1)} | ${(MEMBERS / seconds).toFixed(1)} |`);
       for (const p of procs) await stop(p);
     }

@@ -22,7 +22,9 @@ export const GET = experimentRoute(async (req, { params }: Context) => {
     case "csv":
       return new NextResponse(rowsCsv(experiment, rows), { headers: headers("text/csv; charset=utf-8", "csv") });
     case "json":
-      return NextResponse.json(rowsJson(experiment, experimentView(experiment, await progressOf(experiment)), rows), { headers: headers("application/json", "json") });
+      return NextResponse.json(rowsJson(experiment, experimentView(experiment, await progressOf(experiment)), rows), {
+        headers: headers("application/json", "json"),
+      });
     case "latex":
       return new NextResponse(rowsLatex(experiment, rows), { headers: headers("application/x-latex; charset=utf-8", "tex") });
     default:

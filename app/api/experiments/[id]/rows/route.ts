@@ -38,10 +38,22 @@ export const GET = experimentRoute(async (req, { params }: Context) => {
   if (!known.has(q.sort)) throw new HttpError(400, "invalid_query", `Cannot sort by ${q.sort}; the columns are ${[...known].join(", ")}.`);
   const where = q.where.map((w) => {
     const [column, op, ...rest] = w.split(":");
-    if (!probe.includes(column)) throw new HttpError(400, "invalid_query", `Cannot filter on ${column}; filter the probe's columns (${probe.join(", ") || "none yet"}) with where, the status with status.`);
+    if (!probe.includes(column))
+      throw new HttpError(
+        400,
+        "invalid_query",
+        `Cannot filter on ${column}; filter the probe's columns (${probe.join(", ") || "none yet"}) with where, the status with status.`,
+      );
     return { column, op: op as "eq", value: rest.join(":") };
   });
-  const { rows, matched } = await readRows(experiment, { offset: q.offset, limit: q.limit, sort: q.sort, order: q.order, status: q.status, where });
+  const { rows, matched } = await readRows(experiment, {
+    offset: q.offset,
+    limit: q.limit,
+    sort: q.sort,
+    order: q.order,
+    status: q.status,
+    where,
+  });
   return NextResponse.json({
     columns: [...FIXED_COLUMNS, ...probe],
     rows: rows.map((r) => rowView(experiment, r)),
