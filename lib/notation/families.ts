@@ -285,7 +285,7 @@ function sweep([family, probeV]: readonly Value[], c: CallContext): Value {
   const background = c.named.get("background");
   if (background?.type === "Bool" && background.value && !c.interp.session.experiments) {
     throw runtime(
-      "background = true: background experiments are started by the server (POST /api/experiments, or npx ringside experiments create); this evaluation runs sweeps inline",
+      "background = true: background experiments are created by the server from a cell or a program (POST /api/experiments, app/api/README.md); here sweeps run inline (use background = false, or leave it out)",
       c.span,
     );
   }
