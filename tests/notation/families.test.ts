@@ -1,4 +1,4 @@
-// Families, sweeps and counterexample searches (notation.md §11), checked against published
+// Families, sweeps and counterexample searches (grammar/README.md §7, "Families, sweeps and searches"), checked against published
 // results and hand counts (each source named beside its check).
 import { execFileSync } from "node:child_process";
 import { describe, expect, it } from "vitest";
@@ -270,7 +270,7 @@ describe("Table access", () => {
   });
 });
 
-describe("a Family's JSON (notation.md §11: length, members, definition)", () => {
+describe("a Family's JSON (lib/notation/README.md: length, members, definition)", () => {
   it("restores in a later evaluation, members and definition unchanged", async () => {
     const first = await run("S := Q[x, y]\nF := family([S / <x^2>, S / <x*y, y^3>])\nF.take(1)");
     expect(first.error, first.error?.text).toBeNull();
