@@ -50,9 +50,15 @@ export const LAYERS = [
     packages: "any",
   },
   {
+    layer: "lib/experiments/",
+    files: ["lib/experiments/**"],
+    may: ["db", "lib/auth", "lib/compute", "lib/export", "lib/http", "lib/limits.ts", "lib/notation", "lib/sessions", "lib/wire"],
+    packages: "any",
+  },
+  {
     layer: "lib/jobs/",
     files: ["lib/jobs/**"],
-    may: ["db", "lib/auth", "lib/compute", "lib/http", "lib/limits.ts", "lib/mail", "lib/sessions", "lib/wire"],
+    may: ["db", "lib/auth", "lib/compute", "lib/experiments", "lib/http", "lib/limits.ts", "lib/mail", "lib/sessions", "lib/wire"],
     packages: "any",
   },
   { layer: "lib/ops/", files: ["lib/ops/**"], may: ["db", "lib/mail"], packages: "any" },

@@ -1,6 +1,7 @@
 /// Runs once when a Ringside server starts (Next.js instrumentation hook): cells left
 /// `running` by a server that died are marked `interrupted` at once, and this server's
-/// heartbeat (which keeps sweeping for orphans) and its engine slots start.
+/// heartbeat (which keeps sweeping for orphans), its engine slots and the embedded experiment
+/// worker (lib/jobs/embedded.ts) start, so one `npm start` runs experiments with nothing else.
 export async function register(): Promise<void> {
   if (process.env.NEXT_RUNTIME !== "nodejs" || !process.env.DATABASE_URL) return;
   if (process.env.NEXT_PHASE === "phase-production-build") return;
@@ -15,4 +16,6 @@ export async function register(): Promise<void> {
     console.error("[ringside] could not mark interrupted cells at start:", (error as Error).message);
   }
   startHeartbeat();
+  const { startEmbeddedWorker } = await import("./lib/jobs/embedded");
+  startEmbeddedWorker();
 }

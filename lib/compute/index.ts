@@ -11,3 +11,5 @@ export {
 } from "./run-in-slot";
 export type { CellEvent, CellJob, CellJobOutcome, ErrorValue, Span } from "./cell-events";
 export { errorValue } from "./cell-events";
+/// Slots running another job module (experiments run their member job in slots of their own).
+export { SlotPool, type SlotPoolOptions } from "./slot-pool";

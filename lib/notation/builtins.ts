@@ -48,6 +48,7 @@ import { addValues } from "./operators";
 import { HOMOLOGY_FUNCTIONS, MODULE_PROPERTIES } from "./homology";
 import { MODULE_FUNCTIONS, RESIDUE_PROPERTY } from "./modules";
 import { pendingError } from "./pending";
+import { FAMILY_FUNCTIONS, FAMILY_PROPERTIES } from "./families";
 import { COMPLEX_PROPERTIES, resolveValue } from "./resolutions";
 import { QUOTIENT_FUNCTIONS, QUOTIENT_PROPERTIES } from "./quotients";
 import { LOCAL_FUNCTIONS, LOCAL_GENERAL_PROPERTIES, localFunction, localProperty } from "./local-dispatch";
@@ -226,6 +227,7 @@ const FUNCTION_IMPLS: Record<string, FunctionImpl> = {
   ...MODULE_FUNCTIONS,
   ...HOMOLOGY_FUNCTIONS,
   ...QUOTIENT_FUNCTIONS,
+  ...FAMILY_FUNCTIONS,
   ...LOCAL_FUNCTIONS,
 };
 
@@ -378,6 +380,7 @@ const PROPERTY_IMPLS: Record<string, PropertyImpl> = {
   ...RESIDUE_PROPERTY,
   ...MODULE_PROPERTIES,
   ...QUOTIENT_PROPERTIES,
+  ...FAMILY_PROPERTIES,
   ...LOCAL_GENERAL_PROPERTIES,
 };
 

@@ -24,6 +24,7 @@ import { freeNames } from "./free-names";
 import { valueText } from "./text";
 import { list, type FunctionValue, type RingValue, type Value } from "./values";
 import type { Evaluator, Frame, Session } from "./context";
+import { familyIndex } from "./families";
 
 const PREDEFINED: Record<string, Value> = {
   Q: { type: "Field", field: QQ },
@@ -263,8 +264,9 @@ export class Interpreter implements Evaluator {
       if (info.vars.length === 0) throw runtime("a polynomial ring needs at least one variable", e.span);
       return this.session.rings.polynomialRing(obj.field, info.vars, { order, ...(degrees ? { degrees } : {}) });
     }
-    if (obj.type !== "List") throw runtime(`only a List can be indexed, got ${obj.type}`, e.span);
+    if (obj.type !== "List" && obj.type !== "Family") throw runtime(`only a List or a Family can be indexed, got ${obj.type}`, e.span);
     if (e.items.length !== 1) throw runtime("an index is one integer: xs[i]", e.span);
+    if (obj.type === "Family") return familyIndex(obj, this.int(this.eval(e.items[0], f), e.items[0].span), e.items[0].span);
     const i = this.int(this.eval(e.items[0], f), e.items[0].span);
     if (i < 0n || i >= BigInt(obj.items.length)) {
       throw runtime(`index ${i} is out of range: the list has ${obj.items.length} item(s), indices 0…${obj.items.length - 1}`, e.items[0].span);
