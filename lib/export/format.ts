@@ -29,7 +29,7 @@ export const ExportedCell = z
   .object({
     position: int4(),
     source: z.string().max(IMPORT_LIMITS.sourceChars),
-    status: z.enum(["done", "error", "cancelled"]),
+    status: z.enum(["done", "error", "cancelled", "interrupted"]),
     results: z.array(z.object({ statement: int4(), span: span.nullable(), value: ExportedValue }).strict()),
     error: z
       .object({ type: z.literal("Error"), kind: z.string(), message: z.string(), span: span.optional() })

@@ -60,7 +60,7 @@ function cellMarkdown(cell: TranscriptCell, n: number): string {
   const parts = [`## Cell ${n}`, fence(cell.source, "ringside")];
   for (const r of cell.results) parts.push(`**Statement ${r.statement + 1}:** ${valueMarkdown(r.value).includes("\n") ? "\n\n" : ""}${valueMarkdown(r.value)}`);
   if (cell.error) parts.push(`> **Error (${cell.error.kind ?? "error"}):** ${(cell.error.message ?? "").replace(/\n/g, " ")}`);
-  if (cell.status === "cancelled") parts.push("> This cell was stopped before it finished.");
+  if (cell.status === "cancelled" || cell.status === "interrupted") parts.push("> This cell was stopped before it finished.");
   return parts.join("\n\n");
 }
 

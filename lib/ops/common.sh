@@ -105,9 +105,11 @@ database_url() {
   printf 'postgres://postgres:%s@127.0.0.1:%s/%s' "$(cat "$pwfile")" "$port" "$name"
 }
 
-# serve_web PORT: the production server on 127.0.0.1:PORT (lib/ops/web-server.ts: Next's
-# handler behind node:http, so the client address comes from the socket).
-serve_web() { (cd "$ROOT" && exec node --import tsx lib/ops/web-server.ts --host 127.0.0.1 --port "$1"); }
+# serve_web PORT &: the production server on 127.0.0.1:PORT (lib/ops/web-server.ts: Next's
+# handler behind node:http, so the client address comes from the socket). Call it in the
+# background only: the background subshell becomes node (exec), so $! is the server's own
+# PID and stopping it stops the server rather than a shell left waiting for it.
+serve_web() { cd "$ROOT" && exec node --import tsx lib/ops/web-server.ts --host 127.0.0.1 --port "$1"; }
 
 node_ts() { (cd "$ROOT" && node --import tsx "$@"); }
 

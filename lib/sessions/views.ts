@@ -6,7 +6,7 @@ import type { ErrorJson, ValueJson } from "@/lib/wire/values";
 import type { CellRow, ObjectRow } from "./store";
 
 export function cellView(row: CellRow): Cell {
-  const result = row.result as { statements?: CellResult[] } | null;
+  const result = row.result as { statements?: CellResult[]; stopped?: unknown } | null;
   return {
     id: row.id,
     position: row.position,
@@ -14,6 +14,8 @@ export function cellView(row: CellRow): Cell {
     // the app inserts cells as running; the schema's default "pending" reads the same way
     status: row.status === "pending" ? "running" : row.status,
     results: result?.statements ?? [],
+    /// where a cancel, a limit or a lost server stopped the cell, with its work so far kept in `results`
+    stopped: typeof result?.stopped === "string" ? result.stopped : null,
     error: (row.error as ErrorJson | null) ?? null,
     timings: { totalMs: row.durationMs },
     engineVersion: row.engineVersion,

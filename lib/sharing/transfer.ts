@@ -19,7 +19,7 @@ async function load(session: SessionRow) {
   const [owner] = await database.select({ name: users.displayName }).from(users).where(eq(users.id, session.ownerId));
   // Running cells have no result yet: the export holds finished cells only.
   const cellRows = (await database.select().from(cells).where(eq(cells.sessionId, session.id)).orderBy(asc(cells.position))).filter(
-    (c) => c.status === "done" || c.status === "error" || c.status === "cancelled",
+    (c) => c.status === "done" || c.status === "error" || c.status === "cancelled" || c.status === "interrupted",
   );
   const objectRows = await database.select().from(namedObjects).where(eq(namedObjects.sessionId, session.id)).orderBy(asc(namedObjects.name));
   return { ownerName: owner?.name ?? "", cellRows, objectRows };
@@ -39,7 +39,7 @@ export async function exportJson(session: SessionRow): Promise<SessionExport> {
       return {
         position: c.position,
         source: c.source,
-        status: c.status as "done" | "error" | "cancelled",
+        status: c.status as "done" | "error" | "cancelled" | "interrupted",
         results: raw.map((s, i) => {
           const r = s as { statement?: number; index?: number; span?: unknown; value: ValueJsonLike };
           return {

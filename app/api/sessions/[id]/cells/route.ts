@@ -4,6 +4,7 @@ import { requireUser, requireUserOrLink } from "@/lib/auth/current-user";
 import { requireSessionAccess } from "@/lib/auth/access";
 import { readJson } from "@/lib/http/body";
 import { route } from "@/lib/http/errors";
+import { LIMIT_TABLE } from "@/lib/limits";
 import { linkToken } from "@/lib/sessions/link-token";
 import { runCell } from "@/lib/sessions/run-cell";
 import { listCells } from "@/lib/sessions/store";
@@ -11,7 +12,7 @@ import { cellView } from "@/lib/sessions/views";
 
 type Context = { params: Promise<{ id: string }> };
 
-export const MAX_SOURCE_BYTES = 100 * 1024;
+export const MAX_SOURCE_BYTES = LIMIT_TABLE.cellSourceBytes.value;
 
 const NewCell = z
   .object({ source: z.string().max(MAX_SOURCE_BYTES, "a cell holds at most 100 KB of source").refine((s) => s.trim() !== "", "the cell is empty: type a statement to run") })
