@@ -1,22 +1,19 @@
 import type { GFCoeffs } from "../field/coeffs";
-import { invMod } from "../field/gfp";
 import { monoDiv, monoOne, type Mono } from "../monomial/monomial";
 import { checkLimit, checkpoint } from "../options";
 import { asTyped, type Poly } from "../poly/poly";
 import type { Reduced, ReductionStep } from "./basis";
+import { reduceF4Matrix, type SparseRow } from "./f4-linalg";
 import { MonoTable } from "./monotable";
 import { findReducer } from "./reduce";
 
-/// F4 reduction over GF(p): all S-polynomials of a batch are reduced at once as the rows of
-/// one sparse matrix built by symbolic preprocessing, then brought to echelon form with a
-/// dense accumulator per row (J.-C. Faugère, "A new efficient algorithm for computing
-/// Gröbner bases (F4)", J. Pure Appl. Algebra 139, 1999).
-
-interface Row {
-  /// Monomial ids (table order) while building, then column indices (increasing).
-  cols: Int32Array;
-  vals: Float64Array;
-}
+/// F4 reduction over GF(p) (J.-C. Faugère, "A new efficient algorithm for computing Gröbner
+/// bases (F4)", J. Pure Appl. Algebra 139, 1999): all S-polynomials of one sugar degree are
+/// reduced at once as the rows of one sparse matrix. Symbolic preprocessing collects the
+/// monomials of the step in one hash table (each monomial is hashed once per step; a product
+/// t·m is found from the hashes of t and m without building it) and a reducer row for every
+/// monomial some leading monomial divides; the matrix is then split into pivot and
+/// non-pivot columns and reduced as in f4-linalg.ts (Faugère–Lachartre, PASCO 2010).
 
 /// Term hashes of a polynomial, computed once per polynomial (the hash is the same for all
 /// tables of the same number of variables).
@@ -42,20 +39,21 @@ function hashesOf(table: MonoTable, f: Poly): Int32Array {
   return h;
 }
 
-/// The largest p for which the dense accumulator may add products without reducing each
-/// time is chosen per matrix; above 2^26 even one product is not exact, so F4 is not used.
-export const F4_PRIME_BOUND = 2 ** 26;
+/// F4 handles every prime field the engine has (p < 2^31): the accumulators of f4-linalg.ts
+/// stay exact for all of them.
+export const F4_PRIME_BOUND = 2 ** 31;
 
 export const reduceF4: ReductionStep = <C>(...[R, batch, inputs, basis, opts, ticker]: Parameters<ReductionStep>): Reduced<C>[] => {
   const p = (R.K as unknown as GFCoeffs).p;
   const { elts, active } = basis;
   const table = new MonoTable(R.n);
   const one = monoOne(R.layout);
-  const pivotOf: (Row | undefined)[] = [];
-  const toReduce: Row[] = [];
-  const used = new Set<string>();
+  /// Rows hold monomial ids while they are built.
+  const pivotOf: (SparseRow | undefined)[] = [];
+  const toReduce: SparseRow[] = [];
+  const used = new Set<number>();
 
-  const product = (f: Poly, t: Mono): Row => {
+  const product = (f: Poly, t: Mono): SparseRow => {
     const F = asTyped<number>(f);
     const hs = hashesOf(table, f);
     const ht = table.hash(t);
@@ -66,7 +64,8 @@ export const reduceF4: ReductionStep = <C>(...[R, batch, inputs, basis, opts, ti
   const addPairRow = (k: number, lcm: Mono) => {
     const e = elts[k];
     const row = product(e.poly, monoDiv(lcm, e.lm));
-    const key = `${k}:${row.cols[0]}`;
+    // The same multiple of the same element is needed once.
+    const key = row.cols[0] * elts.length + k;
     if (used.has(key)) return;
     used.add(key);
     if (pivotOf[row.cols[0]] === undefined) pivotOf[row.cols[0]] = row;
@@ -81,7 +80,8 @@ export const reduceF4: ReductionStep = <C>(...[R, batch, inputs, basis, opts, ti
     }
   }
 
-  // Symbolic preprocessing: every monomial that some leading monomial divides gets a reducer row.
+  // Symbolic preprocessing: every monomial that some leading monomial divides gets a reducer
+  // row (the shortest such element); the table grows while it is walked.
   for (let id = 0; id < table.monos.length; id++) {
     ticker.tick();
     if (pivotOf[id] !== undefined) continue;
@@ -90,72 +90,50 @@ export const reduceF4: ReductionStep = <C>(...[R, batch, inputs, basis, opts, ti
     if (r >= 0) pivotOf[id] = product(elts[r].poly, monoDiv(m, elts[r].lm));
   }
 
-  // Columns in decreasing monomial order.
-  const ncols = table.monos.length;
-  const byOrder = Array.from({ length: ncols }, (_, i) => i).sort((a, b) => R.cmp(table.monos[b], table.monos[a]));
-  const colOf = new Int32Array(ncols);
-  byOrder.forEach((id, c) => (colOf[id] = c));
-  const toCols = (row: Row) => {
-    for (let k = 0; k < row.cols.length; k++) row.cols[k] = colOf[row.cols[k]];
-  };
-  const pivotByCol: (Row | undefined)[] = new Array(ncols);
-  for (let id = 0; id < ncols; id++) {
-    const row = pivotOf[id];
-    if (row) {
-      toCols(row);
-      pivotByCol[colOf[id]] = row;
-    }
-  }
-  toReduce.forEach(toCols);
-  toReduce.sort((a, b) => a.cols[0] - b.cols[0] || a.cols.length - b.cols.length);
-  checkpoint(opts, { stage: "groebner", detail: `matrix ${toReduce.length + pivotOf.filter(Boolean).length}×${ncols}` });
+  // Columns: pivot columns (block A) first, then the others (block B), each in decreasing
+  // monomial order, so every row's A part and B part stay sorted.
+  const nmonos = table.monos.length;
+  const aIds: number[] = [], bIds: number[] = [];
+  for (let id = 0; id < nmonos; id++) (pivotOf[id] !== undefined ? aIds : bIds).push(id);
+  const desc = (a: number, b: number) => R.cmp(table.monos[b], table.monos[a]);
+  aIds.sort(desc);
+  bIds.sort(desc);
+  const nA = aIds.length;
+  const colOf = new Int32Array(nmonos);
+  aIds.forEach((id, c) => (colOf[id] = c));
+  bIds.forEach((id, c) => (colOf[id] = nA + c));
+  const pivots: (SparseRow | undefined)[] = new Array(nA);
+  for (let c = 0; c < nA; c++) pivots[c] = toColumns(pivotOf[aIds[c]]!, colOf, nA);
+  const rows = toReduce.map((r) => toColumns(r, colOf, nA));
+  rows.sort((a, b) => a.cols[0] - b.cols[0] || a.cols.length - b.cols.length);
+  checkpoint(opts, { stage: "groebner", detail: `matrix ${rows.length + nA}×${nmonos} (${nA} pivots)` });
 
-  // Row reduction with a dense accumulator. Products are added without reduction while the
-  // sum provably stays below 2^53 (at most one addition per pivot row and column).
-  const lazy = ncols * (p - 1) * (p - 1) + p < 2 ** 53;
-  const dense = new Float64Array(ncols);
-  const out: Reduced<C>[] = [];
   const sugar = batch[0].sugar;
-  for (const row of toReduce) {
-    ticker.tick();
-    const rc = row.cols, rv = row.vals;
-    for (let k = 0; k < rc.length; k++) dense[rc[k]] = rv[k];
-    let lead = -1, nonzero = 0;
-    for (let c = rc[0]; c < ncols; c++) {
-      let v = dense[c];
-      if (v === 0) continue;
-      v %= p;
-      if (v === 0) {
-        dense[c] = 0;
-        continue;
-      }
-      const piv = pivotByCol[c];
-      if (piv === undefined) {
-        dense[c] = v;
-        if (lead < 0) lead = c;
-        nonzero++;
-        continue;
-      }
-      dense[c] = 0;
-      const mult = p - v;
-      const pc = piv.cols, pv = piv.vals;
-      if (lazy) for (let k = 1; k < pc.length; k++) dense[pc[k]] += mult * pv[k];
-      else for (let k = 1; k < pc.length; k++) dense[pc[k]] = (dense[pc[k]] + mult * pv[k]) % p;
-    }
-    if (lead < 0) continue;
-    checkLimit(opts, "maxTerms", nonzero, "a polynomial's number of terms");
-    const cols = new Int32Array(nonzero), vals = new Float64Array(nonzero);
-    const inv = invMod(dense[lead], p);
-    let k = 0;
-    for (let c = lead; c < ncols; c++) {
-      const v = dense[c];
-      if (v === 0) continue;
-      cols[k] = c;
-      vals[k++] = (v * inv) % p;
-      dense[c] = 0;
-    }
-    pivotByCol[lead] = { cols, vals };
-    out.push({ m: Array.from(cols, (c) => table.monos[byOrder[c]]), c: Array.from(vals) as unknown as C[], sugar });
+  const out: Reduced<C>[] = [];
+  for (const r of reduceF4Matrix(p, { pivots, rows, nA, ncols: nmonos }, ticker)) {
+    checkLimit(opts, "maxTerms", r.cols.length, "a polynomial's number of terms");
+    out.push({ m: Array.from(r.cols, (c) => table.monos[bIds[c]]), c: Array.from(r.vals) as unknown as C[], sugar });
   }
   return out;
 };
+
+/// A row of monomial ids (decreasing monomials) in column numbering: its A entries, then its
+/// B entries, each already increasing.
+function toColumns(row: SparseRow, colOf: Int32Array, nA: number): SparseRow {
+  const ids = row.cols, len = ids.length;
+  const cols = new Int32Array(len), vals = new Float64Array(len);
+  let a = 0;
+  for (let k = 0; k < len; k++) if (colOf[ids[k]] < nA) a++;
+  let ia = 0, ib = a;
+  for (let k = 0; k < len; k++) {
+    const c = colOf[ids[k]];
+    if (c < nA) {
+      cols[ia] = c;
+      vals[ia++] = row.vals[k];
+    } else {
+      cols[ib] = c;
+      vals[ib++] = row.vals[k];
+    }
+  }
+  return { cols, vals };
+}

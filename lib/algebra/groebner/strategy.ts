@@ -24,8 +24,9 @@ export const f4Strategy: Strategy = {
 /// Pair by pair with the normal strategy, for orders that do not compare degrees first.
 export const normalStrategy: Strategy = { ...pairwiseStrategy, bySugar: false };
 
-/// The dispatcher. Degree orders: F4 over GF(p) for p < 2^26 (exact double arithmetic),
-/// else pair by pair with sugar. Lex and weight orders: pair by pair, normal strategy —
+/// The dispatcher. Degree orders over GF(p): F4 for every p < 2^31 (the accumulators of
+/// f4-linalg.ts are exact for all of them); pair by pair with sugar over Q (where the
+/// modular method runs F4 per prime instead). Lex and weight orders: pair by pair, normal strategy —
 /// there matrices of a sugar degree grow large while a single pair stays cheap (measured on
 /// the random systems of the SymPy cross-check).
 export function chooseStrategy<C>(R: RingCtx<C>): Strategy {
