@@ -6,6 +6,7 @@ import { pairBefore, updatePairs } from "./pairs";
 import { makeMonic } from "./reduce";
 import { interreduce } from "./interreduce";
 import { chooseStrategy } from "./strategy";
+import { interreduceF4 } from "./f4";
 
 /// Buchberger's algorithm with the Gebauer–Möller criteria and the sugar strategy; returns
 /// the reduced Gröbner basis (monic, sorted by increasing leading monomial).
@@ -35,7 +36,10 @@ export function buchberger<C>(R: RingCtx<C>, gens: readonly Poly[], opts: Comput
       pairs = updatePairs(R.layout, order, basis, pairs, basis.elts.length - 1);
     }
   }
-  return interreduce(R, basis.active.map((k) => basis.elts[k].poly), opts);
+  const found = basis.active.map((k) => basis.elts[k].poly);
+  // Over GF(p) the tails are reduced as one F4 matrix; elsewhere element by element.
+  if (R.ring.field.kind === "gf") return interreduceF4(R as unknown as RingCtx<number>, found, opts);
+  return interreduce(R, found, opts);
 }
 
 function isConstantMono(m: Int32Array): boolean {

@@ -20,9 +20,15 @@ import type { Ticker } from "../options";
 /// residues would use up the 53-bit mantissa too fast, so the multiplier is split into 16-bit
 /// halves added into two accumulators.
 
-/// A sparse row: increasing column indices, residues in [0, p). The first entry is the leading one.
+/// A sparse row: entries k < len at columns cols[off + k] with residues vals[k]; the first
+/// entry is the leading one (coefficient 1 in a reducer row). Many rows share one `cols`
+/// pool and the coefficient array of the polynomial they are a multiple of, so building a
+/// row allocates nothing but this small object. Only the rows of D' and its echelon form
+/// have column indices in increasing order.
 export interface SparseRow {
   cols: Int32Array;
+  off: number;
+  len: number;
   vals: Float64Array;
 }
 
@@ -79,14 +85,14 @@ class Accumulator {
 
   /// Adds mult·row (without its first entry) to the accumulator; mult in [1, p).
   addTail(row: SparseRow, mult: number): void {
-    const pc = row.cols, pv = row.vals, lo = this.lo, hi = this.hi, len = pc.length;
+    const pc = row.cols, pv = row.vals, lo = this.lo, hi = this.hi, len = row.len, o = row.off;
     if (hi === null) {
-      for (let k = 1; k < len; k++) lo[pc[k]] += mult * pv[k];
+      for (let k = 1; k < len; k++) lo[pc[o + k]] += mult * pv[k];
       return;
     }
     const mh = Math.floor(mult / 65536), ml = mult - mh * 65536;
     for (let k = 1; k < len; k++) {
-      const c = pc[k], v = pv[k];
+      const c = pc[o + k], v = pv[k];
       lo[c] += ml * v;
       hi[c] += mh * v;
     }
@@ -107,37 +113,40 @@ class Accumulator {
   }
 }
 
-/// Step 1: reduces `row` (columns in the combined numbering, A columns [0, nA) first) by the
-/// reducer rows `pivots` (indexed by their pivot column) and returns the remainder in the B
-/// columns, renumbered from 0, or null when it is zero.
-function reduceByA(acc: Accumulator, row: SparseRow, pivots: readonly (SparseRow | undefined)[], nA: number, ncols: number): SparseRow | null {
-  const p = acc.p, lo = acc.lo, budget = acc.budget;
-  const rc = row.cols, rv = row.vals;
-  for (let k = 0; k < rc.length; k++) lo[rc[k]] = rv[k];
+/// Step 1: reduces `row` without its first `skip` entries (columns in the combined
+/// numbering, A columns [0, nA) first) by the reducer rows `pivots` (indexed by their pivot
+/// column) and returns the remainder in the B columns, renumbered from 0 and increasing, or
+/// null when it is zero.
+function reduceByA(acc: Accumulator, row: SparseRow, skip: number, pivots: readonly SparseRow[], nA: number, ncols: number): SparseRow | null {
+  const p = acc.p, lo = acc.lo, hi = acc.hi, budget = acc.budget;
+  const rc = row.cols, rv = row.vals, o = row.off;
+  let first = ncols;
+  for (let k = skip; k < row.len; k++) {
+    const c = rc[o + k];
+    lo[c] = rv[k];
+    if (c < first) first = c;
+  }
   let ops = 0;
-  for (let c = rc[0]; c < nA; c++) {
-    if (lo[c] === 0 && (acc.hi === null || acc.hi[c] === 0)) continue;
+  for (let c = first; c < nA; c++) {
+    if (lo[c] === 0 && (hi === null || hi[c] === 0)) continue;
     const v = acc.take(c);
     if (v === 0) continue;
-    acc.addTail(pivots[c]!, p - v);
+    acc.addTail(pivots[c], p - v);
     if (++ops === budget) {
       acc.normalise(c + 1, ncols);
       ops = 0;
     }
   }
-  let count = 0;
-  const start = rc[0] > nA ? rc[0] : nA;
   const cols: number[] = [], vals: number[] = [];
-  for (let c = start; c < ncols; c++) {
-    if (lo[c] === 0 && (acc.hi === null || acc.hi[c] === 0)) continue;
+  for (let c = first > nA ? first : nA; c < ncols; c++) {
+    if (lo[c] === 0 && (hi === null || hi[c] === 0)) continue;
     const v = acc.take(c);
     if (v === 0) continue;
     cols.push(c - nA);
     vals.push(v);
-    count++;
   }
-  if (count === 0) return null;
-  return { cols: Int32Array.from(cols), vals: Float64Array.from(vals) };
+  if (cols.length === 0) return null;
+  return { cols: Int32Array.from(cols), off: 0, len: cols.length, vals: Float64Array.from(vals) };
 }
 
 /// Step 2: the echelon form of the rows (B-column numbering, nB columns), monic, each row
@@ -151,7 +160,7 @@ function echelon(p: number, rows: SparseRow[], nB: number, ticker: Ticker): Spar
   for (const row of rows) {
     ticker.tick();
     const rc = row.cols, rv = row.vals;
-    for (let k = 0; k < rc.length; k++) lo[rc[k]] = rv[k];
+    for (let k = 0; k < row.len; k++) lo[rc[k]] = rv[k];
     let ops = 0, lead = -1, nonzero = 0;
     for (let c = rc[0]; c < nB; c++) {
       if (lo[c] === 0 && (hi === null || hi[c] === 0)) continue;
@@ -181,7 +190,7 @@ function echelon(p: number, rows: SparseRow[], nB: number, ticker: Ticker): Spar
       vals[k++] = acc.mod(v * inv >= SUM_BOUND ? mulSplit(v, inv, p, acc) : v * inv);
       lo[c] = 0;
     }
-    const r = { cols, vals };
+    const r = { cols, off: 0, len: nonzero, vals };
     pivots[lead] = r;
     out.push(r);
   }
@@ -196,7 +205,7 @@ function mulSplit(v: number, w: number, p: number, acc: Accumulator): number {
 
 export interface F4Matrix {
   /// Reducer rows by pivot column, in the combined numbering (A columns [0, nA), then B).
-  pivots: (SparseRow | undefined)[];
+  pivots: SparseRow[];
   /// Rows to reduce, combined numbering.
   rows: SparseRow[];
   nA: number;
@@ -211,25 +220,20 @@ export function reduceF4Matrix(p: number, M: F4Matrix, ticker: Ticker): SparseRo
   const reduced: SparseRow[] = [];
   for (const row of rows) {
     ticker.tick();
-    const r = reduceByA(acc, row, pivots, nA, ncols);
+    const r = reduceByA(acc, row, 0, pivots, nA, ncols);
     if (r) reduced.push(r);
   }
   return echelon(p, reduced, ncols - nA, ticker);
 }
 
-/// Reduces each row fully by the reducer rows (rows with a leading column in A keep their
-/// first entry and lose every other A entry): used for the tails of a reduced basis. Returns
-/// the remainder of each row's tail in the combined numbering (the lead is left out).
-export function reduceTails(p: number, M: F4Matrix, ticker: Ticker): SparseRow[] {
+/// The tail (all entries but the first) of each row reduced by the reducer rows: its
+/// remainder in the B columns (renumbered from 0, increasing), or null when it is zero.
+/// With the elements of a Gröbner basis as rows, these are the tails of the reduced basis.
+export function reduceTails(p: number, M: F4Matrix, ticker: Ticker): (SparseRow | null)[] {
   const { pivots, rows, nA, ncols } = M;
   const acc = new Accumulator(p, ncols);
   return rows.map((row) => {
     ticker.tick();
-    const tail: SparseRow = { cols: row.cols.subarray(1), vals: row.vals.subarray(1) };
-    if (tail.cols.length === 0) return tail;
-    const r = reduceByA(acc, tail, pivots, nA, ncols);
-    if (!r) return { cols: new Int32Array(0), vals: new Float64Array(0) };
-    for (let k = 0; k < r.cols.length; k++) r.cols[k] += nA;
-    return r;
+    return row.len > 1 ? reduceByA(acc, row, 1, pivots, nA, ncols) : null;
   });
 }

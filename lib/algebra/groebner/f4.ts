@@ -1,19 +1,23 @@
 import type { GFCoeffs } from "../field/coeffs";
-import { monoDiv, monoOne, type Mono } from "../monomial/monomial";
-import { checkLimit, checkpoint } from "../options";
-import { asTyped, type Poly } from "../poly/poly";
-import type { Reduced, ReductionStep } from "./basis";
-import { reduceF4Matrix, type SparseRow } from "./f4-linalg";
+import { HEAD, monoDiv, monoDivides, monoOne, type Mono } from "../monomial/monomial";
+import { checkLimit, checkpoint, Ticker, type ComputeOptions } from "../options";
+import { asTyped, makePoly, type Poly } from "../poly/poly";
+import type { RingCtx } from "../poly/ring";
+import type { BasisElt, Reduced, ReductionStep } from "./basis";
+import { reduceF4Matrix, reduceTails, type F4Matrix, type SparseRow } from "./f4-linalg";
 import { MonoTable } from "./monotable";
-import { findReducer } from "./reduce";
+import { makeMonic } from "./reduce";
 
 /// F4 reduction over GF(p) (J.-C. Faugère, "A new efficient algorithm for computing Gröbner
 /// bases (F4)", J. Pure Appl. Algebra 139, 1999): all S-polynomials of one sugar degree are
 /// reduced at once as the rows of one sparse matrix. Symbolic preprocessing collects the
 /// monomials of the step in one hash table (each monomial is hashed once per step; a product
-/// t·m is found from the hashes of t and m without building it) and a reducer row for every
+/// t·m is found from the hashes of t and m without being built) and a reducer row for every
 /// monomial some leading monomial divides; the matrix is then split into pivot and
 /// non-pivot columns and reduced as in f4-linalg.ts (Faugère–Lachartre, PASCO 2010).
+
+/// Read once: an imported binding may be a getter in transpiled code, too slow for hot loops.
+const H = HEAD;
 
 /// Term hashes of a polynomial, computed once per polynomial (the hash is the same for all
 /// tables of the same number of variables).
@@ -30,110 +34,191 @@ function coeffsOf(f: Poly): Float64Array {
   return c;
 }
 
-function hashesOf(table: MonoTable, f: Poly): Int32Array {
-  let h = termHashes.get(f);
-  if (!h) {
-    h = Int32Array.from(f.m, (m) => table.hash(m));
-    termHashes.set(f, h);
-  }
-  return h;
-}
-
 /// F4 handles every prime field the engine has (p < 2^31): the accumulators of f4-linalg.ts
 /// stay exact for all of them.
 export const F4_PRIME_BOUND = 2 ** 31;
 
+/// Builds the matrix of one step: rows are multiples t·f of polynomials, stored as monomial
+/// ids in one shared pool until the columns are known.
+class MatrixBuilder {
+  readonly table: MonoTable;
+  private pool = new Int32Array(1 << 16);
+  private used = 0;
+  /// The reducer row of each monomial id that has one.
+  readonly pivotOf: (SparseRow | undefined)[] = [];
+  readonly rows: SparseRow[] = [];
+  private readonly scratch: Int32Array;
+
+  constructor(private readonly R: RingCtx<unknown>) {
+    this.table = new MonoTable(R.n);
+    this.scratch = new Int32Array(H + R.n);
+  }
+
+  private hashesOf(f: Poly): Int32Array {
+    let h = termHashes.get(f);
+    if (!h) {
+      h = Int32Array.from(f.m, (m) => this.table.hash(m));
+      termHashes.set(f, h);
+    }
+    return h;
+  }
+
+  /// The row of t·f (monomial ids).
+  product(f: Poly, t: Mono): SparseRow {
+    const fm = f.m, len = fm.length;
+    const hs = this.hashesOf(f);
+    const ht = this.table.hash(t);
+    if (this.used + len > this.pool.length) {
+      const bigger = new Int32Array(Math.max(this.pool.length * 2, this.used + len));
+      bigger.set(this.pool.subarray(0, this.used));
+      this.pool = bigger;
+    }
+    const off = this.used;
+    this.used += len;
+    const pool = this.pool, table = this.table;
+    for (let k = 0; k < len; k++) pool[off + k] = table.productId(t, ht, fm[k], hs[k]);
+    // The pool may be replaced later; `cols` is set to the final pool in `finish`.
+    return { cols: pool, off, len, vals: coeffsOf(f) };
+  }
+
+  /// Symbolic preprocessing: every monomial that a leading monomial of `elts[active]`
+  /// divides gets a reducer row (the shortest such element); the table grows while it is
+  /// walked.
+  preprocess(elts: readonly BasisElt[], active: readonly number[], ticker: Ticker): void {
+    const table = this.table, S = table.stride, t = this.scratch;
+    for (let id = 0; id < table.size; id++) {
+      ticker.tick();
+      if (this.pivotOf[id] !== undefined) continue;
+      const E = table.exps, o = id * S;
+      const mask = E[o + 2], deg = E[o + 1];
+      let best = -1, bestLen = Infinity;
+      outer: for (let k = 0; k < active.length; k++) {
+        const e = elts[active[k]];
+        const lm = e.lm;
+        if ((lm[2] & ~mask) !== 0 || lm[1] > deg || e.poly.m.length >= bestLen) continue;
+        for (let i = H; i < S; i++) if (lm[i] > E[o + i]) continue outer;
+        best = active[k];
+        bestLen = e.poly.m.length;
+      }
+      if (best < 0) continue;
+      const lm = elts[best].lm;
+      let tmask = 0;
+      t[0] = E[o] - lm[0];
+      t[1] = deg - lm[1];
+      for (let i = H; i < S; i++) {
+        const x = E[o + i] - lm[i];
+        t[i] = x;
+        if (x !== 0) tmask |= 1 << ((i - H) & 31);
+      }
+      t[2] = tmask;
+      this.pivotOf[id] = this.product(elts[best].poly, t);
+    }
+  }
+
+  /// Numbers the columns (pivot columns first, then the others, each in decreasing monomial
+  /// order), rewrites every row's ids as columns, and returns the matrix with the monomial
+  /// id of each B column.
+  finish(): { M: F4Matrix; bIds: Int32Array } {
+    const table = this.table, n = table.size;
+    const aIds: number[] = [], bIds: number[] = [];
+    for (let id = 0; id < n; id++) (this.pivotOf[id] !== undefined ? aIds : bIds).push(id);
+    const cmp = table.comparator(this.R.ring.order);
+    const desc = (a: number, b: number) => cmp(b, a);
+    aIds.sort(desc);
+    bIds.sort(desc);
+    const nA = aIds.length;
+    const colOf = new Int32Array(n);
+    for (let c = 0; c < nA; c++) colOf[aIds[c]] = c;
+    for (let c = 0; c < bIds.length; c++) colOf[bIds[c]] = nA + c;
+    const pool = this.pool;
+    for (let k = 0; k < this.used; k++) pool[k] = colOf[pool[k]];
+    const pivots: SparseRow[] = new Array(nA);
+    for (let c = 0; c < nA; c++) {
+      const r = this.pivotOf[aIds[c]]!;
+      r.cols = pool;
+      pivots[c] = r;
+    }
+    for (const r of this.rows) r.cols = pool;
+    return { M: { pivots, rows: this.rows, nA, ncols: n }, bIds: Int32Array.from(bIds) };
+  }
+}
+
 export const reduceF4: ReductionStep = <C>(...[R, batch, inputs, basis, opts, ticker]: Parameters<ReductionStep>): Reduced<C>[] => {
   const p = (R.K as unknown as GFCoeffs).p;
   const { elts, active } = basis;
-  const table = new MonoTable(R.n);
+  const B = new MatrixBuilder(R);
   const one = monoOne(R.layout);
-  /// Rows hold monomial ids while they are built.
-  const pivotOf: (SparseRow | undefined)[] = [];
-  const toReduce: SparseRow[] = [];
-  const used = new Set<number>();
-
-  const product = (f: Poly, t: Mono): SparseRow => {
-    const F = asTyped<number>(f);
-    const hs = hashesOf(table, f);
-    const ht = table.hash(t);
-    const ids = new Int32Array(F.m.length);
-    for (let k = 0; k < F.m.length; k++) ids[k] = table.productId(t, ht, F.m[k], hs[k]);
-    return { cols: ids, vals: coeffsOf(f) };
-  };
+  const seen = new Set<number>();
   const addPairRow = (k: number, lcm: Mono) => {
     const e = elts[k];
-    const row = product(e.poly, monoDiv(lcm, e.lm));
+    const row = B.product(e.poly, monoDiv(lcm, e.lm));
+    const lead = row.cols[row.off];
     // The same multiple of the same element is needed once.
-    const key = row.cols[0] * elts.length + k;
-    if (used.has(key)) return;
-    used.add(key);
-    if (pivotOf[row.cols[0]] === undefined) pivotOf[row.cols[0]] = row;
-    else toReduce.push(row);
+    const key = lead * elts.length + k;
+    if (seen.has(key)) return;
+    seen.add(key);
+    if (B.pivotOf[lead] === undefined) B.pivotOf[lead] = row;
+    else B.rows.push(row);
   };
-
   for (const pr of batch) {
-    if (pr.j < 0) toReduce.push(product(inputs[pr.i], one));
+    if (pr.j < 0) B.rows.push(B.product(inputs[pr.i], one));
     else {
       addPairRow(pr.i, pr.lcm);
       addPairRow(pr.j, pr.lcm);
     }
   }
-
-  // Symbolic preprocessing: every monomial that some leading monomial divides gets a reducer
-  // row (the shortest such element); the table grows while it is walked.
-  for (let id = 0; id < table.monos.length; id++) {
-    ticker.tick();
-    if (pivotOf[id] !== undefined) continue;
-    const m = table.monos[id];
-    const r = findReducer(elts, active, m);
-    if (r >= 0) pivotOf[id] = product(elts[r].poly, monoDiv(m, elts[r].lm));
-  }
-
-  // Columns: pivot columns (block A) first, then the others (block B), each in decreasing
-  // monomial order, so every row's A part and B part stay sorted.
-  const nmonos = table.monos.length;
-  const aIds: number[] = [], bIds: number[] = [];
-  for (let id = 0; id < nmonos; id++) (pivotOf[id] !== undefined ? aIds : bIds).push(id);
-  const desc = (a: number, b: number) => R.cmp(table.monos[b], table.monos[a]);
-  aIds.sort(desc);
-  bIds.sort(desc);
-  const nA = aIds.length;
-  const colOf = new Int32Array(nmonos);
-  aIds.forEach((id, c) => (colOf[id] = c));
-  bIds.forEach((id, c) => (colOf[id] = nA + c));
-  const pivots: (SparseRow | undefined)[] = new Array(nA);
-  for (let c = 0; c < nA; c++) pivots[c] = toColumns(pivotOf[aIds[c]]!, colOf, nA);
-  const rows = toReduce.map((r) => toColumns(r, colOf, nA));
-  rows.sort((a, b) => a.cols[0] - b.cols[0] || a.cols.length - b.cols.length);
-  checkpoint(opts, { stage: "groebner", detail: `matrix ${rows.length + nA}×${nmonos} (${nA} pivots)` });
+  B.preprocess(elts, active, ticker);
+  const { M, bIds } = B.finish();
+  // Rows meeting their first pivot early go first (the order only affects speed).
+  M.rows.sort((a, b) => a.len - b.len);
+  checkpoint(opts, { stage: "groebner", detail: `matrix ${M.rows.length + M.nA}×${M.ncols} (${M.nA} pivots)` });
 
   const sugar = batch[0].sugar;
   const out: Reduced<C>[] = [];
-  for (const r of reduceF4Matrix(p, { pivots, rows, nA, ncols: nmonos }, ticker)) {
-    checkLimit(opts, "maxTerms", r.cols.length, "a polynomial's number of terms");
-    out.push({ m: Array.from(r.cols, (c) => table.monos[bIds[c]]), c: Array.from(r.vals) as unknown as C[], sugar });
+  for (const r of reduceF4Matrix(p, M, ticker)) {
+    checkLimit(opts, "maxTerms", r.len, "a polynomial's number of terms");
+    const m: Mono[] = new Array(r.len);
+    for (let k = 0; k < r.len; k++) m[k] = B.table.mono(bIds[r.cols[k]]);
+    out.push({ m, c: Array.from(r.vals) as unknown as C[], sugar });
   }
   return out;
 };
 
-/// A row of monomial ids (decreasing monomials) in column numbering: its A entries, then its
-/// B entries, each already increasing.
-function toColumns(row: SparseRow, colOf: Int32Array, nA: number): SparseRow {
-  const ids = row.cols, len = ids.length;
-  const cols = new Int32Array(len), vals = new Float64Array(len);
-  let a = 0;
-  for (let k = 0; k < len; k++) if (colOf[ids[k]] < nA) a++;
-  let ia = 0, ib = a;
-  for (let k = 0; k < len; k++) {
-    const c = colOf[ids[k]];
-    if (c < nA) {
-      cols[ia] = c;
-      vals[ia++] = row.vals[k];
-    } else {
-      cols[ib] = c;
-      vals[ib++] = row.vals[k];
-    }
+/// The reduced Gröbner basis from a Gröbner basis over GF(p) (monic elements): the minimal
+/// elements keep their leading terms and their tails are reduced all at once, as the rows of
+/// one F4 matrix whose reducers are the multiples of the minimal elements. Sorted by
+/// increasing leading monomial.
+export function interreduceF4(R: RingCtx<number>, G: readonly Poly[], opts: ComputeOptions | undefined): Poly[] {
+  const p = (R.K as GFCoeffs).p;
+  const sorted = G.filter((g) => g.m.length > 0).sort((a, b) => R.cmp(a.m[0], b.m[0]));
+  const minimal: Poly[] = [];
+  for (const g of sorted) if (!minimal.some((h) => monoDivides(h.m[0], g.m[0]))) minimal.push(g);
+  const elts: BasisElt[] = minimal.map((g) => {
+    const poly = makeMonic(R, [...g.m], [...asTyped<number>(g).c]);
+    return { poly, lm: poly.m[0], sugar: 0 };
+  });
+  const ticker = new Ticker(opts, () => ({ stage: "groebner", detail: "reducing the basis" }));
+  checkpoint(opts, { stage: "groebner", detail: `reducing the basis (${elts.length} elements)` });
+  const B = new MatrixBuilder(R);
+  const one = monoOne(R.layout);
+  for (const e of elts) {
+    const row = B.product(e.poly, one);
+    B.pivotOf[row.cols[row.off]] = row;
+    B.rows.push(row);
   }
-  return { cols, vals };
+  B.preprocess(elts, elts.map((_, i) => i), ticker);
+  const { M, bIds } = B.finish();
+  const tails = reduceTails(p, M, ticker);
+  return elts.map((e, i) => {
+    const t = tails[i];
+    const len = t ? t.len : 0;
+    const m: Mono[] = new Array(len + 1), c: number[] = new Array(len + 1);
+    m[0] = e.lm;
+    c[0] = 1;
+    for (let k = 0; k < len; k++) {
+      m[k + 1] = B.table.mono(bIds[t!.cols[k]]);
+      c[k + 1] = t!.vals[k];
+    }
+    return makePoly(m, c);
+  });
 }
