@@ -6,7 +6,6 @@ import { pairBefore, updatePairs } from "./pairs";
 import { makeMonic } from "./reduce";
 import { interreduce } from "./interreduce";
 import { chooseStrategy } from "./strategy";
-import { interreduceF4 } from "./f4";
 
 /// Buchberger's algorithm with the Gebauer–Möller criteria and the sugar strategy; returns
 /// the reduced Gröbner basis (monic, sorted by increasing leading monomial).
@@ -37,8 +36,7 @@ export function buchberger<C>(R: RingCtx<C>, gens: readonly Poly[], opts: Comput
     }
   }
   const found = basis.active.map((k) => basis.elts[k].poly);
-  // Over GF(p) the tails are reduced as one F4 matrix; elsewhere element by element.
-  if (R.ring.field.kind === "gf") return interreduceF4(R as unknown as RingCtx<number>, found, opts);
+  if (strategy.finish && R.ring.field.kind === "gf") return strategy.finish(R as unknown as RingCtx<number>, found, opts);
   return interreduce(R, found, opts);
 }
 

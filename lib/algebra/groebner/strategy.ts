@@ -1,6 +1,6 @@
 import type { RingCtx } from "../poly/ring";
 import type { Strategy } from "./basis";
-import { F4_PRIME_BOUND, reduceF4 } from "./f4";
+import { F4_PRIME_BOUND, interreduceF4, reduceF4 } from "./f4";
 import { reducePairwise } from "./reduce-pairwise";
 
 /// One pair at a time, lowest sugar first.
@@ -22,6 +22,8 @@ export const f4Strategy: Strategy = {
     return pairs.splice(0, k);
   },
   reduce: reduceF4,
+  // The tails of the reduced basis as one F4 matrix too.
+  finish: interreduceF4,
 };
 
 /// Pair by pair with the normal strategy, for orders that do not compare degrees first.
