@@ -79,7 +79,7 @@ describe("F4 matrix reduction with delayed modular reduction", () => {
           C.push(row);
         }
         const ticker = new Ticker(undefined, () => ({ stage: "test" }));
-        const got = reduceF4Matrix(p, { pivots: A.map(sparse), rows: C.map(sparse), nA, ncols }, ticker);
+        const got = reduceF4Matrix(p, { pivots: A.map(sparse), rows: C.map(sparse), nA, ncols }, ticker).rows;
         // Ours: back to dense rows over the B columns.
         const ours = got.map((r) => {
           const d = new Array<bigint>(nB).fill(0n);

@@ -151,14 +151,15 @@ function reduceByA(acc: Accumulator, row: SparseRow, skip: number, pivots: reado
 
 /// Step 2: the echelon form of the rows (B-column numbering, nB columns), monic, each row
 /// reduced by the pivots of the rows before it. Rows reducing to zero are dropped.
-function echelon(p: number, rows: SparseRow[], nB: number, ticker: Ticker): SparseRow[] {
-  rows.sort((a, b) => a.cols[0] - b.cols[0] || a.cols.length - b.cols.length);
+function echelon(p: number, rows: SparseRow[], from: number[], nB: number, ticker: Ticker): { rows: SparseRow[]; from: number[] } {
+  const order = rows.map((_, i) => i).sort((a, b) => rows[a].cols[0] - rows[b].cols[0] || rows[a].len - rows[b].len);
   const acc = new Accumulator(p, nB);
   const lo = acc.lo, hi = acc.hi, budget = acc.budget;
   const pivots: (SparseRow | undefined)[] = new Array(nB);
-  const out: SparseRow[] = [];
-  for (const row of rows) {
+  const out: SparseRow[] = [], outFrom: number[] = [];
+  for (const i of order) {
     ticker.tick();
+    const row = rows[i];
     const rc = row.cols, rv = row.vals;
     for (let k = 0; k < row.len; k++) lo[rc[k]] = rv[k];
     let ops = 0, lead = -1, nonzero = 0;
@@ -193,8 +194,9 @@ function echelon(p: number, rows: SparseRow[], nB: number, ticker: Ticker): Spar
     const r = { cols, off: 0, len: nonzero, vals };
     pivots[lead] = r;
     out.push(r);
+    outFrom.push(from[i]);
   }
-  return out;
+  return { rows: out, from: outFrom };
 }
 
 /// v·w mod p when the product may not be exact in a double (p > 2^26).
@@ -212,18 +214,21 @@ export interface F4Matrix {
   ncols: number;
 }
 
-/// The non-zero rows of the echelon form of D' (B-column numbering, monic), in increasing
-/// order of leading column.
-export function reduceF4Matrix(p: number, M: F4Matrix, ticker: Ticker): SparseRow[] {
+/// The non-zero rows of the echelon form of D' (B-column numbering, monic), each with the
+/// index in M.rows of the row it came from.
+export function reduceF4Matrix(p: number, M: F4Matrix, ticker: Ticker): { rows: SparseRow[]; from: number[] } {
   const { pivots, rows, nA, ncols } = M;
   const acc = new Accumulator(p, ncols);
-  const reduced: SparseRow[] = [];
-  for (const row of rows) {
+  const reduced: SparseRow[] = [], from: number[] = [];
+  for (let i = 0; i < rows.length; i++) {
     ticker.tick();
-    const r = reduceByA(acc, row, 0, pivots, nA, ncols);
-    if (r) reduced.push(r);
+    const r = reduceByA(acc, rows[i], 0, pivots, nA, ncols);
+    if (r) {
+      reduced.push(r);
+      from.push(i);
+    }
   }
-  return echelon(p, reduced, ncols - nA, ticker);
+  return echelon(p, reduced, from, ncols - nA, ticker);
 }
 
 /// The tail (all entries but the first) of each row reduced by the reducer rows: its

@@ -3,7 +3,7 @@ import { HEAD, monoDiv, monoDivides, monoOne, type Mono } from "../monomial/mono
 import { checkLimit, checkpoint, Ticker, type ComputeOptions } from "../options";
 import { asTyped, makePoly, type Poly } from "../poly/poly";
 import type { RingCtx } from "../poly/ring";
-import type { BasisElt, Reduced, ReductionStep } from "./basis";
+import type { BasisElt, Reduced, ReductionStep, Strategy } from "./basis";
 import { reduceF4Matrix, reduceTails, type F4Matrix, type SparseRow } from "./f4-linalg";
 import { MonoTable } from "./monotable";
 import { makeMonic } from "./reduce";
@@ -63,8 +63,12 @@ class MatrixBuilder {
     return h;
   }
 
-  /// The row of t·f (monomial ids).
-  product(f: Poly, t: Mono): SparseRow {
+  /// When set, where every row comes from (for a trace; see F4StepTrace).
+  sources: Map<SparseRow, RowSource> | null = null;
+
+  /// The row of t·f (monomial ids); `src` names f for a trace (a basis index, or −1 − i
+  /// for input i).
+  product(f: Poly, t: Mono, src = 0): SparseRow {
     const fm = f.m, len = fm.length;
     const hs = this.hashesOf(f);
     const ht = this.table.hash(t);
@@ -78,7 +82,9 @@ class MatrixBuilder {
     const pool = this.pool, table = this.table;
     for (let k = 0; k < len; k++) pool[off + k] = table.productId(t, ht, fm[k], hs[k]);
     // The pool may be replaced later; `cols` is set to the final pool in `finish`.
-    return { cols: pool, off, len, vals: coeffsOf(f) };
+    const row = { cols: pool, off, len, vals: coeffsOf(f) };
+    if (this.sources) this.sources.set(row, { src, t: t.slice() });
+    return row;
   }
 
   /// Symbolic preprocessing: every monomial that a leading monomial of `elts[active]`
@@ -111,7 +117,7 @@ class MatrixBuilder {
         if (x !== 0) tmask |= 1 << ((i - H) & 31);
       }
       t[2] = tmask;
-      this.pivotOf[id] = this.product(elts[best].poly, t);
+      this.pivotOf[id] = this.product(elts[best].poly, t, best);
     }
   }
 
@@ -143,15 +149,19 @@ class MatrixBuilder {
   }
 }
 
-export const reduceF4: ReductionStep = <C>(...[R, batch, inputs, basis, opts, ticker]: Parameters<ReductionStep>): Reduced<C>[] => {
+export const reduceF4: ReductionStep = (R, batch, inputs, basis, opts, ticker) => f4Step(R, batch, inputs, basis, opts, ticker, null);
+
+/// One F4 step; with `trace`, what it did is appended to it.
+function f4Step<C>(...[R, batch, inputs, basis, opts, ticker, trace]: [...Parameters<ReductionStep>, F4StepTrace[] | null]): Reduced<C>[] {
   const p = (R.K as unknown as GFCoeffs).p;
   const { elts, active } = basis;
   const B = new MatrixBuilder(R);
+  if (trace) B.sources = new Map();
   const one = monoOne(R.layout);
   const seen = new Set<number>();
   const addPairRow = (k: number, lcm: Mono) => {
     const e = elts[k];
-    const row = B.product(e.poly, monoDiv(lcm, e.lm));
+    const row = B.product(e.poly, monoDiv(lcm, e.lm), k);
     const lead = row.cols[row.off];
     // The same multiple of the same element is needed once.
     const key = lead * elts.length + k;
@@ -161,7 +171,7 @@ export const reduceF4: ReductionStep = <C>(...[R, batch, inputs, basis, opts, ti
     else B.rows.push(row);
   };
   for (const pr of batch) {
-    if (pr.j < 0) B.rows.push(B.product(inputs[pr.i], one));
+    if (pr.j < 0) B.rows.push(B.product(inputs[pr.i], one, -1 - pr.i));
     else {
       addPairRow(pr.i, pr.lcm);
       addPairRow(pr.j, pr.lcm);
@@ -169,20 +179,92 @@ export const reduceF4: ReductionStep = <C>(...[R, batch, inputs, basis, opts, ti
   }
   B.preprocess(elts, active, ticker);
   const { M, bIds } = B.finish();
-  // Rows meeting their first pivot early go first (the order only affects speed).
+  // Shorter rows first (the order only affects speed).
   M.rows.sort((a, b) => a.len - b.len);
   checkpoint(opts, { stage: "groebner", detail: `matrix ${M.rows.length + M.nA}×${M.ncols} (${M.nA} pivots)` });
 
   const sugar = batch[0].sugar;
   const out: Reduced<C>[] = [];
-  for (const r of reduceF4Matrix(p, M, ticker)) {
+  const found = reduceF4Matrix(p, M, ticker);
+  for (const r of found.rows) {
     checkLimit(opts, "maxTerms", r.len, "a polynomial's number of terms");
     const m: Mono[] = new Array(r.len);
     for (let k = 0; k < r.len; k++) m[k] = B.table.mono(bIds[r.cols[k]]);
     out.push({ m, c: Array.from(r.vals) as unknown as C[], sugar });
   }
+  if (trace && B.sources) {
+    const src = B.sources;
+    trace.push({
+      pivots: M.pivots.map((r) => src.get(r)!),
+      rows: found.from.map((i) => src.get(M.rows[i])!),
+      leads: out.map((r) => r.m[0]),
+    });
+  }
   return out;
-};
+}
+
+/// Where a row comes from: the multiple t·f of basis element `src` (or of input −1 − src).
+export interface RowSource {
+  src: number;
+  t: Mono;
+}
+
+/// What one F4 step did, enough to redo it over another prime without pair handling or the
+/// search for reducers (the idea of C. Traverso, "Gröbner trace algorithms", ISSAC 1988):
+/// its reducer rows, the rows to reduce that gave new elements (the others reduced to 0),
+/// and the leading monomials of the new elements, in order.
+export interface F4StepTrace {
+  pivots: RowSource[];
+  rows: RowSource[];
+  leads: Mono[];
+}
+
+/// The F4 strategy, recording each step into `trace`.
+export function tracingF4(base: Strategy, trace: F4StepTrace[]): Strategy {
+  return { ...base, reduce: (R, batch, inputs, basis, opts, ticker) => f4Step(R, batch, inputs, basis, opts, ticker, trace) };
+}
+
+/// Redoes a traced computation over GF(p) (the same ring but another prime) from the
+/// inputs' images: every step builds only the traced rows and must give the traced leading
+/// monomials. Returns the reduced basis, or null when a step differs (p, or the traced
+/// prime, is unlucky for this ideal): the caller then computes from scratch.
+export function replayF4(R: RingCtx<number>, trace: readonly F4StepTrace[], inputs: readonly Poly[], opts: ComputeOptions | undefined): Poly[] | null {
+  const p = (R.K as GFCoeffs).p;
+  const ticker = new Ticker(opts, () => ({ stage: "groebner", detail: "following the first prime's trace" }));
+  const elts: Poly[] = [];
+  const polyOf = (s: RowSource) => (s.src >= 0 ? elts[s.src] : inputs[-1 - s.src]);
+  for (const step of trace) {
+    checkpoint(opts, { stage: "groebner", detail: `following the first prime's trace (${elts.length} elements)` });
+    const B = new MatrixBuilder(R);
+    for (const s of step.pivots) {
+      const f = polyOf(s);
+      if (!f || f.m.length === 0) return null;
+      const row = B.product(f, s.t);
+      const lead = row.cols[row.off];
+      if (B.pivotOf[lead] !== undefined) return null;
+      B.pivotOf[lead] = row;
+    }
+    for (const s of step.rows) {
+      const f = polyOf(s);
+      if (!f || f.m.length === 0) return null;
+      B.rows.push(B.product(f, s.t));
+    }
+    const { M, bIds } = B.finish();
+    const found = reduceF4Matrix(p, M, ticker);
+    if (found.rows.length !== step.leads.length) return null;
+    // Same leading monomials, put in the traced order (later steps refer to the indices).
+    const byLead = new Map<string, SparseRow>();
+    for (const r of found.rows) byLead.set(B.table.mono(bIds[r.cols[0]]).join(","), r);
+    for (const lead of step.leads) {
+      const r = byLead.get(lead.join(","));
+      if (!r) return null;
+      const m: Mono[] = new Array(r.len);
+      for (let k = 0; k < r.len; k++) m[k] = B.table.mono(bIds[r.cols[k]]);
+      elts.push(makePoly(m, Array.from(r.vals)));
+    }
+  }
+  return interreduceF4(R, elts, opts);
+}
 
 /// The reduced Gröbner basis from a Gröbner basis over GF(p) (monic elements): the minimal
 /// elements keep their leading terms and their tails are reduced all at once, as the rows of
