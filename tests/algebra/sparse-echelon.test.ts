@@ -4,14 +4,14 @@
 // every step; and a refused vector's membership is checked independently by exact rank.
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { coeffsOf } from "@/lib/algebra/field/coeffs";
+import { coeffsOf, type Coeffs } from "@/lib/algebra/field/coeffs";
 import { gf, QQ } from "@/lib/algebra/field/field";
 import { Echelon, rankOf } from "@/lib/algebra/graded/echelon";
 import { SparseEchelon } from "@/lib/algebra/graded/sparse-echelon";
 
 describe("sparse echelon basis", () => {
   for (const field of [gf(2), gf(32003), gf(2147483647), QQ]) {
-    const K = coeffsOf(field) as ReturnType<typeof coeffsOf<unknown>>;
+    const K = coeffsOf(field) as Coeffs<unknown>;
     it(`accepts exactly the vectors the dense basis accepts over ${field.kind === "Q" ? "Q" : `GF(${field.p})`}`, () => {
       const dim = 8;
       // Sparse vectors with small entries, often dependent on the ones before.
