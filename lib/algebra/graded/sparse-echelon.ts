@@ -1,4 +1,4 @@
-import type { Coeffs } from "./engine";
+import type { Coeffs } from "../field/coeffs";
 
 /// A sparse vector of K^dim: increasing indices with nonzero coefficients.
 export interface SparseRow<C> {
