@@ -1,6 +1,7 @@
 import { AlgebraError } from "../../errors";
-import { Echelon, kernelBasis } from "../../graded/echelon";
+import { Echelon } from "../../graded/echelon";
 import { SparseEchelon } from "../../graded/sparse-echelon";
+import { sparseKernelBasis } from "../../graded/sparse-kernel";
 import { gradedQuotient, type GradedQuotient } from "../../graded/piece";
 import { type Ideal, idealGroebnerBasis } from "../../ideal/ideal";
 import { idealSum } from "../../ideal/arith";
@@ -308,13 +309,18 @@ function syzygiesOfBlock<C>(
     const pivots = new Set(P.pivots);
     const free: number[] = [];
     for (let k = 0; k < dimF; k++) if (!pivots.has(k)) free.push(k);
-    const cols = free.map((k) => densify(K, images.of(j, block[k]), TL, tBlock.length));
-    const ker = kernelBasis(K, tBlock.length, cols, () => checkpoint(opts, info));
+    // The images sparse over the target group, the kernel by sparse elimination: dense
+    // combinations (free × rank) were most of the memory of the largest pieces.
+    const cols = free.map((k) => {
+      const w = images.of(j, block[k]);
+      return { idx: w.idx.map((x) => TL.local[x]), val: w.val };
+    });
+    const ker = sparseKernelBasis(K, tBlock.length, free.length, cols, () => checkpoint(opts, info));
     if (ker.length !== expected - P.rank) throw new AlgebraError("runtime", "resolution: internal inconsistency (kernel dimension)");
     const md = multidegreeOf(key);
     for (const c of ker) {
       const z = new Array<C>(dimF).fill(K.zero);
-      c.forEach((a, k) => (z[free[k]] = a));
+      c.idx.forEach((k, t) => (z[free[k]] = c.val[t]));
       insertDense(P, z);
       next.addGenerator(j, sparsify(K, z, block), md);
     }
