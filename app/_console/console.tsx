@@ -7,6 +7,8 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { mutate } from "swr";
 import { envFromObjects } from "@/lib/editor/notation-env";
+import { CellExperiments, useExperimentCommands } from "@/app/_experiments/console-links";
+import { createFromSource } from "@/app/_experiments/api";
 import { GUIDED_TOUR, type GuidedExample } from "@/lib/examples/tour";
 import { cancelCell, createSession, deleteObject, errorOf, exportUrl, keys, messageOf, renameObject, type ExportFormat } from "./api/client";
 import { importSession } from "./api/sharing";
@@ -249,6 +251,26 @@ export function Console({ initialSessionId, linkToken, signedIn }: ConsoleProps)
     [sessionId, data],
   );
 
+  const experimentCommands = useExperimentCommands(sessionId, cells, canEdit, signedIn, setNotice);
+  // The tour's sweep step: run it as an experiment in this session (made first if none) and open its plot.
+  const runTourExperiment = useCallback(
+    async (e: GuidedExample) => {
+      try {
+        let id = sessionId;
+        if (!id) {
+          id = (await createSession("First session")).id;
+          setSessionId(id);
+        }
+        const { experiment } = await createFromSource(id, e.source);
+        window.location.assign(`/experiments/${experiment.id}?view=plots&plot=heat`);
+      } catch (err) {
+        setDialog(null);
+        setNotice(`The experiment did not start: ${messageOf(err)}`);
+      }
+    },
+    [sessionId],
+  );
+
   const focusFirst = (selector: string) => document.querySelector<HTMLElement>(selector)?.focus();
 
   const commands = useMemo((): PaletteCommand[] => {
@@ -305,8 +327,9 @@ export function Console({ initialSessionId, linkToken, signedIn }: ConsoleProps)
     for (const o of objects ?? []) {
       list.push({ id: `object-${o.id}`, group: "Recall a named object", label: `Insert name: ${o.name} (${o.type})`, keywords: [o.summary], run: () => insertName(o.name) });
     }
+    list.push(...experimentCommands);
     return list;
-  }, [theme, toggleTheme, canEdit, canShare, signedIn, sessionId, running, data.sessions, objects, newSession, exportTranscript, run, cancelRunning, insertExample, openSession, insertName]);
+  }, [experimentCommands, theme, toggleTheme, canEdit, canShare, signedIn, sessionId, running, data.sessions, objects, newSession, exportTranscript, run, cancelRunning, insertExample, openSession, insertName]);
 
   useEffect(() => {
     const onKey = (e: KeyboardEvent) => {
@@ -421,7 +444,7 @@ export function Console({ initialSessionId, linkToken, signedIn }: ConsoleProps)
             <EmptySessionWelcome onInsert={insertExample} onOpenTour={() => setDialog("tour")} canRun />
           )}
           {shownCells.map((c) => (
-            <CellView key={c.id} cell={c} />
+            <CellView key={c.id} cell={c} footer={<CellExperiments cell={c} sessionId={sessionId} canEdit={canEdit} signedIn={signedIn} />} />
           ))}
           {running && <RunningCellView cell={running} onCancel={() => void cancelRunning()} />}
           <div ref={transcriptEnd} />
@@ -484,7 +507,7 @@ export function Console({ initialSessionId, linkToken, signedIn }: ConsoleProps)
       </Modal>
       <Modal open={dialog === "tour"} title="Guided first steps" onClose={() => setDialog(null)}>
         <div className="max-h-[70vh] overflow-y-auto pr-1">
-          <TourList onInsert={insertExample} canRun={canEdit} />
+          <TourList onInsert={insertExample} canRun={canEdit} onRunExperiment={signedIn && (canEdit || sessionId === null) ? (e) => void runTourExperiment(e) : undefined} />
         </div>
       </Modal>
       <Modal open={dialog === "share" && sessionId !== null} title={`Share “${data.session?.title ?? "this session"}”`} onClose={() => setDialog(null)}>

@@ -55,6 +55,8 @@ export interface ExperimentSummary {
   status: ExperimentStatus;
   familyDefinition: string;
   probeText: string;
+  /// the console cell it was made from (null for uploads); added to the list by issue 15
+  sourceCellId?: string | null;
   total: number;
   done: number;
   failures: number;

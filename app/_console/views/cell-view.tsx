@@ -1,6 +1,7 @@
 "use client";
 /// One transcript cell: source, status, time taken and results; while it runs, a
 /// progress bar with the stage, the Betti columns computed so far and a Cancel button.
+import type { ReactNode } from "react";
 import { resultIndex, type Cell, type CellStatus } from "../api/types";
 import { bettiGrid } from "../render/betti";
 import { overallFraction, type RunningCell } from "../state/running-cell";
@@ -42,8 +43,9 @@ function Source({ source }: { source: string }) {
   );
 }
 
-/// A finished (or stored) cell.
-export function CellView({ cell }: { cell: Cell }) {
+/// A finished (or stored) cell; `footer` is drawn under its results (the experiments room
+/// puts its links there).
+export function CellView({ cell, footer }: { cell: Cell; footer?: ReactNode }) {
   return (
     <article aria-label={`Cell ${cell.position + 1}`} className="rs-cell flex flex-col gap-2 border-b border-ink/10 py-3 dark:border-paper/10">
       <Header position={cell.position} status={cell.status} ms={cell.timings?.totalMs ?? null} />
@@ -53,6 +55,7 @@ export function CellView({ cell }: { cell: Cell }) {
       ))}
       {cell.error && <ErrorView error={cell.error} source={cell.source} />}
       {cell.status === "running" && <p className="text-sm text-ink-soft dark:text-paper/70">Still running elsewhere.</p>}
+      {footer}
     </article>
   );
 }
