@@ -19,11 +19,12 @@ export function useExperiment(id: string, link: string | null) {
   return r;
 }
 
-/// Every row so far (up to ROWS_IN_BROWSER) in member order, read again while `live`.
-export function useAllRows(id: string, link: string | null, live: boolean, total: number) {
+/// Every row so far (up to ROWS_IN_BROWSER) in member order, read again whenever the
+/// experiment's count of finished rows changes (the count is part of the key, so the last
+/// rows are read even when the experiment ends between two polls).
+export function useAllRows(id: string, link: string | null, done: number, total: number) {
   const cap = Math.min(total, ROWS_IN_BROWSER);
-  return useSWR<{ rows: Row[]; matched: number }>(["experiment-rows", id, link, cap], () => allRows(id, link, Math.max(cap, 1)), {
-    refreshInterval: live ? POLL_MS : 0,
+  return useSWR<{ rows: Row[]; matched: number }>(["experiment-rows", id, link, cap, done], () => allRows(id, link, Math.max(cap, 1)), {
     keepPreviousData: true,
   });
 }

@@ -25,10 +25,9 @@ import { buttonQuiet, buttonSecondary, focusRing, panelHeading } from "@/app/_co
 import { rowsUrl } from "./api";
 import { cellNumber, cellText } from "./data/cells";
 import { parseFilter, rowPasses, whereParam } from "./data/filters";
-import { POLL_MS } from "./hooks";
 import { MemberDetail } from "./member-detail";
 import { RowStatusBadge, StatusChips } from "./status-chips";
-import { FIXED_COLUMNS, isActive, type Experiment, type Row, type RowsPage, type RowStatus } from "./types";
+import { FIXED_COLUMNS, type Experiment, type Row, type RowsPage, type RowStatus } from "./types";
 
 /// Experiments up to this size are read whole and sorted/filtered in the browser.
 export const CLIENT_ROWS = 1000;
@@ -82,7 +81,8 @@ export function LiveTable({
   const serverKey = serverSide
     ? rowsUrl(experiment.id, { offset: pageIndex * PAGE_SIZE, limit: PAGE_SIZE, sort: sort.id, order: sort.desc ? "desc" : "asc", status: [...statuses], where }, link)
     : null;
-  const page = useSWR<RowsPage>(serverKey, fetchJson, { refreshInterval: isActive(experiment.status) ? POLL_MS : 0, keepPreviousData: true });
+  // the finished count in the key reads the page again as rows arrive, and once more at the end
+  const page = useSWR<RowsPage>(serverKey ? [serverKey, experiment.done] : null, ([url]: [string, number]) => fetchJson<RowsPage>(url), { keepPreviousData: true });
 
   const data = serverSide ? (page.data?.rows ?? []) : (allRows.rows ?? []);
   const columnFilters: ColumnFiltersState = useMemo(

@@ -34,9 +34,8 @@ export function ExperimentRoom({ id, link, signedIn, initialTab, initialPlot }: 
   const canEdit = signedIn && answer.data?.canEdit === true;
   const session = useSWR<{ session: SessionDetail }>(e ? keys.session(e.sessionId, link) : null, fetchJson);
   const canShare = signedIn && session.data?.session.canManageSharing === true;
-  const live = e ? isActive(e.status) : false;
   // the plots (and the table of a small experiment) read every row so far
-  const rows = useAllRows(id, link, live, e?.total ?? 0);
+  const rows = useAllRows(id, link, e?.done ?? 0, e?.total ?? 0);
   const [tab, setTab] = useState<Tab>(initialTab);
   const [notice, setNotice] = useState<string | null>(null);
   const [sharing, setSharing] = useState(false);
