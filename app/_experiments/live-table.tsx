@@ -158,7 +158,7 @@ export function LiveTable({
       <div className="flex flex-wrap items-center gap-3">
         <StatusChips counts={experiment.progress.byStatus} chosen={statuses} onToggle={toggleStatus} />
         <span className="text-sm text-ink-soft dark:text-paper/70" data-testid="rows-matched" aria-live="polite">
-          {matched} of {experiment.done} rows{experiment.done < experiment.total ? ` (${experiment.total} members)` : ""}
+          {matched} of {Math.max(experiment.done, serverSide ? 0 : data.length)} rows{experiment.done < experiment.total ? ` (${experiment.total} members)` : ""}
           {serverSide ? " · sorted and filtered by the database" : ""}
         </span>
         <details className="relative ml-auto">
