@@ -133,12 +133,12 @@ export function ExperimentRoom({ id, link, signedIn, initialTab, initialPlot }: 
         </div>
       </div>
 
-      <div className="flex flex-wrap items-center gap-4">
+      <div className="flex flex-col gap-1">
         <ProgressBar experiment={e} />
+        <p role="status" aria-live="polite" className="min-h-[1.25rem] text-sm text-ink-soft dark:text-signal-soft" data-testid="room-notice">
+          {notice}
+        </p>
       </div>
-      <p role="status" aria-live="polite" className="min-h-[1.25rem] text-sm text-ink-soft dark:text-signal-soft" data-testid="room-notice">
-        {notice}
-      </p>
 
       <div role="tablist" aria-label="Views of the experiment" className="flex gap-1 border-b border-ink/10 dark:border-paper/10" onKeyDown={onTabKey}>
         {TABS.map(([t, label]) => (
