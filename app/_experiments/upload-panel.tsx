@@ -116,7 +116,7 @@ export function UploadPanel() {
           <span className={panelHeading}>Ring the ideals are read in</span>
           <span className="flex gap-2">
             <input className={`${textInput} font-mono`} value={ring} onChange={(e) => setRing(e.target.value)} aria-label="Ring" />
-            <button type="button" className={buttonSecondary} disabled={!file || busy} onClick={() => void check(file, format, ring)}>
+            <button type="button" className={`${buttonSecondary} whitespace-nowrap`} disabled={!file || busy} onClick={() => void check(file, format, ring)}>
               Check again
             </button>
           </span>
