@@ -192,7 +192,7 @@ export function LiveTable({
                     const dir = h.column.getIsSorted();
                     return (
                       <th key={h.id} scope="col" aria-sort={dir === "asc" ? "ascending" : dir === "desc" ? "descending" : "none"} className="whitespace-nowrap px-2 pt-1.5 text-left font-semibold">
-                        <button type="button" className={`inline-flex items-center gap-1 rounded ${focusRing}`} onClick={h.column.getToggleSortingHandler()} title={`Sort by ${h.column.id}`}>
+                        <button type="button" className={`inline-flex items-center gap-1 rounded ${focusRing}`} onClick={h.column.getToggleSortingHandler()} aria-label={`Sort by ${h.column.id}`} title={`Sort by ${h.column.id}`}>
                           <span className="font-mono">{flexRender(h.column.columnDef.header, h.getContext())}</span>
                           <span aria-hidden className="text-signal">
                             {dir === "asc" ? "▲" : dir === "desc" ? "▼" : "·"}
