@@ -28,8 +28,8 @@ process.once("exit", () => worker?.child.kill("SIGKILL"));
 /// table partly filled: generic quadrics in four variables (each a complete intersection of
 /// three quadrics: Betti numbers 1, 3, 3, 1 — the Koszul complex; Eisenbud, "Commutative
 /// Algebra", 1995, §17.2, from memory).
-const SWEEP = "S := GF(32003)[x, y, z, w]\nsweep(random_ideals(S, count = 30, gens = 3, degree = 2, seed = 21), I -> {pd: (S / I).pd, reg: (S / I).reg, codim: I.codim, betti: resolve(S / I).betti})";
-const COUNT = 30;
+const SWEEP = "S := GF(32003)[x, y, z, w]\nsweep(random_ideals(S, count = 40, gens = 3, degree = 2, seed = 21), I -> {pd: (S / I).pd, reg: (S / I).reg, codim: I.codim, betti: resolve(S / I).betti})";
+const COUNT = 40;
 
 async function api<T>(page: Page, url: string, init?: { method?: string; body?: unknown }): Promise<{ status: number; body: T }> {
   return page.evaluate(
@@ -151,7 +151,7 @@ browserTest("experiments room: sort, filter, expand with the keyboard, plots, SV
   // sort: index descending puts the last member first; seconds ascending is ordered
   const indexHeader = page.getByRole("button", { name: "Sort by index" });
   await indexHeader.click();
-  await page.waitForFunction(() => document.querySelector("[data-testid=experiment-table] tbody tr[data-row-index]")?.getAttribute("data-row-index") === "29");
+  await page.waitForFunction(() => document.querySelector("[data-testid=experiment-table] tbody tr[data-row-index]")?.getAttribute("data-row-index") === "39");
   await page.getByRole("button", { name: "Sort by seconds" }).click();
   const secondsCol = await page.evaluate(() => {
     const head = [...document.querySelectorAll("[data-testid=experiment-table] thead tr:first-child th")].map((th) => th.textContent ?? "");
