@@ -14,7 +14,11 @@ const one = (v: string | string[] | undefined): string | null => (typeof v === "
 /// The console page: the header, then the console (sessions, shelf, transcript, input);
 /// `?session=<id>` opens that session, and `&link=<token>` reads it through a published
 /// read-only link, which also works signed out (proxy.ts lets that visit through).
-export default async function ConsolePage({ searchParams }: { searchParams: Promise<{ session?: string | string[]; link?: string | string[] }> }) {
+export default async function ConsolePage({
+  searchParams,
+}: {
+  searchParams: Promise<{ session?: string | string[]; link?: string | string[] }>;
+}) {
   const user = await currentUser();
   const params = await searchParams;
   const session = one(params.session);

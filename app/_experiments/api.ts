@@ -1,7 +1,7 @@
 /// Calls to the experiments API (app/api/README.md, "Experiments") for the room; every
 /// read carries a read-only link's token when the visitor came with one.
-import { errorOf, send, withLink } from "@/app/_console/api/client";
-import type { Experiment, ExperimentSummary, MemberAnswer, RowsPage, RowStatus, UploadPreview } from "./types";
+import { errorOf, send, withLink } from "@/app/_client/fetch";
+import type { Experiment, ExperimentSummary, Row, MemberAnswer, RowsPage, RowStatus, UploadPreview } from "./types";
 
 export const experimentKeys = {
   list: "/api/experiments",
@@ -30,11 +30,13 @@ export const exportUrl = (id: string, format: "csv" | "json" | "latex", link: st
   withLink(`/api/experiments/${id}/export?format=${format}`, link);
 
 /// Every row in member order, read a page (the API's largest, 1000) at a time, up to `cap`.
-export async function allRows(id: string, link: string | null, cap: number): Promise<{ rows: RowsPage["rows"]; matched: number }> {
-  const rows: RowsPage["rows"] = [];
+export async function allRows(id: string, link: string | null, cap: number): Promise<{ rows: Row[]; matched: number }> {
+  const rows: Row[] = [];
   let matched = 0;
   for (let offset = 0; offset < cap; offset += 1000) {
-    const page = await send<RowsPage>(rowsUrl(id, { offset, limit: Math.min(1000, cap - offset), sort: "index", order: "asc", status: [], where: [] }, link));
+    const page = await send<RowsPage>(
+      rowsUrl(id, { offset, limit: Math.min(1000, cap - offset), sort: "index", order: "asc", status: [], where: [] }, link),
+    );
     rows.push(...page.rows);
     matched = page.matched;
     if (rows.length >= matched || page.rows.length === 0) break;
@@ -57,7 +59,10 @@ export const previewUpload = (body: { format: "text" | "json"; ring: string; con
   send<{ preview: UploadPreview }>("/api/experiments/uploads/preview", { method: "POST", body: JSON.stringify(body) });
 
 export const createUpload = (body: { sessionId: string; name: string; format: "text" | "json"; ring: string; content: string }) =>
-  send<{ upload: { id: string; name: string; length: number } }>("/api/experiments/uploads", { method: "POST", body: JSON.stringify(body) });
+  send<{ upload: { id: string; name: string; length: number } }>("/api/experiments/uploads", {
+    method: "POST",
+    body: JSON.stringify(body),
+  });
 
 export const createFromUpload = (body: { sessionId: string; uploadId: string; probe: string; ringName?: string }) =>
   send<{ experiment: Experiment }>("/api/experiments", { method: "POST", body: JSON.stringify(body) });

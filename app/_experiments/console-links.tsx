@@ -5,8 +5,8 @@
 import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
 import useSWR from "swr";
-import { fetchJson, messageOf } from "@/app/_console/api/client";
-import type { Cell } from "@/app/_console/api/types";
+import { fetchJson, messageOf } from "@/app/_client/fetch";
+import type { Cell } from "@/lib/wire/reading";
 import type { PaletteCommand } from "@/app/_console/views/command-palette";
 import { buttonSecondary, focusRing } from "@/app/_console/views/styles";
 import { actOn, createFromCell } from "./api";
@@ -16,7 +16,8 @@ import { isActive, type ExperimentSummary } from "./types";
 /// Whether a cell's program has a sweep the server can run as an experiment.
 export const hasSweep = (source: string): boolean => /\bsweep\s*\(/.test(source);
 
-const sessionExperimentsKey = (sessionId: string | null, signedIn: boolean) => (sessionId && signedIn ? `/api/experiments?session=${sessionId}` : null);
+const sessionExperimentsKey = (sessionId: string | null, signedIn: boolean) =>
+  sessionId && signedIn ? `/api/experiments?session=${sessionId}` : null;
 
 export function useSessionExperiments(sessionId: string | null, signedIn: boolean) {
   return useSWR<{ experiments: ExperimentSummary[] }>(sessionExperimentsKey(sessionId, signedIn), fetchJson, {
@@ -32,7 +33,17 @@ function experimentIdsIn(cell: Cell): string[] {
   });
 }
 
-export function CellExperiments({ cell, sessionId, canEdit, signedIn }: { cell: Cell; sessionId: string | null; canEdit: boolean; signedIn: boolean }) {
+export function CellExperiments({
+  cell,
+  sessionId,
+  canEdit,
+  signedIn,
+}: {
+  cell: Cell;
+  sessionId: string | null;
+  canEdit: boolean;
+  signedIn: boolean;
+}) {
   const list = useSessionExperiments(sessionId, signedIn);
   const router = useRouter();
   const [busy, setBusy] = useState(false);
@@ -56,7 +67,11 @@ export function CellExperiments({ cell, sessionId, canEdit, signedIn }: { cell: 
   return (
     <div className="flex flex-wrap items-center gap-2 text-sm" data-testid="cell-experiments">
       {made.map((e) => (
-        <a key={e.id} href={`/experiments/${e.id}`} className={`inline-flex items-center gap-1.5 underline underline-offset-2 ${focusRing}`}>
+        <a
+          key={e.id}
+          href={`/experiments/${e.id}`}
+          className={`inline-flex items-center gap-1.5 underline underline-offset-2 ${focusRing}`}
+        >
           Experiment: {e.done}/{e.total} <ExperimentStatusBadge status={e.status} />
         </a>
       ))}
@@ -66,7 +81,13 @@ export function CellExperiments({ cell, sessionId, canEdit, signedIn }: { cell: 
         </a>
       ))}
       {canEdit && hasSweep(cell.source) && (
-        <button type="button" className={buttonSecondary} disabled={busy} onClick={() => void create()} title="Run this cell's sweep in the background, one job per member, and open its room">
+        <button
+          type="button"
+          className={buttonSecondary}
+          disabled={busy}
+          onClick={() => void create()}
+          title="Run this cell's sweep in the background, one job per member, and open its room"
+        >
           {busy ? "Starting…" : "Run as an experiment"}
         </button>
       )}
@@ -80,12 +101,26 @@ export function CellExperiments({ cell, sessionId, canEdit, signedIn }: { cell: 
 }
 
 /// The palette's experiment commands for the open session.
-export function useExperimentCommands(sessionId: string | null, cells: readonly Cell[] | undefined, canEdit: boolean, signedIn: boolean, notify: (s: string) => void): PaletteCommand[] {
+export function useExperimentCommands(
+  sessionId: string | null,
+  cells: readonly Cell[] | undefined,
+  canEdit: boolean,
+  signedIn: boolean,
+  notify: (s: string) => void,
+): PaletteCommand[] {
   const list = useSessionExperiments(sessionId, signedIn);
   const router = useRouter();
   return useMemo(() => {
     if (!signedIn) return [];
-    const out: PaletteCommand[] = [{ id: "experiments", group: "Experiments", label: "Open the experiments list", keywords: ["sweep", "table", "plot"], run: () => router.push("/experiments") }];
+    const out: PaletteCommand[] = [
+      {
+        id: "experiments",
+        group: "Experiments",
+        label: "Open the experiments list",
+        keywords: ["sweep", "table", "plot"],
+        run: () => router.push("/experiments"),
+      },
+    ];
     const lastSweep = [...(cells ?? [])].reverse().find((c) => hasSweep(c.source));
     if (canEdit && sessionId && lastSweep) {
       out.push({
@@ -101,7 +136,13 @@ export function useExperimentCommands(sessionId: string | null, cells: readonly 
       });
     }
     for (const e of list.data?.experiments ?? []) {
-      out.push({ id: `experiment-open-${e.id}`, group: "Experiments", label: `Open experiment: ${e.title}`, keywords: [e.status], run: () => router.push(`/experiments/${e.id}`) });
+      out.push({
+        id: `experiment-open-${e.id}`,
+        group: "Experiments",
+        label: `Open experiment: ${e.title}`,
+        keywords: [e.status],
+        run: () => router.push(`/experiments/${e.id}`),
+      });
       if (!canEdit) continue;
       const act = (action: "pause" | "resume" | "cancel", done: string) => () =>
         void actOn(e.id, action).then(
@@ -111,9 +152,27 @@ export function useExperimentCommands(sessionId: string | null, cells: readonly 
           },
           (err) => notify(`Could not ${action} ${e.title}: ${messageOf(err)}`),
         );
-      if (isActive(e.status)) out.push({ id: `experiment-pause-${e.id}`, group: "Experiments", label: `Pause experiment: ${e.title}`, run: act("pause", "Paused") });
-      if (e.status === "paused") out.push({ id: `experiment-resume-${e.id}`, group: "Experiments", label: `Resume experiment: ${e.title}`, run: act("resume", "Resumed") });
-      if (isActive(e.status) || e.status === "paused") out.push({ id: `experiment-cancel-${e.id}`, group: "Experiments", label: `Cancel experiment: ${e.title}`, run: act("cancel", "Cancelled") });
+      if (isActive(e.status))
+        out.push({
+          id: `experiment-pause-${e.id}`,
+          group: "Experiments",
+          label: `Pause experiment: ${e.title}`,
+          run: act("pause", "Paused"),
+        });
+      if (e.status === "paused")
+        out.push({
+          id: `experiment-resume-${e.id}`,
+          group: "Experiments",
+          label: `Resume experiment: ${e.title}`,
+          run: act("resume", "Resumed"),
+        });
+      if (isActive(e.status) || e.status === "paused")
+        out.push({
+          id: `experiment-cancel-${e.id}`,
+          group: "Experiments",
+          label: `Cancel experiment: ${e.title}`,
+          run: act("cancel", "Cancelled"),
+        });
     }
     return out;
   }, [signedIn, canEdit, sessionId, cells, list, router, notify]);

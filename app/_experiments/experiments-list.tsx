@@ -4,8 +4,9 @@
 import Link from "next/link";
 import { useState } from "react";
 import useSWR from "swr";
-import { fetchJson, keys, messageOf } from "@/app/_console/api/client";
-import type { SessionSummary } from "@/app/_console/api/types";
+import { fetchJson, messageOf } from "@/app/_client/fetch";
+import { keys } from "@/app/_console/api/client";
+import type { SessionSummary } from "@/lib/wire/reading";
 import { buttonSecondary, focusRing, panelHeading } from "@/app/_console/views/styles";
 import { experimentKeys } from "./api";
 import { ExperimentStatusBadge } from "./experiment-status";
@@ -40,7 +41,13 @@ export function ExperimentsList() {
               ["shared", "Shared with me and my teams"],
             ] as const
           ).map(([w, label]) => (
-            <button key={w} type="button" aria-pressed={whose === w} onClick={() => setWhose(w)} className={`${buttonSecondary} ${whose === w ? "!bg-ink !text-paper dark:!bg-signal dark:!text-night" : ""}`}>
+            <button
+              key={w}
+              type="button"
+              aria-pressed={whose === w}
+              onClick={() => setWhose(w)}
+              className={`${buttonSecondary} ${whose === w ? "!bg-ink !text-paper dark:!bg-signal dark:!text-night" : ""}`}
+            >
               {label}
             </button>
           ))}
@@ -61,11 +68,21 @@ export function ExperimentsList() {
           <table className="w-full border-collapse text-sm" data-testid="experiments-list">
             <thead className="bg-paper-deep/60 text-left dark:bg-night-panel">
               <tr>
-                <th scope="col" className="px-3 py-1.5">Experiment</th>
-                <th scope="col" className="px-3 py-1.5">Status</th>
-                <th scope="col" className="px-3 py-1.5">Done</th>
-                <th scope="col" className="px-3 py-1.5">Session</th>
-                <th scope="col" className="px-3 py-1.5">Created</th>
+                <th scope="col" className="px-3 py-1.5">
+                  Experiment
+                </th>
+                <th scope="col" className="px-3 py-1.5">
+                  Status
+                </th>
+                <th scope="col" className="px-3 py-1.5">
+                  Done
+                </th>
+                <th scope="col" className="px-3 py-1.5">
+                  Session
+                </th>
+                <th scope="col" className="px-3 py-1.5">
+                  Created
+                </th>
               </tr>
             </thead>
             <tbody>
@@ -91,13 +108,18 @@ export function ExperimentsList() {
                     <td className="px-3 py-1.5">
                       {s ? (
                         <span>
-                          {s.title} <span className="text-xs text-ink-soft dark:text-paper/60">· {s.access === "owner" ? "mine" : `${s.ownerName}'s, ${s.access}`}</span>
+                          {s.title}{" "}
+                          <span className="text-xs text-ink-soft dark:text-paper/60">
+                            · {s.access === "owner" ? "mine" : `${s.ownerName}'s, ${s.access}`}
+                          </span>
                         </span>
                       ) : (
                         "…"
                       )}
                     </td>
-                    <td className="whitespace-nowrap px-3 py-1.5 text-ink-soft dark:text-paper/70">{new Date(e.createdAt).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" })}</td>
+                    <td className="whitespace-nowrap px-3 py-1.5 text-ink-soft dark:text-paper/70">
+                      {new Date(e.createdAt).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" })}
+                    </td>
                   </tr>
                 );
               })}

@@ -3,7 +3,7 @@
 /// records family, seed, probe and engine version), and Markdown made here from the same
 /// rows with the same record in a caption paragraph.
 import { useState } from "react";
-import { messageOf } from "@/app/_console/api/client";
+import { messageOf } from "@/app/_client/fetch";
 import { buttonSecondary } from "@/app/_console/views/styles";
 import { allRows, exportUrl } from "./api";
 import { fileStem } from "./data/format";
@@ -29,7 +29,11 @@ export function ExportMenu({ experiment, link }: { experiment: Experiment; link:
   return (
     <details className="relative">
       <summary className={`${buttonSecondary} cursor-pointer list-none`}>Export</summary>
-      <div className="absolute right-0 z-20 mt-1 flex w-60 flex-col gap-1 rounded-md border border-ink/20 bg-white p-2 shadow-lg dark:border-paper/20 dark:bg-night-panel" role="group" aria-label="Export the table">
+      <div
+        className="absolute right-0 z-20 mt-1 flex w-60 flex-col gap-1 rounded-md border border-ink/20 bg-white p-2 shadow-lg dark:border-paper/20 dark:bg-night-panel"
+        role="group"
+        aria-label="Export the table"
+      >
         <a className={linkButton} href={exportUrl(experiment.id, "csv", link)} download>
           Table as CSV
         </a>

@@ -7,7 +7,7 @@ import Link from "next/link";
 import { usePathname } from "next/navigation";
 import { useEffect, useRef, useState } from "react";
 import useSWR from "swr";
-import { fetchJson } from "@/app/_console/api/client";
+import { fetchJson } from "@/app/_client/fetch";
 import { buttonQuiet, focusRing } from "@/app/_console/views/styles";
 import { experimentKeys } from "./api";
 import { isActive, type ExperimentStatus, type ExperimentSummary } from "./types";
@@ -66,11 +66,17 @@ export function FinishWatcher() {
 
   if (notices.length === 0) return null;
   return (
-    <div className="fixed bottom-4 right-4 z-50 flex w-[min(24rem,92vw)] flex-col gap-2" role="status" aria-live="polite" data-testid="finish-notices">
+    <div
+      className="fixed bottom-4 right-4 z-50 flex w-[min(24rem,92vw)] flex-col gap-2"
+      role="status"
+      aria-live="polite"
+      data-testid="finish-notices"
+    >
       {notices.map((n) => (
         <div key={n.id} className="rounded-md border border-ink/20 bg-white p-3 text-sm shadow-lg dark:border-paper/20 dark:bg-night-panel">
           <p>
-            The experiment <strong>{n.title}</strong> {n.status === "done" ? "finished" : "was cancelled"}: {n.done} of {n.total} members, {n.failures} not ok.
+            The experiment <strong>{n.title}</strong> {n.status === "done" ? "finished" : "was cancelled"}: {n.done} of {n.total} members,{" "}
+            {n.failures} not ok.
           </p>
           <p className="mt-1 flex gap-2">
             <Link href={`/experiments/${n.id}`} className={`underline ${focusRing}`}>

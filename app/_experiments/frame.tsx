@@ -11,7 +11,8 @@ export function ExperimentsFrame({ userName, children }: { userName: string | nu
     <div className="flex min-h-screen flex-col bg-paper text-ink dark:bg-night dark:text-paper">
       <header className="flex flex-wrap items-center justify-between gap-3 border-b border-ink/10 bg-white px-5 py-3 dark:border-paper/10 dark:bg-night-panel">
         <p className="font-mono text-lg font-semibold tracking-tight">
-          Ringside<span className="text-signal">.</span> <span className="text-sm font-normal text-ink-soft dark:text-paper/60">experiments</span>
+          Ringside<span className="text-signal">.</span>{" "}
+          <span className="text-sm font-normal text-ink-soft dark:text-paper/60">experiments</span>
         </p>
         <nav className="flex items-center gap-4 text-sm">
           {userName !== null && (

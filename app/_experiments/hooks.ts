@@ -2,7 +2,7 @@
 /// The room's live documents: the experiment (polled while it runs) and its rows. SWR
 /// keeps one cache, so the table and the plots share the rows they both read.
 import useSWR from "swr";
-import { fetchJson } from "@/app/_console/api/client";
+import { fetchJson } from "@/app/_client/fetch";
 import { allRows, experimentKeys } from "./api";
 import { isActive, type ExperimentAnswer, type Row } from "./types";
 

@@ -20,7 +20,7 @@ import {
 } from "@tanstack/react-table";
 import { Fragment, useMemo, useState } from "react";
 import useSWR from "swr";
-import { fetchJson, messageOf } from "@/app/_console/api/client";
+import { fetchJson, messageOf } from "@/app/_client/fetch";
 import { buttonQuiet, buttonSecondary, focusRing, panelHeading } from "@/app/_console/views/styles";
 import { rowsUrl } from "./api";
 import { cellNumber, cellText } from "./data/cells";
@@ -60,7 +60,7 @@ export function LiveTable({
   link: string | null;
   canEdit: boolean;
   /// every row so far, when the experiment is small enough to be read whole
-  allRows: { rows: Row[] | undefined; error: unknown };
+  allRows: { rows: readonly Row[] | undefined; error: unknown };
 }) {
   const serverSide = experiment.total > CLIENT_ROWS;
   const [sorting, setSorting] = useState<SortingState>([{ id: "index", desc: false }]);
@@ -79,12 +79,18 @@ export function LiveTable({
     return f ? [whereParam(c, f)] : [];
   });
   const serverKey = serverSide
-    ? rowsUrl(experiment.id, { offset: pageIndex * PAGE_SIZE, limit: PAGE_SIZE, sort: sort.id, order: sort.desc ? "desc" : "asc", status: [...statuses], where }, link)
+    ? rowsUrl(
+        experiment.id,
+        { offset: pageIndex * PAGE_SIZE, limit: PAGE_SIZE, sort: sort.id, order: sort.desc ? "desc" : "asc", status: [...statuses], where },
+        link,
+      )
     : null;
   // the finished count in the key reads the page again as rows arrive, and once more at the end
-  const page = useSWR<RowsPage>(serverKey ? [serverKey, experiment.done] : null, ([url]: [string, number]) => fetchJson<RowsPage>(url), { keepPreviousData: true });
+  const page = useSWR<RowsPage>(serverKey ? [serverKey, experiment.done] : null, ([url]: [string, number]) => fetchJson<RowsPage>(url), {
+    keepPreviousData: true,
+  });
 
-  const data = serverSide ? (page.data?.rows ?? []) : (allRows.rows ?? []);
+  const data = useMemo(() => [...(serverSide ? (page.data?.rows ?? []) : (allRows.rows ?? []))], [serverSide, page.data, allRows.rows]);
   const columnFilters: ColumnFiltersState = useMemo(
     () =>
       serverSide
@@ -121,7 +127,8 @@ export function LiveTable({
       setPageIndex(0);
     },
     onColumnVisibilityChange: setVisibility,
-    onPaginationChange: (u) => setPageIndex((p) => (typeof u === "function" ? u({ pageIndex: p, pageSize: PAGE_SIZE }).pageIndex : u.pageIndex)),
+    onPaginationChange: (u) =>
+      setPageIndex((p) => (typeof u === "function" ? u({ pageIndex: p, pageSize: PAGE_SIZE }).pageIndex : u.pageIndex)),
     getCoreRowModel: getCoreRowModel(),
     manualSorting: serverSide,
     manualFiltering: serverSide,
@@ -158,7 +165,8 @@ export function LiveTable({
       <div className="flex flex-wrap items-center gap-3">
         <StatusChips counts={experiment.progress.byStatus} chosen={statuses} onToggle={toggleStatus} />
         <span className="text-sm text-ink-soft dark:text-paper/70" data-testid="rows-matched" aria-live="polite">
-          {matched} of {Math.max(experiment.done, serverSide ? 0 : data.length)} rows{experiment.done < experiment.total ? ` (${experiment.total} members)` : ""}
+          {matched} of {Math.max(experiment.done, serverSide ? 0 : data.length)} rows
+          {experiment.done < experiment.total ? ` (${experiment.total} members)` : ""}
           {serverSide ? " · sorted and filtered by the database" : ""}
         </span>
         <details className="relative ml-auto">
@@ -167,7 +175,12 @@ export function LiveTable({
             <legend className="sr-only">Columns shown</legend>
             {table.getAllLeafColumns().map((col) => (
               <label key={col.id} className="flex items-center gap-2 text-sm">
-                <input type="checkbox" checked={col.getIsVisible()} disabled={!col.getCanHide()} onChange={col.getToggleVisibilityHandler()} />
+                <input
+                  type="checkbox"
+                  checked={col.getIsVisible()}
+                  disabled={!col.getCanHide()}
+                  onChange={col.getToggleVisibilityHandler()}
+                />
                 <span className="font-mono">{col.id}</span>
               </label>
             ))}
@@ -191,8 +204,19 @@ export function LiveTable({
                   {g.headers.map((h) => {
                     const dir = h.column.getIsSorted();
                     return (
-                      <th key={h.id} scope="col" aria-sort={dir === "asc" ? "ascending" : dir === "desc" ? "descending" : "none"} className="whitespace-nowrap px-2 pt-1.5 text-left font-semibold">
-                        <button type="button" className={`inline-flex items-center gap-1 rounded ${focusRing}`} onClick={h.column.getToggleSortingHandler()} aria-label={`Sort by ${h.column.id}`} title={`Sort by ${h.column.id}`}>
+                      <th
+                        key={h.id}
+                        scope="col"
+                        aria-sort={dir === "asc" ? "ascending" : dir === "desc" ? "descending" : "none"}
+                        className="whitespace-nowrap px-2 pt-1.5 text-left font-semibold"
+                      >
+                        <button
+                          type="button"
+                          className={`inline-flex items-center gap-1 rounded ${focusRing}`}
+                          onClick={h.column.getToggleSortingHandler()}
+                          aria-label={`Sort by ${h.column.id}`}
+                          title={`Sort by ${h.column.id}`}
+                        >
                           <span className="font-mono">{flexRender(h.column.columnDef.header, h.getContext())}</span>
                           <span aria-hidden className="text-signal">
                             {dir === "asc" ? "▲" : dir === "desc" ? "▼" : "·"}
@@ -218,7 +242,10 @@ export function LiveTable({
                           onChange={(e) => setFilter(h.column.id, e.target.value)}
                         />
                       ) : (
-                        <span className="text-xs font-normal text-ink-soft dark:text-paper/60" title="The API filters a large experiment on the probe's columns and the status">
+                        <span
+                          className="text-xs font-normal text-ink-soft dark:text-paper/60"
+                          title="The API filters a large experiment on the probe's columns and the status"
+                        >
                           —
                         </span>
                       )}
@@ -233,7 +260,10 @@ export function LiveTable({
               const open = expanded === r.original.index;
               return (
                 <Fragment key={r.id}>
-                  <tr className="border-t border-ink/10 hover:bg-paper-deep/40 dark:border-paper/10 dark:hover:bg-night-line/50" data-row-index={r.original.index}>
+                  <tr
+                    className="border-t border-ink/10 hover:bg-paper-deep/40 dark:border-paper/10 dark:hover:bg-night-line/50"
+                    data-row-index={r.original.index}
+                  >
                     <td className="px-1 align-top">
                       <button
                         type="button"
@@ -246,7 +276,11 @@ export function LiveTable({
                       </button>
                     </td>
                     {r.getVisibleCells().map((cell) => (
-                      <td key={cell.id} className={`px-2 py-1 align-top ${cell.column.id === "label" ? "max-w-[22rem] truncate font-mono text-xs" : "font-mono"}`} title={cell.column.id === "label" ? r.original.label : undefined}>
+                      <td
+                        key={cell.id}
+                        className={`px-2 py-1 align-top ${cell.column.id === "label" ? "max-w-[22rem] truncate font-mono text-xs" : "font-mono"}`}
+                        title={cell.column.id === "label" ? r.original.label : undefined}
+                      >
                         {cell.column.id === "status" ? <RowStatusBadge status={r.original.status} /> : cellText(r.original, cell.column.id)}
                       </td>
                     ))}
@@ -273,13 +307,23 @@ export function LiveTable({
       </div>
       {pageCount > 1 && (
         <nav aria-label="Pages of rows" className="flex items-center gap-2 text-sm">
-          <button type="button" className={buttonSecondary} disabled={pageIndex === 0} onClick={() => setPageIndex((p) => Math.max(0, p - 1))}>
+          <button
+            type="button"
+            className={buttonSecondary}
+            disabled={pageIndex === 0}
+            onClick={() => setPageIndex((p) => Math.max(0, p - 1))}
+          >
             Previous
           </button>
           <span className={panelHeading}>
             page {pageIndex + 1} of {pageCount}
           </span>
-          <button type="button" className={buttonSecondary} disabled={pageIndex + 1 >= pageCount} onClick={() => setPageIndex((p) => p + 1)}>
+          <button
+            type="button"
+            className={buttonSecondary}
+            disabled={pageIndex + 1 >= pageCount}
+            onClick={() => setPageIndex((p) => p + 1)}
+          >
             Next
           </button>
         </nav>

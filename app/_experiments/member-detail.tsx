@@ -4,8 +4,8 @@
 /// and "Open in a session", which puts the member into a new cell.
 import { useState } from "react";
 import useSWR from "swr";
-import { fetchJson, messageOf } from "@/app/_console/api/client";
-import type { ValueJson } from "@/app/_console/api/types";
+import { fetchJson, messageOf } from "@/app/_client/fetch";
+import type { ValueReading as ValueJson } from "@/lib/wire/reading";
 import { buttonSecondary, panelHeading } from "@/app/_console/views/styles";
 import { ValueView } from "@/app/_console/views/value-view";
 import { experimentKeys, runAsCell } from "./api";
@@ -13,7 +13,17 @@ import { memberCellSource } from "./data/member-cell";
 import type { Experiment, MemberAnswer, Row } from "./types";
 import { RowStatusBadge } from "./status-chips";
 
-export function MemberDetail({ experiment, row, link, canEdit }: { experiment: Experiment; row: Row; link: string | null; canEdit: boolean }) {
+export function MemberDetail({
+  experiment,
+  row,
+  link,
+  canEdit,
+}: {
+  experiment: Experiment;
+  row: Row;
+  link: string | null;
+  canEdit: boolean;
+}) {
   const member = useSWR<MemberAnswer>(experimentKeys.member(experiment.id, row.index, link), fetchJson);
   const [busy, setBusy] = useState(false);
   const [problem, setProblem] = useState<string | null>(null);
@@ -45,8 +55,16 @@ export function MemberDetail({ experiment, row, link, canEdit }: { experiment: E
           </button>
         )}
       </div>
-      {member.error && <p role="alert" className="text-sm text-red-700 dark:text-red-300">{messageOf(member.error)}</p>}
-      {member.data ? <ValueView value={member.data.member} /> : !member.error && <p className="text-sm text-ink-soft">Reading the member…</p>}
+      {member.error && (
+        <p role="alert" className="text-sm text-red-700 dark:text-red-300">
+          {messageOf(member.error)}
+        </p>
+      )}
+      {member.data ? (
+        <ValueView value={member.data.member} />
+      ) : (
+        !member.error && <p className="text-sm text-ink-soft">Reading the member…</p>
+      )}
       {row.message && (
         <p className="rounded bg-red-50 px-2 py-1 text-sm text-red-800 dark:bg-red-900/30 dark:text-red-200" data-testid="row-message">
           {row.message}
@@ -62,7 +80,11 @@ export function MemberDetail({ experiment, row, link, canEdit }: { experiment: E
           ))}
         </div>
       )}
-      {problem && <p role="alert" className="text-sm text-red-700 dark:text-red-300">{problem}</p>}
+      {problem && (
+        <p role="alert" className="text-sm text-red-700 dark:text-red-300">
+          {problem}
+        </p>
+      )}
     </div>
   );
 }

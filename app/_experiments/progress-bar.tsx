@@ -19,7 +19,10 @@ export function ProgressBar({ experiment }: { experiment: Experiment }) {
         aria-valuetext={`${done} of ${total} members done`}
         className="relative h-2.5 overflow-hidden rounded bg-ink/10 dark:bg-paper/10"
       >
-        <div className={`absolute inset-y-0 left-0 rounded ${experiment.failures ? "bg-signal" : "bg-ink-soft dark:bg-signal-soft"}`} style={{ width: `${Math.max(fraction * 100, done > 0 ? 1 : 0)}%` }} />
+        <div
+          className={`absolute inset-y-0 left-0 rounded ${experiment.failures ? "bg-signal" : "bg-ink-soft dark:bg-signal-soft"}`}
+          style={{ width: `${Math.max(fraction * 100, done > 0 ? 1 : 0)}%` }}
+        />
       </div>
       <p className="flex flex-wrap gap-x-4 text-sm text-ink-soft dark:text-paper/70" aria-live="polite" data-testid="progress-text">
         <span>

@@ -6,8 +6,9 @@ import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState, type KeyboardEvent } from "react";
 import useSWR from "swr";
-import { fetchJson, keys, messageOf } from "@/app/_console/api/client";
-import type { SessionDetail } from "@/app/_console/api/types";
+import { fetchJson, messageOf } from "@/app/_client/fetch";
+import { keys } from "@/app/_console/api/client";
+import type { SessionDetail } from "@/lib/wire/reading";
 import { Modal } from "@/app/_console/views/modal";
 import { ShareSessionPanel } from "@/app/_console/views/share-dialog";
 import { buttonPrimary, buttonSecondary, focusRing, panelHeading } from "@/app/_console/views/styles";
@@ -28,7 +29,19 @@ const TABS: [Tab, string][] = [
   ["recipe", "Recipe"],
 ];
 
-export function ExperimentRoom({ id, link, signedIn, initialTab, initialPlot }: { id: string; link: string | null; signedIn: boolean; initialTab: Tab; initialPlot?: PlotKind }) {
+export function ExperimentRoom({
+  id,
+  link,
+  signedIn,
+  initialTab,
+  initialPlot,
+}: {
+  id: string;
+  link: string | null;
+  signedIn: boolean;
+  initialTab: Tab;
+  initialPlot?: PlotKind;
+}) {
   const answer = useExperiment(id, link);
   const e = answer.data?.experiment;
   const canEdit = signedIn && answer.data?.canEdit === true;
@@ -61,7 +74,13 @@ export function ExperimentRoom({ id, link, signedIn, initialTab, initialPlot }: 
         return;
       }
       await answer.mutate();
-      setNotice(action === "pause" ? "Paused: running members finish, the rest wait." : action === "resume" ? "Resumed: the remaining members are queued." : "Cancelled: members without a row are marked cancelled.");
+      setNotice(
+        action === "pause"
+          ? "Paused: running members finish, the rest wait."
+          : action === "resume"
+            ? "Resumed: the remaining members are queued."
+            : "Cancelled: members without a row are marked cancelled.",
+      );
     } catch (err) {
       setNotice(`Could not ${action === "rerun" ? "run it again" : action}: ${messageOf(err)}`);
     } finally {
@@ -89,7 +108,10 @@ export function ExperimentRoom({ id, link, signedIn, initialTab, initialPlot }: 
               Experiments
             </Link>{" "}
             · session{" "}
-            <Link href={link ? `/?session=${e.sessionId}&link=${encodeURIComponent(link)}` : `/?session=${e.sessionId}`} className={`underline ${focusRing}`}>
+            <Link
+              href={link ? `/?session=${e.sessionId}&link=${encodeURIComponent(link)}` : `/?session=${e.sessionId}`}
+              className={`underline ${focusRing}`}
+            >
               {session.data?.session.title ?? "…"}
             </Link>
           </p>
@@ -97,7 +119,10 @@ export function ExperimentRoom({ id, link, signedIn, initialTab, initialPlot }: 
             <span className="break-all">{e.title}</span>
             <ExperimentStatusBadge status={e.status} />
             {!canEdit && (
-              <span className="rounded bg-signal-soft px-1.5 py-0.5 text-xs font-normal text-ink dark:bg-signal/30 dark:text-paper" data-testid="read-only-badge">
+              <span
+                className="rounded bg-signal-soft px-1.5 py-0.5 text-xs font-normal text-ink dark:bg-signal/30 dark:text-paper"
+                data-testid="read-only-badge"
+              >
                 {link && !signedIn ? "read-only shared link" : "read-only"}
               </span>
             )}
@@ -120,7 +145,13 @@ export function ExperimentRoom({ id, link, signedIn, initialTab, initialPlot }: 
             </button>
           )}
           {canEdit && (e.status === "done" || e.status === "cancelled") && (
-            <button type="button" className={buttonSecondary} disabled={busy} onClick={() => void act("rerun")} title="A new experiment with the same program, members, seeds and probe">
+            <button
+              type="button"
+              className={buttonSecondary}
+              disabled={busy}
+              onClick={() => void act("rerun")}
+              title="A new experiment with the same program, members, seeds and probe"
+            >
               Run again
             </button>
           )}
@@ -135,12 +166,22 @@ export function ExperimentRoom({ id, link, signedIn, initialTab, initialPlot }: 
 
       <div className="flex flex-col gap-1">
         <ProgressBar experiment={e} />
-        <p role="status" aria-live="polite" className="min-h-[1.25rem] text-sm text-ink-soft dark:text-signal-soft" data-testid="room-notice">
+        <p
+          role="status"
+          aria-live="polite"
+          className="min-h-[1.25rem] text-sm text-ink-soft dark:text-signal-soft"
+          data-testid="room-notice"
+        >
           {notice}
         </p>
       </div>
 
-      <div role="tablist" aria-label="Views of the experiment" className="flex gap-1 border-b border-ink/10 dark:border-paper/10" onKeyDown={onTabKey}>
+      <div
+        role="tablist"
+        aria-label="Views of the experiment"
+        className="flex gap-1 border-b border-ink/10 dark:border-paper/10"
+        onKeyDown={onTabKey}
+      >
         {TABS.map(([t, label]) => (
           <button
             key={t}
@@ -159,15 +200,30 @@ export function ExperimentRoom({ id, link, signedIn, initialTab, initialPlot }: 
       </div>
 
       <div role="tabpanel" id={`panel-${tab}`} aria-labelledby={`tab-${tab}`} className="min-w-0">
-        {tab === "table" && <LiveTable experiment={e} link={link} canEdit={canEdit} allRows={{ rows: e.total <= CLIENT_ROWS ? rows.data?.rows : undefined, error: rows.error }} />}
-        {tab === "plots" && <PlotPanel rows={rows.data?.rows ?? []} columns={e.columns} fileStem={fileStem(e.title, e.id)} truncatedTo={truncated} initialKind={initialPlot} />}
+        {tab === "table" && (
+          <LiveTable
+            experiment={e}
+            link={link}
+            canEdit={canEdit}
+            allRows={{ rows: e.total <= CLIENT_ROWS ? rows.data?.rows : undefined, error: rows.error }}
+          />
+        )}
+        {tab === "plots" && (
+          <PlotPanel
+            rows={rows.data?.rows ?? []}
+            columns={e.columns}
+            fileStem={fileStem(e.title, e.id)}
+            truncatedTo={truncated}
+            initialKind={initialPlot}
+          />
+        )}
         {tab === "recipe" && <Recipe experiment={e} />}
       </div>
 
       <Modal open={sharing} title={`Share “${session.data?.session.title ?? "the session"}”`} onClose={() => setSharing(false)}>
         <p className="text-sm">
-          An experiment is shared with its session: whoever may read the session reads this experiment; editors may pause, resume and cancel it. A published read-only link opens this page
-          signed out too.
+          An experiment is shared with its session: whoever may read the session reads this experiment; editors may pause, resume and cancel
+          it. A published read-only link opens this page signed out too.
         </p>
         <ShareSessionPanel sessionId={e.sessionId} onChanged={setNotice} />
         <ExperimentLink experimentId={e.id} sessionId={e.sessionId} />
@@ -180,13 +236,22 @@ export function ExperimentRoom({ id, link, signedIn, initialTab, initialPlot }: 
 function ExperimentLink({ experimentId, sessionId }: { experimentId: string; sessionId: string }) {
   const sharing = useSWR<{ link: { url: string | null } }>(keys.sessionShares(sessionId), fetchJson);
   const url = sharing.data?.link.url;
-  if (!url) return <p className="text-sm text-ink-soft dark:text-paper/70">Publish the read-only link above to get an address for this experiment.</p>;
+  if (!url)
+    return (
+      <p className="text-sm text-ink-soft dark:text-paper/70">Publish the read-only link above to get an address for this experiment.</p>
+    );
   const token = new URL(url, window.location.origin).searchParams.get("link");
   const address = `${window.location.origin}/experiments/${experimentId}?link=${encodeURIComponent(token ?? "")}`;
   return (
     <label className="flex flex-col gap-1 text-sm">
       <span className={panelHeading}>Read-only address of this experiment</span>
-      <input readOnly value={address} data-testid="experiment-link" className="rounded-md border border-ink/20 bg-white px-2 py-1 font-mono text-xs dark:border-paper/20 dark:bg-night" onFocus={(ev) => ev.currentTarget.select()} />
+      <input
+        readOnly
+        value={address}
+        data-testid="experiment-link"
+        className="rounded-md border border-ink/20 bg-white px-2 py-1 font-mono text-xs dark:border-paper/20 dark:bg-night"
+        onFocus={(ev) => ev.currentTarget.select()}
+      />
     </label>
   );
 }

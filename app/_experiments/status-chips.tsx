@@ -11,7 +11,15 @@ export const ROW_STATUS_STYLE: Record<RowStatus, string> = {
   cancelled: "bg-paper-deep text-ink-soft dark:bg-night-line dark:text-paper/70",
 };
 
-export function StatusChips({ counts, chosen, onToggle }: { counts: Record<RowStatus, number>; chosen: ReadonlySet<RowStatus>; onToggle: (s: RowStatus) => void }) {
+export function StatusChips({
+  counts,
+  chosen,
+  onToggle,
+}: {
+  counts: Record<RowStatus, number>;
+  chosen: ReadonlySet<RowStatus>;
+  onToggle: (s: RowStatus) => void;
+}) {
   return (
     <div role="group" aria-label="Rows by status" className="flex flex-wrap items-center gap-1.5">
       {ROW_STATUSES.map((s) => (

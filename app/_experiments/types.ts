@@ -1,46 +1,22 @@
 /// The experiments API's JSON shapes as the room reads them (app/api/README.md,
 /// "Experiments"). Client-side types only: the room never imports server modules.
-import type { ValueJson } from "@/app/_console/api/types";
+import type {
+  Experiment as WireExperiment,
+  ExperimentRowView,
+  ExperimentSummary as WireExperimentSummary,
+  Progress as WireProgress,
+  RowPage,
+} from "@/lib/wire/experiments";
+import type { Reading, ValueReading as ValueJson } from "@/lib/wire/reading";
 
-export type ExperimentStatus = "queued" | "running" | "paused" | "done" | "cancelled";
-export type RowStatus = "ok" | "error" | "limit" | "cancelled";
+export type { ExperimentStatus, RowStatus } from "@/lib/wire/experiments";
+export { FIXED_COLUMNS } from "@/lib/wire/experiments";
+import type { ExperimentStatus, RowStatus } from "@/lib/wire/experiments";
 export const ROW_STATUSES: readonly RowStatus[] = ["ok", "error", "limit", "cancelled"];
-/// The columns every experiment table starts with (notation §11).
-export const FIXED_COLUMNS = ["index", "label", "status", "seconds"] as const;
 
-export interface Progress {
-  status: ExperimentStatus;
-  done: number;
-  total: number;
-  failures: number;
-  byStatus: Record<RowStatus, number>;
-  /// members per second over the last minute (null before any row)
-  rate: number | null;
-  etaSeconds: number | null;
-}
-
-export interface Experiment {
-  id: string;
-  sessionId: string;
-  title: string;
-  status: ExperimentStatus;
-  done: number;
-  total: number;
-  failures: number;
-  progress: Progress;
-  columns: string[];
-  program: string;
-  familyDefinition: string;
-  probe: string;
-  engineVersion: string;
-  limits: { timeLimitMs: number; heapLimitMb: number };
-  sourceCellId: string | null;
-  uploadId: string | null;
-  rerunOf: string | null;
-  createdAt: string;
-  startedAt: string | null;
-  finishedAt: string | null;
-}
+/// The wire shapes (lib/wire/experiments.ts) as a tolerant reader sees them.
+export type Progress = Reading<WireProgress>;
+export type Experiment = Reading<WireExperiment>;
 
 export interface ExperimentAnswer {
   experiment: Experiment;
@@ -48,41 +24,13 @@ export interface ExperimentAnswer {
   canEdit: boolean;
 }
 
-export interface ExperimentSummary {
-  id: string;
-  sessionId: string;
-  title: string;
-  status: ExperimentStatus;
-  familyDefinition: string;
-  probeText: string;
+export type ExperimentSummary = Reading<WireExperimentSummary> & {
   /// the console cell it was made from (null for uploads); added to the list by issue 15
-  sourceCellId?: string | null;
-  total: number;
-  done: number;
-  failures: number;
-  createdAt: string;
-  finishedAt: string | null;
-}
+  readonly sourceCellId?: string | null;
+};
 
-export interface Row {
-  index: number;
-  label: string;
-  status: RowStatus;
-  seconds: number;
-  /// the probe's fields as §9 values ({} unless ok)
-  fields: Record<string, ValueJson>;
-  message: string | null;
-  worker: string;
-  finishedAt: string;
-}
-
-export interface RowsPage {
-  columns: string[];
-  rows: Row[];
-  matched: number;
-  offset: number;
-  limit: number;
-}
+export type Row = Reading<ExperimentRowView>;
+export type RowsPage = Reading<RowPage>;
 
 export interface MemberAnswer {
   index: number;

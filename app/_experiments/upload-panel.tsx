@@ -5,8 +5,9 @@
 import { useRouter } from "next/navigation";
 import { useRef, useState, type DragEvent } from "react";
 import useSWR from "swr";
-import { fetchJson, keys, messageOf } from "@/app/_console/api/client";
-import type { SessionSummary } from "@/app/_console/api/types";
+import { fetchJson, messageOf } from "@/app/_client/fetch";
+import { keys } from "@/app/_console/api/client";
+import type { SessionSummary } from "@/lib/wire/reading";
 import { buttonPrimary, buttonSecondary, focusRing, panelHeading, textInput } from "@/app/_console/views/styles";
 import { ValueView } from "@/app/_console/views/value-view";
 import { createFromUpload, createUpload, previewUpload } from "./api";
@@ -16,7 +17,10 @@ const MAX_BYTES = 2 * 1024 * 1024;
 
 /// A name for the family from the file's name: an identifier of the notation.
 export function nameFromFile(file: string): string {
-  const stem = file.replace(/\.[^.]*$/, "").replace(/[^A-Za-z0-9_]+/g, "_").replace(/^[^A-Za-z]+/, "");
+  const stem = file
+    .replace(/\.[^.]*$/, "")
+    .replace(/[^A-Za-z0-9_]+/g, "_")
+    .replace(/^[^A-Za-z]+/, "");
   return stem.slice(0, 40) || "uploaded";
 }
 
@@ -87,13 +91,16 @@ export function UploadPanel() {
 
   const bad = preview !== null && preview.problemCount > 0;
   return (
-    <section aria-labelledby="upload-heading" className="flex min-w-0 flex-col gap-3 rounded-md border border-ink/10 bg-white/60 p-4 dark:border-paper/10 dark:bg-night-panel/60">
+    <section
+      aria-labelledby="upload-heading"
+      className="flex min-w-0 flex-col gap-3 rounded-md border border-ink/10 bg-white/60 p-4 dark:border-paper/10 dark:bg-night-panel/60"
+    >
       <h2 id="upload-heading" className="text-base font-semibold">
         Sweep a family file
       </h2>
       <p className="text-sm text-ink-soft dark:text-paper/70">
-        A text file with one ideal per line such as <code className="font-mono">&lt;x^2, y*z&gt;</code> (blank lines and # comments allowed), or a JSON list of generator lists. Nothing is
-        stored until you create the experiment.
+        A text file with one ideal per line such as <code className="font-mono">&lt;x^2, y*z&gt;</code> (blank lines and # comments
+        allowed), or a JSON list of generator lists. Nothing is stored until you create the experiment.
       </p>
       <div
         onDragOver={(e) => {
@@ -109,14 +116,27 @@ export function UploadPanel() {
         <button type="button" className={buttonSecondary} onClick={() => picker.current?.click()}>
           Choose a file…
         </button>
-        <input ref={picker} type="file" accept=".txt,.json,.fam,text/plain,application/json" className="sr-only" aria-label="Family file" tabIndex={-1} onChange={(e) => e.target.files?.[0] && void read(e.target.files[0])} />
+        <input
+          ref={picker}
+          type="file"
+          accept=".txt,.json,.fam,text/plain,application/json"
+          className="sr-only"
+          aria-label="Family file"
+          tabIndex={-1}
+          onChange={(e) => e.target.files?.[0] && void read(e.target.files[0])}
+        />
       </div>
       <div className="grid grid-cols-1 gap-3 md:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
         <label className="flex flex-col gap-1 text-sm">
           <span className={panelHeading}>Ring the ideals are read in</span>
           <span className="flex gap-2">
             <input className={`${textInput} font-mono`} value={ring} onChange={(e) => setRing(e.target.value)} aria-label="Ring" />
-            <button type="button" className={`${buttonSecondary} whitespace-nowrap`} disabled={!file || busy} onClick={() => void check(file, format, ring)}>
+            <button
+              type="button"
+              className={`${buttonSecondary} whitespace-nowrap`}
+              disabled={!file || busy}
+              onClick={() => void check(file, format, ring)}
+            >
               Check again
             </button>
           </span>
@@ -139,7 +159,8 @@ export function UploadPanel() {
         <div role="alert" className="flex flex-col gap-1" data-testid="upload-problems">
           <p className="text-sm font-medium text-red-800 dark:text-red-200">
             {preview.problemCount} bad {preview.unit}
-            {preview.problemCount === 1 ? "" : "s"}; nothing was created. Fix {preview.problemCount === 1 ? "it" : "them"} and choose the file again.
+            {preview.problemCount === 1 ? "" : "s"}; nothing was created. Fix {preview.problemCount === 1 ? "it" : "them"} and choose the
+            file again.
           </p>
           <ol className="max-h-60 overflow-y-auto rounded bg-red-50 px-3 py-2 font-mono text-xs text-red-900 dark:bg-red-900/30 dark:text-red-100">
             {preview.problems.map((p, k) => (
@@ -169,7 +190,12 @@ export function UploadPanel() {
           <div className="grid grid-cols-1 gap-3 md:grid-cols-3">
             <label className="flex flex-col gap-1 text-sm">
               <span className={panelHeading}>Session</span>
-              <select className={textInput} value={sessionId || editable[0]?.id || ""} onChange={(e) => setSessionId(e.target.value)} aria-label="Session">
+              <select
+                className={textInput}
+                value={sessionId || editable[0]?.id || ""}
+                onChange={(e) => setSessionId(e.target.value)}
+                aria-label="Session"
+              >
                 {editable.map((s) => (
                   <option key={s.id} value={s.id}>
                     {s.title}
@@ -179,7 +205,12 @@ export function UploadPanel() {
             </label>
             <label className="flex flex-col gap-1 text-sm">
               <span className={panelHeading}>Name of the family</span>
-              <input className={`${textInput} font-mono`} value={name} onChange={(e) => setName(e.target.value)} aria-label="Name of the family" />
+              <input
+                className={`${textInput} font-mono`}
+                value={name}
+                onChange={(e) => setName(e.target.value)}
+                aria-label="Name of the family"
+              />
             </label>
             <label className="flex flex-col gap-1 text-sm">
               <span className={panelHeading}>Probe (S is the ring)</span>
@@ -187,7 +218,12 @@ export function UploadPanel() {
             </label>
           </div>
           <div>
-            <button type="button" className={`${buttonPrimary} ${focusRing}`} disabled={busy || editable.length === 0} onClick={() => void create()}>
+            <button
+              type="button"
+              className={`${buttonPrimary} ${focusRing}`}
+              disabled={busy || editable.length === 0}
+              onClick={() => void create()}
+            >
               Create the experiment
             </button>
           </div>

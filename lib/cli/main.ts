@@ -8,6 +8,7 @@ import { evaluate, type EvalEvent } from "../notation/evaluate";
 import type { ErrorJson } from "../notation/json";
 
 export const USAGE = `usage: ringside eval [--json] [FILE]
+       ringside experiments list | status|pause|resume|cancel|rerun ID  (see lib/experiments/cli.ts)
   Evaluates a Ringside notation program from FILE (or standard input when FILE is
   omitted or "-") and prints each statement's result.
   --json   print one JSON object per line (notation.md §9) instead of text`;

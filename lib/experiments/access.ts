@@ -23,7 +23,8 @@ export async function requireExperimentAccess(
   } catch (error) {
     // an experiment of a session the caller cannot read stays invisible
     if (error instanceof HttpError && error.status === 404) throw notFound("The experiment");
-    if (error instanceof HttpError && error.status === 403) throw new HttpError(403, "forbidden", "You may read this experiment but not change it.");
+    if (error instanceof HttpError && error.status === 403)
+      throw new HttpError(403, "forbidden", "You may read this experiment but not change it.");
     throw error;
   }
 }

@@ -81,7 +81,12 @@ export async function runMember(probe: unknown, member: unknown, limits: MemberL
 }
 
 /// Evaluates a program up to its first sweep and returns the family and probe (§9 JSON).
-export async function planSweep(source: string, bindings: Binding[], currentRing: string | null, timeLimitMs: number): Promise<PlanOutcome> {
+export async function planSweep(
+  source: string,
+  bindings: Binding[],
+  currentRing: string | null,
+  timeLimitMs: number,
+): Promise<PlanOutcome> {
   const job: ExperimentJob = { kind: "plan", source, bindings, currentRing };
   const end = await experimentPool("requests").submit(job, { timeLimitMs }).done;
   if (end.status === "finished") return end.outcome as PlanOutcome;

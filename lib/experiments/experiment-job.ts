@@ -21,8 +21,7 @@ export interface UploadProblem {
 }
 
 export type UploadOutcome =
-  | { kind: "upload"; ring: ValueJson; members: ValueJson[]; lines: number[] }
-  | { kind: "upload-error"; problems: UploadProblem[] };
+  { kind: "upload"; ring: ValueJson; members: ValueJson[]; lines: number[] } | { kind: "upload-error"; problems: UploadProblem[] };
 
 export type PlanOutcome =
   | { kind: "plan"; family: ValueJson; probe: ValueJson; labels: string[] }
@@ -54,7 +53,9 @@ async function upload(job: Extract<ExperimentJob, { kind: "upload" }>, signal: A
   const outcome = await evaluate(source, [], {
     signal,
     onEvent: (e) => {
-      if (e.event === "checked") for (const x of e.errors) problems.push({ line: x.span.from.line - 1, message: `${x.kind} error at column ${x.span.from.col}: ${x.message}` });
+      if (e.event === "checked")
+        for (const x of e.errors)
+          problems.push({ line: x.span.from.line - 1, message: `${x.kind} error at column ${x.span.from.col}: ${x.message}` });
     },
   });
   if (problems.length > 0) {
@@ -64,7 +65,10 @@ async function upload(job: Extract<ExperimentJob, { kind: "upload" }>, signal: A
   }
   if (outcome.error) {
     const line = outcome.error.span.from.line - 1;
-    return { kind: "upload-error", problems: [{ line, message: line === 0 ? `the ring ${job.ring}: ${outcome.error.message}` : outcome.error.message }] };
+    return {
+      kind: "upload-error",
+      problems: [{ line, message: line === 0 ? `the ring ${job.ring}: ${outcome.error.message}` : outcome.error.message }],
+    };
   }
   const [ring, ...rest] = outcome.results;
   const members: ValueJson[] = [];
@@ -72,7 +76,8 @@ async function upload(job: Extract<ExperimentJob, { kind: "upload" }>, signal: A
   for (const r of rest) {
     const line = r.span.from.line - 1;
     if (r.name !== null) problems.push({ line, message: "a definition; each line must be one ideal such as <x^2, y*z>" });
-    else if (r.value.type !== "Ideal") problems.push({ line, message: `expected an ideal such as <x^2, y*z>, got ${r.value.type} ${r.value.text}` });
+    else if (r.value.type !== "Ideal")
+      problems.push({ line, message: `expected an ideal such as <x^2, y*z>, got ${r.value.type} ${r.value.text}` });
     else {
       members.push(r.value);
       lines.push(line);
@@ -102,10 +107,14 @@ async function plan(job: Extract<ExperimentJob, { kind: "plan" }>, signal: Abort
 
 async function member(job: Extract<ExperimentJob, { kind: "member" }>, signal: AbortSignal): Promise<MemberOutcome> {
   const t0 = performance.now();
-  const outcome = await evaluate("probe(member)", [
-    { name: "probe", value: job.probe },
-    { name: "member", value: job.member },
-  ], { signal });
+  const outcome = await evaluate(
+    "probe(member)",
+    [
+      { name: "probe", value: job.probe },
+      { name: "member", value: job.member },
+    ],
+    { signal },
+  );
   const ms = Math.round(performance.now() - t0);
   if (outcome.status === "ok") {
     const v = outcome.results[0]?.value;

@@ -4,7 +4,7 @@
 import { and, eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { cells, uploads } from "@/db/schema";
-import { HttpError } from "@/lib/http/errors";
+import { ExperimentError } from "./errors";
 import { ENGINE_VERSION } from "@/lib/sessions/engine-version";
 import { currentRingOf, listObjects } from "@/lib/sessions/store";
 import { memberLimits, planSweep } from "./compute-adapter";
@@ -30,16 +30,20 @@ export interface CreateFromProgram {
 export async function createFromProgram(input: CreateFromProgram): Promise<ExperimentRow> {
   let source = input.source;
   if (input.cellId) {
-    const [cell] = await db().select().from(cells).where(and(eq(cells.id, input.cellId), eq(cells.sessionId, input.sessionId)));
-    if (!cell) throw new HttpError(404, "not_found", "The cell does not exist in this session.");
+    const [cell] = await db()
+      .select()
+      .from(cells)
+      .where(and(eq(cells.id, input.cellId), eq(cells.sessionId, input.sessionId)));
+    if (!cell) throw new ExperimentError(404, "not_found", "The cell does not exist in this session.");
     source = cell.source;
   }
-  if (!source.trim()) throw new HttpError(400, "invalid_body", "Give the program (source) or a cell (cellId) whose text has a sweep(family, probe).");
+  if (!source.trim())
+    throw new ExperimentError(400, "invalid_body", "Give the program (source) or a cell (cellId) whose text has a sweep(family, probe).");
   const bindings = (await listObjects(input.sessionId)).map((o) => ({ name: o.name, value: o.value }));
   const currentRing = await currentRingOf(input.sessionId);
   const plan = await planSweep(source, bindings, currentRing, PLAN_TIME_LIMIT_MS);
   if (plan.kind === "plan-error") {
-    throw new HttpError(422, "no_experiment", `The program does not give a sweep to run: ${plan.error.message}`);
+    throw new ExperimentError(422, "no_experiment", `The program does not give a sweep to run: ${plan.error.message}`);
   }
   return start({
     sessionId: input.sessionId,
@@ -66,8 +70,11 @@ export interface CreateFromUpload {
 
 /// A sweep of an uploaded family: the program is `sweep(F, probe)` with F the upload.
 export async function createFromUpload(input: CreateFromUpload): Promise<ExperimentRow> {
-  const [u] = await db().select().from(uploads).where(and(eq(uploads.id, input.uploadId), eq(uploads.sessionId, input.sessionId)));
-  if (!u) throw new HttpError(404, "not_found", "The upload does not exist in this session.");
+  const [u] = await db()
+    .select()
+    .from(uploads)
+    .where(and(eq(uploads.id, input.uploadId), eq(uploads.sessionId, input.sessionId)));
+  if (!u) throw new ExperimentError(404, "not_found", "The upload does not exist in this session.");
   const family = u.family as { ring: unknown };
   const ringName = input.ringName ?? "S";
   const program = `# ${ringName}: the ring of the upload ${u.name}; uploaded: its ${u.length} ideals\nsweep(uploaded, ${input.probe})`;
@@ -76,7 +83,8 @@ export async function createFromUpload(input: CreateFromUpload): Promise<Experim
     { name: "uploaded", value: u.family },
   ];
   const plan = await planSweep(program, bindings, ringName, PLAN_TIME_LIMIT_MS);
-  if (plan.kind === "plan-error") throw new HttpError(422, "no_experiment", `The probe cannot run over the upload: ${plan.error.message}`);
+  if (plan.kind === "plan-error")
+    throw new ExperimentError(422, "no_experiment", `The probe cannot run over the upload: ${plan.error.message}`);
   return start({
     sessionId: input.sessionId,
     createdBy: input.userId,
@@ -116,7 +124,11 @@ async function start(e: {
     engineVersion: ENGINE_VERSION,
     limits,
   });
-  await enqueueMembers(row.id, [...row.labels as string[]].map((_, i) => i), expireSecondsFor(limits.timeLimitMs));
+  await enqueueMembers(
+    row.id,
+    [...(row.labels as string[])].map((_, i) => i),
+    expireSecondsFor(limits.timeLimitMs),
+  );
   return row;
 }
 
@@ -146,7 +158,7 @@ export async function act(id: string, action: Action): Promise<ExperimentRow> {
   const row = await changeStatus(id, to);
   if (!row) {
     const e = await getExperiment(id);
-    throw new HttpError(409, "conflict", `Cannot ${action} an experiment that is ${e?.status ?? "missing"}.`);
+    throw new ExperimentError(409, "conflict", `Cannot ${action} an experiment that is ${e?.status ?? "missing"}.`);
   }
   if (action === "resume") await requeue(row);
   return row;

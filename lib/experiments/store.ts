@@ -4,6 +4,7 @@
 import { and, asc, desc, eq, inArray, sql, type SQL } from "drizzle-orm";
 import { db } from "@/db/client";
 import { experimentRows, experiments } from "@/db/schema";
+import type { Progress } from "@/lib/wire/experiments";
 
 export type ExperimentRow = typeof experiments.$inferSelect;
 export type StoredRow = typeof experimentRows.$inferSelect;
@@ -30,7 +31,12 @@ export interface NewExperiment {
 export async function insertExperiment(e: NewExperiment): Promise<ExperimentRow> {
   const [row] = await db()
     .insert(experiments)
-    .values({ ...e, total: e.labels.length, status: e.labels.length === 0 ? "done" : "queued", finishedAt: e.labels.length === 0 ? new Date() : null })
+    .values({
+      ...e,
+      total: e.labels.length,
+      status: e.labels.length === 0 ? "done" : "queued",
+      finishedAt: e.labels.length === 0 ? new Date() : null,
+    })
     .returning();
   return row;
 }
@@ -38,6 +44,12 @@ export async function insertExperiment(e: NewExperiment): Promise<ExperimentRow>
 export async function getExperiment(id: string): Promise<ExperimentRow | undefined> {
   if (!/^[0-9a-f-]{36}$/i.test(id)) return undefined;
   const [row] = await db().select().from(experiments).where(eq(experiments.id, id));
+  return row;
+}
+
+/// Only the status and size (what a worker checks before each member).
+export async function experimentState(id: string): Promise<{ status: ExperimentStatus; total: number } | undefined> {
+  const [row] = await db().select({ status: experiments.status, total: experiments.total }).from(experiments).where(eq(experiments.id, id));
   return row;
 }
 
@@ -65,18 +77,7 @@ export async function listExperiments(sessionIds: readonly string[]) {
     .orderBy(desc(experiments.createdAt));
 }
 
-export interface Progress {
-  status: ExperimentStatus;
-  done: number;
-  total: number;
-  /// rows whose status is not ok
-  failures: number;
-  byStatus: Record<RowStatus, number>;
-  /// members per second over the last minute of work (null before any row)
-  rate: number | null;
-  /// seconds left at that rate (null when unknown or finished)
-  etaSeconds: number | null;
-}
+export type { Progress };
 
 export async function progressOf(e: ExperimentRow): Promise<Progress> {
   const rows = await db()
@@ -159,7 +160,10 @@ export async function readRows(e: ExperimentRow, q: RowQuery): Promise<{ rows: S
     .orderBy(...order)
     .limit(q.limit)
     .offset(q.offset);
-  const [{ n }] = await db().select({ n: sql<number>`count(*)::int` }).from(experimentRows).where(where);
+  const [{ n }] = await db()
+    .select({ n: sql<number>`count(*)::int` })
+    .from(experimentRows)
+    .where(where);
   return { rows: rows.map((r) => r.row), matched: n };
 }
 
@@ -263,5 +267,8 @@ export async function changeStatus(id: string, to: "paused" | "running" | "cance
 
 /// Experiments that still need work (for a worker that starts: re-queue what is missing).
 export async function activeExperiments(): Promise<ExperimentRow[]> {
-  return db().select().from(experiments).where(inArray(experiments.status, ["queued", "running"]));
+  return db()
+    .select()
+    .from(experiments)
+    .where(inArray(experiments.status, ["queued", "running"]));
 }

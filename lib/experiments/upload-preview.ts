@@ -2,8 +2,8 @@
 /// POST /api/experiments/uploads reads it (the same engine job), but nothing is stored; the
 /// answer lists the first members and every bad line with its number and reason, so the
 /// browser can show them before anything is created.
-import { HttpError } from "@/lib/http/errors";
 import { readUpload } from "./compute-adapter";
+import { ExperimentError } from "./errors";
 import type { UploadProblem } from "./experiment-job";
 import { MAX_UPLOAD_LINES } from "./uploads";
 
@@ -30,13 +30,18 @@ function jsonAsLines(content: string): { text: string; problems: UploadProblem[]
   try {
     data = JSON.parse(content);
   } catch (e) {
-    throw new HttpError(400, "invalid_upload", `The upload is not valid JSON: ${(e as Error).message}.`);
+    throw new ExperimentError(400, "invalid_upload", `The upload is not valid JSON: ${(e as Error).message}.`);
   }
-  if (!Array.isArray(data)) throw new HttpError(400, "invalid_upload", "A JSON upload is a list of ideals, each a list of generator texts: [[\"x^2\", \"y\"], …].");
+  if (!Array.isArray(data))
+    throw new ExperimentError(
+      400,
+      "invalid_upload",
+      'A JSON upload is a list of ideals, each a list of generator texts: [["x^2", "y"], …].',
+    );
   const problems: UploadProblem[] = [];
   const lines = data.map((item, k) => {
     if (!Array.isArray(item) || item.length === 0 || !item.every((g) => typeof g === "string" && g.trim() !== "" && !/[<>\n;]/.test(g))) {
-      problems.push({ line: k + 1, message: "expected a nonempty list of generator texts such as [\"x^2\", \"y*z\"]" });
+      problems.push({ line: k + 1, message: 'expected a nonempty list of generator texts such as ["x^2", "y*z"]' });
       return "<0>";
     }
     return `<${(item as string[]).join(", ")}>`;
@@ -50,7 +55,8 @@ export async function previewUpload(u: { format: "text" | "json"; ring: string; 
   let problems: UploadProblem[] = [];
   if (u.format === "json") ({ text, problems } = jsonAsLines(u.content));
   const lineCount = text.split("\n").length;
-  if (lineCount > MAX_UPLOAD_LINES) throw new HttpError(413, "too_large", `The upload has ${lineCount} lines; at most ${MAX_UPLOAD_LINES}.`);
+  if (lineCount > MAX_UPLOAD_LINES)
+    throw new ExperimentError(413, "too_large", `The upload has ${lineCount} lines; at most ${MAX_UPLOAD_LINES}.`);
   if (problems.length === 0) {
     const read = await readUpload(u.ring, text, 60_000);
     if (read.kind === "upload-error") problems = read.problems;

@@ -1,48 +1,13 @@
 /// The API's JSON shapes for experiments (documented in app/api/README.md), and the exports
 /// of their rows as CSV, JSON and a LaTeX tabular.
 import { escapeTex } from "@/lib/export/tex";
+import { FIXED_COLUMNS, type Experiment, type ExperimentRowView } from "@/lib/wire/experiments";
+import type { ValueJson } from "@/lib/wire/values";
 import type { ExperimentRow, Progress, StoredRow } from "./store";
 
-/// The columns every experiment table starts with (notation.md §11).
-export const FIXED_COLUMNS = ["index", "label", "status", "seconds"] as const;
-
-export interface ExperimentView {
-  id: string;
-  sessionId: string;
-  title: string;
-  status: ExperimentRow["status"];
-  /// §11's Experiment fields
-  done: number;
-  total: number;
-  failures: number;
-  progress: Progress;
-  /// index, label, status, seconds, then the probe's fields (known after the first ok row)
-  columns: string[];
-  /// reproducibility: everything "run again" uses
-  program: string;
-  familyDefinition: string;
-  probe: string;
-  engineVersion: string;
-  limits: { timeLimitMs: number; heapLimitMb: number };
-  sourceCellId: string | null;
-  uploadId: string | null;
-  rerunOf: string | null;
-  createdAt: string;
-  startedAt: string | null;
-  finishedAt: string | null;
-}
-
-export interface RowView {
-  index: number;
-  label: string;
-  status: StoredRow["status"];
-  seconds: number;
-  /// the probe's fields as §9 values ({} unless ok)
-  fields: Record<string, unknown>;
-  message: string | null;
-  worker: string;
-  finishedAt: string;
-}
+export { FIXED_COLUMNS };
+export type ExperimentView = Experiment;
+export type RowView = ExperimentRowView;
 
 const iso = (d: Date | string | null) => (d === null ? null : new Date(d).toISOString());
 
@@ -79,7 +44,7 @@ export function rowView(e: ExperimentRow, r: StoredRow): RowView {
     label: (e.labels as string[])[r.memberIndex] ?? "",
     status: r.status,
     seconds: r.durationMs / 1000,
-    fields: r.fields as Record<string, unknown>,
+    fields: r.fields as Record<string, ValueJson>,
     message: r.message,
     worker: r.worker,
     finishedAt: iso(r.finishedAt)!,
@@ -94,7 +59,15 @@ function exportColumns(e: ExperimentRow): string[] {
 }
 
 function cellsOf(e: ExperimentRow, r: RowView): string[] {
-  return [String(r.index), r.label, r.status, r.seconds.toFixed(3), ...probeColumns(e).map((c) => textOf(r.fields[c])), r.message ?? "", r.worker];
+  return [
+    String(r.index),
+    r.label,
+    r.status,
+    r.seconds.toFixed(3),
+    ...probeColumns(e).map((c) => textOf(r.fields[c])),
+    r.message ?? "",
+    r.worker,
+  ];
 }
 
 /// RFC 4180 CSV (common practice): quote every field holding a comma, quote or line break.
@@ -130,7 +103,13 @@ export function rowsJson(e: ExperimentRow, view: ExperimentView, rows: RowView[]
 export function rowsLatex(e: ExperimentRow, rows: RowView[]): string {
   const cols = [...FIXED_COLUMNS, ...probeColumns(e)];
   const header = cols.map((c) => `\\textbf{${escapeTex(c)}}`).join(" & ");
-  const body = rows.map((r) => cellsOf(e, r).slice(0, cols.length).map((c, i) => (i === 1 ? `\\texttt{${escapeTex(c)}}` : escapeTex(c))).join(" & ") + " \\\\");
+  const body = rows.map(
+    (r) =>
+      cellsOf(e, r)
+        .slice(0, cols.length)
+        .map((c, i) => (i === 1 ? `\\texttt{${escapeTex(c)}}` : escapeTex(c)))
+        .join(" & ") + " \\\\",
+  );
   const failed = rows.filter((r) => r.status !== "ok").length;
   return [
     "\\begin{table}[ht]",

@@ -6,7 +6,7 @@ import os from "node:os";
 import type PgBoss from "pg-boss";
 import { boss, MEMBER_QUEUE, stopBoss, type MemberJobData } from "@/lib/experiments/queue";
 import { closeExperimentPool, experimentPool, runMember } from "@/lib/experiments/compute-adapter";
-import { activeExperiments, getExperiment, hasRow, writeRow, type ExperimentRow } from "@/lib/experiments/store";
+import { activeExperiments, experimentState, getExperiment, hasRow, writeRow } from "@/lib/experiments/store";
 import { requeue } from "@/lib/experiments/service";
 
 export interface WorkerOptions {
@@ -23,14 +23,18 @@ export interface RunningWorker {
   stop(): Promise<void>;
 }
 
-/// The immutable part of an experiment (family and probe), kept per process.
-const recipes = new Map<string, { probe: unknown; members: unknown[] }>();
+/// The immutable part of an experiment (family, probe, limits), read once per process.
+type Recipe = { probe: unknown; members: unknown[]; limits: { timeLimitMs: number; heapLimitMb: number } };
+const recipes = new Map<string, Promise<Recipe | null>>();
 
-function recipe(e: ExperimentRow) {
-  let r = recipes.get(e.id);
+function recipe(experimentId: string): Promise<Recipe | null> {
+  let r = recipes.get(experimentId);
   if (!r) {
-    r = { probe: e.probe, members: (e.family as { members: unknown[] }).members };
-    recipes.set(e.id, r);
+    r = getExperiment(experimentId).then((e) =>
+      e ? { probe: e.probe, members: (e.family as { members: unknown[] }).members, limits: e.limits as Recipe["limits"] } : null,
+    );
+    r.catch(() => recipes.delete(experimentId));
+    recipes.set(experimentId, r);
     if (recipes.size > 50) recipes.delete(recipes.keys().next().value!);
   }
   return r;
@@ -52,34 +56,61 @@ export async function startMemberWorker(opts: WorkerOptions): Promise<RunningWor
     if (n > 0) log(`requeued ${n} member(s) of experiment ${e.id}`);
   }
 
-  const handle = async (jobs: PgBoss.Job<MemberJobData>[]) => {
-    for (const job of jobs) {
-      const { experimentId, index } = job.data;
-      const e = await getExperiment(experimentId);
-      if (!e || (e.status !== "queued" && e.status !== "running")) continue;
-      if (!Number.isInteger(index) || index < 0 || index >= e.total) continue;
-      if (await hasRow(experimentId, index)) continue;
-      const r = recipe(e);
-      const limits = e.limits as { timeLimitMs: number; heapLimitMb: number };
-      const out = await runMember(r.probe, r.members[index], limits, stopping.signal);
-      // stopped because this worker is shutting down: leave the member to another worker
-      if (out.status === "cancelled" && stopping.signal.aborted) throw new Error("worker stopping");
-      const wrote = await writeRow({
-        experimentId,
-        index,
-        status: out.status,
-        fields: out.fields,
-        message: out.message,
-        durationMs: out.ms,
-        worker: id,
-      });
-      if (wrote) finished++;
+  // One member, from its job to its row. Throws only when the member must go back to the
+  // queue (this worker is stopping, or the database failed).
+  const runJob = async ({ experimentId, index }: MemberJobData): Promise<void> => {
+    const e = await experimentState(experimentId);
+    if (!e || (e.status !== "queued" && e.status !== "running")) return;
+    if (!Number.isInteger(index) || index < 0 || index >= e.total) return;
+    if (await hasRow(experimentId, index)) return;
+    const r = await recipe(experimentId);
+    if (!r) return;
+    const out = await runMember(r.probe, r.members[index], r.limits, stopping.signal);
+    // stopped because this worker is shutting down: leave the member to another worker
+    if (out.status === "cancelled" && stopping.signal.aborted) throw new Error("worker stopping");
+    const wrote = await writeRow({
+      experimentId,
+      index,
+      status: out.status,
+      fields: out.fields,
+      message: out.message,
+      durationMs: out.ms,
+      worker: id,
+    });
+    if (wrote) finished++;
+  };
+
+  // Each slot fetches one job, runs it, completes it and fetches the next at once; it waits
+  // half a second only when the queue is empty. (pg-boss's work() waits its polling interval
+  // after every job, which would cap a slot at two members per second.)
+  const slot = async (): Promise<void> => {
+    while (!stopping.signal.aborted) {
+      let jobs: PgBoss.Job<MemberJobData>[] = [];
+      try {
+        jobs = await b.fetch<MemberJobData>(MEMBER_QUEUE, { batchSize: 1 });
+      } catch (error) {
+        log(`fetch failed: ${error instanceof Error ? error.message : error}`);
+      }
+      if (jobs.length === 0) {
+        await new Promise((r) => setTimeout(r, 500));
+        continue;
+      }
+      for (const job of jobs) {
+        try {
+          await runJob(job.data);
+          await b.complete(MEMBER_QUEUE, job.id);
+        } catch (error) {
+          if (!stopping.signal.aborted)
+            log(
+              `member ${job.data.index} of ${job.data.experimentId} goes back to the queue: ${error instanceof Error ? error.message : error}`,
+            );
+          await b.fail(MEMBER_QUEUE, job.id, { message: String(error) }).catch(() => {});
+        }
+      }
     }
   };
 
-  for (let i = 0; i < opts.concurrency; i++) {
-    await b.work<MemberJobData>(MEMBER_QUEUE, { batchSize: 1, pollingIntervalSeconds: 0.5 }, handle);
-  }
+  const slots = Array.from({ length: opts.concurrency }, () => slot());
   log(`worker ${id} takes members with concurrency ${opts.concurrency}`);
 
   return {
@@ -87,7 +118,7 @@ export async function startMemberWorker(opts: WorkerOptions): Promise<RunningWor
     finished: () => finished,
     async stop() {
       stopping.abort();
-      await b.offWork(MEMBER_QUEUE).catch(() => {});
+      await Promise.all(slots);
       await stopBoss();
       await closeExperimentPool();
     },

@@ -7,12 +7,21 @@ import { lookupFunction } from "../../grammar/signatures";
 import type { Span } from "../../grammar/ast";
 import { monomial, monomialIdeals, randomIdealGenerators } from "../algebra/index";
 import { typeToString } from "../../grammar/types";
-import type { CallContext } from "./builtins";
+import type { CallContext } from "./context";
 import { EvalError, asEvalError, limit, runtime } from "./errors";
 import { idealValue } from "./ideals";
-import { rational } from "./rational";
+import { rational } from "../algebra/index";
 import { familyDefinition, ringText, valueText } from "./text";
-import { list, type FamilyMember, type FamilyValue, type FunctionValue, type RecordValue, type RingValue, type TableValue, type Value } from "./values";
+import {
+  list,
+  type FamilyMember,
+  type FamilyValue,
+  type FunctionValue,
+  type RecordValue,
+  type RingValue,
+  type TableValue,
+  type Value,
+} from "./values";
 
 /// Largest family `random_ideals` / `monomial_ideals` build.
 export const MAX_FAMILY_SIZE = 100_000;
@@ -65,7 +74,11 @@ function degreesOption(c: CallContext, fallback: number): number[] {
 
 function polynomialRingArg(v: Value, c: CallContext, what: string): RingValue {
   if (v.type !== "Ring") throw runtime(`${what} expects a Ring, got ${v.type}`, c.argSpans[0] ?? c.span);
-  if (v.ideal.length > 0) throw runtime(`${what} needs a polynomial ring; ${ringText(v)} is a quotient — use ${what}(…) on its ambient ring`, c.argSpans[0] ?? c.span);
+  if (v.ideal.length > 0)
+    throw runtime(
+      `${what} needs a polynomial ring; ${ringText(v)} is a quotient — use ${what}(…) on its ambient ring`,
+      c.argSpans[0] ?? c.span,
+    );
   return v;
 }
 
@@ -90,7 +103,12 @@ function randomIdeals([S]: readonly Value[], c: CallContext): Value {
   const definition =
     `random_ideals(${ringText(ring)}, count = ${count}, gens = ${gens}, degree = ${degreeText}, seed = ${seed}` +
     `${homogeneous ? "" : ", homogeneous = false"})`;
-  const options = new Map<string, bigint>([["count", count], ["gens", gens], ["seed", seed], ["homogeneous", homogeneous ? 1n : 0n]]);
+  const options = new Map<string, bigint>([
+    ["count", count],
+    ["gens", gens],
+    ["seed", seed],
+    ["homogeneous", homogeneous ? 1n : 0n],
+  ]);
   if (!listed) options.set("degree", BigInt(degrees[0]));
   return { type: "Family", ring, generator: "random_ideals", options, members, definition };
 }
@@ -107,10 +125,18 @@ function monomialIdealsFamily([S]: readonly Value[], c: CallContext): Value {
     const err = asEvalError(e, c.span);
     throw /more than/.test(err.message) ? new EvalError("limit", err.message, c.span) : err;
   }
-  const members: FamilyMember[] = found.map((gens) => idealValue(ring, gens.map((e) => monomial(ring.poly, e))));
+  const members: FamilyMember[] = found.map((gens) =>
+    idealValue(
+      ring,
+      gens.map((e) => monomial(ring.poly, e)),
+    ),
+  );
   const degreeText = degrees.length === 1 ? String(degrees[0]) : `[${degrees.join(", ")}]`;
   const definition = `monomial_ideals(${ringText(ring)}, degree = ${degreeText}, max_gens = ${maxGens}${upToSymmetry ? ", up_to_symmetry = true" : ""})`;
-  const options = new Map<string, bigint>([["max_gens", maxGens], ["up_to_symmetry", upToSymmetry ? 1n : 0n]]);
+  const options = new Map<string, bigint>([
+    ["max_gens", maxGens],
+    ["up_to_symmetry", upToSymmetry ? 1n : 0n],
+  ]);
   if (degrees.length === 1) options.set("degree", BigInt(degrees[0]));
   return { type: "Family", ring, generator: "monomial_ideals", options, members, definition };
 }
@@ -124,7 +150,8 @@ export function asFamily(v: Value, span: Span): FamilyValue {
   if (v.type === "Family") return v;
   if (v.type !== "List") throw runtime(`expected a Family or a List of rings, ideals or modules, got ${v.type}`, span);
   v.items.forEach((x, i) => {
-    if (!isMember(x)) throw runtime(`a family's members are rings, ideals or modules; item ${i} is ${x.type === "Int" ? "an" : "a"} ${x.type}`, span);
+    if (!isMember(x))
+      throw runtime(`a family's members are rings, ideals or modules; item ${i} is ${x.type === "Int" ? "an" : "a"} ${x.type}`, span);
   });
   const members = v.items as FamilyMember[];
   const first = members[0];
@@ -145,7 +172,13 @@ export function memberLabel(m: Value): string {
   return t.length > 120 ? `${t.slice(0, 119)}…` : t;
 }
 
-function derived(F: FamilyValue, members: readonly FamilyMember[], suffix: string, generator: string, extra: [string, bigint][]): FamilyValue {
+function derived(
+  F: FamilyValue,
+  members: readonly FamilyMember[],
+  suffix: string,
+  generator: string,
+  extra: [string, bigint][],
+): FamilyValue {
   return {
     type: "Family",
     ring: F.ring,
@@ -173,7 +206,12 @@ export function probeRow(probe: FunctionValue, member: Value, depth: number, spa
   try {
     const r = probe.call([member], depth);
     if (r.type !== "Record") {
-      return { status: "error", seconds: seconds(), record: null, message: `the probe must return a Record, got ${r.type} ${valueText(r)}` };
+      return {
+        status: "error",
+        seconds: seconds(),
+        record: null,
+        message: `the probe must return a Record, got ${r.type} ${valueText(r)}`,
+      };
     }
     return { status: "ok", seconds: seconds(), record: r, message: null };
   } catch (e) {
@@ -290,7 +328,15 @@ function find([family, probeV]: readonly Value[], c: CallContext): Value {
     const hit = where.call([row], c.frame.depth);
     if (hit.type !== "Bool") throw runtime(`find's predicate must give a Bool, got ${hit.type}`, c.span);
     if (hit.value) {
-      return { type: "Record", fields: new Map<string, Value>([["index", Int(k)], ["member", m], ["row", row], ["tried", Int(k + 1)]]) };
+      return {
+        type: "Record",
+        fields: new Map<string, Value>([
+          ["index", Int(k)],
+          ["member", m],
+          ["row", row],
+          ["tried", Int(k + 1)],
+        ]),
+      };
     }
   }
   return NONE;
@@ -329,7 +375,8 @@ export const FAMILY_PROPERTIES: Record<string, (obj: Value, args: readonly Value
   },
   "Table.where": (v, [pred], c) => {
     const t = v as TableValue;
-    if (pred.type !== "Function") throw runtime(`where needs a predicate on a row, such as r -> r.status == "ok"; got ${pred.type}`, c.argSpans[0]);
+    if (pred.type !== "Function")
+      throw runtime(`where needs a predicate on a row, such as r -> r.status == "ok"; got ${pred.type}`, c.argSpans[0]);
     const rows = t.rows.filter((row) => {
       const r: Value = { type: "Record", fields: new Map(t.columns.map((k, i) => [k, row[i]])) };
       const b = pred.call([r], c.frame.depth);

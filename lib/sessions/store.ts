@@ -4,6 +4,7 @@ import { and, asc, desc, eq, sql } from "drizzle-orm";
 import { db } from "@/db/client";
 import { cells, namedObjects, sessions, users } from "@/db/schema";
 import type { CurrentUser } from "@/lib/auth/types";
+import type { SessionSummary } from "@/lib/wire/sessions";
 
 export type CellRow = typeof cells.$inferSelect;
 export type ObjectRow = typeof namedObjects.$inferSelect;
@@ -27,7 +28,7 @@ export async function createSession(user: CurrentUser, title: string) {
 
 /// Sessions the user owns, or reaches through a share (to them or a team of theirs), or
 /// through a team-visible session of a team they belong to; newest activity first.
-export async function listSessions(user: CurrentUser) {
+export async function listSessions(user: CurrentUser): Promise<SessionSummary[]> {
   const rows = await db().execute<{
     id: string;
     title: string;

@@ -18,13 +18,47 @@ const int = (n: number) => ({ type: "Int", text: String(n), value: String(n) });
 const betti = (entries: [number, number, number][]) => ({ type: "BettiTable", text: "Betti numbers", entries });
 
 function row(index: number, fields: Row["fields"], status: Row["status"] = "ok"): Row {
-  return { index, label: `<m${index}>`, status, seconds: index / 10, fields, message: status === "ok" ? null : "failed", worker: "w", finishedAt: "2026-01-01T00:00:00.000Z" };
+  return {
+    index,
+    label: `<m${index}>`,
+    status,
+    seconds: index / 10,
+    fields,
+    message: status === "ok" ? null : "failed",
+    worker: "w",
+    finishedAt: "2026-01-01T00:00:00.000Z",
+  };
 }
 
 const rows: Row[] = [
-  row(0, { pd: int(2), e: int(4), b: betti([[0, 0, 1], [1, 2, 2], [2, 4, 1]]) }),
-  row(1, { pd: int(2), e: int(3), b: betti([[0, 0, 1], [1, 2, 2], [2, 3, 1]]) }),
-  row(2, { pd: int(3), e: int(1), b: betti([[0, 0, 1], [1, 2, 3], [2, 3, 3], [3, 4, 1]]) }),
+  row(0, {
+    pd: int(2),
+    e: int(4),
+    b: betti([
+      [0, 0, 1],
+      [1, 2, 2],
+      [2, 4, 1],
+    ]),
+  }),
+  row(1, {
+    pd: int(2),
+    e: int(3),
+    b: betti([
+      [0, 0, 1],
+      [1, 2, 2],
+      [2, 3, 1],
+    ]),
+  }),
+  row(2, {
+    pd: int(3),
+    e: int(1),
+    b: betti([
+      [0, 0, 1],
+      [1, 2, 3],
+      [2, 3, 3],
+      [3, 4, 1],
+    ]),
+  }),
   row(3, {}, "limit"),
 ];
 
@@ -63,7 +97,10 @@ describe("filters", () => {
 describe("plot data", () => {
   it("a histogram of small integers has one bin per integer and skips rows without a number", () => {
     const h = histogram(rows, "pd");
-    expect(h.bins.map((b) => [b.from, b.count])).toEqual([[2, 2], [3, 1]]);
+    expect(h.bins.map((b) => [b.from, b.count])).toEqual([
+      [2, 2],
+      [3, 1],
+    ]);
     expect(h.used).toBe(3);
     expect(h.skipped).toBe(1);
   });
@@ -76,13 +113,23 @@ describe("plot data", () => {
   });
   it("scatter points pair the two columns, with the colour column when given", () => {
     const s = scatterPoints(rows, "pd", "e", "index");
-    expect(s.points.map((p) => [p.index, p.x, p.y, p.c])).toEqual([[0, 2, 4, 0], [1, 2, 3, 1], [2, 3, 1, 2]]);
+    expect(s.points.map((p) => [p.index, p.x, p.y, p.c])).toEqual([
+      [0, 2, 4, 0],
+      [1, 2, 3, 1],
+      [2, 3, 1, 2],
+    ]);
     expect(s.skipped).toBe(1);
   });
   it("the heat map has one column per ok member and one row per nonzero (i, j)", () => {
     const h = bettiHeat(rows, "b");
     expect(h.members).toEqual([0, 1, 2]);
-    expect(h.positions).toEqual([[0, 0], [1, 2], [2, 3], [2, 4], [3, 4]]);
+    expect(h.positions).toEqual([
+      [0, 0],
+      [1, 2],
+      [2, 3],
+      [2, 4],
+      [3, 4],
+    ]);
     expect(h.max).toBe(3);
     expect(h.cells.find((c) => c.member === 0 && c.i === 2)).toMatchObject({ j: 4, value: 1 });
   });
@@ -96,7 +143,15 @@ const experiment: Experiment = {
   done: 4,
   total: 4,
   failures: 1,
-  progress: { status: "done", done: 4, total: 4, failures: 1, byStatus: { ok: 3, error: 0, limit: 1, cancelled: 0 }, rate: null, etaSeconds: null },
+  progress: {
+    status: "done",
+    done: 4,
+    total: 4,
+    failures: 1,
+    byStatus: { ok: 3, error: 0, limit: 1, cancelled: 0 },
+    rate: null,
+    etaSeconds: null,
+  },
   columns: ["index", "label", "status", "seconds", "pd", "e"],
   program: "",
   familyDefinition: "random_ideals(S, count = 4, gens = 2, degree = 2, seed = 5)",
@@ -133,7 +188,12 @@ describe("exports and words", () => {
     expect(fileStem("Quadrics | four", "0123456789")).toBe("Quadrics-four-01234567");
   });
   it("the member's cell defines its ring and the member", () => {
-    const src = memberCellSource(experiment, 2, { type: "Ideal", text: "<a*b, c^2>", gens: ["a*b", "c^2"], ring: { type: "Ring", text: "GF(32003)[a, b, c, d]" } });
+    const src = memberCellSource(experiment, 2, {
+      type: "Ideal",
+      text: "<a*b, c^2>",
+      gens: ["a*b", "c^2"],
+      ring: { type: "Ring", text: "GF(32003)[a, b, c, d]" },
+    });
     expect(src.split("\n").slice(1)).toEqual(["S := GF(32003)[a, b, c, d]", "m2 := <a*b, c^2>"]);
     expect(analyze(src).errors).toEqual([]);
   });

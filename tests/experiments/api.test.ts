@@ -34,9 +34,24 @@ afterAll(async () => {
   await closeDb();
 });
 
-type Experiment = { id: string; status: string; done: number; total: number; failures: number; columns: string[]; familyDefinition: string; probe: string; engineVersion: string; progress: { rate: number | null } };
+type Experiment = {
+  id: string;
+  status: string;
+  done: number;
+  total: number;
+  failures: number;
+  columns: string[];
+  familyDefinition: string;
+  probe: string;
+  engineVersion: string;
+  progress: { rate: number | null };
+};
 
-async function experiment(client: TestClient, id: string, link?: string): Promise<{ status: number; body: { experiment: Experiment; canEdit: boolean } }> {
+async function experiment(
+  client: TestClient,
+  id: string,
+  link?: string,
+): Promise<{ status: number; body: { experiment: Experiment; canEdit: boolean } }> {
   const r = await client.request(`/api/experiments/${id}${link ? `?link=${link}` : ""}`);
   return { status: r.status, body: (await r.json()) as { experiment: Experiment; canEdit: boolean } };
 }
@@ -46,17 +61,40 @@ let uploadId = "";
 
 describe("uploads", () => {
   it("a file whose line 3 is malformed is refused with 'line 3' and nothing is stored", async () => {
-    const count = async () => (await db().select({ n: sql<number>`count(*)::int` }).from(uploads).where(eq(uploads.sessionId, sessionId)))[0].n;
+    const count = async () =>
+      (
+        await db()
+          .select({ n: sql<number>`count(*)::int` })
+          .from(uploads)
+          .where(eq(uploads.sessionId, sessionId))
+      )[0].n;
     const before = await count();
-    const r = await owner.json("/api/experiments/uploads", { sessionId, name: "bad", format: "text", ring: RING, content: "<x^2, y>\n<x*y, z^2>\n<x^2 +* y>\n<z>" });
+    const r = await owner.json("/api/experiments/uploads", {
+      sessionId,
+      name: "bad",
+      format: "text",
+      ring: RING,
+      content: "<x^2, y>\n<x*y, z^2>\n<x^2 +* y>\n<z>",
+    });
     expect(r.status).toBe(422);
     const body = (await r.json()) as { error: { message: string; details: { line: number; message: string }[] } };
     expect(body.error.message).toMatch(/line 3/);
     expect(body.error.details[0].line).toBe(3);
     expect(await count()).toBe(before);
-    expect(await db().select().from(namedObjects).where(and(eq(namedObjects.sessionId, sessionId), eq(namedObjects.name, "bad")))).toHaveLength(0);
+    expect(
+      await db()
+        .select()
+        .from(namedObjects)
+        .where(and(eq(namedObjects.sessionId, sessionId), eq(namedObjects.name, "bad"))),
+    ).toHaveLength(0);
     // a value that is not an ideal is a bad line too
-    const poly = await owner.json("/api/experiments/uploads", { sessionId, name: "bad", format: "text", ring: RING, content: "<x>\nx^2 + y" });
+    const poly = await owner.json("/api/experiments/uploads", {
+      sessionId,
+      name: "bad",
+      format: "text",
+      ring: RING,
+      content: "<x>\nx^2 + y",
+    });
     expect(poly.status).toBe(422);
     expect(((await poly.json()) as { error: { message: string } }).error.message).toMatch(/line 2: expected an ideal/);
   });
@@ -68,16 +106,31 @@ describe("uploads", () => {
     const body = (await r.json()) as { upload: { id: string; length: number } };
     expect(body.upload.length).toBe(4);
     uploadId = body.upload.id;
-    const [obj] = await db().select().from(namedObjects).where(and(eq(namedObjects.sessionId, sessionId), eq(namedObjects.name, "mine")));
+    const [obj] = await db()
+      .select()
+      .from(namedObjects)
+      .where(and(eq(namedObjects.sessionId, sessionId), eq(namedObjects.name, "mine")));
     expect(obj.type).toBe("Family");
     expect((obj.value as { length: number }).length).toBe(4);
   });
 
   it("JSON lists of generators; a bad item is named", async () => {
-    const ok = await owner.json("/api/experiments/uploads", { sessionId, name: "fromjson", format: "json", ring: RING, content: '[["x^2", "y"], ["z^3"]]' });
+    const ok = await owner.json("/api/experiments/uploads", {
+      sessionId,
+      name: "fromjson",
+      format: "json",
+      ring: RING,
+      content: '[["x^2", "y"], ["z^3"]]',
+    });
     expect(ok.status).toBe(201);
     expect(((await ok.json()) as { upload: { length: number } }).upload.length).toBe(2);
-    const bad = await owner.json("/api/experiments/uploads", { sessionId, name: "fromjson2", format: "json", ring: RING, content: '[["x^2"], [], ["q"]]' });
+    const bad = await owner.json("/api/experiments/uploads", {
+      sessionId,
+      name: "fromjson2",
+      format: "json",
+      ring: RING,
+      content: '[["x^2"], [], ["q"]]',
+    });
     expect(bad.status).toBe(422);
     expect(((await bad.json()) as { error: { message: string } }).error.message).toMatch(/item 2/);
   });
@@ -98,18 +151,38 @@ describe("experiments over HTTP", () => {
     id = created.id;
     expect(created.total).toBe(4);
     expect(created.familyDefinition).toMatch(/^upload mine/);
-    await waitFor(async () => (await experiment(owner, id)).body.experiment.status === "done", 90_000, () => "upload experiment not done");
+    await waitFor(
+      async () => (await experiment(owner, id)).body.experiment.status === "done",
+      90_000,
+      () => "upload experiment not done",
+    );
     const { body } = await experiment(owner, id);
-    expect(body.experiment).toMatchObject({ done: 4, total: 4, failures: 0, columns: ["index", "label", "status", "seconds", "codim", "e"] });
+    expect(body.experiment).toMatchObject({
+      done: 4,
+      total: 4,
+      failures: 0,
+      columns: ["index", "label", "status", "seconds", "codim", "e"],
+    });
     expect(body.experiment.engineVersion).toMatch(/ringside-engine/);
     // codimension and degree by hand: (x^2, y^2) complete intersection 2, degree 4; (xy) 1, 2;
     // (x^2, xy, y^2) = (x, y)^2: 2, 3; (x, y, z): 3, 1
-    const rows = (await (await owner.request(`/api/experiments/${id}/rows?sort=e&order=desc`)).json()) as { rows: { index: number; fields: Record<string, { text: string }> }[]; matched: number };
+    const rows = (await (await owner.request(`/api/experiments/${id}/rows?sort=e&order=desc`)).json()) as {
+      rows: { index: number; fields: Record<string, { text: string }> }[];
+      matched: number;
+    };
     expect(rows.matched).toBe(4);
-    expect(rows.rows.map((x) => [x.index, x.fields.codim.text, x.fields.e.text])).toEqual([[0, "2", "4"], [2, "2", "3"], [1, "1", "2"], [3, "3", "1"]]);
+    expect(rows.rows.map((x) => [x.index, x.fields.codim.text, x.fields.e.text])).toEqual([
+      [0, "2", "4"],
+      [2, "2", "3"],
+      [1, "1", "2"],
+      [3, "3", "1"],
+    ]);
     const paged = (await (await owner.request(`/api/experiments/${id}/rows?limit=2&offset=2`)).json()) as { rows: { index: number }[] };
     expect(paged.rows.map((x) => x.index)).toEqual([2, 3]);
-    const filtered = (await (await owner.request(`/api/experiments/${id}/rows?where=codim:eq:2`)).json()) as { rows: { index: number }[]; matched: number };
+    const filtered = (await (await owner.request(`/api/experiments/${id}/rows?where=codim:eq:2`)).json()) as {
+      rows: { index: number }[];
+      matched: number;
+    };
     expect(filtered.rows.map((x) => x.index)).toEqual([0, 2]);
     const bad = await owner.request(`/api/experiments/${id}/rows?sort=nope`);
     expect(bad.status).toBe(400);
@@ -119,7 +192,9 @@ describe("experiments over HTTP", () => {
     const csv = await (await owner.request(`/api/experiments/${id}/export?format=csv`)).text();
     expect(csv.split("\r\n")[0]).toBe("index,label,status,seconds,codim,e,message,worker");
     expect(csv.split("\r\n")[1]).toMatch(/^0,"<x\^2, y\^2>",ok,\d+\.\d{3},2,4,,/);
-    const json = (await (await owner.request(`/api/experiments/${id}/export?format=json`)).json()) as { table: { type: string; columns: string[]; rows: unknown[][] } };
+    const json = (await (await owner.request(`/api/experiments/${id}/export?format=json`)).json()) as {
+      table: { type: string; columns: string[]; rows: unknown[][] };
+    };
     expect(json.table.type).toBe("Table");
     expect(json.table.rows).toHaveLength(4);
     const tex = await (await owner.request(`/api/experiments/${id}/export?format=latex`)).text();
@@ -128,16 +203,25 @@ describe("experiments over HTTP", () => {
   });
 
   it("creates from a cell of the session", async () => {
-    const cell = await owner.json(`/api/sessions/${sessionId}/cells`, { source: "S := Q[a, b]\nT := sweep(monomial_ideals(S, degree = 2, max_gens = 3), I -> {pd: (S / I).pd})" });
+    const cell = await owner.json(`/api/sessions/${sessionId}/cells`, {
+      source: "S := Q[a, b]\nT := sweep(monomial_ideals(S, degree = 2, max_gens = 3), I -> {pd: (S / I).pd})",
+    });
     expect(cell.status).toBe(200);
-    const events = (await cell.text()).trim().split("\n").map((l) => JSON.parse(l) as { event: string; cellId?: string });
+    const events = (await cell.text())
+      .trim()
+      .split("\n")
+      .map((l) => JSON.parse(l) as { event: string; cellId?: string });
     const cellId = events.find((e) => e.event === "accepted")!.cellId!;
     const r = await owner.json("/api/experiments", { sessionId, cellId });
     expect(r.status).toBe(201);
     const e = ((await r.json()) as { experiment: Experiment }).experiment;
     expect(e.total).toBe(7);
     expect(e.familyDefinition).toBe("monomial_ideals(Q[a, b], degree = 2, max_gens = 3)");
-    await waitFor(async () => (await experiment(owner, e.id)).body.experiment.status === "done", 90_000, () => "cell experiment not done");
+    await waitFor(
+      async () => (await experiment(owner, e.id)).body.experiment.status === "done",
+      90_000,
+      () => "cell experiment not done",
+    );
     // a program without a sweep is refused, saying why
     const none = await owner.json("/api/experiments", { sessionId, source: "S := Q[a]\nS.dim" });
     expect(none.status).toBe(422);
@@ -146,7 +230,8 @@ describe("experiments over HTTP", () => {
   it("pause, resume and cancel; only editors may; a viewer, an outsider and a link holder", async () => {
     const r = await owner.json("/api/experiments", {
       sessionId,
-      source: "S := GF(32003)[x, y, z, w]\nsweep(random_ideals(S, count = 40, gens = 3, degree = 2, seed = 9), I -> {b: resolve(S / I).betti.totals})",
+      source:
+        "S := GF(32003)[x, y, z, w]\nsweep(random_ideals(S, count = 40, gens = 3, degree = 2, seed = 9), I -> {b: resolve(S / I).betti.totals})",
     });
     const e = ((await r.json()) as { experiment: Experiment }).experiment;
     expect((await guest.request(`/api/experiments/${e.id}/pause`, { method: "POST" })).status).toBe(403);

@@ -11,7 +11,19 @@ import { act, createFromProgram, runAgain } from "@/lib/experiments/service";
 import { getExperiment } from "@/lib/experiments/store";
 import { testEnv } from "../helpers/env";
 import { uniqueEmail } from "../helpers/fixtures";
-import { freePort, killHard, PROCESS_ENV, rowCount, rowsOf, startServer, startWorker, statusOf, stopGently, waitFor, type Proc } from "./helpers";
+import {
+  freePort,
+  killHard,
+  PROCESS_ENV,
+  rowCount,
+  rowsOf,
+  startServer,
+  startWorker,
+  statusOf,
+  stopGently,
+  waitFor,
+  type Proc,
+} from "./helpers";
 
 // experiments created here carry the short member limit the spawned processes also use
 process.env.RINGSIDE_MEMBER_TIME_LIMIT_MS = PROCESS_ENV.RINGSIDE_MEMBER_TIME_LIMIT_MS;
@@ -22,7 +34,10 @@ const procs: Proc[] = [];
 
 beforeAll(async () => {
   testEnv("DATABASE_URL");
-  const [u] = await db().insert(users).values({ email: uniqueEmail("durable"), displayName: "Durable Tester", passwordHash: "x" }).returning();
+  const [u] = await db()
+    .insert(users)
+    .values({ email: uniqueEmail("durable"), displayName: "Durable Tester", passwordHash: "x" })
+    .returning();
   const [s] = await db().insert(sessions).values({ title: "durable experiments", ownerId: u.id }).returning();
   userId = u.id;
   sessionId = s.id;
@@ -52,17 +67,26 @@ describe("a 200-member sweep shared by two workers and a server", () => {
     const e = await createFromProgram({
       sessionId,
       userId,
-      source: "S := GF(32003)[x, y, z, w]\nF := random_ideals(S, count = 200, gens = 3, degree = 2, seed = 21)\nsweep(F, I -> {b: resolve(S / I).betti.totals, ci: (S / I).is_ci})",
+      source:
+        "S := GF(32003)[x, y, z, w]\nF := random_ideals(S, count = 200, gens = 3, degree = 2, seed = 21)\nsweep(F, I -> {b: resolve(S / I).betti.totals, ci: (S / I).is_ci})",
     });
     expect(e.total).toBe(200);
     const w1 = startWorker("w1");
     w2 = startWorker("w2");
     procs.push(w1, w2);
-    await waitFor(async () => (await rowsOf(e.id)).some((r) => r.worker.endsWith(":w1")) && (await rowCount(e.id)) >= 40, 120_000, () => `w1 never wrote a row:\n${w1.output()}`);
+    await waitFor(
+      async () => (await rowsOf(e.id)).some((r) => r.worker.endsWith(":w1")) && (await rowCount(e.id)) >= 40,
+      120_000,
+      () => `w1 never wrote a row:\n${w1.output()}`,
+    );
     await killHard(w1);
     const atKill = await rowCount(e.id);
     expect(atKill).toBeLessThan(200);
-    await waitFor(async () => (await statusOf(e.id)) === "done", 180_000, () => `not done, ${atKill} rows at the kill`);
+    await waitFor(
+      async () => (await statusOf(e.id)) === "done",
+      180_000,
+      () => `not done, ${atKill} rows at the kill`,
+    );
     const rows = await rowsOf(e.id);
     expect(rows).toHaveLength(200);
     expect(new Set(rows.map((r) => r.memberIndex)).size).toBe(200);
@@ -102,7 +126,11 @@ describe("a 200-member sweep shared by two workers and a server", () => {
       userId,
       source: `K := GF(32003)[u0..u${N}]\nG := ${katsura}\nsweep(family([<u0>, <u0, u1>, <u0, u1, u2>]), I -> {n: if I.gens.length == 2 then G.groebner.length else 6 / (I.gens.length - 1)})`,
     });
-    await waitFor(async () => (await statusOf(e.id)) === "done", 120_000, () => "the sweep with a slow member did not finish");
+    await waitFor(
+      async () => (await statusOf(e.id)) === "done",
+      120_000,
+      () => "the sweep with a slow member did not finish",
+    );
     const rows = await rowsOf(e.id);
     expect(rows.map((r) => r.status)).toEqual(["error", "limit", "ok"]);
     expect(rows[0].message).toMatch(/division by zero/);
@@ -111,13 +139,22 @@ describe("a 200-member sweep shared by two workers and a server", () => {
   }, 200_000);
 
   it("run again reproduces every row (timings aside)", async () => {
-    const source = "S := Q[a, b, c]\nsweep(monomial_ideals(S, degree = 2, max_gens = 2, up_to_symmetry = true), I -> {betti: resolve(S / I).betti.totals, e: I.degree})";
+    const source =
+      "S := Q[a, b, c]\nsweep(monomial_ideals(S, degree = 2, max_gens = 2, up_to_symmetry = true), I -> {betti: resolve(S / I).betti.totals, e: I.degree})";
     const first = await createFromProgram({ sessionId, userId, source });
-    await waitFor(async () => (await statusOf(first.id)) === "done", 60_000, () => "first run not done");
+    await waitFor(
+      async () => (await statusOf(first.id)) === "done",
+      60_000,
+      () => "first run not done",
+    );
     const again = await runAgain((await getExperiment(first.id))!, userId);
     expect(again.rerunOf).toBe(first.id);
     expect(again.familyDefinition).toBe(first.familyDefinition);
-    await waitFor(async () => (await statusOf(again.id)) === "done", 60_000, () => "second run not done");
+    await waitFor(
+      async () => (await statusOf(again.id)) === "done",
+      60_000,
+      () => "second run not done",
+    );
     const strip = (rs: Awaited<ReturnType<typeof rowsOf>>) => rs.map((r) => ({ i: r.memberIndex, s: r.status, f: r.fields }));
     expect(strip(await rowsOf(again.id))).toEqual(strip(await rowsOf(first.id)));
     expect(await rowCount(first.id)).toBe(6);
@@ -127,9 +164,14 @@ describe("a 200-member sweep shared by two workers and a server", () => {
     const e = await createFromProgram({
       sessionId,
       userId,
-      source: "S := GF(32003)[x, y, z, w]\nsweep(random_ideals(S, count = 60, gens = 3, degree = 2, seed = 5), I -> {b: resolve(S / I).betti.totals})",
+      source:
+        "S := GF(32003)[x, y, z, w]\nsweep(random_ideals(S, count = 60, gens = 3, degree = 2, seed = 5), I -> {b: resolve(S / I).betti.totals})",
     });
-    await waitFor(async () => (await rowCount(e.id)) >= 3, 60_000, () => "no rows");
+    await waitFor(
+      async () => (await rowCount(e.id)) >= 3,
+      60_000,
+      () => "no rows",
+    );
     await act(e.id, "pause");
     await new Promise((r) => setTimeout(r, 2000)); // members already running may finish
     const paused = await rowCount(e.id);
@@ -137,15 +179,24 @@ describe("a 200-member sweep shared by two workers and a server", () => {
     expect(await rowCount(e.id)).toBe(paused);
     expect(await statusOf(e.id)).toBe("paused");
     await act(e.id, "resume");
-    await waitFor(async () => (await statusOf(e.id)) === "done", 120_000, () => "not done after resume");
+    await waitFor(
+      async () => (await statusOf(e.id)) === "done",
+      120_000,
+      () => "not done after resume",
+    );
     expect(await rowCount(e.id)).toBe(60);
 
     const c = await createFromProgram({
       sessionId,
       userId,
-      source: "S := GF(32003)[x, y, z, w]\nsweep(random_ideals(S, count = 80, gens = 3, degree = 2, seed = 6), I -> {b: resolve(S / I).betti.totals})",
+      source:
+        "S := GF(32003)[x, y, z, w]\nsweep(random_ideals(S, count = 80, gens = 3, degree = 2, seed = 6), I -> {b: resolve(S / I).betti.totals})",
     });
-    await waitFor(async () => (await rowCount(c.id)) >= 2, 60_000, () => "no rows");
+    await waitFor(
+      async () => (await rowCount(c.id)) >= 2,
+      60_000,
+      () => "no rows",
+    );
     await act(c.id, "cancel");
     await new Promise((r) => setTimeout(r, 3000));
     const rows = await rowsOf(c.id);
@@ -159,9 +210,14 @@ describe("a 200-member sweep shared by two workers and a server", () => {
     const e = await createFromProgram({
       sessionId,
       userId,
-      source: "S := GF(32003)[x, y, z, w]\nsweep(random_ideals(S, count = 100, gens = 3, degree = 2, seed = 77), I -> {b: resolve(S / I).betti.totals})",
+      source:
+        "S := GF(32003)[x, y, z, w]\nsweep(random_ideals(S, count = 100, gens = 3, degree = 2, seed = 77), I -> {b: resolve(S / I).betti.totals})",
     });
-    await waitFor(async () => (await rowCount(e.id)) >= 10, 120_000, () => `the server wrote no rows:\n${server.output()}`);
+    await waitFor(
+      async () => (await rowCount(e.id)) >= 10,
+      120_000,
+      () => `the server wrote no rows:\n${server.output()}`,
+    );
     await killHard(server);
     const before = await rowsOf(e.id);
     expect(before.length).toBeLessThan(100);
@@ -169,7 +225,11 @@ describe("a 200-member sweep shared by two workers and a server", () => {
     expect(await rowCount(e.id)).toBe(before.length); // nobody is working on it
     server = await startServer(port);
     procs.push(server);
-    await waitFor(async () => (await statusOf(e.id)) === "done", 180_000, () => `not resumed:\n${server.output()}`);
+    await waitFor(
+      async () => (await statusOf(e.id)) === "done",
+      180_000,
+      () => `not resumed:\n${server.output()}`,
+    );
     const after = await rowsOf(e.id);
     expect(after).toHaveLength(100);
     const byIndex = new Map(after.map((r) => [r.memberIndex, r]));

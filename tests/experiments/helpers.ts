@@ -50,13 +50,17 @@ export async function startServer(port: number): Promise<Proc> {
     RINGSIDE_EMBEDDED_WORKER: "1",
     RINGSIDE_EMBEDDED_CONCURRENCY: "1",
   });
-  await waitFor(async () => {
-    try {
-      return (await fetch(`http://127.0.0.1:${port}/sign-in`)).status < 500;
-    } catch {
-      return false;
-    }
-  }, 90_000, () => `server on ${port} did not start:\n${p.output()}`);
+  await waitFor(
+    async () => {
+      try {
+        return (await fetch(`http://127.0.0.1:${port}/sign-in`)).status < 500;
+      } catch {
+        return false;
+      }
+    },
+    90_000,
+    () => `server on ${port} did not start:\n${p.output()}`,
+  );
   return p;
 }
 
@@ -83,7 +87,10 @@ export async function waitFor(cond: () => Promise<boolean>, timeoutMs: number, w
 }
 
 export async function rowCount(experimentId: string): Promise<number> {
-  const [{ n }] = await db().select({ n: sql<number>`count(*)::int` }).from(experimentRows).where(eq(experimentRows.experimentId, experimentId));
+  const [{ n }] = await db()
+    .select({ n: sql<number>`count(*)::int` })
+    .from(experimentRows)
+    .where(eq(experimentRows.experimentId, experimentId));
   return n;
 }
 
@@ -93,5 +100,9 @@ export async function statusOf(experimentId: string): Promise<string> {
 }
 
 export async function rowsOf(experimentId: string) {
-  return db().select().from(experimentRows).where(and(eq(experimentRows.experimentId, experimentId))).orderBy(experimentRows.memberIndex);
+  return db()
+    .select()
+    .from(experimentRows)
+    .where(and(eq(experimentRows.experimentId, experimentId)))
+    .orderBy(experimentRows.memberIndex);
 }

@@ -72,7 +72,9 @@ describe("random_ideals", () => {
       "S := Q[x, y]\nF := random_ideals(S, count = 4, gens = 2, degree = 3, seed = 2)\n[all([f.is_homogeneous and f.degree == 3 for f in I.gens]) for I in F]",
     );
     expect(v.text).toBe("[true, true, true, true]");
-    const w = await last("S := Q[x, y]\nF := random_ideals(S, count = 3, gens = 1, degree = 2, seed = 2, homogeneous = false)\n[I.gens[0].is_homogeneous for I in F]");
+    const w = await last(
+      "S := Q[x, y]\nF := random_ideals(S, count = 3, gens = 1, degree = 2, seed = 2, homogeneous = false)\n[I.gens[0].is_homogeneous for I in F]",
+    );
     expect(w.text).toBe("[false, false, false]");
   });
 
@@ -166,7 +168,10 @@ describe("sweep", () => {
     // J. Tate, "Homology of Noetherian rings and local rings", Illinois J. Math. 1 (1957),
     // Theorem 6. Dense random quadrics over GF(32003) form a regular sequence for these seeds
     // (each row's ring is checked to be a complete intersection of codimension c).
-    for (const [n, c] of [[3, 2], [4, 3]] as const) {
+    for (const [n, c] of [
+      [3, 2],
+      [4, 3],
+    ] as const) {
       const vars = ["x", "y", "z", "w"].slice(0, n).join(", ");
       const t = (await last(
         `S := GF(32003)[${vars}]\nsweep(random_ideals(S, count = 5, gens = ${c}, degree = 2, seed = ${n}), I -> {ci: (S / I).is_ci, codim: (S / I).codim, p: poincare((S / I).residue, terms = 7).coefficients})`,
@@ -242,7 +247,9 @@ describe("find", () => {
   });
 
   it("answers none after trying every member", async () => {
-    const v = await last("S := Q[a, b]\nfind(monomial_ideals(S, degree = 2, max_gens = 1), I -> {cm: (S / I).is_cm}, where = r -> not r.cm)");
+    const v = await last(
+      "S := Q[a, b]\nfind(monomial_ideals(S, degree = 2, max_gens = 1), I -> {cm: (S / I).is_cm}, where = r -> not r.cm)",
+    );
     expect(v.type).toBe("None");
   });
 });
@@ -250,9 +257,15 @@ describe("find", () => {
 describe("Table access", () => {
   it("T.columns, T.rows, T.length, T.column(name), T.where(pred)", async () => {
     const out = await run(
-      "S := Q[a, b]\nT := sweep(monomial_ideals(S, degree = 2, max_gens = 2), I -> {n: I.gens.length})\nT.length\nT.where(r -> r.n == 2).length\nT.column(\"n\")\nT.rows[0].label\nT.columns",
+      'S := Q[a, b]\nT := sweep(monomial_ideals(S, degree = 2, max_gens = 2), I -> {n: I.gens.length})\nT.length\nT.where(r -> r.n == 2).length\nT.column("n")\nT.rows[0].label\nT.columns',
     );
     expect(out.error, out.error?.text).toBeNull();
-    expect(out.results.slice(2).map((r) => r.value.text)).toEqual(["6", "3", "[1, 1, 1, 2, 2, 2]", "<a^2>", "[index, label, status, seconds, n]"]);
+    expect(out.results.slice(2).map((r) => r.value.text)).toEqual([
+      "6",
+      "3",
+      "[1, 1, 1, 2, 2, 2]",
+      "<a^2>",
+      "[index, label, status, seconds, n]",
+    ]);
   });
 });

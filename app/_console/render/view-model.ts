@@ -1,7 +1,7 @@
 /// Turns a §9 value into what the transcript draws: TeX for algebra, a grid for Betti
 /// tables, a chain of ranks for resolutions, plain text for the rest. Pure functions of
 /// the JSON, so every rendering rule is unit-tested without a browser.
-import type { ValueJson } from "../api/types";
+import type { ValueReading } from "@/lib/wire/reading";
 import { bettiGrid, type BettiEntry, type BettiGrid } from "./betti";
 import { texOfRankChain } from "./chain";
 import { texOfHilbertSeries, texOfSeriesPrefix } from "./series";
@@ -26,7 +26,7 @@ export function texOfField(field: string): string {
 }
 
 /// TeX of a ring from its §9 encoding: K[x, y, …], over its defining ideal when nonzero.
-export function texOfRing(v: ValueJson): string {
+export function texOfRing(v: ValueReading): string {
   const vars = (v.vars ?? []).map(texOfVariable).join(", ");
   const base = `${texOfField(v.field ?? "?")}[${vars}]`;
   const ideal = (v.ideal ?? []).filter((g) => g !== "0");
@@ -35,7 +35,7 @@ export function texOfRing(v: ValueJson): string {
 
 /// TeX of a presented module: 0, a graded free module ⊕ R(−d)^m when there are no
 /// relations, else coker of the presentation with the generators' degrees when not all 0.
-export function texOfModule(rows: readonly (readonly string[])[], degrees: readonly number[], ring?: ValueJson): string {
+export function texOfModule(rows: readonly (readonly string[])[], degrees: readonly number[], ring?: ValueReading): string {
   if (rows.length === 0) return "0";
   const R = ring?.vars ? texOfRing(ring) : "R";
   const base = ring?.ideal?.some((g) => g !== "0") ? `\\left(${R}\\right)` : R;
@@ -51,17 +51,17 @@ export function texOfModule(rows: readonly (readonly string[])[], degrees: reado
   return `\\operatorname{coker} ${texOfMatrix(rows)}${shifted}`;
 }
 
-const entriesOf = (v: ValueJson): BettiEntry[] =>
+const entriesOf = (v: ValueReading): BettiEntry[] =>
   ((v.entries ?? v.betti ?? []) as readonly BettiEntry[]).filter(
     (e) => Array.isArray(e) && e.length === 3 && e.every((n) => typeof n === "number"),
   );
 
-function isStringRows(rows: ValueJson["rows"]): rows is readonly (readonly string[])[] {
+function isStringRows(rows: ValueReading["rows"]): rows is readonly (readonly string[])[] {
   return Array.isArray(rows) && rows.every((r) => Array.isArray(r) && r.every((c) => typeof c === "string"));
 }
 
 /// The view of a §9 value; unknown or malformed values fall back to their `text`.
-export function viewOfValue(v: ValueJson): ValueView {
+export function viewOfValue(v: ValueReading): ValueView {
   switch (v.type) {
     case "Poly":
       return { kind: "tex", tex: texOrVerbatim(v.text) };
@@ -83,7 +83,7 @@ export function viewOfValue(v: ValueJson): ValueView {
     case "Module": {
       const p = v.presentation;
       if (!p || !isStringRows(p.rows)) return { kind: "text", text: v.text };
-      return { kind: "tex", tex: texOfModule(p.rows, v.degrees ?? [], v.ring) };
+      return { kind: "tex", tex: texOfModule(p.rows, v.degrees ?? [], v.ring ?? undefined) };
     }
     case "BettiTable":
       return { kind: "betti", grid: bettiGrid(entriesOf(v), v.complete !== false) };
@@ -117,7 +117,7 @@ export function viewOfValue(v: ValueJson): ValueView {
     case "Record":
       return { kind: "record", fields: Object.entries(v.fields ?? {}).map(([k, f]) => [k, viewOfValue(f)] as const) };
     case "Table": {
-      const rows = (v.rows ?? []) as readonly (readonly ValueJson[])[];
+      const rows = (v.rows ?? []) as readonly (readonly ValueReading[])[];
       return {
         kind: "table",
         columns: v.columns ?? [],
@@ -131,6 +131,6 @@ export function viewOfValue(v: ValueJson): ValueView {
 
 /// The value's own warning (a bound that cut it, a random choice behind it), shown under it
 /// in words: the `text` carries it too, but the typeset view would otherwise hide it.
-export function noteOfValue(v: ValueJson): string | null {
+export function noteOfValue(v: ValueReading): string | null {
   return typeof v.note === "string" && v.note !== "" ? v.note : null;
 }

@@ -2,7 +2,7 @@
 /// One transcript cell: source, status, time taken and results; while it runs, a
 /// progress bar with the stage, the Betti columns computed so far and a Cancel button.
 import type { ReactNode } from "react";
-import { resultIndex, type Cell, type CellStatus } from "../api/types";
+import { resultIndex, type Cell, type CellStatus } from "@/lib/wire/reading";
 import { bettiGrid } from "../render/betti";
 import { overallFraction, type RunningCell } from "../state/running-cell";
 import { BettiTable } from "./betti-table";
@@ -47,7 +47,10 @@ function Source({ source }: { source: string }) {
 /// puts its links there).
 export function CellView({ cell, footer }: { cell: Cell; footer?: ReactNode }) {
   return (
-    <article aria-label={`Cell ${cell.position + 1}`} className="rs-cell flex flex-col gap-2 border-b border-ink/10 py-3 dark:border-paper/10">
+    <article
+      aria-label={`Cell ${cell.position + 1}`}
+      className="rs-cell flex flex-col gap-2 border-b border-ink/10 py-3 dark:border-paper/10"
+    >
       <Header position={cell.position} status={cell.status} ms={cell.timings?.totalMs ?? null} />
       <Source source={cell.source} />
       {cell.results.map((r, k) => (
@@ -66,7 +69,11 @@ export function RunningCellView({ cell, onCancel }: { cell: RunningCell; onCance
   const running = cell.status === "running";
   const stage = cell.stage === null ? "sending" : cell.stage === "checked" ? "checked, starting" : cell.stage;
   return (
-    <article aria-label="Running cell" aria-busy={running} className="rs-cell flex flex-col gap-2 border-b border-ink/10 py-3 dark:border-paper/10">
+    <article
+      aria-label="Running cell"
+      aria-busy={running}
+      className="rs-cell flex flex-col gap-2 border-b border-ink/10 py-3 dark:border-paper/10"
+    >
       <Header position={cell.position} status={cell.status} ms={cell.totalMs} />
       <Source source={cell.source} />
       {cell.results.map((r, k) => (

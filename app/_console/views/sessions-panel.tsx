@@ -1,6 +1,6 @@
 "use client";
 /// The list of sessions the user can open, with New session and Import buttons.
-import type { SessionSummary } from "../api/types";
+import type { SessionSummary } from "@/lib/wire/reading";
 import { buttonQuiet, focusRing, panelHeading } from "./styles";
 
 export interface SessionsPanelProps {

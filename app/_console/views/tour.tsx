@@ -6,7 +6,15 @@ import { buttonSecondary } from "./styles";
 
 /// The tour as a list; `onInsert` receives the chosen example; `onRunExperiment`, when
 /// given, runs the last step's sweep as an experiment and opens its plot.
-export function TourList({ onInsert, canRun, onRunExperiment }: { onInsert: (e: GuidedExample) => void; canRun: boolean; onRunExperiment?: (e: GuidedExample) => void }) {
+export function TourList({
+  onInsert,
+  canRun,
+  onRunExperiment,
+}: {
+  onInsert: (e: GuidedExample) => void;
+  canRun: boolean;
+  onRunExperiment?: (e: GuidedExample) => void;
+}) {
   return (
     <ol className="flex flex-col gap-3" aria-label="Guided examples">
       {[...GUIDED_TOUR, EXPERIMENT_STEP].map((e) => (
@@ -20,7 +28,12 @@ export function TourList({ onInsert, canRun, onRunExperiment }: { onInsert: (e: 
                 </button>
               )}
               {e.id === EXPERIMENT_STEP.id && onRunExperiment && (
-                <button type="button" className={buttonSecondary} onClick={() => onRunExperiment(e)} aria-label="Run the sweep as an experiment and show its plot">
+                <button
+                  type="button"
+                  className={buttonSecondary}
+                  onClick={() => onRunExperiment(e)}
+                  aria-label="Run the sweep as an experiment and show its plot"
+                >
                   Run as an experiment
                 </button>
               )}
@@ -42,14 +55,24 @@ export function TourList({ onInsert, canRun, onRunExperiment }: { onInsert: (e: 
 }
 
 /// The welcome shown in an empty session.
-export function EmptySessionWelcome({ onInsert, onOpenTour, canRun }: { onInsert: (e: GuidedExample) => void; onOpenTour: () => void; canRun: boolean }) {
+export function EmptySessionWelcome({
+  onInsert,
+  onOpenTour,
+  canRun,
+}: {
+  onInsert: (e: GuidedExample) => void;
+  onOpenTour: () => void;
+  canRun: boolean;
+}) {
   return (
     <div className="mx-auto flex max-w-2xl flex-col gap-3 py-6">
       <h2 className="text-lg font-semibold">An empty session</h2>
       <p className="text-sm">
-        New to Ringside? Walk through the first steps of the Saltmarsh Syzygy Circle, a small research group studying
-        &ldquo;tideline ideals&rdquo;: products of neighbouring variables along a line.
-        {canRun ? " Each example can be inserted into the input and run with Enter." : " This session is read-only for you, so the examples are there to read."}
+        New to Ringside? Walk through the first steps of the Saltmarsh Syzygy Circle, a small research group studying &ldquo;tideline
+        ideals&rdquo;: products of neighbouring variables along a line.
+        {canRun
+          ? " Each example can be inserted into the input and run with Enter."
+          : " This session is read-only for you, so the examples are there to read."}
       </p>
       <div>
         <button type="button" className={buttonSecondary} onClick={onOpenTour}>
@@ -59,7 +82,11 @@ export function EmptySessionWelcome({ onInsert, onOpenTour, canRun }: { onInsert
       {canRun && (
         <p className="text-sm">
           Or start with the first example:{" "}
-          <button type="button" className="font-mono text-ink-soft underline dark:text-signal-soft" onClick={() => onInsert(GUIDED_TOUR[0])}>
+          <button
+            type="button"
+            className="font-mono text-ink-soft underline dark:text-signal-soft"
+            onClick={() => onInsert(GUIDED_TOUR[0])}
+          >
             {GUIDED_TOUR[0].source}
           </button>
         </p>

@@ -1,7 +1,7 @@
 "use client";
 /// Draws one §9 value for people: typeset algebra, Betti tables, chains of ranks,
 /// series with their number of terms, lists, records and tables.
-import type { ValueJson } from "../api/types";
+import type { ValueReading } from "@/lib/wire/reading";
 import { noteOfValue, viewOfValue, type ValueView as View } from "../render/view-model";
 import { BettiTable } from "./betti-table";
 import { Tex } from "./tex";
@@ -83,7 +83,7 @@ function Draw({ view, text }: { view: View; text: string }) {
 }
 
 /// The value of one statement, with its type as a small label.
-export function ValueView({ value }: { value: ValueJson }) {
+export function ValueView({ value }: { value: ValueReading }) {
   return (
     <div className="flex items-start gap-3" data-value-type={value.type}>
       <span className="mt-0.5 w-24 shrink-0 text-right text-xs uppercase tracking-wide text-ink/50 dark:text-paper/50">

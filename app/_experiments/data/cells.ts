@@ -1,6 +1,6 @@
 /// Reading a table cell of an experiment row: its text as the table prints it, and its
 /// number when it has one (for sorting, filtering and plotting). Pure functions.
-import type { ValueJson } from "@/app/_console/api/types";
+import type { ValueReading as ValueJson } from "@/lib/wire/reading";
 import type { Row } from "../types";
 
 /// The exact value of a §9 Int or Rat as a JavaScript number (a Rat is "p/q"); Bool as 0/1.

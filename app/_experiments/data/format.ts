@@ -18,6 +18,9 @@ export function formatEta(seconds: number | null): string {
 
 /// A safe file name stem from an experiment's title and id.
 export function fileStem(title: string, id: string): string {
-  const words = title.replace(/[^A-Za-z0-9]+/g, "-").replace(/^-+|-+$/g, "").slice(0, 40);
+  const words = title
+    .replace(/[^A-Za-z0-9]+/g, "-")
+    .replace(/^-+|-+$/g, "")
+    .slice(0, 40);
   return `${words || "experiment"}-${id.slice(0, 8)}`;
 }

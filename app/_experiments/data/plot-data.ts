@@ -73,7 +73,10 @@ export interface HeatCell {
 /// Graded Betti numbers β_{i,j} of `column` (a §9 Betti table: entries [i, j, b]) across the
 /// ok rows: one heat-map column per member, one row per (i, j) that is nonzero somewhere,
 /// ordered by i then j. Members are in index order.
-export function bettiHeat(rows: readonly Row[], column: string): { members: number[]; positions: [number, number][]; cells: HeatCell[]; max: number } {
+export function bettiHeat(
+  rows: readonly Row[],
+  column: string,
+): { members: number[]; positions: [number, number][]; cells: HeatCell[]; max: number } {
   const cells: HeatCell[] = [];
   const keys = new Map<string, [number, number]>();
   const members: number[] = [];

@@ -17,9 +17,33 @@ export const HEIGHT = 380;
 const M = { top: 40, right: 24, bottom: 52, left: 64 };
 const FONT = "Inter, system-ui, sans-serif";
 
-function Frame({ svgRef, title, caption, palette, children, label }: { svgRef: Ref<SVGSVGElement>; title: string; caption: string; palette: PlotPalette; children: React.ReactNode; label: string }) {
+function Frame({
+  svgRef,
+  title,
+  caption,
+  palette,
+  children,
+  label,
+}: {
+  svgRef: Ref<SVGSVGElement>;
+  title: string;
+  caption: string;
+  palette: PlotPalette;
+  children: React.ReactNode;
+  label: string;
+}) {
   return (
-    <svg ref={svgRef} xmlns="http://www.w3.org/2000/svg" width={WIDTH} height={HEIGHT} viewBox={`0 0 ${WIDTH} ${HEIGHT}`} role="img" aria-label={label} className="h-auto w-full max-w-full" fontFamily={FONT}>
+    <svg
+      ref={svgRef}
+      xmlns="http://www.w3.org/2000/svg"
+      width={WIDTH}
+      height={HEIGHT}
+      viewBox={`0 0 ${WIDTH} ${HEIGHT}`}
+      role="img"
+      aria-label={label}
+      className="h-auto w-full max-w-full"
+      fontFamily={FONT}
+    >
       <title>{title}</title>
       <rect width={WIDTH} height={HEIGHT} fill={palette.background} />
       <text x={M.left} y={22} fill={palette.text} fontSize={14} fontWeight={600}>
@@ -44,20 +68,47 @@ const innerW = WIDTH - M.left - M.right;
 const innerH = HEIGHT - M.top - M.bottom;
 
 /// "n points, m rows without a number left out" — what the plot does not show, said.
-const leftOut = (used: number, skipped: number, noun = "rows") => `${used} ${noun}${skipped ? `; ${skipped} without a number left out` : ""}`;
+const leftOut = (used: number, skipped: number, noun = "rows") =>
+  `${used} ${noun}${skipped ? `; ${skipped} without a number left out` : ""}`;
 
-export function Histogram({ rows, column, palette, svgRef }: { rows: Row[]; column: string; palette: PlotPalette; svgRef: Ref<SVGSVGElement> }) {
+export function Histogram({
+  rows,
+  column,
+  palette,
+  svgRef,
+}: {
+  rows: Row[];
+  column: string;
+  palette: PlotPalette;
+  svgRef: Ref<SVGSVGElement>;
+}) {
   const { bins, used, skipped } = histogram(rows, column);
   const x = scaleLinear<number>({ domain: bins.length ? [bins[0].from, bins[bins.length - 1].to] : [0, 1], range: [0, innerW] });
   const y = scaleLinear<number>({ domain: [0, Math.max(1, ...bins.map((b) => b.count))], range: [innerH, 0], nice: true });
   const integerBins = bins.length > 0 && bins.every((b) => b.to - b.from === 1 && Number.isInteger(b.from));
   return (
-    <Frame svgRef={svgRef} title={`Histogram of ${column}`} caption={leftOut(used, skipped)} palette={palette} label={`Histogram of ${column} over ${used} rows`}>
+    <Frame
+      svgRef={svgRef}
+      title={`Histogram of ${column}`}
+      caption={leftOut(used, skipped)}
+      palette={palette}
+      label={`Histogram of ${column} over ${used} rows`}
+    >
       <Group left={M.left} top={M.top}>
         {bins.map((b, k) => {
           const x0 = x(b.from);
           const w = Math.max(1, (bins.length === 1 ? innerW / 3 : x(b.to) - x0) - 2);
-          return <Bar key={k} x={bins.length === 1 ? innerW / 3 : x0 + 1} y={y(b.count)} width={w} height={innerH - y(b.count)} fill={palette.mark} data-count={b.count} />;
+          return (
+            <Bar
+              key={k}
+              x={bins.length === 1 ? innerW / 3 : x0 + 1}
+              y={y(b.count)}
+              width={w}
+              height={innerH - y(b.count)}
+              fill={palette.mark}
+              data-count={b.count}
+            />
+          );
         })}
         <AxisLeft scale={y} label="members" numTicks={5} {...axisProps(palette)} />
         <AxisBottom
@@ -70,7 +121,14 @@ export function Histogram({ rows, column, palette, svgRef }: { rows: Row[]; colu
         />
         {integerBins &&
           bins.map((b, k) => (
-            <text key={`l${k}`} x={x(b.from) + (x(b.to) - x(b.from)) / 2} y={y(b.count) - 4} fill={palette.text} fontSize={10} textAnchor="middle">
+            <text
+              key={`l${k}`}
+              x={x(b.from) + (x(b.to) - x(b.from)) / 2}
+              y={y(b.count) - 4}
+              fill={palette.text}
+              fontSize={10}
+              textAnchor="middle"
+            >
               {b.count || ""}
             </text>
           ))}
@@ -86,7 +144,23 @@ function extent(xs: number[]): [number, number] {
   return lo === hi ? [lo - 1, hi + 1] : [lo, hi];
 }
 
-export function Scatter({ rows, x: xc, y: yc, colour, palette, svgRef, line = false }: { rows: Row[]; x: string; y: string; colour: string | null; palette: PlotPalette; svgRef: Ref<SVGSVGElement>; line?: boolean }) {
+export function Scatter({
+  rows,
+  x: xc,
+  y: yc,
+  colour,
+  palette,
+  svgRef,
+  line = false,
+}: {
+  rows: Row[];
+  x: string;
+  y: string;
+  colour: string | null;
+  palette: PlotPalette;
+  svgRef: Ref<SVGSVGElement>;
+  line?: boolean;
+}) {
   const { points, skipped } = scatterPoints(rows, xc, yc, colour);
   const x = scaleLinear<number>({ domain: extent(points.map((p) => p.x)), range: [0, innerW], nice: true });
   const y = scaleLinear<number>({ domain: extent(points.map((p) => p.y)), range: [innerH, 0], nice: true });
@@ -101,7 +175,13 @@ export function Scatter({ rows, x: xc, y: yc, colour, palette, svgRef, line = fa
     <Frame svgRef={svgRef} title={title} caption={caption} palette={palette} label={`${title}: ${points.length} points`}>
       <Group left={M.left} top={M.top}>
         {line && sorted.length > 1 && (
-          <polyline points={sorted.map((p) => `${x(p.x)},${y(p.y)}`).join(" ")} fill="none" stroke={palette.muted} strokeWidth={1} strokeOpacity={0.6} />
+          <polyline
+            points={sorted.map((p) => `${x(p.x)},${y(p.y)}`).join(" ")}
+            fill="none"
+            stroke={palette.muted}
+            strokeWidth={1}
+            strokeOpacity={0.6}
+          />
         )}
         {sorted.map((p) => (
           <Circle
@@ -125,7 +205,17 @@ export function Scatter({ rows, x: xc, y: yc, colour, palette, svgRef, line = fa
   );
 }
 
-function ColourKey({ palette, colour, domain, scale }: { palette: PlotPalette; colour: string; domain: [number, number]; scale: (v: number) => string }) {
+function ColourKey({
+  palette,
+  colour,
+  domain,
+  scale,
+}: {
+  palette: PlotPalette;
+  colour: string;
+  domain: [number, number];
+  scale: (v: number) => string;
+}) {
   const steps = 6;
   const left = WIDTH - M.right - 150;
   return (
@@ -152,14 +242,27 @@ interface HeatColumn {
   bins: { position: string; count: number }[];
 }
 
-export function BettiHeatMap({ rows, column, palette, svgRef }: { rows: Row[]; column: string; palette: PlotPalette; svgRef: Ref<SVGSVGElement> }) {
+export function BettiHeatMap({
+  rows,
+  column,
+  palette,
+  svgRef,
+}: {
+  rows: Row[];
+  column: string;
+  palette: PlotPalette;
+  svgRef: Ref<SVGSVGElement>;
+}) {
   const heat = bettiHeat(rows, column);
   const left = 80;
   const w = WIDTH - left - M.right;
   const h = HEIGHT - M.top - M.bottom;
   const labels = heat.positions.map(([i, j]) => `β${i},${j}`);
   const byKey = new Map(heat.cells.map((c) => [`${c.member}|${c.i},${c.j}`, c.value]));
-  const data: HeatColumn[] = heat.members.map((m) => ({ member: m, bins: heat.positions.map(([i, j]) => ({ position: `${i},${j}`, count: byKey.get(`${m}|${i},${j}`) ?? 0 })) }));
+  const data: HeatColumn[] = heat.members.map((m) => ({
+    member: m,
+    bins: heat.positions.map(([i, j]) => ({ position: `${i},${j}`, count: byKey.get(`${m}|${i},${j}`) ?? 0 })),
+  }));
   const binWidth = heat.members.length ? w / heat.members.length : w;
   const binHeight = heat.positions.length ? h / heat.positions.length : h;
   const xs = scaleLinear<number>({ domain: [0, Math.max(1, heat.members.length)], range: [0, w] });
@@ -190,7 +293,15 @@ export function BettiHeatMap({ rows, column, palette, svgRef }: { rows: Row[]; c
           {(cells) =>
             cells.flatMap((col) =>
               col.map((cell) => (
-                <rect key={`${cell.row}-${cell.column}`} x={cell.x} y={cell.y} width={Math.max(0, cell.width)} height={Math.max(0, cell.height)} fill={cell.color} data-value={cell.count}>
+                <rect
+                  key={`${cell.row}-${cell.column}`}
+                  x={cell.x}
+                  y={cell.y}
+                  width={Math.max(0, cell.width)}
+                  height={Math.max(0, cell.height)}
+                  fill={cell.color}
+                  data-value={cell.count}
+                >
                   <title>{`member ${heat.members[cell.column]}: β${heat.positions[cell.row]?.join(",")} = ${cell.count}`}</title>
                 </rect>
               )),
@@ -202,7 +313,13 @@ export function BettiHeatMap({ rows, column, palette, svgRef }: { rows: Row[]; c
             {l}
           </text>
         ))}
-        <AxisBottom scale={memberAxis} top={h} label="member index" tickValues={heat.members.filter((_, k) => k % every === 0)} {...axisProps(palette)} />
+        <AxisBottom
+          scale={memberAxis}
+          top={h}
+          label="member index"
+          tickValues={heat.members.filter((_, k) => k % every === 0)}
+          {...axisProps(palette)}
+        />
       </Group>
     </Frame>
   );

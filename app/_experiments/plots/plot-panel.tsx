@@ -2,7 +2,7 @@
 /// The Plots tab: choose a kind and its columns; the plot redraws as rows arrive and
 /// downloads as SVG or PNG.
 import { useEffect, useMemo, useRef, useState } from "react";
-import { messageOf } from "@/app/_console/api/client";
+import { messageOf } from "@/app/_client/fetch";
 import { buttonSecondary, panelHeading } from "@/app/_console/views/styles";
 import { bettiColumns, numericColumns } from "../data/cells";
 import type { Row } from "../types";
@@ -21,7 +21,19 @@ const KINDS: [PlotKind, string][] = [
 const selectClass =
   "rounded-md border border-ink/20 bg-white px-2 py-1 text-sm text-ink focus-visible:outline focus-visible:outline-2 focus-visible:outline-signal dark:border-paper/20 dark:bg-night dark:text-paper";
 
-function Pick({ label, value, options, onChange, allowNone }: { label: string; value: string | null; options: string[]; onChange: (v: string | null) => void; allowNone?: boolean }) {
+function Pick({
+  label,
+  value,
+  options,
+  onChange,
+  allowNone,
+}: {
+  label: string;
+  value: string | null;
+  options: string[];
+  onChange: (v: string | null) => void;
+  allowNone?: boolean;
+}) {
   return (
     <label className="flex items-center gap-1.5 text-sm">
       <span className="text-ink-soft dark:text-paper/70">{label}</span>
@@ -37,7 +49,19 @@ function Pick({ label, value, options, onChange, allowNone }: { label: string; v
   );
 }
 
-export function PlotPanel({ rows, columns, fileStem, truncatedTo, initialKind }: { rows: Row[]; columns: string[]; fileStem: string; truncatedTo: number | null; initialKind?: PlotKind }) {
+export function PlotPanel({
+  rows,
+  columns,
+  fileStem,
+  truncatedTo,
+  initialKind,
+}: {
+  rows: Row[];
+  columns: readonly string[];
+  fileStem: string;
+  truncatedTo: number | null;
+  initialKind?: PlotKind;
+}) {
   const palette = usePlotPalette();
   const numeric = useMemo(() => numericColumns(columns, rows), [columns, rows]);
   const betti = useMemo(() => bettiColumns(columns, rows), [columns, rows]);
@@ -61,17 +85,26 @@ export function PlotPanel({ rows, columns, fileStem, truncatedTo, initialKind }:
   const [heatCol, setHeatCol] = useState<string | null>(null);
 
   const body = (() => {
-    if (rows.length === 0) return <p className="p-6 text-sm text-ink-soft dark:text-paper/70">No rows yet: the plot appears with the first rows.</p>;
+    if (rows.length === 0)
+      return <p className="p-6 text-sm text-ink-soft dark:text-paper/70">No rows yet: the plot appears with the first rows.</p>;
     switch (kind) {
       case "histogram":
         return col ? <Histogram rows={rows} column={col} palette={palette} svgRef={svg} /> : <NoColumn />;
       case "scatter":
         return x && y ? <Scatter rows={rows} x={x} y={y} colour={colour} palette={palette} svgRef={svg} /> : <NoColumn />;
       case "series":
-        return y ? <Scatter rows={rows} x={x && x !== y ? x : "index"} y={y} colour={null} palette={palette} svgRef={svg} line /> : <NoColumn />;
+        return y ? (
+          <Scatter rows={rows} x={x && x !== y ? x : "index"} y={y} colour={null} palette={palette} svgRef={svg} line />
+        ) : (
+          <NoColumn />
+        );
       case "heat":
-        return heatCol ?? heatColumn ? <BettiHeatMap rows={rows} column={(heatCol ?? heatColumn)!} palette={palette} svgRef={svg} /> : (
-          <p className="p-6 text-sm text-ink-soft dark:text-paper/70">No column holds Betti tables. A probe such as I -&gt; {"{"}betti: resolve(S / I).betti{"}"} gives one.</p>
+        return (heatCol ?? heatColumn) ? (
+          <BettiHeatMap rows={rows} column={(heatCol ?? heatColumn)!} palette={palette} svgRef={svg} />
+        ) : (
+          <p className="p-6 text-sm text-ink-soft dark:text-paper/70">
+            No column holds Betti tables. A probe such as I -&gt; {"{"}betti: resolve(S / I).betti{"}"} gives one.
+          </p>
         );
     }
   })();
@@ -93,7 +126,13 @@ export function PlotPanel({ rows, columns, fileStem, truncatedTo, initialKind }:
         <fieldset className="flex flex-wrap gap-1" aria-label="Kind of plot">
           <legend className={`${panelHeading} mb-1`}>Plot</legend>
           {KINDS.map(([k, label]) => (
-            <button key={k} type="button" aria-pressed={kind === k} onClick={() => setKind(k)} className={`${buttonSecondary} ${kind === k ? "!bg-ink !text-paper dark:!bg-signal dark:!text-night" : ""}`}>
+            <button
+              key={k}
+              type="button"
+              aria-pressed={kind === k}
+              onClick={() => setKind(k)}
+              className={`${buttonSecondary} ${kind === k ? "!bg-ink !text-paper dark:!bg-signal dark:!text-night" : ""}`}
+            >
               {label}
             </button>
           ))}
@@ -114,7 +153,9 @@ export function PlotPanel({ rows, columns, fileStem, truncatedTo, initialKind }:
             <Pick label="Against" value={x && x !== y ? x : "index"} options={numeric} onChange={setX} />
           </>
         )}
-        {kind === "heat" && betti.length > 1 && <Pick label="Betti column" value={heatCol ?? heatColumn} options={betti} onChange={setHeatCol} />}
+        {kind === "heat" && betti.length > 1 && (
+          <Pick label="Betti column" value={heatCol ?? heatColumn} options={betti} onChange={setHeatCol} />
+        )}
         <span className="ml-auto flex gap-1.5">
           <button type="button" className={buttonSecondary} onClick={() => void save("svg")}>
             Download SVG

@@ -1,19 +1,21 @@
+import { experimentRoute } from "@/lib/experiments/http";
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import { requireSessionAccess } from "@/lib/auth/access";
 import { requireUser } from "@/lib/auth/current-user";
 import { readJson } from "@/lib/http/body";
-import { HttpError, route } from "@/lib/http/errors";
+import { HttpError } from "@/lib/http/errors";
 import { createFromProgram, createFromUpload } from "@/lib/experiments/service";
 import { getExperiment, listExperiments, progressOf } from "@/lib/experiments/store";
 import { experimentView } from "@/lib/experiments/views";
 import { listSessions } from "@/lib/sessions/store";
+import { CreateExperimentBody } from "@/lib/wire/experiments";
 
 const uuid = z.string().uuid();
 
 /// GET /api/experiments[?session=ID]: the experiments of one session, or of every session
 /// the caller can read; newest first.
-export const GET = route(async (req) => {
+export const GET = experimentRoute(async (req) => {
   const user = await requireUser();
   const session = new URL(req.url).searchParams.get("session");
   let ids: string[];
@@ -34,33 +36,28 @@ export const GET = route(async (req) => {
   });
 });
 
-const CreateBody = z.union([
-  z.object({
-    sessionId: uuid,
-    /// the program whose first sweep(family, probe) becomes the experiment (e.g. a cell's text)
-    source: z.string().max(200_000).optional(),
-    /// or a cell of the session, whose text is used
-    cellId: uuid.optional(),
-    title: z.string().trim().min(1).max(200).optional(),
-  }).strict(),
-  z.object({
-    sessionId: uuid,
-    uploadId: uuid,
-    probe: z.string().trim().min(1).max(20_000),
-    ringName: z.string().regex(/^[A-Za-z][A-Za-z0-9_']*$/).optional(),
-    title: z.string().trim().min(1).max(200).optional(),
-  }).strict(),
-]);
-
 /// POST /api/experiments: create from a program or cell, or from an upload and a probe.
-export const POST = route(async (req) => {
+export const POST = experimentRoute(async (req) => {
   const user = await requireUser();
-  const body = await readJson(req, CreateBody, { maxBytes: 256 * 1024 });
+  const body = await readJson(req, CreateExperimentBody, { maxBytes: 256 * 1024 });
   await requireSessionAccess(user, body.sessionId, "edit");
   const created =
     "uploadId" in body
-      ? await createFromUpload({ sessionId: body.sessionId, userId: user.id, uploadId: body.uploadId, probe: body.probe, ringName: body.ringName, title: body.title })
-      : await createFromProgram({ sessionId: body.sessionId, userId: user.id, source: body.source ?? "", cellId: body.cellId ?? null, title: body.title });
+      ? await createFromUpload({
+          sessionId: body.sessionId,
+          userId: user.id,
+          uploadId: body.uploadId,
+          probe: body.probe,
+          ringName: body.ringName,
+          title: body.title,
+        })
+      : await createFromProgram({
+          sessionId: body.sessionId,
+          userId: user.id,
+          source: body.source ?? "",
+          cellId: body.cellId ?? null,
+          title: body.title,
+        });
   const e = (await getExperiment(created.id))!;
   return NextResponse.json({ experiment: experimentView(e, await progressOf(e)) }, { status: 201 });
 });

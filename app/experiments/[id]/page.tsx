@@ -9,7 +9,13 @@ const one = (v: string | string[] | undefined): string | null => (typeof v === "
 
 /// One experiment's room; `?link=<token>` reads it through its session's published
 /// read-only link (also signed out); `?view=plots&plot=heat` opens a plot first.
-export default async function ExperimentPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+export default async function ExperimentPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ id: string }>;
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const { id } = await params;
   const sp = await searchParams;
   const link = one(sp.link);

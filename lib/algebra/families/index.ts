@@ -39,8 +39,10 @@ export function randomIdealGenerators(R: PolyRing, index: number, spec: RandomId
     let list = monomialsByDegree.get(d);
     if (!list) {
       list = [];
-      for (let k = spec.homogeneous ? d : 0; k <= d; k++) list.push(...monomialsOfDegree(R.degrees, spec.homogeneous ? d : d - k, MAX_FAMILY_MONOMIALS, opts));
-      if (list.length > MAX_FAMILY_MONOMIALS) throw runtimeError("random_ideals", `more than ${MAX_FAMILY_MONOMIALS} monomials of degree ≤ ${d}`);
+      for (let k = spec.homogeneous ? d : 0; k <= d; k++)
+        list.push(...monomialsOfDegree(R.degrees, spec.homogeneous ? d : d - k, MAX_FAMILY_MONOMIALS, opts));
+      if (list.length > MAX_FAMILY_MONOMIALS)
+        throw runtimeError("random_ideals", `more than ${MAX_FAMILY_MONOMIALS} monomials of degree ≤ ${d}`);
       monomialsByDegree.set(d, list);
     }
     return list;
@@ -55,7 +57,11 @@ export function randomIdealGenerators(R: PolyRing, index: number, spec: RandomId
     for (let attempt = 0; ; attempt++) {
       checkpoint(opts);
       const cs = ms.map(coefficient);
-      const f = polyFromTerms(C, ms.map((e) => monoFromExps(C.layout, e)), cs as never[]);
+      const f = polyFromTerms(
+        C,
+        ms.map((e) => monoFromExps(C.layout, e)),
+        cs as never[],
+      );
       if (f.m.length > 0) return f;
       if (attempt > 1000) throw runtimeError("random_ideals", "could not draw a nonzero generator");
     }
@@ -102,7 +108,8 @@ export function monomialIdeals(R: PolyRing, spec: MonomialIdealSpec, opts?: Comp
   const extend = (size: number, from: number): void => {
     if (chosen.length === size) {
       if (spec.upToSymmetry && !isFirstOfOrbit()) return;
-      if (out.length >= spec.max) throw runtimeError("monomial_ideals", `the family has more than ${spec.max} members; lower max_gens or the degrees`);
+      if (out.length >= spec.max)
+        throw runtimeError("monomial_ideals", `the family has more than ${spec.max} members; lower max_gens or the degrees`);
       out.push(chosen.map((k) => mons[k]));
       return;
     }

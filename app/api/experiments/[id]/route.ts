@@ -1,5 +1,5 @@
+import { experimentRoute } from "@/lib/experiments/http";
 import { NextResponse } from "next/server";
-import { route } from "@/lib/http/errors";
 import { requireExperimentAccess } from "@/lib/experiments/access";
 import { progressOf } from "@/lib/experiments/store";
 import { experimentView } from "@/lib/experiments/views";
@@ -7,7 +7,7 @@ import { experimentView } from "@/lib/experiments/views";
 type Context = { params: Promise<{ id: string }> };
 
 /// GET /api/experiments/:id: the experiment, its progress and how to reproduce it.
-export const GET = route(async (req, { params }: Context) => {
+export const GET = experimentRoute(async (req, { params }: Context) => {
   const { id } = await params;
   const { experiment, role } = await requireExperimentAccess(req, id, "read");
   return NextResponse.json({

@@ -1,5 +1,6 @@
+import { experimentRoute } from "@/lib/experiments/http";
 import { NextResponse } from "next/server";
-import { HttpError, route } from "@/lib/http/errors";
+import { HttpError } from "@/lib/http/errors";
 import { requireExperimentAccess } from "@/lib/experiments/access";
 import { allRows, progressOf } from "@/lib/experiments/store";
 import { experimentView, rowView, rowsCsv, rowsJson, rowsLatex } from "@/lib/experiments/views";
@@ -7,7 +8,7 @@ import { experimentView, rowView, rowsCsv, rowsJson, rowsLatex } from "@/lib/exp
 type Context = { params: Promise<{ id: string }> };
 
 /// GET /api/experiments/:id/export?format=csv|json|latex: every row so far, in member order.
-export const GET = route(async (req, { params }: Context) => {
+export const GET = experimentRoute(async (req, { params }: Context) => {
   const { id } = await params;
   const { experiment } = await requireExperimentAccess(req, id, "read");
   const format = new URL(req.url).searchParams.get("format") ?? "csv";
@@ -21,7 +22,9 @@ export const GET = route(async (req, { params }: Context) => {
     case "csv":
       return new NextResponse(rowsCsv(experiment, rows), { headers: headers("text/csv; charset=utf-8", "csv") });
     case "json":
-      return NextResponse.json(rowsJson(experiment, experimentView(experiment, await progressOf(experiment)), rows), { headers: headers("application/json", "json") });
+      return NextResponse.json(rowsJson(experiment, experimentView(experiment, await progressOf(experiment)), rows), {
+        headers: headers("application/json", "json"),
+      });
     case "latex":
       return new NextResponse(rowsLatex(experiment, rows), { headers: headers("application/x-latex; charset=utf-8", "tex") });
     default:

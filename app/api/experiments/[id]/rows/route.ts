@@ -1,6 +1,7 @@
+import { experimentRoute } from "@/lib/experiments/http";
 import { NextResponse } from "next/server";
 import { z } from "zod";
-import { HttpError, route } from "@/lib/http/errors";
+import { HttpError } from "@/lib/http/errors";
 import { requireExperimentAccess } from "@/lib/experiments/access";
 import { readRows } from "@/lib/experiments/store";
 import { FIXED_COLUMNS, probeColumns, rowView } from "@/lib/experiments/views";
@@ -22,7 +23,7 @@ const Query = z.object({
 
 /// GET /api/experiments/:id/rows?offset&limit&sort&order&status=ok,error&where=col:op:value
 /// (where may repeat): rows paged, sorted and filtered by the database.
-export const GET = route(async (req, { params }: Context) => {
+export const GET = experimentRoute(async (req, { params }: Context) => {
   const { id } = await params;
   const { experiment } = await requireExperimentAccess(req, id, "read");
   const sp = new URL(req.url).searchParams;
@@ -37,10 +38,22 @@ export const GET = route(async (req, { params }: Context) => {
   if (!known.has(q.sort)) throw new HttpError(400, "invalid_query", `Cannot sort by ${q.sort}; the columns are ${[...known].join(", ")}.`);
   const where = q.where.map((w) => {
     const [column, op, ...rest] = w.split(":");
-    if (!probe.includes(column)) throw new HttpError(400, "invalid_query", `Cannot filter on ${column}; filter the probe's columns (${probe.join(", ") || "none yet"}) with where, the status with status.`);
+    if (!probe.includes(column))
+      throw new HttpError(
+        400,
+        "invalid_query",
+        `Cannot filter on ${column}; filter the probe's columns (${probe.join(", ") || "none yet"}) with where, the status with status.`,
+      );
     return { column, op: op as "eq", value: rest.join(":") };
   });
-  const { rows, matched } = await readRows(experiment, { offset: q.offset, limit: q.limit, sort: q.sort, order: q.order, status: q.status, where });
+  const { rows, matched } = await readRows(experiment, {
+    offset: q.offset,
+    limit: q.limit,
+    sort: q.sort,
+    order: q.order,
+    status: q.status,
+    where,
+  });
   return NextResponse.json({
     columns: [...FIXED_COLUMNS, ...probe],
     rows: rows.map((r) => rowView(experiment, r)),

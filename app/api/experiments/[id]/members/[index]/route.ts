@@ -1,5 +1,6 @@
 import { NextResponse } from "next/server";
-import { HttpError, route } from "@/lib/http/errors";
+import { HttpError } from "@/lib/http/errors";
+import { experimentRoute } from "@/lib/experiments/http";
 import { requireExperimentAccess } from "@/lib/experiments/access";
 
 type Context = { params: Promise<{ id: string; index: string }> };
@@ -7,7 +8,7 @@ type Context = { params: Promise<{ id: string; index: string }> };
 /// GET /api/experiments/:id/members/:index: one member of the experiment's family as a §9
 /// value (the row's label is cut at 120 characters; this is the whole member), with the
 /// line of notation that rebuilds it in a session.
-export const GET = route(async (req, { params }: Context) => {
+export const GET = experimentRoute(async (req, { params }: Context) => {
   const { id, index } = await params;
   const { experiment } = await requireExperimentAccess(req, id, "read");
   const k = Number(index);
@@ -17,5 +18,10 @@ export const GET = route(async (req, { params }: Context) => {
   const members = (experiment.family as { members?: unknown[] }).members ?? [];
   const member = members[k];
   if (member === undefined) throw new HttpError(404, "not_found", `Member ${k} is not stored with the experiment.`);
-  return NextResponse.json({ index: k, label: (experiment.labels as string[])[k] ?? "", member, familyDefinition: experiment.familyDefinition });
+  return NextResponse.json({
+    index: k,
+    label: (experiment.labels as string[])[k] ?? "",
+    member,
+    familyDefinition: experiment.familyDefinition,
+  });
 });

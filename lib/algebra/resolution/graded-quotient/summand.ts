@@ -1,0 +1,125 @@
+import { Echelon, kernelBasis } from "../../graded/echelon";
+import type { Ideal } from "../../ideal/ideal";
+import { checkpoint, type ComputeOptions } from "../../options";
+import { variablesOf } from "./residue";
+import { densify, type GradedFree, sparsify } from "./free";
+import { type ModulePresentation, resolveDegreewise } from "./resolve";
+
+/// Whether the residue field k is a direct summand of the p-th syzygy Ω^p(R/I) over
+/// R = S/J (p ≥ 1; I = m for Ω^p k). A finitely generated graded module N has k as a direct
+/// summand exactly when its socle (0 :_N m) is not inside m·N (common practice: a socle
+/// element outside mN is a minimal generator spanning a copy of k that splits off).
+/// Ω^p = K_{p−1} ⊆ F_{p−1} is read degree by degree from the resolution.
+export function residueSplitsFromSyzygy(J: Ideal, p: number, I?: Ideal, opts?: ComputeOptions & { degree?: number }): boolean {
+  let splits = false;
+  resolveDegreewise({
+    ring: J,
+    module: I ?? variablesOf(J),
+    length: p,
+    degree: opts?.degree,
+    opts,
+    inspect: ({ i, j, F, block, kernel, decomposable }) => {
+      if (i !== p - 1 || splits || kernel.rank === 0) return;
+      const K = F.K;
+      // The socle of K_j: combinations of the kernel rows killed by every variable. The
+      // images x_v·b are sparse; their coordinates are numbered compactly.
+      const position = new Map<string, number>();
+      const sparse = kernel.rows.map((b) => {
+        const w = sparsify(K, b, block);
+        const out: { at: number; c: unknown }[] = [];
+        for (let v = 0; v < F.A.n; v++) {
+          const img = F.mulVarSparse(v, j, w);
+          img.idx.forEach((x, k) => {
+            const key = `${v}:${x}`;
+            if (!position.has(key)) position.set(key, position.size);
+            out.push({ at: position.get(key)!, c: img.val[k] });
+          });
+        }
+        return out;
+      });
+      const images = sparse.map((entries) => {
+        const d = new Array(position.size).fill(K.zero);
+        for (const { at, c } of entries) d[at] = c;
+        return d;
+      });
+      for (const c of kernelBasis(K, position.size, images)) {
+        const s = new Array(block.length).fill(K.zero);
+        c.forEach((x, r) => {
+          if (K.isZero(x)) return;
+          kernel.rows[r].forEach((y, k) => (s[k] = K.add(s[k], K.mul(x, y))));
+        });
+        if (decomposable.reduce(s).some((x) => !K.isZero(x))) splits = true;
+      }
+    },
+  });
+  return splits;
+}
+
+/// The socle of a module M = coker(A) over R = S/J (A a presentation, M of finite length or
+/// R Artinian): the degrees of a basis of (0 :_M m), with multiplicity, and whether the
+/// residue field is a direct summand of M (the socle is not inside m·M, as above). Computed
+/// degree by degree: M_j = F_j / K_j with K = image of A, read from the resolution's first step.
+/// null when the pieces computed cannot decide (M not of finite length over a ring that is not
+/// Artinian): the caller may know more (a module of positive depth has no socle).
+export function moduleSocle(J: Ideal, presentation: ModulePresentation, opts?: ComputeOptions): { degrees: number[]; splits: boolean } | null {
+  const kernels = new Map<number, Echelon<unknown>>();
+  let Fm: GradedFree<unknown> | null = null;
+  const r = resolveDegreewise<unknown>({
+    ring: J,
+    presentation,
+    length: 1,
+    opts,
+    inspect: ({ i, j, F, kernel }) => {
+      if (i !== 0) return;
+      Fm = F;
+      kernels.set(j, kernel);
+    },
+  });
+  if (!r.complete && !r.columns.every((c) => c.complete)) return null;
+  const degrees: number[] = [];
+  let splits = false;
+  const F = Fm as GradedFree<unknown> | null;
+  if (!F) return { degrees, splits };
+  const K = F.K;
+  const A = F.A;
+  const top = Math.max(...kernels.keys());
+  for (let j = Math.min(...F.degrees); j <= top; j++) {
+    checkpoint(opts, { stage: "socle", detail: `degree ${j}` });
+    const dim = F.dim(j);
+    const Kj = kernels.get(j);
+    if (dim === 0 || (Kj && Kj.rank === dim)) continue;
+    // v ↦ (x_v·v mod K_{j+w_v})_v on the unit vectors of F_j; its kernel is (K : m)_j.
+    const images: unknown[][] = [];
+    for (let k = 0; k < dim; k++) {
+      const parts: unknown[] = [];
+      for (let v = 0; v < A.n; v++) {
+        const t = j + A.weights[v];
+        const img = F.mulVarSparse(v, j, { idx: [k], val: [K.one] });
+        const dense = densify(K, img, F.layout(t), F.dim(t));
+        const low = kernels.get(t);
+        parts.push(...(low ? low.reduce(dense) : dense));
+      }
+      images.push(parts);
+    }
+    const colon = kernelBasis(K, images[0]?.length ?? 0, images);
+    // modulo K_j + (m·F)_j: m·F is spanned by the coordinates u·g with u ≠ 1
+    const base = new Echelon<unknown>(K, dim);
+    if (Kj) for (const row of Kj.rows) base.insert(row);
+    const offs = F.offsets(j);
+    F.degrees.forEach((a, g) => {
+      for (let k = offs[g]; k < offs[g + 1]; k++) {
+        if (a === j) continue;
+        const e = new Array(dim).fill(K.zero);
+        e[k] = K.one;
+        base.insert(e);
+      }
+    });
+    const inK = new Echelon<unknown>(K, dim);
+    if (Kj) for (const row of Kj.rows) inK.insert(row);
+    for (const z of colon) {
+      if (inK.insert(z)) degrees.push(j);
+      if (base.reduce(z).some((x) => !K.isZero(x))) splits = true;
+    }
+  }
+  return { degrees, splits };
+}
