@@ -24,10 +24,7 @@ export interface ExperimentAnswer {
   canEdit: boolean;
 }
 
-export type ExperimentSummary = Reading<WireExperimentSummary> & {
-  /// the console cell it was made from (null for uploads); added to the list by issue 15
-  readonly sourceCellId?: string | null;
-};
+export type ExperimentSummary = Reading<WireExperimentSummary>;
 
 export type Row = Reading<ExperimentRowView>;
 export type RowsPage = Reading<RowPage>;
