@@ -25,12 +25,16 @@ let worker: Proc | null = startWorker("browser-room", 1);
 process.once("exit", () => worker?.child.kill("SIGKILL"));
 
 /// A sweep whose members take a noticeable fraction of a second each, so the page sees the
-/// table partly filled: generic quadrics in four variables (each a complete intersection of
-/// three quadrics: Betti numbers 1, 3, 3, 1 — the Koszul complex; Eisenbud, "Commutative
-/// Algebra", 1995, §17.2, from memory).
+/// table partly filled: generic quadrics in five variables (each a complete intersection of
+/// four quadrics: Betti numbers 1, 4, 6, 4, 1 — the Koszul complex; Eisenbud, "Commutative
+/// Algebra", 1995, §17.2, from memory). `background = true` keeps the console from running
+/// it inline first (the cell says that background sweeps are started by the server), so the
+/// cell's "Run as an experiment" is the only run.
 const SWEEP =
-  "S := GF(32003)[x, y, z, w]\nsweep(random_ideals(S, count = 40, gens = 3, degree = 2, seed = 21), I -> {pd: (S / I).pd, reg: (S / I).reg, codim: I.codim, betti: resolve(S / I).betti})";
+  "S := GF(32003)[x, y, z, w, v]\nsweep(random_ideals(S, count = 40, gens = 4, degree = 2, seed = 21), I -> {pd: (S / I).pd, reg: (S / I).reg, codim: I.codim, betti: resolve(S / I).betti}, background = true)";
 const COUNT = 40;
+/// nonzero graded Betti numbers of each member (1, 4, 6, 4, 1)
+const BETTI_POSITIONS = 5;
 
 async function api<T>(page: Page, url: string, init?: { method?: string; body?: unknown }): Promise<{ status: number; body: T }> {
   return page.evaluate(
@@ -237,13 +241,24 @@ browserTest(
     await page.keyboard.press("ArrowRight");
     await page.getByRole("tab", { name: "Plots", selected: true }).waitFor();
     await page.getByRole("button", { name: "Heat map of graded Betti numbers" }).click();
-    const plot = page.locator("[data-testid=plot] svg");
+    const plot = page.locator("[data-testid=plot] > svg");
     await plot.waitFor();
     check(
-      (await plot.locator("rect[data-value]").count()) === COUNT * 4,
-      "the heat map does not hold one cell per member and Betti position (1, 3, 3, 1)",
+      (await plot.locator("rect[data-value]").count()) === COUNT * BETTI_POSITIONS,
+      "the heat map does not hold one cell per member and Betti position (1, 4, 6, 4, 1)",
     );
     await shot(page, artifactsDir, "experiments-3-heat-map.png");
+    // the plot follows the theme: Alt+T switches to dark, and the plot's own colours change
+    const lightBackground = await plot.locator("rect").first().getAttribute("fill");
+    await page.keyboard.press("Alt+t");
+    await page.waitForFunction(() => document.documentElement.classList.contains("dark"));
+    await page.waitForFunction(
+      (before) => document.querySelector("[data-testid=plot] svg rect")?.getAttribute("fill") !== before,
+      lightBackground,
+    );
+    await shot(page, artifactsDir, "experiments-3-heat-map-dark.png");
+    await page.keyboard.press("Alt+t");
+    await page.waitForFunction(() => !document.documentElement.classList.contains("dark"));
     await page.getByRole("button", { name: "Scatter of two columns" }).click();
     await plot.locator("circle").first().waitFor();
     await page.getByRole("button", { name: "Histogram of a column" }).click();
@@ -316,13 +331,11 @@ browserTest(
     const before = await count();
     await page.goto(`${baseUrl}/experiments`);
     await page.getByRole("heading", { name: "Sweep a family file" }).waitFor();
-    await page
-      .getByLabel("Family file", { exact: true })
-      .setInputFiles({
-        name: "shoreline.txt",
-        mimeType: "text/plain",
-        buffer: Buffer.from("# Kestrel Lake shoreline ideals\n<x^2, y>\n<x*y +* z>\n<z^3>\n"),
-      });
+    await page.getByLabel("Family file", { exact: true }).setInputFiles({
+      name: "shoreline.txt",
+      mimeType: "text/plain",
+      buffer: Buffer.from("# Kestrel Lake shoreline ideals\n<x^2, y>\n<x*y +* z>\n<z^3>\n"),
+    });
     const problems = page.getByTestId("upload-problems");
     await problems.waitFor();
     check((await problems.locator("li[data-line='3']").count()) === 1, `the bad line 3 is not listed: ${await problems.textContent()}`);
@@ -364,7 +377,7 @@ browserTest(
       method: "POST",
       body: {
         sessionId: viewerSession,
-        source: "S := GF(32003)[x, y, z, w]\nsweep(random_ideals(S, count = 400, gens = 3, degree = 2, seed = 5), I -> {pd: (S / I).pd})",
+        source: "S := GF(32003)[x, y, z, w]\nsweep(random_ideals(S, count = 1500, gens = 3, degree = 2, seed = 5), I -> {pd: (S / I).pd})",
       },
     });
     check(created.status === 201, `creating the experiment answered ${created.status}`);
@@ -411,6 +424,13 @@ browserTest(
     await page.getByTestId("experiment-table").waitFor();
     check((await page.getByRole("button", { name: "Cancel", exact: true }).count()) === 0, "a link visitor is shown Cancel");
     check((await page.getByRole("button", { name: "Run again", exact: true }).count()) === 0, "a link visitor is shown Run again");
+    // 1500 members: more than the browser reads whole, so the database sorts and pages
+    await page.getByTestId("rows-matched").filter({ hasText: "sorted and filtered by the database" }).waitFor();
+    await page.getByRole("button", { name: "Sort by index" }).click();
+    await page.waitForFunction(
+      () => document.querySelector("[data-testid=experiment-table] tbody tr[data-row-index]")?.getAttribute("data-row-index") === "1499",
+    );
+    await page.getByRole("navigation", { name: "Pages of rows" }).getByText("page 1 of 30").waitFor();
     await shot(page, artifactsDir, "experiments-8-link-visitor.png");
     // without the token the room is not readable signed out
     await page.goto(`${baseUrl}/experiments/${viewerRoom}`);
@@ -436,6 +456,34 @@ browserTest(
       check(wide <= 1024, `the list is ${wide} px wide at a 1024 px window`);
     } finally {
       await page.setViewportSize({ width: 1280, height: 800 });
+    }
+  },
+);
+
+browserTest(
+  "experiments room: the guided tour's last step runs a small sweep as an experiment and shows its heat map",
+  async ({ page, baseUrl, artifactsDir }) => {
+    await signIn(page, baseUrl, "member");
+    const sessionId = await newSession(page, `Kestrel tour ${Date.now().toString(36)}`);
+    await page.goto(`${baseUrl}/?session=${sessionId}`);
+    await page.getByLabel("Ringside input").waitFor();
+    await page.keyboard.press("Alt+g");
+    await page.getByRole("button", { name: "Run the sweep as an experiment and show its plot" }).click();
+    await page.waitForURL(/\/experiments\/[0-9a-f-]{36}\?view=plots&plot=heat$/);
+    await page.getByRole("tab", { name: "Plots", selected: true }).waitFor();
+    // 18 members (quadratic monomial ideals in four variables up to symmetry), all of them
+    await page.getByTestId("progress-done").filter({ hasText: "18/18" }).waitFor({ timeout: 40_000 });
+    const cells = page.locator("[data-testid=plot] svg rect[data-value]");
+    await page.waitForFunction(() => document.querySelectorAll("[data-testid=plot] svg rect[data-value]").length > 0);
+    // <a^2, b^2> (member 3) is a complete intersection of two quadrics: β(2,4) = 1 (Koszul)
+    try {
+      check((await cells.count()) % 18 === 0, `the heat map has ${await cells.count()} cells, not a multiple of 18 members`);
+      const titles = await page.locator("[data-testid=plot] svg rect title").allTextContents();
+      check(titles.includes("member 3: β2,4 = 1"), "the heat map does not show β(2,4) = 1 for <a^2, b^2>");
+      check(titles.includes("member 2: β2,3 = 1"), "the heat map does not show β(2,3) = 1 for <a^2, a*b>");
+      await shot(page, artifactsDir, "experiments-10-tour-heat-map.png");
+    } finally {
+      // the last test of the file stops the worker it started
       if (worker) await stopGently(worker);
       worker = null;
     }
