@@ -308,7 +308,7 @@ browserTest(
     ]);
     const md = await readFile((await mdDownload.path())!, "utf8");
     check(
-      md.includes("seed = 21") && md.split("\n").filter((l) => l.startsWith("| ")).length === COUNT + 1,
+      md.includes("seed = 21") && md.split("\n").filter((l) => l.startsWith("| ")).length === COUNT + 2,
       "the Markdown export lacks the seed or rows",
     );
   },
