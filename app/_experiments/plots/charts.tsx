@@ -41,7 +41,7 @@ function Frame({
       viewBox={`0 0 ${WIDTH} ${HEIGHT}`}
       role="img"
       aria-label={label}
-      className="h-auto w-full max-w-full"
+      className="h-auto w-full max-w-[52rem]"
       fontFamily={FONT}
     >
       <title>{title}</title>
