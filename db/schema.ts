@@ -2,6 +2,7 @@
 /// with `npm run db:generate`; never edit a committed migration.
 import { sql } from "drizzle-orm";
 import {
+  type AnyPgColumn,
   bigint,
   boolean,
   check,
@@ -267,7 +268,8 @@ export const experiments = pgTable(
     columns: jsonb("columns"),
     sourceCellId: uuid("source_cell_id").references(() => cells.id, { onDelete: "set null" }),
     uploadId: uuid("upload_id").references(() => uploads.id, { onDelete: "set null" }),
-    rerunOf: uuid("rerun_of"),
+    /// the experiment this one runs again ("run again"), if any
+    rerunOf: uuid("rerun_of").references((): AnyPgColumn => experiments.id, { onDelete: "set null" }),
     createdAt: createdAt(),
     startedAt: timestamp("started_at", { withTimezone: true }),
     finishedAt: timestamp("finished_at", { withTimezone: true }),

@@ -639,6 +639,8 @@ class Checker {
         if (result.kind === "Family" && !isFamilyMember(result.member)) {
           this.error(e.args[0].span, `a Family's members are rings, ideals or modules; got ${typeToString(argTypes[0])}`);
         }
+        // a local ring has the variables of the ring it localises
+        if (sig.name === "localize" && argTypes[0].kind === "Ring") return argTypes[0];
         return result;
       }
     }

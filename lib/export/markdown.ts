@@ -36,7 +36,7 @@ function valueBodyMarkdown(v: ValueJsonLike): string {
     case "Poly":
       return `$${mathText(plainText(v))}$`;
     case "HilbertSeries":
-      return `$${mathText(v.text)}$`;
+      return `$${mathText(plainText(v))}$`;
     case "Series":
       return `$${mathText(seriesPrefixText(Array.isArray(v.coefficients) ? (v.coefficients as string[]) : []))}$`;
     case "Ideal": {

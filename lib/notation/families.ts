@@ -10,7 +10,7 @@ import { typeToString } from "../../grammar/types";
 import type { CallContext } from "./context";
 import { EvalError, asEvalError, limit, runtime } from "./errors";
 import { idealValue } from "./ideals";
-import { rational } from "../algebra/index";
+import { ratOf } from "../algebra/index";
 import { familyDefinition, ringText, valueText } from "./text";
 import {
   list,
@@ -222,7 +222,7 @@ export function probeRow(probe: FunctionValue, member: Value, depth: number, spa
 }
 
 /// Seconds as an exact Rat of whole milliseconds (the notation has no floating point).
-export const secondsValue = (s: number): Value => ({ type: "Rat", value: rational(BigInt(Math.round(s * 1000)), 1000n) });
+export const secondsValue = (s: number): Value => ({ type: "Rat", value: ratOf(BigInt(Math.round(s * 1000)), 1000n) });
 
 /// Builds a sweep Table from rows as they come; the probe's columns are those of the first
 /// ok row (in the order written), later rows are read by name.
@@ -285,7 +285,7 @@ function sweep([family, probeV]: readonly Value[], c: CallContext): Value {
   const background = c.named.get("background");
   if (background?.type === "Bool" && background.value && !c.interp.session.experiments) {
     throw runtime(
-      "background = true: background experiments are started by the server (POST /api/experiments, or npx ringside experiments create); this evaluation runs sweeps inline",
+      "background = true: background experiments are created by the server from a cell or a program (POST /api/experiments, app/api/README.md); here sweeps run inline (use background = false, or leave it out)",
       c.span,
     );
   }

@@ -6,7 +6,7 @@ import { maximal, ring, vars } from "./local-helpers";
 
 describe("Burch ideal and index", () => {
   it("m^p: B = m^2 and index n", () => {
-    // checks.md row 8: I : m = m^{p−1}, B(I) = (m^{p+1}) : m^{p−1} = m^2 (Dao–Kobayashi–Takahashi 2020).
+    // Dao–Kobayashi–Takahashi, Algebra & Number Theory 2020: I : m = m^{p−1}, B(I) = (m^{p+1}) : m^{p−1} = m^2.
     for (const [n, p] of [[2, 2], [3, 2], [3, 3], [2, 4]] as const) {
       const S = ring(n);
       const m = maximal(S);
@@ -56,7 +56,7 @@ describe("Burch ideal and index", () => {
 
   it("positive depth: a general linear form is factored out and the choice is recorded", () => {
     // (x^2, xy, y^2) in k[x,y,z] has depth 1 (z is regular); modulo a general linear form it
-    // becomes m^2 in two variables, index 2 by checks.md row 8.
+    // becomes m^2 in two variables, index 2 by Dao–Kobayashi–Takahashi, Algebra & Number Theory 2020.
     const S = ring(3);
     const [x, y] = vars(S);
     const I = A.ideal(S, [A.mul(S, x, x), A.mul(S, x, y), A.mul(S, y, y)]);
@@ -75,10 +75,13 @@ describe("Burch ideal and index", () => {
     expect(burchIndexOfRing(A.ideal(T, [A.pow(T, A.variable(T, 0), 2)]))).toMatchObject({ index: 1, isBurch: true, depth: 1 });
   });
 
-  it("refuses a presentation that is not minimal", () => {
+  it("a presentation that is not minimal is made minimal first (issue 16: one rule)", () => {
+    // k[x,y]/(x, y^2) ≅ k[y]/(y^2): n = (y), I = (y^2), B(I) = (y^3) : (y) = (y^2), index 1 (by hand)
     const S = ring(2);
     const [x, y] = vars(S);
-    expect(() => burchIndexOfRing(A.ideal(S, [x, A.pow(S, y, 2)]))).toThrow(/not minimal/);
+    expect(burchIndexOfRing(A.ideal(S, [x, A.pow(S, y, 2)])).index).toBe(1);
+    // an order-1 element whose variable cannot be solved for polynomially is still refused
+    expect(() => burchIndexOfRing(A.ideal(S, [A.add(S, x, A.pow(S, x, 2)), A.pow(S, y, 3)]))).toThrow(/power series/);
   });
 
   it("depth 0: k is a summand of the second syzygy of k exactly for Burch rings", () => {

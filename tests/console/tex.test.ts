@@ -8,7 +8,7 @@ import { texOfRankChain } from "@/app/_console/render/chain";
 const parses = (tex: string) => expect(() => katex.renderToString(tex, { throwOnError: true })).not.toThrow();
 
 describe("texOfExpression", () => {
-  it("typesets the canonical text of notation.md §9", () => {
+  it("typesets the canonical text of lib/notation/README.md (the JSON encoding)", () => {
     expect(texOfExpression("x^2*y-2*x+3")).toBe("x^{2}y - 2x + 3");
     expect(texOfExpression("3/4*x^2-y")).toBe("\\frac{3}{4}x^{2} - y");
     expect(texOfExpression("-x*y")).toBe("-xy");
@@ -54,6 +54,8 @@ describe("series and chains", () => {
     const tex = texOfHilbertSeries(["1", "0", "-3", "2"], "(1-t)^4");
     expect(tex).toBe("\\frac{1 - 3t^{2} + 2t^{3}}{\\left(1 - t\\right)^{4}}");
     parses(tex);
+    // issue 16: a module generated in degree −2 has the factor t^{-2} in front
+    expect(texOfHilbertSeries(["1", "-2", "1"], "(1-t)^2", -2)).toMatch(/^t\^\{-2\} \\cdot \\frac/);
   });
 
   it("writes a resolution as a chain of ranks", () => {

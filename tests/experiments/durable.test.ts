@@ -8,7 +8,7 @@ import { sessions, users } from "@/db/schema";
 import { closeExperimentPool } from "@/lib/experiments/compute-adapter";
 import { stopBoss } from "@/lib/experiments/queue";
 import { act, createFromProgram, runAgain } from "@/lib/experiments/service";
-import { getExperiment } from "@/lib/experiments/store";
+import { getExperiment, progressOf } from "@/lib/experiments/store";
 import { testEnv } from "../helpers/env";
 import { uniqueEmail } from "../helpers/fixtures";
 import {
@@ -79,6 +79,14 @@ describe("a 200-member sweep shared by two workers and a server", () => {
       120_000,
       () => `w1 never wrote a row:\n${w1.output()}`,
     );
+    // progress is readable mid-run: done/total, failures, a rate and an ETA
+    const mid = await progressOf((await getExperiment(e.id))!);
+    expect(mid.total).toBe(200);
+    expect(mid.done).toBeGreaterThanOrEqual(40);
+    expect(mid.done).toBeLessThan(200);
+    expect(mid.failures).toBe(0);
+    expect(mid.rate).toBeGreaterThan(0);
+    expect(mid.etaSeconds).not.toBeNull();
     await killHard(w1);
     const atKill = await rowCount(e.id);
     expect(atKill).toBeLessThan(200);

@@ -1,4 +1,4 @@
-// Families, sweeps and counterexample searches (notation.md §11), checked against published
+// Families, sweeps and counterexample searches (grammar/README.md §7, "Families, sweeps and searches"), checked against published
 // results and hand counts (each source named beside its check).
 import { execFileSync } from "node:child_process";
 import { describe, expect, it } from "vitest";
@@ -267,5 +267,25 @@ describe("Table access", () => {
       "<a^2>",
       "[index, label, status, seconds, n]",
     ]);
+  });
+});
+
+describe("a Family's JSON (lib/notation/README.md: length, members, definition)", () => {
+  it("restores in a later evaluation, members and definition unchanged", async () => {
+    const first = await run("S := Q[x, y]\nF := family([S / <x^2>, S / <x*y, y^3>])\nF.take(1)");
+    expect(first.error, first.error?.text).toBeNull();
+    const F = first.objects.find((o) => o.name === "F")!;
+    expect(F.type).toBe("Family<Ring>");
+    expect(F.value).toMatchObject({ type: "Family", length: 2, definition: expect.stringMatching(/^family\(\[Q\[x, y\] \/ <x\^2>, /) });
+    // depths by hand: Q[x,y]/(x^2) is a hypersurface of dimension 1, so Cohen–Macaulay of
+    // depth 1; in Q[x,y]/(xy, y^3) the class of y^2 is killed by x and y, so depth 0
+    const depth = await evaluate("[A.depth for A in F]\nF.definition", [{ name: "F", value: F.value }]);
+    expect(depth.results[0].value.text).toBe("[1, 0]");
+    expect(depth.results[1].value.text).toMatch(/^family\(\[/);
+  });
+
+  it("background = true in an inline evaluation says where experiments are created", async () => {
+    const out = await run("S := Q[x]\nsweep(family([<x>]), I -> {d: I.dim}, background = true)");
+    expect(out.error?.message).toMatch(/POST \/api\/experiments/);
   });
 });
