@@ -1,6 +1,7 @@
 "use client";
 /// One transcript cell: source, status, time taken and results; while it runs, a
 /// progress bar with the stage, the Betti columns computed so far and a Cancel button.
+import type { ReactNode } from "react";
 import { resultIndex, type Cell, type CellStatus } from "@/lib/wire/reading";
 import { bettiGrid } from "../render/betti";
 import { overallFraction, type RunningCell } from "../state/running-cell";
@@ -43,10 +44,14 @@ function Source({ source }: { source: string }) {
   );
 }
 
-/// A finished (or stored) cell.
-export function CellView({ cell }: { cell: Cell }) {
+/// A finished (or stored) cell; `footer` is drawn under its results (the experiments room
+/// puts its links there).
+export function CellView({ cell, footer }: { cell: Cell; footer?: ReactNode }) {
   return (
-    <article aria-label={`Cell ${cell.position + 1}`} className="rs-cell flex flex-col gap-2 border-b border-ink/10 py-3 dark:border-paper/10">
+    <article
+      aria-label={`Cell ${cell.position + 1}`}
+      className="rs-cell flex flex-col gap-2 border-b border-ink/10 py-3 dark:border-paper/10"
+    >
       <Header position={cell.position} status={cell.status} ms={cell.timings?.totalMs ?? null} />
       <Source source={cell.source} />
       {cell.results.map((r, k) => (
@@ -60,6 +65,7 @@ export function CellView({ cell }: { cell: Cell }) {
         cell.error && <ErrorView error={cell.error} source={cell.source} />
       )}
       {cell.status === "running" && <p className="text-sm text-ink-soft dark:text-paper/70">Still running elsewhere.</p>}
+      {footer}
     </article>
   );
 }
@@ -70,7 +76,11 @@ export function RunningCellView({ cell, onCancel }: { cell: RunningCell; onCance
   const running = cell.status === "running";
   const stage = cell.stage === null ? "sending" : cell.stage === "checked" ? "checked, starting" : cell.stage;
   return (
-    <article aria-label="Running cell" aria-busy={running} className="rs-cell flex flex-col gap-2 border-b border-ink/10 py-3 dark:border-paper/10">
+    <article
+      aria-label="Running cell"
+      aria-busy={running}
+      className="rs-cell flex flex-col gap-2 border-b border-ink/10 py-3 dark:border-paper/10"
+    >
       <Header position={cell.position} status={cell.status} ms={cell.totalMs} />
       <Source source={cell.source} />
       {cell.results.map((r, k) => (

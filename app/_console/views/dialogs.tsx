@@ -32,6 +32,8 @@ export function ConsoleDialogs(props: {
   onObjectsImported: (words: string) => void;
   onExport: (format: ExportFormat) => Promise<void>;
   onImport: (text: string, fileName: string) => Promise<string | null>;
+  /// the tour's sweep step: run it as an experiment and open its plot (experiments room)
+  onRunTourExperiment?: (e: GuidedExample) => void;
 }) {
   const { dialog, onClose, session, sessionId, signedIn, canEdit, history, sharingObject } = props;
   return (
@@ -41,7 +43,7 @@ export function ConsoleDialogs(props: {
       </Modal>
       <Modal open={dialog === "tour"} title="Guided first steps" onClose={onClose}>
         <div className="max-h-[70vh] overflow-y-auto pr-1">
-          <TourList onInsert={props.onInsertExample} canRun={canEdit} />
+          <TourList onInsert={props.onInsertExample} canRun={canEdit} onRunExperiment={props.onRunTourExperiment} />
         </div>
       </Modal>
       <Modal open={dialog === "share" && sessionId !== null} title={`Share “${session?.title ?? "this session"}”`} onClose={onClose}>

@@ -1,7 +1,7 @@
 "use client";
 /// The transcript: the session's stored cells, the cell running now, the welcome of an
 /// empty session, and load errors in words. It follows the newest output.
-import { useEffect, useRef } from "react";
+import { useEffect, useRef, type ReactNode } from "react";
 import type { GuidedExample } from "@/lib/examples/tour";
 import type { Cell } from "@/lib/wire/reading";
 import type { RunningCell } from "../state/running-cell";
@@ -21,6 +21,8 @@ export function Transcript(props: {
   onInsertExample: (e: GuidedExample) => void;
   onOpenTour: () => void;
   onCancel: () => void;
+  /// drawn under a stored cell (the experiments room's links and "Run as an experiment")
+  cellFooter?: (cell: Cell) => ReactNode;
 }) {
   const { cells, running, noSessions, canEdit, sessionError, cellsError, onInsertExample, onOpenTour, onCancel } = props;
   const end = useRef<HTMLDivElement>(null);
@@ -46,7 +48,7 @@ export function Transcript(props: {
       {noSessions && <EmptySessionWelcome onInsert={onInsertExample} onOpenTour={onOpenTour} canRun />}
       {shownCells.map((c) => (
         <CellErrorBoundary key={c.id} position={c.position} source={c.source}>
-          <CellView cell={c} />
+          <CellView cell={c} footer={props.cellFooter?.(c)} />
         </CellErrorBoundary>
       ))}
       {running && <RunningCellView cell={running} onCancel={onCancel} />}
