@@ -57,6 +57,37 @@ export async function createFromProgram(input: CreateFromProgram): Promise<Exper
   });
 }
 
+export interface CreateFromCell {
+  /// the id the cell's Experiment value already carries (chosen in the engine slot)
+  id: string;
+  sessionId: string;
+  userId: string | null;
+  cellId: string;
+  source: string;
+  /// what the slot planned: the family and probe as §9 JSON, the members' labels
+  family: unknown;
+  probe: unknown;
+  labels: string[];
+}
+
+/// A cell's sweep that went to the background (lib/sessions/run-cell.ts): the slot already
+/// evaluated the cell up to the sweep and handed back its family and probe, so nothing is
+/// evaluated again; the experiment is stored under the id the cell's value carries and its
+/// members are queued, exactly as POST /api/experiments does after planning.
+export async function createFromCell(input: CreateFromCell): Promise<ExperimentRow> {
+  return start({
+    id: input.id,
+    sessionId: input.sessionId,
+    createdBy: input.userId,
+    title: titleFrom(input.family as { definition?: string }),
+    program: input.source,
+    family: input.family,
+    labels: input.labels,
+    probe: input.probe,
+    sourceCellId: input.cellId,
+  });
+}
+
 export interface CreateFromUpload {
   sessionId: string;
   userId: string | null;
@@ -103,6 +134,7 @@ function titleFrom(family: { definition?: string }): string {
 }
 
 async function start(e: {
+  id?: string;
   sessionId: string;
   createdBy: string | null;
   title: string;

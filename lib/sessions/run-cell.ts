@@ -3,11 +3,15 @@
 /// in an engine slot, stream its events as NDJSON while the heartbeat keeps what streamed,
 /// and write the outcome and new named objects in one transaction — also when the client
 /// goes away, the cell is cancelled or a limit stops it (then with the work done so far).
+/// A sweep too long to run inline comes back from the slot as an `experiment` request; the
+/// experiment is created here (lib/experiments) before any later event is streamed and before
+/// the cell is stored, so the Experiment value's id can be followed at once.
 import { isEngineFull, runInSlot, type EngineFullError, type SlotOutcome } from "@/lib/compute";
 import { errorValue, type CellEvent, type CellJob, type ErrorValue, type Span } from "@/lib/compute/cell-events";
 import { StreamedWork } from "@/lib/compute/streamed-work";
 import type { CurrentUser } from "@/lib/auth/types";
 import { HttpError } from "@/lib/http/errors";
+import { createFromCell } from "@/lib/experiments/service";
 import { limitValue } from "@/lib/limits";
 import type { CellEvent as StreamEvent } from "@/lib/wire/cells";
 import { registerRunningCell } from "./cancel-channel";
@@ -32,7 +36,7 @@ function refusal(error: EngineFullError): HttpError {
 export async function runCell(user: CurrentUser, sessionId: string, source: string): Promise<Response> {
   const bindings = (await listObjects(sessionId)).map((o) => ({ name: o.name, type: o.type, value: o.value }));
   const currentRing = await currentRingOf(sessionId);
-  const job: CellJob = { source, bindings, currentRing };
+  const job: CellJob = { source, bindings, currentRing, inlineSweepMembers: limitValue("inlineSweepMembers") };
 
   // Admission first: a computation the engine cannot take leaves no cell behind.
   const events: CellEvent[] = [];
@@ -77,6 +81,13 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
         const work = new StreamedWork();
         const bound = new Map<string, { name: string; type: string; value: unknown; source: string }>();
         let failure: ErrorValue | null = null;
+        // Events reach the client in order, each after any experiment requested before it is
+        // stored (so an Experiment value never names an experiment that does not exist yet).
+        let order: Promise<void> = Promise.resolve();
+        const forward = (event: StreamEvent) => {
+          order = order.then(() => send(event));
+        };
+        let experimentProblem: string | null = null;
         const onEvent = (event: CellEvent) => {
           work.observe(event);
           switch (event.event) {
@@ -84,15 +95,28 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
               bound.set(event.name, { name: event.name, type: event.type, value: event.value, source: event.source ?? "" });
               return;
             case "checked":
-              return send({ event: "checked", statements: event.statements });
+              return forward({ event: "checked", statements: event.statements });
+            case "experiment": {
+              const request = { id: event.id, family: event.family, probe: event.probe, labels: event.labels };
+              order = order.then(() =>
+                createFromCell({ ...request, sessionId, userId: user.id, cellId: cell.id, source }).then(
+                  () => {},
+                  (error: Error) => {
+                    console.error(`[ringside] cell ${cell.id}: creating experiment ${request.id} failed:`, error);
+                    experimentProblem ??= error.message;
+                  },
+                ),
+              );
+              return;
+            }
             case "error":
               failure = event.error;
               // The evaluator sees any stop as a cancel; whether it was the user or the time
               // limit is known only when the job ends, so that error is sent then.
               if (event.error.kind === "cancelled") return;
-              return send(event);
+              return forward(event);
             default:
-              return send(event);
+              return forward(event);
           }
         };
         for (const event of events.splice(0)) onEvent(event);
@@ -105,6 +129,7 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
           return () => {};
         });
         const end = await done.finally(unregister);
+        await order;
 
         // A stop that the job did not report itself becomes the cell's error, placed at the
         // statement that was running.
@@ -121,6 +146,10 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
           send({ event: "error", statement: running, error: failure });
         } else if (reported?.kind === "cancelled") {
           send({ event: "error", statement: running, error: reported });
+        } else if (experimentProblem !== null && !reported) {
+          // The cell's value names an experiment that could not be stored: the cell says so.
+          failure = errorValue("runtime", `the sweep's background experiment could not be created: ${experimentProblem}`, at);
+          send({ event: "error", statement: null, error: failure });
         }
         const final = failure as ErrorValue | null;
         const status: CellOutcome["status"] =
