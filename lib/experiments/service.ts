@@ -7,6 +7,7 @@ import { cells, uploads } from "@/db/schema";
 import { ExperimentError } from "./errors";
 import { ENGINE_VERSION } from "@/lib/sessions/engine-version";
 import { currentRingOf, listObjects } from "@/lib/sessions/store";
+import type { ExperimentRequest } from "@/lib/sessions/run-cell";
 import { memberLimits, planSweep } from "./compute-adapter";
 import { enqueueMembers } from "./queue";
 import { changeStatus, getExperiment, insertExperiment, missingIndexes, type ExperimentRow } from "./store";
@@ -57,18 +58,10 @@ export async function createFromProgram(input: CreateFromProgram): Promise<Exper
   });
 }
 
-export interface CreateFromCell {
-  /// the id the cell's Experiment value already carries (chosen in the engine slot)
-  id: string;
-  sessionId: string;
-  userId: string | null;
-  cellId: string;
-  source: string;
-  /// what the slot planned: the family and probe as §9 JSON, the members' labels
-  family: unknown;
-  probe: unknown;
-  labels: string[];
-}
+/// A cell's request (lib/sessions/run-cell.ts ExperimentRequest): the id the cell's
+/// Experiment value already carries (chosen in the engine slot), the cell and its text, and
+/// what the slot planned — the family and probe as §9 JSON and the members' labels.
+export type CreateFromCell = ExperimentRequest;
 
 /// A cell's sweep that went to the background (lib/sessions/run-cell.ts): the slot already
 /// evaluated the cell up to the sweep and handed back its family and probe, so nothing is

@@ -4,14 +4,14 @@
 /// and write the outcome and new named objects in one transaction — also when the client
 /// goes away, the cell is cancelled or a limit stops it (then with the work done so far).
 /// A sweep too long to run inline comes back from the slot as an `experiment` request; the
-/// experiment is created here (lib/experiments) before any later event is streamed and before
-/// the cell is stored, so the Experiment value's id can be followed at once.
+/// caller's `createExperiment` (the route passes lib/experiments' createFromCell — sessions
+/// do not import experiments, which import sessions) stores it before any later event is
+/// streamed and before the cell is stored, so the Experiment value's id can be followed at once.
 import { isEngineFull, runInSlot, type EngineFullError, type SlotOutcome } from "@/lib/compute";
 import { errorValue, type CellEvent, type CellJob, type ErrorValue, type Span } from "@/lib/compute/cell-events";
 import { StreamedWork } from "@/lib/compute/streamed-work";
 import type { CurrentUser } from "@/lib/auth/types";
 import { HttpError } from "@/lib/http/errors";
-import { createFromCell } from "@/lib/experiments/service";
 import { limitValue } from "@/lib/limits";
 import type { CellEvent as StreamEvent } from "@/lib/wire/cells";
 import { registerRunningCell } from "./cancel-channel";
@@ -33,10 +33,36 @@ function refusal(error: EngineFullError): HttpError {
   );
 }
 
-export async function runCell(user: CurrentUser, sessionId: string, source: string): Promise<Response> {
+/// What the slot hands back when a sweep goes to the background (lib/wire/cells.ts, the
+/// `experiment` job event), with the cell it came from.
+export interface ExperimentRequest {
+  /// the id the cell's Experiment value carries
+  id: string;
+  sessionId: string;
+  userId: string;
+  cellId: string;
+  /// the cell's text (the experiment's program)
+  source: string;
+  family: unknown;
+  probe: unknown;
+  labels: string[];
+}
+
+export interface RunCellOptions {
+  /// Stores a background experiment. Without it every sweep runs inline (as in the CLI).
+  createExperiment?: (request: ExperimentRequest) => Promise<unknown>;
+}
+
+export async function runCell(user: CurrentUser, sessionId: string, source: string, options: RunCellOptions = {}): Promise<Response> {
   const bindings = (await listObjects(sessionId)).map((o) => ({ name: o.name, type: o.type, value: o.value }));
   const currentRing = await currentRingOf(sessionId);
-  const job: CellJob = { source, bindings, currentRing, inlineSweepMembers: limitValue("inlineSweepMembers") };
+  const createExperiment = options.createExperiment;
+  const job: CellJob = {
+    source,
+    bindings,
+    currentRing,
+    ...(createExperiment ? { inlineSweepMembers: limitValue("inlineSweepMembers") } : {}),
+  };
 
   // Admission first: a computation the engine cannot take leaves no cell behind.
   const events: CellEvent[] = [];
@@ -97,9 +123,18 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
             case "checked":
               return forward({ event: "checked", statements: event.statements });
             case "experiment": {
-              const request = { id: event.id, family: event.family, probe: event.probe, labels: event.labels };
+              const request: ExperimentRequest = {
+                id: event.id,
+                sessionId,
+                userId: user.id,
+                cellId: cell.id,
+                source,
+                family: event.family,
+                probe: event.probe,
+                labels: event.labels,
+              };
               order = order.then(() =>
-                createFromCell({ ...request, sessionId, userId: user.id, cellId: cell.id, source }).then(
+                (createExperiment ?? noExperiments)(request).then(
                   () => {},
                   (error: Error) => {
                     console.error(`[ringside] cell ${cell.id}: creating experiment ${request.id} failed:`, error);
@@ -247,3 +282,9 @@ async function saveWithRetries(cell: CellRow, user: CurrentUser, outcome: CellOu
   await markUnsaved(cell.id, `the result could not be saved after ${attempts} tries (saveAttempts); run the cell again`).catch(() => {});
   return null;
 }
+
+/// The slot is offered experiments only when the caller can create them; reaching this means
+/// it asked anyway, and the cell says so instead of naming an experiment that does not exist.
+const noExperiments = async (): Promise<never> => {
+  throw new Error("this server was not given a way to create experiments");
+};
