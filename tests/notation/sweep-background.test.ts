@@ -84,3 +84,34 @@ describe("sweep with experiments offered (as in a server's cell)", () => {
     expect(j.text).toMatch(/7\/40 members done, 2 failed/);
   });
 });
+
+describe("the cell job in an engine slot (lib/compute/cell-job.ts)", () => {
+  async function job(source: string, inlineSweepMembers?: number) {
+    const { handleJob } = await import("@/lib/compute/cell-job");
+    const events: { event: string; [k: string]: unknown }[] = [];
+    const payload = { source, bindings: [], currentRing: null, ...(inlineSweepMembers === undefined ? {} : { inlineSweepMembers }) };
+    await handleJob(payload, { signal: new AbortController().signal, emit: (e) => events.push(e as (typeof events)[number]) });
+    return events;
+  }
+
+  it("hands the server an experiment request whose id the statement's Experiment value carries", async () => {
+    const events = await job(family(4) + "T := sweep(F, R -> {len: R.length})", 3);
+    const requests = events.filter((e) => e.event === "experiment");
+    expect(requests).toHaveLength(1);
+    const request = requests[0] as unknown as { id: string; family: { type: string; length: number }; probe: { type: string; text: string }; labels: string[] };
+    expect(request.family).toMatchObject({ type: "Family", length: 4 });
+    expect(request.probe).toMatchObject({ type: "Function", text: "R -> {len: R.length}" });
+    expect(request.labels).toHaveLength(4);
+    const results = events.filter((e) => e.event === "result");
+    expect(results[results.length - 1].value).toMatchObject({ type: "Experiment", id: request.id, total: 4, status: "queued" });
+    const bound = events.filter((e) => e.event === "bound" && e.name === "T");
+    expect(bound[bound.length - 1].type).toBe("Experiment");
+  });
+
+  it("runs every sweep inline when the server offers no experiments", async () => {
+    const events = await job(family(4) + "sweep(F, R -> {len: R.length}, background = true)");
+    expect(events.filter((e) => e.event === "experiment")).toHaveLength(0);
+    const results = events.filter((e) => e.event === "result");
+    expect((results[results.length - 1].value as { type: string }).type).toBe("Table");
+  });
+});
