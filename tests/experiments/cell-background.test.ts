@@ -6,7 +6,7 @@
 /// forces inline.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeDb } from "@/db/client";
-import { TEST_ACCOUNTS } from "../helpers/fixtures";
+import { ensureTestGroup, TEST_ACCOUNTS } from "../helpers/fixtures";
 import { TestClient, testAddress } from "../helpers/http";
 import { startWorker, stopGently, waitFor, type Proc } from "./helpers";
 
@@ -15,6 +15,7 @@ let sessionId = "";
 let worker: Proc;
 
 beforeAll(async () => {
+  await ensureTestGroup(); // creates the fixture accounts
   expect((await owner.signIn(TEST_ACCOUNTS.member.email, TEST_ACCOUNTS.member.password)).status).toBe(200);
   const created = await owner.json("/api/sessions", { title: "sweeps in cells" });
   expect(created.status).toBe(201);
@@ -24,7 +25,7 @@ beforeAll(async () => {
 });
 
 afterAll(async () => {
-  await stopGently(worker);
+  if (worker) await stopGently(worker);
   await closeDb();
 });
 
