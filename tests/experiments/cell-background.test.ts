@@ -41,7 +41,12 @@ async function runCell(source: string): Promise<{ events: StreamEvent[]; cellId:
     .map((l) => JSON.parse(l) as StreamEvent);
   const results = events.filter((e) => e.event === "result");
   const done = events.find((e) => e.event === "done")!;
-  return { events, cellId: events.find((e) => e.event === "accepted")!.cellId!, last: results[results.length - 1].value!, status: done.status! };
+  return {
+    events,
+    cellId: events.find((e) => e.event === "accepted")!.cellId!,
+    last: results[results.length - 1].value!,
+    status: done.status!,
+  };
 }
 
 async function storedValue(cellId: string): Promise<ValueJson> {
@@ -79,8 +84,9 @@ describe("a sweep in a cell", () => {
 
     const read = await owner.request(`/api/experiments/${id}`);
     expect(read.status).toBe(200);
-    const e = ((await read.json()) as { experiment: { id: string; total: number; sourceCellId: string; program: string; familyDefinition: string } })
-      .experiment;
+    const e = (
+      (await read.json()) as { experiment: { id: string; total: number; sourceCellId: string; program: string; familyDefinition: string } }
+    ).experiment;
     expect(e).toMatchObject({ id, total: 30, sourceCellId: cell.cellId });
     expect(e.program).toContain("sweep(F, R -> {len: R.length})");
     expect(e.familyDefinition).toMatch(/^family\(\[/);
@@ -94,9 +100,11 @@ describe("a sweep in a cell", () => {
       180_000,
       () => `experiment ${id} did not finish:\n${worker.output()}`,
     );
-    const rows = ((await (await owner.request(`/api/experiments/${id}/rows?limit=100`)).json()) as {
-      rows: { index: number; status: string; fields: Record<string, { text: string }> }[];
-    }).rows;
+    const rows = (
+      (await (await owner.request(`/api/experiments/${id}/rows?limit=100`)).json()) as {
+        rows: { index: number; status: string; fields: Record<string, { text: string }> }[];
+      }
+    ).rows;
     expect(rows).toHaveLength(30);
     expect(rows.map((r) => r.index)).toEqual([...Array(30).keys()]);
     for (const r of rows) {

@@ -35,7 +35,14 @@ async function withExperiments(source: string, inlineMax = 3) {
       inlineMax,
       start: (family, probe): Value => {
         started.push({ family, probe });
-        return { type: "Experiment", id: "00000000-0000-4000-8000-000000000001", status: "queued", done: 0, total: family.members.length, failures: 0 };
+        return {
+          type: "Experiment",
+          id: "00000000-0000-4000-8000-000000000001",
+          status: "queued",
+          done: 0,
+          total: family.members.length,
+          failures: 0,
+        };
       },
     },
   });
@@ -98,7 +105,12 @@ describe("the cell job in an engine slot (lib/compute/cell-job.ts)", () => {
     const events = await job(family(4) + "T := sweep(F, R -> {len: R.length})", 3);
     const requests = events.filter((e) => e.event === "experiment");
     expect(requests).toHaveLength(1);
-    const request = requests[0] as unknown as { id: string; family: { type: string; length: number }; probe: { type: string; text: string }; labels: string[] };
+    const request = requests[0] as unknown as {
+      id: string;
+      family: { type: string; length: number };
+      probe: { type: string; text: string };
+      labels: string[];
+    };
     expect(request.family).toMatchObject({ type: "Family", length: 4 });
     expect(request.probe).toMatchObject({ type: "Function", text: "R -> {len: R.length}" });
     expect(request.labels).toHaveLength(4);
