@@ -16,6 +16,7 @@ export type SimpleKind =
   | "BettiTable"
   | "HilbertSeries"
   | "Series"
+  | "Experiment"
   | "None"
   | "Any";
 
@@ -86,6 +87,7 @@ export const T = {
   BettiTable: simple("BettiTable"),
   HilbertSeries: simple("HilbertSeries"),
   Series: simple("Series"),
+  Experiment: simple("Experiment"),
   Family: { kind: "Family", member: { kind: "Ideal" } } as FamilyType,
   family: (member: Type): FamilyType => ({ kind: "Family", member }),
   None: simple("None"),

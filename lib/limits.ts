@@ -64,6 +64,13 @@ export const LIMIT_TABLE = {
     env: "RINGSIDE_STOP_GRACE_MS",
     what: "time a stopped computation gets to hand back its partial work before its slot is killed",
   },
+  // sweeps in a cell (grammar/README.md, "Families, sweeps and searches")
+  inlineSweepMembers: {
+    value: 25,
+    unit: "count",
+    env: "RINGSIDE_INLINE_SWEEP_MEMBERS",
+    what: "members a sweep in a cell may have to run inline, streaming its rows; a longer one becomes a background experiment",
+  },
   // results kept by the web server
   largeValueBytes: {
     value: 1024 * 1024,
@@ -157,4 +164,13 @@ export function limitsTableMarkdown(): string {
     return `| \`${name}\` | ${value} | ${spec.env ? `\`${spec.env}\`` : "—"} | ${spec.what} |`;
   });
   return ["| limit | default | environment | bounds |", "|---|---|---|---|", ...rows].join("\n");
+}
+
+/// Whether `sweep(F, probe)` runs inside the cell (true) or becomes a background experiment:
+/// `background = true` / `false` decides when given; otherwise a family of at most
+/// `inlineMax` members (the limit `inlineSweepMembers`) runs inline. Where no experiments can
+/// be created (the CLI, a worker), every sweep runs inline and this is not asked.
+export function sweepRunsInline(members: number, background: boolean | undefined, inlineMax = limitValue("inlineSweepMembers")): boolean {
+  if (background !== undefined) return !background;
+  return members <= inlineMax;
 }

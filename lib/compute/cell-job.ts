@@ -1,7 +1,10 @@
 /// The job a worker thread runs for one cell: the evaluator over the session's saved
 /// bindings, its events translated to the cell stream of app/api/README.md.
+import { randomUUID } from "node:crypto";
 import { parse } from "../../grammar/parser";
-import { evaluate, type EvalEvent } from "../notation/evaluate";
+import { evaluate, type EvalEvent, type EvaluateOptions } from "../notation/evaluate";
+import { encodeValue } from "../notation/json";
+import { memberLabel } from "../notation/families";
 import type { CellEvent, CellJob, Span } from "./cell-events";
 import type { JobContext } from "./protocol";
 import { bounded, restored } from "./large-values";
@@ -41,10 +44,35 @@ export async function handleJob(payload: unknown, { signal, emit }: JobContext) 
 
   // Values stored as summaries come back whole from their detail, here inside the slot.
   const bindings = job.bindings.map((b) => ({ ...b, value: restored(b.value) as typeof b.value }));
-  const outcome = await evaluate(job.source, bindings, { signal, onEvent, currentRing: job.currentRing ?? null });
+  const outcome = await evaluate(job.source, bindings, {
+    signal,
+    onEvent,
+    currentRing: job.currentRing ?? null,
+    experiments: job.inlineSweepMembers === undefined ? undefined : backgroundSweeps(job.inlineSweepMembers, send),
+  });
   // The checker's type names (List<Int>, …) and the defining source replace the provisional
   // ones sent with each result.
-  for (const o of outcome.objects)
-    send({ event: "bound", statement: o.statement, name: o.name, type: o.type, value: bounded(o.value), source: o.source });
+  for (const o of outcome.objects) {
+    // A sweep the checker typed as a Table that went to the background is an Experiment.
+    const type = (o.value as { type?: unknown }).type === "Experiment" ? "Experiment" : o.type;
+    send({ event: "bound", statement: o.statement, name: o.name, type, value: bounded(o.value), source: o.source });
+  }
   return { status: outcome.status, currentRing: outcome.currentRing };
+}
+
+/// Sweeps that go to the background. The slot has no database, so it hands the server a
+/// request (the `experiment` event: the family and probe as §9 JSON, the members' labels)
+/// under an id chosen here, and the statement's value is the Experiment with that id; the
+/// server creates the experiment under that id before it stores the cell
+/// (lib/experiments/README.md, "Sweeps in a cell").
+function backgroundSweeps(inlineMax: number, send: (event: CellEvent) => void): EvaluateOptions["experiments"] {
+  return {
+    inlineMax,
+    start: (family, probe) => {
+      const id = randomUUID();
+      send({ event: "experiment", id, family: encodeValue(family), probe: encodeValue(probe), labels: family.members.map(memberLabel) });
+      const total = family.members.length;
+      return { type: "Experiment", id, status: total === 0 ? "done" : "queued", done: 0, total, failures: 0 };
+    },
+  };
 }

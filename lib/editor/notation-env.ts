@@ -25,6 +25,7 @@ const SIMPLE: ReadonlySet<string> = new Set<SimpleKind>([
   "BettiTable",
   "HilbertSeries",
   "Series",
+  "Experiment",
   "None",
 ]);
 

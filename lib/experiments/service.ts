@@ -7,6 +7,7 @@ import { cells, uploads } from "@/db/schema";
 import { ExperimentError } from "./errors";
 import { ENGINE_VERSION } from "@/lib/sessions/engine-version";
 import { currentRingOf, listObjects } from "@/lib/sessions/store";
+import type { ExperimentRequest } from "@/lib/sessions/run-cell";
 import { memberLimits, planSweep } from "./compute-adapter";
 import { enqueueMembers } from "./queue";
 import { changeStatus, getExperiment, insertExperiment, missingIndexes, type ExperimentRow } from "./store";
@@ -57,6 +58,29 @@ export async function createFromProgram(input: CreateFromProgram): Promise<Exper
   });
 }
 
+/// A cell's request (lib/sessions/run-cell.ts ExperimentRequest): the id the cell's
+/// Experiment value already carries (chosen in the engine slot), the cell and its text, and
+/// what the slot planned — the family and probe as §9 JSON and the members' labels.
+export type CreateFromCell = ExperimentRequest;
+
+/// A cell's sweep that went to the background (lib/sessions/run-cell.ts): the slot already
+/// evaluated the cell up to the sweep and handed back its family and probe, so nothing is
+/// evaluated again; the experiment is stored under the id the cell's value carries and its
+/// members are queued, exactly as POST /api/experiments does after planning.
+export async function createFromCell(input: CreateFromCell): Promise<ExperimentRow> {
+  return start({
+    id: input.id,
+    sessionId: input.sessionId,
+    createdBy: input.userId,
+    title: titleFrom(input.family as { definition?: string }),
+    program: input.source,
+    family: input.family,
+    labels: input.labels,
+    probe: input.probe,
+    sourceCellId: input.cellId,
+  });
+}
+
 export interface CreateFromUpload {
   sessionId: string;
   userId: string | null;
@@ -103,6 +127,7 @@ function titleFrom(family: { definition?: string }): string {
 }
 
 async function start(e: {
+  id?: string;
   sessionId: string;
   createdBy: string | null;
   title: string;

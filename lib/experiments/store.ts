@@ -12,6 +12,8 @@ export type ExperimentStatus = ExperimentRow["status"];
 export type RowStatus = StoredRow["status"];
 
 export interface NewExperiment {
+  /// chosen by the caller when a value already names the experiment (a cell's Experiment)
+  id?: string;
   sessionId: string;
   createdBy: string | null;
   title: string;

@@ -11,6 +11,7 @@ import type { CallContext } from "./context";
 import { EvalError, asEvalError, limit, runtime } from "./errors";
 import { idealValue } from "./ideals";
 import { ratOf } from "../algebra/index";
+import { sweepRunsInline } from "../limits";
 import { familyDefinition, ringText, valueText } from "./text";
 import {
   list,
@@ -283,16 +284,13 @@ function progress(c: CallContext, what: string, done: number, total: number, fai
 
 function sweep([family, probeV]: readonly Value[], c: CallContext): Value {
   const background = c.named.get("background");
-  if (background?.type === "Bool" && background.value && !c.interp.session.experiments) {
-    throw runtime(
-      "background = true: background experiments are created by the server from a cell or a program (POST /api/experiments, app/api/README.md); here sweeps run inline (use background = false, or leave it out)",
-      c.span,
-    );
-  }
+  if (background !== undefined && background.type !== "Bool")
+    throw runtime(`background must be true or false, got ${background.type}`, c.span);
   const F = asFamily(family, c.argSpans[0]);
   const probe = probeArg(probeV, c.argSpans[1]);
+  // Only the server offers experiments; elsewhere (the CLI, a worker) every sweep runs inline.
   const plan = c.interp.session.experiments;
-  if (plan && (background?.type === "Bool" ? background.value : F.members.length > plan.inlineMax)) {
+  if (plan && !sweepRunsInline(F.members.length, background?.value, plan.inlineMax)) {
     return plan.start(F, probe, c.span);
   }
   const builder = new TableBuilder();

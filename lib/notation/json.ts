@@ -137,6 +137,8 @@ export function encodeValue(v: Value): ValueJson {
         members: v.members.map(encodeValue),
         ring: v.ring && encodeRing(v.ring),
       };
+    case "Experiment":
+      return { type: "Experiment", text: t, id: v.id, status: v.status, done: v.done, total: v.total, failures: v.failures };
     case "None":
       return { type: "None", text: t };
   }
@@ -293,6 +295,8 @@ function decodeValidated(j: ValueJson, ctx: DecodeContext): Value {
         ...(j.definition !== undefined ? { definition: j.definition } : {}),
       };
     }
+    case "Experiment":
+      return { type: "Experiment", id: j.id, status: j.status, done: j.done, total: j.total, failures: j.failures };
     case "None":
       return { type: "None" };
   }

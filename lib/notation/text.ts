@@ -2,7 +2,7 @@
 import { formatPoly, type Field, type OrderSpec } from "../algebra/index";
 import { ascendingText, hilbertText } from "./series-text";
 import { ratToString } from "../algebra/index";
-import type { BettiTableValue, FamilyValue, MatrixValue, ModuleValue, RingValue, Value } from "./values";
+import type { BettiTableValue, ExperimentValue, FamilyValue, MatrixValue, ModuleValue, RingValue, Value } from "./values";
 
 export function fieldText(f: Field): string {
   return f.kind === "Q" ? "Q" : `GF(${f.p})`;
@@ -112,6 +112,8 @@ export function valueText(v: Value): string {
         v.columns.join(" | "),
         ...v.rows.map((row) => row.map((x, i) => (v.columns[i] === "seconds" && x.type === "Rat" ? decimalText(x.value) : valueText(x))).join(" | ")),
       ].join("\n");
+    case "Experiment":
+      return experimentText(v);
     case "None":
       return "none";
   }
@@ -128,4 +130,14 @@ function decimalText(r: { n: bigint; d: bigint }): string {
   const sign = thousandths < 0n ? "-" : "";
   const a = thousandths < 0n ? -thousandths : thousandths;
   return `${sign}${a / 1000n}.${(a % 1000n).toString().padStart(3, "0")}`;
+}
+
+/// An experiment handle: its counts, and that it runs in the background and how to follow it.
+export function experimentText(v: ExperimentValue): string {
+  const failed = v.failures === 0 ? "" : `, ${v.failures} failed`;
+  const running = v.status === "queued" || v.status === "running";
+  return (
+    `experiment ${v.id}: ${v.status}, ${v.done}/${v.total} members done${failed}` +
+    (running ? " — runs in the background; follow it in the experiments list or at GET /api/experiments/" + v.id : "")
+  );
 }

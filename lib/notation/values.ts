@@ -150,6 +150,19 @@ export interface TableValue {
   readonly rows: readonly (readonly Value[])[];
 }
 
+/// A sweep that runs as a background experiment (notation.md §11): a handle, not the rows.
+/// The evaluator makes it with status `queued` when a cell's sweep goes to the background;
+/// the server creates the experiment under this id before it stores the cell
+/// (lib/experiments/README.md, "Sweeps in a cell"). The counts are those at that moment.
+export interface ExperimentValue {
+  readonly type: "Experiment";
+  readonly id: string;
+  readonly status: "queued" | "running" | "paused" | "done" | "cancelled";
+  readonly done: number;
+  readonly total: number;
+  readonly failures: number;
+}
+
 export type Value =
   /// `note`: how the number was found when that matters (a random choice); shown in the text
   | { readonly type: "Int"; readonly value: bigint; readonly note?: string }
@@ -171,6 +184,7 @@ export type Value =
   | FunctionValue
   | FamilyValue
   | TableValue
+  | ExperimentValue
   | { readonly type: "None" };
 
 export const list = (items: readonly Value[]): ListValue => ({ type: "List", items });

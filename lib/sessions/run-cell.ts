@@ -3,6 +3,10 @@
 /// in an engine slot, stream its events as NDJSON while the heartbeat keeps what streamed,
 /// and write the outcome and new named objects in one transaction — also when the client
 /// goes away, the cell is cancelled or a limit stops it (then with the work done so far).
+/// A sweep too long to run inline comes back from the slot as an `experiment` request; the
+/// caller's `createExperiment` (the route passes lib/experiments' createFromCell — sessions
+/// do not import experiments, which import sessions) stores it before any later event is
+/// streamed and before the cell is stored, so the Experiment value's id can be followed at once.
 import { isEngineFull, runInSlot, type EngineFullError, type SlotOutcome } from "@/lib/compute";
 import { errorValue, type CellEvent, type CellJob, type ErrorValue, type Span } from "@/lib/compute/cell-events";
 import { StreamedWork } from "@/lib/compute/streamed-work";
@@ -29,10 +33,36 @@ function refusal(error: EngineFullError): HttpError {
   );
 }
 
-export async function runCell(user: CurrentUser, sessionId: string, source: string): Promise<Response> {
+/// What the slot hands back when a sweep goes to the background (lib/wire/cells.ts, the
+/// `experiment` job event), with the cell it came from.
+export interface ExperimentRequest {
+  /// the id the cell's Experiment value carries
+  id: string;
+  sessionId: string;
+  userId: string;
+  cellId: string;
+  /// the cell's text (the experiment's program)
+  source: string;
+  family: unknown;
+  probe: unknown;
+  labels: string[];
+}
+
+export interface RunCellOptions {
+  /// Stores a background experiment. Without it every sweep runs inline (as in the CLI).
+  createExperiment?: (request: ExperimentRequest) => Promise<unknown>;
+}
+
+export async function runCell(user: CurrentUser, sessionId: string, source: string, options: RunCellOptions = {}): Promise<Response> {
   const bindings = (await listObjects(sessionId)).map((o) => ({ name: o.name, type: o.type, value: o.value }));
   const currentRing = await currentRingOf(sessionId);
-  const job: CellJob = { source, bindings, currentRing };
+  const createExperiment = options.createExperiment;
+  const job: CellJob = {
+    source,
+    bindings,
+    currentRing,
+    ...(createExperiment ? { inlineSweepMembers: limitValue("inlineSweepMembers") } : {}),
+  };
 
   // Admission first: a computation the engine cannot take leaves no cell behind.
   const events: CellEvent[] = [];
@@ -77,6 +107,13 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
         const work = new StreamedWork();
         const bound = new Map<string, { name: string; type: string; value: unknown; source: string }>();
         let failure: ErrorValue | null = null;
+        // Events reach the client in order, each after any experiment requested before it is
+        // stored (so an Experiment value never names an experiment that does not exist yet).
+        let order: Promise<void> = Promise.resolve();
+        const forward = (event: StreamEvent) => {
+          order = order.then(() => send(event));
+        };
+        let experimentProblem: string | null = null;
         const onEvent = (event: CellEvent) => {
           work.observe(event);
           switch (event.event) {
@@ -84,15 +121,37 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
               bound.set(event.name, { name: event.name, type: event.type, value: event.value, source: event.source ?? "" });
               return;
             case "checked":
-              return send({ event: "checked", statements: event.statements });
+              return forward({ event: "checked", statements: event.statements });
+            case "experiment": {
+              const request: ExperimentRequest = {
+                id: event.id,
+                sessionId,
+                userId: user.id,
+                cellId: cell.id,
+                source,
+                family: event.family,
+                probe: event.probe,
+                labels: event.labels,
+              };
+              order = order.then(() =>
+                (createExperiment ?? noExperiments)(request).then(
+                  () => {},
+                  (error: Error) => {
+                    console.error(`[ringside] cell ${cell.id}: creating experiment ${request.id} failed:`, error);
+                    experimentProblem ??= error.message;
+                  },
+                ),
+              );
+              return;
+            }
             case "error":
               failure = event.error;
               // The evaluator sees any stop as a cancel; whether it was the user or the time
               // limit is known only when the job ends, so that error is sent then.
               if (event.error.kind === "cancelled") return;
-              return send(event);
+              return forward(event);
             default:
-              return send(event);
+              return forward(event);
           }
         };
         for (const event of events.splice(0)) onEvent(event);
@@ -105,6 +164,7 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
           return () => {};
         });
         const end = await done.finally(unregister);
+        await order;
 
         // A stop that the job did not report itself becomes the cell's error, placed at the
         // statement that was running.
@@ -121,6 +181,10 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
           send({ event: "error", statement: running, error: failure });
         } else if (reported?.kind === "cancelled") {
           send({ event: "error", statement: running, error: reported });
+        } else if (experimentProblem !== null && !reported) {
+          // The cell's value names an experiment that could not be stored: the cell says so.
+          failure = errorValue("runtime", `the sweep's background experiment could not be created: ${experimentProblem}`, at);
+          send({ event: "error", statement: null, error: failure });
         }
         const final = failure as ErrorValue | null;
         const status: CellOutcome["status"] =
@@ -218,3 +282,9 @@ async function saveWithRetries(cell: CellRow, user: CurrentUser, outcome: CellOu
   await markUnsaved(cell.id, `the result could not be saved after ${attempts} tries (saveAttempts); run the cell again`).catch(() => {});
   return null;
 }
+
+/// The slot is offered experiments only when the caller can create them; reaching this means
+/// it asked anyway, and the cell says so instead of naming an experiment that does not exist.
+const noExperiments = async (): Promise<never> => {
+  throw new Error("this server was not given a way to create experiments");
+};

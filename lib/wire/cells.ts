@@ -90,6 +90,16 @@ export const JobEvent = z.discriminatedUnion("event", [
     value: ValueJson,
     source: z.string().optional(),
   }),
+  /// A sweep of this cell goes to the background (stays on the server, like `bound`): the
+  /// server creates the experiment under `id` from the planned family and probe before it
+  /// stores the cell; the statement's value is already the Experiment with this id.
+  z.object({
+    event: z.literal("experiment"),
+    id: z.string().uuid(),
+    family: ValueJson,
+    probe: ValueJson,
+    labels: z.array(z.string()),
+  }),
 ]);
 export type JobEvent = z.infer<typeof JobEvent>;
 
@@ -99,6 +109,9 @@ export const CellJob = z.object({
   source: z.string(),
   bindings: z.array(z.object({ name: z.string(), type: z.string(), value: z.unknown() })),
   currentRing: z.string().nullable(),
+  /// present when the server can run sweeps as background experiments: sweeps of more
+  /// members than this (or with background = true) become one (lib/limits.ts sweepRunsInline)
+  inlineSweepMembers: z.number().int().nonnegative().optional(),
 });
 export type CellJob = z.infer<typeof CellJob>;
 

@@ -107,6 +107,19 @@ export type ErrorKind = z.infer<typeof ErrorKind>;
 export const ErrorJson = z.object({ type: z.literal("Error"), text, kind: ErrorKind, message: z.string(), span: SpanJson });
 export type ErrorJson = z.infer<typeof ErrorJson>;
 
+/// notation.md §11: a sweep running as a background experiment — "id", "status", "done",
+/// "total", "failures" (the counts when the value was made; the experiment's own routes give
+/// them live).
+export const ExperimentJson = z.object({
+  type: z.literal("Experiment"),
+  text,
+  id: z.string().uuid(),
+  status: z.enum(["queued", "running", "paused", "done", "cancelled"]),
+  done: count,
+  total: count,
+  failures: count,
+});
+
 type Leaf =
   | z.infer<typeof IntJson>
   | z.infer<typeof RatJson>
@@ -122,6 +135,7 @@ type Leaf =
   | z.infer<typeof BettiTableJson>
   | z.infer<typeof HilbertSeriesJson>
   | z.infer<typeof SeriesJson>
+  | z.infer<typeof ExperimentJson>
   | z.infer<typeof NoneJson>;
 
 export interface ListJson {
@@ -214,6 +228,7 @@ const byType = {
   Table: TableJson,
   Function: FunctionJson,
   Family: FamilyJson,
+  Experiment: ExperimentJson,
   None: NoneJson,
 } as const;
 /// The schema of each value type's encoding, by type name.

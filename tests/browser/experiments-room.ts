@@ -27,9 +27,9 @@ process.once("exit", () => worker?.child.kill("SIGKILL"));
 /// A sweep whose members take a noticeable fraction of a second each, so the page sees the
 /// table partly filled: generic quadrics in five variables (each a complete intersection of
 /// four quadrics: Betti numbers 1, 4, 6, 4, 1 — the Koszul complex; Eisenbud, "Commutative
-/// Algebra", 1995, §17.2, from memory). `background = true` keeps the console from running
-/// it inline first (the cell says that background sweeps are started by the server), so the
-/// cell's "Run as an experiment" is the only run.
+/// Algebra", 1995, §17.2, from memory). `background = true` makes the cell's sweep a durable
+/// experiment at once (grammar/README.md §7): the cell's value is an Experiment, linked
+/// under the cell.
 const SWEEP =
   "S := GF(32003)[x, y, z, w, v]\nsweep(random_ideals(S, count = 40, gens = 4, degree = 2, seed = 21), I -> {pd: (S / I).pd, reg: (S / I).reg, codim: I.codim, betti: resolve(S / I).betti}, background = true)";
 const COUNT = 40;
@@ -124,10 +124,10 @@ browserTest(
     }
     await page.keyboard.press("Escape");
     await page.keyboard.press("Enter");
-    // the inline run finishes; the stored cell offers to run its sweep as an experiment
-    const runAsExperiment = page.getByRole("button", { name: "Run as an experiment" });
-    await runAsExperiment.waitFor({ timeout: 40_000 });
-    await runAsExperiment.click();
+    // the cell's value is an Experiment; the link under the cell opens its room
+    const openRoom = page.getByTestId("cell-experiments").locator('a[href^="/experiments/"]').first();
+    await openRoom.waitFor({ timeout: 40_000 });
+    await openRoom.click();
     await page.waitForURL(/\/experiments\/[0-9a-f-]{36}$/);
     roomId = page.url().split("/experiments/")[1]!;
     await page.getByTestId("experiment-title").waitFor();

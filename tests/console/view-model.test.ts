@@ -2,6 +2,14 @@ import { describe, expect, it } from "vitest";
 import { noteOfValue, texOfModule, viewOfValue } from "@/app/_console/render/view-model";
 
 describe("viewOfValue", () => {
+  it("shows an Experiment (a background sweep) as its text, with done/total", async () => {
+    const { encodeValue } = await import("@/lib/notation/json");
+    const j = encodeValue({ type: "Experiment", id: "00000000-0000-4000-8000-000000000003", status: "queued", done: 0, total: 30, failures: 0 });
+    const v = viewOfValue(j);
+    expect(v.kind).toBe("text");
+    if (v.kind === "text") expect(v.text).toMatch(/^experiment 00000000-0000-4000-8000-000000000003: queued, 0\/30 members done — runs in the background/);
+  });
+
   it("turns a §9 BettiTable into a grid, truncated when incomplete", () => {
     // Betti numbers of S/<xy, yz> over k[x,y,z]: <xy, yz> = y·<x, z>, resolved by
     // 0 ← S ← S(−2)^2 ← S(−3) ← 0 (Eisenbud, The Geometry of Syzygies, 2005, Ch. 1).

@@ -284,8 +284,12 @@ describe("a Family's JSON (lib/notation/README.md: length, members, definition)"
     expect(depth.results[1].value.text).toMatch(/^family\(\[/);
   });
 
-  it("background = true in an inline evaluation says where experiments are created", async () => {
-    const out = await run("S := Q[x]\nsweep(family([<x>]), I -> {d: I.dim}, background = true)");
-    expect(out.error?.message).toMatch(/POST \/api\/experiments/);
+  it("background = true where no experiments can be made (the CLI) still runs inline (notation.md §11)", async () => {
+    // <x> in Q[x]: Q[x]/(x) = Q has dimension 0
+    const out = await run("S := Q[x]\nsweep(family([<x>]), I -> {d: (S / I).dim}, background = true)");
+    expect(out.error, out.error?.text).toBeNull();
+    const t = out.results[out.results.length - 1].value;
+    expect(t.type).toBe("Table");
+    expect(t.text).toMatch(/\| ok \| .* \| 0$/m);
   });
 });

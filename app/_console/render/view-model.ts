@@ -129,6 +129,10 @@ export function viewOfValue(v: ValueReading): ValueView {
         rows: rows.map((r) => (Array.isArray(r) ? r.map((c) => (typeof c === "object" && c ? c.text : String(c))) : [])),
       };
     }
+    case "Experiment":
+      // A background sweep: its text gives status, done/total and how to follow it (the
+      // experiments pages link it by id).
+      return { kind: "text", text: v.text };
     default:
       return { kind: "text", text: v.text };
   }

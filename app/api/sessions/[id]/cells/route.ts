@@ -6,6 +6,7 @@ import { readJson } from "@/lib/http/body";
 import { route } from "@/lib/http/errors";
 import { LIMIT_TABLE } from "@/lib/limits";
 import { linkToken } from "@/lib/sessions/link-token";
+import { createFromCell } from "@/lib/experiments/service";
 import { runCell } from "@/lib/sessions/run-cell";
 import { listCells } from "@/lib/sessions/store";
 import { cellView } from "@/lib/sessions/views";
@@ -34,5 +35,6 @@ export const POST = route(async (req, { params }: Context) => {
   // With the link's token a link holder is known to read the session: 403, not 404.
   await requireSessionAccess(user, id, "edit", { linkToken: linkToken(req) });
   const { source } = await readJson(req, NewCell, { maxBytes: MAX_SOURCE_BYTES + 1024 });
-  return runCell(user, id, source);
+  // A long sweep in the cell becomes a background experiment (lib/experiments/README.md).
+  return runCell(user, id, source, { createExperiment: createFromCell });
 });
