@@ -91,7 +91,7 @@ export const GUIDED_TOUR: readonly GuidedExample[] = [
 
 /// The tour's last step, after the examples above: a small sweep run as a background
 /// experiment, whose room opens on its plot. It is set in the project's demo scenario, the
-/// invented Kestrel Lake syzygy group (db/seed.ts), who compare how graded Betti numbers
+/// invented Kestrel Lake syzygy group (lib/ops/seed.ts), who compare how graded Betti numbers
 /// change across a family. Kept apart from GUIDED_TOUR because it needs the server's
 /// experiment jobs (POST /api/experiments), not only the input.
 export const EXPERIMENT_STEP: GuidedExample = {

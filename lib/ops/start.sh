@@ -49,7 +49,7 @@ export NEXT_TELEMETRY_DISABLED=1
 log "applying migrations"
 node_ts db/migrate.ts
 log "seeding the demo group"
-node_ts db/seed.ts
+node_ts lib/ops/seed.ts
 
 node --import tsx lib/ops/smtp-sink.ts &
 SINK_PID=$!

@@ -1,9 +1,9 @@
 /// Seeds the demo research group. Idempotent: existing rows (matched by e-mail, team slug
 /// and session title) are left as they are, so running it on every start is safe.
 import { and, eq } from "drizzle-orm";
-import { hashPassword } from "../lib/auth/password";
-import { closeDb, db } from "./client";
-import { memberships, sessions, teams, users, type SiteRole, type TeamRole } from "./schema";
+import { hashPassword } from "../auth/password";
+import { closeDb, db } from "../../db/client";
+import { memberships, sessions, teams, users, type SiteRole, type TeamRole } from "../../db/schema";
 
 /// The invented Kestrel Lake syzygy group; README.md lists these accounts.
 export const DEMO_TEAM = {
