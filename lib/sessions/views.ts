@@ -1,7 +1,9 @@
 /// The JSON shapes of app/api/README.md, made from database rows.
 import type { CellRow, ObjectRow } from "./store";
 
-export function cellView(row: CellRow) {
+/// `author` is who ran the cell (null for cells from before authors were recorded, or
+/// whose account is gone); its name is shown beside the cell in shared sessions.
+export function cellView(row: CellRow & { authorName?: string | null }) {
   const result = row.result as { statements?: unknown[] } | null;
   return {
     id: row.id,
@@ -12,6 +14,7 @@ export function cellView(row: CellRow) {
     error: row.error ?? null,
     timings: { totalMs: row.durationMs },
     engineVersion: row.engineVersion,
+    author: row.createdBy ? { id: row.createdBy, name: row.authorName ?? "" } : null,
     createdAt: row.createdAt.toISOString(),
   };
 }
@@ -28,6 +31,8 @@ export function objectView(row: ObjectRow) {
     source: row.source,
     origin: row.origin ?? null,
     sourceCellId: row.sourceCellId,
+    /// who defined it (the id of the user whose cell bound it last, or who imported it)
+    definedBy: row.ownerId,
     updatedAt: row.updatedAt.toISOString(),
   };
 }

@@ -3,11 +3,12 @@
 /// revoked; a newer invitation to the same address replaces the pending one.
 import { and, eq, sql } from "drizzle-orm";
 import { db } from "@/db/client";
-import { invitations, memberships, teams, users, type TeamRole } from "@/db/schema";
+import { invitations, memberships, sessions, teams, users, type TeamRole } from "@/db/schema";
 import { requireTeamRole } from "@/lib/auth/access";
 import type { CurrentUser } from "@/lib/auth/types";
 import { HttpError, notFound } from "@/lib/http/errors";
 import { sendMail } from "@/lib/mail/send";
+import { PLACEHOLDER_TITLE } from "@/lib/sessions/store";
 import { auditSharing, newToken, requireUuid, tokenHash } from "./common";
 
 /// Lifetime of an invitation; RINGSIDE_INVITATION_TTL_HOURS overrides the 7 days.
@@ -154,8 +155,11 @@ export async function inspectInvitation(token: string) {
   };
 }
 
-/// Makes the signed-in invitee a member (or guest) of the team. Refuses with 404 (unknown
-/// token), 410 (used, revoked, expired) or 403 (signed in with another address).
+/// Makes the signed-in invitee a member (or guest) of the team and gives the session they
+/// land in: always one of their own (their latest, or a new one named by its first
+/// definition), never the lead's, so their first cells cannot change the team's work.
+/// Refuses with 404 (unknown token), 410 (used, revoked, expired) or 403 (signed in with
+/// another address).
 export async function acceptInvitation(user: CurrentUser, token: string, address: string) {
   if (!TOKEN_SHAPE.test(token)) throw notFound("The invitation");
   const hash = tokenHash(token);
@@ -182,7 +186,14 @@ export async function acceptInvitation(user: CurrentUser, token: string, address
     if (!existing) await tx.insert(memberships).values({ teamId: row.teamId, userId: user.id, role: row.role });
     await tx.update(invitations).set({ status: "accepted", acceptedAt: new Date() }).where(eq(invitations.id, row.id));
     await auditSharing(tx, { event: "invitation_accepted", userId: user.id, email: user.email, address, details: { ...base, role: row.role } });
-    return { result: { teamId: row.teamId, role: existing?.role ?? row.role } };
+    const [own] = await tx
+      .select({ id: sessions.id })
+      .from(sessions)
+      .where(eq(sessions.ownerId, user.id))
+      .orderBy(sql`${sessions.updatedAt} DESC`)
+      .limit(1);
+    const sessionId = own?.id ?? (await tx.insert(sessions).values({ title: PLACEHOLDER_TITLE, autoTitle: true, ownerId: user.id }).returning())[0]!.id;
+    return { result: { teamId: row.teamId, role: existing?.role ?? row.role, sessionId } };
   });
   if ("error" in outcome && outcome.error) {
     if (outcome.audit) {
