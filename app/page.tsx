@@ -1,6 +1,7 @@
 import Link from "next/link";
 import type { ReactNode } from "react";
 import { redirect } from "next/navigation";
+import { sessionRole } from "@/lib/auth/access";
 import { currentUser } from "@/lib/auth/current-user";
 import { listTeams } from "@/lib/sharing/teams";
 import { Console } from "./_console/console";
@@ -20,8 +21,12 @@ export default async function ConsolePage({ searchParams }: { searchParams: Prom
   const link = one(params.link);
   if (!user) {
     if (!session || !link) redirect("/sign-in");
+    if (!(await opens(null, session, link))) return <DeadLinkPage signedIn={false} />;
     return <LinkVisitorPage sessionId={session} link={link} />;
   }
+  // A link that no longer opens the session (revoked, or mistyped) gets one message, not a
+  // console that half-loads and contradicts itself.
+  if (session && link && !(await opens(user, session, link))) return <DeadLinkPage signedIn />;
   const teamRows = await listTeams(user);
 
   return (
@@ -54,6 +59,31 @@ export default async function ConsolePage({ searchParams }: { searchParams: Prom
       </nav>
       <Console initialSessionId={session} linkToken={link} signedIn />
     </PageShell>
+  );
+}
+
+/// Whether the visitor (signed in or not) can read the session with this link.
+async function opens(user: Awaited<ReturnType<typeof currentUser>>, sessionId: string, link: string): Promise<boolean> {
+  const found = await sessionRole(user, sessionId, { linkToken: link });
+  return found !== null && found.role !== null;
+}
+
+/// The one message for a read-only link that does not open its session.
+function DeadLinkPage({ signedIn }: { signedIn: boolean }) {
+  return (
+    <div className="flex min-h-screen items-center justify-center px-4">
+      <div className="max-w-md rounded-xl border border-ink/10 bg-white p-6 shadow-sm" role="alert" data-testid="dead-link">
+        <h1 className="text-lg font-semibold">This read-only link no longer works</h1>
+        <p className="mt-2 text-ink-soft">
+          Its owner has revoked it, or the address was cut short when it was copied. Ask the session&apos;s owner for a new link.
+        </p>
+        <p className="mt-4 text-sm">
+          <Link href={signedIn ? "/" : "/sign-in"} className="underline">
+            {signedIn ? "Go to your console" : "Sign in"}
+          </Link>
+        </p>
+      </div>
+    </div>
   );
 }
 

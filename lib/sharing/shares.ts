@@ -37,7 +37,10 @@ async function resolveGrantee(user: CurrentUser, grantee: Grantee, ownerId: stri
   if ("email" in grantee) {
     const email = grantee.email.toLowerCase();
     const [target] = await database.select({ id: users.id, name: users.displayName }).from(users).where(eq(users.email, email));
-    if (!target) throw new HttpError(404, "no_account", `No Ringside account uses ${email}; invite them to a team first.`);
+    if (!target) {
+      // The console offers to invite the address to one of the caller's teams instead.
+      throw new HttpError(404, "no_account", `No Ringside account uses ${email} yet; invite them to one of your teams, then share.`, { email });
+    }
     if (target.id === ownerId) throw new HttpError(409, "is_owner", "That is the owner, who has every right already.");
     return { userId: target.id, teamId: null, label: email };
   }
