@@ -86,12 +86,12 @@ export function ringTex(v: ValueJsonLike): string {
   return ideal.length === 0 ? base : `${base}/\\langle ${ideal.map(mathText).join(",\\ ")} \\rangle`;
 }
 
-/// A record's fields in the order the user wrote them (§9 Record `order`; jsonb storage
+/// A record's fields in the order the user wrote them (§9 Record `fieldOrder`; jsonb storage
 /// does not keep key order).
 export function recordEntries(v: ValueJsonLike): [string, ValueJsonLike][] {
   const fields = (v.fields ?? {}) as Record<string, ValueJsonLike>;
   const keys = Object.keys(fields);
-  const order = Array.isArray(v.order) ? (v.order as unknown[]) : null;
+  const order = Array.isArray(v.fieldOrder) ? (v.fieldOrder as unknown[]) : null;
   const ordered =
     order && order.length === keys.length && order.every((k) => typeof k === "string" && Object.hasOwn(fields, k)) ? (order as string[]) : keys;
   return ordered.map((k) => [k, fields[k]!]);

@@ -124,9 +124,9 @@ type Leaf =
   | z.infer<typeof NoneJson>;
 
 export interface ListJson { type: "List"; text: string; items: ValueJson[] }
-/// `order` lists the field names as the user wrote them: a JSON object's key order does not
+/// `fieldOrder` lists the field names as the user wrote them: a JSON object's key order does not
 /// survive storage (PostgreSQL's jsonb sorts keys), so it is kept beside the fields.
-export interface RecordJson { type: "Record"; text: string; fields: Record<string, ValueJson>; order?: string[] }
+export interface RecordJson { type: "Record"; text: string; fields: Record<string, ValueJson>; fieldOrder?: string[] }
 export interface TableJson { type: "Table"; text: string; columns: string[]; rows: ValueJson[][] }
 /// Functions carry their source, parameters, the values of the names they captured and
 /// the ring their literals are read in, so a later cell can rebuild the closure.
@@ -153,7 +153,7 @@ export const RecordJson: z.ZodType<RecordJson> = z.object({
   type: z.literal("Record"),
   text,
   fields: z.record(z.string(), lazyValue),
-  order: z.array(z.string()).optional(),
+  fieldOrder: z.array(z.string()).optional(),
 });
 export const TableJson: z.ZodType<TableJson> = z.object({
   type: z.literal("Table"),
@@ -284,7 +284,7 @@ export function encodeValue(v: Value): ValueJson {
     case "List":
       return { type: "List", text: t, items: v.items.map(encodeValue) };
     case "Record":
-      return { type: "Record", text: t, fields: Object.fromEntries([...v.fields].map(([k, x]) => [k, encodeValue(x)])), order: [...v.fields.keys()] };
+      return { type: "Record", text: t, fields: Object.fromEntries([...v.fields].map(([k, x]) => [k, encodeValue(x)])), fieldOrder: [...v.fields.keys()] };
     case "Table":
       return { type: "Table", text: t, columns: [...v.columns], rows: v.rows.map((row) => row.map(encodeValue)) };
     case "Function":
@@ -465,11 +465,11 @@ export function decodeValue(json: unknown, ctx: DecodeContext): Value {
   }
 }
 
-/// A record's field names in the order the user wrote them (`order` when it names exactly
+/// A record's field names in the order the user wrote them (`fieldOrder` when it names exactly
 /// the fields; older encodings without it keep the stored key order).
-export function recordKeys(j: { fields: Record<string, unknown>; order?: readonly string[] }): string[] {
+export function recordKeys(j: { fields: Record<string, unknown>; fieldOrder?: readonly string[] }): string[] {
   const keys = Object.keys(j.fields);
-  const order = j.order;
+  const order = j.fieldOrder;
   if (order && order.length === keys.length && order.every((k) => Object.hasOwn(j.fields, k))) return [...order];
   return keys;
 }

@@ -78,7 +78,7 @@ describe("a Hilbert series shows reduced form, h-vector, dimension, degree and H
 
 describe("records and type tags", () => {
   it("keeps the field order the user wrote, whatever order storage gave the keys", () => {
-    const v = viewOfValue({ type: "Record", text: "{depth: 1, a: 2}", fields: { a: { type: "Int", text: "2" }, depth: { type: "Int", text: "1" } }, order: ["depth", "a"] } as ValueJson);
+    const v = viewOfValue({ type: "Record", text: "{depth: 1, a: 2}", fields: { a: { type: "Int", text: "2" }, depth: { type: "Int", text: "1" } }, fieldOrder: ["depth", "a"] } as unknown as ValueJson);
     expect(v.kind === "record" && v.fields.map(([k]) => k)).toEqual(["depth", "a"]);
   });
 

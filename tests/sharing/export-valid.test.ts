@@ -14,8 +14,8 @@ const ring: ValueJsonLike = { type: "Ring", text: "Q[x, y, z]", field: "Q", vars
 // S/I for I = (xy, yz, xz), three coordinate points of P²: β00 = 1, β12 = 3, β23 = 2
 // (Eisenbud, The Geometry of Syzygies, GTM 229, §3A: points in general position).
 const betti: ValueJsonLike = { type: "BettiTable", text: "…", entries: [[0, 0, 1], [1, 2, 3], [2, 3, 2]], complete: true };
-// jsonb hands the keys back sorted (shorter first); `order` keeps what the user wrote.
-const record: ValueJsonLike = { type: "Record", text: "{depth: 1, a: 2}", fields: { a: int(2), depth: int(1) }, order: ["depth", "a"] };
+// jsonb hands the keys back sorted (shorter first); `fieldOrder` keeps what the user wrote.
+const record: ValueJsonLike = { type: "Record", text: "{depth: 1, a: 2}", fields: { a: int(2), depth: int(1) }, fieldOrder: ["depth", "a"] };
 const list: ValueJsonLike = { type: "List", text: "[…]", items: [betti, int(3)] };
 const fn: ValueJsonLike = { type: "Function", text: "(d) ->\n  d + 1" };
 

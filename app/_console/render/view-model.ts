@@ -40,12 +40,12 @@ export interface ViewContext {
   readonly objects?: readonly { readonly name: string; readonly value: ValueJson }[];
 }
 
-/// The field names of a §9 Record in the order the user wrote them (`order`, kept beside
+/// The field names of a §9 Record in the order the user wrote them (`fieldOrder`, kept beside
 /// the fields because stored JSON does not keep key order).
 export function recordFieldOrder(v: ValueJson): string[] {
   const fields = v.fields ?? {};
   const keys = Object.keys(fields);
-  const order = (v as ValueJson & { order?: readonly unknown[] }).order;
+  const order = (v as ValueJson & { fieldOrder?: readonly unknown[] }).fieldOrder;
   if (Array.isArray(order) && order.length === keys.length && order.every((k) => typeof k === "string" && Object.hasOwn(fields, k))) {
     return order as string[];
   }
