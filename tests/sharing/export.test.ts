@@ -131,6 +131,7 @@ describe("export and import over the API", () => {
       ["", "0", "1", "2"],
       ["0", "1", "", ""],
       ["1", "", "3", "2"],
+      ["total", "1", "3", "2"],
     ]);
     expect(tex).toContain("\\langle x y,\\ y z,\\ x z \\rangle");
   });
