@@ -6,6 +6,7 @@ import type { ValueJson } from "../api/types";
 import { typeWords } from "../render/type-words";
 import { noteOfValue, viewOfValue, type ValueView as View, type ViewContext } from "../render/view-model";
 import { BettiTable } from "./betti-table";
+import { CopyMenu } from "./copy-menu";
 import { Tex } from "./tex";
 
 function Draw({ view, text }: { view: View; text: string }) {
@@ -146,13 +147,13 @@ function Resolution({ view, text }: { view: Extract<View, { kind: "complex" }>; 
 }
 
 /// The value of one statement, with its type in words as a small label.
-export function ValueView({ value, context }: { value: ValueJson; context?: ViewContext }) {
+export function ValueView({ value, context, copyable = true }: { value: ValueJson; context?: ViewContext; copyable?: boolean }) {
   return (
-    <div className="flex items-start gap-3" data-value-type={value.type}>
+    <div className="group/value flex items-start gap-3" data-value-type={value.type}>
       <span className="mt-0.5 w-24 shrink-0 text-right text-xs tracking-wide text-ink/50 dark:text-paper/50" data-testid="type-tag">
         {typeWords(value.type)}
       </span>
-      <div className="min-w-0 overflow-x-auto">
+      <div className="min-w-0 flex-1 overflow-x-auto">
         <Draw view={viewOfValue(value, context)} text={value.text} />
         {noteOfValue(value) && (
           <p className="mt-1 text-xs text-ink-soft dark:text-paper/70" data-testid="value-note">
@@ -160,6 +161,7 @@ export function ValueView({ value, context }: { value: ValueJson; context?: View
           </p>
         )}
       </div>
+      {copyable && <CopyMenu value={value} context={context} />}
     </div>
   );
 }
