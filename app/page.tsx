@@ -31,17 +31,20 @@ export default async function ConsolePage({ searchParams }: { searchParams: Prom
 
   return (
     <PageShell>
-      <nav className="flex items-center gap-4 text-sm">
+      <nav className="flex flex-wrap items-center gap-x-4 gap-y-1 text-sm">
         {teamRows.slice(0, TEAMS_SHOWN).map((t) => (
-          <span key={t.id} className="whitespace-nowrap rounded-full bg-paper-deep px-2 py-0.5 text-ink-soft">
+          <span key={t.id} className="hidden whitespace-nowrap rounded-full bg-paper-deep px-2 py-0.5 text-ink-soft md:inline">
             {t.name} · {t.role}
           </span>
         ))}
         {teamRows.length > TEAMS_SHOWN && (
-          <span className="whitespace-nowrap text-ink-soft" title={teamRows.map((t) => `${t.name} · ${t.role}`).join("\n")}>
+          <span className="hidden whitespace-nowrap text-ink-soft md:inline" title={teamRows.map((t) => `${t.name} · ${t.role}`).join("\n")}>
             +{teamRows.length - TEAMS_SHOWN} more teams
           </span>
         )}
+        <Link href="/reference" className="text-ink-soft underline" title="The notation reference: every function, property and option, searchable">
+          Notation
+        </Link>
         <Link href="/teams" className="text-ink-soft underline">
           Teams
         </Link>
@@ -92,8 +95,11 @@ function LinkVisitorPage({ sessionId, link }: { sessionId: string; link: string 
   const back = `/?session=${encodeURIComponent(sessionId)}&link=${encodeURIComponent(link)}`;
   return (
     <PageShell>
-      <nav className="flex items-center gap-4 text-sm">
+      <nav className="flex flex-wrap items-center gap-x-4 gap-y-1 text-sm">
         <span className="text-ink-soft">Visiting through a read-only link</span>
+        <Link href="/reference" className="text-ink-soft underline">
+          Notation
+        </Link>
         <Link href={`/sign-in?callbackUrl=${encodeURIComponent(back)}`} className="text-ink-soft underline">
           Sign in
         </Link>
@@ -108,7 +114,7 @@ function PageShell({ children }: { children: [ReactNode, ReactNode] }) {
   const [nav, body] = children;
   return (
     <div className="flex h-screen flex-col">
-      <header className="flex items-center justify-between border-b border-ink/10 bg-white px-5 py-3 dark:border-paper/10 dark:bg-night-panel dark:text-paper">
+      <header className="flex flex-wrap items-center justify-between gap-x-4 gap-y-1 border-b border-ink/10 bg-white px-5 py-3 dark:border-paper/10 dark:bg-night-panel dark:text-paper">
         <p className="font-mono text-lg font-semibold tracking-tight">
           Ringside<span className="text-signal">.</span>
         </p>
