@@ -97,9 +97,6 @@ function LinkVisitorPage({ sessionId, link }: { sessionId: string; link: string 
     <PageShell>
       <nav className="flex flex-wrap items-center gap-x-4 gap-y-1 text-sm">
         <span className="text-ink-soft">Visiting through a read-only link</span>
-        <Link href="/reference" className="text-ink-soft underline">
-          Notation
-        </Link>
         <Link href={`/sign-in?callbackUrl=${encodeURIComponent(back)}`} className="text-ink-soft underline">
           Sign in
         </Link>
