@@ -38,7 +38,7 @@ import {
 import { reduceIn, ringOfOperands, toPoly } from "./coerce";
 import { limit, runtime } from "./errors";
 import { colonOf, eliminationOf, groebnerOf, idealProductOf, idealValue, quotientIdeal, saturationByElement, saturationOf } from "./ideals";
-import type { Frame, Interpreter } from "./interpreter";
+import type { CallContext, Evaluator, Frame } from "./context";
 import { addValues } from "./operators";
 import { HOMOLOGY_FUNCTIONS, MODULE_PROPERTIES } from "./homology";
 import { MODULE_FUNCTIONS, RESIDUE_PROPERTY } from "./modules";
@@ -47,14 +47,6 @@ import { COMPLEX_PROPERTIES, resolveValue } from "./resolutions";
 import { QUOTIENT_FUNCTIONS, QUOTIENT_PROPERTIES } from "./quotients";
 import { valueType } from "./value-type";
 import { list, type HilbertSeriesValue, type IdealValue, type RingValue, type Value } from "./values";
-
-export interface CallContext {
-  readonly interp: Interpreter;
-  readonly frame: Frame;
-  readonly span: Span;
-  readonly argSpans: readonly Span[];
-  readonly named: ReadonlyMap<string, Value>;
-}
 
 type FunctionImpl = (args: readonly Value[], c: CallContext) => Value;
 type PropertyImpl = (obj: Value, args: readonly Value[], c: CallContext) => Value;
@@ -342,7 +334,7 @@ function matchesOverload(o: Overload, args: readonly Value[]): boolean {
   return args.every((a, i) => isAssignable(valueType(a), i < o.params.length ? o.params[i].type : o.rest!.type));
 }
 
-export function callFunction(interp: Interpreter, name: string, args: Value[], named: Map<string, Value>, e: Call, frame: Frame): Value {
+export function callFunction(interp: Evaluator, name: string, args: Value[], named: Map<string, Value>, e: Call, frame: Frame): Value {
   const sig = lookupFunction(name)!;
   const o = sig.overloads.find((x) => matchesOverload(x, args));
   if (!o) throw runtime(`${name} does not accept (${args.map((a) => a.type).join(", ")})`, e.span);
@@ -360,7 +352,7 @@ function propertySig(obj: Value, name: string, span: Span): PropertySig {
   return sig;
 }
 
-export function getProperty(interp: Interpreter, obj: Value, name: string, e: Property, frame: Frame): Value {
+export function getProperty(interp: Evaluator, obj: Value, name: string, e: Property, frame: Frame): Value {
   const sig = propertySig(obj, name, e.name.span);
   if (sig.params) throw runtime(`${name} takes arguments: write ${name}(…)`, e.name.span);
   const impl = PROPERTY_IMPLS[propertyKey(sig)];
@@ -368,7 +360,7 @@ export function getProperty(interp: Interpreter, obj: Value, name: string, e: Pr
   return impl(obj, [], { interp, frame, span: e.span, argSpans: [], named: new Map() });
 }
 
-export function callMethod(interp: Interpreter, obj: Value, name: string, args: Value[], e: Call, frame: Frame): Value {
+export function callMethod(interp: Evaluator, obj: Value, name: string, args: Value[], e: Call, frame: Frame): Value {
   const nameSpan = e.callee.kind === "Property" ? e.callee.name.span : e.span;
   const sig = propertySig(obj, name, nameSpan);
   if (!sig.params) {

@@ -2,7 +2,6 @@
 import { AlgebraError } from "../algebra/index";
 import type { Span } from "../../grammar/ast";
 import type { ErrorJson, ErrorKind, SpanJson } from "./json";
-import { DivisionByZero } from "./rational";
 
 export class EvalError extends Error {
   constructor(
@@ -23,7 +22,6 @@ export const limit = (message: string, span: Span): EvalError => new EvalError("
 export function asEvalError(e: unknown, span: Span): EvalError {
   if (e instanceof EvalError) return e;
   if (e instanceof AlgebraError) return new EvalError(e.kind, inUsersWords(e.message), span);
-  if (e instanceof DivisionByZero) return runtime("division by zero", span);
   if (e instanceof RangeError && /BigInt|Invalid array length/i.test(e.message)) {
     return limit(`the result is too large to represent (${e.message})`, span);
   }

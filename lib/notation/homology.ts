@@ -23,13 +23,12 @@ import {
   type Presentation,
   type Resolution,
 } from "../algebra/index";
-import type { CallContext } from "./builtins";
+import type { CallContext } from "./context";
 import { reduceIn } from "./coerce";
 import { limit, runtime } from "./errors";
 import { matrixOf, moduleOf, moduleValue, presentationOverS } from "./modules";
 import { bound } from "./named-options";
-import { complexOf } from "./resolutions";
-import { pdOverQuotient, presentationOverQuotient, resolveOverQuotient, syzygyOverQuotient } from "./quotients";
+import { pdOverQuotient, presentationOverQuotient, syzygyOverQuotient } from "./quotients";
 import { ringText } from "./text";
 import type { ComplexValue, IdealValue, ModuleValue, RingValue, Value } from "./values";
 
@@ -182,25 +181,6 @@ export const MODULE_PROPERTIES: Record<string, PropertyImpl> = {
     ["rank", "pd", "reg", "degree", "length", "presentation", "min_gens"].map((k) => [`Ring.${k}`, moduleProperty(MODULE_PROPS[k])]),
   ),
 };
-
-/// resolve(M) for a presented module over a polynomial ring.
-export function resolveModule(M: ModuleValue, c: CallContext): ComplexValue {
-  // over a quotient ring: degree by degree (engine part 3, quotients.ts)
-  if (M.ring.ideal.length > 0) return resolveOverQuotient(M, c);
-  const { P, shift } = shiftedOverS(M, c.span);
-  const length = bound(c, "length", 1000);
-  const degree = bound(c, "degree", 100_000);
-  const partial = c.interp.session.partial;
-  const res = resolveCoker(M.ring.poly, P.rows, P.rowDegrees, {
-    ...opts(c),
-    ...(length !== undefined ? { length } : {}),
-    ...(degree !== undefined ? { degree: degree + shift } : {}),
-    partial: partial
-      ? (col) => partial({ type: "BettiTable", entries: col.entries.map(([j, b]) => [col.i, j - shift, b] as const), complete: false })
-      : undefined,
-  });
-  return complexOf(res, M.ring, shift);
-}
 
 function indexArg(v: Value, span: Span, what: string): number {
   const k = (v as { value: bigint }).value;

@@ -11,50 +11,26 @@ import type {
   Span,
   Subscript,
 } from "../../grammar/ast";
-import type { Analysis, NameResolution, RingLiteralInfo } from "../../grammar/analysis";
-import { QQ, variable, type ComputeOptions } from "../algebra/index";
+import type { NameResolution, RingLiteralInfo } from "../../grammar/analysis";
+import { QQ, variable } from "../algebra/index";
 import { EvalError, asEvalError, limit, runtime } from "./errors";
 import { applyBinary, applyUnary, valuesEqual } from "./operators";
 import { callFunction, functionExists, getProperty, callMethod } from "./builtins";
 import { ringLiteralFromAst } from "./ring-literal";
-import type { EvalLimits } from "./limits";
-import { RingRegistry } from "./rings";
 import { Scope } from "./scope";
 import { reduceIn, toPoly } from "./coerce";
 import { idealValue } from "./ideals";
 import { freeNames } from "./free-names";
 import { valueText } from "./text";
 import { list, type FunctionValue, type RingValue, type Value } from "./values";
-
-/// Everything one evaluation shares: rings, session bindings, the current ring, the
-/// engine's compute options (signal, progress) and the limits.
-export interface Session {
-  readonly rings: RingRegistry;
-  readonly globals: Map<string, Value>;
-  current: RingValue | null;
-  readonly compute: ComputeOptions;
-  readonly limits: EvalLimits;
-  /// null for code that was not checked in this evaluation (a restored lambda)
-  analysis: Analysis | null;
-  /// streams a piece of the running statement's value (e.g. one finished Betti column)
-  readonly partial?: (value: Value) => void;
-}
-
-/// Where evaluation is: the scope of locals and the ring literals are read in.
-export interface Frame {
-  readonly scope: Scope;
-  readonly ring: RingValue | null;
-  readonly depth: number;
-  /// the text the AST's offsets refer to (the cell, or a restored lambda's source)
-  readonly source: string;
-}
+import type { Evaluator, Frame, Session } from "./context";
 
 const PREDEFINED: Record<string, Value> = {
   Q: { type: "Field", field: QQ },
   none: { type: "None" },
 };
 
-export class Interpreter {
+export class Interpreter implements Evaluator {
   constructor(readonly session: Session) {}
 
   /// Throws a "cancelled" error once the signal fired; called at every node.

@@ -5,7 +5,7 @@
 import { z } from "zod";
 import { formatHilbertDenominator, formatPoly, hilbertSeriesFromNumerator, parsePoly, type Poly } from "../algebra/index";
 import { parseDenominator } from "./series-text";
-import { parseRational, ratToString } from "./rational";
+import { parseRational, ratToString } from "../algebra/index";
 import { RingRegistry, parseField, parseOrder } from "./rings";
 import { fieldText, orderText, ringText, valueText } from "./text";
 import type {

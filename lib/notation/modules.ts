@@ -5,10 +5,10 @@
 /// of R added on every generator), which gives the same module.
 import type { Span } from "../../grammar/ast";
 import { columnDegrees, degree, isHomogeneous, isZero, minimalPresentation, moduleKernel, one, variable, zero, type ComputeOptions, type Poly } from "../algebra/index";
-import type { CallContext } from "./builtins";
+import type { CallContext } from "./context";
 import { reduceIn } from "./coerce";
 import { limit, runtime } from "./errors";
-import type { OpContext } from "./operators";
+import type { OpContext } from "./context";
 import type { MatrixValue, ModuleValue, RingValue, Value } from "./values";
 
 /// The largest rank of a free module R^n written directly.

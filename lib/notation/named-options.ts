@@ -1,5 +1,5 @@
 /// Reading the named options of a built-in call (`length = 6`, `terms = 8`).
-import type { CallContext } from "./builtins";
+import type { CallContext } from "./context";
 import { limit, runtime } from "./errors";
 
 /// A bound given as a named option: a non-negative Int, at most `max`; undefined when absent.

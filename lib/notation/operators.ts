@@ -19,22 +19,13 @@ import {
   intersectionOf,
   isSubsetOf,
 } from "./ideals";
-import type { Frame, Interpreter } from "./interpreter";
+import type { Evaluator, Frame, OpContext } from "./context";
 import { MODULE_OPERATORS } from "./modules";
 import { pendingError } from "./pending";
-import { rational, ratAdd, ratCompare, ratDiv, ratMul, ratNeg, ratSub, type Rational } from "./rational";
+import { rational, ratAdd, ratCompare, ratDiv, ratMul, ratNeg, ratSub, type Rational } from "../algebra/index";
 import { ringText } from "./text";
 import { valueType } from "./value-type";
 import type { MatrixValue, RingValue, Value } from "./values";
-
-export interface OpContext {
-  readonly interp: Interpreter;
-  readonly frame: Frame;
-  readonly span: Span;
-  /// spans of the operands (the left one absent for prefix operators)
-  readonly leftSpan: Span;
-  readonly rightSpan: Span;
-}
 
 type BinaryImpl = (l: Value, r: Value, c: OpContext) => Value;
 type UnaryImpl = (v: Value, c: OpContext) => Value;
@@ -276,7 +267,7 @@ function rowFor(op: OperatorName, operands: readonly Value[], prefix: boolean): 
   );
 }
 
-export function applyBinary(interp: Interpreter, e: Binary, l: Value, r: Value, frame: Frame): Value {
+export function applyBinary(interp: Evaluator, e: Binary, l: Value, r: Value, frame: Frame): Value {
   const row = rowFor(e.op, [l, r], false);
   if (!row) throw runtime(`${e.op} does not apply to ${l.type} and ${r.type}`, e.opSpan);
   const impl = BINARY[operatorKey(row)];
@@ -284,7 +275,7 @@ export function applyBinary(interp: Interpreter, e: Binary, l: Value, r: Value, 
   return impl(l, r, { interp, frame, span: e.span, leftSpan: e.left.span, rightSpan: e.right.span });
 }
 
-export function applyUnary(interp: Interpreter, e: Unary, v: Value, frame: Frame): Value {
+export function applyUnary(interp: Evaluator, e: Unary, v: Value, frame: Frame): Value {
   const row = rowFor(e.op, [v], true);
   if (!row) throw runtime(`${e.op} does not apply to ${v.type}`, e.span);
   const impl = UNARY[operatorKey(row)];
@@ -294,7 +285,7 @@ export function applyUnary(interp: Interpreter, e: Unary, v: Value, frame: Frame
 
 /// Equality of values: numbers by value (2 == 4/2), polynomials in their common ring,
 /// ideals as ideals, lists and records item by item.
-export function valuesEqual(interp: Interpreter, a: Value, b: Value, span: Span): boolean {
+export function valuesEqual(interp: Evaluator, a: Value, b: Value, span: Span): boolean {
   const numeric = (v: Value) => v.type === "Int" || v.type === "Rat";
   if (numeric(a) && numeric(b)) return ratCompare(rat(a), rat(b)) === 0;
   if ((a.type === "Poly" || numeric(a)) && (b.type === "Poly" || numeric(b))) {
@@ -344,7 +335,7 @@ export function valuesEqual(interp: Interpreter, a: Value, b: Value, span: Span)
 
 
 /// a + b by the `+` rows, for `sum`.
-export function addValues(interp: Interpreter, a: Value, b: Value, span: Span, frame: Frame): Value {
+export function addValues(interp: Evaluator, a: Value, b: Value, span: Span, frame: Frame): Value {
   const row = rowFor("+", [a, b], false);
   const impl = row && BINARY[operatorKey(row)];
   if (!impl) throw runtime(`cannot add ${a.type} and ${b.type}`, span);

@@ -1,20 +1,19 @@
-/// Engine part 3 in the notation: resolutions over quotient rings (degree by degree, see
-/// lib/algebra/local), Poincaré series, socles, the residue field as a summand, Burch
+/// Engine part 3 in the notation: syzygies, presentations and pd over quotient rings
+/// (degree by degree, see lib/algebra/resolution/graded-quotient), Poincaré series, socles, the residue field as a summand, Burch
 /// index, minors along a resolution and eventual periods.
 import type { Span } from "../../grammar/ast";
 import {
   QQ,
   add,
   burchIndexOfRing,
-  componentAtOrigin,
   equals,
   localAlgebraAtOrigin,
+  minimalResolution,
   eventualPeriod,
   formatPoly,
   guessRational,
   ideal as engineIdeal,
   idealColon,
-  idealEquals,
   idealIsHomogeneous,
   idealIsSubset,
   idealSum,
@@ -23,34 +22,29 @@ import {
   monomial,
   quotientProperties,
   resolveDegreewise,
-  resolveLocalArtinian,
   projectiveDimension,
   resolveCoker,
-  resolveQuotient,
   truncatedSeries,
   variable,
   zero,
   type Ideal,
-  type LocalResolution,
   type ModulePresentation,
   type QuotientResolution,
 } from "../algebra/index";
-import type { CallContext } from "./builtins";
+import type { CallContext } from "./context";
 import { bound } from "./named-options";
 import { runtime } from "./errors";
 import { colonOf, groebnerOf, idealValue } from "./ideals";
 import { encodeValue } from "./json";
 import { moduleValue, presentationOverS } from "./modules";
 import { ascendingText } from "./series-text";
-import { list, type BettiEntry, type ComplexValue, type IdealValue, type MatrixValue, type ModuleValue, type RingValue, type SeriesValue, type Value } from "./values";
+import { entriesOf, firstInexact } from "./complex";
+import { requireCyclicAtOrigin, resolutionTarget } from "./resolution-input";
+import { list, type ComplexValue, type IdealValue, type MatrixValue, type ModuleValue, type RingValue, type SeriesValue, type Value } from "./values";
 
 const Int = (value: number | bigint): Value => ({ type: "Int", value: BigInt(value) });
 const Bool = (value: boolean): Value => ({ type: "Bool", value });
 const opts = (c: CallContext) => c.interp.session.compute;
-
-/// Differentials are kept as matrices while the resolution has at most this many matrix
-/// entries in all (beyond it C.map and C.minors say they were not kept).
-const MAX_MAP_ENTRIES = 200_000;
 
 /// A quotient ring m = A / I read as the cyclic A-module A/I (notation.md §5): the defining
 /// ideal J of A and the ideal I + J of m, both in the ambient polynomial ring S.
@@ -74,31 +68,6 @@ function requireGraded(M: CyclicModule, what: string, span: Span, c: CallContext
   }
 }
 
-
-/// The first column that a degree bound may have cut (its total and all later ones are
-/// lower bounds), or null when every column is exact.
-function firstInexact(r: QuotientResolution): number | null {
-  const k = r.columns.findIndex((col) => !col.complete);
-  return k < 0 ? null : k;
-}
-
-/// What a truncated resolution leaves out, said plainly.
-function truncationNote(r: QuotientResolution, length: number, shift: number): string | undefined {
-  const k = firstInexact(r);
-  if (k !== null) {
-    const d = r.exactThroughDegree - shift;
-    return `internal degrees above ${d} were not computed, so β_i for i ≥ ${k} are lower bounds (β_{i,j} with j ≤ ${d} are exact)`;
-  }
-  const last = r.columns[r.columns.length - 1];
-  if (last.total > 0) return `only homological degrees ≤ ${length} were computed; the resolution goes on`;
-  return undefined;
-}
-
-type BettiColumn = QuotientResolution["columns"][number];
-
-function entriesOf(columns: readonly BettiColumn[], shift = 0): BettiEntry[] {
-  return columns.flatMap((col) => col.entries.map((e) => [col.index, e.degree - shift, e.count] as const));
-}
 
 /// What to resolve over A = S/J: R/I given by I, or a presented module (generators moved
 /// up by `shift` into degrees ≥ 0; the Betti numbers are moved back).
@@ -178,57 +147,6 @@ function localSocle(M: CyclicModule, c: CallContext): { dim: number; splits: boo
   return { dim: socle.length, splits: A.rank([...mA, ...socle]) > A.rank(mA) };
 }
 
-/// A quotient A / I with A or I not homogeneous, read over the local ring of A at the origin
-/// (Artinian there: the origin an isolated point), ungraded, by linear algebra on that ring.
-function localResolution(M: CyclicModule, length: number, c: CallContext): { r: LocalResolution; sameRing: boolean; base: RingValue } {
-  const Q = componentAtOrigin(M.J, opts(c)).ideal;
-  return { r: resolveLocalArtinian(Q, idealSum(Q, M.I), length, opts(c)), sameRing: idealEquals(Q, M.J, opts(c)), base: M.base };
-}
-
-const LOCAL_NOTE = "over the local ring at the origin, ungraded: the Betti table lists β_i under internal degree 0";
-
-function localComplex(m: CyclicModule, length: number, c: CallContext): ComplexValue {
-  const { r, sameRing, base } = localResolution(m, length, c);
-  const note = r.complete ? LOCAL_NOTE : `only homological degrees ≤ ${length} were computed; the resolution goes on; ${LOCAL_NOTE}`;
-  const entries: BettiEntry[] = r.ranks.flatMap((b, i) => (b > 0 ? [[i, 0, b] as const] : []));
-  // the maps live over the local ring; they are maps over A itself only when A is that ring
-  const maps: MatrixValue[] | null = sameRing ? r.maps.map((rows, i) => ({ type: "Matrix", ring: base, rows, cols: r.ranks[i + 1] })) : null;
-  return { type: "Complex", ring: base, ranks: r.ranks, betti: { type: "BettiTable", entries, complete: r.complete, note }, complete: r.complete, maps, note };
-}
-
-/// resolve(M, length = n, degree = d) over a quotient ring A = S/J, degree by degree: M a
-/// quotient A / I (A itself a quotient) or a module presented over A.
-export function resolveOverQuotient(m: RingValue | ModuleValue, c: CallContext): ComplexValue {
-  const span = c.argSpans[0] ?? c.span;
-  const length = bound(c, "length", 1000);
-  if (length === undefined) {
-    throw runtime("over a quotient ring a resolution is usually infinite: give a bound, e.g. resolve(M, length = 6)", c.span);
-  }
-  const local = localCyclic(m, "resolve", c);
-  if (local) {
-    if (c.named.has("degree")) throw runtime("degree bounds need a graded ring; this one is read at the origin, ungraded", c.span);
-    return localComplex(local, length, c);
-  }
-  const t = m.type === "Ring" ? targetOfRing(m, span, "resolve", c) : targetOfModule(m, span, "resolve", c);
-  const degree = bound(c, "degree", 100_000);
-  const r = degreewise(t, length, degree, c, true, MAX_MAP_ENTRIES);
-  const complete = r.complete && r.columns[r.columns.length - 1].total === 0;
-  const note = complete ? undefined : truncationNote(r, length, t.shift);
-  const ranks = r.columns.map((col) => col.total);
-  const maps: MatrixValue[] | null = r.maps
-    ? r.maps.map((rows, i) => ({ type: "Matrix", ring: t.base, rows, cols: ranks[i + 1] }))
-    : null;
-  return {
-    type: "Complex",
-    ring: t.base,
-    ranks,
-    betti: { type: "BettiTable", entries: entriesOf(r.columns, t.shift), complete, ...(note ? { note } : {}) },
-    complete,
-    maps,
-    ...(note ? { note } : {}),
-  };
-}
-
 /// syzygy(M, p) over a quotient ring: Ω^p M = image of d_p ≅ coker(d_{p+1}), generated in
 /// the degrees of F_p. Needs the columns p and p + 1 exact.
 export function syzygyOverQuotient(m: RingValue | ModuleValue, p: number, c: CallContext): ModuleValue {
@@ -284,22 +202,25 @@ export function poincareValue([M]: readonly Value[], c: CallContext): Value {
   if (M.type !== "Ring" && M.type !== "Module") throw runtime(`poincare expects a Module or a quotient ring, got ${M.type}`, span);
   const terms = bound(c, "terms", 1000) ?? 10;
   if (terms < 1) throw runtime("terms must be at least 1", c.span);
-  if (M.type === "Ring" && !M.over) {
-    // over a polynomial ring the resolution is finite (part 2), every term exact
-    const mod = cyclicModule(M, c);
-    requireGraded(mod, "poincare", span, c);
-    const r = resolveQuotient(mod.I, { ...opts(c), length: terms - 1 });
-    return seriesValue(Array.from({ length: terms }, (_, i) => BigInt(r.ranks[i] ?? 0)), terms);
-  }
-  const local = localCyclic(M, "poincare", c);
-  if (local) {
-    const { r } = localResolution(local, terms - 1, c);
-    return seriesValue(r.ranks.map(BigInt), terms);
-  }
-  const t = M.type === "Ring" ? targetOfRing(M, span, "poincare", c) : targetOfModule(M, span, "poincare", c);
-  const r = degreewise(t, terms - 1, undefined, c, true);
-  const totals = Array.from({ length: terms }, (_, i) => BigInt(r.columns[i]?.total ?? 0));
-  return seriesValue(totals, firstInexact(r) ?? terms);
+  const t = resolutionTarget(M, c);
+  if (t.method === "schreyer" && M.type === "Ring") requireGraded(cyclicModule(M, c), "poincare", span, c);
+  requireCyclicAtOrigin(t, "poincare", c);
+  const partial = c.interp.session.partial;
+  const r = minimalResolution({
+    ...t.input,
+    length: terms - 1,
+    // degree by degree, each finished column streams as a one-column, still-incomplete Betti table
+    partial:
+      partial && t.method === "graded-quotient"
+        ? (col) => partial({ type: "BettiTable", entries: col.entries.map(([j, b]) => [col.index, j - t.shift, b] as const), complete: false, note: "the resolution is still running" })
+        : undefined,
+    opts: opts(c),
+  });
+  // over a polynomial ring the resolution is finite (part 2), every term exact
+  if (r.method === "schreyer") return seriesValue(Array.from({ length: terms }, (_, i) => BigInt(r.resolution.ranks[i] ?? 0)), terms);
+  if (r.method === "artinian") return seriesValue(r.resolution.ranks.map(BigInt), terms);
+  const totals = Array.from({ length: terms }, (_, i) => BigInt(r.resolution.columns[i]?.total ?? 0));
+  return seriesValue(totals, firstInexact(r.resolution) ?? terms);
 }
 
 function seriesValue(coeffs: readonly bigint[], exact: number): SeriesValue {

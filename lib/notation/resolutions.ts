@@ -1,51 +1,47 @@
-/// resolve(…) and the properties of complexes and Betti tables, over engine part 2: the
-/// minimal graded free resolution over a polynomial ring (Schreyer frame, minimised; see
-/// lib/algebra/resolution). Resolutions over quotient rings belong to engine part 3.
+/// resolve(…) and the properties of complexes and Betti tables. The engine's dispatcher
+/// (lib/algebra/resolution/dispatch.ts) chooses how to resolve: Schreyer over S, degree by
+/// degree over a graded quotient, or at the origin over a local Artinian ring.
 import type { Span } from "../../grammar/ast";
-import { bettiNumber, bettiTotals, ideal as engineIdeal, resolveQuotient, type Resolution } from "../algebra/index";
+import { bettiNumber, bettiTotals, minimalResolution } from "../algebra/index";
 import { runtime } from "./errors";
-import type { CallContext } from "./builtins";
+import type { CallContext } from "./context";
 import { bound } from "./named-options";
-import { resolveModule } from "./homology";
-import { resolveOverQuotient } from "./quotients";
-import type { BettiTableValue, ComplexValue, MatrixValue, RingValue, Value } from "./values";
+import { complexOf, gradedQuotientComplex, localComplex, MAX_MAP_ENTRIES } from "./complex";
+import { requireCyclicAtOrigin, resolutionTarget } from "./resolution-input";
+import type { BettiTableValue, ComplexValue, Value } from "./values";
 
 const Int = (value: number): Value => ({ type: "Int", value: BigInt(value) });
 
 
-/// The Complex value of a resolution; `shift`: how far the module was moved up in degree
-/// before resolving (its Betti numbers are moved back).
-export function complexOf(r: Resolution, ring: RingValue, shift = 0): ComplexValue {
-  const maps: MatrixValue[] = [];
-  for (let i = 1; i <= r.length; i++) {
-    const rows = r.map(i);
-    maps.push({ type: "Matrix", ring, rows, cols: r.ranks[i] ?? 0 });
-  }
-  const entries = shift === 0 ? r.betti.entries : r.betti.entries.map(([i, j, b]) => [i, j - shift, b] as const);
-  const betti: BettiTableValue = { type: "BettiTable", entries, complete: r.complete };
-  return { type: "Complex", ring, ranks: r.ranks, betti, complete: r.complete, maps };
-}
-
-/// resolve(A / I) for A a polynomial ring: the resolution of the cyclic module S/I over S.
+/// resolve(M, length = n, degree = d): M a module or a quotient ring A / I read as the
+/// cyclic module A/I. The engine's dispatcher chooses the method; here its options are
+/// checked (with the user's spans) and its result rendered.
 export function resolveValue([m]: readonly Value[], c: CallContext): Value {
-  if (m.type === "Module") return resolveModule(m, c);
-  if (m.type !== "Ring") throw runtime(`resolve expects a Module or a quotient ring, got ${m.type}`, c.argSpans[0] ?? c.span);
-  // over a quotient ring (the ring this quotient was formed from is itself one): engine part 3
-  if (m.over) return resolveOverQuotient(m, c);
-  const S = c.interp.session.rings.ambient(m);
+  if (m.type !== "Module" && m.type !== "Ring") throw runtime(`resolve expects a Module or a quotient ring, got ${m.type}`, c.argSpans[0] ?? c.span);
+  const t = resolutionTarget(m, c);
   const length = bound(c, "length", 1000);
+  if (t.method !== "schreyer" && length === undefined) {
+    throw runtime("over a quotient ring a resolution is usually infinite: give a bound, e.g. resolve(M, length = 6)", c.span);
+  }
+  requireCyclicAtOrigin(t, "resolve", c);
+  if (t.method === "artinian" && c.named.has("degree")) throw runtime("degree bounds need a graded ring; this one is read at the origin, ungraded", c.span);
   const degree = bound(c, "degree", 100_000);
   const partial = c.interp.session.partial;
-  const res = resolveQuotient(engineIdeal(m.poly, m.ideal), {
-    ...c.interp.session.compute,
-    ...(length !== undefined ? { length } : {}),
-    ...(degree !== undefined ? { degree } : {}),
-    // each finished column streams as a one-column, still-incomplete Betti table
+  // each finished column streams as a one-column, still-incomplete Betti table
+  const running = t.method === "graded-quotient" ? { note: "the resolution is still running" } : {};
+  const r = minimalResolution({
+    ...t.input,
+    length,
+    degree: degree === undefined ? undefined : degree + t.shift,
+    keepMaps: MAX_MAP_ENTRIES,
     partial: partial
-      ? (col) => partial({ type: "BettiTable", entries: col.entries.map(([j, b]) => [col.i, j, b] as const), complete: false })
+      ? (col) => partial({ type: "BettiTable", entries: col.entries.map(([j, b]) => [col.index, j - t.shift, b] as const), complete: false, ...running })
       : undefined,
+    opts: c.interp.session.compute,
   });
-  return complexOf(res, S);
+  if (r.method === "schreyer") return complexOf(r.resolution, t.base, t.shift);
+  if (r.method === "graded-quotient") return gradedQuotientComplex(r.resolution, t.base, length!, t.shift);
+  return localComplex(r.resolution, r.overGivenRing, t.base, length!);
 }
 
 function complex(v: Value): ComplexValue {

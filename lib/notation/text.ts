@@ -1,7 +1,7 @@
 /// The human "text" of every value (notation.md §9): notation-like, one line except tables.
 import { formatPoly, type Field, type OrderSpec } from "../algebra/index";
 import { ascendingText, hilbertText } from "./series-text";
-import { ratToString } from "./rational";
+import { ratToString } from "../algebra/index";
 import type { BettiTableValue, MatrixValue, ModuleValue, RingValue, Value } from "./values";
 
 export function fieldText(f: Field): string {

@@ -1,7 +1,7 @@
 /// Runtime values of the notation, one variant per type of notation.md §8.
 /// Engine objects (rings, polynomials) are wrapped, never copied; numbers are exact.
 import type { Field, HilbertSeries, Poly, PolyRing } from "../algebra/index";
-import type { Rational } from "./rational";
+import type { Rational } from "../algebra/index";
 
 /// A ring of the notation: a polynomial ring S (its field, variables, degrees, order)
 /// together with a defining ideal of S; the ideal is empty for S itself.

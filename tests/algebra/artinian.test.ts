@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import * as A from "../../lib/algebra/index";
-import { componentAtOrigin, FiniteAlgebra, localAlgebraAtOrigin, minimalGeneratorCount, minimalGeneratorPositions, resolveLocalArtinian } from "../../lib/algebra/artinian/index";
-import { resolveDegreewise } from "../../lib/algebra/local/index";
+import { componentAtOrigin, FiniteAlgebra, localAlgebraAtOrigin, minimalGeneratorCount, minimalGeneratorPositions } from "../../lib/algebra/artinian/index";
+import { resolveLocalArtinian } from "../../lib/algebra/resolution/artinian/resolve";
+import { resolveDegreewise } from "../../lib/algebra/resolution/graded-quotient/index";
 import { binomial, maximal, ring, vars } from "./local-helpers";
 
 describe("Artinian local rings as finite-dimensional algebras", () => {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import * as A from "../../lib/algebra/index";
 import { burchIdeal, burchIndexOfIdeal, burchIndexOfRing } from "../../lib/algebra/burch/index";
-import { residueSplitsFromSyzygy } from "../../lib/algebra/local/index";
+import { residueSplitsFromSyzygy } from "../../lib/algebra/resolution/graded-quotient/index";
 import { maximal, ring, vars } from "./local-helpers";
 
 describe("Burch ideal and index", () => {

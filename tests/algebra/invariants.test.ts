@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { formatPoly, ideal, isZero, parsePoly, QQ, type Poly, type PolyRing } from "@/lib/algebra";
 import { det, isRegularSequence, koszulComplex, minors, pfaffians, serreMultiplicity, torLengths, torLengthsOf } from "@/lib/algebra/invariants";
-import { bettiTotals, resolveCoker, resolveQuotient } from "@/lib/algebra/resolution";
+import { bettiTotals, resolveCoker, resolveQuotient } from "@/lib/algebra/resolution/schreyer";
 import { alternating, genericMatrix, GF, matMul, randomForm, ringOf, rng, vars } from "./resolution-helpers";
 
 function idealOf(R: PolyRing, gens: string[]) {

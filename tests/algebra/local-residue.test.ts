@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import * as A from "../../lib/algebra/index";
-import { bettiTotalsOf, cyclicResolution, residueFieldResolution, resolveDegreewise } from "../../lib/algebra/local/index";
+import { bettiTotalsOf, cyclicResolution, residueFieldResolution, resolveDegreewise } from "../../lib/algebra/resolution/graded-quotient/index";
 import { expandRational, polyPowZ } from "../../lib/algebra/series/index";
 import { binomial, maximal, randomForm, ring, seeded, vars } from "./local-helpers";
 

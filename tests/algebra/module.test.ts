@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { add, ideal, idealEquals, idealGroebnerBasis, idealIntersection, isZero, leadExponents, mul, parsePoly, QQ, type Poly, zero } from "@/lib/algebra";
 import { freeModule, moduleGroebnerBasis, moduleHilbertSeries, moduleSyzygies } from "@/lib/algebra/module";
-import { resolutionHilbertSeries, resolveCoker } from "@/lib/algebra/resolution";
+import { resolutionHilbertSeries, resolveCoker } from "@/lib/algebra/resolution/schreyer";
 import { GF, randomForm, ringOf, rng, vars } from "./resolution-helpers";
 
 describe("Gröbner bases of submodules", () => {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { ideal, idealHilbertSeries, isZero, leadExponents, monomial, neg, parsePoly, QQ, type Poly, type PolyRing, zero } from "@/lib/algebra";
 import { freeModule, moduleGroebnerBasis } from "@/lib/algebra/module";
-import { bettiAlternatingSum, bettiNumber, resolutionHilbertSeries, resolveCoker, resolveQuotient, syzygyPresentation } from "@/lib/algebra/resolution";
+import { bettiAlternatingSum, bettiNumber, resolutionHilbertSeries, resolveCoker, resolveQuotient, syzygyPresentation } from "@/lib/algebra/resolution/schreyer";
 import { expectMinimalComplex, GF, randomForm, ringOf, rng, vars } from "./resolution-helpers";
 
 describe("resolutions of cokernels of homogeneous matrices", () => {

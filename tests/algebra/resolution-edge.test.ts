@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { ideal, parsePoly, QQ } from "@/lib/algebra";
-import { depthByAuslanderBuchsbaum, projectiveDimension, resolveCoker, resolveQuotient } from "@/lib/algebra/resolution";
+import { depthByAuslanderBuchsbaum, projectiveDimension, resolveCoker, resolveQuotient } from "@/lib/algebra/resolution/schreyer";
 import { expectMinimalComplex, GF, ringOf } from "./resolution-helpers";
 
 describe("edge cases", () => {

@@ -19,7 +19,7 @@ import {
   zero,
   type Field,
 } from "@/lib/algebra";
-import type { Resolution } from "@/lib/algebra/resolution";
+import type { Resolution } from "@/lib/algebra/resolution/schreyer";
 
 export const GF = gf(32003);
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { AlgebraError, ideal, idealGroebnerBasis } from "@/lib/algebra";
-import { type BettiColumn, resolveQuotient } from "@/lib/algebra/resolution";
+import { type BettiColumn, resolveQuotient } from "@/lib/algebra/resolution/schreyer";
 import { binom, GF, ringOf, vars } from "./resolution-helpers";
 
 function koszulIdeal(n: number) {

@@ -21,7 +21,7 @@ import {
   projectiveDimension,
   regularity,
   resolveQuotient,
-} from "@/lib/algebra/resolution";
+} from "@/lib/algebra/resolution/schreyer";
 import { expectMinimalComplex, GF, randomForm, ringOf, rng } from "./resolution-helpers";
 
 /// Random homogeneous ideals: a few sparse forms of degrees 2–3.

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { ideal, parsePoly, type PolyRing } from "@/lib/algebra";
 import { pfaffians } from "@/lib/algebra/invariants";
-import { quotientProperties } from "@/lib/algebra/resolution";
+import { quotientProperties } from "@/lib/algebra/resolution/schreyer";
 import { alternating, GF, ringOf } from "./resolution-helpers";
 
 function I(R: PolyRing, gens: string[]) {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { add, ideal, idealEquals, idealHilbertSeries, monomial, parsePoly, polyRing, pow, QQ, variable } from "@/lib/algebra";
 import { minors, pfaffians } from "@/lib/algebra/invariants";
-import { bettiAlternatingSum, bettiNumber, bettiTotals, resolveQuotient } from "@/lib/algebra/resolution";
+import { bettiAlternatingSum, bettiNumber, bettiTotals, resolveQuotient } from "@/lib/algebra/resolution/schreyer";
 import { alternating, binom, expectMinimalComplex, genericMatrix, GF, randomForm, ringOf, rng, vars } from "./resolution-helpers";
 
 const FIELDS = [

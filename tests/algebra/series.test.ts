@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import * as A from "../../lib/algebra/index";
-import { bettiTotalsOf, residueFieldResolution } from "../../lib/algebra/local/index";
+import { bettiTotalsOf, residueFieldResolution } from "../../lib/algebra/resolution/graded-quotient/index";
 import { eventualPeriod, guessRational, poincareSeries, polyPowZ, sameRationalFunction, seriesAt, truncatedSeries } from "../../lib/algebra/series/index";
 import { maximal, randomForm, ring, seeded } from "./local-helpers";
 

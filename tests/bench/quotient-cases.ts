@@ -2,7 +2,7 @@
 // the `cases` list in tests/bench/cases.ts (import { quotientCases } from "./quotient-cases").
 import * as A from "../../lib/algebra/index";
 import { burchIndexOfRing } from "../../lib/algebra/burch/index";
-import { residueFieldResolution } from "../../lib/algebra/local/index";
+import { residueFieldResolution } from "../../lib/algebra/resolution/graded-quotient/index";
 import { randomForm } from "../algebra/local-helpers";
 import type { BenchCase } from "./cases";
 

@@ -2,7 +2,7 @@
 // the `cases` list in tests/bench/cases.ts (import { resolutionCases } from "./resolution-cases").
 import * as A from "../../lib/algebra/index";
 import { minors, pfaffians } from "../../lib/algebra/invariants/index";
-import { bettiTotals, resolveQuotient } from "../../lib/algebra/resolution/index";
+import { bettiTotals, resolveQuotient } from "../../lib/algebra/resolution/schreyer/index";
 import type { BenchCase } from "./cases";
 
 const F = A.gf(32003);

@@ -339,7 +339,7 @@ describe("bad inputs get exact errors", () => {
   });
 });
 
-describe("the example of notation.md §8", () => {
+describe("the example of grammar/README.md §8", () => {
   const env: Env = { bindings: { S: { kind: "Ring", vars: ["x", "y", "z", "w"] }, I: { kind: "Ideal" } }, currentRing: "S" };
 
   test("burch_index of an Ideal, with S and I from earlier cells", () => {

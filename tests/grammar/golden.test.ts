@@ -1,4 +1,4 @@
-/// Golden tests: every construct of notation.md v1 parses to the expected tree and
+/// Golden tests: every construct of the notation v1 (grammar/README.md) parses to the expected tree and
 /// checks to the expected type. Trees are written in the compact form of sexpr.ts.
 import { describe, expect, test } from "vitest";
 import { analyze, formatError, typeToString } from "@/grammar/index";
@@ -168,7 +168,7 @@ function lastStatementType(source: string) {
   return { a, s, type: e ? a.types.get(e) : undefined };
 }
 
-describe("every construct of notation.md parses and checks", () => {
+describe("every construct of the notation (grammar/README.md) parses and checks", () => {
   test.each(CASES)("%s", (_section, prelude, statement, tree, type) => {
     const { a, s, type: t } = lastStatementType(prelude + statement);
     expect(a.errors.map(formatError)).toEqual([]);

@@ -1,4 +1,4 @@
-/// The signature table is complete for notation.md v1 and consistent: every name of
+/// The signature table is complete for the notation v1 (grammar/README.md) and consistent: every name of
 /// the reference is there, every example in it type-checks, every property resolves on
 /// a value of its type to the declared result.
 import { describe, expect, test } from "vitest";
@@ -73,17 +73,17 @@ describe("the signature table", () => {
     expect(analyze(PRELUDE).errors.map(formatError)).toEqual([]);
   });
 
-  test("has every function of notation.md", () => {
+  test("has every function of the notation (grammar/README.md §6)", () => {
     for (const f of NOTATION_FUNCTIONS) expect(lookupFunction(f), f).toBeDefined();
   });
 
-  test("has every property of notation.md", () => {
+  test("has every property of the notation (grammar/README.md §6)", () => {
     for (const [owner, names] of NOTATION_PROPERTIES) {
       for (const n of names) expect(lookupProperty(owner, n), `${owner}.${n}`).toBeDefined();
     }
   });
 
-  test("has the operators of notation.md", () => {
+  test("has the operators of the notation (grammar/README.md §5)", () => {
     const ops = new Set(OPERATORS.map((o) => o.op));
     for (const o of ["+", "-", "*", "/", "^", "&", ":", "==", "!=", "<", "<=", ">", ">=", "in", "and", "or", "not", "..", "index"]) {
       expect(ops.has(o as never), o).toBe(true);

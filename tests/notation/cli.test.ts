@@ -1,4 +1,4 @@
-// The real CLI (notation.md §10), spawned as a user runs it: exit status 0/1/2, text
+// The real CLI (lib/cli/README.md), spawned as a user runs it: exit status 0/1/2, text
 // output, and --json lines that parse and match the §9 encoding.
 import { spawn } from "node:child_process";
 import { mkdtempSync, writeFileSync } from "node:fs";

@@ -1,4 +1,4 @@
-// The evaluator on every part-1 construct of notation.md, with values checked against
+// The evaluator on every part-1 construct of the notation (grammar/README.md), with values checked against
 // facts from outside the project (each cited beside its check).
 import { describe, expect, it } from "vitest";
 import { evaluate, type Binding, type EvalEvent, type EvalOutcome } from "@/lib/notation/evaluate";
@@ -57,7 +57,7 @@ describe("rings and polynomials", () => {
   });
 });
 
-describe("ideals (notation.md §4)", () => {
+describe("ideals (grammar/README.md §5)", () => {
   const S = "S := Q[x, y, z, w]\nI := <x*z, x*w, y*z, y*w>\n";
 
   it("membership: checkable by hand for a monomial ideal", async () => {
@@ -123,7 +123,7 @@ describe("ideals (notation.md §4)", () => {
   });
 });
 
-describe("Hilbert series (notation.md §6)", () => {
+describe("Hilbert series (grammar/README.md §6)", () => {
   it("of a complete intersection: ∏(1 − t^{d_i}) / (1 − t)^n (checks.md row 4, common practice)", async () => {
     // degrees 2 and 3 in 3 variables: (1 − t^2)(1 − t^3) = 1 − t^2 − t^3 + t^5
     const H = await last("S := Q[x, y, z]\n(S / <x^2, y^3>).hilbert");

@@ -1,9 +1,9 @@
-// The JSON encoding of every value type, exactly as notation.md §9, and the round trip
+// The JSON encoding of every value type, exactly as lib/notation/README.md ("The JSON encoding"), and the round trip
 // encode → decode → encode (what restoring a saved named object relies on).
 import { describe, expect, it } from "vitest";
 import { QQ, gf, hilbertSeriesFromNumerator, parsePoly } from "@/lib/algebra/index";
 import { DecodeError, ValueJson, ValueJsonSchemas, decodeValue, encodeValue, type ValueJson as Json } from "@/lib/notation/json";
-import { rational } from "@/lib/notation/rational";
+import { rational } from "@/lib/algebra";
 import { RingRegistry } from "@/lib/notation/rings";
 import type { FunctionValue, RingValue, Value } from "@/lib/notation/values";
 
@@ -213,7 +213,7 @@ it("Error: kind, message and a 1-based span, with type and text", async () => {
   const { ErrorJson } = await import("@/lib/notation/json");
   const span = { from: { line: 1, col: 13, offset: 12 }, to: { line: 1, col: 14, offset: 13 } };
   const e = errorJson("type", "burch_index expects a Ring, got Ideal — did you mean burch_index(S / I)?", span);
-  // the example of notation.md §8
+  // the example of grammar/README.md §8
   expect(e).toEqual({
     type: "Error",
     text: "type error at 1:13-1:14: burch_index expects a Ring, got Ideal — did you mean burch_index(S / I)?",

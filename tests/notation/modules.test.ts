@@ -1,4 +1,4 @@
-// Modules end to end through the evaluator (notation.md §5–§6, engine part 2): free modules,
+// Modules end to end through the evaluator (grammar/README.md §5–§6, engine part 2): free modules,
 // coker, image, ker, module(I), quotient rings and R.residue as modules, their invariants,
 // resolve of a module, syzygy, koszul, tor, ext, tor_lengths and serre. Each expected value
 // names its source.

@@ -1,4 +1,4 @@
-// Every name of notation.md type-checks now; those whose engine part (2 or 3) has not
+// Every name of the signature table (grammar/signatures.ts) type-checks now; those whose engine part (2 or 3) has not
 // landed end with a runtime Error naming the part. This test LISTS them, compared both
 // ways with the signature table and the evaluator's tables of implementations: it fails
 // when a name is implemented but still listed here, or is neither implemented nor listed.

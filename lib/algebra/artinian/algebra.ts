@@ -1,8 +1,11 @@
 import { runtimeError } from "../errors";
 import { coeffsOf, type Coeffs } from "../field/coeffs";
 import { Echelon, kernelBasis } from "../graded/echelon";
-import { type Ideal, idealGroebnerBasis } from "../ideal";
-import { leadExponents, monomial, normalForm, type Poly, type PolyRing, terms } from "../index";
+import { type Ideal, idealGroebnerBasis } from "../ideal/ideal";
+import { leadExponents, monomial, terms } from "../poly/checked";
+import { normalForm } from "../groebner/checked";
+import { type Poly } from "../poly/poly";
+import { type PolyRing } from "../poly/ring";
 import { checkLimit, checkpoint, type ComputeOptions } from "../options";
 
 /// A finite-dimensional algebra A = S/Q for an ideal Q of finite colength: the standard

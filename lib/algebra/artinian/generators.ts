@@ -1,4 +1,4 @@
-import type { Poly } from "../index";
+import type { Poly } from "../poly/poly";
 import { Echelon } from "../graded/echelon";
 import type { FiniteAlgebra } from "./algebra";
 

@@ -1,6 +1,8 @@
 import { runtimeError } from "../errors";
-import { type Ideal, ideal, idealContains, idealPower, idealSum } from "../ideal";
-import { one, variable } from "../index";
+import { type Ideal, ideal } from "../ideal/ideal";
+import { idealContains } from "../ideal/compare";
+import { idealPower, idealSum } from "../ideal/arith";
+import { one, variable } from "../poly/checked";
 import { checkpoint, type ComputeOptions } from "../options";
 import { FiniteAlgebra } from "./algebra";
 

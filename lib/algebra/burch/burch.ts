@@ -1,8 +1,14 @@
 import { runtimeError } from "../errors";
 import { componentAtOrigin, originIdeal } from "../artinian/origin";
 import { FiniteAlgebra } from "../artinian/algebra";
-import { type Ideal, idealColon, idealColonElement, idealEquals, idealIsHomogeneous, idealIsSubset, idealPower, idealProduct } from "../ideal";
-import { add, constant, formatPoly, mul, type Poly, type PolyRing, variable, zero } from "../index";
+import { type Ideal } from "../ideal/ideal";
+import { idealColon, idealColonElement } from "../ideal/colon";
+import { idealEquals, idealIsSubset } from "../ideal/compare";
+import { idealIsHomogeneous } from "../ideal/invariants";
+import { idealPower, idealProduct } from "../ideal/arith";
+import { add, constant, formatPoly, mul, variable, zero } from "../poly/checked";
+import { type Poly } from "../poly/poly";
+import { type PolyRing } from "../poly/ring";
 import { checkpoint, type ComputeOptions } from "../options";
 import { cutByLinearForm } from "./substitute";
 

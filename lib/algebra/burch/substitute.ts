@@ -1,5 +1,7 @@
-import { add, constant, mul, pow, polyRing, type Poly, type PolyRing, terms, variable, zero } from "../index";
-import { ideal, type Ideal } from "../ideal";
+import { add, constant, mul, pow, terms, variable, zero } from "../poly/checked";
+import { polyRing, type PolyRing } from "../poly/ring";
+import { type Poly } from "../poly/poly";
+import { ideal, type Ideal } from "../ideal/ideal";
 import { rat, ratMul, ratNeg, type Rat } from "../field/rational";
 
 /// Reading S/(I + (ℓ)) as S'/I' for a linear form ℓ = Σ a_i x_i with a_c ≠ 0: S' drops x_c

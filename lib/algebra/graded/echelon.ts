@@ -1,4 +1,4 @@
-import type { Coeffs } from "./engine";
+import type { Coeffs } from "../field/coeffs";
 
 /// A semi-echelon basis of a subspace of K^dim: each stored row has a pivot equal to 1
 /// and is zero at the pivots of the rows stored before it, so reducing a vector against

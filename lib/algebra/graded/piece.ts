@@ -1,5 +1,10 @@
 import { runtimeError } from "../errors";
-import { coeffsOf, type Coeffs, type Ideal, idealGroebnerBasis, leadExponents, monomial, normalForm, type Poly, type PolyRing, terms } from "./engine";
+import { coeffsOf, type Coeffs } from "../field/coeffs";
+import { type Ideal, idealGroebnerBasis } from "../ideal/ideal";
+import { leadExponents, monomial, terms } from "../poly/checked";
+import { normalForm } from "../groebner/checked";
+import { type Poly } from "../poly/poly";
+import { type PolyRing } from "../poly/ring";
 
 /// A sparse column: the image of one basis element as (index, coefficient) pairs.
 export type SparseColumn<C> = { idx: number[]; val: C[] };

@@ -1,8 +1,8 @@
-import type { RationalNumber } from "./rational";
+import type { Rational } from "../field/rational-number";
 
 /// A polynomial in one variable in the canonical text style of notation.md §9: terms in
 /// decreasing degree, `*` and `^`, no spaces, coefficient 1 omitted ("-t^3+3*t^2-3*t+1").
-export function formatUnivariate(coeffs: readonly (bigint | RationalNumber)[], variable = "t"): string {
+export function formatUnivariate(coeffs: readonly (bigint | Rational)[], variable = "t"): string {
   let out = "";
   for (let i = coeffs.length - 1; i >= 0; i--) {
     const c = coeffs[i];

@@ -1,6 +1,6 @@
 export type { Exponents } from "./monomials";
 export { minimalMonomialGenerators, monomialDivides, monomialLcm, monomialColon } from "./monomials";
-export type { RationalNumber } from "./rational";
+
 export type { HilbertSeries } from "./series";
 export {
   hilbertSeriesOfMonomials,

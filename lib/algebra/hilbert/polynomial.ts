@@ -1,11 +1,11 @@
 import { runtimeError } from "../errors";
-import { type RationalNumber, rationalOf } from "./rational";
+import { type Rational, rational } from "../field/rational-number";
 import { type HilbertSeries, isStandardGrading } from "./series";
 
 /// The Hilbert polynomial P with P(d) = dim_k (S/I)_d for all large d, as rational
 /// coefficients of d^0, d^1, … (empty for the zero polynomial). Standard grading only:
 /// with other degrees the Hilbert function is in general a quasi-polynomial.
-export function hilbertPolynomial(hs: HilbertSeries): RationalNumber[] {
+export function hilbertPolynomial(hs: HilbertSeries): Rational[] {
   if (!isStandardGrading(hs.weights)) {
     throw runtimeError(
       "hilbertPolynomial",
@@ -25,7 +25,7 @@ export function hilbertPolynomial(hs: HilbertSeries): RationalNumber[] {
   });
   let factorial = 1n;
   for (let i = 2n; i <= BigInt(D - 1); i++) factorial *= i;
-  const coeffs = sum.map((c) => rationalOf(c, factorial));
+  const coeffs = sum.map((c) => rational(c, factorial));
   while (coeffs.length > 0 && coeffs[coeffs.length - 1].num === 0n) coeffs.pop();
   return coeffs;
 }
@@ -41,7 +41,7 @@ function mulLinear(p: readonly bigint[], a: bigint): bigint[] {
 }
 
 /// P(d) for the polynomial returned by hilbertPolynomial.
-export function evaluateHilbertPolynomial(coeffs: readonly RationalNumber[], d: bigint): RationalNumber {
+export function evaluateHilbertPolynomial(coeffs: readonly Rational[], d: bigint): Rational {
   let num = 0n;
   let den = 1n;
   for (let i = coeffs.length - 1; i >= 0; i--) {
@@ -49,9 +49,9 @@ export function evaluateHilbertPolynomial(coeffs: readonly RationalNumber[], d: 
     const c = coeffs[i];
     num = num * d * c.den + c.num * den;
     den = den * c.den;
-    const r = rationalOf(num, den);
+    const r = rational(num, den);
     num = r.num;
     den = r.den;
   }
-  return rationalOf(num, den);
+  return rational(num, den);
 }

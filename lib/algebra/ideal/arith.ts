@@ -1,6 +1,7 @@
 import { runtimeError } from "../errors";
 import { checkpoint, checkLimit, type ComputeOptions } from "../options";
-import { type Poly, mul, one } from "./engine";
+import { type Poly } from "../poly/poly";
+import { mul, one } from "../poly/checked";
 import { commonRing, ideal, type Ideal } from "./ideal";
 
 /// I + J.

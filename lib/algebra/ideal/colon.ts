@@ -1,6 +1,7 @@
 import { runtimeError } from "../errors";
 import type { ComputeOptions } from "../options";
-import { type Poly, isZero, one } from "./engine";
+import { type Poly } from "../poly/poly";
+import { isZero, one } from "../poly/checked";
 import { exactQuotient } from "./divide";
 import { commonRing, ideal, type Ideal } from "./ideal";
 import { idealIntersection, idealIntersectionOf } from "./intersect";

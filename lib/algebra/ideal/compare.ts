@@ -1,6 +1,8 @@
 import type { ComputeOptions } from "../options";
 import { checkpoint } from "../options";
-import { type Poly, isZero, normalForm } from "./engine";
+import { type Poly } from "../poly/poly";
+import { isZero } from "../poly/checked";
+import { normalForm } from "../groebner/checked";
 import { commonRing, idealGroebnerBasis, type Ideal } from "./ideal";
 
 /// f ∈ I: the normal form of f modulo a Gröbner basis of I vanishes.

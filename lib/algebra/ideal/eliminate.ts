@@ -1,6 +1,8 @@
 import { runtimeError } from "../errors";
 import type { ComputeOptions } from "../options";
-import { type Poly, type PolyRing, groebnerBasis } from "./engine";
+import { type Poly } from "../poly/poly";
+import { type PolyRing } from "../poly/ring";
+import { groebnerBasis } from "../groebner/checked";
 import { ideal, idealFromBasis, type Ideal } from "./ideal";
 import { avoidsVariables, eliminationRing, identityMap, mapPoly, pullbackPoly } from "./transfer";
 

@@ -1,7 +1,10 @@
 import { runtimeError } from "../errors";
 import { HEAD, monoIsOne } from "../monomial/monomial";
 import type { ComputeOptions } from "../options";
-import { Poly, type PolyRing, groebnerBasis, isZero, sameRing } from "./engine";
+import { Poly } from "../poly/poly";
+import { type PolyRing, sameRing } from "../poly/ring";
+import { groebnerBasis } from "../groebner/checked";
+import { isZero } from "../poly/checked";
 
 /// An ideal of a polynomial ring, given by generators. Immutable; its reduced Gröbner
 /// basis (in the ring's order) is computed on first use and cached.

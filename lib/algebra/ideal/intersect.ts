@@ -1,6 +1,6 @@
 import { runtimeError } from "../errors";
 import { checkpoint, type ComputeOptions } from "../options";
-import { mul, one, sub, variable } from "./engine";
+import { mul, one, sub, variable } from "../poly/checked";
 import { eliminatedIdeal, eliminateTags, embedInTagged } from "./eliminate";
 import { commonRing, ideal, type Ideal } from "./ideal";
 import { taggedRing } from "./transfer";

@@ -1,6 +1,10 @@
-import { type HilbertSeries, hilbertSeriesOfMonomials, type RationalNumber } from "../hilbert";
+import { type HilbertSeries, hilbertSeriesOfMonomials } from "../hilbert/series";
+import { type Rational } from "../field/rational-number";
 import type { ComputeOptions } from "../options";
-import { type Poly, type PolyRing, groebnerBasis, isHomogeneous, leadExponents, monomial } from "./engine";
+import { type Poly } from "../poly/poly";
+import { type PolyRing } from "../poly/ring";
+import { groebnerBasis } from "../groebner/checked";
+import { isHomogeneous, leadExponents, monomial } from "../poly/checked";
 import { ideal, idealGroebnerBasis, type Ideal } from "./ideal";
 import { grevlexRing, identityMap, mapPoly } from "./transfer";
 
@@ -59,6 +63,6 @@ export function idealCodimension(I: Ideal, opts?: ComputeOptions): number {
 
 /// The degree (multiplicity) of S/I; an integer for the standard grading, and for a
 /// zero-dimensional ideal the number of points counted with multiplicity (0 for the unit ideal).
-export function idealDegree(I: Ideal, opts?: ComputeOptions): RationalNumber {
+export function idealDegree(I: Ideal, opts?: ComputeOptions): Rational {
   return idealHilbertSeries(I, opts).degree;
 }

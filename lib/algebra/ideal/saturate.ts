@@ -1,6 +1,7 @@
 import { runtimeError } from "../errors";
 import type { ComputeOptions } from "../options";
-import { type Poly, isZero, mul, one, sub, variable } from "./engine";
+import { type Poly } from "../poly/poly";
+import { isZero, mul, one, sub, variable } from "../poly/checked";
 import { eliminatedIdeal, eliminateTags, embedInTagged } from "./eliminate";
 import { commonRing, ideal, type Ideal } from "./ideal";
 import { idealIntersectionOf } from "./intersect";

@@ -6,7 +6,7 @@ import { divisorsOf, heapDivide, makeStream, type Divisors } from "../module/div
 import { moduleGroebner } from "../module/groebner";
 import { termOverPosition, type ModuleOrder } from "../module/order";
 import { vecFromPolys, type Vec } from "../module/vector";
-import { scalarRank } from "../resolution/scalar";
+import { scalarRank } from "../resolution/schreyer/scalar";
 
 /// A graded module N = G_0 / U given by a presentation, with a Gröbner basis of U ready for
 /// normal forms: a k-basis of N_d is the standard terms u·e_c of degree d (Macaulay).

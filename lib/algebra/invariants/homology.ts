@@ -4,9 +4,9 @@ import { checkpoint, type ComputeOptions } from "../options";
 import { constPoly } from "../poly/arith";
 import { makePoly, type Poly } from "../poly/poly";
 import { ringCtx, type PolyRing } from "../poly/ring";
-import { columnDegrees, subquotientPresentation } from "../resolution/presentation";
-import { resolveCoker, type Resolution } from "../resolution/resolve";
-import type { Presentation } from "../resolution/syzygy";
+import { columnDegrees, subquotientPresentation } from "../resolution/schreyer/presentation";
+import { resolveCoker, type Resolution } from "../resolution/schreyer/resolve";
+import type { Presentation } from "../resolution/schreyer/syzygy";
 
 type Matrix = Poly[][];
 

@@ -1,5 +1,9 @@
 import { runtimeError } from "../errors";
-import { degree, ideal, idealCodimension, isHomogeneous, isZero, neg, zero, type Poly, type PolyRing } from "../index";
+import { degree, isHomogeneous, isZero, neg, zero } from "../poly/checked";
+import { ideal } from "../ideal/ideal";
+import { idealCodimension } from "../ideal/invariants";
+import { type Poly } from "../poly/poly";
+import { type PolyRing } from "../poly/ring";
 import type { ComputeOptions } from "../options";
 
 /// A complex of graded free modules F_0 ← F_1 ← … ← F_length given by its differentials.

@@ -1,11 +1,13 @@
 import { runtimeError } from "../errors";
-import type { Ideal } from "../ideal";
+import type { Ideal } from "../ideal/ideal";
 import { freeModule } from "../module/free";
 import { moduleHilbertSeries } from "../module/hilbert";
 import type { ComputeOptions } from "../options";
 import { makePoly, type Poly } from "../poly/poly";
 import { ringCtx, sameRing, type PolyRing } from "../poly/ring";
-import { regularity, resolveCoker, type Presentation } from "../resolution";
+import { regularity } from "../resolution/schreyer/invariants";
+import { resolveCoker } from "../resolution/schreyer/resolve";
+import { type Presentation } from "../resolution/schreyer/syzygy";
 import { gradedModule, gradedPiece, gradedRank } from "./graded";
 
 /// The presentation of S/I: the 1×m matrix of I's generators.

@@ -1,5 +1,5 @@
 import { runtimeError } from "../errors";
-import { hilbertSeriesFromNumerator, hilbertSeriesOfMonomials, type HilbertSeries } from "../hilbert";
+import { hilbertSeriesFromNumerator, hilbertSeriesOfMonomials, type HilbertSeries } from "../hilbert/series";
 import { monoExps } from "../monomial/monomial";
 import type { ComputeOptions } from "../options";
 import { ringCtx } from "../poly/ring";

@@ -1,8 +1,14 @@
 import { runtimeError } from "../errors";
-import { type HilbertSeries, type RationalNumber } from "../hilbert";
-import { type Ideal, ideal, idealDimension, idealDegree, idealGroebnerBasis, idealHilbertSeries, idealSum, idealIsUnit } from "../ideal";
+import { type HilbertSeries } from "../hilbert/series";
+import { type Rational } from "../field/rational-number";
+import { type Ideal, ideal, idealGroebnerBasis, idealIsUnit } from "../ideal/ideal";
+import { idealDimension, idealDegree, idealHilbertSeries } from "../ideal/invariants";
+import { idealSum } from "../ideal/arith";
 import type { ComputeOptions } from "../options";
-import { type Poly, type PolyRing, isZero, mul, normalForm, one, sameRing, sub, add } from "./engine";
+import { type Poly } from "../poly/poly";
+import { type PolyRing, sameRing } from "../poly/ring";
+import { isZero, mul, one, sub, add } from "../poly/checked";
+import { normalForm } from "../groebner/checked";
 
 /// The quotient S/J of a polynomial ring S (the ambient ring) by an ideal J of S.
 /// Elements are polynomials of S read modulo J.
@@ -107,6 +113,6 @@ export function quotientDimension(A: AnyRing, opts?: ComputeOptions): number {
 }
 
 /// The degree (multiplicity) of A.
-export function quotientDegree(A: AnyRing, opts?: ComputeOptions): RationalNumber {
+export function quotientDegree(A: AnyRing, opts?: ComputeOptions): Rational {
   return idealDegree(definingIdeal(A), opts);
 }

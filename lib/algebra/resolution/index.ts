@@ -1,7 +1,20 @@
-export { type BettiTable, type BettiColumn, bettiNumber, bettiTotals, bettiRegularity, bettiAlternatingSum } from "./betti";
-export { type Resolution, type ResolveOptions, resolveQuotient, resolveCoker } from "./resolve";
-export { projectiveDimension, depthByAuslanderBuchsbaum, regularity } from "./invariants";
-export { type Presentation, syzygyPresentation } from "./syzygy";
-export { resolutionHilbertSeries } from "./hilbert";
-export { type QuotientProperties, quotientProperties } from "./quotient";
-export { columnDegrees, minimalPresentation, subquotientPresentation } from "./presentation";
+/// Minimal free resolutions: the dispatcher (dispatch.ts) and the three methods it chooses
+/// among, each in a folder named by how it works.
+export { minimalResolution, resolutionMethod, type DispatchedResolution, type FinishedColumn, type ResolutionInput, type ResolutionMethod, type ResolutionRequest, type ResolvedModule } from "./dispatch";
+export * from "./schreyer/index";
+// graded-quotient/'s BettiColumn is its own shape (per-degree data over S/J); it stays there.
+export {
+  resolveDegreewise,
+  residueFieldResolution,
+  cyclicResolution,
+  bettiTotalsOf,
+  residueSplitsFromSyzygy,
+  moduleSocle,
+  type ModulePresentation,
+  GradedFree,
+  type DegreeData,
+  type LocalResolveOptions,
+  type QuotientResolution,
+  type ResolveRequest,
+} from "./graded-quotient/index";
+export { resolveLocalArtinian, type LocalResolution } from "./artinian/resolve";

@@ -1,5 +1,5 @@
-import type { Coeffs } from "../field/coeffs";
-import { checkpoint, type ComputeOptions } from "../options";
+import type { Coeffs } from "../../field/coeffs";
+import { checkpoint, type ComputeOptions } from "../../options";
 
 /// The rank of a matrix over the field, given as sparse rows (column → nonzero entry),
 /// by Gaussian elimination.

@@ -1,29 +1,22 @@
-/// Exact rational numbers on BigInt, always normalised: den > 0 and gcd(num, den) = 1.
+/// `Rational`: the exact rational number that the engine's interface, the Hilbert code and the
+/// evaluator share — num/den in lowest terms with den > 0. (Coefficients of polynomials over Q
+/// use the packed `Rat` of rational.ts, tuned for the inner loops.)
+import { AlgebraError } from "../errors";
+import { bigGcd } from "./rational";
+
 export interface Rational {
   readonly num: bigint;
   readonly den: bigint;
 }
 
-export class DivisionByZero extends Error {
-  constructor() {
-    super("division by zero");
-  }
-}
-
-function gcd(a: bigint, b: bigint): bigint {
-  if (a < 0n) a = -a;
-  if (b < 0n) b = -b;
-  while (b !== 0n) [a, b] = [b, a % b];
-  return a;
-}
-
+/// num/den in lowest terms; a zero denominator is the runtime error "division by zero".
 export function rational(num: bigint, den: bigint = 1n): Rational {
-  if (den === 0n) throw new DivisionByZero();
+  if (den === 0n) throw new AlgebraError("runtime", "division by zero");
   if (den < 0n) {
     num = -num;
     den = -den;
   }
-  const g = gcd(num, den);
+  const g = bigGcd(num, den);
   return g > 1n ? { num: num / g, den: den / g } : { num, den };
 }
 

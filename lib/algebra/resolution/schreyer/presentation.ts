@@ -1,8 +1,8 @@
-import { runtimeError } from "../errors";
-import { moduleKernel } from "../module/kernel";
-import type { ComputeOptions } from "../options";
-import type { Poly } from "../poly/poly";
-import type { PolyRing } from "../poly/ring";
+import { runtimeError } from "../../errors";
+import { moduleKernel } from "../../module/kernel";
+import type { ComputeOptions } from "../../options";
+import type { Poly } from "../../poly/poly";
+import type { PolyRing } from "../../poly/ring";
 import { resolveCoker } from "./resolve";
 import type { Presentation } from "./syzygy";
 

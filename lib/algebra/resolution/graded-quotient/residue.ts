@@ -1,5 +1,5 @@
-import { ideal, type Ideal } from "../ideal";
-import { variable } from "../index";
+import { ideal, type Ideal } from "../../ideal/ideal";
+import { variable } from "../../poly/checked";
 import { type LocalResolveOptions, type QuotientResolution, resolveDegreewise } from "./resolve";
 
 /// The ideal m of the variables of the ring of J.

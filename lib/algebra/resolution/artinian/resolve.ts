@@ -1,9 +1,10 @@
-import { AlgebraError } from "../errors";
-import { Echelon, kernelBasis } from "../graded/echelon";
-import { type Ideal, idealGroebnerBasis } from "../ideal";
-import { add, monomial, mul, type Poly, zero } from "../index";
-import { checkLimit, checkpoint, type ComputeOptions } from "../options";
-import { FiniteAlgebra } from "./algebra";
+import { AlgebraError } from "../../errors";
+import { Echelon, kernelBasis } from "../../graded/echelon";
+import { type Ideal, idealGroebnerBasis } from "../../ideal/ideal";
+import { add, monomial, mul, zero } from "../../poly/checked";
+import { type Poly } from "../../poly/poly";
+import { checkLimit, checkpoint, type ComputeOptions } from "../../options";
+import { FiniteAlgebra } from "../../artinian/algebra";
 
 /// A minimal free resolution over a local Artinian ring, truncated at `length`.
 export interface LocalResolution {

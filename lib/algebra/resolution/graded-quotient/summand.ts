@@ -1,6 +1,6 @@
-import { Echelon, kernelBasis } from "../graded/echelon";
-import type { Ideal } from "../ideal";
-import { checkpoint, type ComputeOptions } from "../options";
+import { Echelon, kernelBasis } from "../../graded/echelon";
+import type { Ideal } from "../../ideal/ideal";
+import { checkpoint, type ComputeOptions } from "../../options";
 import { variablesOf } from "./residue";
 import { densify, type GradedFree, sparsify } from "./free";
 import { type ModulePresentation, resolveDegreewise } from "./resolve";

@@ -1,9 +1,9 @@
-import { monoIsOne, type Mono } from "../monomial/monomial";
-import { checkpoint, type ComputeOptions } from "../options";
-import { addScaled, mulPoly, mulTerm, polyFromTerms } from "../poly/arith";
-import { asTyped, type Poly } from "../poly/poly";
-import type { RingCtx } from "../poly/ring";
-import type { Vec } from "../module/vector";
+import { monoIsOne, type Mono } from "../../monomial/monomial";
+import { checkpoint, type ComputeOptions } from "../../options";
+import { addScaled, mulPoly, mulTerm, polyFromTerms } from "../../poly/arith";
+import { asTyped, type Poly } from "../../poly/poly";
+import type { RingCtx } from "../../poly/ring";
+import type { Vec } from "../../module/vector";
 import { scalarRank } from "./scalar";
 import type { SchreyerResolution } from "./frame";
 

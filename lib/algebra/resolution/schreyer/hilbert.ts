@@ -1,5 +1,5 @@
-import { runtimeError } from "../errors";
-import { hilbertSeriesFromNumerator, type HilbertSeries } from "../hilbert";
+import { runtimeError } from "../../errors";
+import { hilbertSeriesFromNumerator, type HilbertSeries } from "../../hilbert/series";
 import { bettiAlternatingSum } from "./betti";
 import type { Resolution } from "./resolve";
 

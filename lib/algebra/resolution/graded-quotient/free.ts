@@ -1,15 +1,16 @@
-import type { Coeffs } from "../field/coeffs";
-import type { GradedQuotient, SparseColumn } from "../graded/piece";
+import type { Coeffs } from "../../field/coeffs";
+import type { GradedQuotient, SparseColumn } from "../../graded/piece";
+import { multidegreeKey, WHOLE_DEGREE, type BlockKey } from "./multidegree";
 
 /// A sparse vector: (index, coefficient) pairs.
 export type Sparse<C> = SparseColumn<C>;
 
 /// How the coordinates of one degree j of a free module are grouped: by multidegree when
 /// the module is Z^n-graded (then every map of the resolution respects the groups), else
-/// in one group "*".
+/// in one group (WHOLE_DEGREE).
 export interface Layout {
   /// Global coordinate indices of each group, increasing.
-  blocks: Map<string, number[]>;
+  blocks: Map<BlockKey, number[]>;
   /// For every global index, its position inside its group.
   local: Int32Array;
   /// For every global index, the generator it belongs to.
@@ -69,7 +70,7 @@ export class GradedFree<C> {
       s += this.A.dim(j - a);
     }
     offsets.push(s);
-    const blocks = new Map<string, number[]>();
+    const blocks = new Map<BlockKey, number[]>();
     const local = new Int32Array(s);
     const generator = new Int32Array(s);
     this.degrees.forEach((a, g) => {
@@ -78,7 +79,7 @@ export class GradedFree<C> {
       const md = this.multidegrees[g];
       for (let k = 0; k < B.length; k++) {
         const idx = offsets[g] + k;
-        const key = this.multigraded ? B[k].map((e, v) => e + md[v]).join(",") : "*";
+        const key = this.multigraded ? multidegreeKey(B[k].map((e, v) => e + md[v])) : WHOLE_DEGREE;
         let blk = blocks.get(key);
         if (!blk) blocks.set(key, (blk = []));
         local[idx] = blk.length;

@@ -1,5 +1,6 @@
-import { idealDimension, type Ideal } from "../ideal";
-import type { ComputeOptions } from "../options";
+import { idealDimension } from "../../ideal/invariants";
+import { type Ideal } from "../../ideal/ideal";
+import type { ComputeOptions } from "../../options";
 import { bettiTotals } from "./betti";
 import { depthByAuslanderBuchsbaum, projectiveDimension } from "./invariants";
 import { resolveQuotient, type Resolution } from "./resolve";

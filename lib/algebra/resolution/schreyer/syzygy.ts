@@ -1,5 +1,5 @@
-import { runtimeError } from "../errors";
-import type { Poly } from "../poly/poly";
+import { runtimeError } from "../../errors";
+import type { Poly } from "../../poly/poly";
 import type { Resolution } from "./resolve";
 
 /// A presentation of a graded module: the matrix (by rows) and the degrees of its target's basis.

@@ -1,12 +1,18 @@
-import { AlgebraError } from "../errors";
-import { Echelon, kernelBasis } from "../graded/echelon";
-import { gradedQuotient, type GradedQuotient } from "../graded/piece";
-import { type Ideal, idealGroebnerBasis, idealSum } from "../ideal";
-import { checkLimit, checkpoint, type ComputeOptions } from "../options";
-import { add, degree, monomial, type Poly, type PolyRing, terms, zero } from "../index";
-import { compact, densify, GradedFree, type Sparse, sparsify } from "./free";
-import { freeModule, moduleHilbertSeries } from "../module";
-import { hilbertFunctionValues, hilbertPolynomial } from "../hilbert";
+import { AlgebraError } from "../../errors";
+import { Echelon, kernelBasis } from "../../graded/echelon";
+import { gradedQuotient, type GradedQuotient } from "../../graded/piece";
+import { type Ideal, idealGroebnerBasis } from "../../ideal/ideal";
+import { idealSum } from "../../ideal/arith";
+import { checkLimit, checkpoint, type ComputeOptions, type ProgressInfo } from "../../options";
+import { add, degree, monomial, terms, zero } from "../../poly/checked";
+import { type Poly } from "../../poly/poly";
+import { type PolyRing } from "../../poly/ring";
+import { compact, densify, GradedFree, type Layout, type Sparse, sparsify } from "./free";
+import { freeModule } from "../../module/free";
+import { moduleHilbertSeries } from "../../module/hilbert";
+import { hilbertFunctionValues } from "../../hilbert/series";
+import { hilbertPolynomial } from "../../hilbert/polynomial";
+import { lowerKey, multidegreeOf, PerDegreeBlock, type BlockKey } from "./multidegree";
 
 /// β_{i,j} for one homological degree i.
 export interface BettiColumn {
@@ -79,15 +85,6 @@ function isMonomialIdeal(I: Ideal): boolean {
   return idealGroebnerBasis(I).every((g) => terms(I.ring, g).length === 1);
 }
 
-/// The multidegree one variable lower, or null when it leaves N^n.
-function lowerKey(key: string, v: number): string | null {
-  if (key === "*") return key;
-  const e = key.split(",").map(Number);
-  if (e[v] === 0) return null;
-  e[v]--;
-  return e.join(",");
-}
-
 /// The minimal graded free resolution of R/I over R = S/J up to homological degree
 /// `length`, computed degree by degree by linear algebra on the graded pieces R_d: in
 /// degree j the syzygies K_{i,j} of the last module are known; those of the form
@@ -97,34 +94,11 @@ function lowerKey(key: string, v: number): string | null {
 /// When J and I are monomial ideals every module and map is Z^n-graded, and each degree
 /// splits into independent blocks, one per multidegree (common practice).
 export function resolveDegreewise<C>(req: ResolveRequest<C>): QuotientResolution {
-  const { opts } = req;
-  const S = req.ring.ring;
-  const R = gradedQuotient(req.ring) as GradedQuotient<C>;
-  const K = R.K;
+  const setup = prepare<C>(req);
+  const { R, plan, opts } = setup;
   const n = req.length;
-  if (!Number.isInteger(n) || n < 0) throw new AlgebraError("runtime", "resolution: the length must be a non-negative integer");
-  if ((req.module === undefined) === (req.presentation === undefined)) throw new AlgebraError("runtime", "resolution: give either an ideal or a presentation");
-  const pres = req.presentation ? presentationVectors(S, R, req.presentation) : null;
-  const Q = req.module ? (gradedQuotient(idealSum(req.ring, req.module)) as GradedQuotient<C>) : null;
-  const top = Q ? Q.topDegree() : topDegreeOf(S, req.ring, req.presentation!, opts);
-  const gensDeg = Q ? Math.max(1, ...idealGroebnerBasis(req.module!).map((f: Poly) => degree(S, f))) : Math.max(1, ...pres!.columns.map((c) => c.degree));
-  const plan = degreePlan(S, R, top, gensDeg, pres ? Math.max(0, ...req.presentation!.degrees) : 0, n, req.degree);
-  checkLimit(opts, "maxDegree", plan.D === Infinity ? 0 : plan.D, "the internal degree of the resolution");
-  const multi = !pres && isMonomialIdeal(req.ring) && isMonomialIdeal(req.module!);
-  const origin = new Array<number>(R.n).fill(0);
-  const maxW = Math.max(...R.weights);
-
-  // F_{−1} = the module R/I itself, as one generator over the pieces of S/(J + I); for a
-  // presented module there is no target: K_0 is the span of the relations.
-  let target = new GradedFree<C>(Q ?? R, multi);
-  let F = new GradedFree<C>(R, multi);
-  if (pres) {
-    req.presentation!.degrees.forEach((d) => F.addGenerator(d, { idx: [], val: [] }));
-  } else {
-    target.addGenerator(0, { idx: [], val: [] }, origin);
-    F.addGenerator(0, { idx: [0], val: [K.one] }, origin);
-  }
-  let prevKernelDims = new Map<string, number>();
+  let { target, F } = firstModules(setup);
+  let prevKernelDims = new PerDegreeBlock();
   const columns: BettiColumn[] = [];
   const push = (c: BettiColumn) => {
     columns.push(c);
@@ -136,97 +110,19 @@ export function resolveDegreewise<C>(req: ResolveRequest<C>): QuotientResolution
   let mapEntries = 0;
 
   for (let i = 0; i < n; i++) {
-    const next = new GradedFree<C>(R, multi);
-    /// Kernel bases by degree, then by group.
-    const kernels = new Map<number, Map<string, Echelon<C>>>();
-    const kernelDims = new Map<string, number>();
-    const images = new ImageCache(F, target);
     if (F.rank === 0) {
       // M = 0 (a free module of rank 0): every column is zero.
       for (let k = i + 1; k <= n; k++) push({ index: k, entries: [], total: 0, complete: true });
       break;
     }
-    const jmin = Math.min(...F.degrees);
     const natural = R.isArtinian ? Math.max(...F.degrees) + R.topDegree()! : Infinity;
-    const jmax = Math.min(plan.D, natural);
-    for (let j = jmin; j <= jmax; j++) {
-      const info = () => ({ stage: "resolution over a quotient ring", detail: `homological degree ${i + 1}, internal degree ${j}`, fraction: n > 0 ? i / n : 1 });
-      checkpoint(opts, info);
-      checkLimit(opts, "maxBasisSize", F.dim(j), "a graded piece of the resolution");
-      const L = F.layout(j);
-      const TL = target.layout(j);
-      const here = new Map<string, Echelon<C>>();
-      kernels.set(j, here);
-      for (const [key, block] of L.blocks) {
-        const dimF = block.length;
-        const tBlock = TL.blocks.get(key) ?? [];
-        // d_i maps F_i onto K_{i−1} (onto the module itself for i = 0).
-        const relations = i === 0 && pres ? pres.columns.filter((c) => c.degree === j) : null;
-        const expected = relations
-          ? dimF
-          : dimF - (i === 0 ? tBlock.length : (prevKernelDims.get(`${j}|${key}`) ?? 0));
-        const P = new Echelon<C>(K, dimF);
-        // Products beyond rank `expected` add nothing: they all lie in K_{i,j}.
-        products: for (let v = 0; v < R.n && expected > 0; v++) {
-          const lk = lowerKey(key, v);
-          const jl = j - R.weights[v];
-          const low = lk === null ? undefined : kernels.get(jl)?.get(lk);
-          if (!low) continue;
-          const from = F.layout(jl).blocks.get(lk!)!;
-          for (const b of low.rows) {
-            if (P.rank >= expected) break products;
-            checkpoint(opts, info);
-            P.insert(F.mulVarBlock(v, jl, from, b, dimF));
-          }
-        }
-        if (P.rank > expected) throw new AlgebraError("runtime", "resolution: internal inconsistency (syzygies exceed the kernel)");
-        let decomposable = P;
-        if (relations) {
-          // K_{0,j} = m·K_0 in degree j plus the relations of degree j; those outside the
-          // span so far are minimal relations (graded Nakayama).
-          if (req.inspect) {
-            decomposable = new Echelon<C>(K, dimF);
-            for (const r of P.rows) decomposable.insert(r);
-          }
-          for (const rel of relations) {
-            const z = densify(K, rel.vector, L, dimF);
-            if (P.insert(z)) next.addGenerator(j, rel.vector);
-          }
-        } else if (P.rank < expected) {
-          if (req.inspect) {
-            decomposable = new Echelon<C>(K, dimF);
-            for (const r of P.rows) decomposable.insert(r);
-          }
-          // K_{i,j} = P ⊕ (K_{i,j} ∩ C) for C spanned by the unit vectors off the pivots of P,
-          // and d vanishes on P: the new syzygies are the kernel of d restricted to C.
-          const pivots = new Set(P.pivots);
-          const free: number[] = [];
-          for (let k = 0; k < dimF; k++) if (!pivots.has(k)) free.push(k);
-          const cols = free.map((k) => densify(K, images.of(j, block[k]), TL, tBlock.length));
-          const ker = kernelBasis(K, tBlock.length, cols, () => checkpoint(opts, info));
-          if (ker.length !== expected - P.rank) throw new AlgebraError("runtime", "resolution: internal inconsistency (kernel dimension)");
-          const md = key === "*" ? undefined : key.split(",").map(Number);
-          for (const c of ker) {
-            const z = new Array<C>(dimF).fill(K.zero);
-            c.forEach((a, k) => (z[free[k]] = a));
-            P.insert(z);
-            next.addGenerator(j, sparsify(K, z, block), md);
-          }
-        }
-        here.set(key, P);
-        kernelDims.set(`${j}|${key}`, P.rank);
-        req.inspect?.({ i, j, F, block, kernel: P, decomposable });
-      }
-      kernels.delete(j - maxW);
-    }
+    const { next, kernelDims } = nextModule(setup, i, F, target, prevKernelDims, Math.min(plan.D, natural));
     if (req.keepMaps !== undefined && maps !== null) {
       mapEntries += F.rank * next.rank;
-      maps = mapEntries <= req.keepMaps ? [...(maps ?? []), matrixOf(S, F, next)] : null;
+      maps = mapEntries <= req.keepMaps ? [...(maps ?? []), matrixOf(setup.S, F, next)] : null;
     }
-    const degs = next.degrees;
-    const entries = countDegrees(degs);
     const complete: boolean = plan.bound(i + 1) <= plan.D || (prevComplete && natural <= plan.D);
-    push({ index: i + 1, entries, total: degs.length, complete });
+    push({ index: i + 1, entries: countDegrees(next.degrees), total: next.rank, complete });
     prevComplete = complete;
     target = F;
     F = next;
@@ -244,6 +140,173 @@ export function resolveDegreewise<C>(req: ResolveRequest<C>): QuotientResolution
     reason: plan.reason,
     ...(maps ? { maps } : {}),
   };
+}
+
+/// Everything one resolution shares: the rings, the relations of a presented module, the
+/// degree plan and whether everything is multigraded.
+interface Setup<C> {
+  req: ResolveRequest<C>;
+  opts?: LocalResolveOptions;
+  S: PolyRing;
+  /// R = S/J, and S/(J + I) for a cyclic module R/I
+  R: GradedQuotient<C>;
+  Q: GradedQuotient<C> | null;
+  K: GradedQuotient<C>["K"];
+  pres: { columns: { degree: number; vector: Sparse<C> }[] } | null;
+  plan: DegreePlan;
+  multi: boolean;
+  maxW: number;
+}
+
+/// Step 1: check the request, build the graded rings and decide how far degrees must go.
+function prepare<C>(req: ResolveRequest<C>): Setup<C> {
+  const { opts } = req;
+  const S = req.ring.ring;
+  const R = gradedQuotient(req.ring) as GradedQuotient<C>;
+  const n = req.length;
+  if (!Number.isInteger(n) || n < 0) throw new AlgebraError("runtime", "resolution: the length must be a non-negative integer");
+  if ((req.module === undefined) === (req.presentation === undefined)) throw new AlgebraError("runtime", "resolution: give either an ideal or a presentation");
+  const pres = req.presentation ? presentationVectors(S, R, req.presentation) : null;
+  const Q = req.module ? (gradedQuotient(idealSum(req.ring, req.module)) as GradedQuotient<C>) : null;
+  const top = Q ? Q.topDegree() : topDegreeOf(S, req.ring, req.presentation!, opts);
+  const gensDeg = Q ? Math.max(1, ...idealGroebnerBasis(req.module!).map((f: Poly) => degree(S, f))) : Math.max(1, ...pres!.columns.map((c) => c.degree));
+  const plan = degreePlan(S, R, top, gensDeg, pres ? Math.max(0, ...req.presentation!.degrees) : 0, n, req.degree);
+  checkLimit(opts, "maxDegree", plan.D === Infinity ? 0 : plan.D, "the internal degree of the resolution");
+  const multi = !pres && isMonomialIdeal(req.ring) && isMonomialIdeal(req.module!);
+  return { req, opts, S, R, Q, K: R.K, pres, plan, multi, maxW: Math.max(...R.weights) };
+}
+
+/// Step 2: F_0 and its target. F_{−1} = the module R/I itself, as one generator over the
+/// pieces of S/(J + I); for a presented module there is no target: K_0 is the span of the
+/// relations.
+function firstModules<C>({ req, R, Q, K, pres, multi }: Setup<C>): { target: GradedFree<C>; F: GradedFree<C> } {
+  const origin = new Array<number>(R.n).fill(0);
+  const target = new GradedFree<C>(Q ?? R, multi);
+  const F = new GradedFree<C>(R, multi);
+  if (pres) {
+    req.presentation!.degrees.forEach((d) => F.addGenerator(d, { idx: [], val: [] }));
+  } else {
+    target.addGenerator(0, { idx: [], val: [] }, origin);
+    F.addGenerator(0, { idx: [0], val: [K.one] }, origin);
+  }
+  return { target, F };
+}
+
+/// Step 3: F_{i+1}, whose generators map onto minimal generators of K_i = ker(F_i → F_{i−1}),
+/// degree by degree up to jmax, group by group.
+function nextModule<C>(
+  setup: Setup<C>,
+  i: number,
+  F: GradedFree<C>,
+  target: GradedFree<C>,
+  prevKernelDims: PerDegreeBlock,
+  jmax: number,
+): { next: GradedFree<C>; kernelDims: PerDegreeBlock } {
+  const { req, opts, R, multi, maxW } = setup;
+  const n = req.length;
+  const next = new GradedFree<C>(R, multi);
+  /// Kernel bases by degree, then by group.
+  const kernels = new Map<number, Map<BlockKey, Echelon<C>>>();
+  const kernelDims = new PerDegreeBlock();
+  const images = new ImageCache(F, target);
+  const pass: Pass<C> = { setup, i, F, next, kernels, prevKernelDims, images };
+  for (let j = Math.min(...F.degrees); j <= jmax; j++) {
+    const info = () => ({ stage: "resolution over a quotient ring", detail: `homological degree ${i + 1}, internal degree ${j}`, fraction: n > 0 ? i / n : 1 });
+    checkpoint(opts, info);
+    checkLimit(opts, "maxBasisSize", F.dim(j), "a graded piece of the resolution");
+    const L = F.layout(j);
+    const TL = target.layout(j);
+    const here = new Map<BlockKey, Echelon<C>>();
+    kernels.set(j, here);
+    for (const [key, block] of L.blocks) {
+      const { kernel, decomposable } = syzygiesOfBlock(pass, j, key, block, L, TL, info);
+      here.set(key, kernel);
+      kernelDims.set(j, key, kernel.rank);
+      req.inspect?.({ i, j, F, block, kernel, decomposable });
+    }
+    kernels.delete(j - maxW);
+  }
+  return { next, kernelDims };
+}
+
+/// What one pass (homological degree i) shares across degrees and groups.
+interface Pass<C> {
+  setup: Setup<C>;
+  i: number;
+  F: GradedFree<C>;
+  next: GradedFree<C>;
+  kernels: Map<number, Map<BlockKey, Echelon<C>>>;
+  prevKernelDims: PerDegreeBlock;
+  images: ImageCache<C>;
+}
+
+/// Step 4, one group of one degree j: a basis of K_{i,j} there, its decomposable part
+/// spanned by x_v·K_{i,j−w_v}, and new generators of F_{i+1} for a complement (graded
+/// Nakayama), found by elimination only when the products fall short of dim K_{i,j}.
+function syzygiesOfBlock<C>(
+  { setup, i, F, next, kernels, prevKernelDims, images }: Pass<C>,
+  j: number,
+  key: BlockKey,
+  block: readonly number[],
+  L: Layout,
+  TL: Layout,
+  info: () => ProgressInfo,
+): { kernel: Echelon<C>; decomposable: Echelon<C> } {
+  const { req, opts, R, K, pres } = setup;
+  const dimF = block.length;
+  const tBlock = TL.blocks.get(key) ?? [];
+  // d_i maps F_i onto K_{i−1} (onto the module itself for i = 0).
+  const relations = i === 0 && pres ? pres.columns.filter((c) => c.degree === j) : null;
+  const expected = relations ? dimF : dimF - (i === 0 ? tBlock.length : (prevKernelDims.get(j, key) ?? 0));
+  const P = new Echelon<C>(K, dimF);
+  // Products beyond rank `expected` add nothing: they all lie in K_{i,j}.
+  products: for (let v = 0; v < R.n && expected > 0; v++) {
+    const lk = lowerKey(key, v);
+    const jl = j - R.weights[v];
+    const low = lk === null ? undefined : kernels.get(jl)?.get(lk);
+    if (!low) continue;
+    const from = F.layout(jl).blocks.get(lk!)!;
+    for (const b of low.rows) {
+      if (P.rank >= expected) break products;
+      checkpoint(opts, info);
+      P.insert(F.mulVarBlock(v, jl, from, b, dimF));
+    }
+  }
+  if (P.rank > expected) throw new AlgebraError("runtime", "resolution: internal inconsistency (syzygies exceed the kernel)");
+  let decomposable = P;
+  if (relations) {
+    // K_{0,j} = m·K_0 in degree j plus the relations of degree j; those outside the
+    // span so far are minimal relations (graded Nakayama).
+    if (req.inspect) {
+      decomposable = new Echelon<C>(K, dimF);
+      for (const r of P.rows) decomposable.insert(r);
+    }
+    for (const rel of relations) {
+      const z = densify(K, rel.vector, L, dimF);
+      if (P.insert(z)) next.addGenerator(j, rel.vector);
+    }
+  } else if (P.rank < expected) {
+    if (req.inspect) {
+      decomposable = new Echelon<C>(K, dimF);
+      for (const r of P.rows) decomposable.insert(r);
+    }
+    // K_{i,j} = P ⊕ (K_{i,j} ∩ C) for C spanned by the unit vectors off the pivots of P,
+    // and d vanishes on P: the new syzygies are the kernel of d restricted to C.
+    const pivots = new Set(P.pivots);
+    const free: number[] = [];
+    for (let k = 0; k < dimF; k++) if (!pivots.has(k)) free.push(k);
+    const cols = free.map((k) => densify(K, images.of(j, block[k]), TL, tBlock.length));
+    const ker = kernelBasis(K, tBlock.length, cols, () => checkpoint(opts, info));
+    if (ker.length !== expected - P.rank) throw new AlgebraError("runtime", "resolution: internal inconsistency (kernel dimension)");
+    const md = multidegreeOf(key);
+    for (const c of ker) {
+      const z = new Array<C>(dimF).fill(K.zero);
+      c.forEach((a, k) => (z[free[k]] = a));
+      P.insert(z);
+      next.addGenerator(j, sparsify(K, z, block), md);
+    }
+  }
+  return { kernel: P, decomposable };
 }
 
 /// The matrix of F_{i+1} → F_i: column g holds the boundary of generator g of `next`,

@@ -1,4 +1,4 @@
-import { runtimeError } from "../errors";
+import { runtimeError } from "../../errors";
 import { bettiRegularity } from "./betti";
 import type { Resolution } from "./resolve";
 

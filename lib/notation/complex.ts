@@ -1,0 +1,77 @@
+/// Complex values from the engine's resolutions, one renderer per method of the dispatcher
+/// (lib/algebra/resolution/dispatch.ts), and the notes that say what a truncated one leaves out.
+import type { LocalResolution, QuotientResolution, Resolution } from "../algebra/index";
+import type { BettiEntry, BettiTableValue, ComplexValue, MatrixValue, RingValue } from "./values";
+
+/// Differentials are kept as matrices while the resolution has at most this many matrix
+/// entries in all (beyond it C.map and C.minors say they were not kept).
+export const MAX_MAP_ENTRIES = 200_000;
+
+/// The Complex value of a resolution over S (Schreyer); `shift`: how far the module was
+/// moved up in degree before resolving (its Betti numbers are moved back).
+export function complexOf(r: Resolution, ring: RingValue, shift = 0): ComplexValue {
+  const maps: MatrixValue[] = [];
+  for (let i = 1; i <= r.length; i++) {
+    const rows = r.map(i);
+    maps.push({ type: "Matrix", ring, rows, cols: r.ranks[i] ?? 0 });
+  }
+  const entries = shift === 0 ? r.betti.entries : r.betti.entries.map(([i, j, b]) => [i, j - shift, b] as const);
+  const betti: BettiTableValue = { type: "BettiTable", entries, complete: r.complete };
+  return { type: "Complex", ring, ranks: r.ranks, betti, complete: r.complete, maps };
+}
+
+/// The first column that a degree bound may have cut (its total and all later ones are
+/// lower bounds), or null when every column is exact.
+export function firstInexact(r: QuotientResolution): number | null {
+  const k = r.columns.findIndex((col) => !col.complete);
+  return k < 0 ? null : k;
+}
+
+/// What a truncated resolution leaves out, said plainly.
+export function truncationNote(r: QuotientResolution, length: number, shift: number): string | undefined {
+  const k = firstInexact(r);
+  if (k !== null) {
+    const d = r.exactThroughDegree - shift;
+    return `internal degrees above ${d} were not computed, so β_i for i ≥ ${k} are lower bounds (β_{i,j} with j ≤ ${d} are exact)`;
+  }
+  const last = r.columns[r.columns.length - 1];
+  if (last.total > 0) return `only homological degrees ≤ ${length} were computed; the resolution goes on`;
+  return undefined;
+}
+
+type QuotientColumn = QuotientResolution["columns"][number];
+
+export function entriesOf(columns: readonly QuotientColumn[], shift = 0): BettiEntry[] {
+  return columns.flatMap((col) => col.entries.map((e) => [col.index, e.degree - shift, e.count] as const));
+}
+
+/// The Complex value of a resolution over a graded quotient, degree by degree.
+export function gradedQuotientComplex(r: QuotientResolution, base: RingValue, length: number, shift: number): ComplexValue {
+  const complete = r.complete && r.columns[r.columns.length - 1].total === 0;
+  const note = complete ? undefined : truncationNote(r, length, shift);
+  const ranks = r.columns.map((col) => col.total);
+  const maps: MatrixValue[] | null = r.maps
+    ? r.maps.map((rows, i) => ({ type: "Matrix", ring: base, rows, cols: ranks[i + 1] }))
+    : null;
+  return {
+    type: "Complex",
+    ring: base,
+    ranks,
+    betti: { type: "BettiTable", entries: entriesOf(r.columns, shift), complete, ...(note ? { note } : {}) },
+    complete,
+    maps,
+    ...(note ? { note } : {}),
+  };
+}
+
+const LOCAL_NOTE = "over the local ring at the origin, ungraded: the Betti table lists β_i under internal degree 0";
+
+/// The Complex value of a resolution over the local ring at the origin (ungraded);
+/// `overGivenRing`: that local ring is the given ring itself, so its maps are maps over it.
+export function localComplex(r: LocalResolution, overGivenRing: boolean, base: RingValue, length: number): ComplexValue {
+  const note = r.complete ? LOCAL_NOTE : `only homological degrees ≤ ${length} were computed; the resolution goes on; ${LOCAL_NOTE}`;
+  const entries: BettiEntry[] = r.ranks.flatMap((b, i) => (b > 0 ? [[i, 0, b] as const] : []));
+  // the maps live over the local ring; they are maps over A itself only when A is that ring
+  const maps: MatrixValue[] | null = overGivenRing ? r.maps.map((rows, i) => ({ type: "Matrix", ring: base, rows, cols: r.ranks[i + 1] })) : null;
+  return { type: "Complex", ring: base, ranks: r.ranks, betti: { type: "BettiTable", entries, complete: r.complete, note }, complete: r.complete, maps, note };
+}
