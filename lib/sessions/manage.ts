@@ -7,14 +7,15 @@ import { requireSessionAccess } from "@/lib/auth/access";
 import type { CurrentUser } from "@/lib/auth/types";
 import { forbidden } from "@/lib/http/errors";
 
-async function requireOwner(user: CurrentUser, sessionId: string, what: string) {
-  const { session, role } = await requireSessionAccess(user, sessionId, "read");
+/// With the session's link token a link holder is known to read it: 403, not 404.
+async function requireOwner(user: CurrentUser, sessionId: string, what: string, linkToken?: string | null) {
+  const { session, role } = await requireSessionAccess(user, sessionId, "read", { linkToken });
   if (role !== "owner") throw forbidden(`Only the session's owner may ${what} it.`);
   return session;
 }
 
-export async function renameSession(user: CurrentUser, sessionId: string, title: string) {
-  await requireOwner(user, sessionId, "rename");
+export async function renameSession(user: CurrentUser, sessionId: string, title: string, linkToken?: string | null) {
+  await requireOwner(user, sessionId, "rename", linkToken);
   // A title the owner chose is never replaced by the first definition.
   const [row] = await db()
     .update(sessions)
@@ -25,7 +26,7 @@ export async function renameSession(user: CurrentUser, sessionId: string, title:
 }
 
 /// Deletes the session with its cells, named objects and shares (foreign keys cascade).
-export async function deleteSession(user: CurrentUser, sessionId: string): Promise<void> {
-  await requireOwner(user, sessionId, "delete");
+export async function deleteSession(user: CurrentUser, sessionId: string, linkToken?: string | null): Promise<void> {
+  await requireOwner(user, sessionId, "delete", linkToken);
   await db().delete(sessions).where(eq(sessions.id, sessionId));
 }

@@ -36,14 +36,14 @@ export const PATCH = route(async (req, { params }: Context) => {
   const user = await requireUser();
   const { id } = await params;
   const { title } = await readJson(req, Rename, { maxBytes: 4 * 1024 });
-  const session = await renameSession(user, id, title);
+  const session = await renameSession(user, id, title, linkToken(req));
   return NextResponse.json({ session: { id: session.id, title: session.title } });
 });
 
 /// Deletes the session with its cells and objects (its owner only; the console confirms first).
-export const DELETE = route(async (_req, { params }: Context) => {
+export const DELETE = route(async (req, { params }: Context) => {
   const user = await requireUser();
   const { id } = await params;
-  await deleteSession(user, id);
+  await deleteSession(user, id, linkToken(req));
   return NextResponse.json({ deleted: true });
 });
