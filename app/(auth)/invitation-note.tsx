@@ -1,9 +1,7 @@
 /// On the sign-in and sign-up pages of someone who followed an invitation link while
 /// signed out: what they were invited to, by whom, and for which address, so they know
 /// why they are here and which account to use; after signing in they return to it.
-import { inspectInvitation } from "@/lib/sharing/invitations";
-
-const INVITATION_PATH = /^\/invitations\/([A-Za-z0-9_-]{20,100})$/;
+/// (The pages read the invitation with lib/sharing's invitationBehind.)
 
 export interface InvitationSummary {
   teamName: string;
@@ -11,18 +9,6 @@ export interface InvitationSummary {
   email: string;
   role: string;
   status: string;
-}
-
-/// The invitation a callback address points at, or null (not an invitation, or unknown).
-export async function invitationFor(callbackUrl: string): Promise<InvitationSummary | null> {
-  const m = INVITATION_PATH.exec(callbackUrl);
-  if (!m) return null;
-  try {
-    const { invitation } = await inspectInvitation(m[1]!);
-    return invitation;
-  } catch {
-    return null;
-  }
 }
 
 export function InvitationNote({ invitation, action }: { invitation: InvitationSummary; action: "sign in" | "sign up" }) {

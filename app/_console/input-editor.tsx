@@ -1,6 +1,6 @@
 "use client";
 /// The Ringside input: a CodeMirror 6 editor with the notation's highlighting,
-/// completion, live diagnostics and the console's keys. The page drives it through a
+/// completion, live diagnostics, hover documentation and the console's keys. The page drives it through a
 /// handle (insert a name, replace the text, focus).
 import { closeBrackets } from "@codemirror/autocomplete";
 import { defaultKeymap, history, historyKeymap } from "@codemirror/commands";
@@ -18,6 +18,7 @@ import { consoleTheme } from "@/lib/editor/console-theme";
 import { notationCompletion } from "@/lib/editor/notation-completion";
 import { notationDiagnostics } from "@/lib/editor/notation-diagnostics";
 import { notationHighlight } from "@/lib/editor/notation-highlight";
+import { notationHover } from "@/lib/editor/notation-hover";
 import { checkNotation } from "./notation-checker";
 
 /// What the page may do with the input.
@@ -75,6 +76,7 @@ export function InputEditor({ env, history: past, onRun, handle }: InputEditorPr
           notationHighlight(),
           notationCompletion(language),
           notationDiagnostics(language),
+          notationHover(language),
           consoleTheme(),
           placeholder("Type a program — Enter runs, Shift+Enter adds a line, Ctrl+K for commands"),
           EditorView.lineWrapping,

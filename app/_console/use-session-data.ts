@@ -3,8 +3,10 @@
 /// and its named objects, with their errors as messages. A read-only link's token is part
 /// of every key, so the holder's requests carry it; a signed-out visitor has no session list.
 import useSWR from "swr";
-import { ApiError, fetchJson, keys } from "./api/client";
-import type { Cell, NamedObject, SessionDetail, SessionSummary } from "./api/types";
+import { keys } from "./api/client";
+import { ApiError, fetchJson } from "@/app/_client/fetch";
+import type { Cell } from "@/lib/wire/reading";
+import type { NamedObject, SessionDetail, SessionSummary } from "@/lib/wire/reading";
 
 const loadProblemOf = (e: unknown): string | null =>
   e === undefined || e === null ? null : e instanceof ApiError ? e.message : "The server could not be reached.";

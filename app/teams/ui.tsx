@@ -1,18 +1,9 @@
 "use client";
-/// Small pieces shared by the team and invitation pages: the page frame, a JSON fetch
-/// that turns the API's `{error: {code, message}}` into a message, and a notice line.
+/// Small pieces shared by the team and invitation pages: the page frame and a notice line
+/// (the JSON fetch `api` is app/_client/fetch.ts, re-exported for these pages).
 import Link from "next/link";
 import type { ReactNode } from "react";
-import { send } from "../_console/api/client";
-
-/// Calls the API and returns its JSON, or throws the console's ApiError with the server's
-/// message (one error shape for every page).
-export function api<T>(path: string, init: { method?: string; body?: unknown } = {}): Promise<T> {
-  return send<T>(path, {
-    method: init.method ?? (init.body === undefined ? "GET" : "POST"),
-    body: init.body === undefined ? undefined : JSON.stringify(init.body),
-  });
-}
+export { api } from "../_client/fetch";
 
 export function PageFrame({ title, children, back = true }: { title: string; children: ReactNode; back?: boolean }) {
   return (

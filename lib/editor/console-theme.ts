@@ -17,5 +17,8 @@ export function consoleTheme(): Extension {
     ".cm-tooltip-autocomplete > ul > li": { fontFamily: "var(--font-mono), ui-monospace, monospace" },
     ".cm-completionDetail": { marginLeft: "0.75rem", opacity: "0.7", fontStyle: "normal" },
     ".cm-completionInfo": { maxWidth: "26rem", whiteSpace: "pre-wrap" },
+    ".rs-hover": { maxWidth: "32rem", padding: "0.35rem 0.6rem", display: "flex", flexDirection: "column", gap: "0.2rem" },
+    ".rs-hover-signature": { fontFamily: "var(--font-mono), ui-monospace, monospace", fontSize: "0.8rem" },
+    ".rs-hover p": { margin: "0" },
   });
 }

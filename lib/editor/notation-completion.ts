@@ -20,7 +20,7 @@ const KEYWORDS = ["use", "in", "for", "if", "then", "else", "and", "or", "not", 
 
 /// The kinds whose properties a value of type `t` answers; a quotient ring also answers
 /// every Module property (notation.md §3).
-function ownerKinds(t: Type): TypeKind[] {
+export function ownerKinds(t: Type): TypeKind[] {
   if (t.kind === "Union") return t.options.flatMap(ownerKinds);
   if (t.kind === "Ring") return ["Ring", "Module"];
   return [t.kind];
@@ -28,7 +28,7 @@ function ownerKinds(t: Type): TypeKind[] {
 
 /// The type of the expression that ends exactly at `dot` (the outermost one), by
 /// checking the text before the dot with the session's environment.
-function typeBefore(options: NotationCompletionOptions, source: string, dot: number): Type | null {
+export function typeBefore(options: NotationCompletionOptions, source: string, dot: number): Type | null {
   let analysis: Analysis;
   try {
     analysis = options.analyze(source.slice(0, dot), options.env());

@@ -73,6 +73,15 @@ TYPECHECK=0
 log "tsc --noEmit"
 npx tsc --noEmit -p . || TYPECHECK=1
 
+# The rules of DEVELOPERS.md (layers, no import cycles, hooks) and the formatter, checked
+# by `npm run lint` (eslint.config.mjs, .prettierrc.json). A filtered run (`npm test --
+# FILTER…`) checks one suite and skips it; a full run counts a lint failure as one failure.
+LINT=0
+if [ "$#" -eq 0 ]; then
+  log "npm run lint"
+  npm run --silent lint || LINT=1
+fi
+
 node --import tsx lib/ops/smtp-sink.ts 2>"$T/smtp.log" &
 SINK_PID=$!
 wait_port "$SMTP_PORT" 30 "$SINK_PID"
@@ -97,6 +106,7 @@ fi
 SETUP_DONE=1
 
 [ "$TYPECHECK" = 0 ] || { log "type check failed (counted as one failure)"; FAILED=$((FAILED + 1)); }
+[ "$LINT" = 0 ] || { log "lint failed (counted as one failure)"; FAILED=$((FAILED + 1)); }
 
 # count_json FILE: prints "passed failed" from a results file with numPassedTests/numFailedTests.
 count_json() {

@@ -6,36 +6,28 @@ import { db } from "@/db/client";
 import { namedObjects, users } from "@/db/schema";
 import type { CurrentUser } from "@/lib/auth/types";
 import { HttpError } from "@/lib/http/errors";
-import { parse } from "@/grammar/parser";
-
-/// The names a program's top-level definitions bind (a parse only: cheap, never throws).
-export function definedNames(source: string): string[] {
-  const names = new Set<string>();
-  for (const s of parse(source).program.statements) if (s.kind === "Define") names.add(s.name.name);
-  return [...names];
-}
 
 export interface ForeignName {
   name: string;
   definedBy: string;
 }
 
-/// The session's names that `source` would bind again although someone else defined them.
-export async function foreignRedefinitions(user: CurrentUser, sessionId: string, source: string): Promise<ForeignName[]> {
-  const names = definedNames(source);
+/// Of `names` (those a cell defines: grammar/defined-names.ts), the session's names that
+/// someone else defined.
+export async function foreignRedefinitions(user: CurrentUser, sessionId: string, names: readonly string[]): Promise<ForeignName[]> {
   if (names.length === 0) return [];
   const rows = await db()
     .select({ name: namedObjects.name, definedBy: users.displayName })
     .from(namedObjects)
     .innerJoin(users, eq(users.id, namedObjects.ownerId))
-    .where(and(eq(namedObjects.sessionId, sessionId), inArray(namedObjects.name, names), ne(namedObjects.ownerId, user.id)));
+    .where(and(eq(namedObjects.sessionId, sessionId), inArray(namedObjects.name, [...names]), ne(namedObjects.ownerId, user.id)));
   return rows.sort((a, b) => a.name.localeCompare(b.name));
 }
 
 /// Throws 409 when the cell would replace others' objects and the caller did not confirm.
-export async function requireRedefinitionConsent(user: CurrentUser, sessionId: string, source: string, confirmed: boolean): Promise<void> {
+export async function requireRedefinitionConsent(user: CurrentUser, sessionId: string, names: readonly string[], confirmed: boolean): Promise<void> {
   if (confirmed) return;
-  const foreign = await foreignRedefinitions(user, sessionId, source);
+  const foreign = await foreignRedefinitions(user, sessionId, names);
   if (foreign.length === 0) return;
   const list = foreign.map((f) => `${f.name} (defined by ${f.definedBy})`).join(", ");
   throw new HttpError(

@@ -5,6 +5,7 @@ import { cellLimits, cellPool } from "@/lib/compute/cell-pool";
 import { errorValue, type CellEvent, type CellJob, type CellJobOutcome, type ErrorValue, type Span } from "@/lib/compute/cell-events";
 import { PoolBusyError, type JobEnd } from "@/lib/compute/pool";
 import type { CurrentUser } from "@/lib/auth/types";
+import type { CellEvent as StreamEvent } from "@/lib/wire/cells";
 import { registerRunningCell } from "./cancel-channel";
 import { ENGINE_VERSION } from "./engine-version";
 import { abandonStaleCells, currentRingOf, finishCell, listObjects, startCell, type CellOutcome } from "./store";
@@ -34,7 +35,7 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
   const stream = new ReadableStream<Uint8Array>({
     async start(controller) {
       let open = true;
-      const send = (event: Record<string, unknown>) => {
+      const send = (event: StreamEvent) => {
         if (!open) return;
         try {
           controller.enqueue(encoder.encode(JSON.stringify(event) + "\n"));

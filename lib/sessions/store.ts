@@ -4,6 +4,7 @@ import { and, asc, desc, eq, sql } from "drizzle-orm";
 import { db } from "@/db/client";
 import { cells, namedObjects, sessions, users } from "@/db/schema";
 import type { CurrentUser } from "@/lib/auth/types";
+import type { SessionSummary } from "@/lib/wire/sessions";
 
 export type CellRow = typeof cells.$inferSelect;
 export type ObjectRow = typeof namedObjects.$inferSelect;
@@ -50,7 +51,7 @@ export function containsPattern(text: string): string {
 /// `query`, only those whose title, a cell's source or a named object's name or value
 /// contains it (case-insensitive); `match` then says where (the first matching line of a
 /// cell, or an object's name), or null when the title matched.
-export async function listSessions(user: CurrentUser, query?: string) {
+export async function listSessions(user: CurrentUser, query?: string): Promise<SessionSummary[]> {
   const q = query?.trim() ? containsPattern(query.trim()) : null;
   const rows = await db().execute<{
     id: string;

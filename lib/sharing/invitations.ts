@@ -203,3 +203,17 @@ export async function acceptInvitation(user: CurrentUser, token: string, address
   }
   return outcome.result!;
 }
+
+const INVITATION_PATH = /^\/invitations\/([A-Za-z0-9_-]{20,100})$/;
+
+/// The invitation a sign-in or sign-up page's callback address points at (a signed-out
+/// invitee who followed the mail's link), or null: not an invitation's address, or unknown.
+export async function invitationBehind(callbackUrl: string) {
+  const m = INVITATION_PATH.exec(callbackUrl);
+  if (!m) return null;
+  try {
+    return (await inspectInvitation(m[1]!)).invitation;
+  } catch {
+    return null;
+  }
+}

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { readNdjson } from "@/app/_console/api/cell-stream";
-import type { CellEvent } from "@/app/_console/api/types";
+import type { CellEvent } from "@/lib/wire/reading";
 import { applyCellEvent, overallFraction, startedCell } from "@/app/_console/state/running-cell";
 
 // A stream delivering the given chunks, split wherever the test says (NDJSON lines may

@@ -1,7 +1,8 @@
 /// A read-only link's token reaches every API address the console makes for the session
 /// it was given for (issue 8): the SWR keys and the export address carry `link=`.
 import { describe, expect, it } from "vitest";
-import { exportUrl, keys, withLink } from "@/app/_console/api/client";
+import { exportUrl, keys } from "@/app/_console/api/client";
+import { withLink } from "@/app/_client/fetch";
 
 const ID = "0b7e2c1a-4d5f-4e61-9a8b-7c6d5e4f3a21";
 const TOKEN = "Qm-9_zK+/=x";

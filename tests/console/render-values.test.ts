@@ -6,7 +6,7 @@ import { hilbertFacts } from "@/app/_console/render/hilbert";
 import { resolutionView, ringNameOf, texOfTwistedFree } from "@/app/_console/render/resolution";
 import { typeWords } from "@/app/_console/render/type-words";
 import { viewOfValue } from "@/app/_console/render/view-model";
-import type { ValueJson } from "@/app/_console/api/types";
+import type { ValueReading as ValueJson } from "@/lib/wire/reading";
 
 const S: ValueJson = { type: "Ring", text: "Q[x, y, z]", field: "Q", vars: ["x", "y", "z"], degrees: [1, 1, 1], order: "grevlex", ideal: [] };
 // The resolution of S/(xy, yz, xz), three coordinate points of P²:

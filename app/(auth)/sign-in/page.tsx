@@ -2,7 +2,8 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { redirect } from "next/navigation";
 import { currentUser } from "@/lib/auth/current-user";
-import { InvitationNote, invitationFor } from "../invitation-note";
+import { invitationBehind } from "@/lib/sharing/invitations";
+import { InvitationNote } from "../invitation-note";
 import { safeCallback } from "../safe-callback";
 import { SignInForm } from "./sign-in-form";
 
@@ -13,7 +14,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
   if (await currentUser()) redirect(safeCallback(params.callbackUrl));
   const error = typeof params.error === "string" ? params.error : null;
   const callbackUrl = safeCallback(params.callbackUrl);
-  const invitation = await invitationFor(callbackUrl);
+  const invitation = await invitationBehind(callbackUrl);
   return (
     <>
       <h1 className="mb-4 text-lg font-semibold">Sign in</h1>

@@ -3,7 +3,8 @@ import Link from "next/link";
 import { redirect } from "next/navigation";
 import { currentUser } from "@/lib/auth/current-user";
 import { PASSWORD_RULE } from "@/lib/auth/password";
-import { InvitationNote, invitationFor } from "../invitation-note";
+import { invitationBehind } from "@/lib/sharing/invitations";
+import { InvitationNote } from "../invitation-note";
 import { safeCallback } from "../safe-callback";
 import { SignUpForm } from "./sign-up-form";
 
@@ -14,7 +15,7 @@ export const metadata: Metadata = { title: "Create an account · Ringside" };
 export default async function SignUpPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const callbackUrl = safeCallback((await searchParams).callbackUrl);
   if (await currentUser()) redirect(callbackUrl);
-  const invitation = await invitationFor(callbackUrl);
+  const invitation = await invitationBehind(callbackUrl);
   return (
     <>
       <h1 className="mb-4 text-lg font-semibold">Create an account</h1>

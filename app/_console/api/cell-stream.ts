@@ -1,7 +1,7 @@
 /// Reading the cell stream: POST the source, then read the NDJSON body line by line with
 /// a ReadableStream reader, handing each parsed event on as it arrives.
-import { errorOf } from "./client";
-import type { CellEvent } from "./types";
+import { errorOf } from "@/app/_client/fetch";
+import type { CellEvent } from "@/lib/wire/reading";
 
 /// Splits a byte stream into lines and parses each non-empty line as JSON. A line that
 /// is not JSON is reported through `onBadLine` and skipped, so one garbled line does

@@ -1,7 +1,8 @@
 /// Calls to the collaboration API (README.md, "Collaboration API"): shares of the session
 /// and of its named objects, the read-only link, teams, objects shared with me, imports.
-import { keys, send } from "./client";
-import type { NamedObject } from "./types";
+import { send } from "@/app/_client/fetch";
+import { keys } from "./client";
+import type { NamedObject } from "@/lib/wire/reading";
 
 export type ShareRole = "viewer" | "editor";
 

@@ -1,7 +1,7 @@
 /// The copy menu of a result: the value as plain text, LaTeX, Markdown, and CSV for the
 /// values that are tables (Betti tables, resolutions' Betti tables, tables). Built from the
 /// same view model the transcript draws, so what is copied is what is seen.
-import type { ValueJson } from "../api/types";
+import type { ValueReading } from "@/lib/wire/reading";
 import { bettiGrid, type BettiEntry, type BettiGrid } from "./betti";
 import { viewOfValue, type ValueView, type ViewContext } from "./view-model";
 
@@ -14,10 +14,10 @@ export const COPY_LABELS: Readonly<Record<CopyFormat, string>> = {
   csv: "CSV",
 };
 
-const entriesOf = (v: ValueJson): BettiEntry[] => ((v.entries ?? v.betti ?? []) as BettiEntry[]).filter((e) => Array.isArray(e) && e.length === 3);
+const entriesOf = (v: ValueReading): BettiEntry[] => ((v.entries ?? v.betti ?? []) as BettiEntry[]).filter((e) => Array.isArray(e) && e.length === 3);
 
 /// The formats offered for a value: CSV only for tables.
-export function copyFormats(v: ValueJson): CopyFormat[] {
+export function copyFormats(v: ValueReading): CopyFormat[] {
   const tabular = v.type === "BettiTable" || v.type === "Complex" || v.type === "Table";
   return tabular ? ["text", "latex", "markdown", "csv"] : ["text", "latex", "markdown"];
 }
@@ -58,14 +58,14 @@ export function csvOf(rows: readonly (readonly string[])[]): string {
   return rows.map((r) => r.map(field).join(",")).join("\r\n") + "\r\n";
 }
 
-function tableRows(v: ValueJson): string[][] {
+function tableRows(v: ValueReading): string[][] {
   const view = viewOfValue(v);
   if (view.kind !== "table") return [[v.text]];
   return [[...view.columns], ...view.rows.map((r) => [...r])];
 }
 
 /// TeX of a view for the LaTeX copy (math material, without surrounding dollars).
-function texOfView(view: ValueView, v: ValueJson): string {
+function texOfView(view: ValueView, v: ValueReading): string {
   switch (view.kind) {
     case "tex":
     case "series":
@@ -81,7 +81,7 @@ function texOfView(view: ValueView, v: ValueJson): string {
   }
 }
 
-export function copyText(v: ValueJson, format: CopyFormat, ctx: ViewContext = {}): string {
+export function copyText(v: ValueReading, format: CopyFormat, ctx: ViewContext = {}): string {
   const view = viewOfValue(v, ctx);
   switch (format) {
     case "text":

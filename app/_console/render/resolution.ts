@@ -2,11 +2,11 @@
 /// named ring, F_i = ⊕_j S(−j)^{β_ij} (Eisenbud, The Geometry of Syzygies, GTM 229, §1B:
 /// the graded Betti numbers β_ij count the generators of degree j of F_i), in our own
 /// layout: S ← S(−2)³ ← S(−3)² ← 0, the differentials as matrices on request.
-import type { ValueJson } from "../api/types";
+import type { ValueReading } from "@/lib/wire/reading";
 import { texOfMatrix, texOfVariable } from "./tex";
 
-/// The §9 fields of a Complex this module reads beyond the shared ValueJson type.
-type ComplexJson = ValueJson & { readonly maps?: readonly (ValueJson | null)[] | null };
+/// The §9 fields of a Complex this module reads beyond the shared ValueReading type.
+type ComplexJson = ValueReading & { readonly maps?: readonly (ValueReading | null)[] | null };
 
 export interface ResolutionView {
   /// TeX of the ring's name (the binding that holds it, else R)
@@ -62,7 +62,7 @@ export function resolutionView(v: ComplexJson, ringName: string | null): Resolut
 
 /// The name of the session's binding that holds `ring` (same field, variables and
 /// defining ideal), or null; the first such name in `candidates` order.
-export function ringNameOf(ring: ValueJson | undefined, candidates: readonly { readonly name: string; readonly value: ValueJson }[]): string | null {
+export function ringNameOf(ring: ValueReading | undefined, candidates: readonly { readonly name: string; readonly value: ValueReading }[]): string | null {
   if (!ring) return null;
   const same = (a: readonly string[] | undefined, b: readonly string[] | undefined) =>
     (a ?? []).length === (b ?? []).length && (a ?? []).every((x, i) => x === (b ?? [])[i]);

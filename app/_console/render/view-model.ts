@@ -1,7 +1,7 @@
 /// Turns a §9 value into what the transcript draws: TeX for algebra, a grid for Betti
 /// tables, a chain of ranks for resolutions, plain text for the rest. Pure functions of
 /// the JSON, so every rendering rule is unit-tested without a browser.
-import type { ValueJson } from "../api/types";
+import type { ValueReading } from "@/lib/wire/reading";
 import { bettiGrid, type BettiEntry, type BettiGrid } from "./betti";
 import { hilbertFacts, texOfHilbertPolynomial, type HilbertFacts } from "./hilbert";
 import { resolutionView, ringNameOf, type ResolutionView } from "./resolution";
@@ -37,15 +37,15 @@ export type ValueView =
 /// What the transcript knows around a value: the session's named objects, so a
 /// resolution is written over the ring's name (S, not R).
 export interface ViewContext {
-  readonly objects?: readonly { readonly name: string; readonly value: ValueJson }[];
+  readonly objects?: readonly { readonly name: string; readonly value: ValueReading }[];
 }
 
 /// The field names of a §9 Record in the order the user wrote them (`fieldOrder`, kept beside
 /// the fields because stored JSON does not keep key order).
-export function recordFieldOrder(v: ValueJson): string[] {
+export function recordFieldOrder(v: ValueReading): string[] {
   const fields = v.fields ?? {};
   const keys = Object.keys(fields);
-  const order = (v as ValueJson & { fieldOrder?: readonly unknown[] }).fieldOrder;
+  const order = (v as ValueReading & { fieldOrder?: readonly unknown[] }).fieldOrder;
   if (Array.isArray(order) && order.length === keys.length && order.every((k) => typeof k === "string" && Object.hasOwn(fields, k))) {
     return order as string[];
   }
@@ -53,7 +53,7 @@ export function recordFieldOrder(v: ValueJson): string[] {
 }
 
 /// Plain text of a resolution's chain, for copying: S <- S(-2)^3 <- S(-3)^2 <- 0.
-function resolutionPlainText(v: ValueJson, ringName: string | null): string {
+function resolutionPlainText(v: ValueReading, ringName: string | null): string {
   const ring = ringName ?? "R";
   const entries = (v.betti ?? []).filter((e) => Array.isArray(e) && e.length === 3);
   const ranks = v.ranks ?? [];
@@ -74,7 +74,7 @@ export function texOfField(field: string): string {
 }
 
 /// TeX of a ring from its §9 encoding: K[x, y, …], over its defining ideal when nonzero.
-export function texOfRing(v: ValueJson): string {
+export function texOfRing(v: ValueReading): string {
   const vars = (v.vars ?? []).map(texOfVariable).join(", ");
   const base = `${texOfField(v.field ?? "?")}[${vars}]`;
   const ideal = (v.ideal ?? []).filter((g) => g !== "0");
@@ -83,7 +83,7 @@ export function texOfRing(v: ValueJson): string {
 
 /// TeX of a presented module: 0, a graded free module ⊕ R(−d)^m when there are no
 /// relations, else coker of the presentation with the generators' degrees when not all 0.
-export function texOfModule(rows: readonly (readonly string[])[], degrees: readonly number[], ring?: ValueJson): string {
+export function texOfModule(rows: readonly (readonly string[])[], degrees: readonly number[], ring?: ValueReading): string {
   if (rows.length === 0) return "0";
   const R = ring?.vars ? texOfRing(ring) : "R";
   const base = ring?.ideal?.some((g) => g !== "0") ? `\\left(${R}\\right)` : R;
@@ -99,17 +99,17 @@ export function texOfModule(rows: readonly (readonly string[])[], degrees: reado
   return `\\operatorname{coker} ${texOfMatrix(rows)}${shifted}`;
 }
 
-const entriesOf = (v: ValueJson): BettiEntry[] =>
+const entriesOf = (v: ValueReading): BettiEntry[] =>
   ((v.entries ?? v.betti ?? []) as readonly BettiEntry[]).filter(
     (e) => Array.isArray(e) && e.length === 3 && e.every((n) => typeof n === "number"),
   );
 
-function isStringRows(rows: ValueJson["rows"]): rows is readonly (readonly string[])[] {
+function isStringRows(rows: ValueReading["rows"]): rows is readonly (readonly string[])[] {
   return Array.isArray(rows) && rows.every((r) => Array.isArray(r) && r.every((c) => typeof c === "string"));
 }
 
 /// The view of a §9 value; unknown or malformed values fall back to their `text`.
-export function viewOfValue(v: ValueJson, ctx: ViewContext = {}): ValueView {
+export function viewOfValue(v: ValueReading, ctx: ViewContext = {}): ValueView {
   switch (v.type) {
     case "Poly":
       return { kind: "tex", tex: texOrVerbatim(v.text) };
@@ -131,13 +131,13 @@ export function viewOfValue(v: ValueJson, ctx: ViewContext = {}): ValueView {
     case "Module": {
       const p = v.presentation;
       if (!p || !isStringRows(p.rows)) return { kind: "text", text: v.text };
-      return { kind: "tex", tex: texOfModule(p.rows, v.degrees ?? [], v.ring) };
+      return { kind: "tex", tex: texOfModule(p.rows, v.degrees ?? [], v.ring ?? undefined) };
     }
     case "BettiTable":
       return { kind: "betti", grid: bettiGrid(entriesOf(v), v.complete !== false) };
     case "Complex": {
       const complete = v.complete !== false;
-      const ringName = ringNameOf(v.ring, ctx.objects ?? []);
+      const ringName = ringNameOf(v.ring ?? undefined, ctx.objects ?? []);
       const resolution = resolutionView(v, ringName);
       return {
         kind: "complex",
@@ -181,7 +181,7 @@ export function viewOfValue(v: ValueJson, ctx: ViewContext = {}): ValueView {
       return { kind: "record", fields: recordFieldOrder(v).map((k) => [k, viewOfValue(fields[k]!, ctx)] as const) };
     }
     case "Table": {
-      const rows = (v.rows ?? []) as readonly (readonly ValueJson[])[];
+      const rows = (v.rows ?? []) as readonly (readonly ValueReading[])[];
       return {
         kind: "table",
         columns: v.columns ?? [],
@@ -195,6 +195,6 @@ export function viewOfValue(v: ValueJson, ctx: ViewContext = {}): ValueView {
 
 /// The value's own warning (a bound that cut it, a random choice behind it), shown under it
 /// in words: the `text` carries it too, but the typeset view would otherwise hide it.
-export function noteOfValue(v: ValueJson): string | null {
+export function noteOfValue(v: ValueReading): string | null {
   return typeof v.note === "string" && v.note !== "" ? v.note : null;
 }

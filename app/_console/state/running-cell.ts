@@ -2,7 +2,9 @@
 /// its stage and fraction for the progress bar, partial Betti columns as they arrive,
 /// results, the error, and the final status.
 import { mergeBettiEntries, type BettiEntry } from "../render/betti";
-import type { CellEvent, CellResult, CellStatus, ErrorJson, NamedObject } from "../api/types";
+import type { CellEvent, CellResult, CellStatus } from "@/lib/wire/reading";
+import type { NamedObject } from "@/lib/wire/reading";
+import type { ErrorJson } from "@/lib/wire/reading";
 
 export interface RunningCell {
   readonly source: string;

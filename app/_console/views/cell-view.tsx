@@ -1,7 +1,7 @@
 "use client";
 /// One transcript cell: source, status, time taken and results; while it runs, a
 /// progress bar with the stage, the Betti columns computed so far and a Cancel button.
-import { resultIndex, type Cell, type CellStatus } from "../api/types";
+import { resultIndex, type Cell, type CellStatus } from "@/lib/wire/reading";
 import { bettiGrid } from "../render/betti";
 import type { ViewContext } from "../render/view-model";
 import { overallFraction, type RunningCell } from "../state/running-cell";

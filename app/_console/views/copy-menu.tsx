@@ -2,7 +2,7 @@
 /// The copy menu of one result: plain text, LaTeX, Markdown, and CSV for tables (the
 /// formats of render/copy-formats.ts); says what it copied.
 import { useEffect, useRef, useState } from "react";
-import type { ValueJson } from "../api/types";
+import type { ValueReading } from "@/lib/wire/reading";
 import { COPY_LABELS, copyFormats, copyText, type CopyFormat } from "../render/copy-formats";
 import type { ViewContext } from "../render/view-model";
 import { buttonQuiet } from "./styles";
@@ -22,7 +22,7 @@ async function writeClipboard(text: string): Promise<void> {
   if (!ok) throw new Error("the browser did not allow copying");
 }
 
-export function CopyMenu({ value, context }: { value: ValueJson; context?: ViewContext }) {
+export function CopyMenu({ value, context }: { value: ValueReading; context?: ViewContext }) {
   const [open, setOpen] = useState(false);
   const [status, setStatus] = useState<string | null>(null);
   const root = useRef<HTMLDivElement>(null);

@@ -1,7 +1,7 @@
 "use client";
 /// An error as the transcript shows it: the source line, a caret under the span and
 /// the message with its kind.
-import type { ErrorJson } from "../api/types";
+import type { ErrorJson } from "@/lib/wire/reading";
 import { errorCaret } from "../render/caret";
 
 /// Renders a §9 Error against the cell's source.

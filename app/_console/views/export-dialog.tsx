@@ -3,8 +3,9 @@
 /// can be left out at once), and the format; the download holds just those cells
 /// (GET /api/sessions/:id/export?cells=…&skipErrors=1).
 import { useMemo, useState } from "react";
-import { errorOf, exportUrl, messageOf, type ExportFormat } from "../api/client";
-import type { Cell } from "../api/types";
+import { errorOf, messageOf } from "@/app/_client/fetch";
+import { exportUrl, type ExportFormat } from "../api/client";
+import type { Cell } from "@/lib/wire/reading";
 import { buttonPrimary, buttonQuiet } from "./styles";
 
 const LABEL: Record<ExportFormat, string> = { latex: "LaTeX", markdown: "Markdown", json: "JSON" };

@@ -3,7 +3,8 @@
 /// are known) and the list of current shares with Revoke. Both dialogs use it; they differ
 /// only in the calls and in the words of their notices.
 import useSWR from "swr";
-import { ApiError, fetchJson, keys, messageOf } from "../api/client";
+import { keys } from "../api/client";
+import { ApiError, fetchJson, messageOf } from "@/app/_client/fetch";
 import type { GranteeInput, Share, ShareRole, TeamSummary } from "../api/sharing";
 import { ShareForm, type ShareProblem } from "./share-form";
 import { ShareList } from "./share-list";

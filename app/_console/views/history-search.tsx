@@ -4,7 +4,7 @@
 /// newest first. The search box has the focus when the dialog opens; typing filters,
 /// ↑/↓ move the highlight, Enter puts the highlighted input back into the editor.
 import { useEffect, useId, useMemo, useState } from "react";
-import { fetchJson } from "../api/client";
+import { fetchJson } from "@/app/_client/fetch";
 
 interface HistoryEntry {
   readonly source: string;

@@ -5,7 +5,7 @@
 /// already used in the session asks for another.
 import { useState } from "react";
 import useSWR from "swr";
-import { ApiError, fetchJson, messageOf } from "../api/client";
+import { ApiError, fetchJson, messageOf } from "@/app/_client/fetch";
 import { importObject } from "../api/sharing";
 import { typeWords } from "../render/type-words";
 import { buttonQuiet, buttonSecondary, textInput } from "./styles";

@@ -2,9 +2,10 @@
 /// Sharing one named object: grant a person or a team a role on it (they can read it and
 /// import a copy into their own sessions), see and revoke the current shares.
 import useSWR from "swr";
-import { fetchJson, keys, messageOf } from "../api/client";
+import { keys } from "../api/client";
+import { fetchJson, messageOf } from "@/app/_client/fetch";
 import { revokeObjectShare, shareObject, type Share } from "../api/sharing";
-import type { NamedObject } from "../api/types";
+import type { NamedObject } from "@/lib/wire/reading";
 import { GrantsEditor } from "./grants-editor";
 
 /// The dialog's body for `object` (rendered inside a Modal).

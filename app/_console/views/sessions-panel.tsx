@@ -4,8 +4,9 @@
 /// a session Rename and Delete (Delete asks first; the server refuses others' sessions).
 import { useState } from "react";
 import useSWR, { useSWRConfig } from "swr";
-import { fetchJson, keys, messageOf, send } from "../api/client";
-import type { SessionSummary } from "../api/types";
+import { fetchJson, messageOf, send } from "@/app/_client/fetch";
+import type { SessionSummary } from "@/lib/wire/reading";
+import { keys } from "../api/client";
 import { Modal } from "./modal";
 import { buttonPrimary, buttonQuiet, buttonSecondary, focusRing, panelHeading, textInput } from "./styles";
 

@@ -4,7 +4,8 @@
 /// session's team may (the server answers 403 to anyone else, shown as it says).
 import { useRef, useState } from "react";
 import useSWR from "swr";
-import { fetchJson, keys, messageOf } from "../api/client";
+import { keys } from "../api/client";
+import { fetchJson, messageOf } from "@/app/_client/fetch";
 import { publishLink, revokeLink, revokeSessionShare, shareSession, type SessionSharing } from "../api/sharing";
 import { GrantsEditor } from "./grants-editor";
 import { buttonPrimary, buttonSecondary, panelHeading, textInput } from "./styles";

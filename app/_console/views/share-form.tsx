@@ -2,7 +2,7 @@
 /// The form that grants a role: to a person by e-mail or to one of my teams, as a reader
 /// (viewer) or as someone who may run cells (editor). Used for sessions and named objects.
 import { useId, useState } from "react";
-import { messageOf, send } from "../api/client";
+import { messageOf, send } from "@/app/_client/fetch";
 import type { GranteeInput, ShareRole, TeamSummary } from "../api/sharing";
 import { buttonPrimary, textInput } from "./styles";
 

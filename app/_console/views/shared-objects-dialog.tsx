@@ -3,7 +3,8 @@
 /// (a copy that records where it came from). A name already used asks for another.
 import { useState } from "react";
 import useSWR from "swr";
-import { ApiError, fetchJson, keys } from "../api/client";
+import { keys } from "../api/client";
+import { ApiError, fetchJson } from "@/app/_client/fetch";
 import { importObject, type SharedObject } from "../api/sharing";
 import { buttonQuiet, buttonSecondary, textInput } from "./styles";
 

@@ -3,7 +3,7 @@
 /// summary (and, for an imported copy, where it came from). Clicking a name inserts it
 /// into the input; rename and delete ask first; Share opens the object's sharing dialog.
 import { useState } from "react";
-import type { NamedObject, ObjectOrigin } from "../api/types";
+import type { NamedObject, ObjectOrigin } from "@/lib/wire/reading";
 import { Modal } from "./modal";
 import { typeWords } from "../render/type-words";
 import { buttonPrimary, buttonQuiet, buttonSecondary, focusRing, panelHeading, textInput } from "./styles";

@@ -2,7 +2,7 @@
 /// Draws one §9 value for people: typeset algebra, Betti tables, chains of ranks,
 /// series with their number of terms, lists, records and tables.
 import { useState } from "react";
-import type { ValueJson } from "../api/types";
+import type { ValueReading } from "@/lib/wire/reading";
 import { typeWords } from "../render/type-words";
 import { noteOfValue, viewOfValue, type ValueView as View, type ViewContext } from "../render/view-model";
 import { BettiTable } from "./betti-table";
@@ -147,7 +147,7 @@ function Resolution({ view, text }: { view: Extract<View, { kind: "complex" }>; 
 }
 
 /// The value of one statement, with its type in words as a small label.
-export function ValueView({ value, context, copyable = true }: { value: ValueJson; context?: ViewContext; copyable?: boolean }) {
+export function ValueView({ value, context, copyable = true }: { value: ValueReading; context?: ViewContext; copyable?: boolean }) {
   return (
     <div className="group/value flex items-start gap-3" data-value-type={value.type}>
       <span className="mt-0.5 w-24 shrink-0 text-right text-xs tracking-wide text-ink/50 dark:text-paper/50" data-testid="type-tag">

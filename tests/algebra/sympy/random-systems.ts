@@ -27,7 +27,7 @@ export function randomSystem(
     const parts: string[] = [];
     const nt = int(2, o.terms);
     for (let t = 0; t < nt; t++) {
-      let c = int(1, 9) * (rng() < 0.5 ? -1 : 1);
+      const c = int(1, 9) * (rng() < 0.5 ? -1 : 1);
       const coef = o.rational && rng() < 0.3 ? `${c}/${int(2, 7)}` : String(c);
       const deg = int(t === 0 ? 1 : 0, o.degree);
       const exps = new Array<number>(o.vars).fill(0);

@@ -1,6 +1,4 @@
-import { desc } from "drizzle-orm";
-import { db } from "@/db/client";
-import { auditLog } from "@/db/schema";
+import { latestAuditEntries } from "@/lib/auth/audit-log";
 import { requireSiteRole } from "@/lib/auth/current-user";
 import { route } from "@/lib/http/errors";
 
@@ -9,6 +7,6 @@ export const GET = route(async (req) => {
   await requireSiteRole("admin");
   const requested = Number(new URL(req.url).searchParams.get("limit") ?? 100);
   const limit = Number.isInteger(requested) && requested > 0 ? Math.min(requested, 1000) : 100;
-  const entries = await db().select().from(auditLog).orderBy(desc(auditLog.id)).limit(limit);
+  const entries = await latestAuditEntries(limit);
   return Response.json({ entries });
 });

@@ -1,8 +1,7 @@
 import NextAuth from "next-auth";
-import { recordAudit } from "@/lib/auth/audit";
+import { recordAuditEvent } from "@/lib/auth/audit-log";
 import { authOptions, normalizeEmail } from "@/lib/auth/options";
 import { checkSignInRate } from "@/lib/auth/rate-limit";
-import { db } from "@/db/client";
 import { clientAddress } from "@/lib/http/client-address";
 
 type Context = { params: Promise<{ nextauth: string[] }> };
@@ -21,7 +20,7 @@ export async function POST(req: Request, context: Context): Promise<Response> {
     const address = clientAddress(req.headers);
     const decision = await checkSignInRate(email, address);
     if (decision.limited) {
-      await recordAudit(db(), { event: "signin_rate_limited", email, address, details: { scope: decision.scope } });
+      await recordAuditEvent({ event: "signin_rate_limited", email, address, details: { scope: decision.scope } });
       const minutes = Math.ceil(decision.retryAfterSeconds / 60);
       const who = decision.scope === "account" ? "this account" : "your address";
       const message = `Too many failed sign-in attempts for ${who}. Try again in ${minutes} minutes.`;

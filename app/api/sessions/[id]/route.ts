@@ -8,6 +8,7 @@ import { route } from "@/lib/http/errors";
 import { linkToken } from "@/lib/sessions/link-token";
 import { ownerName } from "@/lib/sessions/store";
 import { canManageSharing } from "@/lib/sharing/shares";
+import type { SessionDetail } from "@/lib/wire/sessions";
 
 type Context = { params: Promise<{ id: string }> };
 
@@ -25,7 +26,7 @@ export const GET = route(async (req, { params }: Context) => {
       access: role,
       canEdit: role === "owner" || role === "editor",
       canManageSharing: user !== null && (await canManageSharing(user, session)),
-    },
+    } satisfies SessionDetail,
   });
 });
 

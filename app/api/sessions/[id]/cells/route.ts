@@ -5,6 +5,7 @@ import { requireSessionAccess } from "@/lib/auth/access";
 import { readJson } from "@/lib/http/body";
 import { route } from "@/lib/http/errors";
 import { linkToken } from "@/lib/sessions/link-token";
+import { definedNames } from "@/grammar/defined-names";
 import { requireRedefinitionConsent } from "@/lib/sessions/redefine-guard";
 import { runCell } from "@/lib/sessions/run-cell";
 import { listCells } from "@/lib/sessions/store";
@@ -38,6 +39,6 @@ export const POST = route(async (req, { params }: Context) => {
   // With the link's token a link holder is known to read the session: 403, not 404.
   await requireSessionAccess(user, id, "edit", { linkToken: linkToken(req) });
   const { source, redefine } = await readJson(req, NewCell, { maxBytes: MAX_SOURCE_BYTES + 1024 });
-  await requireRedefinitionConsent(user, id, source, redefine === true);
+  await requireRedefinitionConsent(user, id, definedNames(source), redefine === true);
   return runCell(user, id, source);
 });

@@ -1,0 +1,72 @@
+"use client";
+/// The console's dialogs, one open at a time (plus the share dialog of one named object):
+/// input history, guided first steps, sharing the session or an object, objects shared
+/// with me, export and import, keyboard help.
+import type { GuidedExample } from "@/lib/examples/tour";
+import type { NamedObject, SessionDetail } from "@/lib/wire/reading";
+import type { ExportFormat } from "../api/client";
+import type { DialogName } from "../use-console";
+import { HistorySearch } from "./history-search";
+import { KeyboardHelp } from "./keyboard-help";
+import { Modal } from "./modal";
+import { ShareObjectPanel } from "./object-share-dialog";
+import { ShareSessionPanel } from "./share-dialog";
+import { SharedObjectsPanel } from "./shared-objects-dialog";
+import { panelHeading } from "./styles";
+import { TourList } from "./tour";
+import { TransferPanel } from "./transfer-dialog";
+
+export function ConsoleDialogs(props: {
+  dialog: DialogName;
+  onClose: () => void;
+  session: SessionDetail | undefined;
+  sessionId: string | null;
+  signedIn: boolean;
+  canEdit: boolean;
+  history: readonly string[];
+  sharingObject: NamedObject | null;
+  onCloseSharingObject: () => void;
+  onRecall: (source: string) => void;
+  onInsertExample: (e: GuidedExample) => void;
+  onNotice: (words: string) => void;
+  onObjectsImported: (words: string) => void;
+  onExport: (format: ExportFormat) => Promise<void>;
+  onImport: (text: string, fileName: string) => Promise<string | null>;
+}) {
+  const { dialog, onClose, session, sessionId, signedIn, canEdit, history, sharingObject } = props;
+  return (
+    <>
+      <Modal open={dialog === "history"} title="Input history" onClose={onClose}>
+        <HistorySearch entries={history} onChoose={props.onRecall} />
+      </Modal>
+      <Modal open={dialog === "tour"} title="Guided first steps" onClose={onClose}>
+        <div className="max-h-[70vh] overflow-y-auto pr-1">
+          <TourList onInsert={props.onInsertExample} canRun={canEdit} />
+        </div>
+      </Modal>
+      <Modal open={dialog === "share" && sessionId !== null} title={`Share “${session?.title ?? "this session"}”`} onClose={onClose}>
+        {sessionId && <ShareSessionPanel sessionId={sessionId} onChanged={props.onNotice} />}
+      </Modal>
+      <Modal
+        open={sharingObject !== null}
+        title={`Share the named object ${sharingObject?.name ?? ""}`}
+        onClose={props.onCloseSharingObject}
+      >
+        {sharingObject && <ShareObjectPanel object={sharingObject} onChanged={props.onNotice} />}
+      </Modal>
+      <Modal open={dialog === "shared-objects"} title="Objects shared with me" onClose={onClose}>
+        <SharedObjectsPanel targetSessionId={canEdit ? sessionId : null} onImported={props.onObjectsImported} />
+      </Modal>
+      <Modal open={dialog === "transfer"} title={signedIn ? "Export or import" : "Export the transcript"} onClose={onClose}>
+        <TransferPanel canExport={sessionId !== null} canImport={signedIn} onExport={props.onExport} onImport={props.onImport} />
+      </Modal>
+      <Modal open={dialog === "help"} title="Keyboard" onClose={onClose}>
+        <KeyboardHelp />
+        <p className={panelHeading}>Every palette command also has a button or a shortcut.</p>
+        <a href="/reference" target="_blank" rel="noreferrer" className="text-sm text-ink-soft underline dark:text-signal-soft">
+          The notation reference: every function, property and option
+        </a>
+      </Modal>
+    </>
+  );
+}
