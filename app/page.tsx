@@ -110,7 +110,7 @@ function LinkVisitorPage({ sessionId, link }: { sessionId: string; link: string 
 function PageShell({ children }: { children: [ReactNode, ReactNode] }) {
   const [nav, body] = children;
   return (
-    <div className="flex h-screen flex-col">
+    <div className="flex min-h-screen flex-col md:h-screen">
       <header className="flex flex-wrap items-center justify-between gap-x-4 gap-y-1 border-b border-ink/10 bg-white px-5 py-3 dark:border-paper/10 dark:bg-night-panel dark:text-paper">
         <p className="font-mono text-lg font-semibold tracking-tight">
           Ringside<span className="text-signal">.</span>

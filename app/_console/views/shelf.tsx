@@ -75,8 +75,8 @@ export function Shelf({ objects, canEdit, onInsert, onRename, onDelete, onShare,
       <div className="flex items-center justify-between">
         <h2 className={panelHeading}>Named objects</h2>
         {onOpenShared && (
-          <button type="button" className={buttonQuiet} onClick={onOpenShared} title="Objects others shared with you">
-            Shared with me
+          <button type="button" className={buttonQuiet} onClick={onOpenShared} title="Your named objects across sessions, and those shared with you">
+            Library
           </button>
         )}
       </div>

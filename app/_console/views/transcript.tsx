@@ -1,15 +1,17 @@
 "use client";
 /// The transcript: the session's stored cells, the cell running now, the welcome of an
 /// empty session, and load errors in words. It follows the newest output.
-import { useEffect, useRef } from "react";
+import { useEffect, useMemo, useRef } from "react";
 import type { GuidedExample } from "@/lib/examples/tour";
-import type { Cell } from "@/lib/wire/reading";
+import type { Cell, NamedObject } from "@/lib/wire/reading";
 import type { RunningCell } from "../state/running-cell";
 import { CellView, RunningCellView } from "./cell-view";
 import { focusRing } from "./styles";
 import { EmptySessionWelcome } from "./tour";
 
 export function Transcript(props: {
+  /// the session's named objects: values name their ring by them (S, not R)
+  objects?: readonly NamedObject[] | undefined;
   cells: readonly Cell[] | undefined;
   running: RunningCell | null;
   /// no session is open and the visitor has none yet
@@ -23,6 +25,7 @@ export function Transcript(props: {
 }) {
   const { cells, running, noSessions, canEdit, sessionError, cellsError, onInsertExample, onOpenTour, onCancel } = props;
   const end = useRef<HTMLDivElement>(null);
+  const context = useMemo(() => ({ objects: props.objects ?? [] }), [props.objects]);
   useEffect(() => {
     end.current?.scrollIntoView({ block: "end" });
   }, [cells?.length, running?.results.length, running?.status, running?.partialBetti.length]);
@@ -44,9 +47,9 @@ export function Transcript(props: {
       {empty && <EmptySessionWelcome onInsert={onInsertExample} onOpenTour={onOpenTour} canRun={canEdit} />}
       {noSessions && <EmptySessionWelcome onInsert={onInsertExample} onOpenTour={onOpenTour} canRun />}
       {shownCells.map((c) => (
-        <CellView key={c.id} cell={c} />
+        <CellView key={c.id} cell={c} context={context} />
       ))}
-      {running && <RunningCellView cell={running} onCancel={onCancel} />}
+      {running && <RunningCellView cell={running} onCancel={onCancel} context={context} />}
       <div ref={end} />
     </section>
   );
