@@ -293,8 +293,9 @@ browserTest("daily: 390 px read-only view has no horizontal scroll; 1024 px work
   await shot(page, artifactsDir, "10-390px");
   check(overflow <= 0, `the page scrolls sideways by ${overflow} px at 390 px`);
   await page.setViewportSize({ width: 1024, height: 768 });
-  await signIn(page, baseUrl, "lead");
+  await openOwnSession(page, baseUrl, "lead", `Wide working ${stamp()}`);
   await input(page).waitFor();
+  await run(page, ["S := Q[x, y, z]", "resolve(S / <x*y, y*z, x*z>)"], 1);
   const wide = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
   check(wide <= 0, `the console scrolls sideways by ${wide} px at 1024 px`);
   await shot(page, artifactsDir, "10-1024px");
