@@ -177,12 +177,4 @@ export default tseslint.config(
     rules: reactHooks.configs.recommended.rules,
   },
   ...LAYERS.map(layerConfig),
-  {
-    // TEMPORARY (issue 12): the engine's and the evaluator's import cycles are being broken
-    // on branch arch-engine, which owns these folders. Delete this block when it merges, so
-    // no-cycle covers them too; the two other rules flag one line each in files it edits.
-    name: "ringside/until-arch-engine-merges",
-    files: ["lib/algebra/**", "lib/notation/**"],
-    rules: { "import-x/no-cycle": "off", "prefer-const": "off", "@typescript-eslint/no-this-alias": "off" },
-  },
 );

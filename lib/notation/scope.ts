@@ -15,10 +15,8 @@ export class Scope {
   }
 
   lookup(name: string): Value | undefined {
-    for (let s: Scope | null = this; s; s = s.parent) {
-      const v = s.vars.get(name);
-      if (v !== undefined) return v;
-    }
-    return undefined;
+    const own = this.vars.get(name);
+    if (own !== undefined) return own;
+    return this.parent?.lookup(name);
   }
 }

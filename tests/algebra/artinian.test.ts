@@ -7,7 +7,7 @@ import { binomial, maximal, ring, vars } from "./local-helpers";
 
 describe("Artinian local rings as finite-dimensional algebras", () => {
   it("k[x1..xn]/m^p has length C(n+p−1, n) and socle m^{p−1}", () => {
-    // checks.md row 12: dim R_d = C(n−1+d, n−1) for d < p; the socle of S/m^p is m^{p−1}
+    // counting monomials, common practice: dim R_d = C(n−1+d, n−1) for d < p; the socle of S/m^p is m^{p−1}
     // (common practice).
     for (const [n, p] of [[2, 3], [3, 2], [3, 3]] as const) {
       const S = ring(n);
@@ -60,8 +60,8 @@ describe("minimal resolutions over local Artinian rings (ungraded, by linear alg
   const totals = (J: A.Ideal, I: A.Ideal, n: number) => resolveDegreewise({ ring: J, module: I, length: n }).columns.map((c) => c.total);
 
   it("agrees with the degree-by-degree resolution on graded Artinian rings", () => {
-    // Two methods on the same graded rings: k over k[x,y,z]/m^3 (Golod 1962, checks.md row 6),
-    // k and R/(x) over k[x,y]/(x^2, y^2) (Tate 1957, checks.md row 5).
+    // Two methods on the same graded rings: k over k[x,y,z]/m^3 (Golod 1962),
+    // k and R/(x) over k[x,y]/(x^2, y^2) (Tate, Illinois J. Math. 1957).
     const S3 = ring(3), S2 = ring(2);
     const [x, y] = vars(S2);
     const cases: [A.Ideal, A.Ideal, number][] = [

@@ -6,7 +6,7 @@ import { maximal, ring, vars } from "./local-helpers";
 
 describe("Burch ideal and index", () => {
   it("m^p: B = m^2 and index n", () => {
-    // checks.md row 8: I : m = m^{p−1}, B(I) = (m^{p+1}) : m^{p−1} = m^2 (Dao–Kobayashi–Takahashi 2020).
+    // Dao–Kobayashi–Takahashi, Algebra & Number Theory 2020: I : m = m^{p−1}, B(I) = (m^{p+1}) : m^{p−1} = m^2.
     for (const [n, p] of [[2, 2], [3, 2], [3, 3], [2, 4]] as const) {
       const S = ring(n);
       const m = maximal(S);
@@ -56,7 +56,7 @@ describe("Burch ideal and index", () => {
 
   it("positive depth: a general linear form is factored out and the choice is recorded", () => {
     // (x^2, xy, y^2) in k[x,y,z] has depth 1 (z is regular); modulo a general linear form it
-    // becomes m^2 in two variables, index 2 by checks.md row 8.
+    // becomes m^2 in two variables, index 2 by Dao–Kobayashi–Takahashi, Algebra & Number Theory 2020.
     const S = ring(3);
     const [x, y] = vars(S);
     const I = A.ideal(S, [A.mul(S, x, x), A.mul(S, x, y), A.mul(S, y, y)]);

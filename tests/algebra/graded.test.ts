@@ -6,7 +6,7 @@ import { binomial, maximal, randomForm, ring, seeded, vars } from "./local-helpe
 
 describe("graded pieces of S/J", () => {
   it("dimensions of the pieces of k[x1..xn]/m^p", () => {
-    // checks.md row 12: C(n−1+d, n−1) for d < p, 0 from p on.
+    // counting monomials, common practice: C(n−1+d, n−1) for d < p, 0 from p on.
     const S = ring(3);
     const R = gradedQuotient(A.idealPower(maximal(S), 3));
     expect([0, 1, 2, 3, 4].map((d) => R.dim(d))).toEqual([0, 1, 2, 3, 4].map((d) => (d < 3 ? binomial(2 + d, 2) : 0)));
@@ -15,7 +15,7 @@ describe("graded pieces of S/J", () => {
   });
 
   it("a complete intersection has Hilbert series ∏(1 − t^{d_i})/(1 − t)^n", () => {
-    // checks.md row 4: degrees 2, 2, 3 in 3 variables: (1+t)^2 (1+t+t^2) = 1 + 3t + 4t^2 + 3t^3 + t^4.
+    // Koszul complex on a regular sequence, common practice: degrees 2, 2, 3 in 3 variables: (1+t)^2 (1+t+t^2) = 1 + 3t + 4t^2 + 3t^3 + t^4.
     const S = ring(3);
     const next = seeded(5);
     const R = gradedQuotient(A.ideal(S, [randomForm(S, 2, next), randomForm(S, 2, next), randomForm(S, 3, next)]));

@@ -17,7 +17,7 @@ describe("Gröbner bases: published examples", () => {
     expect(texts(R, A.groebnerBasis(R, gens.map((s) => A.parsePoly(R, s))))).toEqual(["y^2+16001*x", "x*y", "x^2"]);
   });
 
-  // checks.md row 10: cyclic-5 and cyclic-6 have 70 and 156 solutions counted with
+  // Björck–Fröberg, J. Symbolic Comput. 1991: cyclic-5 and cyclic-6 have 70 and 156 solutions counted with
   // multiplicity (G. Björck, R. Fröberg, J. Symbolic Comput. 1991).
   it("cyclic-5 has degree 70 and cyclic-6 degree 156", () => {
     for (const [n, deg] of [
@@ -29,7 +29,7 @@ describe("Gröbner bases: published examples", () => {
     }
   });
 
-  // checks.md row 11: katsura-n has degree 2^n (common practice: the Bézout bound is attained).
+  // common practice: katsura-n has degree 2^n (common practice: the Bézout bound is attained).
   it("katsura-n has degree 2^n", () => {
     for (const n of [2, 3, 4, 5, 6]) {
       const { R, gens } = katsura(F, n);

@@ -57,7 +57,7 @@ function rng(seed: number): () => number {
 
 describe("Hilbert series of monomial ideals", () => {
   it("k[x1..xn]/m^p has H(d) = C(n−1+d, n−1) for d < p and 0 from p on", () => {
-    // checks.md row 12 (counting monomials, common practice)
+    // counting monomials, common practice)
     for (const [n, p] of [[2, 5], [3, 4], [4, 3], [5, 2], [1, 6]]) {
       const hs = hilbertSeriesOfMonomials(monomialsOfDegree(n, p), new Array(n).fill(1));
       const values = hilbertFunctionValues(hs, p + 4);
@@ -101,7 +101,7 @@ describe("Hilbert series of monomial ideals", () => {
   });
 
   it("a monomial complete intersection has numerator ∏(1 − t^{d_i})", () => {
-    // checks.md row 4 (common practice): x^2, y^3, z^4 is a regular sequence
+    // Koszul complex on a regular sequence, common practice: x^2, y^3, z^4 is a regular sequence
     const hs = hilbertSeriesOfMonomials([[2, 0, 0], [0, 3, 0], [0, 0, 4]], [1, 1, 1]);
     // (1 − t^2)(1 − t^3)(1 − t^4) = 1 − t^2 − t^3 + t^5 + t^6 − t^7 ... expanded by hand:
     // (1 − t^2 − t^3 + t^5)(1 − t^4) = 1 − t^2 − t^3 − t^4 + t^5 + t^6 + t^7 − t^9

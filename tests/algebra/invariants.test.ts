@@ -9,7 +9,7 @@ function idealOf(R: PolyRing, gens: string[]) {
 }
 
 describe("Tor lengths and Serre's intersection multiplicity", () => {
-  it("checks.md row 7: two planes meeting at a point against a plane: ℓ(S/(I+J)) = 3, χ = 2", () => {
+  it("Serre, Algèbre locale, multiplicités, 1965: two planes meeting at a point against a plane: ℓ(S/(I+J)) = 3, χ = 2", () => {
     // I = (xz, xw, yz, yw), J = (x − z, y − w) in k[x, y, z, w] (J.-P. Serre, Algèbre locale,
     // multiplicités, 1965, the classical example where ℓ(M ⊗ N) ≠ χ).
     for (const F of [GF, QQ]) {
@@ -139,7 +139,7 @@ describe("Tor of modules", () => {
     }
   });
 
-  it("ℓ(Tor_i(k, k)) = C(n, i) (Koszul complex, checks.md row 1)", () => {
+  it("ℓ(Tor_i(k, k)) = C(n, i) (Koszul complex, common practice)", () => {
     const R = ringOf(GF, 3);
     const k = { rows: [vars(R)], rowDegrees: [0] };
     expect(torLengthsOf(R, k, k)).toEqual([1, 3, 3, 1]);

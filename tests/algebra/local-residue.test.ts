@@ -6,7 +6,7 @@ import { binomial, maximal, randomForm, ring, seeded, vars } from "./local-helpe
 
 describe("residue field over S/J, degree by degree", () => {
   it("J = 0 gives the Koszul complex", () => {
-    // checks.md row 1: β_i = C(n, i), all in degree i (Koszul complex).
+    // Koszul complex, common practice: β_i = C(n, i), all in degree i (Koszul complex).
     const S = ring(4);
     const C = residueFieldResolution(A.ideal(S, []), 5);
     expect(bettiTotalsOf(C)).toEqual([1, 4, 6, 4, 1, 0]);
@@ -15,7 +15,7 @@ describe("residue field over S/J, degree by degree", () => {
   });
 
   it("k[x,y]/(x^2, y^2): β_i = i + 1", () => {
-    // checks.md row 5 (Tate 1957): P(t) = (1+t)^2/(1−t^2)^2 = 1/(1−t)^2.
+    // Tate, Illinois J. Math. 1957: P(t) = (1+t)^2/(1−t^2)^2 = 1/(1−t)^2.
     const S = ring(2);
     const [x, y] = vars(S);
     const C = residueFieldResolution(A.ideal(S, [A.mul(S, x, x), A.mul(S, y, y)]), 7);
@@ -25,7 +25,7 @@ describe("residue field over S/J, degree by degree", () => {
 
   it("random complete intersections of mixed degrees match Tate's series", () => {
     // J. Tate, "Homology of Noetherian rings and local rings", Illinois J. Math. 1957:
-    // P_k(t) = (1+t)^n/(1−t^2)^c for a complete intersection with f_i in m^2 (checks.md row 5).
+    // P_k(t) = (1+t)^n/(1−t^2)^c for a complete intersection with f_i in m^2 (Tate, Illinois J. Math. 1957).
     const cases: [number, number[], number][] = [
       [3, [2, 3], 6],
       [3, [2, 2, 3], 6],
@@ -45,7 +45,7 @@ describe("residue field over S/J, degree by degree", () => {
   });
 
   it("k[x1..xn]/m^2: β_i = n^i", () => {
-    // checks.md row 6 (Golod 1962; the resolution is linear).
+    // Golod 1962 (the resolution is linear).
     for (const n of [2, 3]) {
       const S = ring(n);
       const C = residueFieldResolution(A.idealPower(maximal(S), 2), 5);
@@ -93,7 +93,7 @@ describe("residue field over S/J, degree by degree", () => {
   });
 
   it("works over Q as over GF(p)", () => {
-    // checks.md row 5 again, now with rational coefficients.
+    // Tate, Illinois J. Math. 1957 again, now with rational coefficients.
     const S = ring(2, A.QQ);
     const [x, y] = vars(S);
     const J = A.ideal(S, [A.sub(S, A.mul(S, x, x), A.scale(S, A.mul(S, y, y), 1n, 3n)), A.mul(S, x, y)]);
@@ -139,7 +139,7 @@ describe("residue field over S/J, degree by degree", () => {
   });
 
   it("R/I over R = S/J agrees with the same module over S when J = 0", () => {
-    // checks.md row 2: twisted cubic, β = 1, 3, 2 (Hilbert–Burch; Eagon–Northcott 1962).
+    // Hilbert–Burch; Eagon–Northcott 1962: twisted cubic, β = 1, 3, 2.
     const S = ring(4);
     const [a, b, c, d] = vars(S);
     const minors = [A.sub(S, A.mul(S, a, c), A.mul(S, b, b)), A.sub(S, A.mul(S, a, d), A.mul(S, b, c)), A.sub(S, A.mul(S, b, d), A.mul(S, c, c))];

@@ -7,7 +7,7 @@ const F7 = A.polyRing(A.gf(7), ["x", "y", "z"]);
 const P = (R: A.PolyRing, s: string) => A.parsePoly(R, s);
 const show = (R: A.PolyRing, s: string) => A.formatPoly(R, P(R, s));
 
-describe("canonical printing (notation.md §9)", () => {
+describe("canonical printing (lib/notation/README.md, the JSON encoding)", () => {
   it("prints terms in decreasing order with * and ^, no spaces, coefficient 1 omitted", () => {
     expect(show(Q, "3 + x*y*x - 2 * x")).toBe("x^2*y-2*x+3");
     expect(show(Q, "3/4*x^2 - y")).toBe("3/4*x^2-y");

@@ -22,7 +22,7 @@ describe("resolution options", () => {
   it("reports every homological and internal degree of the frame, however fast it runs", () => {
     const details: string[] = [];
     resolveQuotient(koszulIdeal(4), { progress: (p) => p.stage === "resolution" && p.detail && details.push(p.detail) });
-    // the Koszul complex on 4 variables: F_i lives in internal degree i (checks.md row 1)
+    // the Koszul complex on 4 variables: F_i lives in internal degree i (Koszul complex, common practice)
     for (const i of [2, 3, 4]) expect(details).toContain(`homological degree ${i}, internal degree ${i}`);
   });
 
@@ -62,7 +62,7 @@ describe("resolution options", () => {
   });
 
   it("length and degree bounds truncate and report complete: false", () => {
-    // Koszul Betti numbers C(5, i) in degree i (checks.md row 1).
+    // Koszul Betti numbers C(5, i) in degree i (Koszul complex, common practice).
     const L = resolveQuotient(koszulIdeal(5), { length: 2 });
     expect(L.complete).toBe(false);
     expect(L.betti.complete).toBe(false);

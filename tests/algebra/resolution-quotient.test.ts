@@ -20,7 +20,7 @@ describe("Cohen–Macaulay, Gorenstein and complete intersection quotients", () 
 
   it("two planes in 4-space meeting at a point are not Cohen–Macaulay (depth 1, dimension 2)", () => {
     // (xz, xw, yz, yw) = (x, y) ∩ (z, w): the classical non-Cohen–Macaulay example (Hartshorne's
-    // connectedness; common practice), the same ideal as checks.md row 7.
+    // connectedness; common practice), the same ideal as Serre, Algèbre locale, multiplicités, 1965.
     const R = ringOf(GF, 4);
     const P = quotientProperties(I(R, ["x1*x3", "x1*x4", "x2*x3", "x2*x4"]));
     expect([P.dim, P.depth, P.pd]).toEqual([2, 1, 3]);
@@ -28,14 +28,14 @@ describe("Cohen–Macaulay, Gorenstein and complete intersection quotients", () 
   });
 
   it("Pfaffians of the generic 5×5 alternating matrix are Gorenstein, not a complete intersection", () => {
-    // Buchsbaum–Eisenbud 1977 (checks.md row 9): codimension 3, 5 generators.
+    // Buchsbaum–Eisenbud, Amer. J. Math. 1977: codimension 3, 5 generators.
     const R = ringOf(GF, 10);
     const P = quotientProperties(ideal(R, pfaffians(R, alternating(R, 5), 4)));
     expect([P.cohenMacaulay, P.gorenstein, P.completeIntersection]).toEqual([true, true, false]);
   });
 
   it("a complete intersection is Gorenstein and a complete intersection", () => {
-    // checks.md row 4: complete intersections are Gorenstein (common practice).
+    // Koszul complex on a regular sequence, common practice: complete intersections are Gorenstein (common practice).
     const R = ringOf(GF, 3);
     const P = quotientProperties(I(R, ["x1^2", "x2^3+x1*x3^2"]));
     expect([P.cohenMacaulay, P.gorenstein, P.completeIntersection]).toEqual([true, true, true]);

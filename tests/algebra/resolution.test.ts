@@ -10,8 +10,8 @@ const FIELDS = [
 ] as const;
 
 describe.each(FIELDS)("minimal resolutions over %s", (_name, F) => {
-  it("checks.md row 1: the Koszul complex resolves k over k[x1..xn], β_i = C(n, i) in degree i", () => {
-    // Koszul complex on the variables (checks.md row 1; common practice).
+  it("Koszul complex, common practice: the Koszul complex resolves k over k[x1..xn], β_i = C(n, i) in degree i", () => {
+    // Koszul complex on the variables (Koszul complex, common practice).
     for (let n = 1; n <= 6; n++) {
       const R = ringOf(F, n);
       const C = resolveQuotient(ideal(R, vars(R)));
@@ -22,7 +22,7 @@ describe.each(FIELDS)("minimal resolutions over %s", (_name, F) => {
     }
   });
 
-  it("checks.md row 2: the twisted cubic has β_{0,0}=1, β_{1,2}=3, β_{2,3}=2", () => {
+  it("Hilbert–Burch; Eagon–Northcott 1962: the twisted cubic has β_{0,0}=1, β_{1,2}=3, β_{2,3}=2", () => {
     // 2×2 minors of [x, y, z; y, z, w] (Hilbert–Burch; Eagon–Northcott 1962).
     const R = ringOf(F, 4);
     const [x, y, z, w] = vars(R);
@@ -32,7 +32,7 @@ describe.each(FIELDS)("minimal resolutions over %s", (_name, F) => {
     expectMinimalComplex(R, C);
   });
 
-  it("checks.md row 3: rational normal curves of degree d have β_i = i·C(d, i+1), all in degree i+1", () => {
+  it("Eagon–Northcott, Proc. Roy. Soc. A 1962: rational normal curves of degree d have β_i = i·C(d, i+1), all in degree i+1", () => {
     // 2×2 minors of the 2×d Hankel matrix (J. Eagon, D. Northcott, Proc. Roy. Soc. A 1962).
     for (let d = 2; d <= (F === QQ ? 4 : 6); d++) {
       const R = ringOf(F, d + 1);
@@ -47,13 +47,13 @@ describe.each(FIELDS)("minimal resolutions over %s", (_name, F) => {
     const R4 = ringOf(F, 5);
     const x = vars(R4);
     const C4 = resolveQuotient(ideal(R4, minors(R4, [x.slice(0, 4), x.slice(1, 5)], 2)));
-    expect(bettiTotals(C4.betti)).toEqual([1, 6, 8, 3]); // the d = 4 row of checks.md
+    expect(bettiTotals(C4.betti)).toEqual([1, 6, 8, 3]); // Eagon–Northcott 1962, d = 4
   });
 
-  it("checks.md row 4: complete intersections have the Koszul Betti numbers of their degrees", () => {
+  it("Koszul complex on a regular sequence, common practice: complete intersections have the Koszul Betti numbers of their degrees", () => {
     // f_i = x_i^{d_i} + (a form in x_{i+1}..x_n): the lex leading terms x_i^{d_i} are pairwise
     // coprime, so f_1..f_c is a regular sequence and the Koszul complex on it is the minimal
-    // resolution (checks.md row 4; common practice).
+    // resolution (Koszul complex on a regular sequence, common practice).
     const rand = rng(4);
     for (const [n, degs] of [[3, [2, 3]], [4, [2, 2, 3]], [4, [1, 2, 3, 2]], [5, [3, 2, 2]]] as const) {
       const R = ringOf(F, n);
@@ -79,7 +79,7 @@ describe.each(FIELDS)("minimal resolutions over %s", (_name, F) => {
     }
   });
 
-  it("checks.md row 9: 4×4 Pfaffians of the generic 5×5 alternating matrix give 1, 5, 5, 1 in degrees 0, 2, 3, 5", () => {
+  it("Buchsbaum–Eisenbud, Amer. J. Math. 1977: 4×4 Pfaffians of the generic 5×5 alternating matrix give 1, 5, 5, 1 in degrees 0, 2, 3, 5", () => {
     // D. Buchsbaum, D. Eisenbud, Amer. J. Math. 1977 (Gorenstein ideals of codimension 3).
     const R = ringOf(F, 10);
     const A = alternating(R, 5);
@@ -201,7 +201,7 @@ describe("parsing round trip", () => {
 describe("weighted gradings", () => {
   it("a complete intersection in k[x, y, z] with degrees 1, 2, 3 has Koszul Betti numbers in weighted degrees", () => {
     // x^2 − y (degree 2) and y^3 − z^2 (degree 6) have coprime lex leading terms x^2, y^3, so they
-    // form a regular sequence (checks.md row 4; common practice); the alternating Betti sum is
+    // form a regular sequence (Koszul complex on a regular sequence, common practice); the alternating Betti sum is
     // the weighted Hilbert series numerator (1 − t^2)(1 − t^6).
     const R = polyRing(GF, ["x", "y", "z"], { degrees: [1, 2, 3] });
     const I = ideal(R, ["x^2-y", "y^3-z^2"].map((s) => parsePoly(R, s)));

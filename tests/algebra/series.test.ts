@@ -6,7 +6,7 @@ import { maximal, randomForm, ring, seeded } from "./local-helpers";
 
 describe("rational guess of a Poincaré series", () => {
   it("reproduces Tate's closed form from computed Betti numbers", () => {
-    // J. Tate 1957 (checks.md row 5): P_k(t) = (1+t)^n/(1−t^2)^c for a complete intersection.
+    // J. Tate, Illinois J. Math. 1957: P_k(t) = (1+t)^n/(1−t^2)^c for a complete intersection.
     const S = ring(3);
     const next = seeded(3);
     const J = A.ideal(S, [randomForm(S, 2, next), randomForm(S, 3, next)]);

@@ -1,4 +1,4 @@
-// checks.md row 13: reduced Gröbner bases of small random systems agree term for term with
+// SymPy's groebner (python3-sympy): reduced Gröbner bases of small random systems agree term for term with
 // SymPy's groebner(..., order=..., modulus=p) (SymPy, Debian package python3-sympy).
 import { beforeAll, describe, expect, it } from "vitest";
 import * as A from "@/lib/algebra";
@@ -37,7 +37,7 @@ function ours(s: SympySystem): string[] {
   ).sort();
 }
 
-describe("reduced Gröbner bases agree with SymPy (checks.md row 13)", () => {
+describe("reduced Gröbner bases agree with SymPy (python3-sympy)", () => {
   const systems = buildSystems();
   let results: SympyResult[] = [];
 

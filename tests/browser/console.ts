@@ -61,7 +61,7 @@ const shot = (page: Page, dir: string, name: string) => page.screenshot({ path: 
 browserTest("console: a mistake is underlined with its message before anything runs", async ({ page, baseUrl, artifactsDir }) => {
   await ensureTestGroup();
   await freshSession(page, baseUrl);
-  // notation.md §4: `2x` is a parse error whose message suggests `2*x`.
+  // grammar/README.md §1: `2x` is a parse error whose message suggests `2*x`.
   await typeInput(page, ["S := Q[x, y]", "f := 2x + y"]);
   const mark = page.locator(".cm-lintRange-error").first();
   await mark.waitFor();

@@ -5,7 +5,7 @@ describe("bettiGrid", () => {
   it("lays out the twisted cubic: rows 0 and 1, totals 1, 3, 2", () => {
     // The twisted cubic's ideal of 2×2 minors of a 2×3 matrix is resolved by the
     // Eagon–Northcott complex 0 ← S ← S(−2)^3 ← S(−3)^2 ← 0 (Eagon and Northcott 1962;
-    // checks.md row 2).
+    // Hilbert–Burch; Eagon–Northcott 1962).
     const g = bettiGrid(
       [
         [0, 0, 1],

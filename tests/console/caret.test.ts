@@ -3,7 +3,7 @@ import { errorCaret } from "@/app/_console/render/caret";
 
 describe("errorCaret", () => {
   it("puts carets under a one-line span (to exclusive, 1-based)", () => {
-    // notation.md §8: "type error at 1:13-1:14" names columns 13 up to 14.
+    // grammar/README.md §8: "type error at 1:13-1:14" names columns 13 up to 14.
     const c = errorCaret("I := <x>\nburch_index(I)", { from: { line: 2, col: 13 }, to: { line: 2, col: 14 } });
     expect(c.lineNumber).toBe(2);
     expect(c.line).toBe("burch_index(I)");

@@ -8,7 +8,7 @@ const at = (marked: string) => {
 };
 
 describe("completionPlace", () => {
-  it("recognises a property after a dot (notation.md §3: R.vars)", () => {
+  it("recognises a property after a dot (grammar/signatures.ts: R.vars)", () => {
     expect(at("R.|")).toEqual({ kind: "property", dot: 1, from: 2 });
     expect(at("resolve(S / I).be|")).toEqual({ kind: "property", dot: 14, from: 15 });
   });
@@ -17,13 +17,13 @@ describe("completionPlace", () => {
     expect(at("2..|").kind).toBe("name");
   });
 
-  it("offers options inside a call (notation.md §5: resolve(M, length = n))", () => {
+  it("offers options inside a call (grammar/signatures.ts: resolve(M, length = n))", () => {
     expect(at("resolve(|")).toEqual({ kind: "option", fn: "resolve", from: 8 });
     expect(at("resolve(S / I, le|")).toEqual({ kind: "option", fn: "resolve", from: 15 });
     expect(at("resolve(S / <x*y, |").kind).toBe("name");
   });
 
-  it("offers ring options after `;` in ring brackets (notation.md §3)", () => {
+  it("offers ring options after `;` in ring brackets (grammar/README.md §4)", () => {
     expect(at("Q[x, y; |")).toEqual({ kind: "ring-option", from: 8 });
     expect(at("Q[x, |").kind).toBe("name");
   });

@@ -17,7 +17,7 @@ describe("notation completion from the signature table", () => {
     const env = envFromObjects([{ name: "R", type: "Ring", value: { type: "Ring", vars: ["x", "y"] } }]);
     const r = complete("R.", env)!;
     const labels = r.options.map((o) => o.label);
-    // notation.md §3 lists R.vars, R.dim, R.depth, R.is_gorenstein among Ring properties.
+    // grammar/signatures.ts lists R.vars, R.dim, R.depth, R.is_gorenstein among Ring properties.
     for (const name of ["vars", "dim", "depth", "is_gorenstein"]) expect(labels).toContain(name);
     const vars = r.options.find((o) => o.label === "vars")!;
     expect(vars.info).toBe(propertiesOf("Ring").find((p) => p.name === "vars")!.description);
@@ -26,7 +26,7 @@ describe("notation completion from the signature table", () => {
   it("offers a Complex's properties after a call that returns one", () => {
     const env = envFromObjects([{ name: "S", type: "Ring", value: { type: "Ring", vars: ["x", "y", "z"] } }]);
     const labels = complete("resolve(S / <x*y, y*z>).", { ...env, currentRing: "S" })!.options.map((o) => o.label);
-    // notation.md §5: C.betti, C.ranks, C.length, C.map(i), C.complete.
+    // grammar/signatures.ts: C.betti, C.ranks, C.length, C.map(i), C.complete.
     expect(labels).toEqual(expect.arrayContaining(["betti", "ranks", "length", "map", "complete"]));
   });
 
@@ -37,7 +37,7 @@ describe("notation completion from the signature table", () => {
       const item = r.options.find((c) => c.label === o.name);
       expect(item?.info).toBe(o.description);
     }
-    // notation.md §5: resolve(M, length = n, degree = d)
+    // grammar/signatures.ts: resolve(M, length = n, degree = d)
     expect(resolve.options.map((o) => o.name)).toEqual(expect.arrayContaining(["length", "degree"]));
   });
 

@@ -15,7 +15,7 @@ describe("the guided first steps", () => {
   });
 
   it.each(GUIDED_TOUR.map((e) => [e.id, e.source] as const))("example %s passes the notation's checker in a new session", (_id, source) => {
-    // The grammar's own parser and type checker (notation.md §8: every program is
+    // The grammar's own parser and type checker (grammar/README.md §8: every program is
     // checked before anything runs) must accept each example with no bindings at all.
     expect(analyze(source).errors).toEqual([]);
   });

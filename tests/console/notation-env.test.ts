@@ -3,7 +3,7 @@ import { envFromObjects, typeOfValueJson } from "@/lib/editor/notation-env";
 
 describe("envFromObjects", () => {
   it("gives rings their variables and picks the newest ring as current", () => {
-    // notation.md §9: a Ring's JSON carries "vars"; the checker needs them to read literals.
+    // lib/notation/README.md (JSON encoding): a Ring's JSON carries "vars"; the checker needs them to read literals.
     const env = envFromObjects([
       { name: "S", type: "Ring", value: { type: "Ring", vars: ["x", "y", "z"] }, updatedAt: "2026-01-01T00:00:00Z" },
       { name: "I", type: "Ideal", value: { type: "Ideal" }, updatedAt: "2026-01-02T00:00:00Z" },

@@ -8,7 +8,7 @@ import { texOfRankChain } from "@/app/_console/render/chain";
 const parses = (tex: string) => expect(() => katex.renderToString(tex, { throwOnError: true })).not.toThrow();
 
 describe("texOfExpression", () => {
-  it("typesets the canonical text of notation.md §9", () => {
+  it("typesets the canonical text of lib/notation/README.md (the JSON encoding)", () => {
     expect(texOfExpression("x^2*y-2*x+3")).toBe("x^{2}y - 2x + 3");
     expect(texOfExpression("3/4*x^2-y")).toBe("\\frac{3}{4}x^{2} - y");
     expect(texOfExpression("-x*y")).toBe("-xy");

@@ -177,7 +177,7 @@ describe("every construct of the notation (grammar/README.md) parses and checks"
   });
 });
 
-describe("the examples of notation.md as written", () => {
+describe("the specification examples (grammar/README.md) as written", () => {
   test("§2 statements block, comments included", () => {
     const program = [
       "S := GF(32003)[x, y, z, w]      # definition: binds a name, saved as a named object",

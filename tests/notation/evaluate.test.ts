@@ -33,7 +33,7 @@ describe("rings and polynomials", () => {
   });
 
   it("GF(p) coefficients print in the symmetric range, Q coefficients as fractions", async () => {
-    // 4 ≡ −3 (mod 7) and −7/2 < −3 ≤ 7/2 (notation.md §9)
+    // 4 ≡ −3 (mod 7) and −7/2 < −3 ≤ 7/2 (lib/notation/README.md, the JSON encoding)
     expect(await text("S := GF(7)[x]\n4*x + 10")).toBe("-3*x+3");
     expect(await text("S := Q[x, y]\n3/4*x^2 - y")).toBe("3/4*x^2-y");
     expect(await text("S := Q[x]\n(x + 1/2)^2")).toBe("x^2+x+1/4");
@@ -104,19 +104,19 @@ describe("ideals (grammar/README.md §5)", () => {
 
   it("initial ideal, homogeneity, dimension, codimension and degree", async () => {
     const v = await values(`${S}I.initial == I\nI.is_homogeneous\nI.dim\nI.codim\nI.degree\n<x - 1>.is_homogeneous`);
-    // two planes in 4-space meeting at a point: dimension 2, codimension 2, degree 2 (checks.md row 7)
+    // two planes in 4-space meeting at a point: dimension 2, codimension 2, degree 2 (Serre, Algèbre locale, multiplicités, 1965)
     expect(v.slice(2).map((x) => x.text)).toEqual(["true", "true", "2", "2", "2", "false"]);
     // grevlex: the S-pair y(x^2 − y^2) − x(xy) = −y^3 completes the basis {x^2 − y^2, xy, y^3}
     // (Buchberger's criterion, by hand)
     expect(await text("S := Q[x, y]\n<x^2 - y^2, x*y>.initial == <x^2, x*y, y^3>")).toBe("true");
   });
 
-  it("ℓ(S/(I + J)) = 3 for the two planes I and J = (x − z, y − w) (checks.md row 7, Serre 1965)", async () => {
+  it("ℓ(S/(I + J)) = 3 for the two planes I and J = (x − z, y − w) (Serre, Algèbre locale, multiplicités, 1965)", async () => {
     const v = await values(`${S}J := <x - z, y - w>\nH := (S / (I + J)).hilbert\nH.values(4)\nsum(H.values(10))`);
     expect(v.slice(4).map((x) => x.text)).toEqual(["[1, 2, 0, 0, 0]", "3"]);
   });
 
-  it("ideal(list) and the Burch ideal of m^2: B(m^p) = m^2 (checks.md row 8)", async () => {
+  it("ideal(list) and the Burch ideal of m^2: B(m^p) = m^2 (Dao–Kobayashi–Takahashi, Algebra & Number Theory 2020)", async () => {
     expect(await text("S := Q[x, y, z]\nm := S.maximal\nideal([x, y]) == <x, y>")).toBe("true");
     expect(await text("S := Q[x, y, z]\nm := S.maximal\n(m^3).burch == m^2")).toBe("true");
     expect(await text("S := Q[x, y, z]\nm := S.maximal\n(m^3 : m) == m^2")).toBe("true");
@@ -124,14 +124,14 @@ describe("ideals (grammar/README.md §5)", () => {
 });
 
 describe("Hilbert series (grammar/README.md §6)", () => {
-  it("of a complete intersection: ∏(1 − t^{d_i}) / (1 − t)^n (checks.md row 4, common practice)", async () => {
+  it("of a complete intersection: ∏(1 − t^{d_i}) / (1 − t)^n (Koszul complex on a regular sequence, common practice)", async () => {
     // degrees 2 and 3 in 3 variables: (1 − t^2)(1 − t^3) = 1 − t^2 − t^3 + t^5
     const H = await last("S := Q[x, y, z]\n(S / <x^2, y^3>).hilbert");
     expect(H).toEqual({ type: "HilbertSeries", text: "(1-t^2-t^3+t^5)/(1-t)^3", numerator: ["1", "0", "-1", "-1", "0", "1"], denominator: "(1-t)^3" });
     expect((await last("S := Q[x, y, z]\nhilbert(S / <x^2, y^3>)")).text).toBe("(1-t^2-t^3+t^5)/(1-t)^3");
   });
 
-  it("Hilbert function of k[x,y,z]/m^3: C(2 + d, 2) for d < 3, then 0 (checks.md row 12)", async () => {
+  it("Hilbert function of k[x,y,z]/m^3: C(2 + d, 2) for d < 3, then 0 (counting monomials, common practice)", async () => {
     const v = await values("S := GF(32003)[x, y, z]\nH := (S / S.maximal^3).hilbert\nH.values(5)\nH.at(2)\nH.at(7)");
     expect(v.slice(2).map((x) => x.text)).toEqual(["[1, 3, 6, 0, 0, 0]", "6", "0"]);
   });
@@ -219,14 +219,14 @@ describe("determinants, minors and Pfaffians (engine part 2, already landed)", (
     expect(await text("S := Q[x, y, z, w]\ndet([x, y; z, w]) == x*w - y*z")).toBe("true");
   });
 
-  it("2×2 minors of [x, y, z; y, z, w]: the twisted cubic, Betti numbers 1, 3, 2 in degrees 0, 2, 3 (checks.md row 2)", async () => {
+  it("2×2 minors of [x, y, z; y, z, w]: the twisted cubic, Betti numbers 1, 3, 2 in degrees 0, 2, 3 (Hilbert–Burch; Eagon–Northcott 1962)", async () => {
     // so its Hilbert numerator is 1 − 3t^2 + 2t^3 (alternating sum of the Betti numbers)
     const v = await values("S := Q[x, y, z, w]\nI := minors([x, y, z; y, z, w], 2)\nI.gens.length\nI.codim\nI.degree\nI.hilbert");
     expect(v.slice(2, 5).map((x) => x.text)).toEqual(["3", "2", "3"]);
     expect(v[5]).toMatchObject({ numerator: ["1", "0", "-3", "2"], denominator: "(1-t)^4" });
   });
 
-  it("4×4 Pfaffians of the generic 5×5 alternating matrix: Betti numbers 1, 5, 5, 1 in degrees 0, 2, 3, 5 (checks.md row 9)", async () => {
+  it("4×4 Pfaffians of the generic 5×5 alternating matrix: Betti numbers 1, 5, 5, 1 in degrees 0, 2, 3, 5 (Buchsbaum–Eisenbud, Amer. J. Math. 1977)", async () => {
     // Buchsbaum–Eisenbud 1977: Gorenstein of codimension 3; numerator 1 − 5t^2 + 5t^3 − t^5
     const A = "[0, a, b, c, d; -a, 0, e, f, g; -b, -e, 0, h, i; -c, -f, -h, 0, j; -d, -g, -i, -j, 0]";
     const v = await values(`S := GF(32003)[a..j]\nI := pfaffians(${A}, 4)\nI.gens.length\nI.codim\nI.hilbert`);
@@ -251,7 +251,7 @@ describe("depth, Cohen–Macaulay, Gorenstein, complete intersection of S/J (eng
     expect(await text(`S := Q[x, y, z, w]\nR := S / <x*z, x*w, y*z, y*w>\n[R${props}`)).toBe("[1, 2, false, false, false]");
   });
 
-  it("the twisted cubic is arithmetically CM, not Gorenstein (last Betti number 2, checks.md row 2), not a CI", async () => {
+  it("the twisted cubic is arithmetically CM, not Gorenstein (last Betti number 2, Hilbert–Burch; Eagon–Northcott 1962), not a CI", async () => {
     expect(await text(`S := Q[x, y, z, w]\nR := S / minors([x, y, z; y, z, w], 2)\n[R${props}`)).toBe("[2, 2, true, false, false]");
   });
 
@@ -383,7 +383,7 @@ describe("cancellation", () => {
 
   it("a long Gröbner computation stops when the signal fires during it (aborted from its progress report)", async () => {
     const controller = new AbortController();
-    // cyclic-6 over Q (checks.md row 10): far more than one progress report long
+    // cyclic-6 over Q (Björck–Fröberg, J. Symbolic Comput. 1991): far more than one progress report long
     const cyclic6 = "S := Q[a, b, c, d, e, f]\nI := <a+b+c+d+e+f, a*b+b*c+c*d+d*e+e*f+f*a, a*b*c+b*c*d+c*d*e+d*e*f+e*f*a+f*a*b, a*b*c*d+b*c*d*e+c*d*e*f+d*e*f*a+e*f*a*b+f*a*b*c, a*b*c*d*e+b*c*d*e*f+c*d*e*f*a+d*e*f*a*b+e*f*a*b*c+f*a*b*c*d, a*b*c*d*e*f-1>\nI.degree";
     const progress: EvalEvent[] = [];
     const out = await evaluate(cyclic6, [], {

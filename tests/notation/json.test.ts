@@ -100,7 +100,7 @@ describe("§9 encoding of each type", () => {
   });
 
   it("BettiTable and Complex: entries [i, j, b] with j the internal degree", () => {
-    // twisted cubic: β_{0,0}=1, β_{1,2}=3, β_{2,3}=2 (checks.md row 2)
+    // twisted cubic: β_{0,0}=1, β_{1,2}=3, β_{2,3}=2 (Hilbert–Burch; Eagon–Northcott 1962)
     const betti = { type: "BettiTable" as const, entries: [[0, 0, 1], [1, 2, 3], [2, 3, 2]] as const, complete: true };
     expect(roundTrip(betti)).toMatchObject({ type: "BettiTable", entries: [[0, 0, 1], [1, 2, 3], [2, 3, 2]], complete: true });
     const C = roundTrip({ type: "Complex", ring: S, ranks: [1, 3, 2], betti, complete: true, maps: null });

@@ -44,7 +44,7 @@ describe("making modules", () => {
   });
 
   it("coker(A, degrees = …) keeps the twists of a resolution: coker of the second map is the ideal itself", async () => {
-    // twisted cubic: 0 ← S/I ← S ← S(−2)^3 ← S(−3)^2 ← 0 (checks.md row 2), so coker of the
+    // twisted cubic: 0 ← S/I ← S ← S(−2)^3 ← S(−3)^2 ← 0 (Hilbert–Burch; Eagon–Northcott 1962), so coker of the
     // second differential with its rows in degree 2 is F_1 / im d_2 ≅ im d_1 = I (exactness);
     // reg I = reg(S/I) + 1 = 2 (common practice)
     const v = await values(
@@ -65,7 +65,7 @@ describe("making modules", () => {
     expect(e.span.from).toEqual({ line: 2, col: 7 });
   });
 
-  it("image(x y z) is the maximal ideal and ker(x y z) the second syzygy of k (Koszul complex, checks.md row 1)", async () => {
+  it("image(x y z) is the maximal ideal and ker(x y z) the second syzygy of k (Koszul complex, common practice)", async () => {
     const v = await values(
       "S := Q[x, y, z]\nA := matrix([x, y, z])\nm := image(A)\nm.hilbert.values(3)\nm.min_gens\nK := ker(A)\nK.min_gens\nK.rank\nK.pd",
     );
@@ -87,13 +87,13 @@ describe("making modules", () => {
     expect(ints(v[5])).toEqual([0, 0, 3, 10, 22]);
   });
 
-  it("a quotient ring is read as the cyclic module S/I: the twisted cubic has pd 2, reg 1, degree 3 (checks.md row 2)", async () => {
+  it("a quotient ring is read as the cyclic module S/I: the twisted cubic has pd 2, reg 1, degree 3 (Hilbert–Burch; Eagon–Northcott 1962)", async () => {
     const v = await values("S := Q[x, y, z, w]\nR := S / minors([x, y, z; y, z, w], 2)\nR.pd\nR.reg\nR.degree\nR.rank\nR.min_gens\nR.presentation");
     expect([num(v[2]), num(v[3]), num(v[4]), num(v[5]), num(v[6])]).toEqual([2, 1, 3, 0, 1]);
     expect((v[7] as unknown as { rows: string[][] }).rows[0]).toHaveLength(3);
   });
 
-  it("R.residue is k: length 1, pd n, depth 0, reg 0, Koszul Betti numbers (checks.md row 1)", async () => {
+  it("R.residue is k: length 1, pd n, depth 0, reg 0, Koszul Betti numbers (Koszul complex, common practice)", async () => {
     const v = await values("S := GF(101)[a..e]\nk := S.residue\nk.length\nk.pd\nk.depth\nk.reg\nresolve(k).betti.totals");
     expect([num(v[2]), num(v[3]), num(v[4]), num(v[5])]).toEqual([1, 5, 0, 0]);
     expect(ints(v[6])).toEqual([1, 5, 10, 10, 5, 1]);
@@ -119,7 +119,7 @@ describe("making modules", () => {
 });
 
 describe("syzygies and Koszul complexes", () => {
-  it("syzygy(S/I, 1) is I and syzygy(k, p) has C(n, p) generators (checks.md row 1)", async () => {
+  it("syzygy(S/I, 1) is I and syzygy(k, p) has C(n, p) generators (Koszul complex, common practice)", async () => {
     const v = await values("S := Q[x, y, z, w]\nI := <x*y, z*w, x*z>\nsyzygy(S / I, 1).hilbert == module(I).hilbert\n[syzygy(S.residue, p).min_gens for p in 0..4]\nsyzygy(S.residue, 5).min_gens");
     expect(v[2]).toMatchObject({ type: "Bool", value: true });
     expect(ints(v[3])).toEqual([1, 4, 6, 4, 1]);
@@ -148,7 +148,7 @@ describe("syzygies and Koszul complexes", () => {
 });
 
 describe("tor, ext, tor_lengths, serre", () => {
-  it("Tor_i(S/I, k) has β_i(S/I) minimal generators (Tor_i(M, k) ≅ k^{β_i}, common practice; twisted cubic, checks.md row 2)", async () => {
+  it("Tor_i(S/I, k) has β_i(S/I) minimal generators (Tor_i(M, k) ≅ k^{β_i}, common practice; twisted cubic, Hilbert–Burch; Eagon–Northcott 1962)", async () => {
     const v = await values("S := Q[x, y, z, w]\nR := S / minors([x, y, z; y, z, w], 2)\n[tor(i, R, S.residue).min_gens for i in 0..3]\n[tor(i, S.residue, R).length for i in 0..3]");
     expect(ints(v[2])).toEqual([1, 3, 2, 0]);
     // balance of Tor: from the other side the same lengths
@@ -165,7 +165,7 @@ describe("tor, ext, tor_lengths, serre", () => {
     expect([num(v[4]), num(v[5])]).toEqual([1, 6]);
   });
 
-  it("Serre's example: two planes meeting at a point against a third plane, lengths 3, 1 and χ = 2 (checks.md row 7)", async () => {
+  it("Serre's example: two planes meeting at a point against a third plane, lengths 3, 1 and χ = 2 (Serre, Algèbre locale, multiplicités, 1965)", async () => {
     const v = await values("S := Q[x, y, z, w]\nA := S / <x*z, x*w, y*z, y*w>\nuse S\nB := S / <x - z, y - w>\ntor_lengths(A, B)\nserre(A, B)");
     expect(ints(v[4])).toEqual([3, 1, 0, 0]);
     expect(num(v[5])).toBe(2);

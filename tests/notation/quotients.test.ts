@@ -65,7 +65,7 @@ function rationalOf(v: ValueJson): { num: bigint[]; den: bigint[]; checked: numb
 const sameFunction = (a: bigint[], b: bigint[], c: bigint[], d: bigint[]) => expect(trim(mulZ(a, d))).toEqual(trim(mulZ(b, c)));
 
 describe("Poincaré series over quotient rings", () => {
-  it("k over k[x,y,z]/m^3 follows Golod's formula, and the guess reproduces it (checks.md row 6)", async () => {
+  it("k over k[x,y,z]/m^3 follows Golod's formula, and the guess reproduces it (Golod 1962)", async () => {
     // E. Golod, "On the homology of some local rings", Soviet Math. 1962: S/m^p is Golod, so
     // P(t) = (1+t)^3 / (1 − Σ β_i^S(S/m^3) t^{i+1}), with β^S(S/m^3) = 1, 10, 15, 6
     // (J. Eagon, D. Northcott, Proc. Roy. Soc. A 1962).
@@ -81,7 +81,7 @@ describe("Poincaré series over quotient rings", () => {
     expect(P.text).toMatch(/guessed rational function .* fitting all 8 exact terms computed/);
   });
 
-  it("k over a complete intersection of mixed degrees follows Tate's formula (checks.md row 5)", async () => {
+  it("k over a complete intersection of mixed degrees follows Tate's formula (Tate, Illinois J. Math. 1957)", async () => {
     // J. Tate, "Homology of Noetherian rings and local rings", Illinois J. Math. 1957:
     // P(t) = (1+t)^n/(1−t^2)^c for a complete intersection inside m^2.
     const v = await values(
@@ -103,7 +103,7 @@ describe("Poincaré series over quotient rings", () => {
     sameFunction(g.num, g.den, [1n], powZ([1n, -1n], 3));
   });
 
-  it("over a polynomial ring the series is the finite one of the resolution (Koszul, checks.md row 1)", async () => {
+  it("over a polynomial ring the series is the finite one of the resolution (Koszul complex, common practice)", async () => {
     const v = await last("S := Q[a..d]\npoincare(S / S.maximal, terms = 7).coefficients");
     expect(ints(v)).toEqual([1n, 4n, 6n, 4n, 1n, 0n, 0n]);
   });
@@ -144,7 +144,7 @@ describe("resolve over a quotient ring", () => {
   it("streams each finished Betti column while it runs", async () => {
     const out = await run("S := GF(32003)[x, y, z]\nR := S / S.maximal^2\nresolve(R / R.maximal, length = 4)");
     const partial = out.events.filter((e) => e.event === "partial");
-    // checks.md row 6: β_i = 3^i over k[x,y,z]/m^2
+    // Golod 1962: β_i = 3^i over k[x,y,z]/m^2
     const totals = partial.map((e) => (e as { value: { entries: [number, number, number][] } }).value.entries.reduce((s, [, , b]) => s + b, 0));
     expect(totals).toEqual([1, 3, 9, 27, 81]);
   });
@@ -234,7 +234,7 @@ describe("socles, the residue field as a summand", () => {
 });
 
 describe("Burch index", () => {
-  it("m^p has Burch ideal m^2 and index n (checks.md row 8)", async () => {
+  it("m^p has Burch ideal m^2 and index n (Dao–Kobayashi–Takahashi, Algebra & Number Theory 2020)", async () => {
     const v = await values("S := GF(101)[x, y, z]\n[burch_index(S / S.maximal^p) for p in 2..4]\n(S.maximal^3).burch == S.maximal^2\n(S / S.maximal^2).is_burch");
     expect(ints(v[1])).toEqual([3n, 3n, 3n]);
     expect(bool(v[2])).toBe(true);

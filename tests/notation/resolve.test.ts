@@ -20,7 +20,7 @@ async function values(source: string): Promise<ValueJson[]> {
 const entries = (v: ValueJson) => (v as unknown as { entries: [number, number, number][] }).entries;
 
 describe("resolve over a polynomial ring", () => {
-  it("gives the twisted cubic's Betti table 1, 3, 2 (checks.md row 2; Eagon–Northcott 1962)", async () => {
+  it("gives the twisted cubic's Betti table 1, 3, 2 (Hilbert–Burch; Eagon–Northcott 1962)", async () => {
     const [, , betti, ranks] = await values("S := Q[x, y, z, w]\nC := resolve(S / minors([x, y, z; y, z, w], 2))\nC.betti\nC.ranks");
     expect(entries(betti)).toEqual([
       [0, 0, 1],
@@ -43,7 +43,7 @@ describe("resolve over a polynomial ring", () => {
     expect(v[5]).toMatchObject({ type: "Bool", value: true });
   });
 
-  it("marks a resolution cut by a length bound as incomplete (Koszul: β_i = C(4, i), checks.md row 1)", async () => {
+  it("marks a resolution cut by a length bound as incomplete (Koszul: β_i = C(4, i), Koszul complex, common practice)", async () => {
     const [, , betti, complete] = await values("S := GF(101)[a..d]\nC := resolve(S / S.maximal, length = 2)\nC.betti\nC.complete");
     expect(entries(betti)).toEqual([
       [0, 0, 1],
@@ -56,7 +56,7 @@ describe("resolve over a polynomial ring", () => {
   it("streams each finished Betti column as a partial value", async () => {
     const out = await run("S := GF(101)[a..d]\nresolve(S / S.maximal).betti");
     const partial = out.events.filter((e) => e.event === "partial").map((e) => entries((e as { value: ValueJson }).value));
-    // Koszul complex on 4 variables: columns 1, 4, 6, 4, 1 (checks.md row 1)
+    // Koszul complex on 4 variables: columns 1, 4, 6, 4, 1 (Koszul complex, common practice)
     expect(partial.map((col) => col.map(([, , b]) => b).reduce((s, b) => s + b, 0))).toEqual([1, 4, 6, 4, 1]);
   });
 

@@ -20,7 +20,7 @@ export interface RationalGuess {
 export function guessRational(s: TruncatedSeries, margin = 2): RationalGuess | null {
   const a = s.coeffs.map((c) => rat(c));
   const N = a.length;
-  let C: Rat[] = [RAT_ONE];
+  const C: Rat[] = [RAT_ONE];
   let B: Rat[] = [RAT_ONE];
   let L = 0, m = 1;
   let b: Rat = RAT_ONE;
