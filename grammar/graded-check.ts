@@ -22,7 +22,8 @@ const MAX_POWER = 40n;
 
 function characteristicOf(base: Expr): bigint | null {
   if (base.kind === "Identifier" && base.name === "Q") return 0n;
-  if (base.kind === "Call" && base.callee.kind === "Identifier" && base.callee.name === "GF" && base.args[0]?.kind === "IntLit") return base.args[0].value;
+  if (base.kind === "Call" && base.callee.kind === "Identifier" && base.callee.name === "GF" && base.args[0]?.kind === "IntLit")
+    return base.args[0].value;
   return null;
 }
 
@@ -115,7 +116,11 @@ interface IdealFacts {
   readonly mixed: { readonly generator: Expr; readonly degrees: readonly number[] } | null;
 }
 
-function idealFacts(lit: IdealLit, names: ReadonlyMap<Identifier, NameResolution>, rings: ReadonlyMap<string, RingFacts>): IdealFacts | null {
+function idealFacts(
+  lit: IdealLit,
+  names: ReadonlyMap<Identifier, NameResolution>,
+  rings: ReadonlyMap<string, RingFacts>,
+): IdealFacts | null {
   let ring: string | null = null;
   const walk = (e: Expr): void => {
     if (e.kind === "Identifier") {
@@ -184,7 +189,11 @@ export function gradedProblems(
         const ringName = arg.left.name;
         if (!rings.has(ringName)) return;
         const facts =
-          arg.right.kind === "IdealLit" ? idealFacts(arg.right, names, rings) : arg.right.kind === "Identifier" ? (ideals.get(arg.right.name) ?? null) : null;
+          arg.right.kind === "IdealLit"
+            ? idealFacts(arg.right, names, rings)
+            : arg.right.kind === "Identifier"
+              ? (ideals.get(arg.right.name) ?? null)
+              : null;
         if (!facts || facts.ring !== ringName || !facts.mixed) return;
         const { generator, degrees } = facts.mixed;
         problems.push({

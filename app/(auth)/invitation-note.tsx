@@ -15,8 +15,8 @@ export function InvitationNote({ invitation, action }: { invitation: InvitationS
   return (
     <div className="mb-4 rounded-md border border-ink/10 bg-paper-deep px-3 py-2 text-sm" role="note" data-testid="invitation-note">
       <p>
-        {invitation.invitedBy ?? "A team lead"} invited <strong>{invitation.email}</strong> to join{" "}
-        <strong>{invitation.teamName}</strong> as {invitation.role}.
+        {invitation.invitedBy ?? "A team lead"} invited <strong>{invitation.email}</strong> to join <strong>{invitation.teamName}</strong>{" "}
+        as {invitation.role}.
       </p>
       <p className="mt-1 text-ink-soft">
         {invitation.status === "pending"

@@ -13,7 +13,10 @@ export function ReferenceSearch() {
   }, []);
 
   useEffect(() => {
-    const words = query.toLowerCase().split(/\s+/).filter((w) => w !== "");
+    const words = query
+      .toLowerCase()
+      .split(/\s+/)
+      .filter((w) => w !== "");
     let count = 0;
     document.querySelectorAll<HTMLElement>("[data-ref-entry]").forEach((el) => {
       const text = (el.textContent ?? "").toLowerCase();

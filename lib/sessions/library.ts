@@ -37,7 +37,13 @@ export async function searchLibrary(user: CurrentUser, query: LibraryQuery = {})
   const q = query.text?.trim() ? containsPattern(query.text.trim()) : null;
   const type = query.type?.trim() || null;
   const limit = Math.min(Math.max(query.limit ?? 200, 1), 500);
-  const idList = sessionIds.length > 0 ? sql.join(sessionIds.map((id) => sql`${id}::uuid`), sql`, `) : sql`NULL::uuid`;
+  const idList =
+    sessionIds.length > 0
+      ? sql.join(
+          sessionIds.map((id) => sql`${id}::uuid`),
+          sql`, `,
+        )
+      : sql`NULL::uuid`;
   const rows = await db().execute<{
     id: string;
     name: string;

@@ -25,7 +25,12 @@ export async function foreignRedefinitions(user: CurrentUser, sessionId: string,
 }
 
 /// Throws 409 when the cell would replace others' objects and the caller did not confirm.
-export async function requireRedefinitionConsent(user: CurrentUser, sessionId: string, names: readonly string[], confirmed: boolean): Promise<void> {
+export async function requireRedefinitionConsent(
+  user: CurrentUser,
+  sessionId: string,
+  names: readonly string[],
+  confirmed: boolean,
+): Promise<void> {
   if (confirmed) return;
   const foreign = await foreignRedefinitions(user, sessionId, names);
   if (foreign.length === 0) return;

@@ -34,7 +34,8 @@ async function newSession(client: TestClient, title?: string): Promise<string> {
 
 async function run(client: TestClient, sessionId: string, source: string, extra: Record<string, unknown> = {}) {
   const r = await client.json(`/api/sessions/${sessionId}/cells`, { source, ...extra });
-  if (r.status !== 200) return { status: r.status, body: (await r.json()) as { error: { code: string; message: string; details?: unknown } } };
+  if (r.status !== 200)
+    return { status: r.status, body: (await r.json()) as { error: { code: string; message: string; details?: unknown } } };
   const events = await allEvents(r);
   const done = events.at(-1)!;
   expect(done.event).toBe("done");
@@ -43,7 +44,12 @@ async function run(client: TestClient, sessionId: string, source: string, extra:
 
 beforeAll(async () => {
   group = await ensureTestGroup();
-  for (const [c, k] of [[lead, "lead"], [member, "member"], [outsider, "outsider"], [guest, "guest"]] as const) {
+  for (const [c, k] of [
+    [lead, "lead"],
+    [member, "member"],
+    [outsider, "outsider"],
+    [guest, "guest"],
+  ] as const) {
     expect((await c.signIn(TEST_ACCOUNTS[k].email, TEST_ACCOUNTS[k].password)).status).toBe(200);
   }
 }, 60_000);
@@ -60,7 +66,9 @@ describe("sessions: rename, delete, search, default titles", () => {
     const id = await newSession(member, `${TAG} rename me`);
     await db().update(sessions).set({ teamId: group.teamId, visibility: "team" }).where(eq(sessions.id, id));
     expect((await member.json(`/api/sessions/${id}`, { title: `${TAG} renamed` }, "PATCH")).status).toBe(200);
-    expect(((await (await member.request(`/api/sessions/${id}`)).json()) as { session: { title: string } }).session.title).toBe(`${TAG} renamed`);
+    expect(((await (await member.request(`/api/sessions/${id}`)).json()) as { session: { title: string } }).session.title).toBe(
+      `${TAG} renamed`,
+    );
     // the lead may edit the team's session but not rename or delete someone else's
     expect((await lead.json(`/api/sessions/${id}`, { title: "taken over" }, "PATCH")).status).toBe(403);
     expect((await lead.request(`/api/sessions/${id}`, { method: "DELETE" })).status).toBe(403);
@@ -88,14 +96,20 @@ describe("sessions: rename, delete, search, default titles", () => {
   it("searches titles and content (cell sources, object names), only among readable sessions", async () => {
     const id = await newSession(member, `${TAG} search target`);
     await run(member, id, `${TAG.replace("-", "_")}_ideal := 42`);
-    const byTitle = (await (await member.request(`/api/sessions?q=${encodeURIComponent(`${TAG} search`)}`)).json()) as { sessions: { id: string; match: string | null }[] };
+    const byTitle = (await (await member.request(`/api/sessions?q=${encodeURIComponent(`${TAG} search`)}`)).json()) as {
+      sessions: { id: string; match: string | null }[];
+    };
     expect(byTitle.sessions.map((s) => s.id)).toEqual([id]);
     expect(byTitle.sessions[0]!.match).toBeNull();
-    const byContent = (await (await member.request(`/api/sessions?q=${encodeURIComponent(`${TAG.replace("-", "_")}_ideal`)}`)).json()) as { sessions: { id: string; match: string | null }[] };
+    const byContent = (await (await member.request(`/api/sessions?q=${encodeURIComponent(`${TAG.replace("-", "_")}_ideal`)}`)).json()) as {
+      sessions: { id: string; match: string | null }[];
+    };
     expect(byContent.sessions.map((s) => s.id)).toEqual([id]);
     expect(byContent.sessions[0]!.match).toContain(":= 42");
     // a private session never shows up in someone else's search
-    const other = (await (await outsider.request(`/api/sessions?q=${encodeURIComponent(`${TAG} search`)}`)).json()) as { sessions: unknown[] };
+    const other = (await (await outsider.request(`/api/sessions?q=${encodeURIComponent(`${TAG} search`)}`)).json()) as {
+      sessions: unknown[];
+    };
     expect(other.sessions).toEqual([]);
     // LIKE's wildcards are taken literally
     const wild = (await (await member.request(`/api/sessions?q=${encodeURIComponent("%_%_%_%_zz")}`)).json()) as { sessions: unknown[] };
@@ -108,7 +122,9 @@ describe("library and history across sessions", () => {
     const a = await newSession(member, `${TAG} library source`);
     const b = await newSession(member, `${TAG} library target`);
     await run(member, a, "S := Q[x, y]\nlibideal := <x^2, x*y>");
-    const byName = (await (await member.request("/api/library?q=libideal")).json()) as { objects: { id: string; name: string; type: string; sessionId: string; via: string; mine: boolean }[] };
+    const byName = (await (await member.request("/api/library?q=libideal")).json()) as {
+      objects: { id: string; name: string; type: string; sessionId: string; via: string; mine: boolean }[];
+    };
     const hit = byName.objects.find((o) => o.sessionId === a && o.name === "libideal");
     expect(hit).toMatchObject({ type: "Ideal", via: "own session", mine: true });
     const byContent = (await (await member.request(`/api/library?q=${encodeURIComponent("x*y")}`)).json()) as { objects: { id: string }[] };
@@ -134,7 +150,9 @@ describe("library and history across sessions", () => {
     await run(member, a, src);
     await run(member, b, src);
     await run(member, b, `${mark}_b := 8`);
-    const r = (await (await member.request(`/api/history?q=${encodeURIComponent(`${mark}_a`)}`)).json()) as { entries: { source: string; sessionId: string }[] };
+    const r = (await (await member.request(`/api/history?q=${encodeURIComponent(`${mark}_a`)}`)).json()) as {
+      entries: { source: string; sessionId: string }[];
+    };
     expect(r.entries.map((e) => e.source)).toEqual([src]);
     // the latest run wins
     expect(r.entries[0]!.sessionId).toBe(b);
@@ -155,7 +173,11 @@ describe("shared sessions are safe", () => {
 
   it("records who ran each cell", async () => {
     expect((await run(member, shared, "K := <y^3>")).status).toBe(200);
-    const cells = ((await (await guest.request(`/api/sessions/${shared}/cells`)).json()) as { cells: { source: string; author: { id: string; name: string } | null }[] }).cells;
+    const cells = (
+      (await (await guest.request(`/api/sessions/${shared}/cells`)).json()) as {
+        cells: { source: string; author: { id: string; name: string } | null }[];
+      }
+    ).cells;
     expect(cells.map((c) => c.author?.name)).toEqual([TEST_ACCOUNTS.lead.name, TEST_ACCOUNTS.member.name]);
     expect(cells[1]!.author!.id).toBe(group.users.member.id);
   });
@@ -174,7 +196,9 @@ describe("shared sessions are safe", () => {
     expect((await run(member, shared, "K := <y^2>\nL := <x>")).status).toBe(200);
     const ok = await run(member, shared, "J := <y>", { redefine: true });
     expect(ok.status).toBe(200);
-    const objects = ((await (await member.request(`/api/sessions/${shared}/objects`)).json()) as { objects: { name: string; definedBy: string }[] }).objects;
+    const objects = (
+      (await (await member.request(`/api/sessions/${shared}/objects`)).json()) as { objects: { name: string; definedBy: string }[] }
+    ).objects;
     expect(objects.find((o) => o.name === "J")!.definedBy).toBe(group.users.member.id);
     // now the lead is the one asked
     expect((await run(lead, shared, "J := <x>")).status).toBe(409);
@@ -189,7 +213,10 @@ describe("invitations land in the invitee's own session", () => {
     madeTeams.push(teamId);
     await newSession(lead, `${TAG} lead work`);
     const email = `invitee-${TAG}@console.test.example`;
-    const [u] = await db().insert(users).values({ email, displayName: "Iris Invitee", passwordHash: await hashPassword("invitee-pass-5531") }).returning();
+    const [u] = await db()
+      .insert(users)
+      .values({ email, displayName: "Iris Invitee", passwordHash: await hashPassword("invitee-pass-5531") })
+      .returning();
     madeUsers.push(u!.id);
     const invitee = new TestClient(testAddress(234));
     expect((await invitee.signIn(email, "invitee-pass-5531")).status).toBe(200);
@@ -223,9 +250,13 @@ describe("the team page and sharing with an unknown address", () => {
   it("lists team-visible sessions besides explicit shares", async () => {
     const id = await newSession(member, `${TAG} visible to team`);
     await db().update(sessions).set({ teamId: group.teamId, visibility: "team" }).where(eq(sessions.id, id));
-    const detail = (await (await guest.request(`/api/teams/${group.teamId}`)).json()) as { sharedSessions: { id: string; role: string; via: string }[] };
+    const detail = (await (await guest.request(`/api/teams/${group.teamId}`)).json()) as {
+      sharedSessions: { id: string; role: string; via: string }[];
+    };
     expect(detail.sharedSessions.find((s) => s.id === id)).toMatchObject({ role: "viewer", via: "team visibility" });
-    const asMember = (await (await lead.request(`/api/teams/${group.teamId}`)).json()) as { sharedSessions: { id: string; role: string }[] };
+    const asMember = (await (await lead.request(`/api/teams/${group.teamId}`)).json()) as {
+      sharedSessions: { id: string; role: string }[];
+    };
     expect(asMember.sharedSessions.find((s) => s.id === id)).toMatchObject({ role: "editor" });
   });
 
@@ -258,7 +289,10 @@ describe("exports choose cells", () => {
     const skipped = await (await member.request(`/api/sessions/${id}/export?format=markdown&skipErrors=1`)).text();
     expect(skipped).not.toContain("division by zero");
     expect(skipped).toContain("c := 3");
-    const chosen = (await (await member.request(`/api/sessions/${id}/export?format=json&cells=2`)).json()) as { cells: { source: string }[]; objects: { name: string }[] };
+    const chosen = (await (await member.request(`/api/sessions/${id}/export?format=json&cells=2`)).json()) as {
+      cells: { source: string }[];
+      objects: { name: string }[];
+    };
     expect(chosen.cells.map((c) => c.source)).toEqual(["c := 3"]);
     expect(chosen.objects.map((o) => o.name)).toEqual(["c"]);
     expect((await member.request(`/api/sessions/${id}/export?format=json&cells=a`)).status).toBe(400);

@@ -25,7 +25,9 @@ describe("palette ranking", () => {
   it("needs every typed word, and matches keywords at a lower rank", () => {
     expect(paletteScore("New session", "new zzz")).toBe(0);
     expect(paletteScore("Insert name: I (Ideal)", "groebner", ["groebner basis of I"])).toBeGreaterThan(0);
-    expect(paletteScore("Insert name: I (Ideal)", "groebner", ["groebner basis of I"])).toBeLessThan(paletteScore("Groebner basis", "groebner"));
+    expect(paletteScore("Insert name: I (Ideal)", "groebner", ["groebner basis of I"])).toBeLessThan(
+      paletteScore("Groebner basis", "groebner"),
+    );
     expect(paletteScore("anything", "  ")).toBe(1);
   });
 });

@@ -8,7 +8,15 @@ import { typeWords } from "@/app/_console/render/type-words";
 import { viewOfValue } from "@/app/_console/render/view-model";
 import type { ValueReading as ValueJson } from "@/lib/wire/reading";
 
-const S: ValueJson = { type: "Ring", text: "Q[x, y, z]", field: "Q", vars: ["x", "y", "z"], degrees: [1, 1, 1], order: "grevlex", ideal: [] };
+const S: ValueJson = {
+  type: "Ring",
+  text: "Q[x, y, z]",
+  field: "Q",
+  vars: ["x", "y", "z"],
+  degrees: [1, 1, 1],
+  order: "grevlex",
+  ideal: [],
+};
 // The resolution of S/(xy, yz, xz), three coordinate points of P²:
 // 0 ← S ← S(−2)³ ← S(−3)² ← 0 (Eisenbud, The Geometry of Syzygies, GTM 229, §3A; the
 // Hilbert–Burch matrix is the second differential).
@@ -16,18 +24,35 @@ const threePoints = {
   type: "Complex",
   text: "complex of ranks 1, 3, 2",
   ranks: [1, 3, 2],
-  betti: [[0, 0, 1], [1, 2, 3], [2, 3, 2]],
+  betti: [
+    [0, 0, 1],
+    [1, 2, 3],
+    [2, 3, 2],
+  ],
   complete: true,
   maps: [
     { type: "Matrix", text: "[x*y, x*z, y*z]", rows: [["x*y", "x*z", "y*z"]] },
-    { type: "Matrix", text: "[z, 0; -y, y; 0, -x]", rows: [["z", "0"], ["-y", "y"], ["0", "-x"]] },
+    {
+      type: "Matrix",
+      text: "[z, 0; -y, y; 0, -x]",
+      rows: [
+        ["z", "0"],
+        ["-y", "y"],
+        ["0", "-x"],
+      ],
+    },
   ],
   ring: S,
 } as unknown as ValueJson;
 
 describe("a free resolution shows its free modules with their twists over the named ring", () => {
   it("names the ring by the session's binding and twists each summand", () => {
-    expect(ringNameOf(S, [{ name: "T", value: { ...S, vars: ["a"] } }, { name: "S", value: S }])).toBe("S");
+    expect(
+      ringNameOf(S, [
+        { name: "T", value: { ...S, vars: ["a"] } },
+        { name: "S", value: S },
+      ]),
+    ).toBe("S");
     const r = resolutionView(threePoints as never, "S");
     expect(r.modules).toEqual(["S", "S(-2)^{3}", "S(-3)^{2}"]);
     expect(r.chain).toBe("0 \\leftarrow S \\leftarrow S(-2)^{3} \\leftarrow S(-3)^{2} \\leftarrow 0");
@@ -36,7 +61,12 @@ describe("a free resolution shows its free modules with their twists over the na
   });
 
   it("mixes twists in one module, lowest degree first, and falls back to R without a name", () => {
-    expect(texOfTwistedFree("S", [[3, 1], [2, 2]])).toBe("S(-2)^{2} \\oplus S(-3)");
+    expect(
+      texOfTwistedFree("S", [
+        [3, 1],
+        [2, 2],
+      ]),
+    ).toBe("S(-2)^{2} \\oplus S(-3)");
     const v = viewOfValue(threePoints);
     expect(v.kind).toBe("complex");
     if (v.kind === "complex") expect(v.resolution.modules[1]).toBe("R(-2)^{3}");
@@ -78,7 +108,12 @@ describe("a Hilbert series shows reduced form, h-vector, dimension, degree and H
 
 describe("records and type tags", () => {
   it("keeps the field order the user wrote, whatever order storage gave the keys", () => {
-    const v = viewOfValue({ type: "Record", text: "{depth: 1, a: 2}", fields: { a: { type: "Int", text: "2" }, depth: { type: "Int", text: "1" } }, fieldOrder: ["depth", "a"] } as unknown as ValueJson);
+    const v = viewOfValue({
+      type: "Record",
+      text: "{depth: 1, a: 2}",
+      fields: { a: { type: "Int", text: "2" }, depth: { type: "Int", text: "1" } },
+      fieldOrder: ["depth", "a"],
+    } as unknown as ValueJson);
     expect(v.kind === "record" && v.fields.map(([k]) => k)).toEqual(["depth", "a"]);
   });
 
@@ -91,7 +126,16 @@ describe("records and type tags", () => {
 });
 
 describe("copy formats", () => {
-  const betti = { type: "BettiTable", text: "…", entries: [[0, 0, 1], [1, 2, 3], [2, 3, 2]], complete: true } as unknown as ValueJson;
+  const betti = {
+    type: "BettiTable",
+    text: "…",
+    entries: [
+      [0, 0, 1],
+      [1, 2, 3],
+      [2, 3, 2],
+    ],
+    complete: true,
+  } as unknown as ValueJson;
 
   it("offers CSV for tables only", () => {
     expect(copyFormats(betti)).toContain("csv");

@@ -38,7 +38,9 @@ describe("graded resolution of a non-homogeneous ideal", () => {
 
   it("leaves what it cannot read exactly to the evaluator", () => {
     // a ring from an earlier cell: unknown here
-    expect(check("F := resolve(S / <x^2 + y>)", { bindings: {}, currentRing: null }).errors.every((e) => !/homogeneous/.test(e.message))).toBe(true);
+    expect(
+      check("F := resolve(S / <x^2 + y>)", { bindings: {}, currentRing: null }).errors.every((e) => !/homogeneous/.test(e.message)),
+    ).toBe(true);
     // a non-homogeneous ideal is fine where no grading is needed
     expect(messages("S := Q[x, y]\nI := <x^2 + y>\nI.dim")).toEqual([]);
   });

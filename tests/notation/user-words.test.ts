@@ -19,8 +19,10 @@ describe("errors in the user's words", () => {
 
   it("drops one or several leading internal names and leaves sentences alone", () => {
     expect(inUsersWords("resolveQuotient: the ideal is not homogeneous")).toBe("the ideal is not homogeneous");
-    expect(inUsersWords("torLengths: resolve: the length must be a non-negative integer")).toBe("the length must be a non-negative integer");
-    expect(inUsersWords("column 2 of \"x+\": expected a term")).toBe("column 2 of \"x+\": expected a term");
+    expect(inUsersWords("torLengths: resolve: the length must be a non-negative integer")).toBe(
+      "the length must be a non-negative integer",
+    );
+    expect(inUsersWords('column 2 of "x+": expected a term')).toBe('column 2 of "x+": expected a term');
     expect(inUsersWords("the ring has 3 variables")).toBe("the ring has 3 variables");
   });
 });

@@ -10,12 +10,34 @@ import { bettiTabular, ringTex } from "@/lib/export/tex";
 import type { Transcript, ValueJsonLike } from "@/lib/export/transcript";
 
 const int = (n: number): ValueJsonLike => ({ type: "Int", text: String(n), value: String(n) });
-const ring: ValueJsonLike = { type: "Ring", text: "Q[x, y, z]", field: "Q", vars: ["x", "y", "z"], degrees: [1, 1, 1], order: "grevlex", ideal: [] };
+const ring: ValueJsonLike = {
+  type: "Ring",
+  text: "Q[x, y, z]",
+  field: "Q",
+  vars: ["x", "y", "z"],
+  degrees: [1, 1, 1],
+  order: "grevlex",
+  ideal: [],
+};
 // S/I for I = (xy, yz, xz), three coordinate points of P²: β00 = 1, β12 = 3, β23 = 2
 // (Eisenbud, The Geometry of Syzygies, GTM 229, §3A: points in general position).
-const betti: ValueJsonLike = { type: "BettiTable", text: "…", entries: [[0, 0, 1], [1, 2, 3], [2, 3, 2]], complete: true };
+const betti: ValueJsonLike = {
+  type: "BettiTable",
+  text: "…",
+  entries: [
+    [0, 0, 1],
+    [1, 2, 3],
+    [2, 3, 2],
+  ],
+  complete: true,
+};
 // jsonb hands the keys back sorted (shorter first); `fieldOrder` keeps what the user wrote.
-const record: ValueJsonLike = { type: "Record", text: "{depth: 1, a: 2}", fields: { a: int(2), depth: int(1) }, fieldOrder: ["depth", "a"] };
+const record: ValueJsonLike = {
+  type: "Record",
+  text: "{depth: 1, a: 2}",
+  fields: { a: int(2), depth: int(1) },
+  fieldOrder: ["depth", "a"],
+};
 const list: ValueJsonLike = { type: "List", text: "[…]", items: [betti, int(3)] };
 const fn: ValueJsonLike = { type: "Function", text: "(d) ->\n  d + 1" };
 
@@ -25,7 +47,15 @@ const doc: Transcript = {
   exportedAt: "2026-12-03T00:00:00.000Z",
   cells: [
     { position: 0, source: "S := Q[x, y, z]", status: "done", results: [{ statement: 0, value: ring }] },
-    { position: 1, source: "resolve(S / <x*y, y*z, x*z>).betti\n{depth: 1, a: 2}", status: "done", results: [{ statement: 0, value: betti }, { statement: 1, value: record }] },
+    {
+      position: 1,
+      source: "resolve(S / <x*y, y*z, x*z>).betti\n{depth: 1, a: 2}",
+      status: "done",
+      results: [
+        { statement: 0, value: betti },
+        { statement: 1, value: record },
+      ],
+    },
     { position: 2, source: "[…]", status: "done", results: [{ statement: 0, value: list }] },
     { position: 3, source: "1 / 0", status: "error", results: [], error: { kind: "runtime", message: "division by zero" } },
   ].map((c) => ({ error: null, ...c })),
@@ -95,7 +125,14 @@ describe("LaTeX export", () => {
   });
 
   it("gives Betti tables a totals row (the ranks of the free modules)", () => {
-    const tex = bettiTabular([[0, 0, 1], [1, 2, 3], [2, 3, 2]], true);
+    const tex = bettiTabular(
+      [
+        [0, 0, 1],
+        [1, 2, 3],
+        [2, 3, 2],
+      ],
+      true,
+    );
     expect(tex).toMatch(/\\hline\ntotal & \$1\$ & \$3\$ & \$2\$ \\\\\n\\end\{tabular\}/);
   });
 

@@ -14,7 +14,8 @@ export const COPY_LABELS: Readonly<Record<CopyFormat, string>> = {
   csv: "CSV",
 };
 
-const entriesOf = (v: ValueReading): BettiEntry[] => ((v.entries ?? v.betti ?? []) as BettiEntry[]).filter((e) => Array.isArray(e) && e.length === 3);
+const entriesOf = (v: ValueReading): BettiEntry[] =>
+  ((v.entries ?? v.betti ?? []) as BettiEntry[]).filter((e) => Array.isArray(e) && e.length === 3);
 
 /// The formats offered for a value: CSV only for tables.
 export function copyFormats(v: ValueReading): CopyFormat[] {
@@ -49,7 +50,11 @@ function bettiLatex(grid: BettiGrid): string {
 function markdownTable(rows: string[][]): string {
   const esc = (c: string) => c.replace(/\|/g, "\\|").replace(/\n/g, " ");
   const [head, ...body] = rows;
-  return [`| ${head!.map(esc).join(" | ")} |`, `|${head!.map(() => "---").join("|")}|`, ...body.map((r) => `| ${r.map(esc).join(" | ")} |`)].join("\n");
+  return [
+    `| ${head!.map(esc).join(" | ")} |`,
+    `|${head!.map(() => "---").join("|")}|`,
+    ...body.map((r) => `| ${r.map(esc).join(" | ")} |`),
+  ].join("\n");
 }
 
 /// RFC 4180 CSV: fields with a comma, quote or line break are quoted, quotes doubled.
@@ -102,7 +107,8 @@ export function copyText(v: ValueReading, format: CopyFormat, ctx: ViewContext =
       if (view.kind === "text" || view.kind === "list" || view.kind === "record") return "`" + v.text.replace(/`/g, "'") + "`";
       return `$${texOfView(view, v)}$`;
     case "csv":
-      if (view.kind === "betti" || view.kind === "complex") return csvOf(bettiRows(view.kind === "betti" ? view.grid : bettiGrid(entriesOf(v), v.complete !== false)));
+      if (view.kind === "betti" || view.kind === "complex")
+        return csvOf(bettiRows(view.kind === "betti" ? view.grid : bettiGrid(entriesOf(v), v.complete !== false)));
       return csvOf(tableRows(v));
   }
 }

@@ -37,7 +37,11 @@ function wordScore(token: string, text: string): number {
 
 /// The score of `search` against a command: its label first, then its other words.
 export function paletteScore(label: string, search: string, extra: readonly string[] = []): number {
-  const tokens = search.toLowerCase().trim().split(/\s+/).filter((t) => t !== "");
+  const tokens = search
+    .toLowerCase()
+    .trim()
+    .split(/\s+/)
+    .filter((t) => t !== "");
   if (tokens.length === 0) return 1;
   let total = 0;
   for (const t of tokens) {

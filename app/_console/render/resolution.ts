@@ -62,12 +62,22 @@ export function resolutionView(v: ComplexJson, ringName: string | null): Resolut
 
 /// The name of the session's binding that holds `ring` (same field, variables and
 /// defining ideal), or null; the first such name in `candidates` order.
-export function ringNameOf(ring: ValueReading | undefined, candidates: readonly { readonly name: string; readonly value: ValueReading }[]): string | null {
+export function ringNameOf(
+  ring: ValueReading | undefined,
+  candidates: readonly { readonly name: string; readonly value: ValueReading }[],
+): string | null {
   if (!ring) return null;
   const same = (a: readonly string[] | undefined, b: readonly string[] | undefined) =>
     (a ?? []).length === (b ?? []).length && (a ?? []).every((x, i) => x === (b ?? [])[i]);
   const hit = candidates.find(
-    (c) => c.value.type === "Ring" && c.value.field === ring.field && same(c.value.vars, ring.vars) && same(c.value.ideal?.filter((g) => g !== "0"), ring.ideal?.filter((g) => g !== "0")),
+    (c) =>
+      c.value.type === "Ring" &&
+      c.value.field === ring.field &&
+      same(c.value.vars, ring.vars) &&
+      same(
+        c.value.ideal?.filter((g) => g !== "0"),
+        ring.ideal?.filter((g) => g !== "0"),
+      ),
   );
   return hit?.name ?? null;
 }

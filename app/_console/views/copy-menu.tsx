@@ -48,14 +48,29 @@ export function CopyMenu({ value, context }: { value: ValueReading; context?: Vi
 
   return (
     <div ref={root} className="relative shrink-0" onKeyDown={(e) => e.key === "Escape" && setOpen(false)}>
-      <button type="button" className={buttonQuiet} aria-haspopup="menu" aria-expanded={open} aria-label="Copy this result" onClick={() => setOpen((o) => !o)}>
+      <button
+        type="button"
+        className={buttonQuiet}
+        aria-haspopup="menu"
+        aria-expanded={open}
+        aria-label="Copy this result"
+        onClick={() => setOpen((o) => !o)}
+      >
         Copy
       </button>
       {open && (
-        <ul role="menu" className="absolute right-0 z-20 mt-1 w-36 rounded-md border border-ink/20 bg-white py-1 text-sm shadow-lg dark:border-paper/20 dark:bg-night-panel">
+        <ul
+          role="menu"
+          className="absolute right-0 z-20 mt-1 w-36 rounded-md border border-ink/20 bg-white py-1 text-sm shadow-lg dark:border-paper/20 dark:bg-night-panel"
+        >
           {copyFormats(value).map((f) => (
             <li key={f} role="none">
-              <button type="button" role="menuitem" className="w-full px-3 py-1 text-left hover:bg-ink/5 focus:bg-ink/10 focus:outline-none dark:hover:bg-paper/10" onClick={() => void copy(f)}>
+              <button
+                type="button"
+                role="menuitem"
+                className="w-full px-3 py-1 text-left hover:bg-ink/5 focus:bg-ink/10 focus:outline-none dark:hover:bg-paper/10"
+                onClick={() => void copy(f)}
+              >
                 {COPY_LABELS[f]}
               </button>
             </li>
@@ -63,7 +78,10 @@ export function CopyMenu({ value, context }: { value: ValueReading; context?: Vi
         </ul>
       )}
       {status && (
-        <span role="status" className="absolute right-0 top-full mt-1 whitespace-nowrap rounded bg-ink px-2 py-0.5 text-xs text-paper dark:bg-paper dark:text-night">
+        <span
+          role="status"
+          className="absolute right-0 top-full mt-1 whitespace-nowrap rounded bg-ink px-2 py-0.5 text-xs text-paper dark:bg-paper dark:text-night"
+        >
           {status}
         </span>
       )}

@@ -72,7 +72,8 @@ export function ExportPanel({ sessionId, link, cells, onDone }: ExportDialogProp
         ))}
       </fieldset>
       <label className="flex items-center gap-2">
-        <input type="checkbox" checked={skipErrors} onChange={(e) => setSkipErrors(e.target.checked)} /> Leave out cells that ended in an error or were stopped
+        <input type="checkbox" checked={skipErrors} onChange={(e) => setSkipErrors(e.target.checked)} /> Leave out cells that ended in an
+        error or were stopped
       </label>
       <div className="flex items-center gap-2">
         <span className="font-medium">Cells</span>

@@ -13,7 +13,19 @@ import { buttonQuiet, buttonSecondary, textInput } from "./styles";
 const NAME = /^[A-Za-z][A-Za-z0-9_']*$/;
 
 /// The types a user looks for most, in the filter (any other is found by typing its name).
-const TYPES = ["Ideal", "Ring", "Module", "Complex", "Matrix", "Poly", "HilbertSeries", "BettiTable", "List", "Record", "Function"] as const;
+const TYPES = [
+  "Ideal",
+  "Ring",
+  "Module",
+  "Complex",
+  "Matrix",
+  "Poly",
+  "HilbertSeries",
+  "BettiTable",
+  "List",
+  "Record",
+  "Function",
+] as const;
 
 export interface LibraryEntry {
   readonly id: string;
@@ -85,10 +97,19 @@ export function LibraryPanel({ targetSessionId, onInserted }: LibraryProps) {
         </select>
       </div>
       {!targetSessionId && <p className="text-sm text-ink-soft dark:text-paper/70">Open a session you may edit to insert into it.</p>}
-      {list.error && <p role="alert" className="text-sm text-red-700 dark:text-red-300">{messageOf(list.error)}</p>}
+      {list.error && (
+        <p role="alert" className="text-sm text-red-700 dark:text-red-300">
+          {messageOf(list.error)}
+        </p>
+      )}
       {!list.data && !list.error && <p className="text-sm text-ink/50 dark:text-paper/50">Loading…</p>}
-      {list.data && objects.length === 0 && <p className="text-sm text-ink/60 dark:text-paper/60">No object in your other sessions matches.</p>}
-      <ul aria-label="Library" className="min-h-0 divide-y divide-ink/10 overflow-y-auto rounded-md border border-ink/10 dark:divide-paper/10 dark:border-paper/10">
+      {list.data && objects.length === 0 && (
+        <p className="text-sm text-ink/60 dark:text-paper/60">No object in your other sessions matches.</p>
+      )}
+      <ul
+        aria-label="Library"
+        className="min-h-0 divide-y divide-ink/10 overflow-y-auto rounded-md border border-ink/10 dark:divide-paper/10 dark:border-paper/10"
+      >
         {objects.map((o) => (
           <li key={o.id} className="flex flex-col gap-1 px-2 py-1.5 text-sm" data-library-object={o.name}>
             <div className="flex flex-wrap items-center gap-2">
@@ -98,7 +119,12 @@ export function LibraryPanel({ targetSessionId, onInserted }: LibraryProps) {
                 in “{o.sessionTitle}”{o.mine ? "" : ` · by ${o.definedByName}`} · {o.via}
               </span>
               {targetSessionId && renaming?.id !== o.id && (
-                <button type="button" className={buttonQuiet} aria-label={`Insert ${o.name} from ${o.sessionTitle}`} onClick={() => void insert(o)}>
+                <button
+                  type="button"
+                  className={buttonQuiet}
+                  aria-label={`Insert ${o.name} from ${o.sessionTitle}`}
+                  onClick={() => void insert(o)}
+                >
                   Insert
                 </button>
               )}
@@ -116,7 +142,12 @@ export function LibraryPanel({ targetSessionId, onInserted }: LibraryProps) {
               >
                 <label className="min-w-0 flex-1 text-xs">
                   Name of the copy
-                  <input autoFocus className={textInput} value={renaming.name} onChange={(e) => setRenaming({ id: o.id, name: e.target.value })} />
+                  <input
+                    autoFocus
+                    className={textInput}
+                    value={renaming.name}
+                    onChange={(e) => setRenaming({ id: o.id, name: e.target.value })}
+                  />
                 </label>
                 <button type="submit" className={buttonSecondary}>
                   Insert as this name
@@ -126,7 +157,11 @@ export function LibraryPanel({ targetSessionId, onInserted }: LibraryProps) {
           </li>
         ))}
       </ul>
-      {problem && <p role="alert" className="text-sm text-red-700 dark:text-red-300">{problem}</p>}
+      {problem && (
+        <p role="alert" className="text-sm text-red-700 dark:text-red-300">
+          {problem}
+        </p>
+      )}
     </div>
   );
 }
