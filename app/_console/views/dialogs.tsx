@@ -47,7 +47,8 @@ export function ConsoleDialogs(props: {
       </Modal>
       <Modal open={dialog === "tour"} title="Guided first steps" onClose={onClose}>
         <div className="max-h-[70vh] overflow-y-auto pr-1">
-          <TourList onInsert={props.onInsertExample} canRun={canEdit} />
+          {/* the steps run in a session of the reader's own (useConsole.insertExample), so any signed-in reader may run them */}
+          <TourList onInsert={props.onInsertExample} canRun={signedIn} />
         </div>
       </Modal>
       <Modal open={dialog === "share" && sessionId !== null} title={`Share “${session?.title ?? "this session"}”`} onClose={onClose}>
