@@ -76,7 +76,7 @@ function DeadLinkPage({ signedIn }: { signedIn: boolean }) {
   return (
     <div className="flex min-h-screen items-center justify-center px-4">
       <div className="max-w-md rounded-xl border border-ink/10 bg-white p-6 shadow-sm" role="alert" data-testid="dead-link">
-        <h1 className="text-lg font-semibold">This read-only link no longer works</h1>
+        <h1 className="text-lg font-semibold">This read-only link does not open a session</h1>
         <p className="mt-2 text-ink-soft">
           Its owner has revoked it, or the address was cut short when it was copied. Ask the session&apos;s owner for a new link.
         </p>

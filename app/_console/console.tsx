@@ -130,7 +130,8 @@ export function Console(props: ConsoleProps) {
           onRename={c.renameOne}
           onDelete={c.deleteOne}
           onShare={c.canShare ? setSharingObject : undefined}
-          onOpenShared={signedIn ? () => setDialog("library") : undefined}
+          onOpenShared={signedIn ? () => setDialog("shared-objects") : undefined}
+          onOpenLibrary={signedIn ? () => setDialog("library") : undefined}
         />
       </aside>
 
@@ -200,6 +201,7 @@ export function Console(props: ConsoleProps) {
         onImport={c.importFromFile}
         link={c.link}
         cells={c.cells ?? []}
+        onChooseCells={() => setDialog("export")}
         pendingRedefinition={c.pendingRedefinition}
         onAnswerRedefinition={c.answerRedefinition}
       />

@@ -273,7 +273,7 @@ describe("the team page and sharing with an unknown address", () => {
     const id = await newSession(member, `${TAG} dead link`);
     const anon = new TestClient(testAddress(236));
     const html = await (await anon.request(`/?session=${id}&link=${"x".repeat(43)}`)).text();
-    expect(html).toContain("This read-only link no longer works");
+    expect(html).toContain("This read-only link does not open a session");
     expect(html).not.toContain("Visiting through a read-only link");
   });
 });

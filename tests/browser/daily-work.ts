@@ -241,10 +241,9 @@ browserTest(
     // an error the checker cannot see, so the cell runs and ends in an error
     await run(page, ["I := <x^2 + y> + <y*z>", "resolve(S / I)"], 2);
     await run(page, ["{depth: 2, a: 1}"], 3);
-    await page.keyboard.press("Control+k");
-    await page.keyboard.type("export the transcript");
-    await page.keyboard.press("Enter");
-    const dialog = page.getByRole("dialog", { name: "Export" });
+    await page.getByRole("button", { name: "Export", exact: true }).click();
+    await page.getByRole("dialog", { name: "Export or import" }).getByRole("button", { name: /Choose cells/ }).click();
+    const dialog = page.getByRole("dialog", { name: "Export", exact: true });
     await dialog.waitFor();
     await dialog.getByLabel("Markdown").check();
     await shot(page, artifactsDir, "7-export-dialog");

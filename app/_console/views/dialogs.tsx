@@ -36,6 +36,7 @@ export function ConsoleDialogs(props: {
   onImport: (text: string, fileName: string) => Promise<string | null>;
   link: string | null;
   cells: readonly Cell[];
+  onChooseCells: () => void;
   pendingRedefinition: PendingRedefinition | null;
   onAnswerRedefinition: (replace: boolean) => void;
 }) {
@@ -65,7 +66,13 @@ export function ConsoleDialogs(props: {
         <SharedObjectsPanel targetSessionId={canEdit ? sessionId : null} onImported={props.onObjectsImported} />
       </Modal>
       <Modal open={dialog === "transfer"} title={signedIn ? "Export or import" : "Export the transcript"} onClose={onClose}>
-        <TransferPanel canExport={sessionId !== null} canImport={signedIn} onExport={props.onExport} onImport={props.onImport} />
+        <TransferPanel
+          canExport={sessionId !== null}
+          canImport={signedIn}
+          onExport={props.onExport}
+          onImport={props.onImport}
+          onChooseCells={props.onChooseCells}
+        />
       </Modal>
       <Modal open={dialog === "library"} title="Library" onClose={onClose}>
         <LibraryPanel targetSessionId={canEdit ? sessionId : null} onInserted={props.onObjectsImported} />

@@ -18,6 +18,8 @@ export interface ShelfProps {
   readonly onShare?: (o: NamedObject) => void;
   /// present when I am signed in: opens the objects others shared with me
   readonly onOpenShared?: () => void;
+  /// opens the library: my named objects across sessions, and those shared with me
+  readonly onOpenLibrary?: () => void;
 }
 
 /// "from Ada's session “Harbour ideals” (b)": where an imported copy came from.
@@ -32,7 +34,7 @@ function originLine(origin: ObjectOrigin): string {
 const NAME = /^[A-Za-z][A-Za-z0-9_']*$/;
 
 /// The shelf of named objects.
-export function Shelf({ objects, canEdit, onInsert, onRename, onDelete, onShare, onOpenShared }: ShelfProps) {
+export function Shelf({ objects, canEdit, onInsert, onRename, onDelete, onShare, onOpenShared, onOpenLibrary }: ShelfProps) {
   const [renaming, setRenaming] = useState<NamedObject | null>(null);
   const [deleting, setDeleting] = useState<NamedObject | null>(null);
   const [newName, setNewName] = useState("");
@@ -74,11 +76,18 @@ export function Shelf({ objects, canEdit, onInsert, onRename, onDelete, onShare,
     <section aria-label="Shelf" className="flex min-h-0 flex-1 flex-col gap-2">
       <div className="flex items-center justify-between">
         <h2 className={panelHeading}>Named objects</h2>
-        {onOpenShared && (
-          <button type="button" className={buttonQuiet} onClick={onOpenShared} title="Your named objects across sessions, and those shared with you">
-            Library
-          </button>
-        )}
+        <span className="flex flex-wrap gap-0.5">
+          {onOpenLibrary && (
+            <button type="button" className={buttonQuiet} onClick={onOpenLibrary} title="Your named objects across sessions, and those shared with you">
+              Library
+            </button>
+          )}
+          {onOpenShared && (
+            <button type="button" className={buttonQuiet} onClick={onOpenShared} title="Objects others shared with you">
+              Shared with me
+            </button>
+          )}
+        </span>
       </div>
       {objects && objects.length === 0 && (
         <p className="text-sm text-ink/60 dark:text-paper/60">

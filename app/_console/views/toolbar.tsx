@@ -53,10 +53,10 @@ export function Toolbar(props: {
             <button
               type="button"
               className={buttonSecondary}
-              onClick={() => onDialog(sessionId ? "export" : "transfer")}
-              title={sessionId ? "Export chosen cells of the transcript" : "Import a session (Alt+E)"}
+              onClick={() => onDialog("transfer")}
+              title="Export the transcript (all cells or chosen ones) or import a session (Alt+E)"
             >
-              {sessionId ? "Export" : "Import"}
+              Export
             </button>
           )}
           <button type="button" className={buttonSecondary} onClick={() => onDialog("help")} title="Keyboard help (Alt+/)">
