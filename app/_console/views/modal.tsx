@@ -7,6 +7,10 @@ import { useEffect, useRef, type ReactNode } from "react";
 /// Shows `children` in a modal while `open`; `onClose` runs on Escape or backdrop click.
 export function Modal({ open, title, onClose, children }: { open: boolean; title: string; onClose: () => void; children: ReactNode }) {
   const ref = useRef<HTMLDialogElement>(null);
+  // Closing because `open` went false (another dialog takes over) is not the user closing
+  // this one: only a close while still meant to be open is reported.
+  const meantOpen = useRef(open);
+  meantOpen.current = open;
   useEffect(() => {
     const d = ref.current;
     if (!d) return;
@@ -22,7 +26,9 @@ export function Modal({ open, title, onClose, children }: { open: boolean; title
     <dialog
       ref={ref}
       aria-label={title}
-      onClose={onClose}
+      onClose={() => {
+        if (meantOpen.current) onClose();
+      }}
       onCancel={(e) => {
         e.preventDefault();
         onClose();
