@@ -633,6 +633,8 @@ class Checker {
       if (argTypes.every((t, i) => matchParam(paramAt(o, i).type, t, binds)) && bindsAgree(binds)) {
         const result = substitute(o.result, binds);
         if (sig.name === "sweep") return this.sweepResult(e, argTypes);
+        // a local ring has the variables of the ring it localises
+        if (sig.name === "localize" && argTypes[0].kind === "Ring") return argTypes[0];
         return result;
       }
     }

@@ -326,6 +326,35 @@ export const FUNCTIONS: readonly FunctionSig[] = [
     description: "applies probe to every member of the family: a Table, one row per member, columns from the probe's Record",
     example: "sweep(F, I -> {index: burch_index(S / I), depth: (S / I).depth})",
   },
+  // local rings (grammar/README.md, "Local rings"; issue 16)
+  {
+    name: "localize",
+    overloads: [ov([p("R", T.Ring)], T.Ring, 3)],
+    options: [{ name: "at", type: T.list(NumberType), default: null, description: "the rational point, one coordinate per variable (default: the origin)" }],
+    description: "the local ring of R (a polynomial ring or a quotient of one) at the origin or at a rational point; its properties are read there",
+    example: "localize(S / <y^2 - x^3 - x^2>)",
+  },
+  {
+    name: "milnor",
+    overloads: [ov([p("f", T.Poly)], T.Int, 3)],
+    options: [{ name: "at", type: T.list(NumberType), default: null, description: "the point (default: the origin, or the point of a local ring)" }],
+    description: "the Milnor number dim_k of the local ring modulo the partial derivatives of f (an Error when the singularity is not isolated)",
+    example: "milnor(x^3 + y^4)",
+  },
+  {
+    name: "tjurina",
+    overloads: [ov([p("f", T.Poly)], T.Int, 3)],
+    options: [{ name: "at", type: T.list(NumberType), default: null, description: "the point (default: the origin, or the point of a local ring)" }],
+    description: "the Tjurina number dim_k of the local ring modulo f and its partial derivatives (an Error when the singularity is not isolated)",
+    example: "tjurina(x^3 + y^7 + x*y^5)",
+  },
+  {
+    name: "bass",
+    overloads: [ov([M, p("i", T.Int)], T.Int, 3)],
+    options: [],
+    description: "the Bass number μ_i(M) = dim_k Ext^i(k, M) over the ring M lives over, at its point (the origin of a graded ring)",
+    example: "bass(R.residue, 0)",
+  },
 ];
 
 const prop = (
@@ -371,6 +400,10 @@ export const PROPERTIES: readonly PropertySig[] = [
   prop("Ring", "is_gorenstein", T.Bool, 2, "whether R is Gorenstein"),
   prop("Ring", "is_cm", T.Bool, 2, "whether R is Cohen–Macaulay"),
   ...moduleProps("Ring", "R as the cyclic module A/I"),
+  // local rings (grammar/README.md): read at the point of a local ring, at the irrelevant ideal of a graded one
+  prop("Ring", "multiplicity", T.Int, 3, "the Hilbert–Samuel multiplicity e(m, R)"),
+  prop("Ring", "samuel", T.HilbertSeries, 3, "the Hilbert–Samuel function: .at(d) = length R/m^(d+1), .values(d)"),
+  prop("Ring", "tangent_cone", T.Ring, 3, "the tangent cone (associated graded ring), a graded Ring"),
   prop("Poly", "degree", T.Int, 1, "the (weighted) degree; -1 for 0", null, true),
   prop("Poly", "is_homogeneous", T.Bool, 1, "whether the polynomial is homogeneous", null, true),
   prop("Ideal", "gens", T.list(T.Poly), 1, "the given generators"),

@@ -3,19 +3,7 @@
 export { AlgebraError, type AlgebraErrorKind } from "./errors";
 export { gf, QQ, fieldName, type Field, type PrimeField } from "./field/field";
 export { isPrime } from "./field/prime";
-export {
-  type Rational,
-  rational,
-  ratAdd,
-  ratSub,
-  ratMul,
-  ratDiv,
-  ratNeg,
-  ratCompare,
-  ratPow,
-  ratToString,
-  parseRational,
-} from "./field/rational-number";
+export { type Rat, ratOf, ratAdd, ratSub, ratMul, ratDiv, ratNeg, ratCompare, ratToString, parseRat } from "./field/rational";
 export type { OrderSpec } from "./order/order";
 export { orderName } from "./order/order";
 export { polyRing, sameRing, type PolyRing } from "./poly/ring";
@@ -56,3 +44,5 @@ export * from "./graded";
 export * from "./artinian";
 export * from "./series";
 export * from "./burch";
+export * from "./standard";
+export * from "./localring";

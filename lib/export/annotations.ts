@@ -11,6 +11,8 @@ const strings = (x: unknown): string[] => (Array.isArray(x) ? x.filter((s): s is
 /// The plain mathematical text of an Int, Rat or Poly, without the note its `text` may carry.
 export function plainText(v: ValueJsonLike): string {
   if ((v.type === "Int" || v.type === "Rat") && str(v.value)) return v.value as string;
+  // a HilbertSeries text ends with " (note)" when it has a note; the note is exported apart
+  if (v.type === "HilbertSeries" && str(v.note) && v.text.endsWith(` (${v.note})`)) return v.text.slice(0, -(v.note as string).length - 3);
   return v.text;
 }
 
@@ -42,11 +44,12 @@ export function notesOf(v: ValueJsonLike): Note[] {
   const out: Note[] = [];
   if (v.type === "Series") {
     const n = strings(v.coefficients).length;
-    const checked = typeof v.checked === "number" ? v.checked : n;
+    // `checked`: the computed terms beyond those the guess was fitted to (issue 16)
+    const checked = typeof v.checked === "number" ? v.checked : 0;
     const rational = str(v.rational);
     out.push(
       rational
-        ? { before: "Guessed rational function ", math: rational, after: `: it fits all ${checked} computed terms; a guess, not a proof.` }
+        ? { before: "Guessed rational function ", math: rational, after: `: it reproduces ${checked} computed term${checked === 1 ? "" : "s"} beyond those it was fitted to; a guess, not a proof.` }
         : { before: `No rational function was found that fits the ${n} computed terms.` },
     );
   }

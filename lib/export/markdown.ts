@@ -45,7 +45,7 @@ function inlineMarkdown(v: ValueJsonLike): string | null {
     case "Poly":
       return `$${mathText(plainText(v))}$`;
     case "HilbertSeries":
-      return `$${mathText(v.text)}$`;
+      return `$${mathText(plainText(v))}$`;
     case "Series":
       return `$${mathText(seriesPrefixText(Array.isArray(v.coefficients) ? (v.coefficients as string[]) : []))}$`;
     case "Ideal": {

@@ -184,7 +184,7 @@ function valueBodyTex(v: ValueJsonLike): string {
       );
     }
     case "HilbertSeries":
-      return `$${mathText(v.text)}$`;
+      return `$${mathText(plainText(v))}$`;
     case "Series":
       return `$${mathText(seriesPrefixText(field(v, "coefficients", isStrings) ?? []))}$`;
     case "List": {

@@ -24,6 +24,7 @@ import {
   idealDimension,
   idealHilbertSeries,
   idealIsHomogeneous,
+  idealIsUnit,
   initialIdeal,
   isHomogeneous,
   monomial,
@@ -33,7 +34,11 @@ import {
   terms,
   variable,
   type HilbertSeries,
+  type Ideal,
+  ratAdd,
   type Poly,
+  type Rat,
+  ratOf,
 } from "../algebra/index";
 import { reduceIn, ringOfOperands, toPoly } from "./coerce";
 import { limit, runtime } from "./errors";
@@ -45,6 +50,7 @@ import { MODULE_FUNCTIONS, RESIDUE_PROPERTY } from "./modules";
 import { pendingError } from "./pending";
 import { COMPLEX_PROPERTIES, resolveValue } from "./resolutions";
 import { QUOTIENT_FUNCTIONS, QUOTIENT_PROPERTIES } from "./quotients";
+import { LOCAL_FUNCTIONS, LOCAL_GENERAL_PROPERTIES, localFunction, localProperty } from "./local-dispatch";
 import { valueType } from "./value-type";
 import { list, type HilbertSeriesValue, type IdealValue, type RingValue, type Value } from "./values";
 
@@ -90,30 +96,68 @@ function variableIndex(r: RingValue, f: Poly, span: Span): number {
 }
 
 /// A polynomial in t with the given rational coefficients, in Q[t].
-function tPoly(c: CallContext, coeffs: readonly { num: bigint; den: bigint }[]): Value {
+function tPoly(c: CallContext, coeffs: readonly Rat[]): Value {
   const R = c.interp.session.rings.polynomialRing(QQ, ["t"]);
   let f = constant(R.poly, 0n);
   coeffs.forEach((q, i) => {
-    if (q.num !== 0n) f = addPoly(R, f, monomial(R.poly, [i], q.num, q.den));
+    if (q.n !== 0n) f = addPoly(R, f, monomial(R.poly, [i], q.n, q.d));
   });
   return { type: "Poly", ring: R, poly: f };
 }
 
 const addPoly = (R: RingValue, f: Poly, g: Poly): Poly => add(R.poly, f, g);
 
-function hilbertValue(series: HilbertSeries): HilbertSeriesValue {
-  return { type: "HilbertSeries", series };
+function hilbertValue(series: HilbertSeries, note?: string): HilbertSeriesValue {
+  return { type: "HilbertSeries", series, ...(note ? { note } : {}) };
+}
+
+/// The Hilbert series of S/I. For a non-homogeneous I the engine's answer is the series of
+/// S/in(I); under an order that refines the grading this is the associated graded ring of S/I
+/// for the degree filtration, whose values are the increments of the affine Hilbert function
+/// d ↦ dim_k S_{≤d}/I_{≤d} (D. Cox, J. Little, D. O'Shea, Ideals, Varieties, and Algorithms,
+/// ch. 9 §3): the value's note says so. Under lex or a weight order it depends on the order and
+/// is refused.
+function hilbertOfIdeal(I: Ideal, c: CallContext): HilbertSeriesValue {
+  if (idealIsHomogeneous(I, opts(c))) return hilbertValue(idealHilbertSeries(I, opts(c)));
+  const order = I.ring.order.kind;
+  if (order !== "grevlex" && order !== "glex") {
+    throw runtime(`the ideal is not homogeneous, and under the ${order} order its initial ideal does not describe S/I degree by degree: use a grevlex or glex ring, or localize(…).samuel for the local Hilbert–Samuel function`, c.span);
+  }
+  return hilbertValue(
+    idealHilbertSeries(I, opts(c)),
+    "the ideal is not homogeneous: this is the series of S/in(I), the associated graded ring for the degree filtration, whose values are the increments d ↦ dim S_{≤d}/I_{≤d} − dim S_{≤d−1}/I_{≤d−1} of the affine Hilbert function",
+  );
 }
 
 function series(v: Value): HilbertSeries {
   return (v as HilbertSeriesValue).series;
 }
 
+/// How far a Hilbert series value is moved up (its generators' lowest degree is −shift).
+const shiftOf = (v: Value): number => (v as HilbertSeriesValue).shift ?? 0;
+
+/// The polynomial p(t + s) for p given by ascending rational coefficients (Taylor shift).
+function shiftPolynomial(p: readonly Rat[], s: number): Rat[] {
+  let out: Rat[] = [];
+  // Horner: out = out·(t + s) + p_i, from the top coefficient down
+  for (let i = p.length - 1; i >= 0; i--) {
+    const next: Rat[] = Array.from({ length: out.length + 1 }, () => ratOf(0n));
+    out.forEach((q, k) => {
+      next[k + 1] = ratAdd(next[k + 1], q);
+      next[k] = ratAdd(next[k], ratOf(q.n * BigInt(s), q.d));
+    });
+    next[0] = ratAdd(next[0], p[i]);
+    out = next;
+  }
+  return out;
+}
+
 function hilbertDegree(v: Value, span: Span, c: CallContext): number {
   if (v.type !== "Int") throw runtime(`expected an Int degree, got ${v.type}`, span);
   const max = c.interp.session.limits.maxHilbertDegree;
   if (v.value > BigInt(max)) throw limit(`degree ${v.value} is beyond the limit ${max}`, span);
-  return Number(v.value < -1n ? -1n : v.value);
+  // below the lowest generator degree every value is 0; clamping keeps the number small
+  return Number(v.value < -(1n << 30n) ? -(1n << 30n) : v.value);
 }
 
 /// Krull dimension of R = S/J.
@@ -150,6 +194,10 @@ const FUNCTION_IMPLS: Record<string, FunctionImpl> = {
   },
   "minors(Matrix, Int)": ([A, k], c) => {
     const M = matrixArg(A, c.argSpans[0]);
+    // I_k(A) = 0 when k exceeds the number of rows or columns (common practice; C.minors(k)
+    // follows the same rule)
+    const size = (k as { value: bigint }).value;
+    if (size >= 1n && size > BigInt(Math.min(M.rows.length, M.cols))) return idealValue(M.ring, []);
     return idealValue(M.ring, minors(M.ring.poly, M.rows, sizeArg(k, c.argSpans[1], Math.min(M.rows.length, M.cols)), opts(c)), opts(c));
   },
   "pfaffians(Matrix, Int)": ([A, k], c) => {
@@ -166,7 +214,7 @@ const FUNCTION_IMPLS: Record<string, FunctionImpl> = {
     const { polys } = polyList(xs, c.argSpans[1], J.ring);
     return eliminationOf(J, polys.map((f) => variableIndex(J.ring, f, c.argSpans[1])), opts(c));
   },
-  "hilbert(Ring)": ([R], c) => hilbertValue(idealHilbertSeries(engineIdeal(ring(R, c.argSpans[0]).poly, (R as RingValue).ideal), opts(c))),
+  "hilbert(Ring)": ([R], c) => hilbertOfIdeal(engineIdeal(ring(R, c.argSpans[0]).poly, (R as RingValue).ideal), c),
   "sum(List<T>)": ([xs], c) => {
     const items = (xs as { items: readonly Value[] }).items;
     if (items.length === 0) return Int(0);
@@ -178,6 +226,7 @@ const FUNCTION_IMPLS: Record<string, FunctionImpl> = {
   ...MODULE_FUNCTIONS,
   ...HOMOLOGY_FUNCTIONS,
   ...QUOTIENT_FUNCTIONS,
+  ...LOCAL_FUNCTIONS,
 };
 
 function matrixArg(v: Value, span: Span): Extract<Value, { type: "Matrix" }> {
@@ -198,7 +247,10 @@ const propertiesCache = new WeakMap<RingValue, QuotientProperties>();
 function ringProperties(r: RingValue, c: CallContext): QuotientProperties {
   let q = propertiesCache.get(r);
   if (!q) {
-    q = quotientProperties(engineIdeal(r.poly, r.ideal), opts(c));
+    const J = engineIdeal(r.poly, r.ideal);
+    // the zero ring has no maximal ideal: its depth (∞ by convention) is not an Int
+    if (idealIsUnit(J, opts(c))) throw runtime("this is the zero ring (its defining ideal contains 1): depth, Cohen–Macaulay, Gorenstein and complete intersection are not defined for it", c.span);
+    q = quotientProperties(J, opts(c));
     propertiesCache.set(r, q);
   }
   return q;
@@ -225,9 +277,9 @@ function embeddingDimension(r: RingValue, c: CallContext): number {
   return n - (linear.length === 0 ? 0 : groebnerBasis(r.poly, linear, opts(c)).length);
 }
 
-function integerDegree(d: { num: bigint; den: bigint }, c: CallContext): Value {
-  if (d.den !== 1n) throw runtime(`the degree is ${d.num}/${d.den}, not an integer, in this weighted grading`, c.span);
-  return Int(d.num);
+function integerDegree(q: Rat, c: CallContext): Value {
+  if (q.d !== 1n) throw runtime(`the degree is ${q.n}/${q.d}, not an integer, in this weighted grading`, c.span);
+  return Int(q.n);
 }
 
 const PROPERTY_IMPLS: Record<string, PropertyImpl> = {
@@ -248,7 +300,7 @@ const PROPERTY_IMPLS: Record<string, PropertyImpl> = {
   "Ring.is_cm": (v, _a, c) => Bool(ringProperties(v as RingValue, c).cohenMacaulay),
   "Ring.is_gorenstein": (v, _a, c) => Bool(ringProperties(v as RingValue, c).gorenstein),
   "Ring.is_ci": (v, _a, c) => Bool(ringProperties(v as RingValue, c).completeIntersection),
-  "Ring.hilbert": (v, _a, c) => hilbertValue(idealHilbertSeries(engineIdeal((v as RingValue).poly, (v as RingValue).ideal), opts(c))),
+  "Ring.hilbert": (v, _a, c) => hilbertOfIdeal(engineIdeal((v as RingValue).poly, (v as RingValue).ideal), c),
   "Poly.degree": (v) => Int(degree((v as { ring: RingValue }).ring.poly, (v as { poly: Poly }).poly)),
   "Poly.is_homogeneous": (v) => Bool(isHomogeneous((v as { ring: RingValue }).ring.poly, (v as { poly: Poly }).poly)),
   "Ideal.gens": (v) => {
@@ -270,7 +322,7 @@ const PROPERTY_IMPLS: Record<string, PropertyImpl> = {
   },
   "Ideal.dim": (v, _a, c) => Int(idealDimension(quotientIdeal(v as IdealValue), opts(c))),
   "Ideal.degree": (v, _a, c) => integerDegree(idealDegree(quotientIdeal(v as IdealValue), opts(c)), c),
-  "Ideal.hilbert": (v, _a, c) => hilbertValue(idealHilbertSeries(quotientIdeal(v as IdealValue), opts(c))),
+  "Ideal.hilbert": (v, _a, c) => hilbertOfIdeal(quotientIdeal(v as IdealValue), c),
   // B(I) = (m·I) : (I : m) (H. Dao, T. Kobayashi, R. Takahashi, "Burch ideals and Burch
   // rings", Algebra & Number Theory 2020, Def. 2.1), from the ideal operations alone
   "Ideal.burch": (v, _a, c) => {
@@ -290,19 +342,24 @@ const PROPERTY_IMPLS: Record<string, PropertyImpl> = {
     const A = v as Extract<Value, { type: "Matrix" }>;
     return idealValue(A.ring, A.rows.flat());
   },
-  "HilbertSeries.numerator": (v, _a, c) => tPoly(c, series(v).numerator.map((num) => ({ num, den: 1n }))),
+  "HilbertSeries.numerator": (v, _a, c) => {
+    if (shiftOf(v) > 0) throw runtime(`the numerator has negative powers of t (it starts at t^-${shiftOf(v)}), so it is not a polynomial; t^${shiftOf(v)} times it is the numerator of the module moved into degrees ≥ 0`, c.span);
+    return tPoly(c, series(v).numerator.map((n) => ({ n, d: 1n })));
+  },
   "HilbertSeries.denominator": (v, _a, c) => {
     const R = c.interp.session.rings.polynomialRing(QQ, ["t"]);
     const f = series(v).weights.reduce((acc, w) => mul(R.poly, acc, sub(R.poly, one(R.poly), monomial(R.poly, [w]))), one(R.poly));
     return { type: "Poly", ring: R, poly: f };
   },
-  "HilbertSeries.at": (v, [d], c) => Int(hilbertFunctionAt(series(v), hilbertDegree(d, c.argSpans[0], c), opts(c))),
+  "HilbertSeries.at": (v, [d], c) => Int(hilbertFunctionAt(series(v), hilbertDegree(d, c.argSpans[0], c) + shiftOf(v), opts(c))),
   "HilbertSeries.values": (v, [d], c) => {
     const n = hilbertDegree(d, c.argSpans[0], c);
     if (n < 0) throw runtime("values(d) needs d ≥ 0", c.argSpans[0]);
-    return list(hilbertFunctionValues(series(v), n, opts(c)).map((x) => Int(x)));
+    const s = shiftOf(v);
+    return list(hilbertFunctionValues(series(v), n + s, opts(c)).slice(s).map((x) => Int(x)));
   },
-  "HilbertSeries.polynomial": (v, _a, c) => tPoly(c, hilbertPolynomial(series(v))),
+  // the module moved up by s has Hilbert polynomial p; the module itself has p(t + s)
+  "HilbertSeries.polynomial": (v, _a, c) => tPoly(c, shiftPolynomial(hilbertPolynomial(series(v)), shiftOf(v))),
   "List.length": (v) => Int((v as { items: readonly Value[] }).items.length),
   "Str.length": (v) => Int([...(v as { value: string }).value].length),
   "Table.columns": (v) => list((v as Extract<Value, { type: "Table" }>).columns.map((s) => ({ type: "Str", value: s }) as Value)),
@@ -321,6 +378,7 @@ const PROPERTY_IMPLS: Record<string, PropertyImpl> = {
   ...RESIDUE_PROPERTY,
   ...MODULE_PROPERTIES,
   ...QUOTIENT_PROPERTIES,
+  ...LOCAL_GENERAL_PROPERTIES,
 };
 
 /// Keys of everything the evaluator implements (read by the pending-names test).
@@ -338,7 +396,7 @@ export function callFunction(interp: Evaluator, name: string, args: Value[], nam
   const sig = lookupFunction(name)!;
   const o = sig.overloads.find((x) => matchesOverload(x, args));
   if (!o) throw runtime(`${name} does not accept (${args.map((a) => a.type).join(", ")})`, e.span);
-  const impl = FUNCTION_IMPLS[overloadKey(sig, o)];
+  const impl = localFunction(overloadKey(sig, o), args) ?? FUNCTION_IMPLS[overloadKey(sig, o)];
   if (!impl) throw pendingError(name, o.part, e.span);
   return impl(args, { interp, frame, span: e.span, argSpans: e.args.map((a) => a.span), named });
 }
@@ -355,7 +413,7 @@ function propertySig(obj: Value, name: string, span: Span): PropertySig {
 export function getProperty(interp: Evaluator, obj: Value, name: string, e: Property, frame: Frame): Value {
   const sig = propertySig(obj, name, e.name.span);
   if (sig.params) throw runtime(`${name} takes arguments: write ${name}(…)`, e.name.span);
-  const impl = PROPERTY_IMPLS[propertyKey(sig)];
+  const impl = localProperty(obj, propertyKey(sig)) ?? PROPERTY_IMPLS[propertyKey(sig)];
   if (!impl) throw pendingError(`${obj.type}.${name}`, sig.part, e.span);
   return impl(obj, [], { interp, frame, span: e.span, argSpans: [], named: new Map() });
 }
@@ -369,7 +427,7 @@ export function callMethod(interp: Evaluator, obj: Value, name: string, args: Va
     return interp.applyFunction(fn, args, e.span, frame);
   }
   if (args.length !== sig.params.length) throw runtime(`${name} takes ${sig.params.length} argument(s), got ${args.length}`, e.span);
-  const impl = PROPERTY_IMPLS[propertyKey(sig)];
+  const impl = localProperty(obj, propertyKey(sig)) ?? PROPERTY_IMPLS[propertyKey(sig)];
   if (!impl) throw pendingError(`${obj.type}.${name}`, sig.part, e.span);
   return impl(obj, args, { interp, frame, span: e.span, argSpans: e.args.map((a) => a.span), named: new Map() });
 }

@@ -30,10 +30,10 @@ export function toPoly(v: Value, ring: RingValue, span: Span, opts?: ComputeOpti
     case "Int":
       return reduceIn(ring, constant(ring.poly, v.value), opts);
     case "Rat":
-      if (ring.poly.field.kind === "gf" && v.value.den % BigInt(ring.poly.field.p) === 0n) {
-        throw runtime(`division by zero: ${v.value.den} is 0 in GF(${ring.poly.field.p})`, span);
+      if (ring.poly.field.kind === "gf" && v.value.d % BigInt(ring.poly.field.p) === 0n) {
+        throw runtime(`division by zero: ${v.value.d} is 0 in GF(${ring.poly.field.p})`, span);
       }
-      return reduceIn(ring, constant(ring.poly, v.value.num, v.value.den), opts);
+      return reduceIn(ring, constant(ring.poly, v.value.n, v.value.d), opts);
     case "Poly":
       if (!mapsInto(v.ring, ring)) {
         throw runtime(`this polynomial belongs to ${ringText(v.ring)}, but ${ringText(ring)} is expected here`, span);

@@ -21,6 +21,7 @@ import {
   type HilbertSeries,
   type Poly,
   type Presentation,
+  type Rat,
   type Resolution,
 } from "../algebra/index";
 import type { CallContext } from "./context";
@@ -81,16 +82,16 @@ function hilbertShifted(M: ModuleValue, c: CallContext): HilbertSeries {
 }
 
 function hilbertOf(M: ModuleValue, c: CallContext, span: Span): Value {
+  void span;
+  // generators in negative degrees (Ext modules): the series of M moved up into degrees ≥ 0,
+  // times t^low — a Laurent numerator
   const low = Math.min(0, ...M.degrees);
-  if (low < 0) {
-    throw runtime(`the module has generators in degree ${low}; its Hilbert series would need negative powers of t (shift it into degrees ≥ 0)`, span);
-  }
-  return { type: "HilbertSeries", series: hilbertShifted(M, c) };
+  return { type: "HilbertSeries", series: hilbertShifted(M, c), ...(low < 0 ? { shift: -low } : {}) };
 }
 
-function integerOf(q: { num: bigint; den: bigint }, span: Span, what: string): Value {
-  if (q.den !== 1n) throw runtime(`the ${what} is ${q.num}/${q.den}, not an integer, in this weighted grading`, span);
-  return Int(q.num);
+function integerOf(q: Rat, span: Span, what: string): Value {
+  if (q.d !== 1n) throw runtime(`the ${what} is ${q.n}/${q.d}, not an integer, in this weighted grading`, span);
+  return Int(q.n);
 }
 
 /// The minimal graded free resolution of M over S (M over a polynomial ring), cached per module.

@@ -17,6 +17,7 @@ import {
   idealSaturation,
   idealSaturationElement,
   isZero,
+  localAnalysis,
   normalForm,
   type ComputeOptions,
   type Ideal,
@@ -105,15 +106,28 @@ export function eliminationOf(I: IdealValue, vars: readonly number[], opts?: Com
   return fromPreimage(I.ring, idealEliminate(pre(I), vars, opts), opts);
 }
 
-export const containsPoly = (I: IdealValue, f: Poly, opts?: ComputeOptions): boolean => idealContains(pre(I), f, opts);
+export const containsPoly = (I: IdealValue, f: Poly, opts?: ComputeOptions): boolean =>
+  I.ring.local ? locallyContains(I, f, opts) : idealContains(pre(I), f, opts);
+
+/// Over a local ring membership is decided at its point: f ∈ I·S_m exactly when (I : f)
+/// contains a unit there, i.e. when the local ring of S/(I : f) at the point is zero
+/// (common practice; the local ring is read through a standard basis, lib/algebra/localring).
+function locallyContains(I: IdealValue, f: Poly, opts?: ComputeOptions): boolean {
+  const S = I.ring.poly;
+  const colon = idealColonElement(pre(I), f, opts);
+  const at = I.ring.local!.at;
+  return localAnalysis(S, colon.gens, at.every((a) => a.n === 0n) ? null : at, opts).zero;
+}
 
 export function isSubsetOf(I: IdealValue, K: IdealValue, span: Span, opts?: ComputeOptions): boolean {
   sameIdealRing(I, K, span);
+  if (K.ring.local) return I.gens.every((f) => locallyContains(K, f, opts));
   return idealIsSubset(pre(I), pre(K), opts);
 }
 
 export function idealsEqual(I: IdealValue, K: IdealValue, span: Span, opts?: ComputeOptions): boolean {
   sameIdealRing(I, K, span);
+  if (I.ring.local) return isSubsetOf(I, K, span, opts) && isSubsetOf(K, I, span, opts);
   return idealEquals(pre(I), pre(K), opts);
 }
 

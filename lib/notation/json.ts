@@ -5,7 +5,7 @@
 import { z } from "zod";
 import { formatHilbertDenominator, formatPoly, hilbertSeriesFromNumerator, parsePoly, type Poly } from "../algebra/index";
 import { parseDenominator } from "./series-text";
-import { parseRational, ratToString } from "../algebra/index";
+import { parseRat, ratToString } from "../algebra/index";
 import { RingRegistry, parseField, parseOrder } from "./rings";
 import { fieldText, orderText, ringText, valueText } from "./text";
 import type {
@@ -34,7 +34,8 @@ export function encodeRing(r: RingValue): RingJson {
     degrees: [...r.poly.degrees],
     order: orderText(r.poly.order),
     ideal: r.ideal.map((f) => formatPoly(r.poly, f)),
-    ...(r.over ? { over: r.over.ideal.length } : {}),
+    ...(r.over && r.over.ideal.length > 0 ? { over: r.over.ideal.length } : {}),
+    ...(r.local ? { local: { at: r.local.at.map(ratToString) } } : {}),
   };
 }
 
@@ -93,13 +94,21 @@ export function encodeValue(v: Value): ValueJson {
         ...(v.note !== undefined ? { note: v.note } : {}),
       };
     case "HilbertSeries":
-      return { type: "HilbertSeries", text: t, numerator: v.series.numerator.map(String), denominator: formatHilbertDenominator(v.series.weights) };
+      return {
+        type: "HilbertSeries",
+        text: t,
+        numerator: v.series.numerator.map(String),
+        denominator: formatHilbertDenominator(v.series.weights),
+        ...(v.shift ? { lowest: -v.shift } : {}),
+        ...(v.note ? { note: v.note } : {}),
+      };
     case "Series":
       return {
         type: "Series",
         text: t,
         coefficients: v.coefficients.map(String),
         rational: v.rational,
+        ...(v.rational !== null ? { guessed: true as const } : {}),
         ...(v.guess ? { numerator: v.guess.numerator.map(String), denominator: v.guess.denominator.map(String), checked: v.guess.checked } : {}),
         ...(v.exact !== undefined ? { exact: v.exact } : {}),
       };
@@ -154,7 +163,9 @@ function fail(where: string, message: string): never {
 export function decodeRing(j: RingJson, ctx: DecodeContext): RingValue {
   const field = parseField(j.field) ?? fail("Ring", `unknown field ${j.field}`);
   const order = parseOrder(j.order) ?? fail("Ring", `unknown monomial order ${j.order}`);
-  const base = ctx.rings.polynomialRing(field, j.vars, { order, degrees: j.degrees });
+  const global = ctx.rings.polynomialRing(field, j.vars, { order, degrees: j.degrees });
+  if (j.local && j.local.at.length !== j.vars.length) fail("Ring", `the point of a local ring needs ${j.vars.length} coordinates, got ${j.local.at.length}`);
+  const base = j.local ? ctx.rings.localize(global, j.local.at.map((a) => parseRat(a) ?? fail("Ring", `bad coordinate ${a}`))) : global;
   if (j.ideal.length === 0) return base;
   const gens = j.ideal.map((g) => readPoly(base, g, "Ring ideal"));
   const over = j.over ?? 0;
@@ -202,7 +213,7 @@ function decodeValidated(j: ValueJson, ctx: DecodeContext): Value {
     case "Int":
       return { type: "Int", value: BigInt(j.value), ...(j.note !== undefined ? { note: j.note } : {}) };
     case "Rat":
-      return { type: "Rat", value: parseRational(j.value) ?? fail("Rat", `bad value ${j.value}`) };
+      return { type: "Rat", value: parseRat(j.value) ?? fail("Rat", `bad value ${j.value}`) };
     case "Bool":
       return { type: "Bool", value: j.value };
     case "Str":
@@ -235,7 +246,12 @@ function decodeValidated(j: ValueJson, ctx: DecodeContext): Value {
       return decodeBetti(j.entries, j.complete, j.note);
     case "HilbertSeries": {
       const denominator = parseDenominator(j.denominator) ?? fail("HilbertSeries", `bad denominator ${j.denominator}`);
-      return { type: "HilbertSeries", series: hilbertSeriesFromNumerator(j.numerator.map((c) => BigInt(c)), denominator) };
+      return {
+        type: "HilbertSeries",
+        series: hilbertSeriesFromNumerator(j.numerator.map((c) => BigInt(c)), denominator),
+        ...(j.lowest !== undefined ? { shift: -j.lowest } : {}),
+        ...(j.note !== undefined ? { note: j.note } : {}),
+      };
     }
     case "Series":
       return {

@@ -22,7 +22,8 @@ import {
 import type { Evaluator, Frame, OpContext } from "./context";
 import { MODULE_OPERATORS } from "./modules";
 import { pendingError } from "./pending";
-import { rational, ratAdd, ratCompare, ratDiv, ratMul, ratNeg, ratSub, type Rational } from "../algebra/index";
+// The number type is imported as RatNumber: `Rat` and `rat` below name this file's Value helpers.
+import { ratOf, ratAdd, ratCompare, ratDiv, ratMul, ratNeg, ratSub, type Rat as RatNumber } from "../algebra/index";
 import { ringText } from "./text";
 import { valueType } from "./value-type";
 import type { MatrixValue, RingValue, Value } from "./values";
@@ -34,10 +35,10 @@ export function operatorKey(row: OperatorSig): string {
   return row.left ? `${typeToString(row.left)} ${row.op} ${typeToString(row.right)}` : `${row.op} ${typeToString(row.right)}`;
 }
 
-const rat = (v: Value): Rational => (v.type === "Int" ? rational(v.value) : v.type === "Rat" ? v.value : rational(0n));
+const rat = (v: Value): RatNumber => (v.type === "Int" ? ratOf(v.value) : v.type === "Rat" ? v.value : ratOf(0n));
 const intOf = (v: Value): bigint => (v.type === "Int" ? v.value : 0n);
 const Int = (value: bigint): Value => ({ type: "Int", value });
-const Rat = (value: Rational): Value => ({ type: "Rat", value });
+const Rat = (value: RatNumber): Value => ({ type: "Rat", value });
 const Bool = (value: boolean): Value => ({ type: "Bool", value });
 
 /// Operands of a polynomial operation, in their common ring.
@@ -153,21 +154,21 @@ const BINARY: Record<string, BinaryImpl> = {
   "Matrix * Poly": (l, r, c) => BINARY["Poly * Matrix"](r, l, { ...c, leftSpan: c.rightSpan, rightSpan: c.leftSpan }),
   "Int / Int": (l, r, c) => {
     if (intOf(r) === 0n) throw runtime("division by zero", c.rightSpan);
-    return Rat(rational(intOf(l), intOf(r)));
+    return Rat(ratOf(intOf(l), intOf(r)));
   },
   "Rat / Rat": (l, r, c) => {
-    if (rat(r).num === 0n) throw runtime("division by zero", c.rightSpan);
+    if (rat(r).n === 0n) throw runtime("division by zero", c.rightSpan);
     return Rat(ratDiv(rat(l), rat(r)));
   },
   "Poly / Rat": (l, r, c) => {
     const q = rat(r);
-    if (q.num === 0n) throw runtime("division by zero", c.rightSpan);
+    if (q.n === 0n) throw runtime("division by zero", c.rightSpan);
     const ring = ringOfOperands([l], c.span, c.frame.ring);
-    if (ring.poly.field.kind === "gf" && q.num % BigInt(ring.poly.field.p) === 0n) {
-      throw runtime(`division by zero: ${q.num} is 0 in GF(${ring.poly.field.p})`, c.rightSpan);
+    if (ring.poly.field.kind === "gf" && q.n % BigInt(ring.poly.field.p) === 0n) {
+      throw runtime(`division by zero: ${q.n} is 0 in GF(${ring.poly.field.p})`, c.rightSpan);
     }
     const f = toPoly(l, ring, c.leftSpan, c.interp.session.compute);
-    return polyResult(ring, scale(ring.poly, f, q.den, q.num), c);
+    return polyResult(ring, scale(ring.poly, f, q.d, q.n), c);
   },
   "Ring / Ideal": (l, r, c) => {
     if (l.type !== "Ring") throw runtime(`expected a Ring, got ${l.type}`, c.leftSpan);
@@ -181,9 +182,9 @@ const BINARY: Record<string, BinaryImpl> = {
   "Int ^ Int": (l, r, c) => intPower(intOf(l), r, c),
   "Rat ^ Int": (l, r, c) => {
     const q = rat(l);
-    const num = intPower(q.num, r, c);
-    const den = intPower(q.den, r, c);
-    return Rat(rational(intOf(num), intOf(den)));
+    const num = intPower(q.n, r, c);
+    const den = intPower(q.d, r, c);
+    return Rat(ratOf(intOf(num), intOf(den)));
   },
   "Poly ^ Int": (l, r, c) => {
     const ring = ringOfOperands([l], c.span, c.frame.ring);
@@ -326,7 +327,7 @@ export function valuesEqual(interp: Evaluator, a: Value, b: Value, span: Span): 
     case "HilbertSeries": {
       // the same grading and numerator over the same full denominator
       const x = a.series, y = (b as typeof a).series;
-      return x.weights.join(",") === y.weights.join(",") && x.numerator.join(",") === y.numerator.join(",");
+      return x.weights.join(",") === y.weights.join(",") && x.numerator.join(",") === y.numerator.join(",") && (a.shift ?? 0) === ((b as typeof a).shift ?? 0);
     }
     default:
       return a === b;

@@ -34,7 +34,7 @@ import {
 import type { CallContext } from "./context";
 import { bound } from "./named-options";
 import { runtime } from "./errors";
-import { colonOf, groebnerOf, idealValue } from "./ideals";
+import { colonOf, groebnerOf, idealsEqual, idealValue } from "./ideals";
 import { encodeValue } from "./json";
 import { moduleValue, presentationOverS } from "./modules";
 import { ascendingText } from "./series-text";
@@ -223,15 +223,18 @@ export function poincareValue([M]: readonly Value[], c: CallContext): Value {
   return seriesValue(totals, firstInexact(r.resolution) ?? terms);
 }
 
-function seriesValue(coeffs: readonly bigint[], exact: number): SeriesValue {
-  const g = guessRational(truncatedSeries(coeffs.slice(0, exact)));
+/// A Series with the rational function guessed from its exact terms: a guess as soon as the
+/// terms determine one (2L terms for a recurrence of length L), `checked` counting only the
+/// terms beyond those 2L, which it reproduces without having been fitted to them.
+export function seriesValue(coeffs: readonly bigint[], exact: number): SeriesValue {
+  const g = guessRational(truncatedSeries(coeffs.slice(0, exact)), 0);
   const wrap = (c: readonly bigint[]) => (c.filter((x) => x !== 0n).length > 1 ? `(${ascendingText(c)})` : ascendingText(c));
   const rational = g ? (g.denominator.length === 1 && g.denominator[0] === 1n ? ascendingText(g.numerator) : `${wrap(g.numerator)}/${wrap(g.denominator)}`) : null;
   return {
     type: "Series",
     coefficients: coeffs,
     rational,
-    ...(g ? { guess: { numerator: g.numerator, denominator: g.denominator, checked: g.checkedOn } } : {}),
+    ...(g ? { guess: { numerator: g.numerator, denominator: g.denominator, checked: g.checkedOn - g.determinedBy } } : {}),
     ...(exact < coeffs.length ? { exact } : {}),
   };
 }
@@ -307,6 +310,13 @@ export const QUOTIENT_FUNCTIONS: Record<string, (args: readonly Value[], c: Call
   "eventual_period(List<Any>)": ([xs], c) => {
     const items = (xs as { items: readonly Value[] }).items;
     const keys = items.map((x) => valueKey(x, c));
+    // ideals of a local ring are equal when they agree at the point (issue 16): an ideal takes
+    // the key of the first earlier one that is locally equal to it
+    items.forEach((x, k) => {
+      if (x.type !== "Ideal" || !x.ring.local) return;
+      const j = items.findIndex((y, i) => i < k && y.type === "Ideal" && y.ring === x.ring && idealsEqual(y, x, c.span, opts(c)));
+      if (j >= 0) keys[k] = keys[j];
+    });
     const p = eventualPeriod(keys);
     const none: Value = { type: "None" };
     return { type: "Record", fields: new Map([["start", p ? Int(p.start) : none], ["period", p ? Int(p.period) : none]]) };

@@ -31,11 +31,29 @@ export function parseDenominator(text: string): number[] | null {
   return out.sort((a, b) => a - b);
 }
 
-/// "(1-t^2)/(1-t)^3" — numerator over the ring's full denominator, as the engine keeps it.
-export function hilbertText(hs: HilbertSeries): string {
-  const num = ascendingText(hs.numerator);
+/// Ascending text of Σ c_i t^(i + lowest), negative powers written t^-k ("t^-2+2*t^-1+1").
+export function laurentText(coeffs: readonly bigint[], lowest: number, variable = "t"): string {
+  let out = "";
+  coeffs.forEach((c, k) => {
+    if (c === 0n) return;
+    const i = k + lowest;
+    const neg = c < 0n;
+    const a = neg ? -c : c;
+    const mono = i === 0 ? "" : i === 1 ? variable : `${variable}^${i}`;
+    const body = mono === "" ? a.toString() : a === 1n ? mono : `${a}*${mono}`;
+    out += neg ? `-${body}` : out === "" ? body : `+${body}`;
+  });
+  return out === "" ? "0" : out;
+}
+
+/// "(1-t^2)/(1-t)^3" — numerator over the ring's full denominator, as the engine keeps it;
+/// a denominator with several factors is parenthesised, "(1+t)/((1-t)^2*(1-t^3))", so that the
+/// text reads back as the same rational function. `shift` > 0: the numerator is
+/// t^(−shift)·numerator (a module generated in negative degrees).
+export function hilbertText(hs: HilbertSeries, shift = 0): string {
+  const num = laurentText(hs.numerator, -shift);
   const den = formatHilbertDenominator(hs.weights);
   if (den === "1") return num;
   const wrapped = hs.numerator.filter((c) => c !== 0n).length > 1 ? `(${num})` : num;
-  return `${wrapped}/${den}`;
+  return `${wrapped}/${den.includes("*") ? `(${den})` : den}`;
 }

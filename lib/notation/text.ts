@@ -23,8 +23,10 @@ export function polyRingText(r: RingValue): string {
 
 export function ringText(r: RingValue): string {
   const base = polyRingText(r);
-  if (r.ideal.length === 0) return base;
-  return `${base} / <${r.ideal.map((f) => formatPoly(r.poly, f)).join(", ")}>`;
+  const global = r.ideal.length === 0 ? base : `${base} / <${r.ideal.map((f) => formatPoly(r.poly, f)).join(", ")}>`;
+  if (!r.local) return global;
+  const origin = r.local.at.every((a) => a.n === 0n);
+  return `localize(${global}${origin ? "" : `, at = [${r.local.at.map(ratToString).join(", ")}]`})`;
 }
 
 export function matrixText(m: MatrixValue): string {
@@ -58,7 +60,7 @@ function seriesText(v: Extract<Value, { type: "Series" }>): string {
   if (v.exact !== undefined && v.exact < n) out += ` (the coefficients of t^${v.exact} and beyond are lower bounds: a degree bound cut the resolution)`;
   if (v.rational !== null) {
     const k = v.guess?.checked;
-    out += `; guessed rational function ${v.rational}${k !== undefined ? `, fitting all ${k} exact terms computed` : ""}`;
+    out += `; guessed rational function ${v.rational}${k !== undefined ? ` (a guess: it reproduces ${k} computed term${k === 1 ? "" : "s"} beyond those it was fitted to)` : " (a guess)"}`;
   }
   return out;
 }
@@ -90,7 +92,7 @@ export function valueText(v: Value): string {
     case "BettiTable":
       return bettiText(v);
     case "HilbertSeries":
-      return hilbertText(v.series);
+      return hilbertText(v.series, v.shift ?? 0) + (v.note ? ` (${v.note})` : "");
     case "Series":
       return seriesText(v);
     case "List":

@@ -1,7 +1,7 @@
 /// Runtime values of the notation, one variant per type of notation.md §8.
 /// Engine objects (rings, polynomials) are wrapped, never copied; numbers are exact.
 import type { Field, HilbertSeries, Poly, PolyRing } from "../algebra/index";
-import type { Rational } from "../algebra/index";
+import type { Rat } from "../algebra/index";
 
 /// A ring of the notation: a polynomial ring S (its field, variables, degrees, order)
 /// together with a defining ideal of S; the ideal is empty for S itself.
@@ -16,6 +16,9 @@ export interface RingValue {
   /// absent for S and for quotients S / I of a polynomial ring. A quotient read as a module is
   /// a module over the ring it was formed from (notation.md §5).
   readonly over?: RingValue;
+  /// set for a local ring (grammar/README.md, "Local rings": `localize`): the ring localised at the rational
+  /// point `at` (all zeros for the origin); its properties are read there
+  readonly local?: { readonly at: readonly Rat[] };
 }
 
 export interface PolyValue {
@@ -78,7 +81,13 @@ export interface ComplexValue {
 
 export interface HilbertSeriesValue {
   readonly type: "HilbertSeries";
+  /// the series of the module moved up by `shift` into degrees ≥ 0 (the value itself is
+  /// t^(−shift) times it: a Laurent numerator for modules generated in negative degrees)
   readonly series: HilbertSeries;
+  /// generators in degree −shift (> 0): the numerator starts at t^(−shift); absent means 0
+  readonly shift?: number;
+  /// what the series is of, when that could mislead (a non-homogeneous ideal)
+  readonly note?: string;
 }
 
 export interface SeriesValue {
@@ -87,7 +96,7 @@ export interface SeriesValue {
   /// a rational function fitting every computed term, as text; null when none was found
   readonly rational: string | null;
   /// the guessed numerator and denominator (ascending coefficients in t) and how many
-  /// leading coefficients they were checked against
+  /// computed coefficients it reproduces beyond the 2L that determine it (the fit's own terms)
   readonly guess?: { readonly numerator: readonly bigint[]; readonly denominator: readonly bigint[]; readonly checked: number };
   /// how many leading coefficients are exact (the rest are lower bounds); all when absent
   readonly exact?: number;
@@ -135,7 +144,7 @@ export interface TableValue {
 export type Value =
   /// `note`: how the number was found when that matters (a random choice); shown in the text
   | { readonly type: "Int"; readonly value: bigint; readonly note?: string }
-  | { readonly type: "Rat"; readonly value: Rational }
+  | { readonly type: "Rat"; readonly value: Rat }
   | { readonly type: "Bool"; readonly value: boolean }
   | { readonly type: "Str"; readonly value: string }
   | { readonly type: "Field"; readonly field: Field }

@@ -20,6 +20,8 @@ export const RingJson = z.object({
   ideal: z.array(z.string()),
   /// for A / I with A itself a quotient: how many leading generators of `ideal` define A
   over: count.optional(),
+  /// a local ring (grammar/README.md, "Local rings"): the point it is localised at, one rational per variable
+  local: z.object({ at: z.array(ratText) }).optional(),
 });
 export type RingJson = z.infer<typeof RingJson>;
 
@@ -74,14 +76,20 @@ export const HilbertSeriesJson = z.object({
   text,
   numerator: z.array(intText),
   denominator: z.string(),
+  /// additions: the power of t of the numerator's first coefficient when it is negative (a
+  /// module generated in negative degrees), and what the series is of when that could mislead
+  lowest: z.number().int().max(-1).optional(),
+  note: z.string().optional(),
 });
 export const SeriesJson = z.object({
   type: z.literal("Series"),
   text,
   coefficients: z.array(intText),
   rational: z.string().nullable(),
-  /// additions: the guessed numerator and denominator (ascending in t), the number of
-  /// terms they were checked against, and how many leading coefficients are exact
+  /// additions: `guessed: true` whenever `rational` is set (it is a guess, not a proof), the
+  /// guessed numerator and denominator (ascending in t), the number of computed terms it
+  /// reproduces beyond those the fit used, and how many leading coefficients are exact
+  guessed: z.literal(true).optional(),
   numerator: z.array(intText).optional(),
   denominator: z.array(intText).optional(),
   checked: count.optional(),

@@ -3,7 +3,7 @@ import fc from "fast-check";
 import * as A from "@/lib/algebra";
 import { gfCoeffs, qCoeffs } from "@/lib/algebra/field/coeffs";
 import { mulModLarge } from "@/lib/algebra/field/gfp";
-import { bigGcd, rat, ratAdd, ratMul, ratSub } from "@/lib/algebra/field/rational";
+import { bigGcd, parseRat, rat, ratAdd, ratCompare, ratDiv, ratMul, ratOf, ratSub, ratToString } from "@/lib/algebra/field/rational";
 
 describe("coefficient fields", () => {
   it("accepts primes below 2^31 and rejects everything else with a clear message", () => {
@@ -101,5 +101,35 @@ describe("rational arithmetic (Lehmer gcd, Henrici's sums and products)", () => 
       }),
       { numRuns: 2000 },
     );
+  });
+
+  it("quotients, order and text of the operations the Hilbert code and the evaluator use (common practice)", () => {
+    const small = fc.tuple(fc.bigInt({ min: -1000n, max: 1000n }), fc.bigInt({ min: 1n, max: 1000n })).map(([n, d]) => rat(n, d));
+    fc.assert(
+      fc.property(small, small, (a, b) => {
+        if (b.n !== 0n) expect(ratMul(ratDiv(a, b), b)).toEqual(a);
+        // distinct fractions with denominators ≤ 1000 differ by ≥ 10^-6: floating point orders them exactly
+        const x = Number(a.n) / Number(a.d);
+        const y = Number(b.n) / Number(b.d);
+        expect(ratCompare(a, b)).toBe(x < y ? -1 : x > y ? 1 : 0);
+        expect(parseRat(ratToString(a))).toEqual(a);
+      }),
+      { numRuns: 2000 },
+    );
+    const thrown = (f: () => unknown): unknown => {
+      try {
+        f();
+      } catch (e) {
+        return e;
+      }
+      return null;
+    };
+    const e = thrown(() => ratDiv(rat(1n, 2n), rat(0n)));
+    expect(e).toBeInstanceOf(A.AlgebraError);
+    expect(e).toMatchObject({ kind: "runtime", message: "division by zero" });
+    expect(() => ratOf(1n, 0n)).toThrow(/division by zero/);
+    expect(ratOf(6n, -4n)).toEqual({ n: -3n, d: 2n });
+    expect(parseRat("-6/4")).toEqual({ n: -3n, d: 2n });
+    expect([parseRat("1/0"), parseRat("6/-4"), parseRat("1.5"), parseRat("")]).toEqual([null, null, null, null]);
   });
 });

@@ -64,7 +64,7 @@ describe("Hilbert series of monomial ideals", () => {
       values.forEach((v, d) => expect(v).toBe(d < p ? binomial(n - 1 + d, n - 1) : 0n));
       // Artinian: dimension 0, degree = length = C(n − 1 + p, n)
       expect(hs.dimension).toBe(0);
-      expect(hs.degree).toEqual({ num: binomial(n - 1 + p, n), den: 1n });
+      expect(hs.degree).toEqual({ n: binomial(n - 1 + p, n), d: 1n });
       expect(hilbertPolynomial(hs)).toEqual([]);
     }
   });
@@ -74,9 +74,9 @@ describe("Hilbert series of monomial ideals", () => {
     const hs = hilbertSeriesOfMonomials([], [1, 1, 1]);
     expect(hs.numerator).toEqual([1n]);
     expect(hs.dimension).toBe(3);
-    expect(hs.degree).toEqual({ num: 1n, den: 1n });
+    expect(hs.degree).toEqual({ n: 1n, d: 1n });
     // (d + 2)(d + 1)/2 = 1 + 3/2 d + 1/2 d^2
-    expect(hilbertPolynomial(hs)).toEqual([{ num: 1n, den: 1n }, { num: 3n, den: 2n }, { num: 1n, den: 2n }]);
+    expect(hilbertPolynomial(hs)).toEqual([{ n: 1n, d: 1n }, { n: 3n, d: 2n }, { n: 1n, d: 2n }]);
     expect(formatUnivariate(hilbertPolynomial(hs), "d")).toBe("1/2*d^2+3/2*d+1");
     expect(formatHilbertDenominator(hs.weights)).toBe("(1-t)^3");
     expect(hilbertFunctionAt(hs, 4)).toBe(15n);
@@ -87,7 +87,7 @@ describe("Hilbert series of monomial ideals", () => {
     const hs = hilbertSeriesOfMonomials([[0, 0], [1, 0]], [1, 1]);
     expect(hs.numerator).toEqual([]);
     expect(hs.dimension).toBe(-1);
-    expect(hs.degree.num).toBe(0n);
+    expect(hs.degree.n).toBe(0n);
     expect(hilbertFunctionValues(hs, 3)).toEqual([0n, 0n, 0n, 0n]);
   });
 
@@ -106,21 +106,21 @@ describe("Hilbert series of monomial ideals", () => {
     // (1 − t^2)(1 − t^3)(1 − t^4) = 1 − t^2 − t^3 + t^5 + t^6 − t^7 ... expanded by hand:
     // (1 − t^2 − t^3 + t^5)(1 − t^4) = 1 − t^2 − t^3 − t^4 + t^5 + t^6 + t^7 − t^9
     expect(hs.numerator).toEqual([1n, 0n, -1n, -1n, -1n, 1n, 1n, 1n, 0n, -1n]);
-    expect(hs.degree).toEqual({ num: 24n, den: 1n });
+    expect(hs.degree).toEqual({ n: 24n, d: 1n });
   });
 
   it("hand-checked dimension and degree: (xy) and (xy, xz) in k[x, y, z]", () => {
     // (xy): a quadric surface, dimension 2, degree 2 (common practice)
     const quadric = hilbertSeriesOfMonomials([[1, 1, 0]], [1, 1, 1]);
-    expect([quadric.dimension, quadric.degree.num]).toEqual([2, 2n]);
+    expect([quadric.dimension, quadric.degree.n]).toEqual([2, 2n]);
     // (xy, xz) = (x) ∩ (y, z): a plane and a line, dimension 2, degree 1;
     // numerator 1 − 2t^2 + t^3 = (1 − t)(1 + t − t^2)
     const planeLine = hilbertSeriesOfMonomials([[1, 1, 0], [1, 0, 1]], [1, 1, 1]);
     expect(planeLine.numerator).toEqual([1n, 0n, -2n, 1n]);
     expect(planeLine.reducedNumerator).toEqual([1n, 1n, -1n]);
-    expect([planeLine.dimension, planeLine.degree.num]).toEqual([2, 1n]);
+    expect([planeLine.dimension, planeLine.degree.n]).toEqual([2, 1n]);
     // P(d) = (d + 1) + 1 for d ≥ 1: plane d + 1 monomials of degree d in y, z plus x^d
-    expect(hilbertPolynomial(planeLine)).toEqual([{ num: 2n, den: 1n }, { num: 1n, den: 1n }]);
+    expect(hilbertPolynomial(planeLine)).toEqual([{ n: 2n, d: 1n }, { n: 1n, d: 1n }]);
   });
 
   it("the series agrees with counting standard monomials on random ideals, standard and weighted", () => {
@@ -151,7 +151,7 @@ describe("Hilbert series of monomial ideals", () => {
       const from = hs.numerator.length;
       const values = hilbertFunctionValues(hs, from + 5);
       for (let d = from; d <= from + 5; d++) {
-        expect(evaluateHilbertPolynomial(P, BigInt(d))).toEqual({ num: values[d], den: 1n });
+        expect(evaluateHilbertPolynomial(P, BigInt(d))).toEqual({ n: values[d], d: 1n });
       }
     }
   });
@@ -161,7 +161,7 @@ describe("Hilbert series of monomial ideals", () => {
     const hs = hilbertSeriesOfMonomials([], [1, 2]);
     expect(hilbertFunctionValues(hs, 7)).toEqual([1n, 1n, 2n, 2n, 3n, 3n, 4n, 4n]);
     expect(hs.dimension).toBe(2);
-    expect(hs.degree).toEqual({ num: 1n, den: 2n });
+    expect(hs.degree).toEqual({ n: 1n, d: 2n });
     expect(formatHilbertDenominator(hs.weights)).toBe("(1-t)*(1-t^2)");
     expect(() => hilbertPolynomial(hs)).toThrow(/quasi-polynomial/);
   });

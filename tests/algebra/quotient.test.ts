@@ -42,7 +42,7 @@ describe("quotient rings", () => {
     const hs = quotientHilbertSeries(A);
     expect(hs.reducedNumerator).toEqual([1n, 2n, 1n]);
     expect(quotientDimension(A)).toBe(0);
-    expect(quotientDegree(A)).toEqual({ num: 4n, den: 1n });
+    expect(quotientDegree(A)).toEqual({ n: 4n, d: 1n });
   });
 
   it("a quotient of a quotient is the quotient by the sum: (S/J)/I = S/(J + I)", () => {
@@ -71,7 +71,7 @@ describe("quotient rings", () => {
     const T = polyRing(gf(7), ["a", "b", "c", "d"]);
     const C = quotientRing(T, ["a*c-b^2", "a*d-b*c", "b*d-c^2"].map((s) => parsePoly(T, s)));
     expect(quotientDimension(C)).toBe(2);
-    expect(quotientDegree(C)).toEqual({ num: 3n, den: 1n });
+    expect(quotientDegree(C)).toEqual({ n: 3n, d: 1n });
   });
 
   it("ideals of a quotient are lifted to ideals of S containing J", () => {

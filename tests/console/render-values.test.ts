@@ -103,6 +103,9 @@ describe("a Hilbert series shows reduced form, h-vector, dimension, degree and H
     expect(a).toMatchObject({ dimension: 0, degree: 4n, polynomial: "0" });
     expect(a.hVector).toEqual([1n, 2n, 1n]);
     expect(hilbertFacts(["1"], "(1-t)*(1-t^2)")).toBeNull();
+    // k[x, y](1), generated in degree −1: dim of degree n is n + 2 (common practice)
+    const shifted = hilbertFacts(["1"], "(1-t)^2", -1)!;
+    expect(shifted).toMatchObject({ dimension: 2, degree: 1n, polynomial: "n+2" });
   });
 });
 

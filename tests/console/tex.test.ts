@@ -54,6 +54,8 @@ describe("series and chains", () => {
     const tex = texOfHilbertSeries(["1", "0", "-3", "2"], "(1-t)^4");
     expect(tex).toBe("\\frac{1 - 3t^{2} + 2t^{3}}{\\left(1 - t\\right)^{4}}");
     parses(tex);
+    // issue 16: a module generated in degree −2 has the factor t^{-2} in front
+    expect(texOfHilbertSeries(["1", "-2", "1"], "(1-t)^2", -2)).toMatch(/^t\^\{-2\} \\cdot \\frac/);
   });
 
   it("writes a resolution as a chain of ranks", () => {

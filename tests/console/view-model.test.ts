@@ -13,14 +13,23 @@ describe("viewOfValue", () => {
     expect(v.grid.truncated).toBe(true);
   });
 
+  it("a local ring is drawn localised at its point, not as the global ring (issue 16)", () => {
+    const origin = viewOfValue({ type: "Ring", text: "", field: "Q", vars: ["x", "y"], ideal: ["y^2-x^3"], local: { at: ["0", "0"] } });
+    expect(origin).toMatchObject({ kind: "tex" });
+    if (origin.kind === "tex") expect(origin.tex).toMatch(/_\{\\mathfrak\{m\}_\{0\}\}$/);
+    const point = viewOfValue({ type: "Ring", text: "", field: "Q", vars: ["x", "y"], ideal: [], local: { at: ["1/2", "3"] } });
+    if (point.kind === "tex") expect(point.tex).toContain("\\mathfrak{m}_{(\\tfrac{1}{2}, 3)}");
+  });
+
   it("typesets rings, ideals and a Series with its number of computed terms", () => {
     const ring = viewOfValue({ type: "Ring", text: "", field: "GF(32003)", vars: ["x", "y"], ideal: ["x*y"] });
     expect(ring).toEqual({ kind: "tex", tex: "\\mathbb{F}_{32003}[x, y] / \\left\\langle xy \\right\\rangle" });
     const s = viewOfValue({ type: "Series", text: "", coefficients: ["1", "2", "4"], rational: "1/(1-2*t)" });
     expect(s.kind).toBe("series");
-    if (s.kind === "series") expect(s.note).toBe("guessed rational function: fits all 3 computed terms (not a proof)");
-    const checked = viewOfValue({ type: "Series", text: "", coefficients: ["1", "2", "4", "8"], rational: "1/(1-2*t)", checked: 4 });
-    if (checked.kind === "series") expect(checked.note).toContain("all 4 computed terms");
+    // issue 16: `checked` counts the terms beyond those the fit used; absent means none
+    if (s.kind === "series") expect(s.note).toBe("guessed rational function (not a proof): it reproduces 0 computed terms beyond those it was fitted to");
+    const checked = viewOfValue({ type: "Series", text: "", coefficients: ["1", "2", "4", "8"], rational: "1/(1-2*t)", checked: 2 });
+    if (checked.kind === "series") expect(checked.note).toContain("reproduces 2 computed terms beyond");
     // the computed terms are shown, with the guess beside them
     if (s.kind === "series") expect(s.tex).toMatch(/^1 \+ 2 ?t \+ 4 ?t\^\{2\} \+ O.*\\qquad /);
     const none = viewOfValue({ type: "Series", text: "", coefficients: ["1", "2"], rational: null });

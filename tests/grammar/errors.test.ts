@@ -153,7 +153,7 @@ const BAD: [string, string, string[]][] = [
   [
     "unknown property",
     "S := Q[x]\nS.dimension",
-    ["type error at 2:3-2:12: a Ring has no property dimension; its properties are field, vars, ngens, maximal, ideal, ambient, residue, dim, depth, embdim, codim, hilbert, socle, burch_index, is_burch, is_ci, is_gorenstein, is_cm, rank, pd, reg, degree, length, presentation, min_gens, splits_residue"],
+    ["type error at 2:3-2:12: a Ring has no property dimension; its properties are field, vars, ngens, maximal, ideal, ambient, residue, dim, depth, embdim, codim, hilbert, socle, burch_index, is_burch, is_ci, is_gorenstein, is_cm, rank, pd, reg, degree, length, presentation, min_gens, splits_residue, multiplicity, samuel, tangent_cone"],
   ],
   [
     "method without call",

@@ -68,7 +68,7 @@ describe("ringside eval", () => {
     const objs = r.lines.map((l) => JSON.parse(l));
     for (const o of objs) expect(ValueJson.safeParse(o).success, JSON.stringify(o)).toBe(true);
     expect(objs[2].text).toBe("[1, 2, 3, 4]");
-    expect(objs[3]).toMatchObject({ type: "Series", coefficients: ["1", "2", "3", "4", "5", "6"], rational: "1/(1-2*t+t^2)", checked: 6 });
+    expect(objs[3]).toMatchObject({ type: "Series", coefficients: ["1", "2", "3", "4", "5", "6"], rational: "1/(1-2*t+t^2)", guessed: true, checked: 2 });
   });
 
   it("reads standard input when FILE is omitted or -", async () => {

@@ -235,8 +235,10 @@ describe("determinants, minors and Pfaffians (engine part 2, already landed)", (
   });
 
   it("bad sizes are runtime errors at the argument", async () => {
-    const out = await run("S := Q[x, y]\nk := 3\nminors(matrix([x, y]), k)");
+    const out = await run("S := Q[x, y]\nk := 0\nminors(matrix([x, y]), k)");
     expect(out.error).toMatchObject({ kind: "runtime", span: { from: { line: 3, col: 24 }, to: { line: 3, col: 25 } } });
+    // issue 16: a size above the matrix's is no error — the ideal of 3-minors of a 1×2 matrix is 0
+    expect((await run("S := Q[x, y]\nk := 3\nminors(matrix([x, y]), k)")).error).toBeNull();
     expect((await run("S := Q[x, y]\ndet(matrix([x, y]))")).error?.message).toMatch(/square/);
   });
 });

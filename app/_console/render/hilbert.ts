@@ -85,9 +85,10 @@ function polynomialText(coefficients: readonly (readonly [bigint, bigint])[]): s
   return terms.length ? terms.join("") : "0";
 }
 
-/// The facts of a Hilbert series with numerator coefficients (ascending) over `denominator`;
-/// null when the grading is not standard.
-export function hilbertFacts(numerator: readonly string[], denominator: string): HilbertFacts | null {
+/// The facts of a Hilbert series t^lowest·N(t)/denominator, N's coefficients ascending
+/// (`lowest` < 0 for a module with generators in negative degrees); null when the grading
+/// is not standard.
+export function hilbertFacts(numerator: readonly string[], denominator: string, lowest = 0): HilbertFacts | null {
   const n = standardDenominatorPower(denominator);
   if (n === null) return null;
   let h = numerator.map((c) => BigInt(c));
@@ -109,14 +110,15 @@ export function hilbertFacts(numerator: readonly string[], denominator: string):
     coefficients = Array.from({ length: d }, () => [0n, 1n] as [bigint, bigint]);
     h.forEach((hi, i) => {
       if (hi === 0n) return;
-      const shifts = Array.from({ length: d - 1 }, (_, m) => BigInt(m + 1 - i));
+      const shifts = Array.from({ length: d - 1 }, (_, m) => BigInt(m + 1 - i - lowest));
       productOfLinears(shifts).forEach((c, k) => {
         coefficients[k] = addF(coefficients[k]!, frac(hi * c, factorial));
       });
     });
   }
   const hText = ascendingPolyText(h.map(String));
-  const reduced = d === 0 ? hText : `(${hText})/(1-t)${d === 1 ? "" : `^${d}`}`;
+  const shifted = lowest === 0 ? hText : `t^(${lowest})*(${hText})`;
+  const reduced = d === 0 ? shifted : `${lowest === 0 ? `(${hText})` : shifted}/(1-t)${d === 1 ? "" : `^${d}`}`;
   return { reduced, hVector: h, dimension: d, degree, polynomial: polynomialText(coefficients), polynomialCoefficients: coefficients };
 }
 

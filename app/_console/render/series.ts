@@ -18,10 +18,12 @@ export function ascendingPolyText(coefficients: readonly string[], variable = "t
 
 /// TeX of a Hilbert series numerator/denominator as a fraction (just the numerator when
 /// the denominator is 1).
-export function texOfHilbertSeries(numerator: readonly string[], denominator: string): string {
+/// `lowest` < 0 (a module generated in negative degrees): the numerator starts at t^lowest,
+/// drawn as the factor t^lowest in front.
+export function texOfHilbertSeries(numerator: readonly string[], denominator: string, lowest = 0): string {
   const num = texOfExpression(ascendingPolyText(numerator)) ?? "0";
-  if (denominator.trim() === "1") return num;
-  return `\\frac{${num}}{${texOrVerbatim(denominator)}}`;
+  const body = denominator.trim() === "1" ? num : `\\frac{${num}}{${texOrVerbatim(denominator)}}`;
+  return lowest < 0 ? `t^{${lowest}} \\cdot ${body}` : body;
 }
 
 /// TeX of the first terms of a power series Σ a_i t^i, followed by an order term.

@@ -78,7 +78,12 @@ export function texOfRing(v: ValueReading): string {
   const vars = (v.vars ?? []).map(texOfVariable).join(", ");
   const base = `${texOfField(v.field ?? "?")}[${vars}]`;
   const ideal = (v.ideal ?? []).filter((g) => g !== "0");
-  return ideal.length ? `${base} / ${texOfIdeal(ideal)}` : base;
+  const global = ideal.length ? `${base} / ${texOfIdeal(ideal)}` : base;
+  // a local ring (notation.md §11): the ring localised at the maximal ideal of its point
+  const at = v.local?.at;
+  if (!at) return global;
+  const point = at.every((a) => a === "0") ? "0" : `(${at.map((a) => (a.includes("/") ? `\\tfrac{${a.split("/")[0]}}{${a.split("/")[1]}}` : a)).join(", ")})`;
+  return `\\left(${global}\\right)_{\\mathfrak{m}_{${point}}}`;
 }
 
 /// TeX of a presented module: 0, a graded free module ⊕ R(−d)^m when there are no
@@ -149,10 +154,11 @@ export function viewOfValue(v: ValueReading, ctx: ViewContext = {}): ValueView {
     }
     case "HilbertSeries": {
       if (!v.numerator || typeof v.denominator !== "string") return { kind: "text", text: v.text };
-      const facts = hilbertFacts(v.numerator, v.denominator);
+      const lowest = typeof v.lowest === "number" ? v.lowest : 0;
+      const facts = hilbertFacts(v.numerator, v.denominator, lowest);
       return {
         kind: "hilbert",
-        tex: texOfHilbertSeries(v.numerator, v.denominator),
+        tex: texOfHilbertSeries(v.numerator, v.denominator, lowest),
         facts: facts && {
           ...facts,
           reducedTex: texOrVerbatim(facts.reduced),
@@ -164,12 +170,12 @@ export function viewOfValue(v: ValueReading, ctx: ViewContext = {}): ValueView {
       const coefficients = v.coefficients ?? [];
       const terms = `${coefficients.length} term${coefficients.length === 1 ? "" : "s"}`;
       if (v.rational) {
-        const checked = typeof v.checked === "number" ? v.checked : coefficients.length;
+        const checked = typeof v.checked === "number" ? v.checked : 0;
         // the computed terms first, then the guess beside them: the guess is not the answer
         return {
           kind: "series",
           tex: `${texOfSeriesPrefix(coefficients)} \\qquad ${texOrVerbatim(v.rational)}`,
-          note: `guessed rational function: fits all ${checked} computed terms (not a proof)`,
+          note: `guessed rational function (not a proof): it reproduces ${checked} computed term${checked === 1 ? "" : "s"} beyond those it was fitted to`,
         };
       }
       return { kind: "series", tex: texOfSeriesPrefix(coefficients), note: `${terms} computed; no rational function found that fits them` };

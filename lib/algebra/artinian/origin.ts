@@ -31,7 +31,7 @@ export function componentAtOrigin(I: Ideal, opts?: ComputeOptions & { maxPower?:
     if (len === prev) return { ideal: idealSum(I, idealPower(m, N - 1, opts)), power: N - 1, length: len };
     prev = len;
   }
-  throw runtimeError("artinian", `the local ring at the origin did not stabilise up to m^${cap}: the origin may not be an isolated point`);
+  throw runtimeError("artinian", `the local ring at the origin did not stabilise up to m^${cap}: the origin may not be an isolated point (this way of reading a ring needs it Artinian there; localize(R) reads any ring at a point)`);
 }
 
 /// The local ring S_m/I·S_m at the origin as a finite-dimensional algebra.

@@ -1,16 +1,16 @@
 import { runtimeError } from "../errors";
 import { componentAtOrigin, originIdeal } from "../artinian/origin";
 import { FiniteAlgebra } from "../artinian/algebra";
-import { type Ideal } from "../ideal/ideal";
+import { type Ideal, idealGroebnerBasis } from "../ideal/ideal";
 import { idealColon, idealColonElement } from "../ideal/colon";
 import { idealEquals, idealIsSubset } from "../ideal/compare";
 import { idealIsHomogeneous } from "../ideal/invariants";
-import { idealPower, idealProduct } from "../ideal/arith";
+import { idealPower, idealProduct, idealSum } from "../ideal/arith";
 import { add, constant, formatPoly, mul, variable, zero } from "../poly/checked";
 import { type Poly } from "../poly/poly";
 import { type PolyRing } from "../poly/ring";
 import { checkpoint, type ComputeOptions } from "../options";
-import { cutByLinearForm } from "./substitute";
+import { cutByLinearForm, eliminateByElement } from "./substitute";
 
 // H. Dao, T. Kobayashi, R. Takahashi, "Burch ideals and Burch rings", Algebra & Number
 // Theory 14 (2020): an ideal I of a local ring (S, m) is Burch when m·I ≠ m·(I : m); a
@@ -39,6 +39,16 @@ export function burchIndexOfIdeal(I: Ideal, opts?: ComputeOptions): number {
   return new FiniteAlgebra(B.ring, B, opts).dim - 1;
 }
 
+/// dim_k m/B(I) at the origin for any I ⊆ m (no isolated point needed): B(I) is formed from
+/// products and colons, which commute with localisation, and m² ⊆ B(I) locally (Dao–Eisenbud,
+/// above), so m/B(I)_m = m/(B(I) + m²), a finite-dimensional space computed globally.
+function burchIndexAtOrigin(I: Ideal, opts?: ComputeOptions): number {
+  const m = originIdeal(I);
+  const B = idealColon(idealProduct(m, I, opts), idealColon(I, m, opts), opts);
+  const Q = idealSum(B, idealPower(m, 2, opts));
+  return new FiniteAlgebra(Q.ring, Q, opts).dim - 1;
+}
+
 /// The Burch index of R = S/I at the origin, for I ⊆ m² (a minimal presentation).
 export interface BurchIndex {
   index: number;
@@ -56,12 +66,28 @@ export function burchIndexOfRing(I: Ideal, opts?: ComputeOptions & { seed?: numb
   const seed = opts?.seed ?? 1;
   const next = lcg(seed);
   const S = I.ring;
-  let J = idealIsHomogeneous(I) ? I : componentAtOrigin(I, opts).ideal;
-  if (!idealIsSubset(J, idealPower(originIdeal(J), 2, opts), opts)) {
-    throw runtimeError("burch_index", "the presentation is not minimal: the ideal has an element of order 1 at the origin");
+  // the origin's ring: every step below (colons, products, substitutions) commutes with
+  // localisation at the origin, so I itself serves, isolated point or not
+  let J = I;
+  let T: PolyRing = S;
+  // One rule for every presentation: linear forms in I are eliminated first (S/I ≅ S'/I'
+  // with one variable fewer per form), so S/m and S/0 both reach the field k = k[]/0,
+  // whose index is 0.
+  for (;;) {
+    if (idealIsSubset(J, idealPower(originIdeal(J), 2, opts), opts)) break;
+    // an element a·x_c + h with h free of x_c (a linear form, or x − y^2 …) removes x_c
+    let cut: { ideal: Ideal; ring: PolyRing } | null = null;
+    for (const g of [...idealGroebnerBasis(J, opts), ...J.gens]) {
+      cut = eliminateByElement(J, g);
+      if (cut) break;
+    }
+    if (!cut) {
+      throw runtimeError("burch_index", "the ideal has an element of order 1 at the origin whose variable cannot be solved for polynomially; eliminating it needs power series, which are not implemented here");
+    }
+    J = cut.ideal;
+    T = cut.ring;
   }
   const forms: string[] = [];
-  let T: PolyRing = S;
   for (;;) {
     checkpoint(opts, { stage: "Burch index", detail: `depth ${forms.length}` });
     const m = originIdeal(J);
@@ -80,7 +106,7 @@ export function burchIndexOfRing(I: Ideal, opts?: ComputeOptions & { seed?: numb
     }
     if (!found) throw runtimeError("burch_index", "no regular linear form was found (the field may be too small)");
   }
-  const index = burchIndexOfIdeal(J, opts);
+  const index = idealIsHomogeneous(J) ? burchIndexOfIdeal(J, opts) : burchIndexAtOrigin(J, opts);
   return { index, isBurch: index >= 1, depth: forms.length, random: forms.length > 0 ? { seed, forms } : null };
 }
 

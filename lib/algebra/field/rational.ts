@@ -1,3 +1,5 @@
+import { AlgebraError } from "../errors";
+
 /// Exact rationals n/d with d > 0 and gcd(n, d) = 1.
 export interface Rat {
   readonly n: bigint;
@@ -115,4 +117,36 @@ export function ratInv(a: Rat): Rat {
 
 export function ratToString(a: Rat): string {
   return a.d === 1n ? a.n.toString() : `${a.n}/${a.d}`;
+}
+
+// The operations below serve the Hilbert code, the evaluator and the engine's interface; the
+// polynomial inner loops use only the ones above. They keep the same invariant (d > 0, lowest terms).
+
+/// n/d in lowest terms for callers outside the inner loops: a zero denominator is the runtime
+/// error "division by zero" (`rat` leaves that check to its caller).
+export function ratOf(n: bigint, d: bigint = 1n): Rat {
+  if (d === 0n) throw new AlgebraError("runtime", "division by zero");
+  return rat(n, d);
+}
+
+/// a / b; b = 0 is the runtime error "division by zero".
+export function ratDiv(a: Rat, b: Rat): Rat {
+  if (b.n === 0n) throw new AlgebraError("runtime", "division by zero");
+  return ratMul(a, ratInv(b));
+}
+
+/// −1, 0 or 1 as a <, =, > b (denominators are positive, so cross-multiplying keeps the order).
+export function ratCompare(a: Rat, b: Rat): number {
+  const t = a.n * b.d - b.n * a.d;
+  return t < 0n ? -1 : t > 0n ? 1 : 0;
+}
+
+/// Reads "42", "-3/4" (not necessarily in lowest terms); null when the text is not a decimal
+/// rational with non-zero denominator.
+export function parseRat(text: string): Rat | null {
+  const m = /^(-?\d+)(?:\/(\d+))?$/.exec(text);
+  if (!m) return null;
+  const d = m[2] === undefined ? 1n : BigInt(m[2]);
+  if (d === 0n) return null;
+  return rat(BigInt(m[1]), d);
 }

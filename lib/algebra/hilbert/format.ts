@@ -1,12 +1,12 @@
-import type { Rational } from "../field/rational-number";
+import type { Rat } from "../field/rational";
 
 /// A polynomial in one variable in the canonical text style of notation.md §9: terms in
 /// decreasing degree, `*` and `^`, no spaces, coefficient 1 omitted ("-t^3+3*t^2-3*t+1").
-export function formatUnivariate(coeffs: readonly (bigint | Rational)[], variable = "t"): string {
+export function formatUnivariate(coeffs: readonly (bigint | Rat)[], variable = "t"): string {
   let out = "";
   for (let i = coeffs.length - 1; i >= 0; i--) {
     const c = coeffs[i];
-    const { num, den } = typeof c === "bigint" ? { num: c, den: 1n } : c;
+    const { n: num, d: den } = typeof c === "bigint" ? { n: c, d: 1n } : c;
     if (num === 0n) continue;
     const negative = num < 0n;
     const abs = negative ? -num : num;

@@ -1,11 +1,11 @@
 import { runtimeError } from "../errors";
-import { type Rational, rational } from "../field/rational-number";
+import { rat, type Rat } from "../field/rational";
 import { type HilbertSeries, isStandardGrading } from "./series";
 
 /// The Hilbert polynomial P with P(d) = dim_k (S/I)_d for all large d, as rational
 /// coefficients of d^0, d^1, … (empty for the zero polynomial). Standard grading only:
 /// with other degrees the Hilbert function is in general a quasi-polynomial.
-export function hilbertPolynomial(hs: HilbertSeries): Rational[] {
+export function hilbertPolynomial(hs: HilbertSeries): Rat[] {
   if (!isStandardGrading(hs.weights)) {
     throw runtimeError(
       "hilbertPolynomial",
@@ -25,8 +25,8 @@ export function hilbertPolynomial(hs: HilbertSeries): Rational[] {
   });
   let factorial = 1n;
   for (let i = 2n; i <= BigInt(D - 1); i++) factorial *= i;
-  const coeffs = sum.map((c) => rational(c, factorial));
-  while (coeffs.length > 0 && coeffs[coeffs.length - 1].num === 0n) coeffs.pop();
+  const coeffs = sum.map((c) => rat(c, factorial));
+  while (coeffs.length > 0 && coeffs[coeffs.length - 1].n === 0n) coeffs.pop();
   return coeffs;
 }
 
@@ -41,17 +41,17 @@ function mulLinear(p: readonly bigint[], a: bigint): bigint[] {
 }
 
 /// P(d) for the polynomial returned by hilbertPolynomial.
-export function evaluateHilbertPolynomial(coeffs: readonly Rational[], d: bigint): Rational {
+export function evaluateHilbertPolynomial(coeffs: readonly Rat[], d: bigint): Rat {
   let num = 0n;
   let den = 1n;
   for (let i = coeffs.length - 1; i >= 0; i--) {
     // (num/den)·d + c
     const c = coeffs[i];
-    num = num * d * c.den + c.num * den;
-    den = den * c.den;
-    const r = rational(num, den);
-    num = r.num;
-    den = r.den;
+    num = num * d * c.d + c.n * den;
+    den = den * c.d;
+    const r = rat(num, den);
+    num = r.n;
+    den = r.d;
   }
-  return rational(num, den);
+  return rat(num, den);
 }

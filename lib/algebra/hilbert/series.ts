@@ -2,7 +2,7 @@ import { runtimeError } from "../errors";
 import { type ComputeOptions, Ticker, checkLimit } from "../options";
 import { type Exponents } from "./monomials";
 import { hilbertNumeratorPivot } from "./numerator";
-import { type Rational, rational } from "../field/rational-number";
+import { rat, type Rat } from "../field/rational";
 import { tpolyAtOne, tpolyDivOneMinusT, tpolySeriesUpTo } from "./tpoly";
 
 /// The Hilbert series of a graded quotient S/I, HS(t) = Σ dim_k (S/I)_d t^d, as
@@ -20,7 +20,7 @@ export interface HilbertSeries {
   readonly reducedNumerator: readonly bigint[];
   /// Multiplicity: lim_{t→1} (1 − t)^dim HS(t) = reducedNumerator(1) / ∏ w_i
   /// (an integer for the standard grading); 0 for the zero ring.
-  readonly degree: Rational;
+  readonly degree: Rat;
 }
 
 /// Checks that `weights` is a list of positive integers (a positive grading).
@@ -62,7 +62,7 @@ export function hilbertSeriesOfMonomials(
 export function hilbertSeriesFromNumerator(numerator: readonly bigint[], weights: readonly number[]): HilbertSeries {
   const n = weights.length;
   if (numerator.length === 0) {
-    return { weights, numerator, dimension: -1, reducedNumerator: [], degree: rational(0n) };
+    return { weights, numerator, dimension: -1, reducedNumerator: [], degree: rat(0n) };
   }
   let reduced: readonly bigint[] = numerator;
   let cancelled = 0;
@@ -77,7 +77,7 @@ export function hilbertSeriesFromNumerator(numerator: readonly bigint[], weights
     numerator,
     dimension: n - cancelled,
     reducedNumerator: reduced,
-    degree: rational(tpolyAtOne(reduced), weightProduct),
+    degree: rat(tpolyAtOne(reduced), weightProduct),
   };
 }
 

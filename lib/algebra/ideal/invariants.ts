@@ -1,5 +1,5 @@
 import { type HilbertSeries, hilbertSeriesOfMonomials } from "../hilbert/series";
-import { type Rational } from "../field/rational-number";
+import { type Rat } from "../field/rational";
 import type { ComputeOptions } from "../options";
 import { type Poly } from "../poly/poly";
 import { type PolyRing } from "../poly/ring";
@@ -63,6 +63,6 @@ export function idealCodimension(I: Ideal, opts?: ComputeOptions): number {
 
 /// The degree (multiplicity) of S/I; an integer for the standard grading, and for a
 /// zero-dimensional ideal the number of points counted with multiplicity (0 for the unit ideal).
-export function idealDegree(I: Ideal, opts?: ComputeOptions): Rational {
+export function idealDegree(I: Ideal, opts?: ComputeOptions): Rat {
   return idealHilbertSeries(I, opts).degree;
 }

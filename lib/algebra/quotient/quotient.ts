@@ -1,6 +1,6 @@
 import { runtimeError } from "../errors";
 import { type HilbertSeries } from "../hilbert/series";
-import { type Rational } from "../field/rational-number";
+import { type Rat } from "../field/rational";
 import { type Ideal, ideal, idealGroebnerBasis, idealIsUnit } from "../ideal/ideal";
 import { idealDimension, idealDegree, idealHilbertSeries } from "../ideal/invariants";
 import { idealSum } from "../ideal/arith";
@@ -113,6 +113,6 @@ export function quotientDimension(A: AnyRing, opts?: ComputeOptions): number {
 }
 
 /// The degree (multiplicity) of A.
-export function quotientDegree(A: AnyRing, opts?: ComputeOptions): Rational {
+export function quotientDegree(A: AnyRing, opts?: ComputeOptions): Rat {
   return idealDegree(definingIdeal(A), opts);
 }

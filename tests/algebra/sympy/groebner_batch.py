@@ -1,7 +1,8 @@
 """Reads a JSON list of systems on stdin, prints SymPy's reduced Groebner bases as JSON.
 
 Each system: {"vars": [...], "gens": ["x^2-y", ...], "order": "grevlex"|"lex"|"grlex",
-"modulus": p or null}. Each basis element is written as a list of terms
+"modulus": p or null}; order "lazard" is the product order lex on the first variable, then
+grevlex on the rest (on forms of one degree: Lazard's order for a local degree order). Each basis element is written as a list of terms
 [[numerator, denominator, [exponents...]], ...], normalised to be monic; over GF(p) the
 coefficients are residues in [0, p).
 """
@@ -10,6 +11,7 @@ import sys
 import time
 
 from sympy import Poly, QQ, Rational, groebner, symbols
+from sympy.polys.orderings import ProductOrder, grevlex, lex
 from sympy.parsing.sympy_parser import parse_expr
 
 
@@ -21,7 +23,10 @@ def basis_terms(system):
     local = {n: g for n, g in zip(names, gens)}
     exprs = [parse_expr(t.replace("^", "**"), local_dict=local) for t in system["gens"]]
     p = system.get("modulus")
-    opts = {"order": system["order"]}
+    order = system["order"]
+    if order == "lazard":
+        order = ProductOrder((lex, lambda m: m[:1]), (grevlex, lambda m: m[1:]))
+    opts = {"order": order}
     if p:
         opts["modulus"] = p
     else:
@@ -32,7 +37,7 @@ def basis_terms(system):
     out = []
     for g in G.exprs:
         P = Poly(g, *gens, modulus=p) if p else Poly(g, *gens, domain=QQ)
-        terms = P.terms(order=system["order"])
+        terms = P.terms(order=order)
         lc = Rational(int(terms[0][1]) if p else terms[0][1])
         row = []
         for monom, coeff in terms:

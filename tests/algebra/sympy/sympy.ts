@@ -9,6 +9,10 @@ export interface SympySystem {
   modulus: number | null;
 }
 
+/// A system for the product order lex on the first variable, then grevlex on the others
+/// (groebner_batch.py): on forms of one degree, Lazard's order for a local degree order.
+export type LazardSystem = Omit<SympySystem, "order"> & { order: "lazard" };
+
 export type SympyTerm = [string, string, number[]];
 export type SympyResult = { basis: SympyTerm[][]; seconds: number } | { error: string };
 
@@ -28,7 +32,7 @@ export function assertSympyAvailable(): void {
 }
 
 /// Runs the whole batch through one Python process.
-export function runSympyBatch(systems: SympySystem[], timeoutMs = 300_000): SympyResult[] {
+export function runSympyBatch(systems: (SympySystem | LazardSystem)[], timeoutMs = 300_000): SympyResult[] {
   const script = path.join(__dirname, "groebner_batch.py");
   const r = spawnSync(sympyPython(), [script], {
     input: JSON.stringify(systems),

@@ -11,7 +11,6 @@ import { compact, densify, GradedFree, type Layout, type Sparse, sparsify } from
 import { freeModule } from "../../module/free";
 import { moduleHilbertSeries } from "../../module/hilbert";
 import { hilbertFunctionValues } from "../../hilbert/series";
-import { hilbertPolynomial } from "../../hilbert/polynomial";
 import { lowerKey, multidegreeOf, PerDegreeBlock, type BlockKey } from "./multidegree";
 
 /// β_{i,j} for one homological degree i.
@@ -453,7 +452,9 @@ function topDegreeOf(S: PolyRing, J: Ideal, P: ModulePresentation, opts?: Comput
   for (let q = 0; q < cols; q++) gens.push(P.rows.map((row) => row[q]));
   for (const g of idealGroebnerBasis(J)) for (let p = 0; p < r; p++) gens.push(P.degrees.map((_, k) => (k === p ? g : zero(S))));
   const hs = moduleHilbertSeries(freeModule(S, P.degrees), gens, opts);
-  if (hilbertPolynomial(hs).some((c) => c.num !== 0n)) return null;
+  // finite length exactly when the Hilbert series has no pole at t = 1 (any positive grading;
+  // the Hilbert polynomial exists only for the standard one)
+  if (hs.dimension > 0) return null;
   let top = -1;
   const N = hs.numerator.length + 1;
   hilbertFunctionValues(hs, N, opts).forEach((v, d) => {

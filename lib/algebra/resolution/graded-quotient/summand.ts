@@ -62,6 +62,38 @@ export function residueSplitsFromSyzygy(J: Ideal, p: number, I?: Ideal, opts?: C
 /// null when the pieces computed cannot decide (M not of finite length over a ring that is not
 /// Artinian): the caller may know more (a module of positive depth has no socle).
 export function moduleSocle(J: Ideal, presentation: ModulePresentation, opts?: ComputeOptions): { degrees: number[]; splits: boolean } | null {
+  const step = presentationKernels(J, presentation, opts);
+  if (!step) return null;
+  const degrees: number[] = [];
+  let splits = false;
+  const { F, kernels } = step;
+  if (!F) return { degrees, splits };
+  const top = Math.max(...kernels.keys());
+  for (let j = Math.min(...F.degrees); j <= top; j++) {
+    checkpoint(opts, { stage: "socle", detail: `degree ${j}` });
+    const dim = F.dim(j);
+    const Kj = kernels.get(j);
+    if (dim === 0 || (Kj && Kj.rank === dim)) continue;
+    const colon = colonByMaximalIdeal(F, kernels, j);
+    const base = kernelPlusMaximalPart(F, Kj, j);
+    const inK = new Echelon<unknown>(F.K, dim);
+    if (Kj) for (const row of Kj.rows) inK.insert(row);
+    for (const z of colon) {
+      if (inK.insert(z)) degrees.push(j);
+      if (base.reduce(z).some((x) => !F.K.isZero(x))) splits = true;
+    }
+  }
+  return { degrees, splits };
+}
+
+/// The first step of the resolution of M = coker(A): the free module F it maps onto and, per
+/// degree j, K_j = image of A in F_j as an echelon basis (F null when M has no generators).
+/// null when the resolution did not compute every degree needed.
+function presentationKernels(
+  J: Ideal,
+  presentation: ModulePresentation,
+  opts?: ComputeOptions,
+): { F: GradedFree<unknown> | null; kernels: Map<number, Echelon<unknown>> } | null {
   const kernels = new Map<number, Echelon<unknown>>();
   let Fm: GradedFree<unknown> | null = null;
   const r = resolveDegreewise<unknown>({
@@ -76,50 +108,44 @@ export function moduleSocle(J: Ideal, presentation: ModulePresentation, opts?: C
     },
   });
   if (!r.complete && !r.columns.every((c) => c.complete)) return null;
-  const degrees: number[] = [];
-  let splits = false;
-  const F = Fm as GradedFree<unknown> | null;
-  if (!F) return { degrees, splits };
+  return { F: Fm as GradedFree<unknown> | null, kernels };
+}
+
+/// A basis of (K : m)_j ⊆ F_j: the kernel of v ↦ (x_v·v mod K_{j+w_v})_v on the unit vectors of F_j.
+function colonByMaximalIdeal(F: GradedFree<unknown>, kernels: Map<number, Echelon<unknown>>, j: number): unknown[][] {
   const K = F.K;
   const A = F.A;
-  const top = Math.max(...kernels.keys());
-  for (let j = Math.min(...F.degrees); j <= top; j++) {
-    checkpoint(opts, { stage: "socle", detail: `degree ${j}` });
-    const dim = F.dim(j);
-    const Kj = kernels.get(j);
-    if (dim === 0 || (Kj && Kj.rank === dim)) continue;
-    // v ↦ (x_v·v mod K_{j+w_v})_v on the unit vectors of F_j; its kernel is (K : m)_j.
-    const images: unknown[][] = [];
-    for (let k = 0; k < dim; k++) {
-      const parts: unknown[] = [];
-      for (let v = 0; v < A.n; v++) {
-        const t = j + A.weights[v];
-        const img = F.mulVarSparse(v, j, { idx: [k], val: [K.one] });
-        const dense = densify(K, img, F.layout(t), F.dim(t));
-        const low = kernels.get(t);
-        parts.push(...(low ? low.reduce(dense) : dense));
-      }
-      images.push(parts);
+  const dim = F.dim(j);
+  const images: unknown[][] = [];
+  for (let k = 0; k < dim; k++) {
+    const parts: unknown[] = [];
+    for (let v = 0; v < A.n; v++) {
+      const t = j + A.weights[v];
+      const img = F.mulVarSparse(v, j, { idx: [k], val: [K.one] });
+      const dense = densify(K, img, F.layout(t), F.dim(t));
+      const low = kernels.get(t);
+      parts.push(...(low ? low.reduce(dense) : dense));
     }
-    const colon = kernelBasis(K, images[0]?.length ?? 0, images);
-    // modulo K_j + (m·F)_j: m·F is spanned by the coordinates u·g with u ≠ 1
-    const base = new Echelon<unknown>(K, dim);
-    if (Kj) for (const row of Kj.rows) base.insert(row);
-    const offs = F.offsets(j);
-    F.degrees.forEach((a, g) => {
-      for (let k = offs[g]; k < offs[g + 1]; k++) {
-        if (a === j) continue;
-        const e = new Array(dim).fill(K.zero);
-        e[k] = K.one;
-        base.insert(e);
-      }
-    });
-    const inK = new Echelon<unknown>(K, dim);
-    if (Kj) for (const row of Kj.rows) inK.insert(row);
-    for (const z of colon) {
-      if (inK.insert(z)) degrees.push(j);
-      if (base.reduce(z).some((x) => !K.isZero(x))) splits = true;
-    }
+    images.push(parts);
   }
-  return { degrees, splits };
+  return kernelBasis(K, images[0]?.length ?? 0, images);
+}
+
+/// K_j + (m·F)_j as an echelon basis of F_j: m·F is spanned by the coordinates u·g with u ≠ 1,
+/// that is those of generators g of degree other than j.
+function kernelPlusMaximalPart(F: GradedFree<unknown>, Kj: Echelon<unknown> | undefined, j: number): Echelon<unknown> {
+  const K = F.K;
+  const dim = F.dim(j);
+  const base = new Echelon<unknown>(K, dim);
+  if (Kj) for (const row of Kj.rows) base.insert(row);
+  const offs = F.offsets(j);
+  F.degrees.forEach((a, g) => {
+    for (let k = offs[g]; k < offs[g + 1]; k++) {
+      if (a === j) continue;
+      const e = new Array(dim).fill(K.zero);
+      e[k] = K.one;
+      base.insert(e);
+    }
+  });
+  return base;
 }
