@@ -20,12 +20,18 @@ const APP_SERVER_ENTRIES = ["page", "layout", "not-found", "error", "loading", "
 /// SERVER_PACKAGES), or a list of the only packages allowed.
 export const LAYERS = [
   { layer: "lib/algebra/", files: ["lib/algebra/**"], may: [], packages: [] },
-  { layer: "grammar/", files: ["grammar/**"], may: [{ types: "lib/algebra" }], packages: ["chevrotain"] },
+  { layer: "lib/limits.ts", files: ["lib/limits.ts"], may: [], packages: [] },
+  { layer: "grammar/", files: ["grammar/**"], may: [{ types: "lib/algebra" }, "lib/limits.ts"], packages: ["chevrotain"] },
   { layer: "lib/wire/", files: ["lib/wire/**"], may: [{ types: "grammar" }, { types: "lib/algebra" }], packages: ["zod"] },
-  { layer: "lib/notation/", files: ["lib/notation/**"], may: ["grammar", "lib/algebra", "lib/wire"], packages: ["zod"] },
+  { layer: "lib/notation/", files: ["lib/notation/**"], may: ["grammar", "lib/algebra", "lib/limits.ts", "lib/wire"], packages: ["zod"] },
   { layer: "lib/editor/, lib/examples/", files: ["lib/editor/**", "lib/examples/**"], may: ["grammar", "lib/wire"], packages: "browser" },
   { layer: "lib/bundle/", files: ["lib/bundle/**"], may: [], packages: "any" },
-  { layer: "lib/compute/", files: ["lib/compute/**"], may: ["grammar", "lib/bundle", "lib/notation", "lib/wire"], packages: "any" },
+  {
+    layer: "lib/compute/",
+    files: ["lib/compute/**"],
+    may: ["grammar", "lib/bundle", "lib/limits.ts", "lib/notation", "lib/wire"],
+    packages: "any",
+  },
   { layer: "lib/cli/", files: ["lib/cli/**"], may: ["grammar", "lib/bundle", "lib/notation", "lib/wire"], packages: "any" },
   { layer: "db/", files: ["db/**"], may: ["lib/auth/password.ts"], packages: "any" },
   { layer: "lib/http/", files: ["lib/http/**"], may: [], packages: "any" },
@@ -34,7 +40,7 @@ export const LAYERS = [
   {
     layer: "lib/sessions/",
     files: ["lib/sessions/**"],
-    may: ["db", "lib/auth", "lib/compute", "lib/http", "lib/wire", "package.json"],
+    may: ["db", "lib/auth", "lib/compute", "lib/http", "lib/limits.ts", "lib/wire", "package.json"],
     packages: "any",
   },
   {
@@ -44,9 +50,15 @@ export const LAYERS = [
     packages: "any",
   },
   {
+    layer: "lib/experiments/",
+    files: ["lib/experiments/**"],
+    may: ["db", "lib/auth", "lib/compute", "lib/export", "lib/http", "lib/limits.ts", "lib/notation", "lib/sessions", "lib/wire"],
+    packages: "any",
+  },
+  {
     layer: "lib/jobs/",
     files: ["lib/jobs/**"],
-    may: ["db", "lib/auth", "lib/compute", "lib/http", "lib/mail", "lib/sessions", "lib/wire"],
+    may: ["db", "lib/auth", "lib/compute", "lib/experiments", "lib/http", "lib/limits.ts", "lib/mail", "lib/sessions", "lib/wire"],
     packages: "any",
   },
   { layer: "lib/ops/", files: ["lib/ops/**"], may: ["db", "lib/mail"], packages: "any" },

@@ -2,6 +2,7 @@
 /// with `npm run db:generate`; never edit a committed migration.
 import { sql } from "drizzle-orm";
 import {
+  type AnyPgColumn,
   bigint,
   boolean,
   check,
@@ -23,9 +24,16 @@ export const teamRole = pgEnum("team_role", ["lead", "member", "guest"]);
 /// Who sees a session besides its owner and its shares: nobody else, or its team. A published
 /// read-only link is separate (`shareToken` not null) and never opens the session to the team.
 export const visibility = pgEnum("visibility", ["private", "team"]);
-export const cellStatus = pgEnum("cell_status", ["pending", "running", "done", "error", "cancelled"]);
+/// `interrupted`: the server running the cell stopped (or lost it) before it finished; the
+/// cell keeps what had streamed.
+export const cellStatus = pgEnum("cell_status", ["pending", "running", "done", "error", "cancelled", "interrupted"]);
 export const shareRole = pgEnum("share_role", ["viewer", "editor"]);
 export const invitationStatus = pgEnum("invitation_status", ["pending", "accepted", "revoked", "expired"]);
+
+/// Experiments (notation.md §11): the whole sweep's state, and each row's status.
+export const experimentStatus = pgEnum("experiment_status", ["queued", "running", "paused", "done", "cancelled"]);
+export const experimentRowStatus = pgEnum("experiment_row_status", ["ok", "error", "limit", "cancelled"]);
+export const uploadFormat = pgEnum("upload_format", ["text", "json"]);
 
 export type SiteRole = (typeof siteRole.enumValues)[number];
 export type TeamRole = (typeof teamRole.enumValues)[number];
@@ -121,11 +129,15 @@ export const cells = pgTable(
     finishedAt: timestamp("finished_at", { withTimezone: true }),
     durationMs: integer("duration_ms"),
     engineVersion: text("engine_version"),
+    /// the server process running the cell ("host/pid/boot nonce") and its last sign of life
+    serverId: text("server_id"),
+    heartbeatAt: timestamp("heartbeat_at", { withTimezone: true }),
     createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
     createdAt: createdAt(),
   },
   (t) => [
     unique("cells_session_position_unique").on(t.sessionId, t.position),
+    index("cells_running_idx").on(t.status).where(sql`${t.status} = 'running'`),
     check("cells_position_nonnegative", sql`${t.position} >= 0`),
     check("cells_duration_nonnegative", sql`${t.durationMs} IS NULL OR ${t.durationMs} >= 0`),
   ],
@@ -234,3 +246,89 @@ export const signInAttempts = pgTable(
     index("sign_in_attempts_address_idx").on(t.address, t.at),
   ],
 );
+
+/// A sweep run as a durable background job: one pg-boss job per member (lib/experiments).
+/// Everything needed to run it again is stored: the program text, the family (definition
+/// with seeds, and every member's §9 JSON), the probe (§9 Function JSON with its captures),
+/// the engine version and the limits. Access follows the session it belongs to.
+export const experiments = pgTable(
+  "experiments",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    sessionId: uuid("session_id")
+      .notNull()
+      .references(() => sessions.id, { onDelete: "cascade" }),
+    createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
+    title: text("title").notNull(),
+    status: experimentStatus("status").notNull().default("queued"),
+    /// the program the sweep came from (a cell's text, or the probe over an uploaded family)
+    program: text("program").notNull(),
+    familyDefinition: text("family_definition").notNull(),
+    /// the Family's §9 JSON (every member)
+    family: jsonb("family").notNull(),
+    /// one label per member, in member order
+    labels: jsonb("labels").notNull(),
+    probeText: text("probe_text").notNull(),
+    /// the probe's §9 Function JSON
+    probe: jsonb("probe").notNull(),
+    engineVersion: text("engine_version").notNull(),
+    /// {timeLimitMs, heapLimitMb} applied to every member
+    limits: jsonb("limits").notNull(),
+    total: integer("total").notNull(),
+    /// the probe's field names in the order written, from the first ok row (null before it)
+    columns: jsonb("columns"),
+    sourceCellId: uuid("source_cell_id").references(() => cells.id, { onDelete: "set null" }),
+    uploadId: uuid("upload_id").references(() => uploads.id, { onDelete: "set null" }),
+    /// the experiment this one runs again ("run again"), if any
+    rerunOf: uuid("rerun_of").references((): AnyPgColumn => experiments.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+    startedAt: timestamp("started_at", { withTimezone: true }),
+    finishedAt: timestamp("finished_at", { withTimezone: true }),
+  },
+  (t) => [
+    index("experiments_session_idx").on(t.sessionId, t.createdAt),
+    check("experiments_total_nonnegative", sql`${t.total} >= 0`),
+  ],
+);
+
+/// One member's row. The primary key (experiment, member) makes a row exist at most once;
+/// workers insert with ON CONFLICT DO NOTHING, one transaction per row.
+export const experimentRows = pgTable(
+  "experiment_rows",
+  {
+    experimentId: uuid("experiment_id")
+      .notNull()
+      .references(() => experiments.id, { onDelete: "cascade" }),
+    memberIndex: integer("member_index").notNull(),
+    status: experimentRowStatus("status").notNull(),
+    /// the probe's Record as {name: §9 value}; the column order is experiments.columns
+    fields: jsonb("fields").notNull(),
+    message: text("message"),
+    durationMs: integer("duration_ms").notNull(),
+    /// which worker process ran it ("host:pid:label")
+    worker: text("worker").notNull(),
+    finishedAt: timestamp("finished_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [
+    primaryKey({ columns: [t.experimentId, t.memberIndex] }),
+    check("experiment_rows_index_nonnegative", sql`${t.memberIndex} >= 0`),
+    check("experiment_rows_duration_nonnegative", sql`${t.durationMs} >= 0`),
+  ],
+);
+
+/// A family uploaded as a file (one ideal per line in the notation, or JSON lists of
+/// generators), stored only when every line was valid.
+export const uploads = pgTable("uploads", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  sessionId: uuid("session_id")
+    .notNull()
+    .references(() => sessions.id, { onDelete: "cascade" }),
+  createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
+  name: text("name").notNull(),
+  format: uploadFormat("format").notNull(),
+  content: text("content").notNull(),
+  /// the Family's §9 JSON
+  family: jsonb("family").notNull(),
+  length: integer("length").notNull(),
+  createdAt: createdAt(),
+});

@@ -2,6 +2,7 @@
 /// environment of bindings, gives every expression a type from the signature table,
 /// and reports every misuse with where, what was expected, what was found and the
 /// obvious fix. Never throws on any AST the parser produces.
+import { LIMIT_TABLE } from "../lib/limits";
 import type * as A from "./ast";
 import type { Analysis, Diagnostic, Env, NameResolution, SubscriptInfo } from "./analysis";
 import type { ParseResult } from "./parser";
@@ -19,12 +20,15 @@ import {
   type OperatorName,
   type OperatorSig,
   type Overload,
+  type PropertySig,
 } from "./signatures";
 import { isPrime, nearest, nextPrime, previousPrime } from "./suggest";
 import {
   isAssignable,
+  isFamilyMember,
   joinTypes,
   makeUnion,
+  orNone,
   sameType,
   T,
   typeToString,
@@ -33,11 +37,11 @@ import {
 } from "./types";
 
 /// Literal exponents above this are refused before anything runs.
-export const MAX_LITERAL_EXPONENT = 1_000_000n;
+export const MAX_LITERAL_EXPONENT = BigInt(LIMIT_TABLE.literalExponent.value);
 const MAX_PRIME = 2n ** 31n;
 const MAX_LAMBDA_DEPTH = 8;
 /// Deeper expressions are refused rather than risking the call stack.
-const MAX_DEPTH = 1000;
+const MAX_DEPTH = LIMIT_TABLE.expressionNesting.value;
 
 const constantIndex = new Map(CONSTANTS.map((c) => [c.name, c]));
 const functionNames = FUNCTIONS.map((f) => f.name);
@@ -383,7 +387,7 @@ class Checker {
       const src = this.infer(c.source);
       let item: Type = T.Any;
       if (src.kind === "List") item = src.item;
-      else if (src.kind === "Family") item = T.Ideal;
+      else if (src.kind === "Family") item = src.member;
       else if (src.kind !== "Any") {
         this.error(c.source.span, `\`for ${c.name.name} in …\` needs a List, a range such as 1..5, or a Family; got ${typeToString(src)}`);
       }
@@ -632,7 +636,11 @@ class Checker {
       if (!arityFits(o, argTypes.length)) continue;
       if (argTypes.every((t, i) => matchParam(paramAt(o, i).type, t, binds)) && bindsAgree(binds)) {
         const result = substitute(o.result, binds);
-        if (sig.name === "sweep") return this.sweepResult(e, argTypes);
+        if (sig.name === "sweep") return this.sweepResult(e, argTypes, binds.get("X") ?? T.Any);
+        if (sig.name === "find") return this.findResult(e, argTypes, binds.get("X") ?? T.Any);
+        if (result.kind === "Family" && !isFamilyMember(result.member)) {
+          this.error(e.args[0].span, `a Family's members are rings, ideals or modules; got ${typeToString(argTypes[0])}`);
+        }
         // a local ring has the variables of the ring it localises
         if (sig.name === "localize" && argTypes[0].kind === "Ring") return argTypes[0];
         return result;
@@ -643,16 +651,38 @@ class Checker {
   }
 
   /// A sweep's table has the probe's record fields as columns; the probe is checked
-  /// on a member of the family (an Ideal).
-  private sweepResult(e: A.Call, argTypes: Type[]): Type {
-    const probe = argTypes[1];
-    if (probe.kind !== "Function") return T.table(null);
-    const r = this.applyFunction(probe, [T.Ideal], e.args[1].span, "the probe");
-    if (r.kind === "Record") return T.table(r.fields);
+  /// on a member of the family (an Ideal for the generated families).
+  private sweepResult(e: A.Call, argTypes: Type[], member: Type): Type {
+    const fields = this.probeFields(e, argTypes[1], member, "sweep");
+    return T.table(fields && { index: T.Int, label: T.Str, status: T.Str, seconds: T.Rat, ...fields });
+  }
+
+  /// The probe's Record fields, or null when not known; reports a probe that returns no Record.
+  private probeFields(e: A.Call, probe: Type, member: Type, what: string): Readonly<Record<string, Type>> | null {
+    if (probe.kind !== "Function") return null;
+    const r = this.applyFunction(probe, [member], e.args[1].span, "the probe");
+    if (r.kind === "Record") return r.fields;
     if (r.kind !== "Any") {
-      this.error(e.args[1].span, `sweep's probe must return a Record (its fields become the columns), e.g. I -> {dim: I.dim}; this one returns ${typeToString(r)}`);
+      this.error(e.args[1].span, `${what}'s probe must return a Record (its fields become the columns), e.g. I -> {dim: I.dim}; this one returns ${typeToString(r)}`);
     }
-    return T.table(null);
+    return null;
+  }
+
+  /// `find(F, probe, where = pred)`: pred is checked on the probe's row (a Record) and must
+  /// give a Bool; the result is {index, member, row, tried} or none.
+  private findResult(e: A.Call, argTypes: Type[], member: Type): Type {
+    const fields = this.probeFields(e, argTypes[1], member, "find");
+    const row = T.record(fields && { index: T.Int, label: T.Str, status: T.Str, seconds: T.Rat, ...fields });
+    const where = e.named.find((n) => n.name.name === "where");
+    if (!where) this.error(e.span, "find needs a predicate on the probe's row: find(F, probe, where = r -> r.depth == 0)");
+    else {
+      const pred = this.types.get(where.value) ?? T.Any;
+      if (pred.kind === "Function") {
+        const b = this.applyFunction(pred, [row], where.value.span, "the predicate");
+        if (!isAssignable(b, T.Bool)) this.error(where.value.span, `find's predicate must give a Bool, this one gives ${typeToString(b)}`);
+      }
+    }
+    return orNone(T.record({ index: T.Int, member, row, tried: T.Int }));
   }
 
   private reportBadArguments(e: A.Call, sig: FunctionSig, argTypes: Type[]): void {
@@ -790,6 +820,18 @@ class Checker {
         this.error(e.args[i].span, `${obj.kind}.${c.name.name} expects ${withArticle(p.type)} for ${p.name}, got ${typeToString(args[i])}`);
       }
     });
+    return this.methodResult(obj, sig, args, e);
+  }
+
+  /// A method's result, where it depends on the object: F.take / F.filter keep the Family's
+  /// member type, T.where keeps the Table's columns; predicates are checked on an item.
+  private methodResult(obj: Type, sig: PropertySig, args: Type[], e: A.Call): Type {
+    const item = obj.kind === "Family" ? obj.member : obj.kind === "Table" ? T.record(obj.columns) : null;
+    if (item && (sig.name === "filter" || sig.name === "where") && args[0]?.kind === "Function") {
+      const b = this.applyFunction(args[0], [item], e.args[0].span, "the predicate");
+      if (!isAssignable(b, T.Bool)) this.error(e.args[0].span, `${sig.name} needs a predicate giving a Bool, this one gives ${typeToString(b)}`);
+    }
+    if (obj.kind === sig.result.kind && (obj.kind === "Family" || obj.kind === "Table")) return obj;
     return sig.result;
   }
 
@@ -832,6 +874,7 @@ class Checker {
     const sig = this.propertyOf(obj, e);
     if (!sig) return T.Any;
     if (obj.kind === "Ring" && sig.result.kind === "Ring") return obj;
+    if (obj.kind === "Family" && sig.result.kind === "Family") return obj;
     if (sig.params !== null) {
       this.error(
         e.span,
@@ -863,19 +906,20 @@ class Checker {
       );
       return T.Any;
     }
-    if (obj.kind !== "List") {
-      this.error(e.span, `indexing with [i] needs a List, got ${typeToString(obj)}`);
+    if (obj.kind !== "List" && obj.kind !== "Family") {
+      this.error(e.span, `indexing with [i] needs a List or a Family, got ${typeToString(obj)}`);
       return T.Any;
     }
     this.subscripts.set(e, { kind: "index" });
+    const itemType = obj.kind === "List" ? obj.item : obj.member;
     if (items.length !== 1) {
-      this.error(e.span, `a List takes exactly one index, as in ${this.text(e.object)}[0], got ${items.length}`);
-      return obj.item;
+      this.error(e.span, `a ${obj.kind} takes exactly one index, as in ${this.text(e.object)}[0], got ${items.length}`);
+      return itemType;
     }
-    if (!isAssignable(items[0], T.Int)) this.error(e.items[0].span, `a List index must be an Int, got ${typeToString(items[0])}`);
+    if (!isAssignable(items[0], T.Int)) this.error(e.items[0].span, `a ${obj.kind} index must be an Int, got ${typeToString(items[0])}`);
     const v = constValue(e.items[0]);
-    if (v !== null && v < 0n) this.error(e.items[0].span, `List indices start at 0 and cannot be negative, got ${v}`);
-    return obj.item;
+    if (v !== null && v < 0n) this.error(e.items[0].span, `${obj.kind} indices start at 0 and cannot be negative, got ${v}`);
+    return itemType;
   }
 }
 
@@ -908,6 +952,13 @@ function matchParam(param: Type, arg: Type, binds: Map<string, Type>): boolean {
     return true;
   }
   if (param.kind === "List" && arg.kind === "List") return matchParam(param.item, arg.item, binds);
+  // Family<X> takes a Family or a List of rings, ideals or modules, binding X to the member type
+  if (param.kind === "Family" && arg.kind === "Family") return matchParam(param.member, arg.member, binds);
+  if (param.kind === "Family" && arg.kind === "List") return isFamilyMember(arg.item) && matchParam(param.member, arg.item, binds);
+  if (param.kind === "Family" && param.member.kind === "Var" && arg.kind === "Any") {
+    binds.set(param.member.name, T.Any);
+    return true;
+  }
   if (param.kind === "List" && param.item.kind === "Var" && arg.kind === "Any") {
     binds.set(param.item.name, T.Any);
     return true;
@@ -924,6 +975,8 @@ function bindsAgree(binds: Map<string, Type>): boolean {
 function substitute(t: Type, binds: Map<string, Type>): Type {
   if (t.kind === "Var") return binds.get(t.name) ?? T.Any;
   if (t.kind === "List") return T.list(substitute(t.item, binds));
+  if (t.kind === "Family") return T.family(substitute(t.member, binds));
+  if (t.kind === "Function") return T.fn(t.params && t.params.map((p) => substitute(p, binds)), substitute(t.result, binds));
   return t;
 }
 

@@ -1,6 +1,7 @@
 /// The notation's parser (Chevrotain, embedded actions): tokens of one statement at a
 /// time (see `layout`) to AST nodes with spans. Precedence, loosest first, is in
 /// grammar/README.md; the rule names below follow it.
+import { LIMIT_TABLE } from "../lib/limits";
 import {
   EmbeddedActionsParser,
   EOF,
@@ -751,7 +752,7 @@ export function parse(source: string): ParseResult {
 }
 
 /// Deeper nesting is refused before parsing, so the parser's recursion stays bounded.
-const MAX_NESTING = 200;
+const MAX_NESTING = LIMIT_TABLE.bracketNesting.value;
 const OPENING = new Set<TokenType>([Tok.LParen, Tok.LBracket, Tok.LBrace, Tok.IdealOpen]);
 const CLOSING = new Set<TokenType>([Tok.RParen, Tok.RBracket, Tok.RBrace, Tok.IdealClose]);
 

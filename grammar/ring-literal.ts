@@ -5,9 +5,10 @@ import type { Expr, NamedArg, Span, Subscript } from "./ast";
 import type { RingLiteralInfo } from "./analysis";
 import { ORDER_NAMES, RING_OPTIONS } from "./signatures";
 import { nearest } from "./suggest";
+import { LIMIT_TABLE } from "../lib/limits";
 
 /// More variables than this is surely a typo in a range.
-export const MAX_VARIABLES = 1000;
+export const MAX_VARIABLES = LIMIT_TABLE.ringVariables.value;
 
 export interface RingLiteralProblem {
   readonly message: string;

@@ -16,7 +16,6 @@ export type SimpleKind =
   | "BettiTable"
   | "HilbertSeries"
   | "Series"
-  | "Family"
   | "None"
   | "Any";
 
@@ -41,6 +40,10 @@ export type FunctionType = {
   readonly result: Type;
 };
 
+/// A family of examples for experiments (notation.md §11); `member` is the type of its
+/// members: Ideal for the generated families, whatever the List held for `family(xs)`.
+export type FamilyType = { readonly kind: "Family"; readonly member: Type };
+
 /// A table from `sweep`: one row per family member; `columns` as the probe's Record.
 export type TableType = {
   readonly kind: "Table";
@@ -59,6 +62,7 @@ export type Type =
   | ListType
   | RecordType
   | FunctionType
+  | FamilyType
   | TableType
   | UnionType
   | VarType;
@@ -82,7 +86,8 @@ export const T = {
   BettiTable: simple("BettiTable"),
   HilbertSeries: simple("HilbertSeries"),
   Series: simple("Series"),
-  Family: simple("Family"),
+  Family: { kind: "Family", member: { kind: "Ideal" } } as FamilyType,
+  family: (member: Type): FamilyType => ({ kind: "Family", member }),
   None: simple("None"),
   Any: simple("Any"),
   Ring: { kind: "Ring", vars: null } as RingType,
@@ -126,6 +131,8 @@ export function sameType(a: Type, b: Type): boolean {
   switch (a.kind) {
     case "List":
       return sameType(a.item, (b as ListType).item);
+    case "Family":
+      return sameType(a.member, (b as FamilyType).member);
     case "Record":
     case "Table": {
       const fa = a.kind === "Record" ? a.fields : a.columns;
@@ -178,7 +185,9 @@ export function isAssignable(from: Type, to: Type): boolean {
     case "Module":
       return from.kind === "Module" || from.kind === "Ring";
     case "Family":
-      return from.kind === "Family" || (from.kind === "List" && isAssignable(from.item, T.Ideal));
+      // a List of rings, ideals or modules serves as the Family of its items
+      if (from.kind === "Family") return isAssignable(from.member, to.member);
+      return from.kind === "List" && isFamilyMember(from.item) && isAssignable(from.item, to.member);
     case "List":
       return from.kind === "List" && isAssignable(from.item, to.item);
     case "Record":
@@ -193,6 +202,12 @@ export function isAssignable(from: Type, to: Type): boolean {
     default:
       return from.kind === to.kind;
   }
+}
+
+/// What a Family may hold: rings, ideals, modules (or a type known only at run time).
+export function isFamilyMember(t: Type): boolean {
+  if (t.kind === "Union") return t.options.every(isFamilyMember);
+  return t.kind === "Ring" || t.kind === "Ideal" || t.kind === "Module" || t.kind === "Any" || t.kind === "Var";
 }
 
 /// The least type covering both (for `if` branches and list items); Any when unrelated.
@@ -217,6 +232,9 @@ export function typeToString(t: Type): string {
             .join(", ")}}`;
     case "Table":
       return "Table";
+    case "Family":
+      // the families of notation.md §11 hold ideals; only other members are spelled out
+      return t.member.kind === "Ideal" ? "Family" : `Family<${typeToString(t.member)}>`;
     case "Function":
       return t.params === null
         ? "Function"

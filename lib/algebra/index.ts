@@ -46,3 +46,5 @@ export * from "./series";
 export * from "./burch";
 export * from "./standard";
 export * from "./localring";
+// families of examples for experiments (notation.md §11)
+export * from "./families";

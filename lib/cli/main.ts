@@ -8,6 +8,7 @@ import { evaluate, type EvalEvent } from "../notation/evaluate";
 import type { ErrorJson } from "../notation/json";
 
 export const USAGE = `usage: ringside eval [--json] [FILE]
+       ringside experiments list | status|pause|resume|cancel|rerun ID  (see lib/experiments/cli.ts)
   Evaluates a Ringside notation program from FILE (or standard input when FILE is
   omitted or "-") and prints each statement's result.
   --json   print one JSON object per line (notation.md §9) instead of text`;
@@ -15,7 +16,8 @@ export const USAGE = `usage: ringside eval [--json] [FILE]
 export interface Io {
   readonly stdin: NodeJS.ReadableStream;
   readonly stdout: { write(s: string): unknown };
-  readonly stderr: { write(s: string): unknown };
+  /// isTTY: a terminal, where the progress line is redrawn in place
+  readonly stderr: { write(s: string): unknown; readonly isTTY?: boolean };
 }
 
 interface Args {
@@ -64,7 +66,26 @@ export async function main(argv: readonly string[], io: Io): Promise<number> {
 
   const line = (s: string) => io.stdout.write(`${s}\n`);
   const printError = (error: ErrorJson) => line(args.json ? JSON.stringify(error) : error.text);
+  // Sweeps and searches run inline; their progress is one line on stderr, redrawn in place
+  // on a terminal and written once per 5 % otherwise (so logs stay short).
+  let progressShown = false;
+  let lastFraction = -1;
+  const endProgress = () => {
+    if (progressShown && io.stderr.isTTY) io.stderr.write("\n");
+    progressShown = false;
+    lastFraction = -1;
+  };
   const onEvent = (e: EvalEvent) => {
+    if (e.event === "progress" && (e.stage === "sweep" || e.stage === "find")) {
+      const fraction = e.fraction ?? 0;
+      if (io.stderr.isTTY) io.stderr.write(`\r\x1b[K${e.stage}: ${e.detail ?? ""}`);
+      else if (fraction - lastFraction >= 0.05 || fraction === 1) io.stderr.write(`${e.stage}: ${e.detail ?? ""}\n`);
+      else return;
+      lastFraction = fraction;
+      progressShown = true;
+      return;
+    }
+    if (e.event === "result" || e.event === "error") endProgress();
     if (e.event === "result") {
       if (args.json) line(JSON.stringify(e.value));
       else line(e.name === null ? e.value.text : `${e.name} := ${e.value.text}`);

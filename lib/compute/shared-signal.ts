@@ -23,8 +23,7 @@ export function readStopFlag(flag: SharedArrayBuffer): StopReason {
 /// A signal whose `aborted` reads the shared flag on every access.
 export function signalFromStopFlag(flag: SharedArrayBuffer): AbortSignal {
   const cells = new Int32Array(flag);
-  const reasonText = () =>
-    Atomics.load(cells, 0) === StopReason.TimeLimit ? "time limit reached" : "cancelled";
+  const reasonText = () => (Atomics.load(cells, 0) === StopReason.TimeLimit ? "time limit reached" : "cancelled");
   const signal = {
     get aborted() {
       return Atomics.load(cells, 0) !== StopReason.None;

@@ -25,7 +25,6 @@ const SIMPLE: ReadonlySet<string> = new Set<SimpleKind>([
   "BettiTable",
   "HilbertSeries",
   "Series",
-  "Family",
   "None",
 ]);
 
@@ -54,6 +53,10 @@ export function typeOfValueJson(v: unknown): Type {
     return T.fn(params, T.Any);
   }
   if (kind === "Table") return T.table(null);
+  if (kind === "Family") {
+    const members = Array.isArray(v.members) ? v.members : [];
+    return T.family(members.length ? typeOfValueJson(members[0]) : T.Ideal);
+  }
   if (SIMPLE.has(kind)) return { kind } as Type;
   return T.Any;
 }

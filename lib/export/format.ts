@@ -21,7 +21,7 @@ export const ExportedCell = z
   .object({
     position: z.number().int().nonnegative(),
     source: z.string().max(IMPORT_LIMITS.sourceChars),
-    status: z.enum(["done", "error", "cancelled"]),
+    status: z.enum(["done", "error", "cancelled", "interrupted"]),
     results: z.array(z.object({ statement: z.number().int().nonnegative(), span: span.nullable(), value: ExportedValue }).strict()),
     error: z
       .object({ type: z.literal("Error"), kind: z.string(), message: z.string(), span: span.optional() })

@@ -124,7 +124,7 @@ function cellMarkdown(cell: TranscriptCell, n: number): string {
     parts.push(body.includes("\n") ? `**Statement ${r.statement + 1}:**\n\n${body}` : `**Statement ${r.statement + 1}:** ${body}`);
   }
   if (cell.error) parts.push(`> **Error (${cell.error.kind ?? "error"}):** ${(cell.error.message ?? "").replace(/\n/g, " ")}`);
-  if (cell.status === "cancelled") parts.push("> This cell was stopped before it finished.");
+  if (cell.status === "cancelled" || cell.status === "interrupted") parts.push("> This cell was stopped before it finished.");
   return parts.join("\n\n");
 }
 

@@ -48,6 +48,7 @@ import { addValues } from "./operators";
 import { HOMOLOGY_FUNCTIONS, MODULE_PROPERTIES } from "./homology";
 import { MODULE_FUNCTIONS, RESIDUE_PROPERTY } from "./modules";
 import { pendingError } from "./pending";
+import { FAMILY_FUNCTIONS, FAMILY_PROPERTIES } from "./families";
 import { COMPLEX_PROPERTIES, resolveValue } from "./resolutions";
 import { QUOTIENT_FUNCTIONS, QUOTIENT_PROPERTIES } from "./quotients";
 import { LOCAL_FUNCTIONS, LOCAL_GENERAL_PROPERTIES, localFunction, localProperty } from "./local-dispatch";
@@ -155,7 +156,7 @@ function shiftPolynomial(p: readonly Rat[], s: number): Rat[] {
 function hilbertDegree(v: Value, span: Span, c: CallContext): number {
   if (v.type !== "Int") throw runtime(`expected an Int degree, got ${v.type}`, span);
   const max = c.interp.session.limits.maxHilbertDegree;
-  if (v.value > BigInt(max)) throw limit(`degree ${v.value} is beyond the limit ${max}`, span);
+  if (v.value > BigInt(max)) throw limit(`degree ${v.value} is beyond the limit ${max}`, span, "hilbertDegree");
   // below the lowest generator degree every value is 0; clamping keeps the number small
   return Number(v.value < -(1n << 30n) ? -(1n << 30n) : v.value);
 }
@@ -226,6 +227,7 @@ const FUNCTION_IMPLS: Record<string, FunctionImpl> = {
   ...MODULE_FUNCTIONS,
   ...HOMOLOGY_FUNCTIONS,
   ...QUOTIENT_FUNCTIONS,
+  ...FAMILY_FUNCTIONS,
   ...LOCAL_FUNCTIONS,
 };
 
@@ -378,6 +380,7 @@ const PROPERTY_IMPLS: Record<string, PropertyImpl> = {
   ...RESIDUE_PROPERTY,
   ...MODULE_PROPERTIES,
   ...QUOTIENT_PROPERTIES,
+  ...FAMILY_PROPERTIES,
   ...LOCAL_GENERAL_PROPERTIES,
 };
 

@@ -1,11 +1,12 @@
 /// Complex values from the engine's resolutions, one renderer per method of the dispatcher
 /// (lib/algebra/resolution/dispatch.ts), and the notes that say what a truncated one leaves out.
+import { LIMIT_TABLE } from "../limits";
 import type { LocalResolution, QuotientResolution, Resolution } from "../algebra/index";
 import type { BettiEntry, BettiTableValue, ComplexValue, MatrixValue, RingValue } from "./values";
 
 /// Differentials are kept as matrices while the resolution has at most this many matrix
 /// entries in all (beyond it C.map and C.minors say they were not kept).
-export const MAX_MAP_ENTRIES = 200_000;
+export const MAX_MAP_ENTRIES = LIMIT_TABLE.keptMapEntries.value;
 
 /// The Complex value of a resolution over S (Schreyer); `shift`: how far the module was
 /// moved up in degree before resolving (its Betti numbers are moved back).

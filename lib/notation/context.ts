@@ -8,7 +8,7 @@ import type { ComputeOptions } from "../algebra/index";
 import type { EvalLimits } from "./limits";
 import type { RingRegistry } from "./rings";
 import type { Scope } from "./scope";
-import type { RingValue, Value } from "./values";
+import type { FamilyValue, FunctionValue, RingValue, Value } from "./values";
 
 /// Everything one evaluation shares: rings, session bindings, the current ring, the
 /// engine's compute options (signal, progress) and the limits.
@@ -22,6 +22,12 @@ export interface Session {
   analysis: Analysis | null;
   /// streams a piece of the running statement's value (e.g. one finished Betti column)
   readonly partial?: (value: Value) => void;
+  /// present when sweeps may become background experiments (set by the server, never by
+  /// the CLI): families longer than inlineMax, or `background = true`, go to `start`
+  readonly experiments?: {
+    readonly inlineMax: number;
+    start(family: FamilyValue, probe: FunctionValue, span: Span): Value;
+  };
 }
 
 /// Where evaluation is: the scope of locals and the ring literals are read in.

@@ -2,6 +2,7 @@
 import { AlgebraError } from "../algebra/index";
 import type { Span } from "../../grammar/ast";
 import type { ErrorJson, ErrorKind, SpanJson } from "./json";
+import type { LimitName } from "../limits";
 
 export class EvalError extends Error {
   constructor(
@@ -15,7 +16,10 @@ export class EvalError extends Error {
 }
 
 export const runtime = (message: string, span: Span): EvalError => new EvalError("runtime", message, span);
-export const limit = (message: string, span: Span): EvalError => new EvalError("limit", message, span);
+/// A limit error; `name` is the limit's name in lib/limits.ts, said in the message so the
+/// user can look it up in the table (README.md, "Limits").
+export const limit = (message: string, span: Span, name?: LimitName): EvalError =>
+  new EvalError("limit", name === undefined ? message : `${message} (limit ${name})`, span);
 
 /// Any failure inside the evaluation of the node at `span` as an EvalError: engine errors
 /// keep their kind, everything unexpected is reported as a runtime error at that node.

@@ -30,6 +30,8 @@ export interface EvaluateOptions {
   readonly limits?: Partial<EvalLimits>;
   /// bounds passed to the engine's long computations
   readonly engineLimits?: ComputeOptions["limits"];
+  /// set by the server only: lets `sweep` hand a sweep to a background experiment
+  readonly experiments?: Session["experiments"];
 }
 
 /// A binding made by this cell: what the database saves as a named object.
@@ -118,6 +120,7 @@ export async function evaluate(source: string, bindings: readonly Binding[], opt
     limits: { ...DEFAULT_LIMITS, ...options.limits },
     analysis: null,
     partial: (value) => emit({ event: "partial", index, item: partialItem++, value: encodeValue(value) }),
+    ...(options.experiments ? { experiments: options.experiments } : {}),
   };
   const interp = new Interpreter(session);
   const results: Extract<EvalEvent, { event: "result" }>[] = [];

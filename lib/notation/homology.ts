@@ -27,6 +27,7 @@ import {
 import type { CallContext } from "./context";
 import { reduceIn } from "./coerce";
 import { limit, runtime } from "./errors";
+import { LIMIT_TABLE } from "../limits";
 import { matrixOf, moduleOf, moduleValue, presentationOverS } from "./modules";
 import { bound } from "./named-options";
 import { pdOverQuotient, presentationOverQuotient, syzygyOverQuotient } from "./quotients";
@@ -39,7 +40,7 @@ type FunctionImpl = (args: readonly Value[], c: CallContext) => Value;
 const Int = (value: bigint | number): Value => ({ type: "Int", value: BigInt(value) });
 const opts = (c: CallContext) => c.interp.session.compute;
 /// The largest homological index of tor, ext and syzygy.
-const MAX_INDEX = 1000;
+const MAX_INDEX = LIMIT_TABLE.homologicalIndex.value;
 
 /// rank, reg, Tor, Ext and Serre's multiplicity are computed over polynomial rings only: over
 /// S/J a resolution is usually infinite, so say what can be computed there instead.
@@ -186,7 +187,7 @@ export const MODULE_PROPERTIES: Record<string, PropertyImpl> = {
 function indexArg(v: Value, span: Span, what: string): number {
   const k = (v as { value: bigint }).value;
   if (k < 0n) throw runtime(`${what} must be at least 0, got ${k}`, span);
-  if (k > BigInt(MAX_INDEX)) throw limit(`${what} ${k} is beyond the limit ${MAX_INDEX}`, span);
+  if (k > BigInt(MAX_INDEX)) throw limit(`${what} ${k} is beyond the limit ${MAX_INDEX}`, span, "homologicalIndex");
   return Number(k);
 }
 
@@ -217,13 +218,13 @@ function finiteLength<T>(what: string, span: Span, f: () => T): T {
 }
 
 /// The most entries a Koszul complex's differentials may have together (dense matrices).
-const MAX_KOSZUL_ENTRIES = 2_000_000;
+const MAX_KOSZUL_ENTRIES = LIMIT_TABLE.koszulEntries.value;
 
 function koszulValue(ring: RingValue, fs: readonly Poly[], c: CallContext): ComplexValue {
   const K = koszulComplex(ring.poly, fs);
   const entries0 = K.ranks.slice(1).reduce((s, r, k) => s + r * K.ranks[k], 0);
   if (entries0 > MAX_KOSZUL_ENTRIES) {
-    throw limit(`the Koszul complex on ${fs.length} elements has ${entries0} matrix entries, beyond the limit ${MAX_KOSZUL_ENTRIES}`, c.span);
+    throw limit(`the Koszul complex on ${fs.length} elements has ${entries0} matrix entries, beyond the limit ${MAX_KOSZUL_ENTRIES}`, c.span, "koszulEntries");
   }
   const maps = Array.from({ length: K.length }, (_, k) => {
     checkpoint(opts(c), { stage: "Koszul complex", detail: `differential ${k + 1}` });
@@ -274,7 +275,7 @@ export const HOMOLOGY_FUNCTIONS: Record<string, FunctionImpl> = {
   },
   "tor_lengths(Module or Ring, Module or Ring)": ([a, b], c) => {
     const { ring, M, N } = pair(a, b, c, c.argSpans, "tor_lengths");
-    const n = bound(c, "length", MAX_INDEX);
+    const n = bound(c, "length", "homologicalIndex");
     const lengths = finiteLength("tor_lengths", c.span, () => torLengthsOf(ring.poly, nonNegative(M), nonNegative(N), opts(c)));
     return { type: "List", items: (n === undefined ? lengths : lengths.slice(0, n + 1)).map(Int) };
   },

@@ -24,6 +24,7 @@ import { freeNames } from "./free-names";
 import { valueText } from "./text";
 import { list, type FunctionValue, type RingValue, type Value } from "./values";
 import type { Evaluator, Frame, Session } from "./context";
+import { familyIndex } from "./families";
 
 const PREDEFINED: Record<string, Value> = {
   Q: { type: "Field", field: QQ },
@@ -168,7 +169,7 @@ export class Interpreter implements Evaluator {
     const to = this.int(b, span);
     const n = to >= from ? to - from + 1n : 0n;
     if (n > BigInt(this.session.limits.maxListLength)) {
-      throw limit(`the range ${from}..${to} has ${n} items, beyond the limit ${this.session.limits.maxListLength}`, span);
+      throw limit(`the range ${from}..${to} has ${n} items, beyond the limit ${this.session.limits.maxListLength}`, span, "listLength");
     }
     const items: Value[] = [];
     for (let k = from; k <= to; k++) items.push({ type: "Int", value: k });
@@ -181,7 +182,7 @@ export class Interpreter implements Evaluator {
     const loop = (clauses: readonly ForClause[], scope: Scope): void => {
       if (clauses.length === 0) {
         if (out.length >= this.session.limits.maxListLength) {
-          throw limit(`the comprehension has more than ${this.session.limits.maxListLength} items`, e.span);
+          throw limit(`the comprehension has more than ${this.session.limits.maxListLength} items`, e.span, "listLength");
         }
         const v = this.eval(e.element, { ...f, scope });
         out.push(v);
@@ -222,7 +223,7 @@ export class Interpreter implements Evaluator {
         if (args.length !== params.length) {
           throw runtime(`the function ${text} takes ${params.length} argument(s), got ${args.length}`, e.span);
         }
-        if (depth > this.session.limits.maxCallDepth) throw limit(`calls nested deeper than ${this.session.limits.maxCallDepth}`, e.span);
+        if (depth > this.session.limits.maxCallDepth) throw limit(`calls nested deeper than ${this.session.limits.maxCallDepth}`, e.span, "callDepth");
         const scope = Scope.EMPTY.with(captures).with(params.map((p, i) => [p, args[i]] as [string, Value]));
         return this.eval(e.body, { scope, ring, depth: depth + 1, source });
       },
@@ -263,8 +264,9 @@ export class Interpreter implements Evaluator {
       if (info.vars.length === 0) throw runtime("a polynomial ring needs at least one variable", e.span);
       return this.session.rings.polynomialRing(obj.field, info.vars, { order, ...(degrees ? { degrees } : {}) });
     }
-    if (obj.type !== "List") throw runtime(`only a List can be indexed, got ${obj.type}`, e.span);
+    if (obj.type !== "List" && obj.type !== "Family") throw runtime(`only a List or a Family can be indexed, got ${obj.type}`, e.span);
     if (e.items.length !== 1) throw runtime("an index is one integer: xs[i]", e.span);
+    if (obj.type === "Family") return familyIndex(obj, this.int(this.eval(e.items[0], f), e.items[0].span), e.items[0].span);
     const i = this.int(this.eval(e.items[0], f), e.items[0].span);
     if (i < 0n || i >= BigInt(obj.items.length)) {
       throw runtime(`index ${i} is out of range: the list has ${obj.items.length} item(s), indices 0…${obj.items.length - 1}`, e.items[0].span);

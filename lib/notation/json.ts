@@ -7,7 +7,7 @@ import { formatHilbertDenominator, formatPoly, hilbertSeriesFromNumerator, parse
 import { parseDenominator } from "./series-text";
 import { parseRat, ratToString } from "../algebra/index";
 import { RingRegistry, parseField, parseOrder } from "./rings";
-import { fieldText, orderText, ringText, valueText } from "./text";
+import { familyDefinition, fieldText, orderText, ringText, valueText } from "./text";
 import type {
   BettiTableValue,
   FunctionValue,
@@ -130,10 +130,12 @@ export function encodeValue(v: Value): ValueJson {
       return {
         type: "Family",
         text: t,
+        length: v.members.length,
+        definition: familyDefinition(v),
         generator: v.generator,
         options: Object.fromEntries([...v.options].map(([k, x]) => [k, x.toString()])),
-        members: v.members.map(encodeIdeal),
-        ring: encodeRing(v.ring),
+        members: v.members.map(encodeValue),
+        ring: v.ring && encodeRing(v.ring),
       };
     case "None":
       return { type: "None", text: t };
@@ -275,14 +277,22 @@ function decodeValidated(j: ValueJson, ctx: DecodeContext): Value {
       const captures = new Map(Object.entries(j.captures).map(([k, x]) => [k, decodeValidated(x, ctx)]));
       return ctx.makeFunction(j, captures, j.ring && decodeRing(j.ring, ctx));
     }
-    case "Family":
+    case "Family": {
+      if (j.length !== undefined && j.length !== j.members.length) fail("Family", `length ${j.length} but ${j.members.length} members`);
+      const members = j.members.map((m) => {
+        const v = decodeValidated(m, ctx);
+        if (v.type !== "Ideal" && v.type !== "Ring" && v.type !== "Module") fail("Family", `a member must be a Ring, Ideal or Module, got ${v.type}`);
+        return v;
+      });
       return {
         type: "Family",
-        ring: decodeRing(j.ring, ctx),
+        ring: j.ring && decodeRing(j.ring, ctx),
         generator: j.generator,
         options: new Map(Object.entries(j.options).map(([k, x]) => [k, BigInt(x)])),
-        members: j.members.map((m) => decodeIdeal(m, ctx)),
+        members,
+        ...(j.definition !== undefined ? { definition: j.definition } : {}),
       };
+    }
     case "None":
       return { type: "None" };
   }

@@ -1,3 +1,5 @@
+import { LIMIT_TABLE } from "../limits";
+
 /// Bounds that keep one evaluation from exhausting the machine; exceeding one is an
 /// Error of kind "limit" at the expression that asked for too much.
 export interface EvalLimits {
@@ -14,11 +16,12 @@ export interface EvalLimits {
   readonly maxHilbertDegree: number;
 }
 
+/// The values of lib/limits.ts, the one table of limits (README.md, "Limits").
 export const DEFAULT_LIMITS: EvalLimits = {
-  maxPolyExponent: 10_000,
-  maxIdealPower: 200,
-  maxIntegerBits: 1_000_000,
-  maxListLength: 1_000_000,
-  maxCallDepth: 200,
-  maxHilbertDegree: 100_000,
+  maxPolyExponent: LIMIT_TABLE.polyExponent.value,
+  maxIdealPower: LIMIT_TABLE.idealPower.value,
+  maxIntegerBits: LIMIT_TABLE.integerBits.value,
+  maxListLength: LIMIT_TABLE.listLength.value,
+  maxCallDepth: LIMIT_TABLE.callDepth.value,
+  maxHilbertDegree: LIMIT_TABLE.hilbertDegree.value,
 };

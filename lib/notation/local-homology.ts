@@ -99,7 +99,7 @@ function resolveTarget(m: Value, t: LocalTarget, length: number, c: CallContext)
 /// The length bound: required over a local quotient ring (resolutions are usually infinite);
 /// over the local ring of S at a point the resolution ends by n + 1 (Hilbert's syzygy theorem).
 function lengthOf(t: LocalTarget, c: CallContext, what: string): number {
-  const n = bound(c, "length", 1000);
+  const n = bound(c, "length", "homologicalIndex");
   if (n !== undefined) return n;
   if (t.J.length === 0) return t.S.vars.length + 1;
   throw runtime(`over a local quotient ring a ${what} is usually infinite: give a bound, e.g. ${what}(M, length = 6)`, c.span);
@@ -279,7 +279,7 @@ export const LOCAL_HOMOLOGY_FUNCTIONS: Record<string, FunctionImpl> = {
   },
   "poincare(Module or Ring)": ([m], c) => {
     const t = targetOf(m, c);
-    const terms = bound(c, "terms", 1000) ?? 10;
+    const terms = bound(c, "terms", "homologicalIndex") ?? 10;
     if (terms < 1) throw runtime("terms must be at least 1", c.span);
     const F = resolveTarget(m, t, terms - 1, c);
     return seriesValue(

@@ -8,11 +8,12 @@ import { columnDegrees, degree, isHomogeneous, isZero, kernelColumns, minimalPre
 import type { CallContext } from "./context";
 import { reduceIn } from "./coerce";
 import { limit, runtime } from "./errors";
+import { LIMIT_TABLE } from "../limits";
 import type { OpContext } from "./context";
 import type { MatrixValue, ModuleValue, RingValue, Value } from "./values";
 
 /// The largest rank of a free module R^n written directly.
-const MAX_FREE_RANK = 10_000;
+const MAX_FREE_RANK = LIMIT_TABLE.freeRank.value;
 
 export function matrixOf(ring: RingValue, rows: readonly (readonly Poly[])[], cols: number): MatrixValue {
   return { type: "Matrix", ring, rows, cols };
@@ -210,11 +211,11 @@ function matrixArg(v: Value, span: Span): MatrixValue {
 function freeDegrees(v: Value, span: Span): number[] {
   if (v.type === "Int") {
     if (v.value < 0n) throw runtime(`the rank must be at least 0, got ${v.value}`, span);
-    if (v.value > BigInt(MAX_FREE_RANK)) throw limit(`the rank ${v.value} is beyond the limit ${MAX_FREE_RANK}`, span);
+    if (v.value > BigInt(MAX_FREE_RANK)) throw limit(`the rank ${v.value} is beyond the limit ${MAX_FREE_RANK}`, span, "freeRank");
     return new Array<number>(Number(v.value)).fill(0);
   }
   if (v.type !== "List") throw runtime(`expected an Int or a List of Int, got ${v.type}`, span);
-  if (v.items.length > MAX_FREE_RANK) throw limit(`the rank ${v.items.length} is beyond the limit ${MAX_FREE_RANK}`, span);
+  if (v.items.length > MAX_FREE_RANK) throw limit(`the rank ${v.items.length} is beyond the limit ${MAX_FREE_RANK}`, span, "freeRank");
   return v.items.map((x, k) => {
     if (x.type !== "Int") throw runtime(`degree ${k + 1} must be an Int, got ${x.type}`, span);
     if (x.value > 1_000_000n || x.value < -1_000_000n) throw limit(`degree ${x.value} is beyond the limit ±1000000`, span);

@@ -62,10 +62,10 @@ function matrix(v: Value, span: Span): MatrixValue {
   return v;
 }
 
-function exponent(r: Value, c: OpContext, max: number, what: string): number {
+function exponent(r: Value, c: OpContext, max: number, what: string, name: "polyExponent" | "idealPower"): number {
   const k = intOf(r);
   if (k < 0n) throw runtime(`the exponent must be non-negative, got ${k}`, c.rightSpan);
-  if (k > BigInt(max)) throw limit(`${what} ${k} is beyond the limit ${max}`, c.rightSpan);
+  if (k > BigInt(max)) throw limit(`${what} ${k} is beyond the limit ${max}`, c.rightSpan, name);
   return Number(k);
 }
 
@@ -107,7 +107,7 @@ function intPower(base: bigint, r: Value, c: OpContext): Value {
   if (k < 0n) throw runtime(`the exponent must be non-negative, got ${k}`, c.rightSpan);
   const a = base < 0n ? -base : base;
   if (a > 1n && BigInt(a.toString(2).length) * k > BigInt(c.interp.session.limits.maxIntegerBits)) {
-    throw limit(`${base}^${k} would have more than ${c.interp.session.limits.maxIntegerBits} bits`, c.span);
+    throw limit(`${base}^${k} would have more than ${c.interp.session.limits.maxIntegerBits} bits`, c.span, "integerBits");
   }
   if (a <= 1n) return Int(base === 0n ? (k === 0n ? 1n : 0n) : base === 1n ? 1n : k % 2n === 0n ? 1n : -1n);
   return Int(base ** k);
@@ -188,13 +188,13 @@ const BINARY: Record<string, BinaryImpl> = {
   },
   "Poly ^ Int": (l, r, c) => {
     const ring = ringOfOperands([l], c.span, c.frame.ring);
-    const k = exponent(r, c, c.interp.session.limits.maxPolyExponent, "the exponent");
+    const k = exponent(r, c, c.interp.session.limits.maxPolyExponent, "the exponent", "polyExponent");
     const opts = c.interp.session.compute;
     const f = toPoly(l, ring, c.leftSpan, opts);
     return polyResult(ring, ring.ideal.length === 0 ? pow(ring.poly, f, k, opts) : powerModulo(ring, f, k, c), c);
   },
   "Ideal ^ Int": (l, r, c) =>
-    idealPowerOf(ideal(l, c.leftSpan), exponent(r, c, c.interp.session.limits.maxIdealPower, "the power of an ideal"), c.interp.session.compute),
+    idealPowerOf(ideal(l, c.leftSpan), exponent(r, c, c.interp.session.limits.maxIdealPower, "the power of an ideal", "idealPower"), c.interp.session.compute),
   "Ideal & Ideal": (l, r, c) => intersectionOf(ideal(l, c.leftSpan), ideal(r, c.rightSpan), c.span, c.interp.session.compute),
   "Ideal : Ideal": (l, r, c) => colonOf(ideal(l, c.leftSpan), ideal(r, c.rightSpan), c.span, c.interp.session.compute),
   "Ideal : Poly": (l, r, c) => {

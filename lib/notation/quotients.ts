@@ -200,7 +200,7 @@ export function pdOverQuotient(M: ModuleValue, depthM: number, c: CallContext): 
 export function poincareValue([M]: readonly Value[], c: CallContext): Value {
   const span = c.argSpans[0] ?? c.span;
   if (M.type !== "Ring" && M.type !== "Module") throw runtime(`poincare expects a Module or a quotient ring, got ${M.type}`, span);
-  const terms = bound(c, "terms", 1000) ?? 10;
+  const terms = bound(c, "terms", "homologicalIndex") ?? 10;
   if (terms < 1) throw runtime("terms must be at least 1", c.span);
   const t = resolutionTarget(M, c);
   if (t.method === "schreyer" && M.type === "Ring") requireGraded(cyclicModule(M, c), "poincare", span, c);

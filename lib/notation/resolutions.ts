@@ -19,13 +19,13 @@ const Int = (value: number): Value => ({ type: "Int", value: BigInt(value) });
 export function resolveValue([m]: readonly Value[], c: CallContext): Value {
   if (m.type !== "Module" && m.type !== "Ring") throw runtime(`resolve expects a Module or a quotient ring, got ${m.type}`, c.argSpans[0] ?? c.span);
   const t = resolutionTarget(m, c);
-  const length = bound(c, "length", 1000);
+  const length = bound(c, "length", "homologicalIndex");
   if (t.method !== "schreyer" && length === undefined) {
     throw runtime("over a quotient ring a resolution is usually infinite: give a bound, e.g. resolve(M, length = 6)", c.span);
   }
   requireCyclicAtOrigin(t, "resolve", c);
   if (t.method === "artinian" && c.named.has("degree")) throw runtime("degree bounds need a graded ring; this one is read at the origin, ungraded", c.span);
-  const degree = bound(c, "degree", 100_000);
+  const degree = bound(c, "degree", "internalDegree");
   const partial = c.interp.session.partial;
   // each finished column streams as a one-column, still-incomplete Betti table
   const running = t.method === "graded-quotient" ? { note: "the resolution is still running" } : {};

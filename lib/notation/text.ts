@@ -2,7 +2,7 @@
 import { formatPoly, type Field, type OrderSpec } from "../algebra/index";
 import { ascendingText, hilbertText } from "./series-text";
 import { ratToString } from "../algebra/index";
-import type { BettiTableValue, MatrixValue, ModuleValue, RingValue, Value } from "./values";
+import type { BettiTableValue, FamilyValue, MatrixValue, ModuleValue, RingValue, Value } from "./values";
 
 export function fieldText(f: Field): string {
   return f.kind === "Q" ? "Q" : `GF(${f.p})`;
@@ -101,11 +101,31 @@ export function valueText(v: Value): string {
       return `{${[...v.fields].map(([k, x]) => `${k}: ${valueText(x)}`).join(", ")}}`;
     case "Function":
       return v.source;
-    case "Family":
-      return `${v.generator}(${[...v.options].map(([k, x]) => `${k} = ${x}`).join(", ")}): ${v.members.length} ideals`;
+    case "Family": {
+      const kinds = [...new Set(v.members.map((m) => m.type))];
+      const noun = kinds.length === 1 ? `${kinds[0].toLowerCase()}${v.members.length === 1 ? "" : "s"}` : "members";
+      return `${familyDefinition(v)}: ${v.members.length} ${noun}`;
+    }
     case "Table":
-      return [v.columns.join(" | "), ...v.rows.map((row) => row.map(valueText).join(" | "))].join("\n");
+      // seconds are exact Rats of whole milliseconds; a table shows them as decimals
+      return [
+        v.columns.join(" | "),
+        ...v.rows.map((row) => row.map((x, i) => (v.columns[i] === "seconds" && x.type === "Rat" ? decimalText(x.value) : valueText(x))).join(" | ")),
+      ].join("\n");
     case "None":
       return "none";
   }
+}
+
+/// How a family was made, with its seeds: the recorded definition, or its recipe.
+export function familyDefinition(v: FamilyValue): string {
+  return v.definition ?? `${v.generator}(${[...v.options].map(([k, x]) => `${k} = ${x}`).join(", ")})`;
+}
+
+/// A Rat with a power-of-ten-friendly denominator (milliseconds) as a decimal, 3 places.
+function decimalText(r: { n: bigint; d: bigint }): string {
+  const thousandths = (r.n * 1000n) / r.d;
+  const sign = thousandths < 0n ? "-" : "";
+  const a = thousandths < 0n ? -thousandths : thousandths;
+  return `${sign}${a / 1000n}.${(a % 1000n).toString().padStart(3, "0")}`;
 }

@@ -14,7 +14,9 @@ export function valueType(v: Value): Type {
     case "Function":
       return T.fn(v.params.map(() => T.Any), T.Any);
     case "Table":
-      return T.table(null);
+      return T.table(v.columns.length ? Object.fromEntries(v.columns.map((c) => [c, T.Any])) : null);
+    case "Family":
+      return T.family(v.members.length === 0 ? T.Ideal : v.members.map(valueType).reduce(joinTypes));
     default:
       return T[v.type];
   }

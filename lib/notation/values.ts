@@ -126,14 +126,23 @@ export interface FunctionValue {
   readonly ring: RingValue | null;
 }
 
-/// A family of examples for experiments, generated on demand from a recipe.
+/// A family of examples for experiments (notation.md §11): finite, ordered, its members
+/// rings, ideals or modules. `generator` and `options` are the recipe (`random_ideals`,
+/// `monomial_ideals`, `family`, `upload`, and `take`/`filter` of those); `definition` is its
+/// text with the seeds, recorded with every experiment.
 export interface FamilyValue {
   readonly type: "Family";
-  readonly ring: RingValue;
+  /// the ring of the generated families; of the first member for a List (null when empty)
+  readonly ring: RingValue | null;
   readonly generator: string;
   readonly options: ReadonlyMap<string, bigint>;
-  readonly members: readonly IdealValue[];
+  readonly members: readonly FamilyMember[];
+  /// e.g. "random_ideals(S, count = 20, gens = 3, degree = 2, seed = 7)"; derived from the
+  /// recipe when absent
+  readonly definition?: string;
 }
+
+export type FamilyMember = RingValue | IdealValue | ModuleValue;
 
 export interface TableValue {
   readonly type: "Table";

@@ -57,8 +57,21 @@ wait_port "$SMTP_PORT" 30 "$SINK_PID"
 
 build_if_stale || die "cannot serve without a production build"
 
-node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$WEB_PORT" &
-WEB_PID=$!
-wait_http "http://127.0.0.1:$WEB_PORT/sign-in" 60 "$WEB_PID"
-log "Ringside is serving on http://127.0.0.1:$WEB_PORT (mailbox: /mailbox, Ctrl-C stops)"
-wait "$WEB_PID"
+# The web server is restarted if it dies (the database and the sink keep running); a server
+# that dies again within 10 s of starting waits a little longer each time before the next try.
+RESTART_PAUSE=1
+while true; do
+  STARTED_AT=$SECONDS
+  node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$WEB_PORT" &
+  WEB_PID=$!
+  ( wait_http "http://127.0.0.1:$WEB_PORT/sign-in" 60 "$WEB_PID" ) || true
+  log "Ringside is serving on http://127.0.0.1:$WEB_PORT (mailbox: /mailbox, Ctrl-C stops)"
+  set +e
+  wait "$WEB_PID"
+  CODE=$?
+  set -e
+  WEB_PID=""
+  if [ $((SECONDS - STARTED_AT)) -lt 10 ]; then RESTART_PAUSE=$((RESTART_PAUSE < 30 ? RESTART_PAUSE * 2 : 30)); else RESTART_PAUSE=1; fi
+  log "the web server stopped (exit status $CODE); restarting it in ${RESTART_PAUSE}s (PostgreSQL keeps running)"
+  sleep "$RESTART_PAUSE"
+done

@@ -96,7 +96,9 @@ export RINGSIDE_TEST_BASE_URL="$NEXTAUTH_URL"
 export RINGSIDE_TEST_SERVER_LOG="$T/web.log"
 : >"$T/web.log"
 if [ "$BUILD_OK" = 1 ]; then
-  node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$WEB_PORT" >"$T/web.log" 2>&1 &
+  # No embedded experiment worker in the shared test server: the experiment suites start
+  # their own workers and servers (tests/experiments/helpers.ts) and kill some of them.
+  RINGSIDE_EMBEDDED_WORKER=0 node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$WEB_PORT" >"$T/web.log" 2>&1 &
   WEB_PID=$!
   wait_http "$NEXTAUTH_URL/sign-in" 60 "$WEB_PID"
 else

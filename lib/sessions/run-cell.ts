@@ -1,37 +1,64 @@
-/// One cell from request to stored result: store it as running, run it in the worker pool,
-/// stream its events as NDJSON, and write the outcome and new named objects in one
-/// transaction — also when the client goes away or the cell is cancelled.
-import { cellLimits, cellPool } from "@/lib/compute/cell-pool";
-import { errorValue, type CellEvent, type CellJob, type CellJobOutcome, type ErrorValue, type Span } from "@/lib/compute/cell-events";
-import { PoolBusyError, type JobEnd } from "@/lib/compute/pool";
+/// One cell from request to stored result: admit it to the engine's fair queue (a refusal
+/// answers 429/503 and stores nothing), store it as running under this server's id, run it
+/// in an engine slot, stream its events as NDJSON while the heartbeat keeps what streamed,
+/// and write the outcome and new named objects in one transaction — also when the client
+/// goes away, the cell is cancelled or a limit stops it (then with the work done so far).
+import { isEngineFull, runInSlot, type EngineFullError, type SlotOutcome } from "@/lib/compute";
+import { errorValue, type CellEvent, type CellJob, type ErrorValue, type Span } from "@/lib/compute/cell-events";
+import { StreamedWork } from "@/lib/compute/streamed-work";
 import type { CurrentUser } from "@/lib/auth/types";
+import { HttpError } from "@/lib/http/errors";
+import { limitValue } from "@/lib/limits";
 import type { CellEvent as StreamEvent } from "@/lib/wire/cells";
 import { registerRunningCell } from "./cancel-channel";
 import { ENGINE_VERSION } from "./engine-version";
-import { abandonStaleCells, currentRingOf, finishCell, listObjects, startCell, type CellOutcome } from "./store";
+import { serverId, trackRunningCell } from "./liveness";
+import { currentRingOf, finishCell, listObjects, markUnsaved, startCell, type CellOutcome, type CellRow, type ObjectRow } from "./store";
 import { objectView } from "./views";
 
 const WHOLE_CELL: Span = { from: { line: 1, col: 1 }, to: { line: 1, col: 1 } };
 
-// Once per process: cells that outlived any time limit were left by a server that stopped.
-const holder = globalThis as typeof globalThis & { __ringsideStaleSwept?: boolean };
-async function sweepStaleCellsOnce(): Promise<void> {
-  if (holder.__ringsideStaleSwept) return;
-  holder.__ringsideStaleSwept = true;
-  await abandonStaleCells(cellLimits().timeLimitMs + 60_000).catch((error) => console.error("[ringside] stale cell sweep failed:", error));
+/// The refusal of a full engine: kind `limit` with the limit's name, and Retry-After.
+function refusal(error: EngineFullError): HttpError {
+  return new HttpError(
+    error.limit === "userQueued" ? 429 : 503,
+    "engine_full",
+    error.message,
+    { kind: "limit", limit: error.limit },
+    { "Retry-After": String(error.retryAfterSeconds) },
+  );
 }
 
 export async function runCell(user: CurrentUser, sessionId: string, source: string): Promise<Response> {
-  await sweepStaleCellsOnce();
-  const pool = cellPool();
   const bindings = (await listObjects(sessionId)).map((o) => ({ name: o.name, type: o.type, value: o.value }));
   const currentRing = await currentRingOf(sessionId);
-  const cell = await startCell(sessionId, user, source);
-  const started = performance.now();
-  const encoder = new TextEncoder();
   const job: CellJob = { source, bindings, currentRing };
 
-  let cancel: () => void = () => {};
+  // Admission first: a computation the engine cannot take leaves no cell behind.
+  const events: CellEvent[] = [];
+  let deliver: ((event: CellEvent) => void) | null = null;
+  const stop = new AbortController();
+  let done: Promise<SlotOutcome>;
+  try {
+    done = runInSlot(
+      { user: user.id, payload: job },
+      { signal: stop.signal, onEvent: (event) => (deliver ? deliver(event) : void events.push(event)) },
+    );
+  } catch (error) {
+    if (isEngineFull(error)) throw refusal(error);
+    throw error;
+  }
+
+  let cell: CellRow;
+  try {
+    cell = await startCell(sessionId, user, source, serverId());
+  } catch (error) {
+    stop.abort();
+    throw error;
+  }
+  const started = performance.now();
+  const encoder = new TextEncoder();
+
   const stream = new ReadableStream<Uint8Array>({
     async start(controller) {
       let open = true;
@@ -45,84 +72,106 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
       };
       send({ event: "accepted", cellId: cell.id, position: cell.position });
 
-      const results: { statement: number; span: Span; value: unknown }[] = [];
-      const bound = new Map<string, { name: string; type: string; value: unknown; source: string }>();
-      let spans: Span[] = [];
-      let failure: ErrorValue | null = null;
-      const onEvent = (raw: unknown) => {
-        const event = raw as CellEvent;
-        switch (event.event) {
-          case "bound":
-            bound.set(event.name, { name: event.name, type: event.type, value: event.value, source: event.source ?? "" });
-            return;
-          case "checked":
-            spans = event.spans;
-            return send({ event: "checked", statements: event.statements });
-          case "result":
-            results.push({ statement: event.statement, span: event.span, value: event.value });
-            return send(event);
-          case "error":
-            failure = event.error;
-            // The evaluator sees any stop as a cancel; whether it was the user or the time
-            // limit is known only when the job ends, so that error is sent then.
-            if (event.error.kind === "cancelled") return;
-            return send(event);
-          default:
-            return send(event);
-        }
-      };
-
-      let end: JobEnd;
+      let untrack = () => {};
       try {
-        const handle = pool.submit(job, { onEvent, timeLimitMs: cellLimits().timeLimitMs });
-        cancel = handle.cancel;
+        const work = new StreamedWork();
+        const bound = new Map<string, { name: string; type: string; value: unknown; source: string }>();
+        let failure: ErrorValue | null = null;
+        const onEvent = (event: CellEvent) => {
+          work.observe(event);
+          switch (event.event) {
+            case "bound":
+              bound.set(event.name, { name: event.name, type: event.type, value: event.value, source: event.source ?? "" });
+              return;
+            case "checked":
+              return send({ event: "checked", statements: event.statements });
+            case "error":
+              failure = event.error;
+              // The evaluator sees any stop as a cancel; whether it was the user or the time
+              // limit is known only when the job ends, so that error is sent then.
+              if (event.error.kind === "cancelled") return;
+              return send(event);
+            default:
+              return send(event);
+          }
+        };
+        for (const event of events.splice(0)) onEvent(event);
+        deliver = onEvent;
+
+        untrack = trackRunningCell(cell.id, () => work.snapshot());
         // Without the cancel channel the cell still runs; only cross-server cancel is lost.
-        const unregister = await registerRunningCell(cell.id, handle.cancel).catch((error) => {
+        const unregister = await registerRunningCell(cell.id, () => stop.abort()).catch((error) => {
           console.error("[ringside] cancel channel unavailable:", error);
           return () => {};
         });
-        end = await handle.done.finally(unregister);
-      } catch (error) {
-        const message = error instanceof PoolBusyError ? error.message : "the engine could not start this computation";
-        if (!(error instanceof PoolBusyError)) console.error("[ringside] cell submit failed:", error);
-        end = { status: "crashed", message };
-      }
+        const end = await done.finally(unregister);
 
-      // A stop that the job did not report itself becomes the cell's error, placed at the
-      // statement that was running.
-      const running = results.length;
-      const reported = failure as ErrorValue | null;
-      const at = reported?.span ?? spans[running] ?? spans[spans.length - 1] ?? WHOLE_CELL;
-      if (end.status !== "finished" && (!reported || reported.kind === "cancelled")) {
-        failure =
-          end.status === "cancelled"
-            ? errorValue("cancelled", "the computation was cancelled", at)
-            : end.status === "limit"
-              ? errorValue("limit", end.message, at)
-              : errorValue("runtime", end.message, at);
-        send({ event: "error", statement: running, error: failure });
-      } else if (reported?.kind === "cancelled") {
-        send({ event: "error", statement: running, error: reported });
-      }
-      const status: CellOutcome["status"] =
-        end.status === "cancelled" || (failure as ErrorValue | null)?.kind === "cancelled" ? "cancelled" : failure ? "error" : "done";
-      const durationMs = performance.now() - started;
-      try {
-        const saved = await finishCell(cell, user, {
+        // A stop that the job did not report itself becomes the cell's error, placed at the
+        // statement that was running.
+        const running = work.results.length;
+        const reported = failure as ErrorValue | null;
+        const at = reported?.span ?? work.spans[running] ?? work.spans[work.spans.length - 1] ?? WHOLE_CELL;
+        if (end.status !== "finished" && (!reported || reported.kind === "cancelled")) {
+          failure =
+            end.status === "cancelled"
+              ? errorValue("cancelled", "the computation was cancelled", at)
+              : end.status === "limit"
+                ? errorValue("limit", end.message, at)
+                : errorValue("runtime", end.message, at);
+          send({ event: "error", statement: running, error: failure });
+        } else if (reported?.kind === "cancelled") {
+          send({ event: "error", statement: running, error: reported });
+        }
+        const final = failure as ErrorValue | null;
+        const status: CellOutcome["status"] =
+          end.status === "cancelled" || final?.kind === "cancelled" ? "cancelled" : final ? "error" : "done";
+        // A cancel or a limit keeps the work done: finished statements and the running one's
+        // partial results, with where it stopped.
+        const stoppedWhy =
+          final && (final.kind === "cancelled" || final.kind === "limit")
+            ? final.kind === "cancelled"
+              ? "cancelled"
+              : final.message
+            : null;
+        const kept = stoppedWhy ? work.stored(stoppedWhy) : null;
+        const durationMs = performance.now() - started;
+        const outcome: CellOutcome = {
           status,
-          results,
+          results: kept?.statements ?? work.results,
+          stopped: kept?.stopped ?? null,
           error: failure,
           durationMs,
           engineVersion: ENGINE_VERSION,
           objects: [...bound.values()],
           // After a stop the evaluator could not report, the ring the cell started in stays current.
-          currentRing: "outcome" in end && end.outcome ? ((end.outcome as CellJobOutcome).currentRing ?? null) : currentRing,
-        });
-        send({ event: "done", status, timings: { totalMs: Math.round(durationMs) }, objects: saved.map(objectView) });
+          currentRing: end.outcome ? (end.outcome.currentRing ?? null) : currentRing,
+        };
+        if (kept) {
+          const partial = kept.statements.length > work.results.length ? kept.statements.at(-1) : undefined;
+          if (partial) send({ event: "result", ...partial });
+        }
+        const saved = await saveWithRetries(cell, user, outcome);
+        if (saved) {
+          send({
+            event: "done",
+            status,
+            ...(outcome.stopped ? { stopped: outcome.stopped } : {}),
+            timings: { totalMs: Math.round(durationMs) },
+            objects: saved.map(objectView),
+          });
+        } else {
+          send({ event: "error", statement: null, error: errorValue("runtime", "the result could not be saved", WHOLE_CELL) });
+          send({ event: "done", status: "error", timings: { totalMs: Math.round(durationMs) }, objects: [] });
+        }
       } catch (error) {
-        console.error("[ringside] storing a cell failed:", error);
-        send({ event: "error", statement: null, error: errorValue("runtime", "the result could not be saved", WHOLE_CELL) });
-        send({ event: "done", status: "error", timings: { totalMs: Math.round(durationMs) }, objects: [] });
+        // Nothing unexpected may leave the cell running: it is marked, and the stream ends.
+        console.error(`[ringside] cell ${cell.id} failed on the server:`, error);
+        stop.abort();
+        await markUnsaved(cell.id, "the server failed while finishing this cell; run it again").catch(() => {});
+        send({ event: "error", statement: null, error: errorValue("runtime", "the server failed while finishing this cell", WHOLE_CELL) });
+        send({ event: "done", status: "error", timings: { totalMs: Math.round(performance.now() - started) }, objects: [] });
+      } finally {
+        untrack();
       }
       open = false;
       try {
@@ -133,7 +182,7 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
     },
     cancel() {
       // The client dropped the connection: stop the work; start() still stores the cell.
-      cancel();
+      stop.abort();
     },
   });
 
@@ -146,3 +195,26 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
   });
 }
 
+/// Stores the outcome, trying again with growing pauses while the database is away (a
+/// restart takes seconds); if every try fails, a last smaller write marks the cell, and if
+/// even that fails, its heartbeat stops and the orphan sweep marks it `interrupted`.
+async function saveWithRetries(cell: CellRow, user: CurrentUser, outcome: CellOutcome): Promise<ObjectRow[] | null> {
+  const attempts = limitValue("saveAttempts");
+  for (let attempt = 1; attempt <= attempts; attempt++) {
+    try {
+      return await finishCell(cell, user, outcome);
+    } catch (error) {
+      console.error(`[ringside] storing cell ${cell.id} failed (try ${attempt} of ${attempts}):`, (error as Error).message);
+      // PostgreSQL refused the data itself (class 22, e.g. a NUL character in a string):
+      // trying again cannot help, so the cell is marked at once, saying why.
+      const code = (error as { code?: unknown }).code;
+      if (typeof code === "string" && code.startsWith("22")) {
+        await markUnsaved(cell.id, `the result could not be stored: ${(error as Error).message}`).catch(() => {});
+        return null;
+      }
+      if (attempt < attempts) await new Promise((r) => setTimeout(r, Math.min(500 * 2 ** (attempt - 1), 8000)));
+    }
+  }
+  await markUnsaved(cell.id, `the result could not be saved after ${attempts} tries (saveAttempts); run the cell again`).catch(() => {});
+  return null;
+}

@@ -13,6 +13,8 @@ export type ObjectRow = typeof namedObjects.$inferSelect;
 export interface CellOutcome {
   status: "done" | "error" | "cancelled";
   results: unknown[];
+  /// where a cancel or a limit stopped the cell ("stopped after homological degree 6: …"), else null
+  stopped: string | null;
   error: unknown | null;
   durationMs: number;
   engineVersion: string;
@@ -155,7 +157,7 @@ export async function listObjects(sessionId: string): Promise<ObjectRow[]> {
 
 /// Stores a new running cell at the next position. The session row is locked so two cells
 /// started at once get distinct positions.
-export async function startCell(sessionId: string, user: CurrentUser, source: string): Promise<CellRow> {
+export async function startCell(sessionId: string, user: CurrentUser, source: string, serverId: string): Promise<CellRow> {
   return db().transaction(async (tx) => {
     await tx.execute(sql`SELECT 1 FROM sessions WHERE id = ${sessionId} FOR UPDATE`);
     const [last] = await tx
@@ -166,7 +168,7 @@ export async function startCell(sessionId: string, user: CurrentUser, source: st
       .limit(1);
     const [row] = await tx
       .insert(cells)
-      .values({ sessionId, position: (last?.position ?? -1) + 1, source, status: "running", createdBy: user.id, startedAt: new Date() })
+      .values({ sessionId, position: (last?.position ?? -1) + 1, source, status: "running", createdBy: user.id, startedAt: new Date(), serverId, heartbeatAt: new Date() })
       .returning();
     await tx.update(sessions).set({ updatedAt: new Date() }).where(eq(sessions.id, sessionId));
     return row!;
@@ -182,7 +184,7 @@ export async function finishCell(cell: CellRow, user: CurrentUser, outcome: Cell
       .update(cells)
       .set({
         status: outcome.status,
-        result: { statements: outcome.results, currentRing: outcome.currentRing },
+        result: { statements: outcome.results, currentRing: outcome.currentRing, ...(outcome.stopped ? { stopped: outcome.stopped } : {}) },
         error: outcome.error,
         finishedAt: new Date(),
         durationMs: Math.max(0, Math.round(outcome.durationMs)),
@@ -233,18 +235,33 @@ export async function deleteObject(sessionId: string, objectId: string): Promise
   return rows.length > 0;
 }
 
-/// Cells left `running` by a server that stopped mid-computation can never finish: mark
-/// them so the transcript does not show them as running forever.
-export async function abandonStaleCells(olderThanMs: number): Promise<number> {
-  const rows = await db().execute(sql`
+/// Marks a cell whose outcome could not be stored (the database kept failing): a smaller
+/// write than finishCell, tried last.
+export async function markUnsaved(cellId: string, message: string): Promise<void> {
+  await db().execute(sql`
     UPDATE cells SET status = 'error', finished_at = now(),
-      error = ${JSON.stringify({
-        type: "Error",
-        kind: "runtime",
-        message: "the server stopped while this cell was running; run it again",
-        span: { from: { line: 1, col: 1 }, to: { line: 1, col: 1 } },
-      })}::jsonb
-    WHERE status = 'running' AND started_at < now() - (${olderThanMs} || ' milliseconds')::interval
-    RETURNING id`);
-  return rows.length;
+      error = ${JSON.stringify({ type: "Error", kind: "runtime", message, span: { from: { line: 1, col: 1 }, to: { line: 1, col: 1 } } })}::jsonb
+    WHERE id = ${cellId}::uuid AND status = 'running'`);
+}
+
+/// Ends a running cell no server will finish (an orphan), keeping what its heartbeat stored.
+export async function endOrphan(cellId: string, status: "cancelled" | "interrupted", stopped: string): Promise<boolean> {
+  const rows = await db().execute(sql`
+    UPDATE cells SET status = ${status}, finished_at = now(),
+      result = jsonb_set(COALESCE(result, '{}'::jsonb), '{stopped}',
+        to_jsonb('stopped' || COALESCE(' after ' || (result->>'progress'), '') || ': ' || ${stopped}::text))
+    WHERE id = ${cellId}::uuid AND status = 'running' RETURNING id`);
+  return rows.length > 0;
+}
+
+/// Whether one of the session's cells or named objects holds a value whose detail is `detailId`
+/// (so a reader of the session may fetch it).
+export async function sessionHoldsDetail(sessionId: string, detailId: string): Promise<boolean> {
+  const needle = `%"id": "${detailId}"%`;
+  const rows = await db().execute(sql`
+    SELECT 1 FROM cells WHERE session_id = ${sessionId} AND result::text LIKE ${needle}
+    UNION ALL
+    SELECT 1 FROM named_objects WHERE session_id = ${sessionId} AND value::text LIKE ${needle}
+    LIMIT 1`);
+  return rows.length > 0;
 }

@@ -8,7 +8,7 @@ import type { CellRow, ObjectRow } from "./store";
 /// `author` is who ran the cell (null for cells from before authors were recorded, or
 /// whose account is gone); its name is shown beside the cell in shared sessions.
 export function cellView(row: CellRow & { authorName?: string | null }): Cell {
-  const result = row.result as { statements?: CellResult[] } | null;
+  const result = row.result as { statements?: CellResult[]; stopped?: unknown } | null;
   return {
     id: row.id,
     position: row.position,
@@ -16,6 +16,8 @@ export function cellView(row: CellRow & { authorName?: string | null }): Cell {
     // the app inserts cells as running; the schema's default "pending" reads the same way
     status: row.status === "pending" ? "running" : row.status,
     results: result?.statements ?? [],
+    /// where a cancel, a limit or a lost server stopped the cell, with its work so far kept in `results`
+    stopped: typeof result?.stopped === "string" ? result.stopped : null,
     error: (row.error as ErrorJson | null) ?? null,
     timings: { totalMs: row.durationMs },
     engineVersion: row.engineVersion,

@@ -30,7 +30,7 @@ async function load(session: SessionRow, selection: ExportSelection = ALL_CELLS)
   // Running cells have no result yet: the export holds finished cells only.
   const cellRows = (await database.select().from(cells).where(eq(cells.sessionId, session.id)).orderBy(asc(cells.position))).filter(
     (c) =>
-      (c.status === "done" || (!selection.skipErrors && (c.status === "error" || c.status === "cancelled"))) &&
+      (c.status === "done" || (!selection.skipErrors && (c.status === "error" || c.status === "cancelled" || c.status === "interrupted"))) &&
       (chosen === null || chosen.has(c.position)),
   );
   const kept = new Set(cellRows.map((c) => c.id));
@@ -55,7 +55,7 @@ export async function exportJson(session: SessionRow, selection: ExportSelection
       return {
         position: c.position,
         source: c.source,
-        status: c.status as "done" | "error" | "cancelled",
+        status: c.status as "done" | "error" | "cancelled" | "interrupted",
         results: raw.map((s, i) => {
           const r = s as { statement?: number; index?: number; span?: unknown; value: ValueJsonLike };
           return {

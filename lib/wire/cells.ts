@@ -9,7 +9,9 @@ import { NamedObject } from "./sessions";
 export { ErrorJson, SpanJson } from "./values";
 export type Span = SpanJson;
 
-export const CellStatus = z.enum(["running", "done", "error", "cancelled"]);
+/// `interrupted`: the server running the cell stopped before it finished (the cell keeps what
+/// had streamed, and `stopped` says so).
+export const CellStatus = z.enum(["running", "done", "error", "cancelled", "interrupted"]);
 export type CellStatus = z.infer<typeof CellStatus>;
 
 const statementIndex = z.number().int().nonnegative();
@@ -31,6 +33,9 @@ export const Cell = z.object({
   source: z.string(),
   status: CellStatus,
   results: z.array(CellResult),
+  /// where a cancel, a limit or a lost server stopped the cell ("stopped after homological
+  /// degree 6: …"); `results` then ends with the running statement's partial results
+  stopped: z.string().nullable().optional(),
   error: ErrorJson.nullable(),
   timings: z.object({ totalMs: z.number().nullable() }).nullable(),
   engineVersion: z.string().nullable().optional(),
@@ -63,6 +68,7 @@ export const CellEvent = z.discriminatedUnion("event", [
   z.object({
     event: z.literal("done"),
     status: CellStatus,
+    stopped: z.string().optional(),
     timings: z.object({ totalMs: z.number() }),
     objects: z.array(NamedObject),
   }),

@@ -152,13 +152,17 @@ export interface FunctionJson {
   captures: Record<string, ValueJson>;
   ring: RingJson | null;
 }
+/// notation.md §11: "length", "members", "definition"; plus the recipe (generator,
+/// options) and the ring. Every member is encoded (rings, ideals or modules).
 export interface FamilyJson {
   type: "Family";
   text: string;
+  length?: number;
+  definition?: string;
   generator: string;
   options: Record<string, string>;
-  members: z.infer<typeof IdealJson>[];
-  ring: RingJson;
+  members: ValueJson[];
+  ring: RingJson | null;
 }
 export type ValueJson = Leaf | ListJson | RecordJson | TableJson | FunctionJson | FamilyJson;
 
@@ -186,10 +190,12 @@ export const FunctionJson: z.ZodType<FunctionJson> = z.object({
 export const FamilyJson: z.ZodType<FamilyJson> = z.object({
   type: z.literal("Family"),
   text,
+  length: z.number().int().nonnegative().optional(),
+  definition: z.string().optional(),
   generator: z.string(),
   options: z.record(z.string(), intText),
-  members: z.array(IdealJson),
-  ring: RingJson,
+  members: z.array(lazyValue),
+  ring: RingJson.nullable(),
 });
 
 const byType = {

@@ -7,6 +7,7 @@ import path from "node:path";
 import { cases as groebnerCases, type BenchCase } from "./cases";
 import { quotientCases } from "./quotient-cases";
 import { resolutionCases } from "./resolution-cases";
+import { sweepThroughput } from "./sweep-throughput";
 
 // Gröbner bases (with SymPy as the reference), resolutions over S (issue 5) and over S/J (issue 6).
 const cases: BenchCase[] = [...groebnerCases, ...resolutionCases, ...quotientCases];
@@ -49,6 +50,11 @@ function timeOurs(c: BenchCase): { seconds: number; size: number; label: string 
 
 async function main(): Promise<void> {
   const filter = process.argv[2];
+  // `npm run bench -- sweep`: only the experiments' throughput (needs DATABASE_URL)
+  if (filter === "sweep") {
+    console.log((await sweepThroughput()).join("\n"));
+    return;
+  }
   const selected = cases.filter((c) => !filter || c.name.includes(filter));
   const ours = selected.map((c) => {
     const r = timeOurs(c);
@@ -71,6 +77,7 @@ async function main(): Promise<void> {
     const agree = t && !("failed" in t) && t.size !== o.size ? " (sizes differ!)" : "";
     console.log(`| ${c.name} | ${o.seconds.toFixed(2)} | ${o.size} | ${sym} | ${ratio}${agree} |`);
   });
+  if (!filter) console.log(`\nSweep throughput (experiments, ${"npm run worker"} processes):\n${(await sweepThroughput()).join("\n")}`);
 }
 
 main().catch((e) => {

@@ -131,7 +131,7 @@ describe("the signature table", () => {
   test.each(PROPERTIES.map((p) => [`${p.owner}.${p.name}`, p] as const))("%s resolves to its declared type", (_key, p) => {
     const value = VALUE_OF[p.owner];
     expect(value, `no sample value of ${p.owner}`).toBeDefined();
-    const args = p.params === null ? "" : `(${p.params.map((q) => (q.type.kind === "Str" ? '"d"' : "1")).join(", ")})`;
+    const args = p.params === null ? "" : `(${p.params.map((q) => (q.type.kind === "Str" ? '"d"' : q.type.kind === "Function" ? "r -> true" : "1")).join(", ")})`;
     const { errors, type } = typeOfLast(`${PRELUDE}\n(${value}).${p.name}${args}`);
     expect(errors).toEqual([]);
     expect(type && typeToString(type)).toBe(typeToString(p.result));

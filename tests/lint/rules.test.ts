@@ -50,7 +50,7 @@ describe("lint rules on deliberate violations", { timeout: 120_000 }, () => {
   });
 
   it("keeps server code out of client components", async () => {
-    for (const server of ["@/db/client", "@/lib/auth/current-user", "@/lib/sessions/store", "@/lib/compute/cell-pool"]) {
+    for (const server of ["@/db/client", "@/lib/auth/current-user", "@/lib/sessions/store", "@/lib/compute/run-in-slot"]) {
       const found = await lint("app/_console/lint-fixture.tsx", `import * as s from "${server}";\nexport const x = s;\n`);
       expect(rulesOf(found), server).toContain("import-x/no-restricted-paths");
     }

@@ -117,3 +117,29 @@ describe("ringside eval", () => {
     expect(r.stdout.trim()).toBe("6");
   });
 });
+
+describe("ringside eval: sweeps run inline", () => {
+  it("prints the Table and a progress line on stderr (done/total, failures, rate)", async () => {
+    const r = await cli(["eval"], "S := Q[a, b]\nT := sweep(monomial_ideals(S, degree = 2, max_gens = 3), I -> {pd: (S / I).pd})\nT.length\n");
+    expect(r.status).toBe(0);
+    expect(r.stdout).toMatch(/^T := index \| label \| status \| seconds \| pd$/m);
+    expect(r.lines[r.lines.length - 1]).toBe("7");
+    // not a terminal: one line per 5 % of the members, the last one says 7/7
+    expect(r.stderr).toMatch(/^sweep: 7\/7 members, 0 failed, [\d.]+ members\/s/m);
+  });
+
+  it("experiments without a database is a usage error, not a crash", async () => {
+    const env = { ...process.env };
+    delete env.DATABASE_URL;
+    const r = await new Promise<{ status: number | null; stderr: string }>((resolve, reject) => {
+      const child = spawn(process.execPath, [launcher, "experiments", "list"], { cwd: root, env });
+      let stderr = "";
+      child.stderr.on("data", (d) => (stderr += d));
+      child.on("error", reject);
+      child.on("close", (status) => resolve({ status, stderr }));
+      child.stdin.end();
+    });
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/DATABASE_URL/);
+  });
+});

@@ -13,11 +13,7 @@ const PART_2: string[] = [
 ];
 
 /// Waiting for engine part 3 (quotient-ring and Artinian invariants, Burch, Poincaré, families).
-const PART_3 = [
-  "random_ideals(Ring)",
-  "monomial_ideals(Ring)",
-  "sweep(Family, Function(Ideal) -> Any)",
-  "Family.length",
+const PART_3: string[] = [
 ];
 
 const table = [

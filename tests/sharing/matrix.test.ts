@@ -139,6 +139,16 @@ const MATRIX: Record<string, Row[]> = {
     { method: "POST", expect: MANAGE, make: async (w) => ({ path: `/api/sessions/${(await freshSession(w)).id}/link` }) },
     { method: "DELETE", expect: MANAGE, make: async (w) => ({ path: `/api/sessions/${(await freshSession(w)).id}/link` }) },
   ],
+  "sessions/[id]/details/[detail]/route.ts": [
+    {
+      method: "GET",
+      // The fresh session holds no large value, so whoever may read it hears 404 for a detail id
+      // (as do those who may not); signed out without a link: 401. Readers fetching a detail the
+      // session holds: tests/integration/robust-compute.test.ts.
+      expect: [404, 404, 404, 404, 404, 404, 404, 404, 401, 404, 404],
+      make: async (w) => ({ path: `/api/sessions/${(await freshSession(w)).id}/details/00000000-0000-4000-8000-000000000000` }),
+    },
+  ],
   "sessions/[id]/export/route.ts": [
     { method: "GET", expect: READ, make: async (w) => ({ path: `/api/sessions/${(await freshSession(w)).id}/export?format=latex` }) },
   ],

@@ -15,6 +15,7 @@ const STATUS_STYLE: Record<CellStatus, string> = {
   done: "bg-ink/10 text-ink dark:bg-paper/10 dark:text-paper",
   error: "bg-red-100 text-red-800 dark:bg-red-900/50 dark:text-red-200",
   cancelled: "bg-paper-deep text-ink-soft dark:bg-night-line dark:text-paper/70",
+  interrupted: "bg-paper-deep text-ink-soft dark:bg-night-line dark:text-paper/70",
 };
 
 /// "0.42 s", "12 ms", "3 min 05 s".
@@ -60,7 +61,13 @@ export function CellView({ cell, context }: { cell: Cell; context?: ViewContext 
       {cell.results.map((r, k) => (
         <ValueView key={resultIndex(r, k)} value={r.value} context={context} />
       ))}
-      {cell.error && <ErrorView error={cell.error} source={cell.source} />}
+      {cell.stopped ? (
+        <p className="text-sm text-ink-soft dark:text-paper/70" data-testid="cell-stopped">
+          {cell.stopped}
+        </p>
+      ) : (
+        cell.error && <ErrorView error={cell.error} source={cell.source} />
+      )}
       {cell.status === "running" && <p className="text-sm text-ink-soft dark:text-paper/70">Still running elsewhere.</p>}
     </article>
   );

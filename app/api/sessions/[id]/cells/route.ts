@@ -4,6 +4,7 @@ import { requireUser, requireUserOrLink } from "@/lib/auth/current-user";
 import { requireSessionAccess } from "@/lib/auth/access";
 import { readJson } from "@/lib/http/body";
 import { route } from "@/lib/http/errors";
+import { LIMIT_TABLE } from "@/lib/limits";
 import { linkToken } from "@/lib/sessions/link-token";
 import { definedNames } from "@/grammar/defined-names";
 import { requireRedefinitionConsent } from "@/lib/sessions/redefine-guard";
@@ -13,7 +14,7 @@ import { cellView } from "@/lib/sessions/views";
 
 type Context = { params: Promise<{ id: string }> };
 
-export const MAX_SOURCE_BYTES = 100 * 1024;
+export const MAX_SOURCE_BYTES = LIMIT_TABLE.cellSourceBytes.value;
 
 const NewCell = z
   .object({

@@ -4,7 +4,8 @@ import { requireSessionAccess } from "@/lib/auth/access";
 import { HttpError, notFound, route } from "@/lib/http/errors";
 import { requestCancel } from "@/lib/sessions/cancel-channel";
 import { linkToken } from "@/lib/sessions/link-token";
-import { getCell } from "@/lib/sessions/store";
+import { isOrphan } from "@/lib/sessions/liveness";
+import { endOrphan, getCell } from "@/lib/sessions/store";
 
 type Context = { params: Promise<{ id: string; cell: string }> };
 
@@ -17,6 +18,11 @@ export const POST = route(async (req, { params }: Context) => {
   const cell = UUID.test(cellId) ? await getCell(id, cellId) : undefined;
   if (!cell) throw notFound("The cell");
   if (cell.status !== "running") throw new HttpError(409, "not_running", `The cell is not running (it is ${cell.status}).`);
+  // A cell whose server is gone has nobody to hear the cancel: end it here.
+  if (isOrphan(cell)) {
+    await endOrphan(cell.id, "cancelled", "cancelled after the server running it had stopped");
+    return NextResponse.json({ cancelled: true });
+  }
   await requestCancel(cell.id);
   return NextResponse.json({ cancelled: true });
 });

@@ -1,0 +1,119 @@
+/// Families uploaded as files: plain text (one ideal per line in the notation, blank lines and
+/// # comments allowed) or JSON (a list of lists of generator texts). Every line is read in the
+/// given ring by the notation's checker and evaluator; when any line is bad, every problem is
+/// reported with its line number (or JSON item) and nothing is stored.
+import { db } from "@/db/client";
+import { namedObjects, uploads } from "@/db/schema";
+import { ExperimentError } from "./errors";
+import { readUpload } from "./compute-adapter";
+import type { UploadProblem } from "./experiment-job";
+
+export const MAX_UPLOAD_LINES = 20_000;
+
+export interface UploadInput {
+  sessionId: string;
+  userId: string;
+  /// the named object the family becomes (an identifier)
+  name: string;
+  format: "text" | "json";
+  /// the ring the ideals are read in, in the notation: "GF(32003)[x, y, z]"
+  ring: string;
+  content: string;
+}
+
+/// JSON content as text lines `<g1, g2>`, one per item; a malformed item is a problem.
+function jsonLines(content: string): { text: string; problems: UploadProblem[] } {
+  let data: unknown;
+  try {
+    data = JSON.parse(content);
+  } catch (e) {
+    throw new ExperimentError(400, "invalid_upload", `The upload is not valid JSON: ${(e as Error).message}.`);
+  }
+  if (!Array.isArray(data))
+    throw new ExperimentError(
+      400,
+      "invalid_upload",
+      'A JSON upload is a list of ideals, each a list of generator texts: [["x^2", "y"], …].',
+    );
+  const problems: UploadProblem[] = [];
+  const lines = data.map((item, k) => {
+    if (!Array.isArray(item) || item.length === 0 || !item.every((g) => typeof g === "string" && g.trim() !== "" && !/[<>\n;]/.test(g))) {
+      problems.push({ line: k + 1, message: 'expected a nonempty list of generator texts such as ["x^2", "y*z"]' });
+      return "<0>";
+    }
+    return `<${(item as string[]).join(", ")}>`;
+  });
+  return { text: lines.join("\n"), problems };
+}
+
+const where = (format: "text" | "json", p: UploadProblem) =>
+  p.line === 0 ? p.message : `${format === "json" ? "item" : "line"} ${p.line}: ${p.message}`;
+
+export async function createUpload(u: UploadInput) {
+  if (!/^[A-Za-z][A-Za-z0-9_']*$/.test(u.name))
+    throw new ExperimentError(
+      400,
+      "invalid_upload",
+      `The name ${JSON.stringify(u.name)} is not an identifier (a letter, then letters, digits, _ or ').`,
+    );
+  let text = u.content;
+  let problems: UploadProblem[] = [];
+  if (u.format === "json") ({ text, problems } = jsonLines(u.content));
+  const lineCount = text.split("\n").length;
+  if (lineCount > MAX_UPLOAD_LINES)
+    throw new ExperimentError(413, "too_large", `The upload has ${lineCount} lines; at most ${MAX_UPLOAD_LINES}.`);
+  if (problems.length === 0) {
+    const read = await readUpload(u.ring, text, 60_000);
+    if (read.kind === "upload-error") problems = read.problems;
+    else {
+      const family = {
+        type: "Family",
+        text: `upload ${u.name}: ${read.members.length} ideals`,
+        length: read.members.length,
+        definition: `upload ${u.name} (${u.format}, ${read.members.length} ideals over ${u.ring})`,
+        generator: "upload",
+        options: { length: String(read.members.length) },
+        members: read.members,
+        ring: read.ring,
+      };
+      return db().transaction(async (tx) => {
+        const [row] = await tx
+          .insert(uploads)
+          .values({
+            sessionId: u.sessionId,
+            createdBy: u.userId,
+            name: u.name,
+            format: u.format,
+            content: u.content,
+            family,
+            length: read.members.length,
+          })
+          .returning({ id: uploads.id, name: uploads.name, format: uploads.format, length: uploads.length, createdAt: uploads.createdAt });
+        // the upload becomes a named object of type Family (notation.md §11)
+        await tx
+          .insert(namedObjects)
+          .values({
+            sessionId: u.sessionId,
+            ownerId: u.userId,
+            name: u.name,
+            type: "Family",
+            value: family,
+            source: `# uploaded file (${u.format})`,
+          })
+          .onConflictDoUpdate({
+            target: [namedObjects.sessionId, namedObjects.name],
+            set: { type: "Family", value: family, source: `# uploaded file (${u.format})`, updatedAt: new Date() },
+          });
+        return row;
+      });
+    }
+  }
+  problems.sort((a, b) => a.line - b.line);
+  const shown = problems.slice(0, 20).map((p) => where(u.format, p));
+  throw new ExperimentError(
+    422,
+    "invalid_upload",
+    `Nothing was stored: ${shown[0]}${problems.length > 1 ? ` (and ${problems.length - 1} more problem${problems.length > 2 ? "s" : ""})` : ""}`,
+    problems.slice(0, 100).map((p) => ({ line: p.line, message: where(u.format, p) })),
+  );
+}
