@@ -1,5 +1,6 @@
 /// Sends signed-out visitors of any app page to the sign-in page, except the console page
-/// opened through a published read-only link (`/?session=…&link=…`): the API decides
+/// opened through a published read-only link (`/?session=…&link=…`) and an experiment's
+/// page opened through its session's link (`/experiments/<id>?link=…`): the API decides
 /// whether that link is valid, and the page shows the session read-only. API routes are
 /// not matched: they answer 401 JSON themselves (lib/auth/current-user.ts).
 import { getToken } from "next-auth/jwt";
@@ -9,7 +10,8 @@ const PUBLIC_PAGES = new Set(["/sign-in", "/sign-up"]);
 
 function isLinkVisit(request: NextRequest): boolean {
   const { pathname, searchParams } = request.nextUrl;
-  return pathname === "/" && Boolean(searchParams.get("session")) && Boolean(searchParams.get("link"));
+  if (!searchParams.get("link")) return false;
+  return (pathname === "/" && Boolean(searchParams.get("session"))) || /^\/experiments\/[0-9a-f-]{36}$/.test(pathname);
 }
 
 export async function proxy(request: NextRequest) {

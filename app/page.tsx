@@ -5,6 +5,7 @@ import { sessionRole } from "@/lib/auth/access";
 import { currentUser } from "@/lib/auth/current-user";
 import { listTeams } from "@/lib/sharing/teams";
 import { Console } from "./_console/console";
+import { FinishWatcher } from "./_experiments/finish-watcher";
 
 // Badges past this many would push the header wider than the window.
 const TEAMS_SHOWN = 2;
@@ -14,7 +15,11 @@ const one = (v: string | string[] | undefined): string | null => (typeof v === "
 /// The console page: the header, then the console (sessions, shelf, transcript, input);
 /// `?session=<id>` opens that session, and `&link=<token>` reads it through a published
 /// read-only link, which also works signed out (proxy.ts lets that visit through).
-export default async function ConsolePage({ searchParams }: { searchParams: Promise<{ session?: string | string[]; link?: string | string[] }> }) {
+export default async function ConsolePage({
+  searchParams,
+}: {
+  searchParams: Promise<{ session?: string | string[]; link?: string | string[] }>;
+}) {
   const user = await currentUser();
   const params = await searchParams;
   const session = one(params.session);
@@ -45,6 +50,9 @@ export default async function ConsolePage({ searchParams }: { searchParams: Prom
         <Link href="/reference" className="text-ink-soft underline" title="The notation reference: every function, property and option, searchable">
           Notation
         </Link>
+        <Link href="/experiments" className="text-ink-soft underline">
+          Experiments
+        </Link>
         <Link href="/teams" className="text-ink-soft underline">
           Teams
         </Link>
@@ -61,6 +69,7 @@ export default async function ConsolePage({ searchParams }: { searchParams: Prom
         </Link>
       </nav>
       <Console initialSessionId={session} linkToken={link} signedIn />
+      <FinishWatcher />
     </PageShell>
   );
 }
@@ -107,8 +116,8 @@ function LinkVisitorPage({ sessionId, link }: { sessionId: string; link: string 
 }
 
 /// The page frame: the header with the product's name, its navigation, then the console.
-function PageShell({ children }: { children: [ReactNode, ReactNode] }) {
-  const [nav, body] = children;
+function PageShell({ children }: { children: [ReactNode, ReactNode] | [ReactNode, ReactNode, ReactNode] }) {
+  const [nav, body, extra] = children;
   return (
     <div className="flex min-h-screen flex-col md:h-screen">
       <header className="flex flex-wrap items-center justify-between gap-x-4 gap-y-1 border-b border-ink/10 bg-white px-5 py-3 dark:border-paper/10 dark:bg-night-panel dark:text-paper">
@@ -118,6 +127,7 @@ function PageShell({ children }: { children: [ReactNode, ReactNode] }) {
         {nav}
       </header>
       {body}
+      {extra}
     </div>
   );
 }

@@ -6,6 +6,11 @@
 /// link (`linkToken`), the console reads that one session with the token on every call and
 /// offers nothing that changes it.
 import { useCallback, useMemo, useState } from "react";
+import { createFromSource } from "@/app/_experiments/api";
+import { CellExperiments, useExperimentCommands } from "@/app/_experiments/console-links";
+import type { GuidedExample } from "@/lib/examples/tour";
+import { messageOf } from "@/app/_client/fetch";
+import { createSession } from "./api/client";
 import { paletteCommands } from "./palette-commands";
 import { useTheme } from "./theme";
 import { useConsole, type ConsoleOptions, type DialogName } from "./use-console";
@@ -32,9 +37,31 @@ export function Console(props: ConsoleProps) {
   const openDialog = useCallback((d: Exclude<DialogName, null>) => setDialog(d), [setDialog]);
   const closeDialog = useCallback(() => setDialog(null), [setDialog]);
 
+  // the experiments room: palette commands, a cell's links, the tour's sweep step
+  const experimentCommands = useExperimentCommands(sessionId, c.cells, canEdit, signedIn, c.setNotice);
+  const runTourExperiment = useCallback(
+    async (e: GuidedExample) => {
+      try {
+        const id = sessionId ?? (await createSession("First session")).id;
+        const { experiment } = await createFromSource(id, e.source);
+        window.location.assign(`/experiments/${experiment.id}?view=plots&plot=heat`);
+      } catch (err) {
+        setDialog(null);
+        c.setNotice(`The experiment did not start: ${messageOf(err)}`);
+      }
+    },
+    [sessionId, setDialog, c],
+  );
+  const cellFooter = useCallback(
+    (cell: Parameters<typeof CellExperiments>[0]["cell"]) => (
+      <CellExperiments cell={cell} sessionId={sessionId} canEdit={canEdit} signedIn={signedIn} />
+    ),
+    [sessionId, canEdit, signedIn],
+  );
+
   const commands = useMemo(
-    () =>
-      paletteCommands({
+    () => [
+      ...paletteCommands({
         signedIn,
         canEdit,
         canShare,
@@ -58,7 +85,10 @@ export function Console(props: ConsoleProps) {
           openInNewTab: (path) => void window.open(path, "_blank"),
         },
       }),
+      ...experimentCommands,
+    ],
     [
+      experimentCommands,
       signedIn,
       canEdit,
       canShare,
@@ -158,6 +188,7 @@ export function Console(props: ConsoleProps) {
           onInsertExample={c.insertExample}
           onOpenTour={() => setDialog("tour")}
           onCancel={() => void cancelRunning()}
+          cellFooter={cellFooter}
         />
         <p
           role="status"
@@ -204,6 +235,7 @@ export function Console(props: ConsoleProps) {
         onChooseCells={() => setDialog("export")}
         pendingRedefinition={c.pendingRedefinition}
         onAnswerRedefinition={c.answerRedefinition}
+        onRunTourExperiment={signedIn && (canEdit || sessionId === null) ? (e) => void runTourExperiment(e) : undefined}
       />
     </div>
   );

@@ -67,6 +67,8 @@ export async function listExperiments(sessionIds: readonly string[]) {
       total: experiments.total,
       createdAt: experiments.createdAt,
       finishedAt: experiments.finishedAt,
+      /// the cell the experiment was made from (the console links a cell to its experiments)
+      sourceCellId: experiments.sourceCellId,
       done: sql<number>`(SELECT count(*)::int FROM experiment_rows r WHERE r.experiment_id = ${experiments.id})`,
       failures: sql<number>`(SELECT count(*)::int FROM experiment_rows r WHERE r.experiment_id = ${experiments.id} AND r.status <> 'ok')`,
     })

@@ -88,8 +88,17 @@ function targetOfRing(m: RingValue, span: Span, what: string, c: CallContext): T
 function targetOfModule(M: ModuleValue, span: Span, what: string, c: CallContext): Target {
   const J = engineIdeal(M.ring.poly, M.ring.ideal);
   if (!idealIsHomogeneous(J, opts(c))) throw runtime(`${what} over a quotient ring needs a homogeneous defining ideal`, span);
+  // One generator in degree 0: coker [g1 … gk] is R/(g1, …, gk), the same graded module, and
+  // the cyclic form lets the engine split every degree by multidegree when both ideals are
+  // monomial (k over R: the residue field R.residue) instead of working on whole pieces.
+  // (The presentation stays for the callers that read it, e.g. the socle.)
   const shift = -Math.min(0, ...M.degrees);
-  return { base: M.ring, J, presentation: { rows: M.presentation.rows, degrees: M.degrees.map((d) => d + shift) }, shift };
+  const presentation = { rows: M.presentation.rows, degrees: M.degrees.map((d) => d + shift) };
+  if (M.degrees.length === 1 && M.degrees[0] === 0) {
+    const I = engineIdeal(M.ring.poly, M.presentation.rows[0]);
+    if (idealIsHomogeneous(I, opts(c))) return { base: M.ring, J, module: I, presentation, shift: 0 };
+  }
+  return { base: M.ring, J, presentation, shift };
 }
 
 function degreewise(t: Target, length: number, degree: number | undefined, c: CallContext, stream: boolean, keepMaps?: number): QuotientResolution {

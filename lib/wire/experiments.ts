@@ -116,6 +116,8 @@ export const ExperimentSummary = z.object({
   status: ExperimentStatus,
   familyDefinition: z.string(),
   probeText: z.string(),
+  /// the console cell the experiment was made from (null for uploads and programs)
+  sourceCellId: z.string().nullable(),
   total: z.number(),
   done: z.number(),
   failures: z.number(),

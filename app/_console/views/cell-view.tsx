@@ -1,6 +1,7 @@
 "use client";
 /// One transcript cell: source, status, time taken and results; while it runs, a
 /// progress bar with the stage, the Betti columns computed so far and a Cancel button.
+import type { ReactNode } from "react";
 import { resultIndex, type Cell, type CellStatus } from "@/lib/wire/reading";
 import { bettiGrid } from "../render/betti";
 import type { ViewContext } from "../render/view-model";
@@ -52,10 +53,14 @@ function Source({ source }: { source: string }) {
   );
 }
 
-/// A finished (or stored) cell; `context` lets values name their ring (render/view-model).
-export function CellView({ cell, context }: { cell: Cell; context?: ViewContext }) {
+/// A finished (or stored) cell; `footer` is drawn under its results (the experiments room
+/// puts its links there); `context` lets values name their ring (render/view-model).
+export function CellView({ cell, footer, context }: { cell: Cell; footer?: ReactNode; context?: ViewContext }) {
   return (
-    <article aria-label={`Cell ${cell.position + 1}`} className="rs-cell flex flex-col gap-2 border-b border-ink/10 py-3 dark:border-paper/10">
+    <article
+      aria-label={`Cell ${cell.position + 1}`}
+      className="rs-cell flex flex-col gap-2 border-b border-ink/10 py-3 dark:border-paper/10"
+    >
       <Header position={cell.position} status={cell.status} ms={cell.timings?.totalMs ?? null} author={(cell as Cell & { author?: Author }).author} />
       <Source source={cell.source} />
       {cell.results.map((r, k) => (
@@ -69,6 +74,7 @@ export function CellView({ cell, context }: { cell: Cell; context?: ViewContext 
         cell.error && <ErrorView error={cell.error} source={cell.source} />
       )}
       {cell.status === "running" && <p className="text-sm text-ink-soft dark:text-paper/70">Still running elsewhere.</p>}
+      {footer}
     </article>
   );
 }
@@ -79,7 +85,11 @@ export function RunningCellView({ cell, onCancel, context }: { cell: RunningCell
   const running = cell.status === "running";
   const stage = cell.stage === null ? "sending" : cell.stage === "checked" ? "checked, starting" : cell.stage;
   return (
-    <article aria-label="Running cell" aria-busy={running} className="rs-cell flex flex-col gap-2 border-b border-ink/10 py-3 dark:border-paper/10">
+    <article
+      aria-label="Running cell"
+      aria-busy={running}
+      className="rs-cell flex flex-col gap-2 border-b border-ink/10 py-3 dark:border-paper/10"
+    >
       <Header position={cell.position} status={cell.status} ms={cell.totalMs} />
       <Source source={cell.source} />
       {cell.results.map((r, k) => (

@@ -39,6 +39,8 @@ export function ConsoleDialogs(props: {
   onChooseCells: () => void;
   pendingRedefinition: PendingRedefinition | null;
   onAnswerRedefinition: (replace: boolean) => void;
+  /// the tour's sweep step: run it as an experiment and open its plot (experiments room)
+  onRunTourExperiment?: (e: GuidedExample) => void;
 }) {
   const { dialog, onClose, session, sessionId, signedIn, canEdit, history, sharingObject } = props;
   return (
@@ -49,7 +51,7 @@ export function ConsoleDialogs(props: {
       <Modal open={dialog === "tour"} title="Guided first steps" onClose={onClose}>
         <div className="max-h-[70vh] overflow-y-auto pr-1">
           {/* the steps run in a session of the reader's own (useConsole.insertExample), so any signed-in reader may run them */}
-          <TourList onInsert={props.onInsertExample} canRun={signedIn} />
+          <TourList onInsert={props.onInsertExample} canRun={signedIn} onRunExperiment={props.onRunTourExperiment} />
         </div>
       </Modal>
       <Modal open={dialog === "share" && sessionId !== null} title={`Share “${session?.title ?? "this session"}”`} onClose={onClose}>

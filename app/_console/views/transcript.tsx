@@ -1,7 +1,7 @@
 "use client";
 /// The transcript: the session's stored cells, the cell running now, the welcome of an
 /// empty session, and load errors in words. It follows the newest output.
-import { useEffect, useMemo, useRef } from "react";
+import { useEffect, useMemo, useRef, type ReactNode } from "react";
 import type { GuidedExample } from "@/lib/examples/tour";
 import type { Cell, NamedObject } from "@/lib/wire/reading";
 import type { RunningCell } from "../state/running-cell";
@@ -22,6 +22,8 @@ export function Transcript(props: {
   onInsertExample: (e: GuidedExample) => void;
   onOpenTour: () => void;
   onCancel: () => void;
+  /// drawn under a stored cell (the experiments room's links and "Run as an experiment")
+  cellFooter?: (cell: Cell) => ReactNode;
 }) {
   const { cells, running, noSessions, canEdit, sessionError, cellsError, onInsertExample, onOpenTour, onCancel } = props;
   const end = useRef<HTMLDivElement>(null);
@@ -47,7 +49,7 @@ export function Transcript(props: {
       {empty && <EmptySessionWelcome onInsert={onInsertExample} onOpenTour={onOpenTour} canRun={canEdit} />}
       {noSessions && <EmptySessionWelcome onInsert={onInsertExample} onOpenTour={onOpenTour} canRun />}
       {shownCells.map((c) => (
-        <CellView key={c.id} cell={c} context={context} />
+        <CellView key={c.id} cell={c} context={context} footer={props.cellFooter?.(c)} />
       ))}
       {running && <RunningCellView cell={running} onCancel={onCancel} context={context} />}
       <div ref={end} />

@@ -53,4 +53,7 @@ export interface Strategy {
   /// Removes the next batch from the front of the sorted pair list.
   select(pairs: Pair[]): Pair[];
   reduce: ReductionStep;
+  /// The reduced basis from the basis found (over GF(p) only when set; else element by
+  /// element with geobuckets).
+  finish?: (R: RingCtx<number>, G: readonly Poly[], opts: ComputeOptions | undefined) => Poly[];
 }

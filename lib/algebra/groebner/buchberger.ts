@@ -35,7 +35,9 @@ export function buchberger<C>(R: RingCtx<C>, gens: readonly Poly[], opts: Comput
       pairs = updatePairs(R.layout, order, basis, pairs, basis.elts.length - 1);
     }
   }
-  return interreduce(R, basis.active.map((k) => basis.elts[k].poly), opts);
+  const found = basis.active.map((k) => basis.elts[k].poly);
+  if (strategy.finish && R.ring.field.kind === "gf") return strategy.finish(R as unknown as RingCtx<number>, found, opts);
+  return interreduce(R, found, opts);
 }
 
 function isConstantMono(m: Int32Array): boolean {

@@ -1,23 +1,25 @@
 import { gf } from "../field/field";
 import { bigToMod, invMod } from "../field/gfp";
 import { previousPrime } from "../field/prime";
-import { rat, type Rat } from "../field/rational";
+import { bigGcd, rat, type Rat } from "../field/rational";
 import type { Mono } from "../monomial/monomial";
-import { monoDiv } from "../monomial/monomial";
+import { monoDiv, monoMul } from "../monomial/monomial";
 import { checkpoint, Ticker, type ComputeOptions } from "../options";
 import { asTyped, makePoly, type Poly } from "../poly/poly";
 import { polyRing, ringCtx, type RingCtx } from "../poly/ring";
 import type { Basis, BasisElt, Pair } from "./basis";
 import { buchberger, maxDegree } from "./buchberger";
-import { Geobucket } from "./geobucket";
 import { updatePairs } from "./pairs";
-import { addMultipleOfTail, reduceBucket } from "./reduce";
+import { F4_PRIME_BOUND, replayF4, tracingF4, type F4StepTrace } from "./f4";
+import { f4Strategy } from "./strategy";
+import { findReducer } from "./reduce";
 
 /// Gröbner bases over Q by the modular method (E. A. Arnold, "Modular algorithms for
 /// computing Gröbner bases", J. Symbolic Comput. 2003): reduced bases modulo several primes
 /// with the same leading monomials are combined by Chinese remaindering, lifted by rational
 /// reconstruction, and the lift is accepted only once it is verified over Q. When lifting
-/// keeps failing, Buchberger's algorithm runs directly over Q.
+/// keeps failing, Buchberger's algorithm runs directly over Q. In degree orders the primes
+/// after the first follow the first one's F4 trace (see groebnerModular).
 
 const MAX_PRIMES = 48;
 const MAX_FAILED_VERIFICATIONS = 3;
@@ -39,14 +41,28 @@ export function groebnerModular(R: RingCtx<Rat>, gens: readonly Poly[], opts: Co
   if (inputs.length === 0) return [];
   const lifts = new Map<string, Lift>();
   let failures = 0;
-  let p = 2 ** 26;
+  // Degree orders run F4, exact for every p < 2^31: the largest primes carry the most bits
+  // each. The first prime's F4 run is traced and the later primes follow the trace (only
+  // the rows that gave new elements, no pair handling, no search for reducers); a prime
+  // whose steps differ is computed from scratch and its trace kept instead.
+  const graded = R.ring.order.kind === "grevlex" || R.ring.order.kind === "glex";
+  let trace: F4StepTrace[] | null = null;
+  let p = graded ? F4_PRIME_BOUND : 2 ** 26;
   for (let used = 0; used < MAX_PRIMES; used++) {
     p = previousPrime(p);
     const Rp = ringCtx(polyRing(gf(p), R.ring.vars, { order: R.ring.order, degrees: [...R.ring.degrees] })) as RingCtx<number>;
     const images = reduceInputs(inputs, p);
     if (!images) continue; // p divides a denominator or a leading coefficient
     checkpoint(opts, { stage: "groebner over Q", detail: `prime ${used + 1}` });
-    const Gp = buchberger(Rp, images.map(([m, c]) => makePoly(m, c)), opts);
+    const polys = images.map(([m, c]) => makePoly(m, c));
+    let Gp: Poly[] | null = null;
+    if (graded) {
+      if (trace) Gp = replayF4(Rp, trace, polys, opts);
+      if (!Gp) {
+        trace = [];
+        Gp = buchberger(Rp, polys, opts, tracingF4(f4Strategy, trace));
+      }
+    } else Gp = buchberger(Rp, polys, opts);
     const lms = Gp.map((g) => monoKey(g.m[0])).join(";");
     let L = lifts.get(lms);
     if (!L) {
@@ -169,28 +185,99 @@ function reconstruct(R: RingCtx<Rat>, L: Lift): Poly[] | null {
 
 /// The lift is the reduced basis of the input ideal over Q when every input reduces to 0
 /// and every S-pair left by the Gebauer–Möller criteria reduces to 0 (Buchberger's criterion).
+/// Both tests only ask whether a remainder is zero, so they run on integer multiples:
+/// each element is scaled to a primitive integer polynomial and each reduction step is the
+/// fraction-free h ← (a/d)·h − (c/d)·t·g with d = gcd(a, c) (a the leading coefficient of g,
+/// c that of h), which changes h only by a non-zero factor — no rational arithmetic and one
+/// gcd per step instead of one per coefficient operation; contents are divided out as they
+/// grow.
 function verify(R: RingCtx<Rat>, inputs: readonly Poly[], G: Poly[], opts: ComputeOptions | undefined): boolean {
   const ticker = new Ticker(opts, () => ({ stage: "groebner over Q", detail: "verifying the lifted basis" }));
   const basis: Basis = { elts: [], active: [] };
   const elts: BasisElt[] = G.map((poly) => ({ poly, lm: poly.m[0], sugar: maxDegree(poly) }));
+  const Z = G.map(integral);
   const ids = elts.map((_, i) => i);
-  for (const f of inputs) {
-    const b = new Geobucket(R);
-    const F = asTyped<Rat>(f);
-    b.add([...F.m], [...F.c]);
-    if (reduceBucket(R, b, elts, ids, 0, opts, ticker).m.length > 0) return false;
-  }
+  for (const f of inputs) if (!reducesToZero(R, integral(f), elts, Z, ids, ticker)) return false;
   let pairs: Pair[] = [];
   for (const e of elts) {
     basis.elts.push(e);
     pairs = updatePairs(R.layout, { cmp: R.cmp, bySugar: false }, basis, pairs, basis.elts.length - 1);
   }
   for (const pr of pairs) {
-    const b = new Geobucket(R);
-    const ei = elts[pr.i], ej = elts[pr.j];
-    addMultipleOfTail(R, b, ei.poly, R.K.one, monoDiv(pr.lcm, ei.lm));
-    addMultipleOfTail(R, b, ej.poly, R.K.neg(R.K.one), monoDiv(pr.lcm, ej.lm));
-    if (reduceBucket(R, b, elts, ids, 0, opts, ticker).m.length > 0) return false;
+    const gi = Z[pr.i], gj = Z[pr.j];
+    const ai = gi.c[0], aj = gj.c[0];
+    const d = bigGcd(ai, aj);
+    const s = combineZ(R, mulZ(gi, monoDiv(pr.lcm, elts[pr.i].lm)), aj / d, mulZ(gj, monoDiv(pr.lcm, elts[pr.j].lm)), -(ai / d), 1);
+    if (!reducesToZero(R, s, elts, Z, ids, ticker)) return false;
+  }
+  return true;
+}
+
+/// A polynomial with integer coefficients, terms in decreasing order.
+interface ZPoly {
+  m: Mono[];
+  c: bigint[];
+}
+
+/// The primitive integer multiple of f with a positive leading coefficient.
+function integral(f: Poly): ZPoly {
+  const F = asTyped<Rat>(f);
+  let den = 1n;
+  for (const c of F.c) den = (den / bigGcd(den, c.d)) * c.d;
+  const c = F.c.map((x) => x.n * (den / x.d));
+  return primitive({ m: [...F.m], c });
+}
+
+function primitive(h: ZPoly): ZPoly {
+  let g = 0n;
+  for (const x of h.c) {
+    g = bigGcd(g, x);
+    if (g === 1n) return h;
+  }
+  if (h.c.length > 0 && h.c[0] < 0n) g = -g;
+  return g === 1n || g === 0n ? h : { m: h.m, c: h.c.map((x) => x / g) };
+}
+
+function mulZ(g: ZPoly, t: Mono): ZPoly {
+  return { m: g.m.map((m) => monoMul(m, t)), c: g.c };
+}
+
+/// a·f + b·g without the first `skip` terms of each (their leading terms cancel).
+function combineZ(R: RingCtx<Rat>, f: ZPoly, a: bigint, g: ZPoly, b: bigint, skip: number): ZPoly {
+  const m: Mono[] = [], c: bigint[] = [];
+  let i = skip, j = skip;
+  while (i < f.m.length || j < g.m.length) {
+    const o = i >= f.m.length ? -1 : j >= g.m.length ? 1 : R.cmp(f.m[i], g.m[j]);
+    if (o > 0) {
+      m.push(f.m[i]);
+      c.push(a * f.c[i++]);
+    } else if (o < 0) {
+      m.push(g.m[j]);
+      c.push(b * g.c[j++]);
+    } else {
+      const v = a * f.c[i] + b * g.c[j];
+      if (v !== 0n) {
+        m.push(f.m[i]);
+        c.push(v);
+      }
+      i++;
+      j++;
+    }
+  }
+  return { m, c };
+}
+
+function reducesToZero(R: RingCtx<Rat>, h: ZPoly, elts: BasisElt[], Z: ZPoly[], ids: number[], ticker: Ticker): boolean {
+  let steps = 0;
+  while (h.m.length > 0) {
+    ticker.tick();
+    const r = findReducer(elts, ids, h.m[0]);
+    if (r < 0) return false;
+    const g = Z[r];
+    const a = g.c[0], c = h.c[0];
+    const d = bigGcd(a, c);
+    h = combineZ(R, h, a / d, mulZ(g, monoDiv(h.m[0], elts[r].lm)), -(c / d), 1);
+    if (++steps % 4 === 0) h = primitive(h);
   }
   return true;
 }

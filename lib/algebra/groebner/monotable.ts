@@ -1,18 +1,29 @@
 import { HEAD, type Mono } from "../monomial/monomial";
+import type { OrderSpec } from "../order/order";
 
 /// Read once: an imported binding may be a getter in transpiled code, too slow for hot loops.
 const H = HEAD;
-/// A hash table of monomials with a hash that is linear in the exponents, so the hash of a
-/// product t·m is the sum of the hashes and products can be looked up before they are
-/// allocated (common practice in matrix-based Gröbner basis codes).
+/// The monomials of one F4 step, each stored once in one flat Int32Array (the packed layout
+/// of monomial.ts, `stride` entries per monomial) and found again by a hash that is linear
+/// in the exponents, so the hash of a product t·m is the sum of the hashes and a product is
+/// looked up before it is built (common practice in matrix-based Gröbner basis codes; hash
+/// tables of monomials for building F4 matrices are discussed by B. H. Roune, M. Stillman,
+/// "Practical Gröbner basis computation", ISSAC 2012 — from memory). Nothing is allocated
+/// per monomial.
 export class MonoTable {
-  readonly monos: Mono[] = [];
-  private readonly hashes: number[] = [];
+  readonly stride: number;
+  /// Packed monomials: id k occupies [k·stride, (k+1)·stride).
+  exps: Int32Array;
+  size = 0;
+  private hashes: Int32Array;
   private slots: Int32Array;
   private readonly weights: Int32Array;
 
   constructor(n: number, capacity = 1 << 12) {
-    this.slots = new Int32Array(capacity).fill(-1);
+    this.stride = H + n;
+    this.exps = new Int32Array(capacity * this.stride);
+    this.hashes = new Int32Array(capacity);
+    this.slots = new Int32Array(capacity * 2).fill(-1);
     this.weights = new Int32Array(n);
     let s = 0x9e3779b9 | 0;
     for (let i = 0; i < n; i++) {
@@ -31,37 +42,94 @@ export class MonoTable {
   /// The id of t·m (hash(t·m) = ht + hm), inserting it when new.
   productId(t: Mono, ht: number, m: Mono, hm: number): number {
     const h = (ht + hm) | 0;
-    const mask = this.slots.length - 1;
+    const slots = this.slots, E = this.exps, S = this.stride, hashes = this.hashes;
+    const mask = slots.length - 1;
     let s = (h ^ (h >>> 16)) & mask;
     for (;;) {
-      const id = this.slots[s];
+      const id = slots[s];
       if (id < 0) break;
-      if (this.hashes[id] === h && this.isProduct(this.monos[id], t, m)) return id;
+      if (hashes[id] === h) {
+        let same = true;
+        for (let i = H, o = id * S; i < S; i++) {
+          if (E[o + i] !== t[i] + m[i]) {
+            same = false;
+            break;
+          }
+        }
+        if (same) return id;
+      }
       s = (s + 1) & mask;
     }
-    const len = m.length;
-    const r = new Int32Array(len);
-    r[0] = t[0] + m[0];
-    r[1] = t[1] + m[1];
-    r[2] = t[2] | m[2];
-    for (let i = H; i < len; i++) r[i] = t[i] + m[i];
-    const id = this.monos.length;
-    this.monos.push(r);
-    this.hashes.push(h);
-    this.slots[s] = id;
-    if (this.monos.length * 2 > this.slots.length) this.grow();
+    const id = this.size++;
+    if (id === this.hashes.length) this.growStore();
+    const F = this.exps, o = id * S;
+    F[o] = t[0] + m[0];
+    F[o + 1] = t[1] + m[1];
+    F[o + 2] = t[2] | m[2];
+    for (let i = H; i < S; i++) F[o + i] = t[i] + m[i];
+    this.hashes[id] = h;
+    slots[s] = id;
+    if (this.size * 2 > slots.length) this.growSlots();
     return id;
   }
 
-  private isProduct(e: Mono, t: Mono, m: Mono): boolean {
-    for (let i = H, len = e.length; i < len; i++) if (e[i] !== t[i] + m[i]) return false;
-    return true;
+  /// A fresh copy of monomial id.
+  mono(id: number): Mono {
+    return this.exps.slice(id * this.stride, (id + 1) * this.stride);
   }
 
-  private grow(): void {
+  /// The comparison of the ring's monomial order on ids (positive when a > b); the same
+  /// order as order.ts, read from the flat store.
+  comparator(order: OrderSpec): (a: number, b: number) => number {
+    const S = this.stride;
+    const revTail = (E: Int32Array, oa: number, ob: number) => {
+      for (let i = S - 1; i >= H; i--) {
+        const d = E[ob + i] - E[oa + i];
+        if (d !== 0) return d;
+      }
+      return 0;
+    };
+    const lexTail = (E: Int32Array, oa: number, ob: number) => {
+      for (let i = H; i < S; i++) {
+        const d = E[oa + i] - E[ob + i];
+        if (d !== 0) return d;
+      }
+      return 0;
+    };
+    switch (order.kind) {
+      case "grevlex":
+        return (a, b) => {
+          const E = this.exps, oa = a * S, ob = b * S;
+          return E[oa] - E[ob] || revTail(E, oa, ob);
+        };
+      case "glex":
+      case "lex":
+        return (a, b) => {
+          const E = this.exps, oa = a * S, ob = b * S;
+          return E[oa] - E[ob] || lexTail(E, oa, ob);
+        };
+      case "weights":
+        return (a, b) => {
+          const E = this.exps, oa = a * S, ob = b * S;
+          return E[oa] - E[ob] || E[oa + 1] - E[ob + 1] || revTail(E, oa, ob);
+        };
+    }
+  }
+
+  private growStore(): void {
+    const cap = this.hashes.length * 2;
+    const exps = new Int32Array(cap * this.stride);
+    exps.set(this.exps);
+    this.exps = exps;
+    const hashes = new Int32Array(cap);
+    hashes.set(this.hashes);
+    this.hashes = hashes;
+  }
+
+  private growSlots(): void {
     const slots = new Int32Array(this.slots.length * 2).fill(-1);
     const mask = slots.length - 1;
-    for (let id = 0; id < this.monos.length; id++) {
+    for (let id = 0; id < this.size; id++) {
       const h = this.hashes[id];
       let s = (h ^ (h >>> 16)) & mask;
       while (slots[s] >= 0) s = (s + 1) & mask;

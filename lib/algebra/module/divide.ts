@@ -35,7 +35,15 @@ export function divisorsOf<C>(vecs: readonly Vec<C>[]): Divisors<C> {
 }
 
 export function makeStream<C>(t: Mono, s: C, v: Vec<C>, pos: number): Stream<C> {
-  return { t, s, v, pos, key: pos < v.tot.length ? monoMul(t, v.tot[pos]) : t };
+  return { t, s, v, pos, key: pos < v.tot.length ? monoMul(t, v.tot[pos]) : t.slice() };
+}
+
+/// dst = a·b in the packed layout (monomial.ts: key and degree add, masks or).
+function mulInto(dst: Mono, a: Mono, b: Mono): void {
+  dst[0] = a[0] + b[0];
+  dst[1] = a[1] + b[1];
+  dst[2] = a[2] | b[2];
+  for (let i = 3, len = dst.length; i < len; i++) dst[i] = a[i] + b[i];
 }
 
 /// One term of a quotient (coef·mono·e_index) or of a remainder (coef·tot at comp).
@@ -102,20 +110,26 @@ export function heapDivide<C>(
     }
     return top;
   };
+  // A stream's key is its own array, rewritten in place as the stream advances (one packed
+  // monomial per pending term was most of the allocation of a resolution); the current
+  // term's key is copied into `key` first, since it outlives the advance.
   const advance = (st: Stream<C>) => {
     st.pos++;
     if (st.pos < st.v.mono.length) {
-      st.key = monoMul(st.t, st.v.tot[st.pos]);
+      mulInto(st.key, st.t, st.v.tot[st.pos]);
       push(st);
     }
   };
   for (const st of streams) if (st.pos < st.v.mono.length) push(st);
   const quotient: QuotientTerm<C>[] = [];
   const remainder: RemainderTerm<C>[] = [];
+  let key: Mono = new Int32Array(0);
   while (heap.length > 0) {
     ticker.tick();
     const first = pop();
-    const key = first.key, comp = first.v.comp[first.pos];
+    const comp = first.v.comp[first.pos];
+    if (key.length !== first.key.length) key = new Int32Array(first.key.length);
+    key.set(first.key);
     let c = K.mul(first.s, first.v.coef[first.pos]);
     advance(first);
     while (heap.length > 0) {
@@ -129,7 +143,7 @@ export function heapDivide<C>(
     const l = findDivisor(D, key, comp);
     if (l < 0) {
       if (!keepRemainder) throw new Error("heapDivide: a term of the dividend has no divisor; the divisors are not a Gröbner basis");
-      remainder.push({ tot: key, comp, coef: c });
+      remainder.push({ tot: key.slice(), comp, coef: c });
       continue;
     }
     const g = D.vecs[l];

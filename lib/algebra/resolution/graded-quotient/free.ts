@@ -115,6 +115,13 @@ export class GradedFree<C> {
     return out;
   }
 
+  /// Adds x_v · w into `out` (a zeroed dense vector of the group of degree j + w_v), for w
+  /// sparse over the positions of group `from` of degree j.
+  mulVarSparseInto(v: number, j: number, from: readonly number[], w: { idx: readonly number[]; val: readonly C[] }, out: C[]): void {
+    const L = this.layout(j), T = this.layout(j + this.A.weights[v]);
+    for (let k = 0; k < w.idx.length; k++) this.addMulVar(v, j, from[w.idx[k]], w.val[k], out, L, T);
+  }
+
   /// x_v · w for a sparse w of degree j, as a sparse vector of degree j + w_v.
   mulVarSparse(v: number, j: number, w: Sparse<C>): Sparse<C> {
     const K = this.K;

@@ -1,5 +1,7 @@
 import { AlgebraError } from "../../errors";
-import { Echelon, kernelBasis } from "../../graded/echelon";
+import { Echelon } from "../../graded/echelon";
+import { SparseEchelon } from "../../graded/sparse-echelon";
+import { sparseKernelBasis } from "../../graded/sparse-kernel";
 import { gradedQuotient, type GradedQuotient } from "../../graded/piece";
 import { type Ideal, idealGroebnerBasis } from "../../ideal/ideal";
 import { idealSum } from "../../ideal/arith";
@@ -205,7 +207,7 @@ function nextModule<C>(
   const n = req.length;
   const next = new GradedFree<C>(R, multi);
   /// Kernel bases by degree, then by group.
-  const kernels = new Map<number, Map<BlockKey, Echelon<C>>>();
+  const kernels = new Map<number, Map<BlockKey, KernelBasis<C>>>();
   const kernelDims = new PerDegreeBlock();
   const images = new ImageCache(F, target);
   const pass: Pass<C> = { setup, i, F, next, kernels, prevKernelDims, images };
@@ -215,13 +217,14 @@ function nextModule<C>(
     checkLimit(opts, "maxBasisSize", F.dim(j), "a graded piece of the resolution");
     const L = F.layout(j);
     const TL = target.layout(j);
-    const here = new Map<BlockKey, Echelon<C>>();
+    const here = new Map<BlockKey, KernelBasis<C>>();
     kernels.set(j, here);
     for (const [key, block] of L.blocks) {
       const { kernel, decomposable } = syzygiesOfBlock(pass, j, key, block, L, TL, info);
       here.set(key, kernel);
       kernelDims.set(j, key, kernel.rank);
-      req.inspect?.({ i, j, F, block, kernel, decomposable });
+      // With `inspect` the bases are dense Echelons (syzygiesOfBlock keeps them so).
+      if (req.inspect) req.inspect({ i, j, F, block, kernel: kernel as Echelon<C>, decomposable: decomposable as Echelon<C> });
     }
     kernels.delete(j - maxW);
   }
@@ -234,7 +237,7 @@ interface Pass<C> {
   i: number;
   F: GradedFree<C>;
   next: GradedFree<C>;
-  kernels: Map<number, Map<BlockKey, Echelon<C>>>;
+  kernels: Map<number, Map<BlockKey, KernelBasis<C>>>;
   prevKernelDims: PerDegreeBlock;
   images: ImageCache<C>;
 }
@@ -250,14 +253,16 @@ function syzygiesOfBlock<C>(
   L: Layout,
   TL: Layout,
   info: () => ProgressInfo,
-): { kernel: Echelon<C>; decomposable: Echelon<C> } {
+): { kernel: KernelBasis<C>; decomposable: KernelBasis<C> } {
   const { req, opts, R, K, pres } = setup;
   const dimF = block.length;
   const tBlock = TL.blocks.get(key) ?? [];
   // d_i maps F_i onto K_{i−1} (onto the module itself for i = 0).
   const relations = i === 0 && pres ? pres.columns.filter((c) => c.degree === j) : null;
   const expected = relations ? dimF : dimF - (i === 0 ? tBlock.length : (prevKernelDims.get(j, key) ?? 0));
-  const P = new Echelon<C>(K, dimF);
+  // Sparse rows unless a caller inspects the bases (it reads them densely): a kernel basis
+  // is products of syzygies by variables, sparse, while dense rows cost rank × dim.
+  const P: KernelBasis<C> = req.inspect ? new Echelon<C>(K, dimF) : new SparseEchelon<C>(K, dimF);
   // Products beyond rank `expected` add nothing: they all lie in K_{i,j}.
   products: for (let v = 0; v < R.n && expected > 0; v++) {
     const lk = lowerKey(key, v);
@@ -265,47 +270,68 @@ function syzygiesOfBlock<C>(
     const low = lk === null ? undefined : kernels.get(jl)?.get(lk);
     if (!low) continue;
     const from = F.layout(jl).blocks.get(lk!)!;
-    for (const b of low.rows) {
-      if (P.rank >= expected) break products;
-      checkpoint(opts, info);
-      P.insert(F.mulVarBlock(v, jl, from, b, dimF));
+    if (low instanceof SparseEchelon && P instanceof SparseEchelon) {
+      for (const b of low.rows) {
+        if (P.rank >= expected) break products;
+        checkpoint(opts, info);
+        F.mulVarSparseInto(v, jl, from, b, P.accumulator);
+        P.insertAccumulated();
+      }
+    } else {
+      for (const b of (low as Echelon<C>).rows) {
+        if (P.rank >= expected) break products;
+        checkpoint(opts, info);
+        insertDense(P, F.mulVarBlock(v, jl, from, b, dimF));
+      }
     }
   }
   if (P.rank > expected) throw new AlgebraError("runtime", "resolution: internal inconsistency (syzygies exceed the kernel)");
-  let decomposable = P;
+  let decomposable: KernelBasis<C> = P;
   if (relations) {
     // K_{0,j} = m·K_0 in degree j plus the relations of degree j; those outside the
     // span so far are minimal relations (graded Nakayama).
     if (req.inspect) {
       decomposable = new Echelon<C>(K, dimF);
-      for (const r of P.rows) decomposable.insert(r);
+      for (const r of (P as Echelon<C>).rows) (decomposable as Echelon<C>).insert(r);
     }
     for (const rel of relations) {
       const z = densify(K, rel.vector, L, dimF);
-      if (P.insert(z)) next.addGenerator(j, rel.vector);
+      if (insertDense(P, z)) next.addGenerator(j, rel.vector);
     }
   } else if (P.rank < expected) {
     if (req.inspect) {
       decomposable = new Echelon<C>(K, dimF);
-      for (const r of P.rows) decomposable.insert(r);
+      for (const r of (P as Echelon<C>).rows) (decomposable as Echelon<C>).insert(r);
     }
     // K_{i,j} = P ⊕ (K_{i,j} ∩ C) for C spanned by the unit vectors off the pivots of P,
     // and d vanishes on P: the new syzygies are the kernel of d restricted to C.
     const pivots = new Set(P.pivots);
     const free: number[] = [];
     for (let k = 0; k < dimF; k++) if (!pivots.has(k)) free.push(k);
-    const cols = free.map((k) => densify(K, images.of(j, block[k]), TL, tBlock.length));
-    const ker = kernelBasis(K, tBlock.length, cols, () => checkpoint(opts, info));
+    // The images sparse over the target group, the kernel by sparse elimination: dense
+    // combinations (free × rank) were most of the memory of the largest pieces.
+    const cols = free.map((k) => {
+      const w = images.of(j, block[k]);
+      return { idx: w.idx.map((x) => TL.local[x]), val: w.val };
+    });
+    const ker = sparseKernelBasis(K, tBlock.length, free.length, cols, () => checkpoint(opts, info));
     if (ker.length !== expected - P.rank) throw new AlgebraError("runtime", "resolution: internal inconsistency (kernel dimension)");
     const md = multidegreeOf(key);
     for (const c of ker) {
       const z = new Array<C>(dimF).fill(K.zero);
-      c.forEach((a, k) => (z[free[k]] = a));
-      P.insert(z);
+      c.idx.forEach((k, t) => (z[free[k]] = c.val[t]));
+      insertDense(P, z);
       next.addGenerator(j, sparsify(K, z, block), md);
     }
   }
   return { kernel: P, decomposable };
+}
+
+/// A basis of K_{i,j} in one group: dense rows (for `inspect`) or sparse ones.
+type KernelBasis<C> = Echelon<C> | SparseEchelon<C>;
+
+function insertDense<C>(P: KernelBasis<C>, v: readonly C[]): boolean {
+  return P instanceof SparseEchelon ? P.insertDense(v) : P.insert(v);
 }
 
 /// The matrix of F_{i+1} → F_i: column g holds the boundary of generator g of `next`,

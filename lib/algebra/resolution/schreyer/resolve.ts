@@ -94,26 +94,38 @@ function resolveFromBasis<C>(R: RingCtx<C>, degrees0: number[], O: ModuleOrder, 
     if (i <= maxLength) opts?.partial?.(col);
   };
   const S = schreyerResolution(R, degrees0, O, basis, bounds, opts, onLevel);
-  const M = minimizeResolution(R, S, opts);
-  checkMinimal(S, M.kept, columns);
   const complete = !S.truncatedDegree && columns.every((c) => c.i <= maxLength || c.entries.length === 0);
   const reported = columns.filter((c) => c.i <= maxLength);
   let length = 0;
   for (const c of reported) if (c.entries.length > 0) length = c.i;
-  const kept = M.kept.slice(0, length + 1);
-  const degrees = kept.map((ks, k) => Object.freeze(ks.map((p) => S.degrees[k][p])));
+  // The Betti numbers and ranks come from the scalar ranks alone; the minimised complex is
+  // built only when a differential or the basis degrees are asked for (most callers read
+  // only the Betti table: resolve(…).betti, poincare), and then checked against them.
+  let M: ReturnType<typeof minimizeResolution<C>> | null = null;
+  const minimized = () => {
+    if (!M) {
+      M = minimizeResolution(R, S, opts);
+      checkMinimal(S, M.kept, columns);
+    }
+    return M;
+  };
+  const rankOf = Array.from({ length: length + 1 }, (_, i) => (reported.find((c) => c.i === i)?.entries ?? []).reduce((s, [, b]) => s + b, 0));
+  let degrees: readonly (readonly number[])[] | null = null;
   const maps = new Map<number, Poly[][]>();
   return Object.freeze({
     ring: R.ring,
-    ranks: Object.freeze(kept.map((ks) => ks.length)),
-    degrees: Object.freeze(degrees),
+    ranks: Object.freeze(rankOf),
+    get degrees() {
+      if (!degrees) degrees = Object.freeze(minimized().kept.slice(0, length + 1).map((ks, k) => Object.freeze(ks.map((p) => S.degrees[k][p]))));
+      return degrees;
+    },
     betti: bettiTable(reported, complete),
     length,
     complete,
     map(i: number): Poly[][] {
       if (!Number.isInteger(i) || i < 1 || i > length) throw runtimeError("map", `the differentials are numbered 1…${length}, got ${i}`);
       let A = maps.get(i);
-      if (!A) maps.set(i, (A = denseMap(R, M, i)));
+      if (!A) maps.set(i, (A = denseMap(R, minimized(), i)));
       return A.map((row) => [...row]);
     },
   });

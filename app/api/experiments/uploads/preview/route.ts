@@ -1,0 +1,23 @@
+import { NextResponse } from "next/server";
+import { z } from "zod";
+import { requireUser } from "@/lib/auth/current-user";
+import { readJson } from "@/lib/http/body";
+import { experimentRoute } from "@/lib/experiments/http";
+import { previewUpload } from "@/lib/experiments/upload-preview";
+
+const Body = z
+  .object({
+    format: z.enum(["text", "json"]),
+    ring: z.string().min(1).max(2000),
+    content: z.string().max(2 * 1024 * 1024),
+  })
+  .strict();
+
+/// POST /api/experiments/uploads/preview: reads a family file as the upload would and
+/// stores nothing; 200 `{preview: {count, members: [{line, value}], problems: [{line,
+/// message}], problemCount, unit}}` whether or not lines are bad (the problems are the answer).
+export const POST = experimentRoute(async (req) => {
+  await requireUser();
+  const body = await readJson(req, Body, { maxBytes: 3 * 1024 * 1024 });
+  return NextResponse.json({ preview: await previewUpload(body) });
+});
