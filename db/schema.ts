@@ -106,6 +106,9 @@ export const sessions = pgTable(
     visibility: visibility("visibility").notNull().default("private"),
     /// the read-only link's token while a link is published, else null
     shareToken: text("share_token").unique(),
+    /// true while the title is the placeholder given to a session created without one; the
+    /// first definition it stores then becomes its title (issue 18), and a rename clears it
+    autoTitle: boolean("auto_title").notNull().default(false),
     createdAt: createdAt(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
   },
@@ -154,6 +157,8 @@ export const namedObjects = pgTable(
     sessionId: uuid("session_id")
       .notNull()
       .references(() => sessions.id, { onDelete: "cascade" }),
+    /// who defined it: the user whose cell bound the name last (or who imported the copy);
+    /// redefining another person's name needs an explicit confirmation (issue 18)
     ownerId: uuid("owner_id")
       .notNull()
       .references(() => users.id, { onDelete: "cascade" }),

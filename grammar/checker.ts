@@ -7,6 +7,7 @@ import type * as A from "./ast";
 import type { Analysis, Diagnostic, Env, NameResolution, SubscriptInfo } from "./analysis";
 import type { ParseResult } from "./parser";
 import { readRingLiteral } from "./ring-literal";
+import { gradedProblems } from "./graded-check";
 import {
   CONSTANTS,
   FUNCTIONS,
@@ -987,6 +988,8 @@ export function check(parsed: ParseResult, env: Env, source: string): Analysis {
     marks.push({ defined: c.definitions.length, ring: c.ring() });
     c.statement(s, parsed.broken.has(i));
   });
+  // Gradings are judged only on a program that is otherwise well typed.
+  if (c.errors.length === 0 && parsed.errors.length === 0) c.errors.push(...gradedProblems(parsed.program, source, c.names, c.subscripts));
   const typeErrors = [...c.errors].sort((a, b) => a.span.from.offset - b.span.from.offset);
   let envs: Env[] | undefined;
   // The per-statement environments are rebuilt only when asked for: copying the

@@ -134,8 +134,10 @@ export function Console(props: ConsoleProps) {
       : data.sessionError;
 
   return (
-    <div className="grid min-h-0 flex-1 grid-cols-[17rem_minmax(0,1fr)] bg-paper text-ink dark:bg-night dark:text-paper">
-      <aside className="flex min-h-0 flex-col gap-4 border-r border-ink/10 bg-paper-deep/40 p-3 dark:border-paper/10 dark:bg-night-panel">
+    // From md (768 px) up: sessions and shelf beside the transcript. Narrower (a phone, read-only
+    // use): one column, the transcript first and the panels under it, nothing wider than the screen.
+    <div className="flex min-h-0 min-w-0 flex-1 flex-col bg-paper text-ink md:grid md:grid-cols-[17rem_minmax(0,1fr)] dark:bg-night dark:text-paper">
+      <aside className="order-2 flex min-h-0 min-w-0 flex-col gap-4 border-t border-ink/10 bg-paper-deep/40 p-3 md:order-none md:border-r md:border-t-0 dark:border-paper/10 dark:bg-night-panel">
         {signedIn ? (
           <SessionsPanel
             sessions={data.sessions}
@@ -144,6 +146,7 @@ export function Console(props: ConsoleProps) {
             onOpen={c.openSession}
             onNew={() => void newSession()}
             onImport={() => setDialog("transfer")}
+            onDeleted={c.sessionDeleted}
           />
         ) : (
           <p className="text-sm text-ink-soft dark:text-paper/70">
@@ -158,10 +161,11 @@ export function Console(props: ConsoleProps) {
           onDelete={c.deleteOne}
           onShare={c.canShare ? setSharingObject : undefined}
           onOpenShared={signedIn ? () => setDialog("shared-objects") : undefined}
+          onOpenLibrary={signedIn ? () => setDialog("library") : undefined}
         />
       </aside>
 
-      <main className="flex min-h-0 min-w-0 flex-col">
+      <main className="order-1 flex min-h-[70vh] min-w-0 flex-col md:order-none md:min-h-0">
         <Toolbar
           session={data.session}
           sessionId={sessionId}
@@ -174,6 +178,7 @@ export function Console(props: ConsoleProps) {
           onToggleTheme={toggleTheme}
         />
         <Transcript
+          objects={objects}
           cells={c.cells}
           running={running}
           noSessions={sessionId === null && data.sessions?.length === 0}
@@ -225,6 +230,11 @@ export function Console(props: ConsoleProps) {
         onObjectsImported={c.objectsImported}
         onExport={c.exportTranscript}
         onImport={c.importFromFile}
+        link={c.link}
+        cells={c.cells ?? []}
+        onChooseCells={() => setDialog("export")}
+        pendingRedefinition={c.pendingRedefinition}
+        onAnswerRedefinition={c.answerRedefinition}
         onRunTourExperiment={signedIn && (canEdit || sessionId === null) ? (e) => void runTourExperiment(e) : undefined}
       />
     </div>

@@ -7,9 +7,13 @@ import { defaultKeymap, history, historyKeymap } from "@codemirror/commands";
 import { forceLinting } from "@codemirror/lint";
 import { EditorState } from "@codemirror/state";
 import { EditorView, keymap, placeholder } from "@codemirror/view";
-import { useEffect, useImperativeHandle, useRef, type Ref } from "react";
+import { useEffect, useImperativeHandle, useRef, useState, type Ref } from "react";
 import type { Env } from "@/grammar/analysis";
 import { consoleKeymap } from "@/lib/editor/console-keymap";
+
+/// How the run-anyway shortcut (Mod-Shift-Enter) is written for the reader's keyboard.
+const RUN_ANYWAY_LABEL =
+  typeof navigator !== "undefined" && /Mac|iPhone|iPad/.test(navigator.platform) ? "⌘⇧Enter" : "Ctrl+Shift+Enter";
 import { consoleTheme } from "@/lib/editor/console-theme";
 import { notationCompletion } from "@/lib/editor/notation-completion";
 import { notationDiagnostics } from "@/lib/editor/notation-diagnostics";
@@ -45,6 +49,8 @@ export function InputEditor({ env, history: past, onRun, handle }: InputEditorPr
   const runRef = useRef(onRun);
   historyRef.current = past;
   runRef.current = onRun;
+  // the checker's problems that kept Enter from running the input, shown under it
+  const [held, setHeld] = useState<readonly string[]>([]);
 
   useEffect(() => {
     envRef.current = env;
@@ -59,7 +65,12 @@ export function InputEditor({ env, history: past, onRun, handle }: InputEditorPr
       state: EditorState.create({
         doc: "",
         extensions: [
-          consoleKeymap({ run: (s) => runRef.current(s), history: () => historyRef.current }),
+          consoleKeymap({
+            run: (s) => runRef.current(s),
+            history: () => historyRef.current,
+            problems: (s) => checkNotation(s, envRef.current).errors.map((e) => `${e.span.from.line}:${e.span.from.col}: ${e.message}`),
+            onHeld: (p) => setHeld((old) => (old.length === 0 && p.length === 0 ? old : p)),
+          }),
           history(),
           closeBrackets(),
           notationHighlight(),
@@ -103,5 +114,15 @@ export function InputEditor({ env, history: past, onRun, handle }: InputEditorPr
     [],
   );
 
-  return <div ref={host} className="rs-input min-h-[3rem] flex-1" />;
+  return (
+    <div className="flex min-w-0 flex-1 flex-col">
+      <div ref={host} className="rs-input min-h-[3rem] flex-1" />
+      {held.length > 0 && (
+        <p role="alert" className="mt-1 text-sm text-red-700 dark:text-red-300" data-testid="input-held">
+          Not run — {held[0]}
+          {held.length > 1 ? ` (and ${held.length - 1} more)` : ""}. Fix it, or press {RUN_ANYWAY_LABEL} to run anyway.
+        </p>
+      )}
+    </div>
+  );
 }

@@ -85,6 +85,13 @@ export function paletteCommands(c: PaletteContext): PaletteCommand[] {
     },
   ];
   if (c.sessionId) {
+    list.push({
+      id: "export-cells",
+      group: "Export",
+      label: "Export the transcript, choosing cells…",
+      keywords: ["download", "markdown", "latex", "json", "errors"],
+      run: () => a.openDialog("export"),
+    });
     for (const format of ["latex", "markdown", "json"] as const) {
       list.push({
         id: `export-${format}`,
@@ -103,6 +110,13 @@ export function paletteCommands(c: PaletteContext): PaletteCommand[] {
         label: "Import a session from a JSON export…",
         keywords: ["upload", "file"],
         run: () => a.openDialog("transfer"),
+      },
+      {
+        id: "library",
+        group: "Session",
+        label: "Open the library of my objects…",
+        keywords: ["find", "insert", "objects", "other sessions", "search"],
+        run: () => a.openDialog("library"),
       },
       {
         id: "shared-objects",

@@ -5,7 +5,7 @@
 /// what this returns.
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { mutate } from "swr";
-import { messageOf } from "@/app/_client/fetch";
+import { ApiError, messageOf } from "@/app/_client/fetch";
 import { envFromObjects } from "@/lib/editor/notation-env";
 import type { GuidedExample } from "@/lib/examples/tour";
 import type { NamedObject } from "@/lib/wire/reading";
@@ -17,7 +17,14 @@ import { applyCellEvent, startedCell, type RunningCell } from "./state/running-c
 import { downloadTranscript } from "./transcript-export";
 import { useSessionData } from "./use-session-data";
 
-export type DialogName = "history" | "tour" | "help" | "share" | "transfer" | "shared-objects" | null;
+export type DialogName = "history" | "tour" | "help" | "share" | "transfer" | "shared-objects" | "library" | "export" | null;
+
+/// A cell the server held back because it would replace names someone else defined: the
+/// console asks, then runs it with `redefine` or gives the source back to the input.
+export interface PendingRedefinition {
+  readonly source: string;
+  readonly message: string;
+}
 
 /// Keeps the open session in the address (?session=…), so a reload reopens it; the link
 /// token stays only while its own session is open.
@@ -46,6 +53,9 @@ export function useConsole({ initialSessionId, linkToken, signedIn }: ConsoleOpt
   const [running, setRunning] = useState<RunningCell | null>(null);
   const [dialog, setDialog] = useState<DialogName>(null);
   const [notice, setNotice] = useState<string | null>(null);
+  const [pendingRedefinition, setPendingRedefinition] = useState<PendingRedefinition | null>(null);
+  // the session the guided steps run in, made for them on this page (never someone else's)
+  const tourSession = useRef<string | null>(null);
   const editor = useRef<EditorHandle>(null);
   const runningRef = useRef<RunningCell | null>(null);
   runningRef.current = running;
@@ -78,8 +88,8 @@ export function useConsole({ initialSessionId, linkToken, signedIn }: ConsoleOpt
   const newSession = useCallback(async () => {
     if (!signedIn) return;
     try {
-      const title = `Session of ${new Date().toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" })}`;
-      const created = await createSession(title);
+      // no title: the server names the session by its first definition
+      const created = await createSession();
       await data.refreshSessions();
       openSession(created.id);
       setNotice(`Created “${created.title}”.`);
@@ -89,7 +99,7 @@ export function useConsole({ initialSessionId, linkToken, signedIn }: ConsoleOpt
   }, [data, openSession, signedIn]);
 
   const run = useCallback(
-    (source: string): boolean => {
+    (source: string, options: { redefine?: boolean } = {}): boolean => {
       if (!canEdit || runningRef.current) {
         setNotice(runningRef.current ? "A cell is still running: wait for it or cancel it (Alt+X)." : "This session is read-only for you.");
         return false;
@@ -103,17 +113,28 @@ export function useConsole({ initialSessionId, linkToken, signedIn }: ConsoleOpt
         let accepted = false;
         try {
           if (!id) {
-            const created = await createSession("First session");
+            const created = await createSession();
             id = created.id;
             setSessionId(id);
           }
-          await runCell(id, source, (event) => {
-            if (event.event === "accepted") accepted = true;
-            setRunning((c) => (c ? applyCellEvent(c, event) : c));
-          });
+          await runCell(
+            id,
+            source,
+            (event) => {
+              if (event.event === "accepted") accepted = true;
+              setRunning((c) => (c ? applyCellEvent(c, event) : c));
+            },
+            undefined,
+            options,
+          );
         } catch (e) {
-          setNotice(`The cell did not run: ${messageOf(e)}`);
-          if (!accepted) editor.current?.setText(source);
+          if (e instanceof ApiError && e.code === "redefines_others") {
+            // nothing ran: ask first (the dialog runs it again, or gives the source back)
+            setPendingRedefinition({ source, message: e.message });
+          } else {
+            setNotice(`The cell did not run: ${messageOf(e)}`);
+            if (!accepted) editor.current?.setText(source);
+          }
         } finally {
           // By key, not through the hook: the first run may have created the session.
           if (id) await Promise.all([mutate(keys.cells(id, link)), mutate(keys.objects(id, link)), mutate(keys.sessions)]);
@@ -149,11 +170,68 @@ export function useConsole({ initialSessionId, linkToken, signedIn }: ConsoleOpt
     }
   }, [sessionId]);
 
+  /// After a session was deleted: leave it when it was open (the most recent one opens).
+  const sessionDeleted = useCallback(
+    (id: string) => {
+      setNotice("The session was deleted.");
+      if (id === sessionId) setSessionId(null);
+    },
+    [sessionId],
+  );
+
+  /// The answer to the redefinition question: run the cell replacing the names, or not.
+  const answerRedefinition = useCallback(
+    (replace: boolean) => {
+      const pending = pendingRedefinition;
+      setPendingRedefinition(null);
+      if (!pending) return;
+      if (replace) run(pending.source, { redefine: true });
+      else {
+        editor.current?.setText(pending.source);
+        setNotice("Not run: choose another name for the definition, or run it again and confirm.");
+      }
+    },
+    [pendingRedefinition, run],
+  );
+
   const insertName = useCallback((name: string) => editor.current?.insert(name), []);
-  const insertExample = useCallback((e: GuidedExample) => {
-    setDialog(null);
-    editor.current?.setText(e.source);
+  // The input is drawn again when another session opens; text for it waits until it is there.
+  const pendingText = useRef<string | null>(null);
+  const putText = useCallback((text: string) => {
+    if (editor.current) editor.current.setText(text);
+    else pendingText.current = text;
   }, []);
+  useEffect(() => {
+    if (pendingText.current !== null && editor.current) {
+      editor.current.setText(pendingText.current);
+      pendingText.current = null;
+    }
+  });
+  /// The guided steps always run in the reader's own new session: an empty session of
+  /// their own is used as it is; otherwise (someone else's session, or one with work in it)
+  /// a new one is made for the tour once, and later steps go there too.
+  const insertExample = useCallback(
+    async (e: GuidedExample) => {
+      setDialog(null);
+      const ownEmpty = data.session?.access === "owner" && (data.cells?.length ?? 0) === 0;
+      if (signedIn && sessionId !== null && !ownEmpty && tourSession.current !== sessionId) {
+        try {
+          const created = await createSession("Guided first steps");
+          tourSession.current = created.id;
+          await data.refreshSessions();
+          setSessionId(created.id);
+          setNotice(`The guided steps run in a new session of your own, “${created.title}”.`);
+          pendingText.current = e.source;
+          return;
+        } catch (err) {
+          setNotice(`Could not make a session for the guided steps: ${messageOf(err)}`);
+          return;
+        }
+      }
+      putText(e.source);
+    },
+    [data, sessionId, signedIn, putText],
+  );
   const recallInput = useCallback((source: string) => {
     setDialog(null);
     editor.current?.setText(source);
@@ -217,6 +295,9 @@ export function useConsole({ initialSessionId, linkToken, signedIn }: ConsoleOpt
   );
 
   return {
+    pendingRedefinition,
+    answerRedefinition,
+    sessionDeleted,
     signedIn,
     sessionId,
     link,

@@ -3,6 +3,7 @@ import Link from "next/link";
 import { redirect } from "next/navigation";
 import { currentUser } from "@/lib/auth/current-user";
 import { listMessages } from "@/lib/mail/mailbox";
+import { LinkedText } from "./linked-text";
 
 export const metadata: Metadata = { title: "Mailbox · Ringside" };
 
@@ -41,7 +42,9 @@ export default async function MailboxPage() {
               <p className="text-sm text-ink-soft">
                 to {m.envelopeTo.join(", ")} · {new Date(m.receivedAt).toUTCString()}
               </p>
-              <pre className="mt-2 whitespace-pre-wrap font-mono text-sm">{m.text}</pre>
+              <pre className="mt-2 whitespace-pre-wrap font-mono text-sm">
+                <LinkedText text={m.text} />
+              </pre>
             </li>
           ))}
         </ul>

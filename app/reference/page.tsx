@@ -3,6 +3,7 @@
 import Link from "next/link";
 import { FUNCTIONS, PROPERTIES, RING_OPTIONS, type Overload, type PropertySig } from "@/grammar/signatures";
 import { typeToString } from "@/grammar/types";
+import { ReferenceSearch } from "./reference-search";
 
 export const metadata = { title: "Ringside — notation reference" };
 
@@ -23,14 +24,15 @@ export default function ReferencePage() {
           Back to the console
         </Link>
       </header>
+      <ReferenceSearch />
 
-      <section aria-labelledby="ref-functions">
+      <section aria-labelledby="ref-functions" data-ref-group>
         <h2 id="ref-functions" className="mb-3 text-lg font-semibold">
           Functions
         </h2>
         <dl className="flex flex-col gap-4">
           {FUNCTIONS.map((f) => (
-            <div key={f.name} id={`fn-${f.name}`}>
+            <div key={f.name} id={`fn-${f.name}`} data-ref-entry>
               <dt className="font-mono text-sm font-semibold">
                 {f.overloads.map((o, i) => (
                   <div key={i}>{overloadText(f.name, o)}</div>
@@ -59,16 +61,16 @@ export default function ReferencePage() {
         </dl>
       </section>
 
-      <section aria-labelledby="ref-properties">
+      <section aria-labelledby="ref-properties" data-ref-group>
         <h2 id="ref-properties" className="mb-3 text-lg font-semibold">
           Properties
         </h2>
         {owners.map((owner) => (
-          <div key={owner} className="mb-5">
+          <div key={owner} className="mb-5" data-ref-group>
             <h3 className="mb-1 font-semibold">{owner}</h3>
             <dl className="grid grid-cols-[minmax(12rem,auto)_1fr] gap-x-4 gap-y-1 text-sm">
               {PROPERTIES.filter((p) => p.owner === owner).map((p) => (
-                <div key={p.name} className="contents">
+                <div key={p.name} className="contents" data-ref-entry>
                   <dt className="font-mono">{propertyText(p)}</dt>
                   <dd>{p.description}</dd>
                 </div>
@@ -78,13 +80,13 @@ export default function ReferencePage() {
         ))}
       </section>
 
-      <section aria-labelledby="ref-ring-options">
+      <section aria-labelledby="ref-ring-options" data-ref-group>
         <h2 id="ref-ring-options" className="mb-3 text-lg font-semibold">
           Ring options
         </h2>
         <dl className="grid grid-cols-[minmax(12rem,auto)_1fr] gap-x-4 gap-y-1 text-sm">
           {RING_OPTIONS.map((o) => (
-            <div key={o.name} className="contents">
+            <div key={o.name} className="contents" data-ref-entry>
               <dt className="font-mono">
                 {o.name} = {o.values}
               </dt>

@@ -1,6 +1,8 @@
-/// The console's keys: Enter runs the input, Shift+Enter adds a line, ↑ on the first line
-/// and ↓ on the last recall earlier inputs. While the completion list is open, Enter and
-/// the arrows belong to it.
+/// The console's keys: Enter runs the input — unless the checker already finds a problem
+/// in it: then nothing runs and the problem is shown (Mod-Shift-Enter, a deliberate
+/// choice, runs it anyway) — Shift+Enter adds a line, ↑ on the first line and ↓ on the
+/// last recall earlier inputs. While the completion list is open, Enter and the arrows
+/// belong to it.
 import { closeCompletion, completionStatus, selectedCompletion } from "@codemirror/autocomplete";
 import { insertNewlineAndIndent } from "@codemirror/commands";
 import { Prec, type Extension } from "@codemirror/state";
@@ -14,7 +16,15 @@ export interface ConsoleKeymapOptions {
   readonly run: (source: string) => boolean;
   /// Earlier inputs of the session, oldest first.
   readonly history: () => readonly string[];
+  /// The problems the checker finds in a source before running (none: it may run).
+  readonly problems?: (source: string) => readonly string[];
+  /// Told when Enter did not run because of `problems` (an empty list: the input changed or ran).
+  readonly onHeld?: (problems: readonly string[]) => void;
 }
+
+/// The shortcut that runs an input even when the checker objects (for a stale check, or
+/// to see the server's own words).
+export const RUN_ANYWAY_KEY = "Mod-Shift-Enter";
 
 /// Shows a recalled input; going back leaves the cursor on its first line (so ↑ goes on
 /// recalling), going forward at its end (so ↓ goes on).
@@ -44,7 +54,15 @@ export function consoleKeymap(options: ConsoleKeymapOptions): Extension {
   const completing = (view: EditorView) => completionStatus(view.state) !== null;
   const resetOnEdit = EditorView.updateListener.of((u) => {
     if (u.docChanged && !u.transactions.some((t) => t.isUserEvent("input.recall"))) cursor = FRESH_CURSOR;
+    if (u.docChanged) options.onHeld?.([]);
   });
+  const runNow = (view: EditorView, source: string): boolean => {
+    if (options.run(source)) {
+      cursor = FRESH_CURSOR;
+      view.dispatch({ changes: { from: 0, to: view.state.doc.length, insert: "" } });
+    }
+    return true;
+  };
   return [
     resetOnEdit,
     Prec.highest(
@@ -60,11 +78,20 @@ export function consoleKeymap(options: ConsoleKeymapOptions): Extension {
             }
             const source = view.state.doc.toString();
             if (source.trim() === "") return true;
-            if (options.run(source)) {
-              cursor = FRESH_CURSOR;
-              view.dispatch({ changes: { from: 0, to: view.state.doc.length, insert: "" } });
+            const problems = options.problems?.(source) ?? [];
+            if (problems.length > 0) {
+              options.onHeld?.(problems);
+              return true;
             }
-            return true;
+            return runNow(view, source);
+          },
+        },
+        {
+          key: RUN_ANYWAY_KEY,
+          run: (view) => {
+            const source = view.state.doc.toString();
+            if (source.trim() === "") return true;
+            return runNow(view, source);
           },
         },
         { key: "Shift-Enter", run: insertNewlineAndIndent },

@@ -69,6 +69,34 @@ export function mathText(text: string): string {
   return out.replace(/ {2,}/g, " ").trim();
 }
 
+/// Q → \mathbb{Q}, GF(p) → \mathbb{F}_{p}; anything else as upright text.
+export function fieldTex(text: string): string {
+  if (text === "Q") return "\\mathbb{Q}";
+  const m = /^GF\((\d+)\)$/.exec(text);
+  return m ? `\\mathbb{F}_{${m[1]}}` : `\\mathrm{${escapeTex(text)}}`;
+}
+
+/// A ring value (§9 Ring: field, vars, ideal) in math mode: k[x, y] or k[x, y]/⟨f, g⟩.
+export function ringTex(v: ValueJsonLike): string {
+  const vars = field(v, "vars", isStrings);
+  const fieldName = typeof v.field === "string" ? v.field : null;
+  if (!vars || !fieldName) return `\\text{${escapeTex(v.text)}}`;
+  const base = `${fieldTex(fieldName)}[${vars.map((x) => mathText(x)).join(", ")}]`;
+  const ideal = field(v, "ideal", isStrings) ?? [];
+  return ideal.length === 0 ? base : `${base}/\\langle ${ideal.map(mathText).join(",\\ ")} \\rangle`;
+}
+
+/// A record's fields in the order the user wrote them (§9 Record `fieldOrder`; jsonb storage
+/// does not keep key order).
+export function recordEntries(v: ValueJsonLike): [string, ValueJsonLike][] {
+  const fields = (v.fields ?? {}) as Record<string, ValueJsonLike>;
+  const keys = Object.keys(fields);
+  const order = Array.isArray(v.fieldOrder) ? (v.fieldOrder as unknown[]) : null;
+  const ordered =
+    order && order.length === keys.length && order.every((k) => typeof k === "string" && Object.hasOwn(fields, k)) ? (order as string[]) : keys;
+  return ordered.map((k) => [k, fields[k]!]);
+}
+
 function field<T>(v: ValueJsonLike, name: string, check: (x: unknown) => x is T): T | undefined {
   const x = v[name];
   return check(x) ? x : undefined;
@@ -94,6 +122,11 @@ export function bettiGrid(entries: [number, number, number][]): { rows: number[]
 
 export const TRUNCATED_BETTI = "Truncated: only the part of the resolution computed within the given bounds is shown; further Betti numbers may be nonzero.";
 
+/// The totals row of a Betti table: β_i = Σ_j β_{i,j}, the rank of the i-th free module.
+export function bettiTotals(entries: [number, number, number][], cols: readonly number[]): number[] {
+  return cols.map((i) => entries.filter(([h]) => h === i).reduce((sum, [, , b]) => sum + b, 0));
+}
+
 export function bettiTabular(entries: [number, number, number][], complete: boolean): string {
   const { rows, cols, cell } = bettiGrid(entries);
   if (rows.length === 0) return "All Betti numbers are zero." + (complete ? "" : `\n\n\\emph{${TRUNCATED_BETTI}}`);
@@ -102,6 +135,8 @@ export function bettiTabular(entries: [number, number, number][], complete: bool
     ` & ${cols.map((i) => `$${i}$`).join(" & ")} \\\\`,
     "\\hline",
     ...rows.map((r) => `$${r}$ & ${cols.map((i) => (cell(r, i) === null ? "" : `$${cell(r, i)}$`)).join(" & ")} \\\\`),
+    "\\hline",
+    `total & ${bettiTotals(entries, cols).map((b) => `$${b}$`).join(" & ")} \\\\`,
     "\\end{tabular}",
   ];
   if (!complete) lines.push("", `\\emph{${TRUNCATED_BETTI}}`);
@@ -123,8 +158,11 @@ function valueBodyTex(v: ValueJsonLike): string {
     case "Poly":
       return `$${mathText(plainText(v))}$`;
     case "Bool":
-    case "Field":
       return `$\\mathrm{${escapeTex(v.text)}}$`;
+    case "Field":
+      return `$${fieldTex(v.text)}$`;
+    case "Ring":
+      return `$${ringTex(v)}$`;
     case "Str":
       return `\\texttt{${escapeTex(typeof v.value === "string" ? v.value : v.text)}}`;
     case "Ideal": {
@@ -155,8 +193,7 @@ function valueBodyTex(v: ValueJsonLike): string {
       return `\\begin{enumerate}\n${items.map((x) => `\\item ${valueTex(x)}`).join("\n")}\n\\end{enumerate}`;
     }
     case "Record": {
-      const fields = (v.fields ?? {}) as Record<string, ValueJsonLike>;
-      return `\\begin{description}\n${Object.entries(fields)
+      return `\\begin{description}\n${recordEntries(v)
         .map(([k, x]) => `\\item[${escapeTex(k)}] ${valueTex(x)}`)
         .join("\n")}\n\\end{description}`;
     }

@@ -25,14 +25,29 @@ export const limit = (message: string, span: Span, name?: LimitName): EvalError 
 /// keep their kind, everything unexpected is reported as a runtime error at that node.
 export function asEvalError(e: unknown, span: Span): EvalError {
   if (e instanceof EvalError) return e;
-  if (e instanceof AlgebraError) return new EvalError(e.kind, e.message, span);
+  if (e instanceof AlgebraError) return new EvalError(e.kind, inUsersWords(e.message), span);
   if (e instanceof RangeError && /BigInt|Invalid array length/i.test(e.message)) {
     return limit(`the result is too large to represent (${e.message})`, span);
   }
   if (e instanceof RangeError && /call stack/i.test(e.message)) return limit("the computation nested too deeply", span);
   // anything else is a defect of the evaluator or the engine, said so rather than blamed on the input
-  return runtime(`internal error: ${e instanceof Error ? e.message : String(e)}`, span);
+  const detail = inUsersWords(e instanceof Error ? e.message : String(e));
+  return runtime(`Ringside could not finish this (a defect of Ringside, not of your input: ${detail}); please report it with this cell`, span);
 }
+
+/// The engine names the function that raised an error ("resolveQuotient: …", see
+/// lib/algebra/errors.ts); that name means nothing to the user, who called a notation
+/// function, so it is dropped here, at the one place engine errors reach the user. Nested
+/// prefixes ("a: b: …") go too.
+export function inUsersWords(message: string): string {
+  let out = message;
+  for (let m = INTERNAL_PREFIX.exec(out); m; m = INTERNAL_PREFIX.exec(out)) out = out.slice(m[0].length);
+  return out;
+}
+
+// an identifier, then ": " — the engine's "where" prefix (words of a sentence are never
+// followed directly by a colon and a space at the very start of a message)
+const INTERNAL_PREFIX = /^[A-Za-z_][A-Za-z0-9_]*: /;
 
 export function spanJson(span: Span): SpanJson {
   return { from: { line: span.from.line, col: span.from.col }, to: { line: span.to.line, col: span.to.col } };

@@ -115,7 +115,7 @@ export function encodeValue(v: Value): ValueJson {
     case "List":
       return { type: "List", text: t, items: v.items.map(encodeValue) };
     case "Record":
-      return { type: "Record", text: t, fields: Object.fromEntries([...v.fields].map(([k, x]) => [k, encodeValue(x)])) };
+      return { type: "Record", text: t, fields: Object.fromEntries([...v.fields].map(([k, x]) => [k, encodeValue(x)])), fieldOrder: [...v.fields.keys()] };
     case "Table":
       return { type: "Table", text: t, columns: [...v.columns], rows: v.rows.map((row) => row.map(encodeValue)) };
     case "Function":
@@ -270,7 +270,7 @@ function decodeValidated(j: ValueJson, ctx: DecodeContext): Value {
     case "List":
       return { type: "List", items: j.items.map((x) => decodeValidated(x, ctx)) };
     case "Record":
-      return { type: "Record", fields: new Map(Object.entries(j.fields).map(([k, x]) => [k, decodeValidated(x, ctx)])) };
+      return { type: "Record", fields: new Map(recordKeys(j).map((k) => [k, decodeValidated(j.fields[k]!, ctx)])) };
     case "Table":
       if (j.rows.some((row) => row.length !== j.columns.length)) fail("Table", `every row must have ${j.columns.length} cells`);
       return { type: "Table", columns: j.columns, rows: j.rows.map((row) => row.map((x) => decodeValidated(x, ctx))) };
@@ -315,4 +315,13 @@ export function decodeValue(json: unknown, ctx: DecodeContext): Value {
     if (e instanceof DecodeError) throw e;
     throw new DecodeError(`invalid value JSON: ${e instanceof Error ? e.message : String(e)}`);
   }
+}
+
+/// A record's field names in the order the user wrote them (`fieldOrder` when it names
+/// exactly the fields; older encodings without it keep the stored key order).
+export function recordKeys(j: { fields: Record<string, unknown>; fieldOrder?: readonly string[] }): string[] {
+  const keys = Object.keys(j.fields);
+  const order = j.fieldOrder;
+  if (order && order.length === keys.length && order.every((k) => Object.hasOwn(j.fields, k))) return [...order];
+  return keys;
 }

@@ -23,14 +23,38 @@ export interface CellOutcome {
   currentRing: string | null;
 }
 
-export async function createSession(user: CurrentUser, title: string) {
-  const [row] = await db().insert(sessions).values({ title, ownerId: user.id }).returning();
+/// The title of a session created without one, until its first definition names it.
+export const PLACEHOLDER_TITLE = "New session";
+
+/// Creates a session; without a title it is called PLACEHOLDER_TITLE until its first
+/// definition is stored (finishCell), which makes a title worth reading in the list.
+export async function createSession(user: CurrentUser, title?: string) {
+  const [row] = await db()
+    .insert(sessions)
+    .values({ title: title ?? PLACEHOLDER_TITLE, autoTitle: title === undefined, ownerId: user.id })
+    .returning();
   return row!;
 }
 
+/// A session's title made from a definition's source: its first line, at most 80 characters.
+export function titleFromDefinition(source: string): string {
+  const line = source.split("\n").map((l) => l.trim()).find((l) => l !== "") ?? "";
+  const flat = line.replace(/\s+/g, " ");
+  return flat.length <= 80 ? flat : flat.slice(0, 79) + "…";
+}
+
+/// A LIKE pattern matching `text` anywhere, with LIKE's own wildcards taken literally.
+export function containsPattern(text: string): string {
+  return `%${text.replace(/[\\%_]/g, (c) => "\\" + c)}%`;
+}
+
 /// Sessions the user owns, or reaches through a share (to them or a team of theirs), or
-/// through a team-visible session of a team they belong to; newest activity first.
-export async function listSessions(user: CurrentUser): Promise<SessionSummary[]> {
+/// through a team-visible session of a team they belong to; newest activity first. With
+/// `query`, only those whose title, a cell's source or a named object's name or value
+/// contains it (case-insensitive); `match` then says where (the first matching line of a
+/// cell, or an object's name), or null when the title matched.
+export async function listSessions(user: CurrentUser, query?: string): Promise<SessionSummary[]> {
+  const q = query?.trim() ? containsPattern(query.trim()) : null;
   const rows = await db().execute<{
     id: string;
     title: string;
@@ -39,8 +63,18 @@ export async function listSessions(user: CurrentUser): Promise<SessionSummary[]>
     updated_at: string;
     share_role: "viewer" | "editor" | null;
     team_role: "lead" | "member" | "guest" | null;
+    title_match: boolean | null;
+    cell_match: string | null;
+    object_match: string | null;
   }>(sql`
+    SELECT * FROM (
     SELECT s.id, s.title, u.display_name AS owner_name, s.owner_id, s.updated_at,
+      ${q}::text IS NOT NULL AND s.title ILIKE ${q} AS title_match,
+      (SELECT c.source FROM cells c WHERE ${q}::text IS NOT NULL AND c.session_id = s.id AND c.source ILIKE ${q}
+        ORDER BY c.position LIMIT 1) AS cell_match,
+      (SELECT o.name FROM named_objects o WHERE ${q}::text IS NOT NULL AND o.session_id = s.id
+          AND (o.name ILIKE ${q} OR o.value->>'text' ILIKE ${q})
+        ORDER BY o.name LIMIT 1) AS object_match,
       (SELECT CASE WHEN bool_or(sh.role = 'editor' AND COALESCE(m2.role, 'member') <> 'guest') THEN 'editor' ELSE 'viewer' END
          FROM shares sh LEFT JOIN memberships m2 ON m2.team_id = sh.team_id AND m2.user_id = ${user.id}
         WHERE sh.session_id = s.id AND (sh.user_id = ${user.id} OR m2.user_id IS NOT NULL)
@@ -48,8 +82,11 @@ export async function listSessions(user: CurrentUser): Promise<SessionSummary[]>
       (SELECT m.role FROM memberships m
         WHERE m.team_id = s.team_id AND m.user_id = ${user.id} AND s.visibility <> 'private') AS team_role
     FROM sessions s JOIN users u ON u.id = s.owner_id
-    ORDER BY s.updated_at DESC
+    ) found
+    WHERE ${q}::text IS NULL OR title_match OR cell_match IS NOT NULL OR object_match IS NOT NULL
+    ORDER BY updated_at DESC
   `);
+  const needle = query?.trim().toLowerCase() ?? "";
   return rows
     .map((r) => {
       const viaTeam = r.team_role === null ? null : r.team_role === "guest" ? "viewer" : "editor";
@@ -59,7 +96,19 @@ export async function listSessions(user: CurrentUser): Promise<SessionSummary[]>
           : r.share_role === "editor" || viaTeam === "editor"
             ? "editor"
             : r.share_role ?? viaTeam;
-      return { id: r.id, title: r.title, ownerName: r.owner_name, access, updatedAt: new Date(r.updated_at).toISOString() };
+      const match = r.title_match
+        ? null
+        : r.cell_match !== null
+          ? (r.cell_match.split("\n").find((l) => l.toLowerCase().includes(needle)) ?? r.cell_match).trim()
+          : r.object_match;
+      return {
+        id: r.id,
+        title: r.title,
+        ownerName: r.owner_name,
+        access,
+        updatedAt: new Date(r.updated_at).toISOString(),
+        ...(q !== null ? { match } : {}),
+      };
     })
     .filter((s): s is typeof s & { access: "owner" | "editor" | "viewer" } => s.access !== null);
 }
@@ -69,8 +118,17 @@ export async function ownerName(ownerId: string): Promise<string> {
   return row?.name ?? "";
 }
 
-export async function listCells(sessionId: string): Promise<CellRow[]> {
-  return db().select().from(cells).where(eq(cells.sessionId, sessionId)).orderBy(asc(cells.position));
+/// A cell with the display name of who ran it (null when that account is gone).
+export type CellWithAuthor = CellRow & { authorName: string | null };
+
+export async function listCells(sessionId: string): Promise<CellWithAuthor[]> {
+  const rows = await db()
+    .select({ cell: cells, authorName: users.displayName })
+    .from(cells)
+    .leftJoin(users, eq(users.id, cells.createdBy))
+    .where(eq(cells.sessionId, sessionId))
+    .orderBy(asc(cells.position));
+  return rows.map((r) => ({ ...r.cell, authorName: r.authorName }));
 }
 
 export async function getCell(sessionId: string, cellId: string): Promise<CellRow | undefined> {
@@ -140,13 +198,22 @@ export async function finishCell(cell: CellRow, user: CurrentUser, outcome: Cell
         .values({ sessionId: cell.sessionId, ownerId: user.id, name: o.name, type: o.type, value: o.value, source: o.source, sourceCellId: cell.id })
         .onConflictDoUpdate({
           target: [namedObjects.sessionId, namedObjects.name],
-          // A name bound again by a cell is that cell's object now, no longer an imported copy.
-          set: { type: o.type, value: o.value, source: o.source, sourceCellId: cell.id, origin: null, updatedAt: new Date() },
+          // A name bound again by a cell is that cell's object now, no longer an imported
+          // copy, and defined by whoever ran the cell.
+          set: { type: o.type, value: o.value, source: o.source, sourceCellId: cell.id, origin: null, ownerId: user.id, updatedAt: new Date() },
         })
         .returning();
       saved.push(row!);
     }
     await tx.update(sessions).set({ updatedAt: new Date() }).where(eq(sessions.id, cell.sessionId));
+    const first = outcome.objects.find((o) => o.source.trim() !== "");
+    if (first) {
+      // Only a placeholder title is replaced, and only once.
+      await tx
+        .update(sessions)
+        .set({ title: titleFromDefinition(first.source), autoTitle: false })
+        .where(and(eq(sessions.id, cell.sessionId), eq(sessions.autoTitle, true)));
+    }
     return saved;
   });
 }

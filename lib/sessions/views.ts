@@ -5,7 +5,9 @@ import type { NamedObject, ObjectOrigin } from "@/lib/wire/sessions";
 import type { ErrorJson, ValueJson } from "@/lib/wire/values";
 import type { CellRow, ObjectRow } from "./store";
 
-export function cellView(row: CellRow): Cell {
+/// `author` is who ran the cell (null for cells from before authors were recorded, or
+/// whose account is gone); its name is shown beside the cell in shared sessions.
+export function cellView(row: CellRow & { authorName?: string | null }): Cell {
   const result = row.result as { statements?: CellResult[]; stopped?: unknown } | null;
   return {
     id: row.id,
@@ -19,6 +21,7 @@ export function cellView(row: CellRow): Cell {
     error: (row.error as ErrorJson | null) ?? null,
     timings: { totalMs: row.durationMs },
     engineVersion: row.engineVersion,
+    author: row.createdBy ? { id: row.createdBy, name: row.authorName ?? "" } : null,
     createdAt: row.createdAt.toISOString(),
   };
 }
@@ -35,6 +38,8 @@ export function objectView(row: ObjectRow): NamedObject {
     source: row.source,
     origin: (row.origin as ObjectOrigin | null) ?? null,
     sourceCellId: row.sourceCellId,
+    /// who defined it (the id of the user whose cell bound it last, or who imported it)
+    definedBy: row.ownerId,
     updatedAt: row.updatedAt.toISOString(),
   };
 }

@@ -3,11 +3,12 @@
 /// revoked; a newer invitation to the same address replaces the pending one.
 import { and, eq, sql } from "drizzle-orm";
 import { db } from "@/db/client";
-import { invitations, memberships, teams, users, type TeamRole } from "@/db/schema";
+import { invitations, memberships, sessions, teams, users, type TeamRole } from "@/db/schema";
 import { requireTeamRole } from "@/lib/auth/access";
 import type { CurrentUser } from "@/lib/auth/types";
 import { HttpError, notFound } from "@/lib/http/errors";
 import { sendMail } from "@/lib/mail/send";
+import { PLACEHOLDER_TITLE } from "@/lib/sessions/store";
 import { auditSharing, newToken, requireUuid, tokenHash } from "./common";
 
 /// Lifetime of an invitation; RINGSIDE_INVITATION_TTL_HOURS overrides the 7 days.
@@ -158,9 +159,11 @@ export async function inspectInvitation(token: string) {
   };
 }
 
-/// Makes the signed-in invitee a member (or guest) of the team. Refuses with 404 (unknown
-/// token), 410 (used, revoked, expired) or 403 (signed in with another address, or an
-/// address not yet confirmed through the mailed link).
+/// Makes the signed-in invitee a member (or guest) of the team and gives the session they
+/// land in: always one of their own (their latest, or a new one named by its first
+/// definition), never the lead's, so their first cells cannot change the team's work.
+/// Refuses with 404 (unknown token), 410 (used, revoked, expired) or 403 (signed in with
+/// another address, or an address not yet confirmed through the mailed link).
 export async function acceptInvitation(user: CurrentUser, token: string, address: string) {
   if (!TOKEN_SHAPE.test(token)) throw notFound("The invitation");
   const [me] = await db().select({ verified: users.emailVerifiedAt }).from(users).where(eq(users.id, user.id));
@@ -198,14 +201,15 @@ export async function acceptInvitation(user: CurrentUser, token: string, address
     // Someone already in the team keeps their role (an invitation never demotes a lead).
     if (!existing) await tx.insert(memberships).values({ teamId: row.teamId, userId: user.id, role: row.role });
     await tx.update(invitations).set({ status: "accepted", acceptedAt: new Date() }).where(eq(invitations.id, row.id));
-    await auditSharing(tx, {
-      event: "invitation_accepted",
-      userId: user.id,
-      email: user.email,
-      address,
-      details: { ...base, role: row.role },
-    });
-    return { result: { teamId: row.teamId, role: existing?.role ?? row.role } };
+    await auditSharing(tx, { event: "invitation_accepted", userId: user.id, email: user.email, address, details: { ...base, role: row.role } });
+    const [own] = await tx
+      .select({ id: sessions.id })
+      .from(sessions)
+      .where(eq(sessions.ownerId, user.id))
+      .orderBy(sql`${sessions.updatedAt} DESC`)
+      .limit(1);
+    const sessionId = own?.id ?? (await tx.insert(sessions).values({ title: PLACEHOLDER_TITLE, autoTitle: true, ownerId: user.id }).returning())[0]!.id;
+    return { result: { teamId: row.teamId, role: existing?.role ?? row.role, sessionId } };
   });
   if ("error" in outcome && outcome.error) {
     if (outcome.audit) {
@@ -214,4 +218,18 @@ export async function acceptInvitation(user: CurrentUser, token: string, address
     throw outcome.error;
   }
   return outcome.result!;
+}
+
+const INVITATION_PATH = /^\/invitations\/([A-Za-z0-9_-]{20,100})$/;
+
+/// The invitation a sign-in or sign-up page's callback address points at (a signed-out
+/// invitee who followed the mail's link), or null: not an invitation's address, or unknown.
+export async function invitationBehind(callbackUrl: string) {
+  const m = INVITATION_PATH.exec(callbackUrl);
+  if (!m) return null;
+  try {
+    return (await inspectInvitation(m[1]!)).invitation;
+  } catch {
+    return null;
+  }
 }

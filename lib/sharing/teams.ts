@@ -78,14 +78,31 @@ export async function teamDetail(user: CurrentUser, teamId: string) {
           .where(and(eq(invitations.teamId, teamId), eq(invitations.status, "pending"), sql`${invitations.expiresAt} > now()`))
           .orderBy(asc(invitations.createdAt))
       : [];
-  // Sessions shared with the team (every member reads them, so every member sees the list).
-  const shared = await database
+  // Sessions shared with the team (every member reads them, so every member sees the
+  // list): those shared with it explicitly, and those made visible to it (visibility
+  // "team", which gives members and leads editor and guests viewer; access.ts).
+  const explicit = await database
     .select({ id: sessions.id, title: sessions.title, ownerName: users.displayName, role: shares.role, shareId: shares.id })
     .from(shares)
     .innerJoin(sessions, eq(sessions.id, shares.sessionId))
     .innerJoin(users, eq(users.id, sessions.ownerId))
-    .where(eq(shares.teamId, teamId))
-    .orderBy(asc(sessions.title));
+    .where(eq(shares.teamId, teamId));
+  const visible = await database
+    .select({ id: sessions.id, title: sessions.title, ownerName: users.displayName })
+    .from(sessions)
+    .innerJoin(users, eq(users.id, sessions.ownerId))
+    .where(and(eq(sessions.teamId, teamId), eq(sessions.visibility, "team")));
+  const byId = new Map<string, { id: string; title: string; ownerName: string; role: "viewer" | "editor"; shareId: string | null; via: "share" | "team visibility" }>();
+  for (const v of visible) byId.set(v.id, { ...v, role: "editor", shareId: null, via: "team visibility" });
+  // An explicit share is listed as such (its id lets a lead revoke it); the stronger role wins.
+  for (const e of explicit) {
+    const before = byId.get(e.id);
+    byId.set(e.id, { ...e, role: before?.role === "editor" ? "editor" : e.role, via: "share" });
+  }
+  const shared = [...byId.values()]
+    // Guests of the team read only, whatever the grant says.
+    .map((x) => (role === "guest" ? { ...x, role: "viewer" as const } : x))
+    .sort((a, b) => a.title.localeCompare(b.title));
   return {
     sharedSessions: shared,
     team: { id: team.id, slug: team.slug, name: team.name, description: team.description, createdAt: team.createdAt.toISOString() },

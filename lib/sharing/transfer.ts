@@ -14,19 +14,35 @@ import { auditSharing } from "./common";
 
 type SessionRow = typeof sessions.$inferSelect;
 
-async function load(session: SessionRow) {
+/// Which cells an export holds: `positions` (null: all) and whether to leave out cells
+/// that ended in an error or were stopped. With a choice, only the named objects bound by
+/// the chosen cells (or by no cell, such as imported copies) go with them.
+export interface ExportSelection {
+  positions: readonly number[] | null;
+  skipErrors: boolean;
+}
+export const ALL_CELLS: ExportSelection = { positions: null, skipErrors: false };
+
+async function load(session: SessionRow, selection: ExportSelection = ALL_CELLS) {
   const database = db();
   const [owner] = await database.select({ name: users.displayName }).from(users).where(eq(users.id, session.ownerId));
+  const chosen = selection.positions === null ? null : new Set(selection.positions);
   // Running cells have no result yet: the export holds finished cells only.
   const cellRows = (await database.select().from(cells).where(eq(cells.sessionId, session.id)).orderBy(asc(cells.position))).filter(
-    (c) => c.status === "done" || c.status === "error" || c.status === "cancelled" || c.status === "interrupted",
+    (c) =>
+      (c.status === "done" || (!selection.skipErrors && (c.status === "error" || c.status === "cancelled" || c.status === "interrupted"))) &&
+      (chosen === null || chosen.has(c.position)),
   );
-  const objectRows = await database.select().from(namedObjects).where(eq(namedObjects.sessionId, session.id)).orderBy(asc(namedObjects.name));
+  const kept = new Set(cellRows.map((c) => c.id));
+  const filtered = chosen !== null || selection.skipErrors;
+  const objectRows = (await database.select().from(namedObjects).where(eq(namedObjects.sessionId, session.id)).orderBy(asc(namedObjects.name))).filter(
+    (o) => !filtered || o.sourceCellId === null || kept.has(o.sourceCellId),
+  );
   return { ownerName: owner?.name ?? "", cellRows, objectRows };
 }
 
-export async function exportJson(session: SessionRow): Promise<SessionExport> {
-  const { ownerName, cellRows, objectRows } = await load(session);
+export async function exportJson(session: SessionRow, selection: ExportSelection = ALL_CELLS): Promise<SessionExport> {
+  const { ownerName, cellRows, objectRows } = await load(session, selection);
   const positionOf = new Map(cellRows.map((c) => [c.id, c.position]));
   return {
     format: EXPORT_FORMAT,
@@ -65,8 +81,8 @@ export async function exportJson(session: SessionRow): Promise<SessionExport> {
   };
 }
 
-export async function exportText(session: SessionRow, format: "latex" | "markdown"): Promise<string> {
-  const { ownerName, cellRows, objectRows } = await load(session);
+export async function exportText(session: SessionRow, format: "latex" | "markdown", selection: ExportSelection = ALL_CELLS): Promise<string> {
+  const { ownerName, cellRows, objectRows } = await load(session, selection);
   const transcript: Transcript = {
     title: session.title,
     ownerName,

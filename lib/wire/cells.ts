@@ -39,6 +39,8 @@ export const Cell = z.object({
   error: ErrorJson.nullable(),
   timings: z.object({ totalMs: z.number().nullable() }).nullable(),
   engineVersion: z.string().nullable().optional(),
+  /// who ran it (null for cells from before authors were kept, or whose account is gone)
+  author: z.object({ id: z.string(), name: z.string() }).nullable().optional(),
   createdAt: z.string(),
 });
 export type Cell = z.infer<typeof Cell>;

@@ -15,6 +15,8 @@ export const SessionSummary = z.object({
   ownerName: z.string(),
   access: Access,
   updatedAt: z.string(),
+  /// with a search (?q=): where it matched — a cell's line or an object's name; null for the title
+  match: z.string().nullable().optional(),
 });
 export type SessionSummary = z.infer<typeof SessionSummary>;
 
@@ -52,6 +54,8 @@ export const NamedObject = z.object({
   sourceCellId: z.string().nullable(),
   /// null unless the object was imported
   origin: ObjectOrigin.nullable().optional(),
+  /// who defined it: the id of the user whose cell bound it last, or who imported it
+  definedBy: z.string().optional(),
   updatedAt: z.string(),
 });
 export type NamedObject = z.infer<typeof NamedObject>;

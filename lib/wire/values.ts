@@ -143,10 +143,13 @@ export interface ListJson {
   text: string;
   items: ValueJson[];
 }
+/// `fieldOrder` lists the field names as the user wrote them: a JSON object's key order
+/// does not survive storage (PostgreSQL's jsonb sorts keys), so it is kept beside the fields.
 export interface RecordJson {
   type: "Record";
   text: string;
   fields: Record<string, ValueJson>;
+  fieldOrder?: string[];
 }
 export interface TableJson {
   type: "Table";
@@ -183,6 +186,7 @@ export const RecordJson: z.ZodType<RecordJson> = z.object({
   type: z.literal("Record"),
   text,
   fields: z.record(z.string(), lazyValue),
+  fieldOrder: z.array(z.string()).optional(),
 });
 export const TableJson: z.ZodType<TableJson> = z.object({
   type: z.literal("Table"),

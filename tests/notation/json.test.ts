@@ -147,7 +147,7 @@ describe("§9 encoding of each type", () => {
     const l = roundTrip({ type: "List", items: [one, { type: "Bool", value: false }] });
     expect(l).toEqual({ type: "List", text: "[1, false]", items: [{ type: "Int", text: "1", value: "1" }, { type: "Bool", text: "false", value: false }] });
     const r = roundTrip({ type: "Record", fields: new Map([["index", one], ["depth", { type: "Int", value: 0n }]]) });
-    expect(r).toEqual({ type: "Record", text: "{index: 1, depth: 0}", fields: { index: { type: "Int", text: "1", value: "1" }, depth: { type: "Int", text: "0", value: "0" } } });
+    expect(r).toEqual({ type: "Record", text: "{index: 1, depth: 0}", fields: { index: { type: "Int", text: "1", value: "1" }, depth: { type: "Int", text: "0", value: "0" } }, fieldOrder: ["index", "depth"] });
     const t = roundTrip({ type: "Table", columns: ["index"], rows: [[one]] });
     expect(t).toMatchObject({ type: "Table", columns: ["index"], rows: [[{ type: "Int", value: "1" }]] });
   });

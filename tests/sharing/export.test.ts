@@ -34,6 +34,8 @@ describe("LaTeX of values", () => {
       ["", "0", "1", "2"],
       ["0", "1", "", ""],
       ["1", "", "3", "2"],
+      // the totals row: β_i = Σ_j β_ij, the ranks 1, 3, 2 of the free modules (issue 18)
+      ["total", "1", "3", "2"],
     ]);
     // every row has as many cells as the column spec says
     for (const row of tabularRows(tex)) expect(row).toHaveLength(4);
@@ -47,6 +49,7 @@ describe("LaTeX of values", () => {
       ["0", "1", ""],
       ["1", "", ""],
       ["2", "", "1"],
+      ["total", "1", "1"],
     ]);
     expect(tex).toMatch(/\\emph\{Truncated:/);
   });
@@ -128,6 +131,7 @@ describe("export and import over the API", () => {
       ["", "0", "1", "2"],
       ["0", "1", "", ""],
       ["1", "", "3", "2"],
+      ["total", "1", "3", "2"],
     ]);
     expect(tex).toContain("\\langle x y,\\ y z,\\ x z \\rangle");
   });

@@ -93,7 +93,8 @@ describe("invitations", () => {
 
     const accepted = await invitee.request(`/api/invitations/${token}/accept`, { method: "POST" });
     expect(accepted.status).toBe(200);
-    expect(await accepted.json()).toEqual({ membership: { teamId, role: "guest" } });
+    // the invitee also gets a session of their own to land in (issue 18)
+    expect(await accepted.json()).toEqual({ membership: { teamId, role: "guest", sessionId: expect.any(String) } });
     const team = (await (await invitee.request(`/api/teams/${teamId}`)).json()) as { role: string; members: { email: string }[] };
     expect(team.role).toBe("guest");
     expect(team.members.map((m) => m.email)).toContain(email);

@@ -37,6 +37,8 @@ const MANAGE: Row["expect"] = [200, 403, 403, 403, 200, 403, 403, 404, 401, 401,
 const MANAGE_CREATE: Row["expect"] = [201, 403, 403, 403, 201, 403, 403, 404, 401, 401, 404];
 const SIGNED_IN: Row["expect"] = [200, 200, 200, 200, 200, 200, 200, 200, 401, 401, 200];
 const SIGNED_IN_CREATE: Row["expect"] = [201, 201, 201, 201, 201, 201, 201, 201, 401, 401, 201];
+/// Renaming and deleting a session: its owner alone (issue 18).
+const OWNER_ONLY: Row["expect"] = [200, 403, 403, 403, 403, 403, 403, 404, 401, 401, 404];
 const TEAM_LEAD: Row["expect"] = [403, 403, 403, 403, 200, 403, 403, 403, 401, 401, 403];
 
 function importDoc() {
@@ -73,7 +75,13 @@ const MATRIX: Record<string, Row[]> = {
     { method: "GET", expect: SIGNED_IN, make: async () => ({ path: "/api/sessions" }) },
     { method: "POST", expect: SIGNED_IN_CREATE, make: async () => ({ path: "/api/sessions", body: { title: "matrix" } }) },
   ],
-  "sessions/[id]/route.ts": [{ method: "GET", expect: READ, make: async (w) => ({ path: `/api/sessions/${(await freshSession(w)).id}` }) }],
+  "sessions/[id]/route.ts": [
+    { method: "GET", expect: READ, make: async (w) => ({ path: `/api/sessions/${(await freshSession(w)).id}` }) },
+    { method: "PATCH", expect: OWNER_ONLY, make: async (w) => ({ path: `/api/sessions/${(await freshSession(w)).id}`, body: { title: "renamed in the matrix" } }) },
+    { method: "DELETE", expect: OWNER_ONLY, make: async (w) => ({ path: `/api/sessions/${(await freshSession(w)).id}` }) },
+  ],
+  "library/route.ts": [{ method: "GET", expect: SIGNED_IN, make: async () => ({ path: "/api/library?q=n" }) }],
+  "history/route.ts": [{ method: "GET", expect: SIGNED_IN, make: async () => ({ path: "/api/history?q=n" }) }],
   "sessions/[id]/cells/route.ts": [
     { method: "GET", expect: READ, make: async (w) => ({ path: `/api/sessions/${(await freshSession(w)).id}/cells` }) },
     { method: "POST", expect: EDIT, make: async (w) => ({ path: `/api/sessions/${(await freshSession(w)).id}/cells`, body: { source: "1 + 1" } }) },

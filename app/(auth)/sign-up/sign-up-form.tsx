@@ -5,7 +5,9 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Field } from "../field";
 
-export function SignUpForm({ passwordRule }: { passwordRule: string }) {
+/// `callbackUrl` is where the new account goes (an invitation it came from); `email`
+/// pre-fills the address an invitation was sent to.
+export function SignUpForm({ passwordRule, callbackUrl = "/", email }: { passwordRule: string; callbackUrl?: string; email?: string }) {
   const router = useRouter();
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
@@ -30,17 +32,17 @@ export function SignUpForm({ passwordRule }: { passwordRule: string }) {
     const result = await signIn("credentials", { email: body.email, password: body.password, redirect: false });
     setBusy(false);
     if (result?.ok) {
-      router.replace("/");
+      router.replace(callbackUrl);
       router.refresh();
     } else {
-      router.replace("/sign-in");
+      router.replace(callbackUrl === "/" ? "/sign-in" : `/sign-in?callbackUrl=${encodeURIComponent(callbackUrl)}`);
     }
   }
 
   return (
     <form onSubmit={onSubmit} className="space-y-4" noValidate>
       <Field id="name" label="Name" type="text" autoComplete="name" />
-      <Field id="email" label="Email" type="email" autoComplete="email" />
+      <Field id="email" label="Email" type="email" autoComplete="email" defaultValue={email} />
       <Field id="password" label="Password" type="password" autoComplete="new-password" aria-describedby="password-rule">
         <p id="password-rule" className="mt-1 text-xs text-ink-soft">
           {passwordRule}

@@ -43,17 +43,19 @@ export async function readNdjson(
 }
 
 /// Runs a cell: POSTs `{source}` and streams its events; rejects with an ApiError when
-/// the server refuses (not signed in, no edit access, bad input).
+/// the server refuses (not signed in, no edit access, bad input, or 409 `redefines_others`
+/// when the cell would replace a name someone else defined and `redefine` is not set).
 export async function runCell(
   sessionId: string,
   source: string,
   onEvent: (event: CellEvent) => void,
   signal?: AbortSignal,
+  options: { redefine?: boolean } = {},
 ): Promise<void> {
   const res = await fetch(`/api/sessions/${sessionId}/cells`, {
     method: "POST",
     headers: { "content-type": "application/json", accept: "application/x-ndjson" },
-    body: JSON.stringify({ source }),
+    body: JSON.stringify(options.redefine ? { source, redefine: true } : { source }),
     signal,
   });
   if (!res.ok) throw await errorOf(res);

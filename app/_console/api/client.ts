@@ -17,9 +17,9 @@ export const keys = {
   objectShares: (objectId: string) => `/api/objects/${objectId}/shares`,
 } as const;
 
-/// Creates a session.
-export const createSession = (title: string) =>
-  send<{ id: string; title: string }>(keys.sessions, { method: "POST", body: JSON.stringify({ title }) });
+/// Creates a session; without a title the server names it by its first definition.
+export const createSession = (title?: string) =>
+  send<{ id: string; title: string }>(keys.sessions, { method: "POST", body: JSON.stringify(title === undefined ? {} : { title }) });
 
 /// Asks the server to stop a running cell; false when it had already finished (409).
 export async function cancelCell(sessionId: string, cellId: string): Promise<boolean> {

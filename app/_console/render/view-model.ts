@@ -3,7 +3,8 @@
 /// the JSON, so every rendering rule is unit-tested without a browser.
 import type { ValueReading } from "@/lib/wire/reading";
 import { bettiGrid, type BettiEntry, type BettiGrid } from "./betti";
-import { texOfRankChain } from "./chain";
+import { hilbertFacts, texOfHilbertPolynomial, type HilbertFacts } from "./hilbert";
+import { resolutionView, ringNameOf, type ResolutionView } from "./resolution";
 import { texOfHilbertSeries, texOfSeriesPrefix } from "./series";
 import { texOfExpression, texOfIdeal, texOfMatrix, texOfVariable, texOrVerbatim } from "./tex";
 
@@ -11,12 +12,59 @@ import { texOfExpression, texOfIdeal, texOfMatrix, texOfVariable, texOrVerbatim 
 export type ValueView =
   | { readonly kind: "tex"; readonly tex: string; readonly note?: string }
   | { readonly kind: "betti"; readonly grid: BettiGrid }
-  | { readonly kind: "complex"; readonly chain: string; readonly grid: BettiGrid }
+  | {
+      readonly kind: "complex";
+      /// the chain of free modules with their twists (resolution.chain)
+      readonly chain: string;
+      readonly grid: BettiGrid;
+      readonly resolution: ResolutionView;
+      /// the chain in plain text: S <- S(-2)^3 <- S(-3)^2 <- 0
+      readonly resolutionText: string;
+    }
+  | {
+      readonly kind: "hilbert";
+      /// the series as computed, N(t)/(1−t)^n
+      readonly tex: string;
+      /// the reduced form h(t)/(1−t)^d, and what it tells; null for a non-standard grading
+      readonly facts: (HilbertFacts & { readonly reducedTex: string; readonly polynomialTex: string }) | null;
+    }
   | { readonly kind: "series"; readonly tex: string; readonly note: string }
   | { readonly kind: "text"; readonly text: string }
   | { readonly kind: "list"; readonly items: readonly ValueView[] }
   | { readonly kind: "record"; readonly fields: readonly (readonly [string, ValueView])[] }
   | { readonly kind: "table"; readonly columns: readonly string[]; readonly rows: readonly (readonly string[])[] };
+
+/// What the transcript knows around a value: the session's named objects, so a
+/// resolution is written over the ring's name (S, not R).
+export interface ViewContext {
+  readonly objects?: readonly { readonly name: string; readonly value: ValueReading }[];
+}
+
+/// The field names of a §9 Record in the order the user wrote them (`fieldOrder`, kept beside
+/// the fields because stored JSON does not keep key order).
+export function recordFieldOrder(v: ValueReading): string[] {
+  const fields = v.fields ?? {};
+  const keys = Object.keys(fields);
+  const order = (v as ValueReading & { fieldOrder?: readonly unknown[] }).fieldOrder;
+  if (Array.isArray(order) && order.length === keys.length && order.every((k) => typeof k === "string" && Object.hasOwn(fields, k))) {
+    return order as string[];
+  }
+  return keys;
+}
+
+/// Plain text of a resolution's chain, for copying: S <- S(-2)^3 <- S(-3)^2 <- 0.
+function resolutionPlainText(v: ValueReading, ringName: string | null): string {
+  const ring = ringName ?? "R";
+  const entries = (v.betti ?? []).filter((e) => Array.isArray(e) && e.length === 3);
+  const ranks = v.ranks ?? [];
+  const length = Math.max(ranks.length, ...entries.map(([i]) => i + 1));
+  const modules = Array.from({ length }, (_, i) => {
+    const parts = entries.filter(([h, , b]) => h === i && b !== 0).sort((a, b) => a[1] - b[1]);
+    if (parts.length === 0) return (ranks[i] ?? 0) === 0 ? "0" : ranks[i] === 1 ? ring : `${ring}^${ranks[i]}`;
+    return parts.map(([, j, b]) => `${ring}${j === 0 ? "" : `(${-j})`}${b === 1 ? "" : `^${b}`}`).join(" + ");
+  });
+  return `0 <- ${modules.join(" <- ")}${v.complete !== false ? " <- 0" : " <- ..."}`;
+}
 
 /// TeX of a field name of §9 ("Q", "GF(p)").
 export function texOfField(field: string): string {
@@ -66,7 +114,7 @@ function isStringRows(rows: ValueReading["rows"]): rows is readonly (readonly st
 }
 
 /// The view of a §9 value; unknown or malformed values fall back to their `text`.
-export function viewOfValue(v: ValueReading): ValueView {
+export function viewOfValue(v: ValueReading, ctx: ViewContext = {}): ValueView {
   switch (v.type) {
     case "Poly":
       return { kind: "tex", tex: texOrVerbatim(v.text) };
@@ -94,15 +142,30 @@ export function viewOfValue(v: ValueReading): ValueView {
       return { kind: "betti", grid: bettiGrid(entriesOf(v), v.complete !== false) };
     case "Complex": {
       const complete = v.complete !== false;
+      const ringName = ringNameOf(v.ring ?? undefined, ctx.objects ?? []);
+      const resolution = resolutionView(v, ringName);
       return {
         kind: "complex",
-        chain: texOfRankChain(v.ranks ?? [], complete),
+        chain: resolution.chain,
         grid: bettiGrid(entriesOf(v), complete),
+        resolution,
+        resolutionText: resolutionPlainText(v, ringName),
       };
     }
-    case "HilbertSeries":
+    case "HilbertSeries": {
       if (!v.numerator || typeof v.denominator !== "string") return { kind: "text", text: v.text };
-      return { kind: "tex", tex: texOfHilbertSeries(v.numerator, v.denominator, typeof v.lowest === "number" ? v.lowest : 0) };
+      const lowest = typeof v.lowest === "number" ? v.lowest : 0;
+      const facts = hilbertFacts(v.numerator, v.denominator, lowest);
+      return {
+        kind: "hilbert",
+        tex: texOfHilbertSeries(v.numerator, v.denominator, lowest),
+        facts: facts && {
+          ...facts,
+          reducedTex: texOrVerbatim(facts.reduced),
+          polynomialTex: texOfHilbertPolynomial(facts.polynomial),
+        },
+      };
+    }
     case "Series": {
       const coefficients = v.coefficients ?? [];
       const terms = `${coefficients.length} term${coefficients.length === 1 ? "" : "s"}`;
@@ -118,9 +181,11 @@ export function viewOfValue(v: ValueReading): ValueView {
       return { kind: "series", tex: texOfSeriesPrefix(coefficients), note: `${terms} computed; no rational function found that fits them` };
     }
     case "List":
-      return { kind: "list", items: (v.items ?? []).map(viewOfValue) };
-    case "Record":
-      return { kind: "record", fields: Object.entries(v.fields ?? {}).map(([k, f]) => [k, viewOfValue(f)] as const) };
+      return { kind: "list", items: (v.items ?? []).map((x) => viewOfValue(x, ctx)) };
+    case "Record": {
+      const fields = v.fields ?? {};
+      return { kind: "record", fields: recordFieldOrder(v).map((k) => [k, viewOfValue(fields[k]!, ctx)] as const) };
+    }
     case "Table": {
       const rows = (v.rows ?? []) as readonly (readonly ValueReading[])[];
       return {

@@ -4,6 +4,7 @@
 import type { ReactNode } from "react";
 import { resultIndex, type Cell, type CellStatus } from "@/lib/wire/reading";
 import { bettiGrid } from "../render/betti";
+import type { ViewContext } from "../render/view-model";
 import { overallFraction, type RunningCell } from "../state/running-cell";
 import { BettiTable } from "./betti-table";
 import { ErrorView } from "./error-view";
@@ -26,14 +27,22 @@ export function formatDuration(ms: number): string {
   return `${Math.floor(s / 60)} min ${String(s % 60).padStart(2, "0")} s`;
 }
 
-function Header({ position, status, ms }: { position: number | null; status: CellStatus; ms: number | null }) {
+/// Who ran a cell, as the API reports it (null for cells from before authors were kept).
+type Author = { readonly id: string; readonly name: string } | null | undefined;
+
+function Header({ position, status, ms, author }: { position: number | null; status: CellStatus; ms: number | null; author?: Author }) {
   return (
-    <div className="flex items-center gap-2 text-xs">
+    <div className="flex flex-wrap items-center gap-2 text-xs">
       <span className="font-mono text-ink/50 dark:text-paper/50">{position === null ? "…" : `[${position + 1}]`}</span>
       <span className={`rounded px-1.5 py-0.5 font-medium ${STATUS_STYLE[status]}`} data-testid="cell-status">
         {status}
       </span>
       {ms !== null && <span className="text-ink/60 dark:text-paper/60">{formatDuration(ms)}</span>}
+      {author && (
+        <span className="text-ink/60 dark:text-paper/60" data-testid="cell-author">
+          run by {author.name || "a former member"}
+        </span>
+      )}
     </div>
   );
 }
@@ -45,17 +54,17 @@ function Source({ source }: { source: string }) {
 }
 
 /// A finished (or stored) cell; `footer` is drawn under its results (the experiments room
-/// puts its links there).
-export function CellView({ cell, footer }: { cell: Cell; footer?: ReactNode }) {
+/// puts its links there); `context` lets values name their ring (render/view-model).
+export function CellView({ cell, footer, context }: { cell: Cell; footer?: ReactNode; context?: ViewContext }) {
   return (
     <article
       aria-label={`Cell ${cell.position + 1}`}
       className="rs-cell flex flex-col gap-2 border-b border-ink/10 py-3 dark:border-paper/10"
     >
-      <Header position={cell.position} status={cell.status} ms={cell.timings?.totalMs ?? null} />
+      <Header position={cell.position} status={cell.status} ms={cell.timings?.totalMs ?? null} author={(cell as Cell & { author?: Author }).author} />
       <Source source={cell.source} />
       {cell.results.map((r, k) => (
-        <ValueView key={resultIndex(r, k)} value={r.value} />
+        <ValueView key={resultIndex(r, k)} value={r.value} context={context} />
       ))}
       {cell.stopped ? (
         <p className="text-sm text-ink-soft dark:text-paper/70" data-testid="cell-stopped">
@@ -71,7 +80,7 @@ export function CellView({ cell, footer }: { cell: Cell; footer?: ReactNode }) {
 }
 
 /// The cell being run from this page, drawn from its streamed state.
-export function RunningCellView({ cell, onCancel }: { cell: RunningCell; onCancel: () => void }) {
+export function RunningCellView({ cell, onCancel, context }: { cell: RunningCell; onCancel: () => void; context?: ViewContext }) {
   const fraction = overallFraction(cell);
   const running = cell.status === "running";
   const stage = cell.stage === null ? "sending" : cell.stage === "checked" ? "checked, starting" : cell.stage;
@@ -84,7 +93,7 @@ export function RunningCellView({ cell, onCancel }: { cell: RunningCell; onCance
       <Header position={cell.position} status={cell.status} ms={cell.totalMs} />
       <Source source={cell.source} />
       {cell.results.map((r, k) => (
-        <ValueView key={resultIndex(r, k)} value={r.value} />
+        <ValueView key={resultIndex(r, k)} value={r.value} context={context} />
       ))}
       {running && (
         <div className="flex flex-col gap-1">

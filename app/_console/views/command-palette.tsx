@@ -3,7 +3,15 @@
 /// Each command is also reachable without it (a button or a shortcut, shown beside it).
 import { Command } from "cmdk";
 import { useEffect, useRef } from "react";
+import { paletteScore } from "../render/palette-rank";
 import { kbd } from "./styles";
+
+/// cmdk's filter: items carry their label as the first keyword (see below), so the label is
+/// ranked on its own (word starts above scattered letters) and the rest as extra words.
+function filter(_value: string, search: string, keywords: string[] = []): number {
+  const [label = "", ...rest] = keywords;
+  return paletteScore(label, search, rest);
+}
 
 /// One command the palette offers.
 export interface PaletteCommand {
@@ -43,6 +51,7 @@ export function CommandPalette({
       open={open}
       onOpenChange={onOpenChange}
       label="Command palette"
+      filter={filter}
       overlayClassName="fixed inset-0 z-40 bg-ink/40"
       contentClassName="fixed left-1/2 top-[12vh] z-50 w-[min(40rem,92vw)] -translate-x-1/2 rounded-lg border border-ink/20 bg-paper text-ink shadow-2xl dark:border-paper/20 dark:bg-night-panel dark:text-paper"
     >
@@ -63,8 +72,8 @@ export function CommandPalette({
               .map((c) => (
                 <Command.Item
                   key={c.id}
-                  value={`${c.group} ${c.label} ${c.id}`}
-                  keywords={c.keywords ? [...c.keywords] : undefined}
+                  value={c.id}
+                  keywords={[c.label, c.group, ...(c.keywords ?? [])]}
                   onSelect={() => {
                     chosen.current = c.run;
                     onOpenChange(false);
@@ -72,7 +81,7 @@ export function CommandPalette({
                   className={itemClass}
                 >
                   <span className="truncate">{c.label}</span>
-                  {c.shortcut && <kbd className={kbd}>{c.shortcut}</kbd>}
+                  {c.shortcut && <kbd className={`${kbd} shrink-0`}>{c.shortcut}</kbd>}
                 </Command.Item>
               ))}
           </Command.Group>

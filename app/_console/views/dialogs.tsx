@@ -3,16 +3,18 @@
 /// input history, guided first steps, sharing the session or an object, objects shared
 /// with me, export and import, keyboard help.
 import type { GuidedExample } from "@/lib/examples/tour";
-import type { NamedObject, SessionDetail } from "@/lib/wire/reading";
+import type { Cell, NamedObject, SessionDetail } from "@/lib/wire/reading";
 import type { ExportFormat } from "../api/client";
-import type { DialogName } from "../use-console";
+import type { DialogName, PendingRedefinition } from "../use-console";
+import { ExportPanel } from "./export-dialog";
+import { LibraryPanel } from "./library-dialog";
 import { HistorySearch } from "./history-search";
 import { KeyboardHelp } from "./keyboard-help";
 import { Modal } from "./modal";
 import { ShareObjectPanel } from "./object-share-dialog";
 import { ShareSessionPanel } from "./share-dialog";
 import { SharedObjectsPanel } from "./shared-objects-dialog";
-import { panelHeading } from "./styles";
+import { buttonPrimary, buttonSecondary, panelHeading } from "./styles";
 import { TourList } from "./tour";
 import { TransferPanel } from "./transfer-dialog";
 
@@ -32,6 +34,11 @@ export function ConsoleDialogs(props: {
   onObjectsImported: (words: string) => void;
   onExport: (format: ExportFormat) => Promise<void>;
   onImport: (text: string, fileName: string) => Promise<string | null>;
+  link: string | null;
+  cells: readonly Cell[];
+  onChooseCells: () => void;
+  pendingRedefinition: PendingRedefinition | null;
+  onAnswerRedefinition: (replace: boolean) => void;
   /// the tour's sweep step: run it as an experiment and open its plot (experiments room)
   onRunTourExperiment?: (e: GuidedExample) => void;
 }) {
@@ -43,7 +50,8 @@ export function ConsoleDialogs(props: {
       </Modal>
       <Modal open={dialog === "tour"} title="Guided first steps" onClose={onClose}>
         <div className="max-h-[70vh] overflow-y-auto pr-1">
-          <TourList onInsert={props.onInsertExample} canRun={canEdit} onRunExperiment={props.onRunTourExperiment} />
+          {/* the steps run in a session of the reader's own (useConsole.insertExample), so any signed-in reader may run them */}
+          <TourList onInsert={props.onInsertExample} canRun={signedIn} onRunExperiment={props.onRunTourExperiment} />
         </div>
       </Modal>
       <Modal open={dialog === "share" && sessionId !== null} title={`Share “${session?.title ?? "this session"}”`} onClose={onClose}>
@@ -60,7 +68,32 @@ export function ConsoleDialogs(props: {
         <SharedObjectsPanel targetSessionId={canEdit ? sessionId : null} onImported={props.onObjectsImported} />
       </Modal>
       <Modal open={dialog === "transfer"} title={signedIn ? "Export or import" : "Export the transcript"} onClose={onClose}>
-        <TransferPanel canExport={sessionId !== null} canImport={signedIn} onExport={props.onExport} onImport={props.onImport} />
+        <TransferPanel
+          canExport={sessionId !== null}
+          canImport={signedIn}
+          onExport={props.onExport}
+          onImport={props.onImport}
+          onChooseCells={props.onChooseCells}
+        />
+      </Modal>
+      <Modal open={dialog === "library"} title="Library" onClose={onClose}>
+        <LibraryPanel targetSessionId={canEdit ? sessionId : null} onInserted={props.onObjectsImported} />
+      </Modal>
+      <Modal open={dialog === "export" && sessionId !== null} title="Export" onClose={onClose}>
+        {sessionId && <ExportPanel sessionId={sessionId} link={props.link} cells={props.cells} onDone={props.onNotice} />}
+      </Modal>
+      <Modal open={props.pendingRedefinition !== null} title="Replace a name someone else defined?" onClose={() => props.onAnswerRedefinition(false)}>
+        <p className="text-sm" data-testid="redefine-question">
+          {props.pendingRedefinition?.message}
+        </p>
+        <span className="flex gap-2">
+          <button type="button" className={buttonPrimary} onClick={() => props.onAnswerRedefinition(true)}>
+            Replace it
+          </button>
+          <button type="button" className={buttonSecondary} onClick={() => props.onAnswerRedefinition(false)} data-autofocus>
+            Keep theirs
+          </button>
+        </span>
       </Modal>
       <Modal open={dialog === "help"} title="Keyboard" onClose={onClose}>
         <KeyboardHelp />

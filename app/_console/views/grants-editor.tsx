@@ -4,9 +4,9 @@
 /// only in the calls and in the words of their notices.
 import useSWR from "swr";
 import { keys } from "../api/client";
-import { fetchJson, messageOf } from "@/app/_client/fetch";
+import { ApiError, fetchJson, messageOf } from "@/app/_client/fetch";
 import type { GranteeInput, Share, ShareRole, TeamSummary } from "../api/sharing";
-import { ShareForm } from "./share-form";
+import { ShareForm, type ShareProblem } from "./share-form";
 import { ShareList } from "./share-list";
 
 export interface GrantsEditorProps {
@@ -29,6 +29,16 @@ async function attempt(change: () => Promise<string>, onChanged: GrantsEditorPro
   }
 }
 
+/// Like attempt, but an address without an account comes back as such (the form offers an invitation).
+async function attemptShare(change: () => Promise<string>, onChanged: GrantsEditorProps["onChanged"]): Promise<ShareProblem | null> {
+  try {
+    await onChanged(await change());
+    return null;
+  } catch (e) {
+    return { message: messageOf(e), noAccount: e instanceof ApiError && e.code === "no_account" };
+  }
+}
+
 export function GrantsEditor({ shares, grant, revoke, onChanged }: GrantsEditorProps) {
   const teams = useSWR<{ teams: TeamSummary[] }>(keys.teams, fetchJson);
   return (
@@ -37,7 +47,9 @@ export function GrantsEditor({ shares, grant, revoke, onChanged }: GrantsEditorP
         <ShareForm
           // guests cannot share with their team
           teams={(teams.data?.teams ?? []).filter((t) => t.role !== "guest")}
-          onShare={(grantee, role) => attempt(() => grant(grantee, role), onChanged)}
+          // every team, for the invitation offer (only a lead's teams can invite)
+          allTeams={teams.data?.teams ?? []}
+          onShare={(grantee, role) => attemptShare(() => grant(grantee, role), onChanged)}
         />
       ) : (
         <p className="text-sm text-ink/50 dark:text-paper/50">Loading your teams…</p>

@@ -5,6 +5,7 @@
 import { useState } from "react";
 import type { NamedObject, ObjectOrigin } from "@/lib/wire/reading";
 import { Modal } from "./modal";
+import { typeWords } from "../render/type-words";
 import { buttonPrimary, buttonQuiet, buttonSecondary, focusRing, panelHeading, textInput } from "./styles";
 
 export interface ShelfProps {
@@ -17,6 +18,8 @@ export interface ShelfProps {
   readonly onShare?: (o: NamedObject) => void;
   /// present when I am signed in: opens the objects others shared with me
   readonly onOpenShared?: () => void;
+  /// opens the library: my named objects across sessions, and those shared with me
+  readonly onOpenLibrary?: () => void;
 }
 
 /// "from Ada's session “Harbour ideals” (b)": where an imported copy came from.
@@ -31,7 +34,7 @@ function originLine(origin: ObjectOrigin): string {
 const NAME = /^[A-Za-z][A-Za-z0-9_']*$/;
 
 /// The shelf of named objects.
-export function Shelf({ objects, canEdit, onInsert, onRename, onDelete, onShare, onOpenShared }: ShelfProps) {
+export function Shelf({ objects, canEdit, onInsert, onRename, onDelete, onShare, onOpenShared, onOpenLibrary }: ShelfProps) {
   const [renaming, setRenaming] = useState<NamedObject | null>(null);
   const [deleting, setDeleting] = useState<NamedObject | null>(null);
   const [newName, setNewName] = useState("");
@@ -73,11 +76,18 @@ export function Shelf({ objects, canEdit, onInsert, onRename, onDelete, onShare,
     <section aria-label="Shelf" className="flex min-h-0 flex-1 flex-col gap-2">
       <div className="flex items-center justify-between">
         <h2 className={panelHeading}>Named objects</h2>
-        {onOpenShared && (
-          <button type="button" className={buttonQuiet} onClick={onOpenShared} title="Objects others shared with you">
-            Shared with me
-          </button>
-        )}
+        <span className="flex flex-wrap gap-0.5">
+          {onOpenLibrary && (
+            <button type="button" className={buttonQuiet} onClick={onOpenLibrary} title="Your named objects across sessions, and those shared with you">
+              Library
+            </button>
+          )}
+          {onOpenShared && (
+            <button type="button" className={buttonQuiet} onClick={onOpenShared} title="Objects others shared with you">
+              Shared with me
+            </button>
+          )}
+        </span>
       </div>
       {objects && objects.length === 0 && (
         <p className="text-sm text-ink/60 dark:text-paper/60">
@@ -87,20 +97,21 @@ export function Shelf({ objects, canEdit, onInsert, onRename, onDelete, onShare,
       <ul id="rs-shelf" className="flex min-h-0 flex-col gap-1 overflow-y-auto">
         {objects?.map((o) => (
           <li key={o.id} className="group rounded px-1 py-0.5 hover:bg-ink/5 dark:hover:bg-paper/5" data-object-name={o.name}>
-            <div className="flex items-center gap-2">
+            {/* wraps instead of clipping: a long name or a narrow panel moves the buttons to a line of their own */}
+            <div className="flex flex-wrap items-center gap-x-2 gap-y-0.5">
               <button
                 type="button"
                 onClick={() => onInsert(o.name)}
                 title={`Insert ${o.name} into the input`}
-                className={`rounded px-1 font-mono text-sm font-semibold ${focusRing}`}
+                className={`min-w-0 max-w-full truncate rounded px-1 font-mono text-sm font-semibold ${focusRing}`}
               >
                 {o.name}
               </button>
-              <span className="rounded bg-ink/10 px-1.5 text-[0.7rem] uppercase tracking-wide text-ink-soft dark:bg-paper/10 dark:text-paper/70">
-                {o.type}
+              <span className="shrink-0 rounded bg-ink/10 px-1.5 text-[0.7rem] text-ink-soft dark:bg-paper/10 dark:text-paper/70">
+                {typeWords(o.type)}
               </span>
               {(canEdit || onShare) && (
-                <span className="ml-auto flex gap-0.5">
+                <span className="ml-auto flex shrink-0 flex-wrap gap-0.5">
                   {onShare && (
                     <button type="button" className={buttonQuiet} aria-label={`Share ${o.name}`} onClick={() => onShare(o)}>
                       Share
@@ -127,7 +138,7 @@ export function Shelf({ objects, canEdit, onInsert, onRename, onDelete, onShare,
                 </span>
               )}
             </div>
-            <p className="truncate pl-1 text-xs text-ink/60 dark:text-paper/60" title={o.summary}>
+            <p className="truncate pl-1 font-mono text-xs text-ink/60 dark:text-paper/60" title={o.summary}>
               {o.summary}
             </p>
             {o.origin && (

@@ -13,4 +13,6 @@ export const panelHeading = "text-xs font-semibold uppercase tracking-wide text-
 
 export const textInput = `w-full rounded-md border border-ink/20 bg-white px-2 py-1.5 text-sm text-ink dark:border-paper/20 dark:bg-night dark:text-paper ${focusRing}`;
 
-export const kbd = "rounded border border-ink/20 bg-paper-deep px-1 font-mono text-[0.7rem] dark:border-paper/20 dark:bg-night-line";
+/// A key's badge keeps its own colours, so it stays readable on a highlighted row of either
+/// theme (the row's text colour is not inherited).
+export const kbd = "rounded border border-ink/20 bg-paper-deep px-1 font-mono text-[0.7rem] text-ink dark:border-paper/20 dark:bg-night-line dark:text-paper";

@@ -20,7 +20,7 @@ export function Toolbar(props: {
   const { session, sessionId, signedIn, canShare, readOnlyLink, theme, onPalette, onDialog, onToggleTheme } = props;
   return (
     <>
-      <div className="flex items-center gap-2 border-b border-ink/10 px-4 py-2 dark:border-paper/10">
+      <div className="flex flex-wrap items-center gap-2 border-b border-ink/10 px-4 py-2 dark:border-paper/10">
         <h1 className="truncate text-sm font-semibold" data-testid="session-title">
           {session?.title ?? (sessionId ? "…" : "No session open")}
         </h1>
@@ -32,7 +32,7 @@ export function Toolbar(props: {
             {readOnlyLink ? "read-only shared link" : "read-only"}
           </span>
         )}
-        <span className="ml-auto flex items-center gap-1.5">
+        <span className="ml-auto flex flex-wrap items-center gap-1.5">
           <button type="button" className={buttonSecondary} onClick={onPalette} title="Command palette">
             Commands <kbd className={kbd}>Ctrl K</kbd>
           </button>
@@ -54,7 +54,7 @@ export function Toolbar(props: {
               type="button"
               className={buttonSecondary}
               onClick={() => onDialog("transfer")}
-              title="Export the transcript or import a session (Alt+E)"
+              title="Export the transcript (all cells or chosen ones) or import a session (Alt+E)"
             >
               Export
             </button>

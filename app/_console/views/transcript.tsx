@@ -1,9 +1,9 @@
 "use client";
 /// The transcript: the session's stored cells, the cell running now, the welcome of an
 /// empty session, and load errors in words. It follows the newest output.
-import { useEffect, useRef, type ReactNode } from "react";
+import { useEffect, useMemo, useRef, type ReactNode } from "react";
 import type { GuidedExample } from "@/lib/examples/tour";
-import type { Cell } from "@/lib/wire/reading";
+import type { Cell, NamedObject } from "@/lib/wire/reading";
 import type { RunningCell } from "../state/running-cell";
 import { CellErrorBoundary } from "./cell-error-boundary";
 import { CellView, RunningCellView } from "./cell-view";
@@ -11,6 +11,8 @@ import { focusRing } from "./styles";
 import { EmptySessionWelcome } from "./tour";
 
 export function Transcript(props: {
+  /// the session's named objects: values name their ring by them (S, not R)
+  objects?: readonly NamedObject[] | undefined;
   cells: readonly Cell[] | undefined;
   running: RunningCell | null;
   /// no session is open and the visitor has none yet
@@ -26,6 +28,7 @@ export function Transcript(props: {
 }) {
   const { cells, running, noSessions, canEdit, sessionError, cellsError, onInsertExample, onOpenTour, onCancel } = props;
   const end = useRef<HTMLDivElement>(null);
+  const context = useMemo(() => ({ objects: props.objects ?? [] }), [props.objects]);
   useEffect(() => {
     end.current?.scrollIntoView({ block: "end" });
   }, [cells?.length, running?.results.length, running?.status, running?.partialBetti.length]);
@@ -48,10 +51,10 @@ export function Transcript(props: {
       {noSessions && <EmptySessionWelcome onInsert={onInsertExample} onOpenTour={onOpenTour} canRun />}
       {shownCells.map((c) => (
         <CellErrorBoundary key={c.id} position={c.position} source={c.source}>
-          <CellView cell={c} footer={props.cellFooter?.(c)} />
+          <CellView cell={c} context={context} footer={props.cellFooter?.(c)} />
         </CellErrorBoundary>
       ))}
-      {running && <RunningCellView cell={running} onCancel={onCancel} />}
+      {running && <RunningCellView cell={running} onCancel={onCancel} context={context} />}
       <div ref={end} />
     </section>
   );

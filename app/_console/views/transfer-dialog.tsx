@@ -18,10 +18,12 @@ export interface TransferProps {
   readonly canImport: boolean;
   readonly onExport: (format: ExportFormat) => Promise<void>;
   readonly onImport: (fileText: string, fileName: string) => Promise<string | null>;
+  /// opens the export of chosen cells (error cells left out)
+  readonly onChooseCells?: () => void;
 }
 
 /// The export buttons and the import file picker (rendered inside a Modal).
-export function TransferPanel({ canExport, canImport, onExport, onImport }: TransferProps) {
+export function TransferPanel({ canExport, canImport, onExport, onImport, onChooseCells }: TransferProps) {
   const [problem, setProblem] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
   return (
@@ -39,6 +41,11 @@ export function TransferPanel({ canExport, canImport, onExport, onImport }: Tran
               </li>
             ))}
           </ul>
+          {onChooseCells && (
+            <button type="button" className={`${buttonSecondary} self-start`} onClick={onChooseCells}>
+              Choose cells, leave out errors…
+            </button>
+          )}
         </section>
       )}
       {canImport && (

@@ -5,7 +5,8 @@ import { readJson } from "@/lib/http/body";
 import { route } from "@/lib/http/errors";
 import { createSession, listSessions } from "@/lib/sessions/store";
 
-const NewSession = z.object({ title: z.string().trim().min(1, "give the session a title").max(200) }).strict();
+/// Without a title the session is named by its first definition (lib/sessions/store).
+const NewSession = z.object({ title: z.string().trim().min(1, "give the session a title").max(200).optional() }).strict();
 
 export const POST = route(async (req) => {
   const user = await requireUser();
@@ -14,7 +15,9 @@ export const POST = route(async (req) => {
   return NextResponse.json({ id: session.id, title: session.title }, { status: 201 });
 });
 
-export const GET = route(async () => {
+/// `?q=` keeps the sessions whose title or content (cell sources, object names and values) contains it.
+export const GET = route(async (req) => {
   const user = await requireUser();
-  return NextResponse.json({ sessions: await listSessions(user) });
+  const q = new URL(req.url).searchParams.get("q")?.slice(0, 200) ?? undefined;
+  return NextResponse.json({ sessions: await listSessions(user, q) });
 });

@@ -1,6 +1,7 @@
 "use client";
 /// Accepting an invitation: what it offers, who it is for, and one button.
 import Link from "next/link";
+import { useRouter } from "next/navigation";
 import { useEffect, useState } from "react";
 import { api, buttonClass, Notice, PageFrame } from "../../teams/ui";
 
@@ -23,7 +24,8 @@ const STATUS_TEXT: Record<Exclude<Invitation["status"], "pending">, string> = {
 export function AcceptInvitation({ token, email }: { token: string; email: string }) {
   const [invitation, setInvitation] = useState<Invitation | null>(null);
   const [error, setError] = useState<string | null>(null);
-  const [joined, setJoined] = useState<{ teamId: string; role: string } | null>(null);
+  const [joined, setJoined] = useState<{ teamId: string; role: string; sessionId: string } | null>(null);
+  const router = useRouter();
   const [busy, setBusy] = useState(false);
 
   useEffect(() => {
@@ -36,10 +38,13 @@ export function AcceptInvitation({ token, email }: { token: string; email: strin
     setBusy(true);
     setError(null);
     try {
-      const { membership } = await api<{ membership: { teamId: string; role: string } }>(`/api/invitations/${encodeURIComponent(token)}/accept`, {
-        method: "POST",
-      });
+      const { membership } = await api<{ membership: { teamId: string; role: string; sessionId: string } }>(
+        `/api/invitations/${encodeURIComponent(token)}/accept`,
+        { method: "POST" },
+      );
       setJoined(membership);
+      // The invitee starts working in a session of their own (the server chose or made it).
+      router.push(`/?session=${encodeURIComponent(membership.sessionId)}`);
     } catch (e) {
       setError((e as Error).message);
     } finally {
@@ -74,6 +79,10 @@ export function AcceptInvitation({ token, email }: { token: string; email: strin
       {joined && (
         <p className="mt-6" role="status">
           You joined {invitation?.teamName} as {joined.role}.{" "}
+          <Link href={`/?session=${encodeURIComponent(joined.sessionId)}`} className="underline">
+            Open your session
+          </Link>{" "}
+          ·{" "}
           <Link href={`/teams/${joined.teamId}`} className="underline">
             Open the team
           </Link>

@@ -12,7 +12,7 @@ interface Detail {
   role: TeamRole;
   members: { userId: string; name: string; email: string; role: TeamRole }[];
   invitations: { id: string; email: string; role: TeamRole; expiresAt: string }[];
-  sharedSessions: { id: string; title: string; ownerName: string; role: "viewer" | "editor"; shareId: string }[];
+  sharedSessions: { id: string; title: string; ownerName: string; role: "viewer" | "editor"; shareId: string | null; via: "share" | "team visibility" }[];
 }
 interface SessionRow {
   id: string;
@@ -180,12 +180,13 @@ export function TeamView({ teamId, userId }: { teamId: string; userId: string })
         ) : (
           <ul className="mt-2 space-y-1 text-sm">
             {detail.sharedSessions.map((s) => (
-              <li key={s.shareId}>
+              <li key={s.id} data-testid="team-session">
                 <Link href={`/?session=${s.id}`} className="underline">
                   {s.title}
                 </Link>{" "}
                 <span className="text-ink-soft">
                   by {s.ownerName} · {s.role}
+                  {s.via === "team visibility" ? " · visible to the team" : ""}
                 </span>
               </li>
             ))}

@@ -1,5 +1,8 @@
 import { NextResponse } from "next/server";
-import { requireUserOrLink } from "@/lib/auth/current-user";
+import { z } from "zod";
+import { requireUser, requireUserOrLink } from "@/lib/auth/current-user";
+import { readJson } from "@/lib/http/body";
+import { deleteSession, renameSession } from "@/lib/sessions/manage";
 import { requireSessionAccess } from "@/lib/auth/access";
 import { route } from "@/lib/http/errors";
 import { linkToken } from "@/lib/sessions/link-token";
@@ -25,4 +28,23 @@ export const GET = route(async (req, { params }: Context) => {
       canManageSharing: user !== null && (await canManageSharing(user, session)),
     } satisfies SessionDetail,
   });
+});
+
+const Rename = z.object({ title: z.string().trim().min(1, "give the session a title").max(200) }).strict();
+
+/// Renames the session (its owner only).
+export const PATCH = route(async (req, { params }: Context) => {
+  const user = await requireUser();
+  const { id } = await params;
+  const { title } = await readJson(req, Rename, { maxBytes: 4 * 1024 });
+  const session = await renameSession(user, id, title, linkToken(req));
+  return NextResponse.json({ session: { id: session.id, title: session.title } });
+});
+
+/// Deletes the session with its cells and objects (its owner only; the console confirms first).
+export const DELETE = route(async (req, { params }: Context) => {
+  const user = await requireUser();
+  const { id } = await params;
+  await deleteSession(user, id, linkToken(req));
+  return NextResponse.json({ deleted: true });
 });

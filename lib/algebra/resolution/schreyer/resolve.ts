@@ -42,7 +42,7 @@ export function resolveQuotient(I: Ideal, opts?: ResolveOptions): Resolution {
   const C = ringCtx(R);
   const G = idealGroebnerBasis(I, opts);
   const O = termOverPosition(C.layout, 1);
-  for (const g of G) if (!g.m.every((m) => m[1] === g.m[0][1])) throw runtimeError("resolveQuotient", "the ideal is not homogeneous");
+  for (const g of G) if (!g.m.every((m) => m[1] === g.m[0][1])) throw runtimeError("resolveQuotient", "the ideal is not homogeneous, so it has no graded resolution: make the terms of each generator share one degree (homogenize with a new variable)");
   const basis = G.map((g) => vecFromPolys(C, O, [g]));
   return resolveFromBasis(C, [0], O, basis, opts);
 }

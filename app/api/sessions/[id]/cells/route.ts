@@ -7,6 +7,8 @@ import { route } from "@/lib/http/errors";
 import { LIMIT_TABLE } from "@/lib/limits";
 import { linkToken } from "@/lib/sessions/link-token";
 import { createFromCell } from "@/lib/experiments/service";
+import { definedNames } from "@/grammar/defined-names";
+import { requireRedefinitionConsent } from "@/lib/sessions/redefine-guard";
 import { runCell } from "@/lib/sessions/run-cell";
 import { listCells } from "@/lib/sessions/store";
 import { cellView } from "@/lib/sessions/views";
@@ -16,7 +18,11 @@ type Context = { params: Promise<{ id: string }> };
 export const MAX_SOURCE_BYTES = LIMIT_TABLE.cellSourceBytes.value;
 
 const NewCell = z
-  .object({ source: z.string().max(MAX_SOURCE_BYTES, "a cell holds at most 100 KB of source").refine((s) => s.trim() !== "", "the cell is empty: type a statement to run") })
+  .object({
+    source: z.string().max(MAX_SOURCE_BYTES, "a cell holds at most 100 KB of source").refine((s) => s.trim() !== "", "the cell is empty: type a statement to run"),
+    /// the caller confirmed replacing names that someone else defined (lib/sessions/redefine-guard)
+    redefine: z.boolean().optional(),
+  })
   .strict();
 
 export const dynamic = "force-dynamic";
@@ -34,7 +40,8 @@ export const POST = route(async (req, { params }: Context) => {
   const { id } = await params;
   // With the link's token a link holder is known to read the session: 403, not 404.
   await requireSessionAccess(user, id, "edit", { linkToken: linkToken(req) });
-  const { source } = await readJson(req, NewCell, { maxBytes: MAX_SOURCE_BYTES + 1024 });
+  const { source, redefine } = await readJson(req, NewCell, { maxBytes: MAX_SOURCE_BYTES + 1024 });
+  await requireRedefinitionConsent(user, id, definedNames(source), redefine === true);
   // A long sweep in the cell becomes a background experiment (lib/experiments/README.md).
   return runCell(user, id, source, { createExperiment: createFromCell });
 });

@@ -1,0 +1,1 @@
+ALTER TABLE "sessions" ADD COLUMN "auto_title" boolean DEFAULT false NOT NULL;
