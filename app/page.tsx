@@ -43,11 +43,18 @@ export default async function ConsolePage({
           </span>
         ))}
         {teamRows.length > TEAMS_SHOWN && (
-          <span className="hidden whitespace-nowrap text-ink-soft md:inline" title={teamRows.map((t) => `${t.name} · ${t.role}`).join("\n")}>
+          <span
+            className="hidden whitespace-nowrap text-ink-soft md:inline"
+            title={teamRows.map((t) => `${t.name} · ${t.role}`).join("\n")}
+          >
             +{teamRows.length - TEAMS_SHOWN} more teams
           </span>
         )}
-        <Link href="/reference" className="text-ink-soft underline" title="The notation reference: every function, property and option, searchable">
+        <Link
+          href="/reference"
+          className="text-ink-soft underline"
+          title="The notation reference: every function, property and option, searchable"
+        >
           Notation
         </Link>
         <Link href="/experiments" className="text-ink-soft underline">

@@ -144,7 +144,9 @@ export const cells = pgTable(
   },
   (t) => [
     unique("cells_session_position_unique").on(t.sessionId, t.position),
-    index("cells_running_idx").on(t.status).where(sql`${t.status} = 'running'`),
+    index("cells_running_idx")
+      .on(t.status)
+      .where(sql`${t.status} = 'running'`),
     check("cells_position_nonnegative", sql`${t.position} >= 0`),
     check("cells_duration_nonnegative", sql`${t.durationMs} IS NULL OR ${t.durationMs} >= 0`),
   ],
@@ -307,10 +309,7 @@ export const experiments = pgTable(
     startedAt: timestamp("started_at", { withTimezone: true }),
     finishedAt: timestamp("finished_at", { withTimezone: true }),
   },
-  (t) => [
-    index("experiments_session_idx").on(t.sessionId, t.createdAt),
-    check("experiments_total_nonnegative", sql`${t.total} >= 0`),
-  ],
+  (t) => [index("experiments_session_idx").on(t.sessionId, t.createdAt), check("experiments_total_nonnegative", sql`${t.total} >= 0`)],
 );
 
 /// One member's row. The primary key (experiment, member) makes a row exist at most once;

@@ -107,23 +107,7 @@ export interface Identifier {
 }
 
 /// Binary operators, after Unicode aliases are mapped (`∩` → `&`, `⊆` → `<=`, `∈` → `in`).
-export type BinaryOp =
-  | "+"
-  | "-"
-  | "*"
-  | "/"
-  | "^"
-  | "&"
-  | ":"
-  | "=="
-  | "!="
-  | "<"
-  | "<="
-  | ">"
-  | ">="
-  | "in"
-  | "and"
-  | "or";
+export type BinaryOp = "+" | "-" | "*" | "/" | "^" | "&" | ":" | "==" | "!=" | "<" | "<=" | ">" | ">=" | "in" | "and" | "or";
 
 export interface Binary {
   readonly kind: "Binary";
@@ -274,11 +258,4 @@ export interface ErrorExpr {
   readonly span: Span;
 }
 
-export type Node =
-  | Program
-  | Statement
-  | Expr
-  | Name
-  | NamedArg
-  | RecordField
-  | ForClause;
+export type Node = Program | Statement | Expr | Name | NamedArg | RecordField | ForClause;

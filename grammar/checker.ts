@@ -23,18 +23,7 @@ import {
   type PropertySig,
 } from "./signatures";
 import { isPrime, nearest, nextPrime, previousPrime } from "./suggest";
-import {
-  isAssignable,
-  isFamilyMember,
-  joinTypes,
-  makeUnion,
-  orNone,
-  sameType,
-  T,
-  typeToString,
-  withArticle,
-  type Type,
-} from "./types";
+import { isAssignable, isFamilyMember, joinTypes, makeUnion, orNone, sameType, T, typeToString, withArticle, type Type } from "./types";
 
 /// Literal exponents above this are refused before anything runs.
 export const MAX_LITERAL_EXPONENT = BigInt(LIMIT_TABLE.literalExponent.value);
@@ -130,9 +119,7 @@ class Checker {
   /// Source of `outer` with the text of `inner` replaced.
   private replaced(outer: { span: A.Span }, inner: { span: A.Span }, by: string): string {
     const o = outer.span.from.offset;
-    return (
-      this.source.slice(o, inner.span.from.offset) + by + this.source.slice(inner.span.to.offset, outer.span.to.offset)
-    );
+    return this.source.slice(o, inner.span.from.offset) + by + this.source.slice(inner.span.to.offset, outer.span.to.offset);
   }
 
   private ringName(): string {
@@ -206,7 +193,8 @@ class Checker {
 
   infer(e: A.Expr): Type {
     if (this.depth >= MAX_DEPTH) {
-      if (!this.tooDeep) this.error(e.span, `this expression is nested more than ${MAX_DEPTH} levels deep — split it into several definitions`);
+      if (!this.tooDeep)
+        this.error(e.span, `this expression is nested more than ${MAX_DEPTH} levels deep — split it into several definitions`);
       this.tooDeep = true;
       this.types.set(e, T.Any);
       return T.Any;
@@ -458,9 +446,7 @@ class Checker {
     const rows = operatorRows(op, left === undefined);
     const fits = (r: OperatorSig) => {
       const binds = new Map<string, Type>();
-      return (
-        (left === undefined || matchParam(r.left!, left, binds)) && matchParam(r.right, right, binds) && bindsAgree(binds)
-      );
+      return (left === undefined || matchParam(r.left!, left, binds)) && matchParam(r.right, right, binds) && bindsAgree(binds);
     };
     const matching = rows.filter(fits);
     if (matching.length === 0) return undefined;
@@ -551,8 +537,10 @@ class Checker {
     if (e.op === "/" && l.kind === "Ring" && r.kind === "Poly") fix = ` — did you mean ${lt} / <${rt}>?`;
     else if (e.op === "/" && l.kind === "Ideal" && (r.kind === "Ideal" || r.kind === "Poly"))
       fix = ` — for the colon ideal write ${lt} : ${rt}; for a quotient ring, ${this.ringName()} / ${wrap(e.left, lt)}`;
-    else if ((e.op === "+" || e.op === "&") && l.kind === "Ideal" && isAssignable(r, T.Poly)) fix = ` — did you mean ${lt} ${e.op} <${rt}>?`;
-    else if ((e.op === "+" || e.op === "&") && r.kind === "Ideal" && isAssignable(l, T.Poly)) fix = ` — did you mean <${lt}> ${e.op} ${rt}?`;
+    else if ((e.op === "+" || e.op === "&") && l.kind === "Ideal" && isAssignable(r, T.Poly))
+      fix = ` — did you mean ${lt} ${e.op} <${rt}>?`;
+    else if ((e.op === "+" || e.op === "&") && r.kind === "Ideal" && isAssignable(l, T.Poly))
+      fix = ` — did you mean <${lt}> ${e.op} ${rt}?`;
     else if (e.op === "in" && isAssignable(l, T.Poly) && isAssignable(r, T.Poly)) fix = ` — did you mean ${lt} in <${rt}>?`;
     else if (e.op === "in" && l.kind === "Ideal" && r.kind === "Ideal") fix = ` — for containment write ${lt} <= ${rt}`;
     const wanted = shapes.length <= 8 ? `; it applies to ${shapes.join(", ")}` : "";
@@ -563,10 +551,7 @@ class Checker {
     const t = this.infer(e.operand);
     const r = this.operator(e.op, undefined, t);
     if (r !== undefined) return r;
-    this.error(
-      e.span,
-      e.op === "not" ? `not expects a Bool, got ${typeToString(t)}` : `\`-\` cannot negate ${withArticle(t)}`,
-    );
+    this.error(e.span, e.op === "not" ? `not expects a Bool, got ${typeToString(t)}` : `\`-\` cannot negate ${withArticle(t)}`);
     return T.Any;
   }
 
@@ -602,10 +587,7 @@ class Checker {
           return T.Any;
         }
         const guess = nearest(c.name, functionNames);
-        this.error(
-          c.span,
-          `unknown function ${c.name}${guess ? ` — did you mean ${guess}?` : " (the reference lists every function)"}`,
-        );
+        this.error(c.span, `unknown function ${c.name}${guess ? ` — did you mean ${guess}?` : " (the reference lists every function)"}`);
         return T.Any;
       }
     }
@@ -663,7 +645,10 @@ class Checker {
     const r = this.applyFunction(probe, [member], e.args[1].span, "the probe");
     if (r.kind === "Record") return r.fields;
     if (r.kind !== "Any") {
-      this.error(e.args[1].span, `${what}'s probe must return a Record (its fields become the columns), e.g. I -> {dim: I.dim}; this one returns ${typeToString(r)}`);
+      this.error(
+        e.args[1].span,
+        `${what}'s probe must return a Record (its fields become the columns), e.g. I -> {dim: I.dim}; this one returns ${typeToString(r)}`,
+      );
     }
     return null;
   }
@@ -691,10 +676,7 @@ class Checker {
     if (byArity.length === 0) {
       const counts = [...new Set(sig.overloads.map((o) => (o.rest ? `${o.params.length} or more` : String(o.params.length))))];
       const plural = counts.length === 1 && counts[0] === "1" ? "argument" : "arguments";
-      this.error(
-        e.span,
-        `${sig.name} expects ${counts.join(" or ")} ${plural}, got ${n} — as in ${sig.example}`,
-      );
+      this.error(e.span, `${sig.name} expects ${counts.join(" or ")} ${plural}, got ${n} — as in ${sig.example}`);
       return;
     }
     for (let i = 0; i < n; i++) {
@@ -702,10 +684,7 @@ class Checker {
       if (byArity.some((o) => matchParam(paramAt(o, i).type, argTypes[i], new Map()))) continue;
       const arg = e.args[i];
       const got = argTypes[i];
-      this.error(
-        arg.span,
-        `${sig.name} expects ${withArticle(wanted)}, got ${typeToString(got)}${this.argumentFix(e, arg, wanted, got)}`,
-      );
+      this.error(arg.span, `${sig.name} expects ${withArticle(wanted)}, got ${typeToString(got)}${this.argumentFix(e, arg, wanted, got)}`);
       return;
     }
     this.error(e.span, `${sig.name} cannot take these arguments together — as in ${sig.example}`);
@@ -776,7 +755,10 @@ class Checker {
       const k = lit(1);
       if (k !== null && k < 1n) this.error(e.args[1].span, `${sig.name} needs a size k ≥ 1, got ${k}`);
       else if (k !== null && sig.name === "pfaffians" && k % 2n !== 0n) {
-        this.error(e.args[1].span, `Pfaffians are defined for even sizes k, got ${k} — did you mean pfaffians(${this.text(e.args[0])}, ${k + 1n})?`);
+        this.error(
+          e.args[1].span,
+          `Pfaffians are defined for even sizes k, got ${k} — did you mean pfaffians(${this.text(e.args[0])}, ${k + 1n})?`,
+        );
       }
     } else if (["syzygy", "tor", "ext"].includes(sig.name)) {
       const i = sig.name === "syzygy" ? 1 : 0;
@@ -812,7 +794,10 @@ class Checker {
     }
     if (args.length !== sig.params.length) {
       const names = sig.params.map((p) => p.name).join(", ");
-      this.error(e.span, `${obj.kind}.${c.name.name} expects ${sig.params.length} argument${sig.params.length === 1 ? "" : "s"} (${names}), got ${args.length}`);
+      this.error(
+        e.span,
+        `${obj.kind}.${c.name.name} expects ${sig.params.length} argument${sig.params.length === 1 ? "" : "s"} (${names}), got ${args.length}`,
+      );
       return sig.result;
     }
     sig.params.forEach((p, i) => {
@@ -829,7 +814,8 @@ class Checker {
     const item = obj.kind === "Family" ? obj.member : obj.kind === "Table" ? T.record(obj.columns) : null;
     if (item && (sig.name === "filter" || sig.name === "where") && args[0]?.kind === "Function") {
       const b = this.applyFunction(args[0], [item], e.args[0].span, "the predicate");
-      if (!isAssignable(b, T.Bool)) this.error(e.args[0].span, `${sig.name} needs a predicate giving a Bool, this one gives ${typeToString(b)}`);
+      if (!isAssignable(b, T.Bool))
+        this.error(e.args[0].span, `${sig.name} needs a predicate giving a Bool, this one gives ${typeToString(b)}`);
     }
     if (obj.kind === sig.result.kind && (obj.kind === "Family" || obj.kind === "Table")) return obj;
     return sig.result;
@@ -876,10 +862,7 @@ class Checker {
     if (obj.kind === "Ring" && sig.result.kind === "Ring") return obj;
     if (obj.kind === "Family" && sig.result.kind === "Family") return obj;
     if (sig.params !== null) {
-      this.error(
-        e.span,
-        `${e.name.name} is a method: call it, as in ${this.text(e)}(${sig.params.map((p) => p.name).join(", ")})`,
-      );
+      this.error(e.span, `${e.name.name} is a method: call it, as in ${this.text(e)}(${sig.params.map((p) => p.name).join(", ")})`);
     }
     return sig.result;
   }

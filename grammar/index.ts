@@ -19,7 +19,13 @@ export function analyze(source: string, env: Env = EMPTY_ENV): Analysis {
     const span = { from: loc.at(0), to: loc.at(source.length) };
     return {
       program: { kind: "Program", statements: [], span },
-      errors: [{ kind: "type", message: `Ringside could not check this cell (a defect of Ringside, not of your input: ${String(err).replace(/^\w+: /, "")}); please report it`, span }],
+      errors: [
+        {
+          kind: "type",
+          message: `Ringside could not check this cell (a defect of Ringside, not of your input: ${String(err).replace(/^\w+: /, "")}); please report it`,
+          span,
+        },
+      ],
       types: new Map(),
       names: new Map(),
       subscripts: new Map(),

@@ -7,8 +7,7 @@ const Identifier = createToken({ name: "Identifier", pattern: /[A-Za-z][A-Za-z0-
 const keyword = (word: string): TokenType =>
   createToken({ name: word[0].toUpperCase() + word.slice(1), pattern: new RegExp(word), longer_alt: Identifier, label: `\`${word}\`` });
 
-const punct = (name: string, pattern: RegExp | string, text: string): TokenType =>
-  createToken({ name, pattern, label: `\`${text}\`` });
+const punct = (name: string, pattern: RegExp | string, text: string): TokenType => createToken({ name, pattern, label: `\`${text}\`` });
 
 export const Tok = {
   WhiteSpace: createToken({ name: "WhiteSpace", pattern: /[ \t\r\f\v\u00a0]+/, group: Lexer.SKIPPED }),
@@ -124,17 +123,7 @@ export const ALL_TOKENS: TokenType[] = [...LEXER_ORDER, Tok.End];
 /// The notation's keywords, for the editor (completion, highlighting).
 export const KEYWORD_NAMES: readonly string[] = ["use", "in", "for", "if", "then", "else", "and", "or", "not", "true", "false"];
 
-const KEYWORDS = new Set<TokenType>([
-  Tok.Use,
-  Tok.In,
-  Tok.For,
-  Tok.If,
-  Tok.Then,
-  Tok.Else,
-  Tok.And,
-  Tok.Or,
-  Tok.Not,
-]);
+const KEYWORDS = new Set<TokenType>([Tok.Use, Tok.In, Tok.For, Tok.If, Tok.Then, Tok.Else, Tok.And, Tok.Or, Tok.Not]);
 
 const lexer = new Lexer(LEXER_ORDER, {
   positionTracking: "full",
@@ -161,17 +150,7 @@ export function lexRaw(source: string): RawLex {
 
 /// Highlighting categories for the editor.
 export type TokenCategory =
-  | "keyword"
-  | "constant"
-  | "function"
-  | "identifier"
-  | "number"
-  | "string"
-  | "comment"
-  | "operator"
-  | "bracket"
-  | "punctuation"
-  | "invalid";
+  "keyword" | "constant" | "function" | "identifier" | "number" | "string" | "comment" | "operator" | "bracket" | "punctuation" | "invalid";
 
 export interface HighlightToken {
   readonly from: number;

@@ -56,13 +56,11 @@ const messages: IParserErrorMessageProvider = {
     `expected an operator or the end of the statement, found ${describeToken(firstRedundant)}`,
   buildNoViableAltMessage: ({ expectedPathsPerAlt, actual, ruleName }) => {
     const wants =
-      RULE_WANTS[ruleName] ??
-      [...new Set(expectedPathsPerAlt.flatMap((alt) => alt.map((path) => label(path[0]))))].join(" or ");
+      RULE_WANTS[ruleName] ?? [...new Set(expectedPathsPerAlt.flatMap((alt) => alt.map((path) => label(path[0]))))].join(" or ");
     return `expected ${wants}, found ${describeToken(actual[0])}`;
   },
   buildEarlyExitMessage: ({ expectedIterationPaths, actual, ruleName }) => {
-    const wants =
-      RULE_WANTS[ruleName] ?? [...new Set(expectedIterationPaths.map((path) => label(path[0])))].join(" or ");
+    const wants = RULE_WANTS[ruleName] ?? [...new Set(expectedIterationPaths.map((path) => label(path[0])))].join(" or ");
     return `expected ${wants}, found ${describeToken(actual[0])}`;
   },
 };
@@ -199,9 +197,7 @@ class NotationParser extends EmbeddedActionsParser {
           ALT: () => {
             const u = this.CONSUME(Tok.Use);
             const id = this.CONSUME2(Tok.Identifier);
-            return this.ACTION(
-              () => ({ kind: "Use", name: this.name(id), span: this.spanFrom(this.tokSpan(u)) }) as A.Use,
-            );
+            return this.ACTION(() => ({ kind: "Use", name: this.name(id), span: this.spanFrom(this.tokSpan(u)) }) as A.Use);
           },
         },
         {
@@ -401,9 +397,7 @@ class NotationParser extends EmbeddedActionsParser {
             ALT: () => {
               this.CONSUME(Tok.Dot);
               const id = this.CONSUME(Tok.Identifier);
-              e = this.ACTION(
-                () => ({ kind: "Property", object: e, name: this.name(id), span: this.spanFrom(e.span) }) as A.Property,
-              );
+              e = this.ACTION(() => ({ kind: "Property", object: e, name: this.name(id), span: this.spanFrom(e.span) }) as A.Property);
             },
           },
           {
@@ -445,9 +439,7 @@ class NotationParser extends EmbeddedActionsParser {
                 });
               });
               this.CONSUME(Tok.RBracket);
-              e = this.ACTION(
-                () => ({ kind: "Subscript", object: e, items, options, span: this.spanFrom(e.span) }) as A.Subscript,
-              );
+              e = this.ACTION(() => ({ kind: "Subscript", object: e, items, options, span: this.spanFrom(e.span) }) as A.Subscript);
             },
           },
         ]);
@@ -459,11 +451,7 @@ class NotationParser extends EmbeddedActionsParser {
 
   argument = this.RULE(
     "argument",
-    (): A.Expr | A.NamedArg =>
-      this.OR([
-        { ALT: () => this.SUBRULE(this.namedOption) },
-        { ALT: () => this.SUBRULE(this.expression) },
-      ]),
+    (): A.Expr | A.NamedArg => this.OR([{ ALT: () => this.SUBRULE(this.namedOption) }, { ALT: () => this.SUBRULE(this.expression) }]),
     this.recover,
   );
 
@@ -570,9 +558,7 @@ class NotationParser extends EmbeddedActionsParser {
                 const id = this.CONSUME(Tok.Identifier);
                 this.CONSUME(Tok.In);
                 const source = this.SUBRULE2(this.expression);
-                this.ACTION(() =>
-                  clauses.push({ kind: "ForClause", name: this.name(id), source, span: this.spanFrom(this.tokSpan(f)) }),
-                );
+                this.ACTION(() => clauses.push({ kind: "ForClause", name: this.name(id), source, span: this.spanFrom(this.tokSpan(f)) }));
               }),
           },
           {
@@ -696,7 +682,7 @@ export function parse(source: string): ParseResult {
         errors.push({
           d: {
             kind: "parse",
-            message: "unterminated string: expected a closing `\"` on the same line",
+            message: 'unterminated string: expected a closing `"` on the same line',
             span: span(t.startOffset, t.startOffset + t.image.length),
           },
           stmt: index,
@@ -728,8 +714,15 @@ export function parse(source: string): ParseResult {
     } catch {
       // Only a call stack exhausted by a pathological chain (e.g. thousands of `^`) gets here.
       failed = true;
-      stmt = { kind: "ExprStatement", expr: { kind: "ErrorExpr", span: span(first.startOffset, stmtEnd) }, span: span(first.startOffset, stmtEnd) };
-      errors.push({ d: { kind: "parse", message: "this statement is nested too deeply to read — split it into several definitions", span: stmt.span }, stmt: index });
+      stmt = {
+        kind: "ExprStatement",
+        expr: { kind: "ErrorExpr", span: span(first.startOffset, stmtEnd) },
+        span: span(first.startOffset, stmtEnd),
+      };
+      errors.push({
+        d: { kind: "parse", message: "this statement is nested too deeply to read — split it into several definitions", span: stmt.span },
+        stmt: index,
+      });
       broken.add(index);
     }
     // After an unreadable character the parser's complaints are only its echo.
@@ -742,7 +735,13 @@ export function parse(source: string): ParseResult {
       errors.push({ d: { kind: "parse", message: x.message, span: x.span }, stmt: index });
       broken.add(index);
     }
-    statements.push(stmt ?? { kind: "ExprStatement", expr: { kind: "ErrorExpr", span: span(first.startOffset, first.startOffset) }, span: span(first.startOffset, first.startOffset) });
+    statements.push(
+      stmt ?? {
+        kind: "ExprStatement",
+        expr: { kind: "ErrorExpr", span: span(first.startOffset, first.startOffset) },
+        span: span(first.startOffset, first.startOffset),
+      },
+    );
   });
   for (const e of errors) if (e.stmt === -1) markBroken(e.d, statements, broken);
 

@@ -28,7 +28,7 @@ function expandRange(from: string, to: string): string[] | string {
     for (let i = a; i <= b; i++) out.push(fm[1] + String(i));
     return out;
   }
-  if (/^[a-z]$/.test(from) && /^[a-z]$/.test(to) || /^[A-Z]$/.test(from) && /^[A-Z]$/.test(to)) {
+  if ((/^[a-z]$/.test(from) && /^[a-z]$/.test(to)) || (/^[A-Z]$/.test(from) && /^[A-Z]$/.test(to))) {
     const a = from.charCodeAt(0);
     const b = to.charCodeAt(0);
     if (b < a) return `the range ${from}..${to} runs backwards: write ${to}..${from}`;

@@ -57,16 +57,7 @@ export type UnionType = { readonly kind: "Union"; readonly options: readonly Typ
 /// A type variable, used only inside the signature table (`sum(xs: List<T>) -> T`).
 export type VarType = { readonly kind: "Var"; readonly name: string };
 
-export type Type =
-  | SimpleType
-  | RingType
-  | ListType
-  | RecordType
-  | FunctionType
-  | FamilyType
-  | TableType
-  | UnionType
-  | VarType;
+export type Type = SimpleType | RingType | ListType | RecordType | FunctionType | FamilyType | TableType | UnionType | VarType;
 
 export type TypeKind = Type["kind"];
 
@@ -154,9 +145,7 @@ export function sameType(a: Type, b: Type): boolean {
     }
     case "Union": {
       const ub = b as UnionType;
-      return (
-        a.options.length === ub.options.length && a.options.every((o) => ub.options.some((p) => sameType(o, p)))
-      );
+      return a.options.length === ub.options.length && a.options.every((o) => ub.options.some((p) => sameType(o, p)));
     }
     case "Var":
       return a.name === (b as VarType).name;
@@ -238,9 +227,7 @@ export function typeToString(t: Type): string {
       // the families of notation.md §11 hold ideals; only other members are spelled out
       return t.member.kind === "Ideal" ? "Family" : `Family<${typeToString(t.member)}>`;
     case "Function":
-      return t.params === null
-        ? "Function"
-        : `Function(${t.params.map(typeToString).join(", ")}) -> ${typeToString(t.result)}`;
+      return t.params === null ? "Function" : `Function(${t.params.map(typeToString).join(", ")}) -> ${typeToString(t.result)}`;
     case "Union":
       return t.options.map(typeToString).join(" or ");
     case "Var":

@@ -12,8 +12,7 @@ import type { Env } from "@/grammar/analysis";
 import { consoleKeymap } from "@/lib/editor/console-keymap";
 
 /// How the run-anyway shortcut (Mod-Shift-Enter) is written for the reader's keyboard.
-const RUN_ANYWAY_LABEL =
-  typeof navigator !== "undefined" && /Mac|iPhone|iPad/.test(navigator.platform) ? "⌘⇧Enter" : "Ctrl+Shift+Enter";
+const RUN_ANYWAY_LABEL = typeof navigator !== "undefined" && /Mac|iPhone|iPad/.test(navigator.platform) ? "⌘⇧Enter" : "Ctrl+Shift+Enter";
 import { consoleTheme } from "@/lib/editor/console-theme";
 import { notationCompletion } from "@/lib/editor/notation-completion";
 import { notationDiagnostics } from "@/lib/editor/notation-diagnostics";

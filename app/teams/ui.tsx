@@ -40,5 +40,7 @@ export function Notice({ text, tone }: { text: string | null; tone: "ok" | "erro
 }
 
 export const inputClass = "rounded border border-ink/20 bg-white px-2 py-1 text-sm dark:border-paper/20 dark:bg-night-panel";
-export const buttonClass = "rounded bg-ink px-3 py-1 text-sm font-medium text-paper hover:bg-ink/80 disabled:opacity-50 dark:bg-paper dark:text-ink";
-export const quietButtonClass = "rounded border border-ink/20 px-2 py-0.5 text-xs hover:bg-paper-deep disabled:opacity-50 dark:border-paper/20";
+export const buttonClass =
+  "rounded bg-ink px-3 py-1 text-sm font-medium text-paper hover:bg-ink/80 disabled:opacity-50 dark:bg-paper dark:text-ink";
+export const quietButtonClass =
+  "rounded border border-ink/20 px-2 py-0.5 text-xs hover:bg-paper-deep disabled:opacity-50 dark:border-paper/20";

@@ -10,7 +10,11 @@ const here = path.dirname(fileURLToPath(import.meta.url));
 const argv = process.argv.slice(2);
 if (argv[0] === "experiments") {
   // steering background sweeps needs the database; its own bundle keeps `eval` light
-  const { experimentsMain } = await importBundled("ringside-experiments-cli", "experimentsMain", path.join(here, "..", "experiments", "cli.ts"));
+  const { experimentsMain } = await importBundled(
+    "ringside-experiments-cli",
+    "experimentsMain",
+    path.join(here, "..", "experiments", "cli.ts"),
+  );
   process.exitCode = await experimentsMain(argv.slice(1), process.stdout, process.stderr);
 } else {
   const { main } = await importBundled("ringside-cli", "main", path.join(here, "main.ts"));

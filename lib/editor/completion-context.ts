@@ -38,8 +38,7 @@ function enclosingOpen(source: string, pos: number): { char: string; at: number;
       else if (c === "⟨" || opensIdeal(source, i)) {
         if (stack.length === 0) return { char: "<", at: i, semicolon };
       }
-    }
-    else if (c === "(" || c === "[" || c === "{") {
+    } else if (c === "(" || c === "[" || c === "{") {
       if (stack.length === 0) return { char: c, at: i, semicolon };
       stack.pop();
     } else if (c === ";" && stack.length === 0) semicolon = true;

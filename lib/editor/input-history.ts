@@ -30,10 +30,7 @@ export function recallOlder(
 
 /// One step forward (newer); past the newest entry the draft returns. Null when the
 /// draft is already shown.
-export function recallNewer(
-  entries: readonly string[],
-  cursor: HistoryCursor,
-): { cursor: HistoryCursor; text: string } | null {
+export function recallNewer(entries: readonly string[], cursor: HistoryCursor): { cursor: HistoryCursor; text: string } | null {
   if (cursor.index === null) return null;
   if (cursor.index >= entries.length - 1) return { cursor: { index: null, draft: "" }, text: cursor.draft };
   const index = cursor.index + 1;

@@ -49,7 +49,11 @@ export function notesOf(v: ValueJsonLike): Note[] {
     const rational = str(v.rational);
     out.push(
       rational
-        ? { before: "Guessed rational function ", math: rational, after: `: it reproduces ${checked} computed term${checked === 1 ? "" : "s"} beyond those it was fitted to; a guess, not a proof.` }
+        ? {
+            before: "Guessed rational function ",
+            math: rational,
+            after: `: it reproduces ${checked} computed term${checked === 1 ? "" : "s"} beyond those it was fitted to; a guess, not a proof.`,
+          }
         : { before: `No rational function was found that fits the ${n} computed terms.` },
     );
   }

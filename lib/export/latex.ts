@@ -14,7 +14,8 @@ function cellTex(cell: TranscriptCell, n: number): string {
   if (cell.error) {
     parts.push(`\\noindent\\textbf{Error (${escapeTex(cell.error.kind ?? "error")}):} ${escapeTex(cell.error.message ?? "")}`);
   }
-  if (cell.status === "cancelled" || cell.status === "interrupted") parts.push("\\noindent\\emph{This cell was stopped before it finished.}");
+  if (cell.status === "cancelled" || cell.status === "interrupted")
+    parts.push("\\noindent\\emph{This cell was stopped before it finished.}");
   return parts.join("\n\n");
 }
 

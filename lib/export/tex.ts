@@ -93,7 +93,9 @@ export function recordEntries(v: ValueJsonLike): [string, ValueJsonLike][] {
   const keys = Object.keys(fields);
   const order = Array.isArray(v.fieldOrder) ? (v.fieldOrder as unknown[]) : null;
   const ordered =
-    order && order.length === keys.length && order.every((k) => typeof k === "string" && Object.hasOwn(fields, k)) ? (order as string[]) : keys;
+    order && order.length === keys.length && order.every((k) => typeof k === "string" && Object.hasOwn(fields, k))
+      ? (order as string[])
+      : keys;
   return ordered.map((k) => [k, fields[k]!]);
 }
 
@@ -109,7 +111,11 @@ const isValues = (x: unknown): x is ValueJsonLike[] => Array.isArray(x) && x.eve
 
 /// The Betti table grid: rows r = j − i from the smallest to the largest, columns
 /// i = 0 … max i; `null` where β_{i,i+r} is zero.
-export function bettiGrid(entries: [number, number, number][]): { rows: number[]; cols: number[]; cell: (r: number, i: number) => number | null } {
+export function bettiGrid(entries: [number, number, number][]): {
+  rows: number[];
+  cols: number[];
+  cell: (r: number, i: number) => number | null;
+} {
   if (entries.length === 0) return { rows: [], cols: [], cell: () => null };
   const byKey = new Map(entries.map(([i, j, b]) => [`${i},${j - i}`, b]));
   const rs = entries.map(([i, j]) => j - i);
@@ -120,7 +126,8 @@ export function bettiGrid(entries: [number, number, number][]): { rows: number[]
   return { rows, cols, cell: (r, i) => byKey.get(`${i},${r}`) ?? null };
 }
 
-export const TRUNCATED_BETTI = "Truncated: only the part of the resolution computed within the given bounds is shown; further Betti numbers may be nonzero.";
+export const TRUNCATED_BETTI =
+  "Truncated: only the part of the resolution computed within the given bounds is shown; further Betti numbers may be nonzero.";
 
 /// The totals row of a Betti table: β_i = Σ_j β_{i,j}, the rank of the i-th free module.
 export function bettiTotals(entries: [number, number, number][], cols: readonly number[]): number[] {
@@ -136,7 +143,9 @@ export function bettiTabular(entries: [number, number, number][], complete: bool
     "\\hline",
     ...rows.map((r) => `$${r}$ & ${cols.map((i) => (cell(r, i) === null ? "" : `$${cell(r, i)}$`)).join(" & ")} \\\\`),
     "\\hline",
-    `total & ${bettiTotals(entries, cols).map((b) => `$${b}$`).join(" & ")} \\\\`,
+    `total & ${bettiTotals(entries, cols)
+      .map((b) => `$${b}$`)
+      .join(" & ")} \\\\`,
     "\\end{tabular}",
   ];
   if (!complete) lines.push("", `\\emph{${TRUNCATED_BETTI}}`);
@@ -146,7 +155,9 @@ export function bettiTabular(entries: [number, number, number][], complete: bool
 /// One value as LaTeX (a paragraph's worth; display material where it helps).
 export function valueTex(v: ValueJsonLike): string {
   const notes = notesOf(v)
-    .map((n) => `\n\n\\emph{${escapeTex(n.before)}}${n.math ? `$${mathText(n.math)}$` : ""}${n.after ? `\\emph{${escapeTex(n.after)}}` : ""}`)
+    .map(
+      (n) => `\n\n\\emph{${escapeTex(n.before)}}${n.math ? `$${mathText(n.math)}$` : ""}${n.after ? `\\emph{${escapeTex(n.after)}}` : ""}`,
+    )
     .join("");
   return valueBodyTex(v) + notes;
 }
@@ -179,8 +190,7 @@ function valueBodyTex(v: ValueJsonLike): string {
     case "Complex": {
       const ranks = (v.ranks as number[] | undefined) ?? [];
       return (
-        `Free ranks $${ranks.join(",\\ ")}$.\n\n` +
-        bettiTabular(field(v, "betti", isEntries) ?? [], field(v, "complete", isBool) ?? true)
+        `Free ranks $${ranks.join(",\\ ")}$.\n\n` + bettiTabular(field(v, "betti", isEntries) ?? [], field(v, "complete", isBool) ?? true)
       );
     }
     case "HilbertSeries":
@@ -204,7 +214,10 @@ function valueBodyTex(v: ValueJsonLike): string {
         `\\begin{tabular}{${"l".repeat(Math.max(1, columns.length))}}`,
         `${columns.map((c) => `\\textbf{${escapeTex(c)}}`).join(" & ")} \\\\`,
         "\\hline",
-        ...rows.map((r) => `${r.map((x) => (x.type === "Str" || x.type === "Int" || x.type === "Rat" || x.type === "Poly" || x.type === "Bool" ? valueTex(x) : `\\texttt{${escapeTex(x.text)}}`)).join(" & ")} \\\\`),
+        ...rows.map(
+          (r) =>
+            `${r.map((x) => (x.type === "Str" || x.type === "Int" || x.type === "Rat" || x.type === "Poly" || x.type === "Bool" ? valueTex(x) : `\\texttt{${escapeTex(x.text)}}`)).join(" & ")} \\\\`,
+        ),
         "\\end{tabular}",
       ].join("\n");
     }

@@ -39,9 +39,7 @@ export function errorResponse(error: unknown): NextResponse {
 
 /// Wraps a route handler so that thrown HttpErrors (from requireUser, readJson, …) become
 /// JSON responses.
-export function route<C>(
-  handler: (req: Request, context: C) => Promise<Response>,
-): (req: Request, context: C) => Promise<Response> {
+export function route<C>(handler: (req: Request, context: C) => Promise<Response>): (req: Request, context: C) => Promise<Response> {
   return async (req, context) => {
     try {
       return await handler(req, context);

@@ -34,8 +34,6 @@ export function parseRawMessage(raw: string): { headers: Map<string, string>; bo
 }
 
 function decodeQuotedPrintable(text: string): string {
-  const bytes = text
-    .replace(/=\n/g, "")
-    .replace(/=([0-9A-F]{2})/gi, (_, hex: string) => String.fromCharCode(parseInt(hex, 16)));
+  const bytes = text.replace(/=\n/g, "").replace(/=([0-9A-F]{2})/gi, (_, hex: string) => String.fromCharCode(parseInt(hex, 16)));
   return Buffer.from(bytes, "latin1").toString("utf8");
 }

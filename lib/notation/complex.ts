@@ -69,9 +69,7 @@ export function gradedQuotientComplex(r: QuotientResolution, base: RingValue, le
   const complete = r.complete && r.columns[r.columns.length - 1].total === 0;
   const note = complete ? undefined : truncationNote(r, length, shift);
   const ranks = r.columns.map((col) => col.total);
-  const maps: MatrixValue[] | null = r.maps
-    ? r.maps.map((rows, i) => ({ type: "Matrix", ring: base, rows, cols: ranks[i + 1] }))
-    : null;
+  const maps: MatrixValue[] | null = r.maps ? r.maps.map((rows, i) => ({ type: "Matrix", ring: base, rows, cols: ranks[i + 1] })) : null;
   return {
     type: "Complex",
     ring: base,
@@ -91,6 +89,16 @@ export function localComplex(r: LocalResolution, overGivenRing: boolean, base: R
   const note = r.complete ? LOCAL_NOTE : `only homological degrees ≤ ${length} were computed; the resolution goes on; ${LOCAL_NOTE}`;
   const entries: BettiEntry[] = r.ranks.flatMap((b, i) => (b > 0 ? [[i, 0, b] as const] : []));
   // the maps live over the local ring; they are maps over A itself only when A is that ring
-  const maps: MatrixValue[] | null = overGivenRing ? r.maps.map((rows, i) => ({ type: "Matrix", ring: base, rows, cols: r.ranks[i + 1] })) : null;
-  return { type: "Complex", ring: base, ranks: r.ranks, betti: { type: "BettiTable", entries, complete: r.complete, note }, complete: r.complete, maps, note };
+  const maps: MatrixValue[] | null = overGivenRing
+    ? r.maps.map((rows, i) => ({ type: "Matrix", ring: base, rows, cols: r.ranks[i + 1] }))
+    : null;
+  return {
+    type: "Complex",
+    ring: base,
+    ranks: r.ranks,
+    betti: { type: "BettiTable", entries, complete: r.complete, note },
+    complete: r.complete,
+    maps,
+    note,
+  };
 }

@@ -32,7 +32,10 @@ export function asEvalError(e: unknown, span: Span): EvalError {
   if (e instanceof RangeError && /call stack/i.test(e.message)) return limit("the computation nested too deeply", span);
   // anything else is a defect of the evaluator or the engine, said so rather than blamed on the input
   const detail = inUsersWords(e instanceof Error ? e.message : String(e));
-  return runtime(`Ringside could not finish this (a defect of Ringside, not of your input: ${detail}); please report it with this cell`, span);
+  return runtime(
+    `Ringside could not finish this (a defect of Ringside, not of your input: ${detail}); please report it with this cell`,
+    span,
+  );
 }
 
 /// The engine names the function that raised an error ("resolveQuotient: …", see

@@ -192,10 +192,17 @@ function indexArg(v: Value, span: Span, what: string): number {
 }
 
 /// Two modules over one polynomial ring, as S-presentations.
-function pair(a: Value, b: Value, c: CallContext, spans: readonly Span[], what: string): { ring: RingValue; M: Presentation; N: Presentation } {
+function pair(
+  a: Value,
+  b: Value,
+  c: CallContext,
+  spans: readonly Span[],
+  what: string,
+): { ring: RingValue; M: Presentation; N: Presentation } {
   const M = asModule(a, c, spans[0]);
   const N = asModule(b, c, spans[1]);
-  if (M.ring !== N.ring) throw runtime(`${what} needs two modules over one ring, got modules over ${ringText(M.ring)} and ${ringText(N.ring)}`, c.span);
+  if (M.ring !== N.ring)
+    throw runtime(`${what} needs two modules over one ring, got modules over ${ringText(M.ring)} and ${ringText(N.ring)}`, c.span);
   overPolynomialRing(M, what, c.span);
   const P = (X: ModuleValue): Presentation => ({ rows: X.presentation.rows.map((r) => [...r]), rowDegrees: X.degrees });
   return { ring: M.ring, M: P(M), N: P(N) };
@@ -224,7 +231,11 @@ function koszulValue(ring: RingValue, fs: readonly Poly[], c: CallContext): Comp
   const K = koszulComplex(ring.poly, fs);
   const entries0 = K.ranks.slice(1).reduce((s, r, k) => s + r * K.ranks[k], 0);
   if (entries0 > MAX_KOSZUL_ENTRIES) {
-    throw limit(`the Koszul complex on ${fs.length} elements has ${entries0} matrix entries, beyond the limit ${MAX_KOSZUL_ENTRIES}`, c.span, "koszulEntries");
+    throw limit(
+      `the Koszul complex on ${fs.length} elements has ${entries0} matrix entries, beyond the limit ${MAX_KOSZUL_ENTRIES}`,
+      c.span,
+      "koszulEntries",
+    );
   }
   const maps = Array.from({ length: K.length }, (_, k) => {
     checkpoint(opts(c), { stage: "Koszul complex", detail: `differential ${k + 1}` });
@@ -251,11 +262,19 @@ export const HOMOLOGY_FUNCTIONS: Record<string, FunctionImpl> = {
     const { P, shift } = shiftedOverS(M, c.span);
     const C = resolveCoker(M.ring.poly, P.rows, P.rowDegrees, { ...opts(c), length: k + 1 });
     const Z = syzygyPresentation(C, k);
-    return moduleValue(M.ring, Z.rows, Z.rowDegrees.map((d) => d - shift));
+    return moduleValue(
+      M.ring,
+      Z.rows,
+      Z.rowDegrees.map((d) => d - shift),
+    );
   },
   "koszul(Ring)": ([R], c) => {
     const r = R as RingValue;
-    return koszulValue(r, r.poly.vars.map((_, i) => reduceIn(r, variable(r.poly, i), opts(c))), c);
+    return koszulValue(
+      r,
+      r.poly.vars.map((_, i) => reduceIn(r, variable(r.poly, i), opts(c))),
+      c,
+    );
   },
   "koszul(Ideal)": ([I], c) => {
     const J = I as IdealValue;

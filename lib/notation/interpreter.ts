@@ -1,16 +1,7 @@
 /// Evaluation of expressions: walks the checked AST, resolving names the way the checker
 /// did (lambda parameters and comprehension variables, then variables of the ring
 /// literals are read in, then session bindings, then predefined names).
-import type {
-  Call,
-  Comprehension,
-  Expr,
-  ForClause,
-  Identifier,
-  Lambda,
-  Span,
-  Subscript,
-} from "../../grammar/ast";
+import type { Call, Comprehension, Expr, ForClause, Identifier, Lambda, Span, Subscript } from "../../grammar/ast";
 import type { NameResolution, RingLiteralInfo } from "../../grammar/analysis";
 import { QQ, variable } from "../algebra/index";
 import { EvalError, asEvalError, limit, runtime } from "./errors";
@@ -223,7 +214,8 @@ export class Interpreter implements Evaluator {
         if (args.length !== params.length) {
           throw runtime(`the function ${text} takes ${params.length} argument(s), got ${args.length}`, e.span);
         }
-        if (depth > this.session.limits.maxCallDepth) throw limit(`calls nested deeper than ${this.session.limits.maxCallDepth}`, e.span, "callDepth");
+        if (depth > this.session.limits.maxCallDepth)
+          throw limit(`calls nested deeper than ${this.session.limits.maxCallDepth}`, e.span, "callDepth");
         const scope = Scope.EMPTY.with(captures).with(params.map((p, i) => [p, args[i]] as [string, Value]));
         return this.eval(e.body, { scope, ring, depth: depth + 1, source });
       },
@@ -240,7 +232,14 @@ export class Interpreter implements Evaluator {
     if (callee.kind === "Property") {
       const obj = this.eval(callee.object, f);
       if (!(obj.type === "Record" && obj.fields.has(callee.name.name))) {
-        return callMethod(this, obj, callee.name.name, e.args.map((a) => this.eval(a, f)), e, f);
+        return callMethod(
+          this,
+          obj,
+          callee.name.name,
+          e.args.map((a) => this.eval(a, f)),
+          e,
+          f,
+        );
       }
     }
     if (callee.kind === "Identifier") {
@@ -248,11 +247,23 @@ export class Interpreter implements Evaluator {
       const shadowed = f.scope.lookup(callee.name) ?? (how?.kind === "function" ? undefined : this.session.globals.get(callee.name));
       if ((how?.kind === "function" || !shadowed) && functionExists(callee.name)) {
         const named = new Map(e.named.map((n) => [n.name.name, this.eval(n.value, f)]));
-        return callFunction(this, callee.name, e.args.map((a) => this.eval(a, f)), named, e, f);
+        return callFunction(
+          this,
+          callee.name,
+          e.args.map((a) => this.eval(a, f)),
+          named,
+          e,
+          f,
+        );
       }
     }
     const fn = this.eval(callee, f);
-    return this.applyFunction(fn, e.args.map((a) => this.eval(a, f)), e.span, f);
+    return this.applyFunction(
+      fn,
+      e.args.map((a) => this.eval(a, f)),
+      e.span,
+      f,
+    );
   }
 
   private subscript(e: Subscript, f: Frame): Value {
@@ -260,7 +271,8 @@ export class Interpreter implements Evaluator {
     if (obj.type === "Field") {
       const info = (this.session.analysis?.subscripts.get(e) as RingLiteralInfo | undefined) ?? ringLiteralFromAst(e);
       const degrees = info.degrees ? [...info.degrees] : undefined;
-      const order = info.order.kind === "weights" ? { kind: "weights" as const, weights: [...info.order.weights] } : { kind: info.order.kind };
+      const order =
+        info.order.kind === "weights" ? { kind: "weights" as const, weights: [...info.order.weights] } : { kind: info.order.kind };
       if (info.vars.length === 0) throw runtime("a polynomial ring needs at least one variable", e.span);
       return this.session.rings.polynomialRing(obj.field, info.vars, { order, ...(degrees ? { degrees } : {}) });
     }
@@ -269,7 +281,10 @@ export class Interpreter implements Evaluator {
     if (obj.type === "Family") return familyIndex(obj, this.int(this.eval(e.items[0], f), e.items[0].span), e.items[0].span);
     const i = this.int(this.eval(e.items[0], f), e.items[0].span);
     if (i < 0n || i >= BigInt(obj.items.length)) {
-      throw runtime(`index ${i} is out of range: the list has ${obj.items.length} item(s), indices 0…${obj.items.length - 1}`, e.items[0].span);
+      throw runtime(
+        `index ${i} is out of range: the list has ${obj.items.length} item(s), indices 0…${obj.items.length - 1}`,
+        e.items[0].span,
+      );
     }
     return obj.items[Number(i)];
   }
@@ -278,4 +293,3 @@ export class Interpreter implements Evaluator {
     return valuesEqual(this, a, b, span);
   }
 }
-

@@ -8,15 +8,7 @@ import { parseDenominator } from "./series-text";
 import { parseRat, ratToString } from "../algebra/index";
 import { RingRegistry, parseField, parseOrder } from "./rings";
 import { familyDefinition, fieldText, orderText, ringText, valueText } from "./text";
-import type {
-  BettiTableValue,
-  FunctionValue,
-  IdealValue,
-  MatrixValue,
-  ModuleValue,
-  RingValue,
-  Value,
-} from "./values";
+import type { BettiTableValue, FunctionValue, IdealValue, MatrixValue, ModuleValue, RingValue, Value } from "./values";
 
 // The schemas and types of the encoding are the wire contract (lib/wire/values.ts);
 // re-exported here so the evaluator's callers keep one import.
@@ -109,13 +101,20 @@ export function encodeValue(v: Value): ValueJson {
         coefficients: v.coefficients.map(String),
         rational: v.rational,
         ...(v.rational !== null ? { guessed: true as const } : {}),
-        ...(v.guess ? { numerator: v.guess.numerator.map(String), denominator: v.guess.denominator.map(String), checked: v.guess.checked } : {}),
+        ...(v.guess
+          ? { numerator: v.guess.numerator.map(String), denominator: v.guess.denominator.map(String), checked: v.guess.checked }
+          : {}),
         ...(v.exact !== undefined ? { exact: v.exact } : {}),
       };
     case "List":
       return { type: "List", text: t, items: v.items.map(encodeValue) };
     case "Record":
-      return { type: "Record", text: t, fields: Object.fromEntries([...v.fields].map(([k, x]) => [k, encodeValue(x)])), fieldOrder: [...v.fields.keys()] };
+      return {
+        type: "Record",
+        text: t,
+        fields: Object.fromEntries([...v.fields].map(([k, x]) => [k, encodeValue(x)])),
+        fieldOrder: [...v.fields.keys()],
+      };
     case "Table":
       return { type: "Table", text: t, columns: [...v.columns], rows: v.rows.map((row) => row.map(encodeValue)) };
     case "Function":
@@ -168,8 +167,14 @@ export function decodeRing(j: RingJson, ctx: DecodeContext): RingValue {
   const field = parseField(j.field) ?? fail("Ring", `unknown field ${j.field}`);
   const order = parseOrder(j.order) ?? fail("Ring", `unknown monomial order ${j.order}`);
   const global = ctx.rings.polynomialRing(field, j.vars, { order, degrees: j.degrees });
-  if (j.local && j.local.at.length !== j.vars.length) fail("Ring", `the point of a local ring needs ${j.vars.length} coordinates, got ${j.local.at.length}`);
-  const base = j.local ? ctx.rings.localize(global, j.local.at.map((a) => parseRat(a) ?? fail("Ring", `bad coordinate ${a}`))) : global;
+  if (j.local && j.local.at.length !== j.vars.length)
+    fail("Ring", `the point of a local ring needs ${j.vars.length} coordinates, got ${j.local.at.length}`);
+  const base = j.local
+    ? ctx.rings.localize(
+        global,
+        j.local.at.map((a) => parseRat(a) ?? fail("Ring", `bad coordinate ${a}`)),
+      )
+    : global;
   if (j.ideal.length === 0) return base;
   const gens = j.ideal.map((g) => readPoly(base, g, "Ring ideal"));
   const over = j.over ?? 0;
@@ -252,7 +257,10 @@ function decodeValidated(j: ValueJson, ctx: DecodeContext): Value {
       const denominator = parseDenominator(j.denominator) ?? fail("HilbertSeries", `bad denominator ${j.denominator}`);
       return {
         type: "HilbertSeries",
-        series: hilbertSeriesFromNumerator(j.numerator.map((c) => BigInt(c)), denominator),
+        series: hilbertSeriesFromNumerator(
+          j.numerator.map((c) => BigInt(c)),
+          denominator,
+        ),
         ...(j.lowest !== undefined ? { shift: -j.lowest } : {}),
         ...(j.note !== undefined ? { note: j.note } : {}),
       };
@@ -263,7 +271,9 @@ function decodeValidated(j: ValueJson, ctx: DecodeContext): Value {
         coefficients: j.coefficients.map((c) => BigInt(c)),
         rational: j.rational,
         ...(j.numerator && j.denominator && j.checked !== undefined
-          ? { guess: { numerator: j.numerator.map((c) => BigInt(c)), denominator: j.denominator.map((c) => BigInt(c)), checked: j.checked } }
+          ? {
+              guess: { numerator: j.numerator.map((c) => BigInt(c)), denominator: j.denominator.map((c) => BigInt(c)), checked: j.checked },
+            }
           : {}),
         ...(j.exact !== undefined ? { exact: j.exact } : {}),
       };
@@ -283,7 +293,8 @@ function decodeValidated(j: ValueJson, ctx: DecodeContext): Value {
       if (j.length !== undefined && j.length !== j.members.length) fail("Family", `length ${j.length} but ${j.members.length} members`);
       const members = j.members.map((m) => {
         const v = decodeValidated(m, ctx);
-        if (v.type !== "Ideal" && v.type !== "Ring" && v.type !== "Module") fail("Family", `a member must be a Ring, Ideal or Module, got ${v.type}`);
+        if (v.type !== "Ideal" && v.type !== "Ring" && v.type !== "Module")
+          fail("Family", `a member must be a Ring, Ideal or Module, got ${v.type}`);
         return v;
       });
       return {

@@ -105,8 +105,7 @@ function lengthOf(t: LocalTarget, c: CallContext, what: string): number {
   throw runtime(`over a local quotient ring a ${what} is usually infinite: give a bound, e.g. ${what}(M, length = 6)`, c.span);
 }
 
-const pointText = (at: Point) =>
-  originOf(at) ? "the origin" : `(${at.map((a) => (a.d === 1n ? `${a.n}` : `${a.n}/${a.d}`)).join(", ")})`;
+const pointText = (at: Point) => (originOf(at) ? "the origin" : `(${at.map((a) => (a.d === 1n ? `${a.n}` : `${a.n}/${a.d}`)).join(", ")})`);
 
 function complexValue(t: LocalTarget, F: LocalFreeResolution, length: number): ComplexValue {
   const where = `over the local ring at ${pointText(t.at)}, ungraded: the Betti table lists β_i under internal degree 0; the maps are determined up to units of the local ring`;

@@ -4,7 +4,20 @@
 /// quotient R = S/J the computations work over S with the presentation [A | J·1] (the relations
 /// of R added on every generator), which gives the same module.
 import type { Span } from "../../grammar/ast";
-import { columnDegrees, degree, isHomogeneous, isZero, kernelColumns, minimalPresentation, moduleKernel, one, variable, zero, type ComputeOptions, type Poly } from "../algebra/index";
+import {
+  columnDegrees,
+  degree,
+  isHomogeneous,
+  isZero,
+  kernelColumns,
+  minimalPresentation,
+  moduleKernel,
+  one,
+  variable,
+  zero,
+  type ComputeOptions,
+  type Poly,
+} from "../algebra/index";
 import type { CallContext } from "./context";
 import { reduceIn } from "./coerce";
 import { limit, runtime } from "./errors";
@@ -25,7 +38,11 @@ export function moduleValue(ring: RingValue, rows: readonly (readonly Poly[])[],
 }
 
 export function freeModuleValue(ring: RingValue, degrees: readonly number[]): ModuleValue {
-  return moduleValue(ring, degrees.map(() => []), degrees);
+  return moduleValue(
+    ring,
+    degrees.map(() => []),
+    degrees,
+  );
 }
 
 /// The ring a quotient ring A / I is a module over (A), and the generators of I in it.
@@ -103,7 +120,10 @@ function givenRowDegrees(A: MatrixValue, v: Value, c: CallContext): number[] {
   const span = c.span;
   if (v.type !== "List" || v.items.some((x) => x.type !== "Int")) throw runtime("degrees must be a List of Int, one per row", span);
   if (v.items.length !== A.rows.length) {
-    throw runtime(`degrees gives ${v.items.length} degree${v.items.length === 1 ? "" : "s"}, but the matrix has ${A.rows.length} row${A.rows.length === 1 ? "" : "s"}`, span);
+    throw runtime(
+      `degrees gives ${v.items.length} degree${v.items.length === 1 ? "" : "s"}, but the matrix has ${A.rows.length} row${A.rows.length === 1 ? "" : "s"}`,
+      span,
+    );
   }
   const degrees = v.items.map((x) => {
     const d = (x as { value: bigint }).value;
@@ -120,7 +140,10 @@ function givenRowDegrees(A: MatrixValue, v: Value, c: CallContext): number[] {
       const d = degree(R, f) + degrees[a];
       if (col === null) col = d;
       else if (col !== d) {
-        throw runtime(`with these degrees column ${q + 1} is not homogeneous: its entries have degrees ${col} and ${d} once the row degrees are added`, span);
+        throw runtime(
+          `with these degrees column ${q + 1} is not homogeneous: its entries have degrees ${col} and ${d} once the row degrees are added`,
+          span,
+        );
       }
     });
   }
@@ -239,7 +262,12 @@ export const MODULE_FUNCTIONS: Record<string, (args: readonly Value[], c: CallCo
     const M = matrixArg(A, c.argSpans[0]);
     const given = c.named.get("degrees");
     // a local ring has no grading: every generator in degree 0 (issue 16)
-    if (M.ring.local && given === undefined) return moduleValue(M.ring, M.rows, M.rows.map(() => 0));
+    if (M.ring.local && given === undefined)
+      return moduleValue(
+        M.ring,
+        M.rows,
+        M.rows.map(() => 0),
+      );
     if (given === undefined) return moduleValue(M.ring, M.rows, rowGrading(M, c.argSpans[0]));
     return moduleValue(M.ring, M.rows, givenRowDegrees(M, given, c));
   },

@@ -113,7 +113,10 @@ function intPower(base: bigint, r: Value, c: OpContext): Value {
   return Int(base ** k);
 }
 
-const compare = (test: (d: number) => boolean): BinaryImpl => (l, r) => Bool(test(ratCompare(rat(l), rat(r))));
+const compare =
+  (test: (d: number) => boolean): BinaryImpl =>
+  (l, r) =>
+    Bool(test(ratCompare(rat(l), rat(r))));
 
 const BINARY: Record<string, BinaryImpl> = {
   "Int + Int": (l, r) => Int(intOf(l) + intOf(r)),
@@ -141,7 +144,11 @@ const BINARY: Record<string, BinaryImpl> = {
   "Poly * Ideal": (l, r, c) => {
     const I = ideal(r, c.rightSpan);
     const f = toPoly(l, I.ring, c.leftSpan, c.interp.session.compute);
-    return idealValue(I.ring, I.gens.map((g) => mul(I.ring.poly, f, g, c.interp.session.compute)), c.interp.session.compute);
+    return idealValue(
+      I.ring,
+      I.gens.map((g) => mul(I.ring.poly, f, g, c.interp.session.compute)),
+      c.interp.session.compute,
+    );
   },
   "Ideal * Poly": (l, r, c) => BINARY["Poly * Ideal"](r, l, { ...c, leftSpan: c.rightSpan, rightSpan: c.leftSpan }),
   "Matrix * Matrix": (l, r, c) => matrixProduct(matrix(l, c.leftSpan), matrix(r, c.rightSpan), c),
@@ -149,7 +156,12 @@ const BINARY: Record<string, BinaryImpl> = {
     const A = matrix(r, c.rightSpan);
     const opts = c.interp.session.compute;
     const f = toPoly(l, A.ring, c.leftSpan, opts);
-    return { type: "Matrix", ring: A.ring, rows: A.rows.map((row) => row.map((g) => reduceIn(A.ring, mul(A.ring.poly, f, g, opts), opts))), cols: A.cols };
+    return {
+      type: "Matrix",
+      ring: A.ring,
+      rows: A.rows.map((row) => row.map((g) => reduceIn(A.ring, mul(A.ring.poly, f, g, opts), opts))),
+      cols: A.cols,
+    };
   },
   "Matrix * Poly": (l, r, c) => BINARY["Poly * Matrix"](r, l, { ...c, leftSpan: c.rightSpan, rightSpan: c.leftSpan }),
   "Int / Int": (l, r, c) => {
@@ -177,7 +189,10 @@ const BINARY: Record<string, BinaryImpl> = {
       throw runtime(`this is an ideal of ${ringText(I.ring)}, not of ${ringText(l)}`, c.rightSpan);
     }
     const rings = c.interp.session.rings;
-    return rings.quotient(l, I.gens.map((g) => reduceIn(l, g, c.interp.session.compute)).filter((g) => !isZero(g)));
+    return rings.quotient(
+      l,
+      I.gens.map((g) => reduceIn(l, g, c.interp.session.compute)).filter((g) => !isZero(g)),
+    );
   },
   "Int ^ Int": (l, r, c) => intPower(intOf(l), r, c),
   "Rat ^ Int": (l, r, c) => {
@@ -194,7 +209,11 @@ const BINARY: Record<string, BinaryImpl> = {
     return polyResult(ring, ring.ideal.length === 0 ? pow(ring.poly, f, k, opts) : powerModulo(ring, f, k, c), c);
   },
   "Ideal ^ Int": (l, r, c) =>
-    idealPowerOf(ideal(l, c.leftSpan), exponent(r, c, c.interp.session.limits.maxIdealPower, "the power of an ideal", "idealPower"), c.interp.session.compute),
+    idealPowerOf(
+      ideal(l, c.leftSpan),
+      exponent(r, c, c.interp.session.limits.maxIdealPower, "the power of an ideal", "idealPower"),
+      c.interp.session.compute,
+    ),
   "Ideal & Ideal": (l, r, c) => intersectionOf(ideal(l, c.leftSpan), ideal(r, c.rightSpan), c.span, c.interp.session.compute),
   "Ideal : Ideal": (l, r, c) => colonOf(ideal(l, c.leftSpan), ideal(r, c.rightSpan), c.span, c.interp.session.compute),
   "Ideal : Poly": (l, r, c) => {
@@ -300,7 +319,9 @@ export function valuesEqual(interp: Evaluator, a: Value, b: Value, span: Span): 
     case "Str":
       return a.value === (b as typeof a).value;
     case "Field":
-      return a.field.kind === (b as typeof a).field.kind && (a.field.kind === "Q" || a.field.p === ((b as typeof a).field as { p: number }).p);
+      return (
+        a.field.kind === (b as typeof a).field.kind && (a.field.kind === "Q" || a.field.p === ((b as typeof a).field as { p: number }).p)
+      );
     case "Ring":
       return a === b;
     case "Ideal":
@@ -311,7 +332,10 @@ export function valuesEqual(interp: Evaluator, a: Value, b: Value, span: Span): 
     }
     case "Record": {
       const br = b as typeof a;
-      return a.fields.size === br.fields.size && [...a.fields].every(([k, x]) => br.fields.has(k) && valuesEqual(interp, x, br.fields.get(k)!, span));
+      return (
+        a.fields.size === br.fields.size &&
+        [...a.fields].every(([k, x]) => br.fields.has(k) && valuesEqual(interp, x, br.fields.get(k)!, span))
+      );
     }
     case "None":
       return true;
@@ -322,18 +346,26 @@ export function valuesEqual(interp: Evaluator, a: Value, b: Value, span: Span): 
     }
     case "BettiTable": {
       const bb = b as typeof a;
-      return a.complete === bb.complete && a.entries.length === bb.entries.length && a.entries.every((e, k) => e.every((x, i) => x === bb.entries[k][i]));
+      return (
+        a.complete === bb.complete &&
+        a.entries.length === bb.entries.length &&
+        a.entries.every((e, k) => e.every((x, i) => x === bb.entries[k][i]))
+      );
     }
     case "HilbertSeries": {
       // the same grading and numerator over the same full denominator
-      const x = a.series, y = (b as typeof a).series;
-      return x.weights.join(",") === y.weights.join(",") && x.numerator.join(",") === y.numerator.join(",") && (a.shift ?? 0) === ((b as typeof a).shift ?? 0);
+      const x = a.series,
+        y = (b as typeof a).series;
+      return (
+        x.weights.join(",") === y.weights.join(",") &&
+        x.numerator.join(",") === y.numerator.join(",") &&
+        (a.shift ?? 0) === ((b as typeof a).shift ?? 0)
+      );
     }
     default:
       return a === b;
   }
 }
-
 
 /// a + b by the `+` rows, for `sum`.
 export function addValues(interp: Evaluator, a: Value, b: Value, span: Span, frame: Frame): Value {

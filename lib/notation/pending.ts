@@ -11,9 +11,5 @@ const PART_CONTENTS: Record<EnginePart, string> = {
 };
 
 export function pendingError(what: string, part: EnginePart, span: Span): EvalError {
-  return new EvalError(
-    "runtime",
-    `${what} is provided by engine part ${part} (${PART_CONTENTS[part]}), which is not available yet`,
-    span,
-  );
+  return new EvalError("runtime", `${what} is provided by engine part ${part} (${PART_CONTENTS[part]}), which is not available yet`, span);
 }

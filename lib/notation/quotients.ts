@@ -40,7 +40,16 @@ import { moduleValue, presentationOverS } from "./modules";
 import { ascendingText } from "./series-text";
 import { entriesOf, firstInexact } from "./complex";
 import { requireCyclicAtOrigin, resolutionTarget } from "./resolution-input";
-import { list, type ComplexValue, type IdealValue, type MatrixValue, type ModuleValue, type RingValue, type SeriesValue, type Value } from "./values";
+import {
+  list,
+  type ComplexValue,
+  type IdealValue,
+  type MatrixValue,
+  type ModuleValue,
+  type RingValue,
+  type SeriesValue,
+  type Value,
+} from "./values";
 
 const Int = (value: number | bigint): Value => ({ type: "Int", value: BigInt(value) });
 const Bool = (value: boolean): Value => ({ type: "Bool", value });
@@ -67,7 +76,6 @@ function requireGraded(M: CyclicModule, what: string, span: Span, c: CallContext
     );
   }
 }
-
 
 /// What to resolve over A = S/J: R/I given by I, or a presented module (generators moved
 /// up by `shift` into degrees ≥ 0; the Betti numbers are moved back).
@@ -101,7 +109,14 @@ function targetOfModule(M: ModuleValue, span: Span, what: string, c: CallContext
   return { base: M.ring, J, presentation, shift };
 }
 
-function degreewise(t: Target, length: number, degree: number | undefined, c: CallContext, stream: boolean, keepMaps?: number): QuotientResolution {
+function degreewise(
+  t: Target,
+  length: number,
+  degree: number | undefined,
+  c: CallContext,
+  stream: boolean,
+  keepMaps?: number,
+): QuotientResolution {
   const partial = stream ? c.interp.session.partial : undefined;
   return resolveDegreewise({
     ring: t.J,
@@ -113,7 +128,8 @@ function degreewise(t: Target, length: number, degree: number | undefined, c: Ca
       ...opts(c),
       // each finished column streams as a one-column, still-incomplete Betti table
       partial: partial
-        ? (col) => partial({ type: "BettiTable", entries: entriesOf([col], t.shift), complete: false, note: "the resolution is still running" })
+        ? (col) =>
+            partial({ type: "BettiTable", entries: entriesOf([col], t.shift), complete: false, note: "the resolution is still running" })
         : undefined,
     },
   });
@@ -164,7 +180,10 @@ export function syzygyOverQuotient(m: RingValue | ModuleValue, p: number, c: Cal
   const r = degreewise(t, p + 1, undefined, c, false, Number.MAX_SAFE_INTEGER);
   const k = firstInexact(r);
   if (k !== null && k <= p + 1) {
-    throw runtime(`syzygy: no degree bound is known that makes F_${k} of this resolution exact (the module has infinite length over a ring that is not Artinian)`, span);
+    throw runtime(
+      `syzygy: no degree bound is known that makes F_${k} of this resolution exact (the module has infinite length over a ring that is not Artinian)`,
+      span,
+    );
   }
   const degrees = (r.columns[p]?.entries ?? []).flatMap((e) => Array.from({ length: e.count }, () => e.degree - t.shift));
   const rows = r.maps && r.maps[p] ? r.maps[p] : degrees.map(() => []);
@@ -177,7 +196,11 @@ export function presentationOverQuotient(M: ModuleValue, c: CallContext): Matrix
   const t = targetOfModule(M, c.span, "a minimal presentation", c);
   const r = degreewise(t, 1, undefined, c, false, Number.MAX_SAFE_INTEGER);
   const k = firstInexact(r);
-  if (k !== null) throw runtime("a minimal presentation: no degree bound is known that makes the relations exact (the module has infinite length over a ring that is not Artinian)", c.span);
+  if (k !== null)
+    throw runtime(
+      "a minimal presentation: no degree bound is known that makes the relations exact (the module has infinite length over a ring that is not Artinian)",
+      c.span,
+    );
   const rows = r.maps![0];
   return { type: "Matrix", ring: M.ring, rows, cols: r.columns[1].total };
 }
@@ -194,10 +217,16 @@ export function pdOverQuotient(M: ModuleValue, depthM: number, c: CallContext): 
   const k = firstInexact(r);
   // a lower bound above 0 is enough to see F_{d+1} ≠ 0
   if (k !== null && k <= d + 1 && r.columns[d + 1].total === 0) {
-    throw runtime(`pd: cannot decide: no degree bound is known that makes F_${k} exact for this module (infinite length over a ring that is not Artinian), and the degrees computed show F_${d + 1} = 0`, c.span);
+    throw runtime(
+      `pd: cannot decide: no degree bound is known that makes F_${k} exact for this module (infinite length over a ring that is not Artinian), and the degrees computed show F_${d + 1} = 0`,
+      c.span,
+    );
   }
   if (r.columns[d + 1].total > 0) {
-    throw runtime(`the projective dimension over this quotient ring is infinite: F_${d + 1} ≠ 0, while a finite one would be depth R − depth M = ${d} (Auslander–Buchsbaum)`, c.span);
+    throw runtime(
+      `the projective dimension over this quotient ring is infinite: F_${d + 1} ≠ 0, while a finite one would be depth R − depth M = ${d} (Auslander–Buchsbaum)`,
+      c.span,
+    );
   }
   let pd = d;
   while (pd > 0 && r.columns[pd].total === 0) pd--;
@@ -221,12 +250,22 @@ export function poincareValue([M]: readonly Value[], c: CallContext): Value {
     // degree by degree, each finished column streams as a one-column, still-incomplete Betti table
     partial:
       partial && t.method === "graded-quotient"
-        ? (col) => partial({ type: "BettiTable", entries: col.entries.map(([j, b]) => [col.index, j - t.shift, b] as const), complete: false, note: "the resolution is still running" })
+        ? (col) =>
+            partial({
+              type: "BettiTable",
+              entries: col.entries.map(([j, b]) => [col.index, j - t.shift, b] as const),
+              complete: false,
+              note: "the resolution is still running",
+            })
         : undefined,
     opts: opts(c),
   });
   // over a polynomial ring the resolution is finite (part 2), every term exact
-  if (r.method === "schreyer") return seriesValue(Array.from({ length: terms }, (_, i) => BigInt(r.resolution.ranks[i] ?? 0)), terms);
+  if (r.method === "schreyer")
+    return seriesValue(
+      Array.from({ length: terms }, (_, i) => BigInt(r.resolution.ranks[i] ?? 0)),
+      terms,
+    );
   if (r.method === "artinian") return seriesValue(r.resolution.ranks.map(BigInt), terms);
   const totals = Array.from({ length: terms }, (_, i) => BigInt(r.resolution.columns[i]?.total ?? 0));
   return seriesValue(totals, firstInexact(r.resolution) ?? terms);
@@ -238,7 +277,11 @@ export function poincareValue([M]: readonly Value[], c: CallContext): Value {
 export function seriesValue(coeffs: readonly bigint[], exact: number): SeriesValue {
   const g = guessRational(truncatedSeries(coeffs.slice(0, exact)), 0);
   const wrap = (c: readonly bigint[]) => (c.filter((x) => x !== 0n).length > 1 ? `(${ascendingText(c)})` : ascendingText(c));
-  const rational = g ? (g.denominator.length === 1 && g.denominator[0] === 1n ? ascendingText(g.numerator) : `${wrap(g.numerator)}/${wrap(g.denominator)}`) : null;
+  const rational = g
+    ? g.denominator.length === 1 && g.denominator[0] === 1n
+      ? ascendingText(g.numerator)
+      : `${wrap(g.numerator)}/${wrap(g.denominator)}`
+    : null;
   return {
     type: "Series",
     coefficients: coeffs,
@@ -264,7 +307,11 @@ function series(v: Value): SeriesValue {
 
 /// The ideal of R generated by its variables.
 function maximalOf(r: RingValue, c: CallContext): IdealValue {
-  return idealValue(r, r.poly.vars.map((_, i) => variable(r.poly, i)), opts(c));
+  return idealValue(
+    r,
+    r.poly.vars.map((_, i) => variable(r.poly, i)),
+    opts(c),
+  );
 }
 
 /// The Burch index of R = S/J (engine: depth 0 by the definition, positive depth after
@@ -293,8 +340,25 @@ function splitsResidue(m: RingValue, c: CallContext): boolean {
   if (local) return localSocle(local, c).splits;
   const M = cyclicModule(m, c);
   const S = m.poly;
-  const mS = engineIdeal(S, S.vars.map((_, i) => variable(S, i)));
-  if (idealIsSubset(engineIdeal(S, [monomial(S, S.vars.map(() => 0), 1n, 1n)]), M.I, opts(c))) return false; // the zero module
+  const mS = engineIdeal(
+    S,
+    S.vars.map((_, i) => variable(S, i)),
+  );
+  if (
+    idealIsSubset(
+      engineIdeal(S, [
+        monomial(
+          S,
+          S.vars.map(() => 0),
+          1n,
+          1n,
+        ),
+      ]),
+      M.I,
+      opts(c),
+    )
+  )
+    return false; // the zero module
   const socle = idealColon(M.I, mS, opts(c));
   return !idealIsSubset(socle, idealSum(mS, M.I), opts(c));
 }
@@ -302,7 +366,10 @@ function splitsResidue(m: RingValue, c: CallContext): boolean {
 /// A key under which equal values compare equal: ideals by their reduced Gröbner basis
 /// (so I_k(φ_i) that agree as ideals count as equal), everything else by its encoding.
 function valueKey(v: Value, c: CallContext): string {
-  if (v.type === "Ideal") return `Ideal:${groebnerOf(v, opts(c)).map((f) => formatPoly(v.ring.poly, f)).join(",")}`;
+  if (v.type === "Ideal")
+    return `Ideal:${groebnerOf(v, opts(c))
+      .map((f) => formatPoly(v.ring.poly, f))
+      .join(",")}`;
   if (v.type === "List") return `[${v.items.map((x) => valueKey(x, c)).join(";")}]`;
   return JSON.stringify(encodeValue(v));
 }
@@ -328,7 +395,13 @@ export const QUOTIENT_FUNCTIONS: Record<string, (args: readonly Value[], c: Call
     });
     const p = eventualPeriod(keys);
     const none: Value = { type: "None" };
-    return { type: "Record", fields: new Map([["start", p ? Int(p.start) : none], ["period", p ? Int(p.period) : none]]) };
+    return {
+      type: "Record",
+      fields: new Map([
+        ["start", p ? Int(p.start) : none],
+        ["period", p ? Int(p.period) : none],
+      ]),
+    };
   },
 };
 
@@ -356,7 +429,12 @@ function socleOf(M: ModuleValue, c: CallContext): { degrees: number[]; splits: b
 function depthOverS(M: ModuleValue, c: CallContext): number {
   const { rows, degrees } = presentationOverS(M, c.span);
   const shift = -Math.min(0, ...degrees);
-  const C = resolveCoker(M.ring.poly, rows, degrees.map((d) => d + shift), opts(c));
+  const C = resolveCoker(
+    M.ring.poly,
+    rows,
+    degrees.map((d) => d + shift),
+    opts(c),
+  );
   return M.ring.poly.vars.length - projectiveDimension(C);
 }
 
@@ -404,7 +482,10 @@ export const QUOTIENT_PROPERTIES: Record<string, (obj: Value, args: readonly Val
     if (k < 0n) throw runtime(`the index must be at least 0, got ${k}`, span);
     if (k >= BigInt(n)) throw runtime(`only the coefficients of t^0 … t^${n - 1} were computed; ask for more terms`, span);
     if (s.exact !== undefined && k >= BigInt(s.exact)) {
-      throw runtime(`the coefficient of t^${k} is only a lower bound (a degree bound cut the resolution); t^0 … t^${s.exact - 1} are exact`, span);
+      throw runtime(
+        `the coefficient of t^${k} is only a lower bound (a degree bound cut the resolution); t^0 … t^${s.exact - 1} are exact`,
+        span,
+      );
     }
     return Int(s.coefficients[Number(k)]);
   },

@@ -12,19 +12,20 @@ import type { BettiTableValue, ComplexValue, Value } from "./values";
 
 const Int = (value: number): Value => ({ type: "Int", value: BigInt(value) });
 
-
 /// resolve(M, length = n, degree = d): M a module or a quotient ring A / I read as the
 /// cyclic module A/I. The engine's dispatcher chooses the method; here its options are
 /// checked (with the user's spans) and its result rendered.
 export function resolveValue([m]: readonly Value[], c: CallContext): Value {
-  if (m.type !== "Module" && m.type !== "Ring") throw runtime(`resolve expects a Module or a quotient ring, got ${m.type}`, c.argSpans[0] ?? c.span);
+  if (m.type !== "Module" && m.type !== "Ring")
+    throw runtime(`resolve expects a Module or a quotient ring, got ${m.type}`, c.argSpans[0] ?? c.span);
   const t = resolutionTarget(m, c);
   const length = bound(c, "length", "homologicalIndex");
   if (t.method !== "schreyer" && length === undefined) {
     throw runtime("over a quotient ring a resolution is usually infinite: give a bound, e.g. resolve(M, length = 6)", c.span);
   }
   requireCyclicAtOrigin(t, "resolve", c);
-  if (t.method === "artinian" && c.named.has("degree")) throw runtime("degree bounds need a graded ring; this one is read at the origin, ungraded", c.span);
+  if (t.method === "artinian" && c.named.has("degree"))
+    throw runtime("degree bounds need a graded ring; this one is read at the origin, ungraded", c.span);
   const degree = bound(c, "degree", "internalDegree");
   const partial = c.interp.session.partial;
   // each finished column streams as a one-column, still-incomplete Betti table
@@ -35,7 +36,13 @@ export function resolveValue([m]: readonly Value[], c: CallContext): Value {
     degree: degree === undefined ? undefined : degree + t.shift,
     keepMaps: MAX_MAP_ENTRIES,
     partial: partial
-      ? (col) => partial({ type: "BettiTable", entries: col.entries.map(([j, b]) => [col.index, j - t.shift, b] as const), complete: false, ...running })
+      ? (col) =>
+          partial({
+            type: "BettiTable",
+            entries: col.entries.map(([j, b]) => [col.index, j - t.shift, b] as const),
+            complete: false,
+            ...running,
+          })
       : undefined,
     opts: c.interp.session.compute,
   });
@@ -65,6 +72,7 @@ export const COMPLEX_PROPERTIES: Record<string, (obj: Value, args: readonly Valu
     if (maps.length === 0) throw runtime("this complex has no differentials (its length is 0)", c.span);
     return maps[indexArg(i, c.argSpans[0] ?? c.span, 1, maps.length, "the index of the differential") - 1];
   },
-  "BettiTable.at": (v, [i, j]) => Int(bettiNumber(v as BettiTableValue, Number((i as { value: bigint }).value), Number((j as { value: bigint }).value))),
+  "BettiTable.at": (v, [i, j]) =>
+    Int(bettiNumber(v as BettiTableValue, Number((i as { value: bigint }).value), Number((j as { value: bigint }).value))),
   "BettiTable.totals": (v) => ({ type: "List", items: bettiTotals(v as BettiTableValue).map(Int) }),
 };

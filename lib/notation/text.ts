@@ -57,7 +57,8 @@ export function bettiText(b: BettiTableValue): string {
 function seriesText(v: Extract<Value, { type: "Series" }>): string {
   const n = v.coefficients.length;
   let out = `${ascendingText(v.coefficients)}+O(t^${n})`;
-  if (v.exact !== undefined && v.exact < n) out += ` (the coefficients of t^${v.exact} and beyond are lower bounds: a degree bound cut the resolution)`;
+  if (v.exact !== undefined && v.exact < n)
+    out += ` (the coefficients of t^${v.exact} and beyond are lower bounds: a degree bound cut the resolution)`;
   if (v.rational !== null) {
     const k = v.guess?.checked;
     out += `; guessed rational function ${v.rational}${k !== undefined ? ` (a guess: it reproduces ${k} computed term${k === 1 ? "" : "s"} beyond those it was fitted to)` : " (a guess)"}`;
@@ -110,7 +111,9 @@ export function valueText(v: Value): string {
       // seconds are exact Rats of whole milliseconds; a table shows them as decimals
       return [
         v.columns.join(" | "),
-        ...v.rows.map((row) => row.map((x, i) => (v.columns[i] === "seconds" && x.type === "Rat" ? decimalText(x.value) : valueText(x))).join(" | ")),
+        ...v.rows.map((row) =>
+          row.map((x, i) => (v.columns[i] === "seconds" && x.type === "Rat" ? decimalText(x.value) : valueText(x))).join(" | "),
+        ),
       ].join("\n");
     case "Experiment":
       return experimentText(v);

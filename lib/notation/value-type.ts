@@ -12,7 +12,10 @@ export function valueType(v: Value): Type {
     case "Record":
       return T.record(Object.fromEntries([...v.fields].map(([k, x]) => [k, valueType(x)])));
     case "Function":
-      return T.fn(v.params.map(() => T.Any), T.Any);
+      return T.fn(
+        v.params.map(() => T.Any),
+        T.Any,
+      );
     case "Table":
       return T.table(v.columns.length ? Object.fromEntries(v.columns.map((c) => [c, T.Any])) : null);
     case "Family":

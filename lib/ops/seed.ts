@@ -21,9 +21,27 @@ export const DEMO_ACCOUNTS: ReadonlyArray<{
   siteRole: SiteRole;
   teamRole: TeamRole | null;
 }> = [
-  { email: "imre.vantongeren@kestrel-lake.example", name: "Imre van Tongeren", password: "heron-lead-2718", siteRole: "member", teamRole: "lead" },
-  { email: "dalia.moreno@kestrel-lake.example", name: "Dalia Moreno", password: "reed-member-3141", siteRole: "member", teamRole: "member" },
-  { email: "tomas.achterberg@kestrel-lake.example", name: "Tomas Achterberg", password: "pike-guest-1618", siteRole: "member", teamRole: "guest" },
+  {
+    email: "imre.vantongeren@kestrel-lake.example",
+    name: "Imre van Tongeren",
+    password: "heron-lead-2718",
+    siteRole: "member",
+    teamRole: "lead",
+  },
+  {
+    email: "dalia.moreno@kestrel-lake.example",
+    name: "Dalia Moreno",
+    password: "reed-member-3141",
+    siteRole: "member",
+    teamRole: "member",
+  },
+  {
+    email: "tomas.achterberg@kestrel-lake.example",
+    name: "Tomas Achterberg",
+    password: "pike-guest-1618",
+    siteRole: "member",
+    teamRole: "guest",
+  },
   { email: "admin@kestrel-lake.example", name: "Site Administrator", password: "beacon-admin-1414", siteRole: "admin", teamRole: null },
 ];
 
@@ -38,24 +56,23 @@ export async function seedDemo(): Promise<void> {
   await database.transaction(async (tx) => {
     await tx
       .insert(users)
-      .values(
-        DEMO_ACCOUNTS.map((a, i) => ({ email: a.email, displayName: a.name, passwordHash: hashes[i]!, siteRole: a.siteRole })),
-      )
+      .values(DEMO_ACCOUNTS.map((a, i) => ({ email: a.email, displayName: a.name, passwordHash: hashes[i]!, siteRole: a.siteRole })))
       .onConflictDoNothing({ target: users.email });
     const rows = await tx.select({ id: users.id, email: users.email }).from(users);
     const idOf = new Map(rows.map((r) => [r.email, r.id]));
     const lead = DEMO_ACCOUNTS.find((a) => a.teamRole === "lead")!;
     const leadId = idOf.get(lead.email)!;
 
-    await tx.insert(teams).values({ ...DEMO_TEAM, createdBy: leadId }).onConflictDoNothing({ target: teams.slug });
+    await tx
+      .insert(teams)
+      .values({ ...DEMO_TEAM, createdBy: leadId })
+      .onConflictDoNothing({ target: teams.slug });
     const [team] = await tx.select({ id: teams.id }).from(teams).where(eq(teams.slug, DEMO_TEAM.slug));
     const teamId = team!.id;
 
     await tx
       .insert(memberships)
-      .values(
-        DEMO_ACCOUNTS.filter((a) => a.teamRole !== null).map((a) => ({ teamId, userId: idOf.get(a.email)!, role: a.teamRole! })),
-      )
+      .values(DEMO_ACCOUNTS.filter((a) => a.teamRole !== null).map((a) => ({ teamId, userId: idOf.get(a.email)!, role: a.teamRole! })))
       .onConflictDoNothing();
 
     for (const s of DEMO_SESSIONS) {

@@ -38,7 +38,11 @@ export async function createSession(user: CurrentUser, title?: string) {
 
 /// A session's title made from a definition's source: its first line, at most 80 characters.
 export function titleFromDefinition(source: string): string {
-  const line = source.split("\n").map((l) => l.trim()).find((l) => l !== "") ?? "";
+  const line =
+    source
+      .split("\n")
+      .map((l) => l.trim())
+      .find((l) => l !== "") ?? "";
   const flat = line.replace(/\s+/g, " ");
   return flat.length <= 80 ? flat : flat.slice(0, 79) + "…";
 }
@@ -91,11 +95,7 @@ export async function listSessions(user: CurrentUser, query?: string): Promise<S
     .map((r) => {
       const viaTeam = r.team_role === null ? null : r.team_role === "guest" ? "viewer" : "editor";
       const access =
-        r.owner_id === user.id
-          ? "owner"
-          : r.share_role === "editor" || viaTeam === "editor"
-            ? "editor"
-            : r.share_role ?? viaTeam;
+        r.owner_id === user.id ? "owner" : r.share_role === "editor" || viaTeam === "editor" ? "editor" : (r.share_role ?? viaTeam);
       const match = r.title_match
         ? null
         : r.cell_match !== null
@@ -168,7 +168,16 @@ export async function startCell(sessionId: string, user: CurrentUser, source: st
       .limit(1);
     const [row] = await tx
       .insert(cells)
-      .values({ sessionId, position: (last?.position ?? -1) + 1, source, status: "running", createdBy: user.id, startedAt: new Date(), serverId, heartbeatAt: new Date() })
+      .values({
+        sessionId,
+        position: (last?.position ?? -1) + 1,
+        source,
+        status: "running",
+        createdBy: user.id,
+        startedAt: new Date(),
+        serverId,
+        heartbeatAt: new Date(),
+      })
       .returning();
     await tx.update(sessions).set({ updatedAt: new Date() }).where(eq(sessions.id, sessionId));
     return row!;
@@ -195,12 +204,28 @@ export async function finishCell(cell: CellRow, user: CurrentUser, outcome: Cell
     for (const o of outcome.objects) {
       const [row] = await tx
         .insert(namedObjects)
-        .values({ sessionId: cell.sessionId, ownerId: user.id, name: o.name, type: o.type, value: o.value, source: o.source, sourceCellId: cell.id })
+        .values({
+          sessionId: cell.sessionId,
+          ownerId: user.id,
+          name: o.name,
+          type: o.type,
+          value: o.value,
+          source: o.source,
+          sourceCellId: cell.id,
+        })
         .onConflictDoUpdate({
           target: [namedObjects.sessionId, namedObjects.name],
           // A name bound again by a cell is that cell's object now, no longer an imported
           // copy, and defined by whoever ran the cell.
-          set: { type: o.type, value: o.value, source: o.source, sourceCellId: cell.id, origin: null, ownerId: user.id, updatedAt: new Date() },
+          set: {
+            type: o.type,
+            value: o.value,
+            source: o.source,
+            sourceCellId: cell.id,
+            origin: null,
+            ownerId: user.id,
+            updatedAt: new Date(),
+          },
         })
         .returning();
       saved.push(row!);

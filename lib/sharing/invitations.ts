@@ -201,14 +201,21 @@ export async function acceptInvitation(user: CurrentUser, token: string, address
     // Someone already in the team keeps their role (an invitation never demotes a lead).
     if (!existing) await tx.insert(memberships).values({ teamId: row.teamId, userId: user.id, role: row.role });
     await tx.update(invitations).set({ status: "accepted", acceptedAt: new Date() }).where(eq(invitations.id, row.id));
-    await auditSharing(tx, { event: "invitation_accepted", userId: user.id, email: user.email, address, details: { ...base, role: row.role } });
+    await auditSharing(tx, {
+      event: "invitation_accepted",
+      userId: user.id,
+      email: user.email,
+      address,
+      details: { ...base, role: row.role },
+    });
     const [own] = await tx
       .select({ id: sessions.id })
       .from(sessions)
       .where(eq(sessions.ownerId, user.id))
       .orderBy(sql`${sessions.updatedAt} DESC`)
       .limit(1);
-    const sessionId = own?.id ?? (await tx.insert(sessions).values({ title: PLACEHOLDER_TITLE, autoTitle: true, ownerId: user.id }).returning())[0]!.id;
+    const sessionId =
+      own?.id ?? (await tx.insert(sessions).values({ title: PLACEHOLDER_TITLE, autoTitle: true, ownerId: user.id }).returning())[0]!.id;
     return { result: { teamId: row.teamId, role: existing?.role ?? row.role, sessionId } };
   });
   if ("error" in outcome && outcome.error) {

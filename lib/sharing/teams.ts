@@ -21,11 +21,7 @@ export function slugify(name: string): string {
   return s || "team";
 }
 
-export async function createTeam(
-  user: CurrentUser,
-  input: { name: string; slug?: string; description?: string },
-  address: string,
-) {
+export async function createTeam(user: CurrentUser, input: { name: string; slug?: string; description?: string }, address: string) {
   const wanted = input.slug ?? slugify(input.name);
   for (let attempt = 0; attempt < 4; attempt++) {
     // An explicit slug must be free; a derived one gets a short suffix when taken.
@@ -73,7 +69,13 @@ export async function teamDetail(user: CurrentUser, teamId: string) {
   const pending =
     role === "lead"
       ? await database
-          .select({ id: invitations.id, email: invitations.email, role: invitations.role, expiresAt: invitations.expiresAt, createdAt: invitations.createdAt })
+          .select({
+            id: invitations.id,
+            email: invitations.email,
+            role: invitations.role,
+            expiresAt: invitations.expiresAt,
+            createdAt: invitations.createdAt,
+          })
           .from(invitations)
           .where(and(eq(invitations.teamId, teamId), eq(invitations.status, "pending"), sql`${invitations.expiresAt} > now()`))
           .orderBy(asc(invitations.createdAt))
@@ -92,7 +94,10 @@ export async function teamDetail(user: CurrentUser, teamId: string) {
     .from(sessions)
     .innerJoin(users, eq(users.id, sessions.ownerId))
     .where(and(eq(sessions.teamId, teamId), eq(sessions.visibility, "team")));
-  const byId = new Map<string, { id: string; title: string; ownerName: string; role: "viewer" | "editor"; shareId: string | null; via: "share" | "team visibility" }>();
+  const byId = new Map<
+    string,
+    { id: string; title: string; ownerName: string; role: "viewer" | "editor"; shareId: string | null; via: "share" | "team visibility" }
+  >();
   for (const v of visible) byId.set(v.id, { ...v, role: "editor", shareId: null, via: "team visibility" });
   // An explicit share is listed as such (its id lets a lead revoke it); the stronger role wins.
   for (const e of explicit) {
@@ -138,7 +143,10 @@ export async function changeRole(user: CurrentUser, teamId: string, memberId: st
     if (current === "lead" && leadCount(members) === 1) {
       throw new HttpError(409, "last_lead", "This is the team's only lead; make another member lead first.");
     }
-    await tx.update(memberships).set({ role }).where(and(eq(memberships.teamId, teamId), eq(memberships.userId, memberId)));
+    await tx
+      .update(memberships)
+      .set({ role })
+      .where(and(eq(memberships.teamId, teamId), eq(memberships.userId, memberId)));
     await auditSharing(tx, {
       event: "team_role_changed",
       userId: user.id,

@@ -30,14 +30,15 @@ async function load(session: SessionRow, selection: ExportSelection = ALL_CELLS)
   // Running cells have no result yet: the export holds finished cells only.
   const cellRows = (await database.select().from(cells).where(eq(cells.sessionId, session.id)).orderBy(asc(cells.position))).filter(
     (c) =>
-      (c.status === "done" || (!selection.skipErrors && (c.status === "error" || c.status === "cancelled" || c.status === "interrupted"))) &&
+      (c.status === "done" ||
+        (!selection.skipErrors && (c.status === "error" || c.status === "cancelled" || c.status === "interrupted"))) &&
       (chosen === null || chosen.has(c.position)),
   );
   const kept = new Set(cellRows.map((c) => c.id));
   const filtered = chosen !== null || selection.skipErrors;
-  const objectRows = (await database.select().from(namedObjects).where(eq(namedObjects.sessionId, session.id)).orderBy(asc(namedObjects.name))).filter(
-    (o) => !filtered || o.sourceCellId === null || kept.has(o.sourceCellId),
-  );
+  const objectRows = (
+    await database.select().from(namedObjects).where(eq(namedObjects.sessionId, session.id)).orderBy(asc(namedObjects.name))
+  ).filter((o) => !filtered || o.sourceCellId === null || kept.has(o.sourceCellId));
   return { ownerName: owner?.name ?? "", cellRows, objectRows };
 }
 
@@ -81,7 +82,11 @@ export async function exportJson(session: SessionRow, selection: ExportSelection
   };
 }
 
-export async function exportText(session: SessionRow, format: "latex" | "markdown", selection: ExportSelection = ALL_CELLS): Promise<string> {
+export async function exportText(
+  session: SessionRow,
+  format: "latex" | "markdown",
+  selection: ExportSelection = ALL_CELLS,
+): Promise<string> {
   const { ownerName, cellRows, objectRows } = await load(session, selection);
   const transcript: Transcript = {
     title: session.title,
@@ -155,7 +160,14 @@ export async function importSession(user: CurrentUser, doc: SessionExport, title
           value: o.value,
           source: o.source,
           sourceCellId: o.cell === null ? null : (idOf.get(o.cell) ?? null),
-          origin: o.origin ?? { kind: "export", sessionTitle: doc.session.title, ownerName: doc.session.ownerName, name: o.name, exportedAt: doc.exportedAt, importedAt },
+          origin: o.origin ?? {
+            kind: "export",
+            sessionTitle: doc.session.title,
+            ownerName: doc.session.ownerName,
+            name: o.name,
+            exportedAt: doc.exportedAt,
+            importedAt,
+          },
         })),
       );
     }

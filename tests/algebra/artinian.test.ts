@@ -1,6 +1,12 @@
 import { describe, expect, it } from "vitest";
 import * as A from "../../lib/algebra/index";
-import { componentAtOrigin, FiniteAlgebra, localAlgebraAtOrigin, minimalGeneratorCount, minimalGeneratorPositions } from "../../lib/algebra/artinian/index";
+import {
+  componentAtOrigin,
+  FiniteAlgebra,
+  localAlgebraAtOrigin,
+  minimalGeneratorCount,
+  minimalGeneratorPositions,
+} from "../../lib/algebra/artinian/index";
 import { resolveLocalArtinian } from "../../lib/algebra/resolution/artinian/resolve";
 import { resolveDegreewise } from "../../lib/algebra/resolution/graded-quotient/index";
 import { binomial, maximal, ring, vars } from "./local-helpers";
@@ -9,7 +15,11 @@ describe("Artinian local rings as finite-dimensional algebras", () => {
   it("k[x1..xn]/m^p has length C(n+p−1, n) and socle m^{p−1}", () => {
     // counting monomials, common practice: dim R_d = C(n−1+d, n−1) for d < p; the socle of S/m^p is m^{p−1}
     // (common practice).
-    for (const [n, p] of [[2, 3], [3, 2], [3, 3]] as const) {
+    for (const [n, p] of [
+      [2, 3],
+      [3, 2],
+      [3, 3],
+    ] as const) {
       const S = ring(n);
       const Al = new FiniteAlgebra(S, A.idealPower(maximal(S), p));
       expect(Al.dim).toBe(binomial(n + p - 1, n));
@@ -62,7 +72,8 @@ describe("minimal resolutions over local Artinian rings (ungraded, by linear alg
   it("agrees with the degree-by-degree resolution on graded Artinian rings", () => {
     // Two methods on the same graded rings: k over k[x,y,z]/m^3 (Golod 1962),
     // k and R/(x) over k[x,y]/(x^2, y^2) (Tate, Illinois J. Math. 1957).
-    const S3 = ring(3), S2 = ring(2);
+    const S3 = ring(3),
+      S2 = ring(2);
     const [x, y] = vars(S2);
     const cases: [A.Ideal, A.Ideal, number][] = [
       [A.idealPower(maximal(S3), 3), maximal(S3), 4],
@@ -105,7 +116,8 @@ describe("minimal resolutions over local Artinian rings (ungraded, by linear alg
     const L = A.ideal(S2, [A.add(S2, A.mul(S2, u, u), A.mul(S2, v, A.mul(S2, v, v))), A.mul(S2, u, v)]);
     const r = resolveLocalArtinian(L, maximal(S2), 4);
     for (let i = 0; i + 1 < r.maps.length; i++) {
-      const a = r.maps[i], b = r.maps[i + 1];
+      const a = r.maps[i],
+        b = r.maps[i + 1];
       for (let p = 0; p < a.length; p++)
         for (let q = 0; q < (b[0]?.length ?? 0); q++) {
           let s = A.zero(S2);

@@ -7,7 +7,12 @@ import { maximal, ring, vars } from "./local-helpers";
 describe("Burch ideal and index", () => {
   it("m^p: B = m^2 and index n", () => {
     // Dao–Kobayashi–Takahashi, Algebra & Number Theory 2020: I : m = m^{p−1}, B(I) = (m^{p+1}) : m^{p−1} = m^2.
-    for (const [n, p] of [[2, 2], [3, 2], [3, 3], [2, 4]] as const) {
+    for (const [n, p] of [
+      [2, 2],
+      [3, 2],
+      [3, 3],
+      [2, 4],
+    ] as const) {
       const S = ring(n);
       const m = maximal(S);
       const I = A.idealPower(m, p);

@@ -45,7 +45,8 @@ function rref(rows: Dense[], p: bigint): string[] {
 }
 
 function sparse(dense: number[]): SparseRow {
-  const cols: number[] = [], vals: number[] = [];
+  const cols: number[] = [],
+    vals: number[] = [];
   dense.forEach((v, c) => {
     if (v !== 0) {
       cols.push(c);
@@ -62,7 +63,9 @@ describe("F4 matrix reduction with delayed modular reduction", () => {
       // Residues near p − 1 as often as small ones: the largest products are the risky ones.
       const residue = () => (rng() < 0.5 ? p - 1 - Math.floor(rng() * 3) : 1 + Math.floor(rng() * (p - 1)));
       for (let trial = 0; trial < 2; trial++) {
-        const nA = 400, nB = 10, ncols = nA + nB;
+        const nA = 400,
+          nB = 10,
+          ncols = nA + nB;
         // Pivot row c: 1 at column c, then random entries right of it (dense, so reducing a
         // row meets long chains of pivots and adds hundreds of products to one column).
         const A: number[][] = [];

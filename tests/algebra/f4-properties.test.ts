@@ -19,7 +19,9 @@ function arbSystem(R: A.PolyRing, p: number) {
   const n = R.vars.length;
   const coeff = fc.oneof(fc.integer({ min: 1, max: Math.min(p - 1, 9) }), fc.integer({ min: 1, max: p - 1 }));
   const term = fc.tuple(coeff, fc.array(fc.integer({ min: 0, max: 2 }), { minLength: n, maxLength: n }));
-  const poly = fc.array(term, { minLength: 1, maxLength: 5 }).map((ts) => ts.reduce((f, [c, e]) => A.add(R, f, A.monomial(R, e, BigInt(c))), A.zero(R)));
+  const poly = fc
+    .array(term, { minLength: 1, maxLength: 5 })
+    .map((ts) => ts.reduce((f, [c, e]) => A.add(R, f, A.monomial(R, e, BigInt(c))), A.zero(R)));
   return fc.array(poly, { minLength: 1, maxLength: 4 });
 }
 

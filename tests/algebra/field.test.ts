@@ -82,7 +82,14 @@ describe("rational arithmetic (Lehmer gcd, Henrici's sums and products)", () => 
       }),
       { numRuns: 2000 },
     );
-    for (const [a, b] of [[0n, 0n], [0n, 7n], [2n ** 53n, 2n ** 53n + 1n], [2n ** 64n, 2n ** 32n], [3n ** 300n, 3n ** 299n * 2n], [3n ** 700n * 5n + 1n, 3n ** 699n * 7n]] as const) {
+    for (const [a, b] of [
+      [0n, 0n],
+      [0n, 7n],
+      [2n ** 53n, 2n ** 53n + 1n],
+      [2n ** 64n, 2n ** 32n],
+      [3n ** 300n, 3n ** 299n * 2n],
+      [3n ** 700n * 5n + 1n, 3n ** 699n * 7n],
+    ] as const) {
       expect(bigGcd(a, b)).toBe(euclid(a, b));
     }
   });

@@ -48,7 +48,11 @@ describe("graded pieces of S/J", () => {
     for (const field of [A.gf(7), A.QQ]) {
       const K = coeffsOf(field);
       const e = (n: number) => K.fromRational(BigInt(n), 1n);
-      const ker = kernelBasis(K, 2, [[e(1), e(0)], [e(1), e(1)], [e(0), e(1)]]);
+      const ker = kernelBasis(K, 2, [
+        [e(1), e(0)],
+        [e(1), e(1)],
+        [e(0), e(1)],
+      ]);
       expect(ker.length).toBe(1);
       const E = new Echelon(K, 3);
       expect(E.insert([e(1), e(2), e(3)])).toBe(true);

@@ -12,7 +12,9 @@ const divides = (a: number[], b: number[]) => a.every((x, i) => x <= b[i]);
 
 function arbSystem(R: A.PolyRing) {
   const term = fc.tuple(fc.integer({ min: -6, max: 6 }), fc.array(fc.integer({ min: 0, max: 2 }), { minLength: 3, maxLength: 3 }));
-  const poly = fc.array(term, { minLength: 1, maxLength: 3 }).map((ts) => ts.reduce((f, [c, e]) => A.add(R, f, A.monomial(R, e, BigInt(c))), A.zero(R)));
+  const poly = fc
+    .array(term, { minLength: 1, maxLength: 3 })
+    .map((ts) => ts.reduce((f, [c, e]) => A.add(R, f, A.monomial(R, e, BigInt(c))), A.zero(R)));
   return fc.array(poly, { minLength: 1, maxLength: 3 });
 }
 
@@ -43,7 +45,10 @@ describe("reduced Gröbner bases (properties)", () => {
           fc.property(arbSystem(R), (gens) => {
             const G = A.groebnerBasis(R, gens, { limits: { maxBasisSize: 500 } });
             checkReduced(R, gens, G);
-            const H = A.groebnerBasis(R, [...gens].reverse().map((g) => A.scale(R, g, 3n)));
+            const H = A.groebnerBasis(
+              R,
+              [...gens].reverse().map((g) => A.scale(R, g, 3n)),
+            );
             expect(H.map((h) => A.formatPoly(R, h))).toEqual(G.map((g) => A.formatPoly(R, g)));
           }),
           { numRuns: 25 },

@@ -58,7 +58,13 @@ function rng(seed: number): () => number {
 describe("Hilbert series of monomial ideals", () => {
   it("k[x1..xn]/m^p has H(d) = C(n−1+d, n−1) for d < p and 0 from p on", () => {
     // counting monomials, common practice)
-    for (const [n, p] of [[2, 5], [3, 4], [4, 3], [5, 2], [1, 6]]) {
+    for (const [n, p] of [
+      [2, 5],
+      [3, 4],
+      [4, 3],
+      [5, 2],
+      [1, 6],
+    ]) {
       const hs = hilbertSeriesOfMonomials(monomialsOfDegree(n, p), new Array(n).fill(1));
       const values = hilbertFunctionValues(hs, p + 4);
       values.forEach((v, d) => expect(v).toBe(d < p ? binomial(n - 1 + d, n - 1) : 0n));
@@ -76,7 +82,11 @@ describe("Hilbert series of monomial ideals", () => {
     expect(hs.dimension).toBe(3);
     expect(hs.degree).toEqual({ n: 1n, d: 1n });
     // (d + 2)(d + 1)/2 = 1 + 3/2 d + 1/2 d^2
-    expect(hilbertPolynomial(hs)).toEqual([{ n: 1n, d: 1n }, { n: 3n, d: 2n }, { n: 1n, d: 2n }]);
+    expect(hilbertPolynomial(hs)).toEqual([
+      { n: 1n, d: 1n },
+      { n: 3n, d: 2n },
+      { n: 1n, d: 2n },
+    ]);
     expect(formatUnivariate(hilbertPolynomial(hs), "d")).toBe("1/2*d^2+3/2*d+1");
     expect(formatHilbertDenominator(hs.weights)).toBe("(1-t)^3");
     expect(hilbertFunctionAt(hs, 4)).toBe(15n);
@@ -84,7 +94,13 @@ describe("Hilbert series of monomial ideals", () => {
   });
 
   it("the unit ideal gives the zero series and dimension −1", () => {
-    const hs = hilbertSeriesOfMonomials([[0, 0], [1, 0]], [1, 1]);
+    const hs = hilbertSeriesOfMonomials(
+      [
+        [0, 0],
+        [1, 0],
+      ],
+      [1, 1],
+    );
     expect(hs.numerator).toEqual([]);
     expect(hs.dimension).toBe(-1);
     expect(hs.degree.n).toBe(0n);
@@ -92,9 +108,24 @@ describe("Hilbert series of monomial ideals", () => {
   });
 
   it("redundant and repeated generators do not change the series", () => {
-    const minimal = hilbertSeriesOfMonomials([[2, 0, 0], [1, 1, 0], [0, 0, 3]], [1, 1, 1]);
+    const minimal = hilbertSeriesOfMonomials(
+      [
+        [2, 0, 0],
+        [1, 1, 0],
+        [0, 0, 3],
+      ],
+      [1, 1, 1],
+    );
     const redundant = hilbertSeriesOfMonomials(
-      [[2, 1, 0], [2, 0, 0], [1, 1, 0], [0, 0, 3], [1, 1, 0], [3, 3, 3], [0, 1, 4]],
+      [
+        [2, 1, 0],
+        [2, 0, 0],
+        [1, 1, 0],
+        [0, 0, 3],
+        [1, 1, 0],
+        [3, 3, 3],
+        [0, 1, 4],
+      ],
       [1, 1, 1],
     );
     expect(redundant.numerator).toEqual(minimal.numerator);
@@ -102,7 +133,14 @@ describe("Hilbert series of monomial ideals", () => {
 
   it("a monomial complete intersection has numerator ∏(1 − t^{d_i})", () => {
     // Koszul complex on a regular sequence, common practice: x^2, y^3, z^4 is a regular sequence
-    const hs = hilbertSeriesOfMonomials([[2, 0, 0], [0, 3, 0], [0, 0, 4]], [1, 1, 1]);
+    const hs = hilbertSeriesOfMonomials(
+      [
+        [2, 0, 0],
+        [0, 3, 0],
+        [0, 0, 4],
+      ],
+      [1, 1, 1],
+    );
     // (1 − t^2)(1 − t^3)(1 − t^4) = 1 − t^2 − t^3 + t^5 + t^6 − t^7 ... expanded by hand:
     // (1 − t^2 − t^3 + t^5)(1 − t^4) = 1 − t^2 − t^3 − t^4 + t^5 + t^6 + t^7 − t^9
     expect(hs.numerator).toEqual([1n, 0n, -1n, -1n, -1n, 1n, 1n, 1n, 0n, -1n]);
@@ -115,12 +153,21 @@ describe("Hilbert series of monomial ideals", () => {
     expect([quadric.dimension, quadric.degree.n]).toEqual([2, 2n]);
     // (xy, xz) = (x) ∩ (y, z): a plane and a line, dimension 2, degree 1;
     // numerator 1 − 2t^2 + t^3 = (1 − t)(1 + t − t^2)
-    const planeLine = hilbertSeriesOfMonomials([[1, 1, 0], [1, 0, 1]], [1, 1, 1]);
+    const planeLine = hilbertSeriesOfMonomials(
+      [
+        [1, 1, 0],
+        [1, 0, 1],
+      ],
+      [1, 1, 1],
+    );
     expect(planeLine.numerator).toEqual([1n, 0n, -2n, 1n]);
     expect(planeLine.reducedNumerator).toEqual([1n, 1n, -1n]);
     expect([planeLine.dimension, planeLine.degree.n]).toEqual([2, 1n]);
     // P(d) = (d + 1) + 1 for d ≥ 1: plane d + 1 monomials of degree d in y, z plus x^d
-    expect(hilbertPolynomial(planeLine)).toEqual([{ n: 2n, d: 1n }, { n: 1n, d: 1n }]);
+    expect(hilbertPolynomial(planeLine)).toEqual([
+      { n: 2n, d: 1n },
+      { n: 1n, d: 1n },
+    ]);
   });
 
   it("the series agrees with counting standard monomials on random ideals, standard and weighted", () => {
@@ -129,9 +176,7 @@ describe("Hilbert series of monomial ideals", () => {
     for (let trial = 0; trial < 60; trial++) {
       const n = 1 + Math.floor(rand() * 4);
       const weights = trial % 2 === 0 ? new Array(n).fill(1) : Array.from({ length: n }, () => 1 + Math.floor(rand() * 3));
-      const gens = Array.from({ length: Math.floor(rand() * 6) }, () =>
-        Array.from({ length: n }, () => Math.floor(rand() * 4)),
-      );
+      const gens = Array.from({ length: Math.floor(rand() * 6) }, () => Array.from({ length: n }, () => Math.floor(rand() * 4)));
       const maxDeg = 14;
       const hs = hilbertSeriesOfMonomials(gens, weights);
       expect(hilbertFunctionValues(hs, maxDeg)).toEqual(countStandardMonomials(gens, weights, maxDeg));
@@ -143,9 +188,7 @@ describe("Hilbert series of monomial ideals", () => {
     const rand = rng(7);
     for (let trial = 0; trial < 30; trial++) {
       const n = 2 + Math.floor(rand() * 3);
-      const gens = Array.from({ length: 1 + Math.floor(rand() * 4) }, () =>
-        Array.from({ length: n }, () => Math.floor(rand() * 3)),
-      );
+      const gens = Array.from({ length: 1 + Math.floor(rand() * 4) }, () => Array.from({ length: n }, () => Math.floor(rand() * 3)));
       const hs = hilbertSeriesOfMonomials(gens, new Array(n).fill(1));
       const P = hilbertPolynomial(hs);
       const from = hs.numerator.length;

@@ -32,7 +32,10 @@ function hilbertValues(R: PolyRing, P: Presentation, lo: number, hi: number): nu
   const shift = -Math.min(0, lo, ...P.rowDegrees);
   const cols = P.rows[0]?.length ?? 0;
   const hs = moduleHilbertSeries(
-    freeModule(R, P.rowDegrees.map((d) => d + shift)),
+    freeModule(
+      R,
+      P.rowDegrees.map((d) => d + shift),
+    ),
     Array.from({ length: cols }, (_, q) => P.rows.map((row) => row[q])),
   );
   const v = P.rowDegrees.length === 0 ? [] : hilbertFunctionValues(hs, hi + shift);
@@ -47,7 +50,11 @@ describe("moduleKernel", () => {
     const [x1, x2, x3] = vars(S3);
     const K = moduleKernel(S3, [[x1, x2, x3]], [1, 1, 1], [0]);
     // every generator is a syzygy, and a Gröbner basis of the Koszul relations has 3 elements
-    const product = matMul(S3, [[x1, x2, x3]], Array.from({ length: 3 }, (_, b) => K.map((v) => v[b])));
+    const product = matMul(
+      S3,
+      [[x1, x2, x3]],
+      Array.from({ length: 3 }, (_, b) => K.map((v) => v[b])),
+    );
     expect(product[0].every((f) => isZero(f))).toBe(true);
     expect(K.length).toBe(3);
   });
@@ -79,7 +86,9 @@ describe("Tor modules", () => {
       const M = quotientPresentation(ideal(R, [randomForm(R, 2, 3, rand), randomForm(R, 2, 3, rand)]));
       const N: Presentation = { rows: [[randomForm(R, 1, 2, rand), randomForm(R, 2, 3, rand)]], rowDegrees: [0] };
       for (let i = 0; i <= 3; i++) {
-        expect(hilbertValues(R, torModule(R, i, M, N), 0, 7), `seed ${seed}, i = ${i}`).toEqual(hilbertValues(R, torModule(R, i, N, M), 0, 7));
+        expect(hilbertValues(R, torModule(R, i, M, N), 0, 7), `seed ${seed}, i = ${i}`).toEqual(
+          hilbertValues(R, torModule(R, i, N, M), 0, 7),
+        );
       }
     }
   });
@@ -90,7 +99,9 @@ describe("Tor modules", () => {
     const I = ideal(R, [randomForm(R, 2, 4, rand), randomForm(R, 2, 4, rand)]);
     const J = ideal(R, [randomForm(R, 1, 3, rand), randomForm(R, 3, 4, rand)]);
     const lengths = torLengthsOf(R, quotientPresentation(I), quotientPresentation(J));
-    const fromModules = lengths.map((_, i) => hilbertValues(R, torModule(R, i, quotientPresentation(I), quotientPresentation(J)), 0, 12).reduce((s, x) => s + x, 0));
+    const fromModules = lengths.map((_, i) =>
+      hilbertValues(R, torModule(R, i, quotientPresentation(I), quotientPresentation(J)), 0, 12).reduce((s, x) => s + x, 0),
+    );
     expect(fromModules).toEqual(lengths);
   });
 });
@@ -153,7 +164,10 @@ describe("Koszul homology", () => {
   it("K(f) is exact in positive degrees exactly when f is a regular sequence (D. Eisenbud, Commutative Algebra, Cor. 17.5, from memory; random seeds)", () => {
     const R = ringOf(GF, 4);
     const [x1, x2, x3] = vars(R);
-    const cases: Poly[][] = [[mul(R, x1, x2), mul(R, x1, x3)], [x1, mul(R, x1, x2), x3]];
+    const cases: Poly[][] = [
+      [mul(R, x1, x2), mul(R, x1, x3)],
+      [x1, mul(R, x1, x2), x3],
+    ];
     for (const seed of [2, 9, 13]) {
       const rand = rng(seed);
       cases.push([randomForm(R, 2, 4, rand), randomForm(R, 2, 4, rand), randomForm(R, 1, 3, rand)]);

@@ -30,7 +30,10 @@ const lex = polyRing(gf(P), VARS, { order: { kind: "lex" } });
 /// The reduced lex basis of I (an ideal of the grevlex ring) in SymPy's term format,
 /// dropping the first `drop` exponents of each SymPy vector that we do not have.
 function oursInLex(I: Ideal): string[] {
-  const L = ideal(lex, I.gens.map((g) => parsePoly(lex, formatPoly(grevlex, g))));
+  const L = ideal(
+    lex,
+    I.gens.map((g) => parsePoly(lex, formatPoly(grevlex, g))),
+  );
   return idealGroebnerBasis(L)
     .map((g) => JSON.stringify(terms(lex, g).map((t) => [String(((t.num % BigInt(P)) + BigInt(P)) % BigInt(P)), "1", t.exps])))
     .sort();
@@ -45,14 +48,20 @@ function theirs(r: SympyResult, keep: (exps: number[]) => boolean, drop: number)
 }
 
 function idealOf(R: PolyRing, gens: string[]): Ideal {
-  return ideal(R, gens.map((s) => parsePoly(R, s)));
+  return ideal(
+    R,
+    gens.map((s) => parsePoly(R, s)),
+  );
 }
 
 describe("intersections and elimination ideals agree with SymPy", () => {
   const rng = mulberry32(3141);
   const random = () => randomSystem(rng, { vars: 3, gens: 2, terms: 3, degree: 2, rational: false, modulus: P, order: "lex" }).gens;
   const pairs = Array.from({ length: 12 }, () => [random(), random()] as const);
-  const singles = Array.from({ length: 12 }, () => randomSystem(rng, { vars: 3, gens: 3, terms: 3, degree: 3, rational: false, modulus: P, order: "lex" }).gens);
+  const singles = Array.from(
+    { length: 12 },
+    () => randomSystem(rng, { vars: 3, gens: 3, terms: 3, degree: 3, rational: false, modulus: P, order: "lex" }).gens,
+  );
   let meetResults: SympyResult[] = [];
   let elimResults: SympyResult[] = [];
 

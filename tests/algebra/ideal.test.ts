@@ -31,7 +31,10 @@ import {
 const GF = gf(32003);
 
 function parseIdeal(R: PolyRing, gens: string[]): Ideal {
-  return ideal(R, gens.map((s) => parsePoly(R, s)));
+  return ideal(
+    R,
+    gens.map((s) => parsePoly(R, s)),
+  );
 }
 
 function texts(I: Ideal): string[] {
@@ -49,7 +52,10 @@ function rng(seed: number): () => number {
 }
 
 function monomialIdeal(R: PolyRing, exps: number[][]): Ideal {
-  return ideal(R, exps.map((e) => monomial(R, e)));
+  return ideal(
+    R,
+    exps.map((e) => monomial(R, e)),
+  );
 }
 
 describe("ideal operations on hand-checkable examples", () => {
@@ -71,8 +77,10 @@ describe("ideal operations on hand-checkable examples", () => {
     const rand = rng(34);
     const randomExps = () => Array.from({ length: 1 + Math.floor(rand() * 3) }, () => [0, 1, 2].map(() => Math.floor(rand() * 4)));
     for (let trial = 0; trial < 12; trial++) {
-      const a = randomExps(), b = randomExps();
-      const I = monomialIdeal(R, a), J = monomialIdeal(R, b);
+      const a = randomExps(),
+        b = randomExps();
+      const I = monomialIdeal(R, a),
+        J = monomialIdeal(R, b);
       const lcms = a.flatMap((m) => b.map((n) => m.map((e, i) => Math.max(e, n[i]))));
       expect(idealEquals(idealIntersection(I, J), monomialIdeal(R, lcms))).toBe(true);
       const n = b[0];
@@ -82,7 +90,8 @@ describe("ideal operations on hand-checkable examples", () => {
   });
 
   it("sum, product, power, membership, containment and equality", () => {
-    const X = parseIdeal(R, ["x"]), Y = parseIdeal(R, ["y"]);
+    const X = parseIdeal(R, ["x"]),
+      Y = parseIdeal(R, ["y"]);
     expect(texts(idealProduct(X, Y))).toEqual(["x*y"]);
     expect(texts(idealSum(X, Y))).toEqual(["y", "x"]);
     // (x, y)^3 = (x^3, x^2 y, x y^2, y^3) by expanding

@@ -1,11 +1,23 @@
 import { describe, expect, it } from "vitest";
 import { formatPoly, ideal, isZero, parsePoly, QQ, type Poly, type PolyRing } from "@/lib/algebra";
-import { det, isRegularSequence, koszulComplex, minors, pfaffians, serreMultiplicity, torLengths, torLengthsOf } from "@/lib/algebra/invariants";
+import {
+  det,
+  isRegularSequence,
+  koszulComplex,
+  minors,
+  pfaffians,
+  serreMultiplicity,
+  torLengths,
+  torLengthsOf,
+} from "@/lib/algebra/invariants";
 import { bettiTotals, resolveCoker, resolveQuotient } from "@/lib/algebra/resolution/schreyer";
 import { alternating, genericMatrix, GF, matMul, randomForm, ringOf, rng, vars } from "./resolution-helpers";
 
 function idealOf(R: PolyRing, gens: string[]) {
-  return ideal(R, gens.map((s) => parsePoly(R, s)));
+  return ideal(
+    R,
+    gens.map((s) => parsePoly(R, s)),
+  );
 }
 
 describe("Tor lengths and Serre's intersection multiplicity", () => {
@@ -44,7 +56,8 @@ describe("Tor lengths and Serre's intersection multiplicity", () => {
       const R = ringOf(GF, 3);
       const I = ideal(R, [randomForm(R, 2, 3, rand), randomForm(R, 2, 3, rand)]);
       const J = ideal(R, [randomForm(R, 1, 3, rand), randomForm(R, 2, 2, rand)]);
-      const a = torLengths(I, J), b = torLengths(J, I);
+      const a = torLengths(I, J),
+        b = torLengths(J, I);
       const n = Math.max(a.length, b.length);
       const pad = (x: number[]) => [...x, ...new Array<number>(n - x.length).fill(0)];
       expect(pad(a)).toEqual(pad(b));

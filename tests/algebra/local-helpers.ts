@@ -3,7 +3,10 @@ import * as A from "../../lib/algebra/index";
 export const F = A.gf(32003);
 
 export function ring(n: number, field: A.Field = F): A.PolyRing {
-  return A.polyRing(field, Array.from({ length: n }, (_, i) => `x${i + 1}`));
+  return A.polyRing(
+    field,
+    Array.from({ length: n }, (_, i) => `x${i + 1}`),
+  );
 }
 
 export function vars(S: A.PolyRing): A.Poly[] {

@@ -1,6 +1,11 @@
 import { describe, expect, it } from "vitest";
 import * as A from "../../lib/algebra/index";
-import { bettiTotalsOf, cyclicResolution, residueFieldResolution, resolveDegreewise } from "../../lib/algebra/resolution/graded-quotient/index";
+import {
+  bettiTotalsOf,
+  cyclicResolution,
+  residueFieldResolution,
+  resolveDegreewise,
+} from "../../lib/algebra/resolution/graded-quotient/index";
 import { expandRational, polyPowZ } from "../../lib/algebra/series/index";
 import { binomial, maximal, randomForm, ring, seeded, vars } from "./local-helpers";
 
@@ -34,7 +39,10 @@ describe("residue field over S/J, degree by degree", () => {
     const next = seeded(11);
     for (const [n, degs, len] of cases) {
       const S = ring(n);
-      const J = A.ideal(S, degs.map((d) => randomForm(S, d, next)));
+      const J = A.ideal(
+        S,
+        degs.map((d) => randomForm(S, d, next)),
+      );
       // A regular sequence: codimension equals the number of forms.
       expect(A.idealCodimension(J)).toBe(degs.length);
       const C = residueFieldResolution(J, len);
@@ -59,7 +67,11 @@ describe("residue field over S/J, degree by degree", () => {
     // P_k(t) = (1+t)^n / (1 − Σ_{i≥1} β_i^S(S/m^p) t^{i+1}). The β_i^S are computed here over S
     // (J = 0) and compared with the Eagon–Northcott count C(n+p−1, p+i−1)·C(p+i−2, p−1)
     // (J. Eagon, D. Northcott, Proc. Roy. Soc. A 1962; from memory).
-    for (const [n, p, len] of [[2, 3, 6], [3, 3, 4], [2, 4, 6]] as const) {
+    for (const [n, p, len] of [
+      [2, 3, 6],
+      [3, 3, 4],
+      [2, 4, 6],
+    ] as const) {
       const S = ring(n);
       const mp = A.idealPower(maximal(S), p);
       const overS = bettiTotalsOf(cyclicResolution(A.ideal(S, []), mp, n + 1));
@@ -142,9 +154,19 @@ describe("residue field over S/J, degree by degree", () => {
     // Hilbert–Burch; Eagon–Northcott 1962: twisted cubic, β = 1, 3, 2.
     const S = ring(4);
     const [a, b, c, d] = vars(S);
-    const minors = [A.sub(S, A.mul(S, a, c), A.mul(S, b, b)), A.sub(S, A.mul(S, a, d), A.mul(S, b, c)), A.sub(S, A.mul(S, b, d), A.mul(S, c, c))];
+    const minors = [
+      A.sub(S, A.mul(S, a, c), A.mul(S, b, b)),
+      A.sub(S, A.mul(S, a, d), A.mul(S, b, c)),
+      A.sub(S, A.mul(S, b, d), A.mul(S, c, c)),
+    ];
     const C = cyclicResolution(A.ideal(S, []), A.ideal(S, minors), 4, { degree: 6 });
-    expect(C.columns.map((c) => c.entries)).toEqual([[{ degree: 0, count: 1 }], [{ degree: 2, count: 3 }], [{ degree: 3, count: 2 }], [], []]);
+    expect(C.columns.map((c) => c.entries)).toEqual([
+      [{ degree: 0, count: 1 }],
+      [{ degree: 2, count: 3 }],
+      [{ degree: 3, count: 2 }],
+      [],
+      [],
+    ]);
   });
 
   it("R/I with R/I Artinian over a non-Artinian R", () => {
@@ -202,9 +224,21 @@ describe("modules given by a presentation over S/J", () => {
     const S = ring(3);
     const [x, y, z] = vars(S);
     const cases: { rows: A.Poly[][]; degrees: number[] }[] = [
-      { rows: [[x, y], [z, x]], degrees: [0, 0] },
+      {
+        rows: [
+          [x, y],
+          [z, x],
+        ],
+        degrees: [0, 0],
+      },
       { rows: [[x, y, z]], degrees: [0] },
-      { rows: [[A.mul(S, x, x), y, A.zero(S)], [z, A.zero(S), A.mul(S, x, y)]], degrees: [0, 1] },
+      {
+        rows: [
+          [A.mul(S, x, x), y, A.zero(S)],
+          [z, A.zero(S), A.mul(S, x, y)],
+        ],
+        degrees: [0, 1],
+      },
     ];
     for (const { rows, degrees } of cases) {
       const ours = resolveDegreewise({ ring: A.ideal(S, []), presentation: { rows, degrees }, length: 4 });
@@ -231,7 +265,17 @@ describe("modules given by a presentation over S/J", () => {
     const [x, y] = vars(S);
     const J = A.ideal(S, [A.mul(S, x, x), A.mul(S, y, y)]);
     const zero = A.zero(S);
-    const r = resolveDegreewise({ ring: J, presentation: { rows: [[x, y, zero, zero], [zero, zero, x, y]], degrees: [0, 1] }, length: 5 });
+    const r = resolveDegreewise({
+      ring: J,
+      presentation: {
+        rows: [
+          [x, y, zero, zero],
+          [zero, zero, x, y],
+        ],
+        degrees: [0, 1],
+      },
+      length: 5,
+    });
     expect(bettiTotalsOf(r)).toEqual([2, 4, 6, 8, 10, 12]);
     expect(r.complete).toBe(true);
   });
@@ -244,7 +288,8 @@ describe("modules given by a presentation over S/J", () => {
     const maps = r.maps!;
     expect(maps.map((m) => m[0]?.length ?? 0)).toEqual(bettiTotalsOf(r).slice(1));
     for (let i = 0; i + 1 < maps.length; i++) {
-      const a = maps[i], b = maps[i + 1];
+      const a = maps[i],
+        b = maps[i + 1];
       for (let p = 0; p < a.length; p++)
         for (let q = 0; q < b[0].length; q++) {
           let s = A.zero(S);

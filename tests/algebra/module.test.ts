@@ -1,5 +1,18 @@
 import { describe, expect, it } from "vitest";
-import { add, ideal, idealEquals, idealGroebnerBasis, idealIntersection, isZero, leadExponents, mul, parsePoly, QQ, type Poly, zero } from "@/lib/algebra";
+import {
+  add,
+  ideal,
+  idealEquals,
+  idealGroebnerBasis,
+  idealIntersection,
+  isZero,
+  leadExponents,
+  mul,
+  parsePoly,
+  QQ,
+  type Poly,
+  zero,
+} from "@/lib/algebra";
 import { freeModule, moduleGroebnerBasis, moduleHilbertSeries, moduleSyzygies } from "@/lib/algebra/module";
 import { resolutionHilbertSeries, resolveCoker } from "@/lib/algebra/resolution/schreyer";
 import { GF, randomForm, ringOf, rng, vars } from "./resolution-helpers";
@@ -12,9 +25,14 @@ describe("Gröbner bases of submodules", () => {
       const rand = rng(seed);
       const R = ringOf(seed % 2 ? GF : QQ, 4);
       const gens = Array.from({ length: 3 }, () => randomForm(R, 2 + (seed % 2), 3, rand));
-      const G = moduleGroebnerBasis(freeModule(R, [0]), gens.map((g) => [g]));
+      const G = moduleGroebnerBasis(
+        freeModule(R, [0]),
+        gens.map((g) => [g]),
+      );
       const ours = G.map((v) => leadExponents(R, v[0]).join(",")).sort();
-      const theirs = idealGroebnerBasis(ideal(R, gens)).map((g) => leadExponents(R, g).join(",")).sort();
+      const theirs = idealGroebnerBasis(ideal(R, gens))
+        .map((g) => leadExponents(R, g).join(","))
+        .sort();
       expect(ours).toEqual(theirs);
     }
   });
@@ -39,7 +57,10 @@ describe("Gröbner bases of submodules", () => {
     // Schreyer's theorem (Eisenbud, Thm. 15.10); for x, y, z the syzygies are the three Koszul
     // relations y·e_x − x·e_y, … (common practice).
     const R = ringOf(GF, 3);
-    const { basis, syzygies } = moduleSyzygies(freeModule(R, [0]), vars(R).map((v) => [v]));
+    const { basis, syzygies } = moduleSyzygies(
+      freeModule(R, [0]),
+      vars(R).map((v) => [v]),
+    );
     expect(basis.length).toBe(3);
     expect(syzygies.length).toBe(3);
     for (const tau of syzygies) expect(tau.filter((f) => !isZero(f)).length).toBe(2);
@@ -69,7 +90,11 @@ describe("Hilbert series of modules", () => {
       const rowDegrees = [0, 1];
       const cols = Array.from({ length: 3 }, () => [randomForm(R, 2, 2, rand), randomForm(R, 1, 2, rand)]);
       const H = moduleHilbertSeries(freeModule(R, rowDegrees), cols);
-      const C = resolveCoker(R, rowDegrees.map((_, a) => cols.map((c) => c[a])), rowDegrees);
+      const C = resolveCoker(
+        R,
+        rowDegrees.map((_, a) => cols.map((c) => c[a])),
+        rowDegrees,
+      );
       expect(H.numerator).toEqual(resolutionHilbertSeries(C).numerator);
     }
   });

@@ -42,12 +42,7 @@ describe("monomial orders", () => {
 
   // A monomial order is total, multiplicative and has 1 as its least element (the
   // definition, e.g. Cox–Little–O'Shea Ch. 2 §2, Definition 1).
-  const orders: A.OrderSpec[] = [
-    { kind: "grevlex" },
-    { kind: "lex" },
-    { kind: "glex" },
-    { kind: "weights", weights: [2, 0, 1, 3] },
-  ];
+  const orders: A.OrderSpec[] = [{ kind: "grevlex" }, { kind: "lex" }, { kind: "glex" }, { kind: "weights", weights: [2, 0, 1, 3] }];
   for (const order of orders) {
     it(`${A.orderName(order)} is a monomial order`, () => {
       const R = ringCtx(A.polyRing(A.QQ, ["a", "b", "c", "d"], { order, degrees: [1, 2, 1, 1] }));

@@ -69,7 +69,9 @@ describe("polynomial arithmetic", () => {
 
   it("is a commutative ring (random checks of the axioms)", () => {
     const poly = fc
-      .array(fc.tuple(fc.integer({ min: -5, max: 5 }), fc.array(fc.integer({ min: 0, max: 3 }), { minLength: 3, maxLength: 3 })), { maxLength: 5 })
+      .array(fc.tuple(fc.integer({ min: -5, max: 5 }), fc.array(fc.integer({ min: 0, max: 3 }), { minLength: 3, maxLength: 3 })), {
+        maxLength: 5,
+      })
       .map((ts) => ts.reduce((f, [c, e]) => A.add(Q, f, A.monomial(Q, e, BigInt(c))), A.zero(Q)));
     fc.assert(
       fc.property(poly, poly, poly, (f, g, h) => {

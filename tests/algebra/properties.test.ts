@@ -39,7 +39,12 @@ const termArb = fc.record({
   e: fc.tuple(fc.nat(2), fc.nat(2), fc.nat(2)),
 });
 const polyArb = fc.array(termArb, { minLength: 1, maxLength: 3 });
-const idealArb = fc.array(polyArb, { minLength: 1, maxLength: 3 }).map((gens) => ideal(R, gens.map((g) => polyOf(R, g))));
+const idealArb = fc.array(polyArb, { minLength: 1, maxLength: 3 }).map((gens) =>
+  ideal(
+    R,
+    gens.map((g) => polyOf(R, g)),
+  ),
+);
 
 /// Exponent vectors of degree d in three variables.
 const ofDegree = (d: number): [number, number, number][] => {
@@ -47,18 +52,26 @@ const ofDegree = (d: number): [number, number, number][] => {
   for (let a = 0; a <= d; a++) for (let b = 0; a + b <= d; b++) out.push([a, b, d - a - b]);
   return out;
 };
-const formArb = fc.integer({ min: 1, max: 3 }).chain((d) =>
-  fc.array(fc.record({ c: fc.integer({ min: 1, max: 50 }), e: fc.constantFrom(...ofDegree(d)) }), { minLength: 1, maxLength: 4 }),
-);
+const formArb = fc
+  .integer({ min: 1, max: 3 })
+  .chain((d) =>
+    fc.array(fc.record({ c: fc.integer({ min: 1, max: 50 }), e: fc.constantFrom(...ofDegree(d)) }), { minLength: 1, maxLength: 4 }),
+  );
 
 function moveTo(S: PolyRing, I: Ideal): Ideal {
-  return ideal(S, I.gens.map((g) => parsePoly(S, formatPoly(I.ring, g))));
+  return ideal(
+    S,
+    I.gens.map((g) => parsePoly(S, formatPoly(I.ring, g))),
+  );
 }
 
 describe("properties of ideal operations on random small ideals of GF(32003)[x, y, z]", () => {
   it("(I : J)·J ⊆ I", () => {
     // definition of the colon ideal (common practice)
-    fc.assert(fc.property(idealArb, idealArb, (I, J) => idealIsSubset(idealProduct(idealColon(I, J), J), I)), RUNS);
+    fc.assert(
+      fc.property(idealArb, idealArb, (I, J) => idealIsSubset(idealProduct(idealColon(I, J), J), I)),
+      RUNS,
+    );
   });
 
   it("I ∩ J ⊆ I, I ∩ J ⊆ J and I·J ⊆ I ∩ J", () => {
@@ -102,7 +115,10 @@ describe("properties of ideal operations on random small ideals of GF(32003)[x, 
     const lex = polyRing(GF, ["x", "y", "z"], { order: { kind: "lex" } });
     fc.assert(
       fc.property(fc.array(formArb, { minLength: 1, maxLength: 3 }), (forms) => {
-        const I = ideal(R, forms.map((f) => polyOf(R, f)));
+        const I = ideal(
+          R,
+          forms.map((f) => polyOf(R, f)),
+        );
         const expected = hilbertFunctionValues(idealHilbertSeries(I), 8);
         const inLex = initialIdeal(moveTo(lex, I)).gens.map((g) => terms(lex, g)[0].exps);
         const got = hilbertFunctionValues(hilbertSeriesOfMonomials(inLex, [1, 1, 1]), 8);

@@ -69,7 +69,10 @@ describe("quotient rings", () => {
     expect(quotientEquals(R, parsePoly(R, "8*x"), parsePoly(R, "x"))).toBe(true);
     // a twisted cubic quotient: dimension 2 and degree 3 (common practice)
     const T = polyRing(gf(7), ["a", "b", "c", "d"]);
-    const C = quotientRing(T, ["a*c-b^2", "a*d-b*c", "b*d-c^2"].map((s) => parsePoly(T, s)));
+    const C = quotientRing(
+      T,
+      ["a*c-b^2", "a*d-b*c", "b*d-c^2"].map((s) => parsePoly(T, s)),
+    );
     expect(quotientDimension(C)).toBe(2);
     expect(quotientDegree(C)).toEqual({ n: 3n, d: 1n });
   });

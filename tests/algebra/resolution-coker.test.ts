@@ -1,7 +1,26 @@
 import { describe, expect, it } from "vitest";
-import { ideal, idealHilbertSeries, isZero, leadExponents, monomial, neg, parsePoly, QQ, type Poly, type PolyRing, zero } from "@/lib/algebra";
+import {
+  ideal,
+  idealHilbertSeries,
+  isZero,
+  leadExponents,
+  monomial,
+  neg,
+  parsePoly,
+  QQ,
+  type Poly,
+  type PolyRing,
+  zero,
+} from "@/lib/algebra";
 import { freeModule, moduleGroebnerBasis } from "@/lib/algebra/module";
-import { bettiAlternatingSum, bettiNumber, resolutionHilbertSeries, resolveCoker, resolveQuotient, syzygyPresentation } from "@/lib/algebra/resolution/schreyer";
+import {
+  bettiAlternatingSum,
+  bettiNumber,
+  resolutionHilbertSeries,
+  resolveCoker,
+  resolveQuotient,
+  syzygyPresentation,
+} from "@/lib/algebra/resolution/schreyer";
 import { expectMinimalComplex, GF, randomForm, ringOf, rng, vars } from "./resolution-helpers";
 
 describe("resolutions of cokernels of homogeneous matrices", () => {
@@ -10,8 +29,14 @@ describe("resolutions of cokernels of homogeneous matrices", () => {
     for (const F of [GF, QQ]) {
       const R = ringOf(F, 2);
       const [x, y] = vars(R);
-      const C = resolveCoker(R, [[parsePoly(R, "1"), x], [zero(R), y]]);
-      expect(C.betti.entries).toEqual([[0, 0, 1], [1, 1, 1]]);
+      const C = resolveCoker(R, [
+        [parsePoly(R, "1"), x],
+        [zero(R), y],
+      ]);
+      expect(C.betti.entries).toEqual([
+        [0, 0, 1],
+        [1, 1, 1],
+      ]);
       expectMinimalComplex(R, C);
     }
   });
@@ -21,9 +46,17 @@ describe("resolutions of cokernels of homogeneous matrices", () => {
     // (Koszul complex; common practice).
     const R = ringOf(GF, 3);
     const [x, y, z] = vars(R);
-    const d2 = [[neg(R, y), neg(R, z), zero(R)], [x, zero(R), neg(R, z)], [zero(R), x, y]];
+    const d2 = [
+      [neg(R, y), neg(R, z), zero(R)],
+      [x, zero(R), neg(R, z)],
+      [zero(R), x, y],
+    ];
     const C = resolveCoker(R, d2, [1, 1, 1]);
-    expect(C.betti.entries).toEqual([[0, 1, 3], [1, 2, 3], [2, 3, 1]]);
+    expect(C.betti.entries).toEqual([
+      [0, 1, 3],
+      [1, 2, 3],
+      [2, 3, 1],
+    ]);
     expectMinimalComplex(R, C);
   });
 
@@ -33,10 +66,16 @@ describe("resolutions of cokernels of homogeneous matrices", () => {
     const R = ringOf(GF, 4);
     const I = ["x1*x3-x2^2", "x1*x4-x2*x3", "x2*x4-x3^2"].map((s) => parsePoly(R, s));
     const J = ["x1^2", "x2^3"].map((s) => parsePoly(R, s));
-    const rows: Poly[][] = [[...I, zero(R), zero(R)], [zero(R), zero(R), zero(R), ...J]];
+    const rows: Poly[][] = [
+      [...I, zero(R), zero(R)],
+      [zero(R), zero(R), zero(R), ...J],
+    ];
     const C = resolveCoker(R, rows, [0, 3]);
     const sum = new Map<string, number>();
-    for (const [shift, gens] of [[0, I], [3, J]] as const) {
+    for (const [shift, gens] of [
+      [0, I],
+      [3, J],
+    ] as const) {
       for (const [i, j, b] of resolveQuotient(ideal(R, [...gens])).betti.entries) {
         sum.set(`${i},${j + shift}`, (sum.get(`${i},${j + shift}`) ?? 0) + b);
       }
@@ -79,7 +118,12 @@ describe("syzygy modules and minimal presentations", () => {
     // Truncating a minimal resolution at F_p gives a minimal resolution of the p-th syzygy module
     // (common practice; Eisenbud, The Geometry of Syzygies, Ch. 1).
     const R = ringOf(GF, 5);
-    const M = resolveQuotient(ideal(R, ["x1*x3-x2^2", "x1*x4-x2*x3", "x2*x4-x3^2", "x5^2"].map((s) => parsePoly(R, s))));
+    const M = resolveQuotient(
+      ideal(
+        R,
+        ["x1*x3-x2^2", "x1*x4-x2*x3", "x2*x4-x3^2", "x5^2"].map((s) => parsePoly(R, s)),
+      ),
+    );
     for (let p = 0; p <= M.length; p++) {
       const { rows, rowDegrees } = syzygyPresentation(M, p);
       const S = resolveCoker(R, rows, rowDegrees);
@@ -97,9 +141,13 @@ describe("Hilbert series of modules from their resolutions", () => {
     const R = ringOf(GF, 4);
     const f = Array.from({ length: 3 }, () => randomForm(R, 2, 3, rand));
     const g = [randomForm(R, 3, 4, rand)];
-    const HI = idealHilbertSeries(ideal(R, f)), HJ = idealHilbertSeries(ideal(R, g));
+    const HI = idealHilbertSeries(ideal(R, f)),
+      HJ = idealHilbertSeries(ideal(R, g));
     expect(resolutionHilbertSeries(resolveCoker(R, [f])).numerator).toEqual(HI.numerator);
-    const rows = [[...f, zero(R)], [zero(R), zero(R), zero(R), ...g]];
+    const rows = [
+      [...f, zero(R)],
+      [zero(R), zero(R), zero(R), ...g],
+    ];
     const sum = resolutionHilbertSeries(resolveCoker(R, rows));
     const n = Math.max(HI.numerator.length, HJ.numerator.length);
     const add = Array.from({ length: n }, (_, k) => (HI.numerator[k] ?? 0n) + (HJ.numerator[k] ?? 0n));
@@ -125,8 +173,16 @@ describe("Gröbner degeneration of modules", () => {
         const c = v.findIndex((f) => !isZero(f) && leadIsTop(R, v, f));
         return v.map((f, a) => (a === c ? monomial(R, leadExponents(R, f)) : zero(R)));
       });
-      const C = resolveCoker(R, rowDegrees.map((_, a) => cols.map((c) => c[a])), rowDegrees);
-      const D = resolveCoker(R, rowDegrees.map((_, a) => leads.map((c) => c[a])), rowDegrees);
+      const C = resolveCoker(
+        R,
+        rowDegrees.map((_, a) => cols.map((c) => c[a])),
+        rowDegrees,
+      );
+      const D = resolveCoker(
+        R,
+        rowDegrees.map((_, a) => leads.map((c) => c[a])),
+        rowDegrees,
+      );
       for (const [i, j, b] of C.betti.entries) expect(b).toBeLessThanOrEqual(bettiNumber(D.betti, i, j));
       expect(bettiAlternatingSum(C.betti)).toEqual(bettiAlternatingSum(D.betti));
     }
@@ -143,7 +199,8 @@ function leadIsTop(R: PolyRing, v: Poly[], f: Poly): boolean {
 
 /// grevlex comparison of exponent vectors of equal degree (the ring's order; test rings are grevlex).
 function sortPair(R: PolyRing, a: number[], b: number[]): number {
-  const da = a.reduce((s, e) => s + e, 0), db = b.reduce((s, e) => s + e, 0);
+  const da = a.reduce((s, e) => s + e, 0),
+    db = b.reduce((s, e) => s + e, 0);
   if (da !== db) return da - db;
   for (let i = R.vars.length - 1; i >= 0; i--) if (a[i] !== b[i]) return b[i] - a[i];
   return 0;

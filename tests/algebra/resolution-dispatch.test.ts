@@ -7,7 +7,11 @@ const F = A.gf(32003);
 const S2 = A.polyRing(F, ["x", "y"]);
 const S1 = A.polyRing(F, ["x"]);
 const p = (R: A.PolyRing, text: string) => A.parsePoly(R, text);
-const I = (R: A.PolyRing, ...gens: string[]) => A.ideal(R, gens.map((g) => p(R, g)));
+const I = (R: A.PolyRing, ...gens: string[]) =>
+  A.ideal(
+    R,
+    gens.map((g) => p(R, g)),
+  );
 
 describe("the resolution dispatcher", () => {
   it("over S itself (J given by no generators) uses Schreyer's method: k over k[x,y] is the Koszul complex 1, 2, 1", () => {
@@ -46,7 +50,9 @@ describe("the resolution dispatcher", () => {
 
   it("reads a non-homogeneous module over a graded ring at the origin too", () => {
     expect(A.resolutionMethod({ ring: I(S2, "x^2"), module: { ideal: I(S2, "x", "y - y^2") } })).toBe("artinian");
-    expect(A.resolutionMethod({ ring: I(S2, "x^2"), module: { presentation: { rows: [[p(S2, "x")]], degrees: [0] } } })).toBe("graded-quotient");
+    expect(A.resolutionMethod({ ring: I(S2, "x^2"), module: { presentation: { rows: [[p(S2, "x")]], degrees: [0] } } })).toBe(
+      "graded-quotient",
+    );
   });
 
   it("refuses what no method can do: no length over a quotient, a module with two generators at the origin", () => {

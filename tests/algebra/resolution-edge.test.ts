@@ -24,8 +24,18 @@ describe("edge cases", () => {
 
   it("redundant generators do not change the answer", () => {
     const R = ringOf(GF, 3);
-    const a = resolveQuotient(ideal(R, ["x1^2", "x1*x2", "x1^2+x1*x2", "x1^3*x3"].map((s) => parsePoly(R, s))));
-    const b = resolveQuotient(ideal(R, ["x1^2", "x1*x2"].map((s) => parsePoly(R, s))));
+    const a = resolveQuotient(
+      ideal(
+        R,
+        ["x1^2", "x1*x2", "x1^2+x1*x2", "x1^3*x3"].map((s) => parsePoly(R, s)),
+      ),
+    );
+    const b = resolveQuotient(
+      ideal(
+        R,
+        ["x1^2", "x1*x2"].map((s) => parsePoly(R, s)),
+      ),
+    );
     expect(a.betti.entries).toEqual(b.betti.entries);
     expectMinimalComplex(R, a);
   });
@@ -34,7 +44,10 @@ describe("edge cases", () => {
     const R = ringOf(GF, 2);
     const z = parsePoly(R, "0");
     const C = resolveCoker(R, [[z], [z]], [1, 3]);
-    expect(C.betti.entries).toEqual([[0, 1, 1], [0, 3, 1]]);
+    expect(C.betti.entries).toEqual([
+      [0, 1, 1],
+      [0, 3, 1],
+    ]);
     const E = resolveCoker(R, [], []);
     expect(E.betti.entries).toEqual([]);
   });
@@ -42,7 +55,10 @@ describe("edge cases", () => {
   it("a principal ideal: 0 → S(−d) → S", () => {
     const R = ringOf(QQ, 3);
     const C = resolveQuotient(ideal(R, [parsePoly(R, "x1^3-1/2*x2*x3^2")]));
-    expect(C.betti.entries).toEqual([[0, 0, 1], [1, 3, 1]]);
+    expect(C.betti.entries).toEqual([
+      [0, 0, 1],
+      [1, 3, 1],
+    ]);
     expectMinimalComplex(R, C);
   });
 });

@@ -27,7 +27,10 @@ export const GF = gf(32003);
 export const rng = mulberry32;
 
 export function ringOf(F: Field, n: number, name = "x"): PolyRing {
-  return polyRing(F, Array.from({ length: n }, (_, i) => `${name}${i + 1}`));
+  return polyRing(
+    F,
+    Array.from({ length: n }, (_, i) => `${name}${i + 1}`),
+  );
 }
 
 export function vars(R: PolyRing): Poly[] {

@@ -66,7 +66,11 @@ describe("resolution options", () => {
     const L = resolveQuotient(koszulIdeal(5), { length: 2 });
     expect(L.complete).toBe(false);
     expect(L.betti.complete).toBe(false);
-    expect(L.betti.entries).toEqual([[0, 0, 1], [1, 1, 5], [2, 2, 10]]);
+    expect(L.betti.entries).toEqual([
+      [0, 0, 1],
+      [1, 1, 5],
+      [2, 2, 10],
+    ]);
     expect(L.ranks).toEqual([1, 5, 10]);
     const D = resolveQuotient(koszulIdeal(5), { degree: 3 });
     expect(D.complete).toBe(false);

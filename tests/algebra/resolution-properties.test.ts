@@ -30,7 +30,10 @@ function randomIdeal(seed: number, F = GF): Ideal {
   const n = 3 + (seed % 3);
   const R = ringOf(F, n);
   const count = 2 + Math.floor(rand() * 3);
-  return ideal(R, Array.from({ length: count }, () => randomForm(R, 2 + Math.floor(rand() * 2), 2 + Math.floor(rand() * 3), rand)));
+  return ideal(
+    R,
+    Array.from({ length: count }, () => randomForm(R, 2 + Math.floor(rand() * 2), 2 + Math.floor(rand() * 3), rand)),
+  );
 }
 
 /// depth S/I as the length of a maximal regular sequence of random linear forms: over a large
@@ -39,10 +42,23 @@ function randomIdeal(seed: number, F = GF): Ideal {
 function depthByRegularSequence(I: Ideal, seed: number): number {
   const R = I.ring;
   const rand = rng(seed);
-  let J = I, depth = 0;
+  let J = I,
+    depth = 0;
   for (;;) {
     if (idealIsUnit(J)) return depth;
-    const l = R.vars.reduce((f, _, i) => add(R, f, monomial(R, R.vars.map((_, k) => (k === i ? 1 : 0)), BigInt(1 + Math.floor(rand() * 30000)))), zero(R));
+    const l = R.vars.reduce(
+      (f, _, i) =>
+        add(
+          R,
+          f,
+          monomial(
+            R,
+            R.vars.map((_, k) => (k === i ? 1 : 0)),
+            BigInt(1 + Math.floor(rand() * 30000)),
+          ),
+        ),
+      zero(R),
+    );
     if (!idealEquals(idealColonElement(J, l), J)) return depth;
     J = idealSum(J, ideal(R, [l]));
     depth++;
@@ -89,7 +105,10 @@ describe("internal consistency of minimal resolutions on random ideals", () => {
     for (let seed = 60; seed <= 67; seed++) {
       const rand = rng(seed);
       const R = ringOf(QQ, 3 + (seed % 2));
-      const I = ideal(R, Array.from({ length: 2 + (seed % 3) }, () => randomForm(R, 2, 3, rand)));
+      const I = ideal(
+        R,
+        Array.from({ length: 2 + (seed % 3) }, () => randomForm(R, 2, 3, rand)),
+      );
       const C = resolveQuotient(I);
       expect(bettiAlternatingSum(C.betti)).toEqual([...idealHilbertSeries(I).numerator]);
       expectMinimalComplex(I.ring, C);
@@ -101,9 +120,19 @@ describe("internal consistency of minimal resolutions on random ideals", () => {
     // twisted cubic has a linear resolution after the first step (Eisenbud, The Geometry of
     // Syzygies, Ch. 4 and Ch. 6; common practice).
     const R = ringOf(GF, 4);
-    const tc = resolveQuotient(ideal(R, ["x1*x3-x2^2", "x1*x4-x2*x3", "x2*x4-x3^2"].map((s) => parsePoly(R, s))));
+    const tc = resolveQuotient(
+      ideal(
+        R,
+        ["x1*x3-x2^2", "x1*x4-x2*x3", "x2*x4-x3^2"].map((s) => parsePoly(R, s)),
+      ),
+    );
     expect(regularity(tc)).toBe(1);
-    const ci = resolveQuotient(ideal(R, ["x1^2", "x2^3"].map((s) => parsePoly(R, s))));
+    const ci = resolveQuotient(
+      ideal(
+        R,
+        ["x1^2", "x2^3"].map((s) => parsePoly(R, s)),
+      ),
+    );
     expect(regularity(ci)).toBe(3);
   });
 });

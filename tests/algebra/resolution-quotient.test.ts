@@ -5,7 +5,10 @@ import { quotientProperties } from "@/lib/algebra/resolution/schreyer";
 import { alternating, GF, ringOf } from "./resolution-helpers";
 
 function I(R: PolyRing, gens: string[]) {
-  return ideal(R, gens.map((s) => parsePoly(R, s)));
+  return ideal(
+    R,
+    gens.map((s) => parsePoly(R, s)),
+  );
 }
 
 describe("Cohen–Macaulay, Gorenstein and complete intersection quotients", () => {

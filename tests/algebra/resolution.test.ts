@@ -26,8 +26,24 @@ describe.each(FIELDS)("minimal resolutions over %s", (_name, F) => {
     // 2×2 minors of [x, y, z; y, z, w] (Hilbert–Burch; Eagon–Northcott 1962).
     const R = ringOf(F, 4);
     const [x, y, z, w] = vars(R);
-    const C = resolveQuotient(ideal(R, minors(R, [[x, y, z], [y, z, w]], 2)));
-    expect(C.betti.entries).toEqual([[0, 0, 1], [1, 2, 3], [2, 3, 2]]);
+    const C = resolveQuotient(
+      ideal(
+        R,
+        minors(
+          R,
+          [
+            [x, y, z],
+            [y, z, w],
+          ],
+          2,
+        ),
+      ),
+    );
+    expect(C.betti.entries).toEqual([
+      [0, 0, 1],
+      [1, 2, 3],
+      [2, 3, 2],
+    ]);
     expect(C.ranks).toEqual([1, 3, 2]);
     expectMinimalComplex(R, C);
   });
@@ -55,7 +71,12 @@ describe.each(FIELDS)("minimal resolutions over %s", (_name, F) => {
     // coprime, so f_1..f_c is a regular sequence and the Koszul complex on it is the minimal
     // resolution (Koszul complex on a regular sequence, common practice).
     const rand = rng(4);
-    for (const [n, degs] of [[3, [2, 3]], [4, [2, 2, 3]], [4, [1, 2, 3, 2]], [5, [3, 2, 2]]] as const) {
+    for (const [n, degs] of [
+      [3, [2, 3]],
+      [4, [2, 2, 3]],
+      [4, [1, 2, 3, 2]],
+      [5, [3, 2, 2]],
+    ] as const) {
       const R = ringOf(F, n);
       const gens = degs.map((d, i) => {
         const later = Array.from({ length: n - i - 1 }, (_, k) => i + 1 + k);
@@ -65,7 +86,8 @@ describe.each(FIELDS)("minimal resolutions over %s", (_name, F) => {
       const C = resolveQuotient(ideal(R, gens));
       const expected = new Map<string, number>();
       for (let mask = 0; mask < 1 << degs.length; mask++) {
-        let i = 0, j = 0;
+        let i = 0,
+          j = 0;
         degs.forEach((d, k) => {
           if (mask & (1 << k)) {
             i++;
@@ -84,7 +106,12 @@ describe.each(FIELDS)("minimal resolutions over %s", (_name, F) => {
     const R = ringOf(F, 10);
     const A = alternating(R, 5);
     const C = resolveQuotient(ideal(R, pfaffians(R, A, 4)));
-    expect(C.betti.entries).toEqual([[0, 0, 1], [1, 2, 5], [2, 3, 5], [3, 5, 1]]);
+    expect(C.betti.entries).toEqual([
+      [0, 0, 1],
+      [1, 2, 5],
+      [2, 3, 5],
+      [3, 5, 1],
+    ]);
     expectMinimalComplex(R, C);
   });
 
@@ -98,18 +125,28 @@ describe.each(FIELDS)("minimal resolutions over %s", (_name, F) => {
       const R = ringOf(F, 4);
       const A = Array.from({ length: n + 1 }, () => Array.from({ length: n }, () => randomForm(R, 1, 4, rand)));
       const C = resolveQuotient(ideal(R, minors(R, A, n)));
-      expect(C.betti.entries).toEqual([[0, 0, 1], [1, n, n + 1], [2, n + 1, n]]);
+      expect(C.betti.entries).toEqual([
+        [0, 0, 1],
+        [1, n, n + 1],
+        [2, n + 1, n],
+      ]);
       expectMinimalComplex(R, C);
     }
   });
 });
 
-
 describe("Eagon–Northcott complexes", () => {
   it("maximal minors of generic p×q matrices: β_i = C(q, p+i−1)·C(p+i−2, i−1) in degree p+i−1", () => {
     // J. Eagon, D. Northcott, "Ideals defined by matrices and a certain complex associated with
     // them", Proc. Roy. Soc. A 269, 1962: the complex is the minimal resolution of S/I_p.
-    for (const [p, q] of [[2, 3], [2, 4], [2, 5], [3, 4], [3, 5], [2, 6]]) {
+    for (const [p, q] of [
+      [2, 3],
+      [2, 4],
+      [2, 5],
+      [3, 4],
+      [3, 5],
+      [2, 6],
+    ]) {
       const R = ringOf(GF, p * q);
       const C = resolveQuotient(ideal(R, minors(R, genericMatrix(R, p, q), p)));
       const expected: number[][] = [[0, 0, 1]];
@@ -138,7 +175,12 @@ describe("Eliahou–Kervaire resolutions of strongly stable ideals", () => {
       const R = ringOf(GF, n);
       const seeds = Array.from({ length: 2 + (seed % 3) }, () => randomExponents(n, 2 + Math.floor(rand() * 3), rand));
       const G = minimalGenerators(borelClosure(seeds));
-      const C = resolveQuotient(ideal(R, G.map((e) => monomial(R, e))));
+      const C = resolveQuotient(
+        ideal(
+          R,
+          G.map((e) => monomial(R, e)),
+        ),
+      );
       const expected = new Map<string, number>([["0,0", 1]]);
       for (const u of G) {
         const d = u.reduce((s, e) => s + e, 0);
@@ -192,8 +234,19 @@ function minimalGenerators(mons: number[][]): number[][] {
 describe("parsing round trip", () => {
   it("resolves an ideal given as text", () => {
     const R = ringOf(GF, 3);
-    const C = resolveQuotient(ideal(R, ["x1^2", "x1*x2", "x2^3"].map((s) => parsePoly(R, s))));
-    expect(C.betti.entries).toEqual([[0, 0, 1], [1, 2, 2], [1, 3, 1], [2, 3, 1], [2, 4, 1]]);
+    const C = resolveQuotient(
+      ideal(
+        R,
+        ["x1^2", "x1*x2", "x2^3"].map((s) => parsePoly(R, s)),
+      ),
+    );
+    expect(C.betti.entries).toEqual([
+      [0, 0, 1],
+      [1, 2, 2],
+      [1, 3, 1],
+      [2, 3, 1],
+      [2, 4, 1],
+    ]);
     expectMinimalComplex(R, C);
   });
 });
@@ -204,9 +257,17 @@ describe("weighted gradings", () => {
     // form a regular sequence (Koszul complex on a regular sequence, common practice); the alternating Betti sum is
     // the weighted Hilbert series numerator (1 − t^2)(1 − t^6).
     const R = polyRing(GF, ["x", "y", "z"], { degrees: [1, 2, 3] });
-    const I = ideal(R, ["x^2-y", "y^3-z^2"].map((s) => parsePoly(R, s)));
+    const I = ideal(
+      R,
+      ["x^2-y", "y^3-z^2"].map((s) => parsePoly(R, s)),
+    );
     const C = resolveQuotient(I);
-    expect(C.betti.entries).toEqual([[0, 0, 1], [1, 2, 1], [1, 6, 1], [2, 8, 1]]);
+    expect(C.betti.entries).toEqual([
+      [0, 0, 1],
+      [1, 2, 1],
+      [1, 6, 1],
+      [2, 8, 1],
+    ]);
     expect(bettiAlternatingSum(C.betti)).toEqual([...idealHilbertSeries(I).numerator]);
     expectMinimalComplex(R, C);
   });

@@ -1,7 +1,15 @@
 import { describe, expect, it } from "vitest";
 import * as A from "../../lib/algebra/index";
 import { bettiTotalsOf, residueFieldResolution } from "../../lib/algebra/resolution/graded-quotient/index";
-import { eventualPeriod, guessRational, poincareSeries, polyPowZ, sameRationalFunction, seriesAt, truncatedSeries } from "../../lib/algebra/series/index";
+import {
+  eventualPeriod,
+  guessRational,
+  poincareSeries,
+  polyPowZ,
+  sameRationalFunction,
+  seriesAt,
+  truncatedSeries,
+} from "../../lib/algebra/series/index";
 import { maximal, randomForm, ring, seeded } from "./local-helpers";
 
 describe("rational guess of a Poincaré series", () => {
@@ -12,7 +20,9 @@ describe("rational guess of a Poincaré series", () => {
     const J = A.ideal(S, [randomForm(S, 2, next), randomForm(S, 3, next)]);
     const P = poincareSeries(bettiTotalsOf(residueFieldResolution(J, 8)));
     expect(P.rational).not.toBeNull();
-    expect(sameRationalFunction(P.rational!.numerator, P.rational!.denominator, polyPowZ([1n, 1n], 3), polyPowZ([1n, 0n, -1n], 2))).toBe(true);
+    expect(sameRationalFunction(P.rational!.numerator, P.rational!.denominator, polyPowZ([1n, 1n], 3), polyPowZ([1n, 0n, -1n], 2))).toBe(
+      true,
+    );
     expect(P.rational!.checkedOn).toBe(9);
     expect(seriesAt(P.series, 8)).toBe(BigInt(bettiTotalsOf(residueFieldResolution(J, 8))[8]));
   });
@@ -22,7 +32,8 @@ describe("rational guess of a Poincaré series", () => {
     // Eagon–Northcott numbers, checked in local-residue.test.ts). In lowest terms
     // (1+t)/(1 − t − 3t^2), a recurrence of length 2: 4 terms determine it, 2 more confirm it.
     const S = ring(2);
-    const golodNum = polyPowZ([1n, 1n], 2), golodDen = [1n, 0n, -4n, -3n];
+    const golodNum = polyPowZ([1n, 1n], 2),
+      golodDen = [1n, 0n, -4n, -3n];
     const betti = bettiTotalsOf(residueFieldResolution(A.idealPower(maximal(S), 3), 7));
     const P = poincareSeries(betti);
     expect(P.rational).not.toBeNull();

@@ -18,12 +18,14 @@ describe("sparse echelon basis", () => {
       const vec = fc.array(fc.tuple(fc.integer({ min: 0, max: dim - 1 }), fc.integer({ min: -3, max: 3 })), { maxLength: 4 });
       fc.assert(
         fc.property(fc.array(vec, { minLength: 1, maxLength: 14 }), (vs) => {
-          const dense = new Echelon(K, dim), sparse = new SparseEchelon(K, dim);
+          const dense = new Echelon(K, dim),
+            sparse = new SparseEchelon(K, dim);
           const seen: unknown[][] = [];
           for (const entries of vs) {
             const v = new Array(dim).fill(K.zero);
             for (const [i, a] of entries) v[i] = K.add(v[i], K.fromRational(BigInt(a), 1n));
-            const d = dense.insert(v), s = sparse.insertDense(v);
+            const d = dense.insert(v),
+              s = sparse.insertDense(v);
             expect(s).toBe(d);
             // Independently: accepted exactly when the rank grows.
             expect(rankOf(K, dim, [...seen, v])).toBe(rankOf(K, dim, seen) + (d ? 1 : 0));

@@ -23,7 +23,8 @@ describe("sparse kernel basis", () => {
             return v;
           });
           const sparse = dense.map((v) => {
-            const idx: number[] = [], val: unknown[] = [];
+            const idx: number[] = [],
+              val: unknown[] = [];
             v.forEach((a, i) => {
               if (!K.isZero(a)) {
                 idx.push(i);

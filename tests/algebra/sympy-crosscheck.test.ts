@@ -14,11 +14,21 @@ function buildSystems(): SympySystem[] {
   const systems: SympySystem[] = [];
   for (let i = 0; i < 36; i++) {
     systems.push(
-      randomSystem(rng, { vars: 2 + (i % 3), gens: 2 + (i % 2) + (i % 3 === 2 ? 1 : 0), terms: 4, degree: 3, rational: false, modulus: P, order: ORDERS[i % 3] }),
+      randomSystem(rng, {
+        vars: 2 + (i % 3),
+        gens: 2 + (i % 2) + (i % 3 === 2 ? 1 : 0),
+        terms: 4,
+        degree: 3,
+        rational: false,
+        modulus: P,
+        order: ORDERS[i % 3],
+      }),
     );
   }
   for (let i = 0; i < 36; i++) {
-    systems.push(randomSystem(rng, { vars: 2 + (i % 2), gens: 2 + (i % 2), terms: 3, degree: 3, rational: true, modulus: null, order: ORDERS[i % 3] }));
+    systems.push(
+      randomSystem(rng, { vars: 2 + (i % 2), gens: 2 + (i % 2), terms: 3, degree: 3, rational: true, modulus: null, order: ORDERS[i % 3] }),
+    );
   }
   return systems;
 }
@@ -26,7 +36,10 @@ function buildSystems(): SympySystem[] {
 /// Our reduced basis in SymPy's term format (residues in [0, p) over GF(p)), as sorted strings.
 function ours(s: SympySystem): string[] {
   const R = A.polyRing(s.modulus ? A.gf(s.modulus) : A.QQ, s.vars, { order: ourOrder(s.order) });
-  const G = A.groebnerBasis(R, s.gens.map((g) => A.parsePoly(R, g)));
+  const G = A.groebnerBasis(
+    R,
+    s.gens.map((g) => A.parsePoly(R, g)),
+  );
   return G.map((g) =>
     JSON.stringify(
       A.terms(R, g).map((t) => {
@@ -63,7 +76,9 @@ describe("reduced Gröbner bases agree with SymPy (python3-sympy)", () => {
       const theirs = r.basis.map((g) => JSON.stringify(g)).sort();
       const mine = ours(s);
       if (JSON.stringify(mine) !== JSON.stringify(theirs)) {
-        mismatches.push(`system ${i} (${s.order}, ${s.modulus ?? "Q"}): ${s.gens.join(", ")}\n ours:  ${mine.join(" ")}\n sympy: ${theirs.join(" ")}`);
+        mismatches.push(
+          `system ${i} (${s.order}, ${s.modulus ?? "Q"}): ${s.gens.join(", ")}\n ours:  ${mine.join(" ")}\n sympy: ${theirs.join(" ")}`,
+        );
       }
     });
     expect(mismatches).toEqual([]);

@@ -82,10 +82,14 @@ describe("POST /api/sessions/:id/cells", () => {
   });
 
   it("stores the cell and its named objects, and a later cell reads them", async () => {
-    const cells = (await (await owner.request(`/api/sessions/${sessionId}/cells`)).json()) as { cells: { status: string; source: string; results: unknown[] }[] };
+    const cells = (await (await owner.request(`/api/sessions/${sessionId}/cells`)).json()) as {
+      cells: { status: string; source: string; results: unknown[] }[];
+    };
     expect(cells.cells[0]).toMatchObject({ status: "done" });
     expect(cells.cells[0]!.results).toHaveLength(4);
-    const objects = (await (await owner.request(`/api/sessions/${sessionId}/objects`)).json()) as { objects: { name: string; type: string }[] };
+    const objects = (await (await owner.request(`/api/sessions/${sessionId}/objects`)).json()) as {
+      objects: { name: string; type: string }[];
+    };
     expect(objects.objects.map((o) => [o.name, o.type])).toEqual([
       ["I", "Ideal"],
       ["S", "Ring"],

@@ -23,7 +23,11 @@ const F = A.gf(32003);
 
 /// A reduced Gröbner basis over GF(32003) in grevlex; with `sympy`, SymPy runs the same
 /// system in the same bench run (the ratio rows).
-function groebnerCase(name: string, build: () => { R: A.PolyRing; gens: A.Poly[] }, extra: Omit<Partial<BenchCase>, "sympy"> & { sympy?: boolean } = {}): BenchCase {
+function groebnerCase(
+  name: string,
+  build: () => { R: A.PolyRing; gens: A.Poly[] },
+  extra: Omit<Partial<BenchCase>, "sympy"> & { sympy?: boolean } = {},
+): BenchCase {
   const { sympy, ...rest } = extra;
   const system = sympy ? build() : null;
   return {
@@ -33,7 +37,16 @@ function groebnerCase(name: string, build: () => { R: A.PolyRing; gens: A.Poly[]
       const { R, gens } = build();
       return { size: A.groebnerBasis(R, gens).length, label: "basis size" };
     },
-    ...(system ? { sympy: { vars: [...system.R.vars], gens: system.gens.map((g) => A.formatPoly(system.R, g)), order: "grevlex" as const, modulus: F.p } } : {}),
+    ...(system
+      ? {
+          sympy: {
+            vars: [...system.R.vars],
+            gens: system.gens.map((g) => A.formatPoly(system.R, g)),
+            order: "grevlex" as const,
+            modulus: F.p,
+          },
+        }
+      : {}),
     ...rest,
   };
 }

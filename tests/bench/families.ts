@@ -26,7 +26,8 @@ export function katsura(field: A.Field, n: number): { R: A.PolyRing; gens: A.Pol
   for (let m = 0; m < n; m++) {
     const parts: string[] = [];
     for (let l = -n; l <= n; l++) {
-      const a = u(l), b = u(m - l);
+      const a = u(l),
+        b = u(m - l);
       if (a && b) parts.push(`${a}*${b}`);
     }
     gens.push(A.parsePoly(R, `${parts.join("+")}-${v[m]}`));

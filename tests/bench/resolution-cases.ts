@@ -8,7 +8,10 @@ import type { BenchCase } from "./cases";
 const F = A.gf(32003);
 
 function ring(n: number, name = "x", field: A.Field = F): A.PolyRing {
-  return A.polyRing(field, Array.from({ length: n }, (_, i) => `${name}${i + 1}`));
+  return A.polyRing(
+    field,
+    Array.from({ length: n }, (_, i) => `${name}${i + 1}`),
+  );
 }
 
 /// `count` random quadrics with coefficients in [−9, 9] (a fixed linear congruential
@@ -55,13 +58,22 @@ export function genericMinors2(c: number, field: A.Field = F): A.Ideal {
 /// The p-th power of the maximal ideal of k[x_1..x_n].
 export function maximalPower(n: number, p: number): A.Ideal {
   const R = ring(n);
-  return A.idealPower(A.ideal(R, R.vars.map((_, i) => A.variable(R, i))), p);
+  return A.idealPower(
+    A.ideal(
+      R,
+      R.vars.map((_, i) => A.variable(R, i)),
+    ),
+    p,
+  );
 }
 
 /// The ideal of the variables of k[x_1..x_n] (its resolution is the Koszul complex).
 export function variablesIdeal(n: number): A.Ideal {
   const R = ring(n);
-  return A.ideal(R, R.vars.map((_, i) => A.variable(R, i)));
+  return A.ideal(
+    R,
+    R.vars.map((_, i) => A.variable(R, i)),
+  );
 }
 
 /// The Plücker ideal of the Grassmannian G(2, n): the 4×4 Pfaffians of the generic

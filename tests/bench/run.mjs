@@ -10,7 +10,10 @@ const args = process.argv.slice(2);
 // Sweep throughput (experiments with `npm run worker` processes) needs the database: it runs
 // alone with `-- sweep`, and after the other cases when DATABASE_URL is set.
 function sweep() {
-  const r = spawnSync(process.execPath, ["--import", "tsx", path.join(here, "sweep-main.ts")], { stdio: "inherit", cwd: path.join(here, "..", "..") });
+  const r = spawnSync(process.execPath, ["--import", "tsx", path.join(here, "sweep-main.ts")], {
+    stdio: "inherit",
+    cwd: path.join(here, "..", ".."),
+  });
   if (r.status !== 0) process.exitCode = 1;
 }
 if (args[0] === "sweep") {

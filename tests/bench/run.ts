@@ -27,8 +27,12 @@ function runChild(c: BenchCase): Promise<Timing> {
   const heapMb = c.heapMb ?? 4096;
   const timeoutS = c.timeoutS ?? 600;
   return new Promise((resolve) => {
-    const child = spawn(process.execPath, [`--max-old-space-size=${heapMb}`, childScript(), c.name], { cwd: root, stdio: ["ignore", "pipe", "pipe"] });
-    let out = "", err = "";
+    const child = spawn(process.execPath, [`--max-old-space-size=${heapMb}`, childScript(), c.name], {
+      cwd: root,
+      stdio: ["ignore", "pipe", "pipe"],
+    });
+    let out = "",
+      err = "";
     let timedOut = false;
     const timer = setTimeout(() => {
       timedOut = true;
@@ -42,7 +46,9 @@ function runChild(c: BenchCase): Promise<Timing> {
       const line = out.trim().split("\n").pop() ?? "";
       if (code === 0 && line.startsWith("{")) return resolve(JSON.parse(line));
       const oom = /heap out of memory|Allocation failed/i.test(err);
-      resolve({ failed: oom ? `out of memory (${heapMb} MB heap)` : `failed (${code}): ${err.trim().split("\n").slice(-3).join(" ").slice(0, 200)}` });
+      resolve({
+        failed: oom ? `out of memory (${heapMb} MB heap)` : `failed (${code}): ${err.trim().split("\n").slice(-3).join(" ").slice(0, 200)}`,
+      });
     });
   });
 }
@@ -50,7 +56,8 @@ function runChild(c: BenchCase): Promise<Timing> {
 function runSympy(c: BenchCase): Promise<SympyTiming> {
   return new Promise((resolve) => {
     const child = spawn(python, [sympyScript()], { stdio: ["pipe", "pipe", "pipe"] });
-    let out = "", err = "";
+    let out = "",
+      err = "";
     const timer = setTimeout(() => {
       child.kill("SIGKILL");
       resolve({ failed: `SymPy > ${sympyTimeoutS} s` });
@@ -88,13 +95,18 @@ function met(c: BenchCase, o: Timing, ratio: number | null): string {
   if (!g) return "";
   if ("failed" in o) return "no";
   const ok =
-    (g.seconds === undefined || o.seconds <= g.seconds) && (g.mb === undefined || o.peakMb <= g.mb) && (g.ratio === undefined || (ratio !== null && ratio >= g.ratio));
+    (g.seconds === undefined || o.seconds <= g.seconds) &&
+    (g.mb === undefined || o.peakMb <= g.mb) &&
+    (g.ratio === undefined || (ratio !== null && ratio >= g.ratio));
   return ok ? "yes" : "no";
 }
 
 function table(rows: { c: BenchCase; o: Timing; t: SympyTiming | null }[], withSympy: boolean): string[] {
   const head = withSympy
-    ? ["| case | seconds (wall) | CPU seconds | peak memory | result | SymPy (s) | SymPy / Ringside | goal | goal met | before |", "|---|---|---|---|---|---|---|---|---|---|"]
+    ? [
+        "| case | seconds (wall) | CPU seconds | peak memory | result | SymPy (s) | SymPy / Ringside | goal | goal met | before |",
+        "|---|---|---|---|---|---|---|---|---|---|",
+      ]
     : ["| case | seconds (wall) | CPU seconds | peak memory | result | goal | goal met | before |", "|---|---|---|---|---|---|---|---|"];
   const body = rows.map(({ c, o, t }) => {
     const ok = !("failed" in o);
@@ -123,7 +135,9 @@ export async function main(repositoryRoot: string, args: readonly string[]): Pro
   const results: { c: BenchCase; o: Timing; t: SympyTiming | null }[] = [];
   for (const c of selected) {
     const o = await runChild(c);
-    console.log(`ours   ${c.name}: ${"failed" in o ? o.failed : `${fmtS(o.seconds)} s wall, ${fmtS(o.cpuSeconds)} s CPU, ${Math.round(o.peakMb)} MB peak, ${o.label}${o.size >= 0 ? ` ${o.size}` : ""}`}`);
+    console.log(
+      `ours   ${c.name}: ${"failed" in o ? o.failed : `${fmtS(o.seconds)} s wall, ${fmtS(o.cpuSeconds)} s CPU, ${Math.round(o.peakMb)} MB peak, ${o.label}${o.size >= 0 ? ` ${o.size}` : ""}`}`,
+    );
     results.push({ c, o, t: null });
   }
   if (process.env.RINGSIDE_BENCH_NO_SYMPY !== "1") {
@@ -137,7 +151,10 @@ export async function main(repositoryRoot: string, args: readonly string[]): Pro
   const cpus = os.cpus();
   const machine = `${cpus[0]?.model ?? "unknown CPU"}, ${cpus.length} cores, Node.js ${process.version}`;
   const load = `load average ${loadBefore[0].toFixed(1)} at the start and ${loadAfter[0].toFixed(1)} at the end on ${cpus.length} cores`;
-  const idle = loadBefore[0] < 0.5 && loadAfter[0] < 0.5 ? "machine otherwise idle" : "machine shared and busy: wall seconds include waiting for a core, CPU seconds do not";
+  const idle =
+    loadBefore[0] < 0.5 && loadAfter[0] < 0.5
+      ? "machine otherwise idle"
+      : "machine shared and busy: wall seconds include waiting for a core, CPU seconds do not";
   const groebner = results.filter((r) => r.c.table === "groebner");
   const resolution = results.filter((r) => r.c.table === "resolution");
   const other = results.filter((r) => !r.c.table || r.c.table === "other");
@@ -148,7 +165,10 @@ export async function main(repositoryRoot: string, args: readonly string[]): Pro
     "",
     "**Gröbner bases** (reduced, grevlex, GF(32003), F4; SymPy's `groebner(…, modulus=32003)` in the same run):",
     "",
-    ...table(groebner, groebner.some((r) => r.c.sympy)),
+    ...table(
+      groebner,
+      groebner.some((r) => r.c.sympy),
+    ),
     "",
     "**Resolutions** (notation programs through the evaluator, as in the CLI and a cell):",
     "",
@@ -156,14 +176,19 @@ export async function main(repositoryRoot: string, args: readonly string[]): Pro
     "",
     "**Other cases**:",
     "",
-    ...table(other, other.some((r) => r.c.sympy)),
+    ...table(
+      other,
+      other.some((r) => r.c.sympy),
+    ),
   ];
   console.log(`\n${lines.join("\n")}`);
   if (writeReadme) {
     const file = path.join(root, "README.md");
     const text = readFileSync(file, "utf8");
-    const begin = "<!-- bench:begin (generated by npm run bench -- --readme) -->", end = "<!-- bench:end -->";
-    const a = text.indexOf(begin), b = text.indexOf(end);
+    const begin = "<!-- bench:begin (generated by npm run bench -- --readme) -->",
+      end = "<!-- bench:end -->";
+    const a = text.indexOf(begin),
+      b = text.indexOf(end);
     if (a < 0 || b < a) throw new Error(`README.md has no ${begin} … ${end} block`);
     writeFileSync(file, `${text.slice(0, a + begin.length)}\n${lines.join("\n")}\n${text.slice(b)}`);
     console.log("\nREADME.md updated.");

@@ -84,10 +84,17 @@ browserTest("console: resolve(S / <x*y, y*z>).betti shows a Betti table", async 
   await table.waitFor();
   // <xy, yz> = y·<x, z>: resolved by 0 ← S ← S(−2)^2 ← S(−3) ← 0, so β_{1,2} = 2 and
   // β_{2,3} = 1, both in row j − i = 1 (Eisenbud, The Geometry of Syzygies, 2005, Ch. 1).
-  const rows = await table.locator("tbody tr").evaluateAll((trs) =>
-    trs.map((tr) => [...tr.querySelectorAll("th, td")].map((c) => (c.textContent ?? "").trim())),
+  const rows = await table
+    .locator("tbody tr")
+    .evaluateAll((trs) => trs.map((tr) => [...tr.querySelectorAll("th, td")].map((c) => (c.textContent ?? "").trim())));
+  check(
+    JSON.stringify(rows) ===
+      JSON.stringify([
+        ["0", "1", "", ""],
+        ["1", "", "2", "1"],
+      ]),
+    `unexpected Betti rows ${JSON.stringify(rows)}`,
   );
-  check(JSON.stringify(rows) === JSON.stringify([["0", "1", "", ""], ["1", "", "2", "1"]]), `unexpected Betti rows ${JSON.stringify(rows)}`);
   const totals = await table.locator("tfoot td").allTextContents();
   check(totals.join(",") === "1,2,1", `unexpected totals ${totals.join(",")}`);
   await shot(page, artifactsDir, "console-betti.png");
@@ -99,19 +106,33 @@ browserTest("console: a truncated resolution and a guessed Poincaré series say 
   // R = k[x,y,z]/(x^2, yz) is a complete intersection of two quadrics: Tate 1957 gives
   // P_k(t) = (1+t)^3/(1−t^2)^2 = (1+t)/(1−t)^2, so β_i(k) = 2i + 1 and the resolution of k
   // never ends — a length bound must cut it, and the page must say that it did.
-  await typeInput(page, ["S := GF(101)[x, y, z]", "R := S / <x^2, y*z>", "resolve(R / R.maximal, length = 3)", "poincare(R.residue, terms = 8)"]);
+  await typeInput(page, [
+    "S := GF(101)[x, y, z]",
+    "R := S / <x^2, y*z>",
+    "resolve(R / R.maximal, length = 3)",
+    "poincare(R.residue, terms = 8)",
+  ]);
   await runAndWait(page, 1);
   const cell = cells(page).last();
   const table = cell.locator("table", { has: page.locator("caption", { hasText: "Betti table" }) });
   await table.waitFor();
-  check((await table.locator("caption").textContent())?.includes("truncated"), "the Betti table of a cut resolution is not marked truncated");
+  check(
+    (await table.locator("caption").textContent())?.includes("truncated"),
+    "the Betti table of a cut resolution is not marked truncated",
+  );
   const totals = await table.locator("tfoot td").allTextContents();
   check(totals.join(",") === "1,3,5,7", `unexpected totals ${totals.join(",")}`);
   const notes = await cell.getByTestId("value-note").allTextContents();
-  check(notes.some((n) => /only homological degrees ≤ 3 were computed/.test(n)), `no truncation note under the resolution: ${JSON.stringify(notes)}`);
+  check(
+    notes.some((n) => /only homological degrees ≤ 3 were computed/.test(n)),
+    `no truncation note under the resolution: ${JSON.stringify(notes)}`,
+  );
   const series = await cell.locator('[data-value-type="Series"]').textContent();
   // (1+t)/(1−t)^2 is fixed by 2·2 = 4 terms, so 4 of the 8 computed ones confirm it (issue 16)
-  check(/guessed rational function \(not a proof\): it reproduces 4 computed terms beyond those it was fitted to/.test(series ?? ""), `the Poincaré series is not called a guess: ${series}`);
+  check(
+    /guessed rational function \(not a proof\): it reproduces 4 computed terms beyond those it was fitted to/.test(series ?? ""),
+    `the Poincaré series is not called a guess: ${series}`,
+  );
   await shot(page, artifactsDir, "console-truncated-and-guessed.png");
 });
 
@@ -136,29 +157,32 @@ browserTest("console: Ctrl+K inserts a guided example that runs", async ({ page,
   await shot(page, artifactsDir, "console-guided-example.png");
 });
 
-browserTest("console: a named object reaches the shelf, inserts its name, and survives a reload", async ({ page, baseUrl, artifactsDir }) => {
-  await ensureTestGroup();
-  await freshSession(page, baseUrl);
-  await typeInput(page, ["R := GF(101)[u, v]", "J := <u^2, u*v>"]);
-  await runAndWait(page, 1);
-  const shelf = page.getByRole("region", { name: "Shelf" });
-  await shelf.locator('[data-object-name="J"]').waitFor();
-  check(/ideal/i.test((await shelf.locator('[data-object-name="J"]').textContent()) ?? ""), "J is not shown as an ideal");
-  await shelf.getByRole("button", { name: "J", exact: true }).click();
-  check((await input(page).textContent())?.includes("J"), "clicking J did not insert its name");
-  await shot(page, artifactsDir, "console-shelf.png");
+browserTest(
+  "console: a named object reaches the shelf, inserts its name, and survives a reload",
+  async ({ page, baseUrl, artifactsDir }) => {
+    await ensureTestGroup();
+    await freshSession(page, baseUrl);
+    await typeInput(page, ["R := GF(101)[u, v]", "J := <u^2, u*v>"]);
+    await runAndWait(page, 1);
+    const shelf = page.getByRole("region", { name: "Shelf" });
+    await shelf.locator('[data-object-name="J"]').waitFor();
+    check(/ideal/i.test((await shelf.locator('[data-object-name="J"]').textContent()) ?? ""), "J is not shown as an ideal");
+    await shelf.getByRole("button", { name: "J", exact: true }).click();
+    check((await input(page).textContent())?.includes("J"), "clicking J did not insert its name");
+    await shot(page, artifactsDir, "console-shelf.png");
 
-  await page.reload();
-  await input(page).waitFor();
-  await shelf.locator('[data-object-name="J"]').waitFor();
-  await shelf.locator('[data-object-name="R"]').waitFor();
-  check((await cells(page).count()) === 1, "the transcript lost its cell on reload");
-  await input(page).click();
-  await page.keyboard.press("ArrowUp");
-  const recalled = await input(page).textContent();
-  check(recalled?.includes("R := GF(101)[u, v]"), `↑ did not recall the last input after the reload: ${recalled}`);
-  await shot(page, artifactsDir, "console-after-reload.png");
-});
+    await page.reload();
+    await input(page).waitFor();
+    await shelf.locator('[data-object-name="J"]').waitFor();
+    await shelf.locator('[data-object-name="R"]').waitFor();
+    check((await cells(page).count()) === 1, "the transcript lost its cell on reload");
+    await input(page).click();
+    await page.keyboard.press("ArrowUp");
+    const recalled = await input(page).textContent();
+    check(recalled?.includes("R := GF(101)[u, v]"), `↑ did not recall the last input after the reload: ${recalled}`);
+    await shot(page, artifactsDir, "console-after-reload.png");
+  },
+);
 
 browserTest("console: a long computation can be cancelled", async ({ page, baseUrl, artifactsDir }) => {
   await ensureTestGroup();

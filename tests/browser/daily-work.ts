@@ -242,7 +242,10 @@ browserTest(
     await run(page, ["I := <x^2 + y> + <y*z>", "resolve(S / I)"], 2);
     await run(page, ["{depth: 2, a: 1}"], 3);
     await page.getByRole("button", { name: "Export", exact: true }).click();
-    await page.getByRole("dialog", { name: "Export or import" }).getByRole("button", { name: /Choose cells/ }).click();
+    await page
+      .getByRole("dialog", { name: "Export or import" })
+      .getByRole("button", { name: /Choose cells/ })
+      .click();
     const dialog = page.getByRole("dialog", { name: "Export", exact: true });
     await dialog.waitFor();
     await dialog.getByLabel("Markdown").check();
@@ -399,30 +402,36 @@ browserTest("daily: 390 px read-only view has no horizontal scroll; 1024 px work
   await page.setViewportSize({ width: 1280, height: 800 });
 });
 
-browserTest("daily: the guided steps run in the reader's own new session, never in someone else's", async ({ page, baseUrl, artifactsDir }) => {
-  const title = `Lead's tide tables ${stamp()}`;
-  const id = await openOwnSession(page, baseUrl, "lead", title, true);
-  await run(page, ["n := 6 * 7"], 1);
-  // a guest of the team reads the lead's session and opens the guided steps from it
-  await signIn(page, baseUrl, "guest", `/?session=${id}`);
-  await page.getByTestId("session-title").filter({ hasText: title }).waitFor();
-  await page.keyboard.press("Alt+g");
-  const tour = page.getByRole("dialog", { name: "Guided first steps" });
-  await tour.waitFor();
-  await tour.getByRole("button", { name: /^Insert example:/ }).first().click();
-  await page.getByTestId("session-title").filter({ hasText: "Guided first steps" }).waitFor();
-  await input(page).waitFor();
-  await page.waitForFunction(() => (document.querySelector('[aria-label="Ringside input"]')?.textContent ?? "").trim() !== "");
-  const now = new URL(page.url()).searchParams.get("session");
-  check(now && now !== id, "the guided steps stayed in the lead's session");
-  const [landed] = await db().select().from(sessions).where(eq(sessions.id, now!));
-  const group = await ensureTestGroup();
-  check(landed?.ownerId === group.users.guest.id, "the guided steps' session is not the reader's own");
-  await page.keyboard.press("Escape");
-  await input(page).click();
-  await page.keyboard.press("Enter");
-  await finished(page, 1);
-  const leadCells = await db().select().from(cells).where(eq(cells.sessionId, id));
-  check(leadCells.length === 1, "a cell of the guided steps reached the lead's session");
-  await shot(page, artifactsDir, "11-tour-own-session");
-});
+browserTest(
+  "daily: the guided steps run in the reader's own new session, never in someone else's",
+  async ({ page, baseUrl, artifactsDir }) => {
+    const title = `Lead's tide tables ${stamp()}`;
+    const id = await openOwnSession(page, baseUrl, "lead", title, true);
+    await run(page, ["n := 6 * 7"], 1);
+    // a guest of the team reads the lead's session and opens the guided steps from it
+    await signIn(page, baseUrl, "guest", `/?session=${id}`);
+    await page.getByTestId("session-title").filter({ hasText: title }).waitFor();
+    await page.keyboard.press("Alt+g");
+    const tour = page.getByRole("dialog", { name: "Guided first steps" });
+    await tour.waitFor();
+    await tour
+      .getByRole("button", { name: /^Insert example:/ })
+      .first()
+      .click();
+    await page.getByTestId("session-title").filter({ hasText: "Guided first steps" }).waitFor();
+    await input(page).waitFor();
+    await page.waitForFunction(() => (document.querySelector('[aria-label="Ringside input"]')?.textContent ?? "").trim() !== "");
+    const now = new URL(page.url()).searchParams.get("session");
+    check(now && now !== id, "the guided steps stayed in the lead's session");
+    const [landed] = await db().select().from(sessions).where(eq(sessions.id, now!));
+    const group = await ensureTestGroup();
+    check(landed?.ownerId === group.users.guest.id, "the guided steps' session is not the reader's own");
+    await page.keyboard.press("Escape");
+    await input(page).click();
+    await page.keyboard.press("Enter");
+    await finished(page, 1);
+    const leadCells = await db().select().from(cells).where(eq(cells.sessionId, id));
+    check(leadCells.length === 1, "a cell of the guided steps reached the lead's session");
+    await shot(page, artifactsDir, "11-tour-own-session");
+  },
+);

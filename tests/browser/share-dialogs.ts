@@ -35,7 +35,9 @@ async function leadSession(title: string) {
       createdBy: lead,
     })
     .returning({ id: cells.id });
-  await db().insert(namedObjects).values({ sessionId: s!.id, ownerId: lead, name: "tide", type: "Int", value, source: "tide := 6 * 7", sourceCellId: cell!.id });
+  await db()
+    .insert(namedObjects)
+    .values({ sessionId: s!.id, ownerId: lead, name: "tide", type: "Int", value, source: "tide := 6 * 7", sourceCellId: cell!.id });
   return { group, id: s!.id };
 }
 
@@ -50,53 +52,63 @@ async function palette(page: Page, command: string) {
 
 const postCell = (page: Page, url: string) =>
   page.evaluate(async (u) => {
-    const r = await fetch(u, { method: "POST", headers: { "Content-Type": "application/json" }, body: JSON.stringify({ source: "1 + 1" }) });
+    const r = await fetch(u, {
+      method: "POST",
+      headers: { "Content-Type": "application/json" },
+      body: JSON.stringify({ source: "1 + 1" }),
+    });
     return r.status;
   }, url);
 
-browserTest("share dialog: the lead shares with the team; a member reads it, a guest cannot run", async ({ page, baseUrl, artifactsDir }) => {
-  const title = `Jetty soundings ${Date.now().toString(36)}`;
-  const { group, id } = await leadSession(title);
+browserTest(
+  "share dialog: the lead shares with the team; a member reads it, a guest cannot run",
+  async ({ page, baseUrl, artifactsDir }) => {
+    const title = `Jetty soundings ${Date.now().toString(36)}`;
+    const { group, id } = await leadSession(title);
 
-  await signIn(page, baseUrl, "lead", `/?session=${id}`);
-  await page.getByTestId("session-title").filter({ hasText: title }).waitFor();
-  await palette(page, "Share this session…");
-  const dialog = page.getByRole("dialog", { name: `Share “${title}”` });
-  await dialog.waitFor();
-  await dialog.getByLabel("A team").check();
-  await dialog.getByLabel("Team", { exact: true }).selectOption(group.teamId);
-  await dialog.getByLabel("Role").selectOption("editor");
-  await dialog.getByRole("button", { name: "Share", exact: true }).click();
-  await dialog.getByTestId("share-row").filter({ hasText: "team Harbor test group" }).filter({ hasText: "editor" }).waitFor();
-  await shot(page, artifactsDir, "share-dialogs-1-lead-shared-with-team.png");
-  await page.keyboard.press("Escape");
+    await signIn(page, baseUrl, "lead", `/?session=${id}`);
+    await page.getByTestId("session-title").filter({ hasText: title }).waitFor();
+    await palette(page, "Share this session…");
+    const dialog = page.getByRole("dialog", { name: `Share “${title}”` });
+    await dialog.waitFor();
+    await dialog.getByLabel("A team").check();
+    await dialog.getByLabel("Team", { exact: true }).selectOption(group.teamId);
+    await dialog.getByLabel("Role").selectOption("editor");
+    await dialog.getByRole("button", { name: "Share", exact: true }).click();
+    await dialog.getByTestId("share-row").filter({ hasText: "team Harbor test group" }).filter({ hasText: "editor" }).waitFor();
+    await shot(page, artifactsDir, "share-dialogs-1-lead-shared-with-team.png");
+    await page.keyboard.press("Escape");
 
-  // a member, from their own account: the session is in their sessions list
-  await signIn(page, baseUrl, "member");
-  await page.getByRole("region", { name: "Sessions" }).getByRole("button", { name: new RegExp(title) }).click();
-  await page.getByTestId("session-title").filter({ hasText: title }).waitFor();
-  await page.getByRole("region", { name: "Transcript" }).getByText("tide := 6 * 7").waitFor();
-  await page.getByRole("region", { name: "Transcript" }).getByText("42").first().waitFor();
-  check((await page.getByLabel("Ringside input").count()) === 1, "a member (editor through the team share) is not offered the input");
-  // an editor runs cells in the shared session
-  await page.getByLabel("Ringside input").click();
-  await page.keyboard.type("tide + 1");
-  await page.keyboard.press("Escape");
-  await page.keyboard.press("Enter");
-  await page.getByRole("region", { name: "Transcript" }).getByText("43", { exact: true }).first().waitFor();
-  await shot(page, artifactsDir, "share-dialogs-2-member-reads.png");
+    // a member, from their own account: the session is in their sessions list
+    await signIn(page, baseUrl, "member");
+    await page
+      .getByRole("region", { name: "Sessions" })
+      .getByRole("button", { name: new RegExp(title) })
+      .click();
+    await page.getByTestId("session-title").filter({ hasText: title }).waitFor();
+    await page.getByRole("region", { name: "Transcript" }).getByText("tide := 6 * 7").waitFor();
+    await page.getByRole("region", { name: "Transcript" }).getByText("42").first().waitFor();
+    check((await page.getByLabel("Ringside input").count()) === 1, "a member (editor through the team share) is not offered the input");
+    // an editor runs cells in the shared session
+    await page.getByLabel("Ringside input").click();
+    await page.keyboard.type("tide + 1");
+    await page.keyboard.press("Escape");
+    await page.keyboard.press("Enter");
+    await page.getByRole("region", { name: "Transcript" }).getByText("43", { exact: true }).first().waitFor();
+    await shot(page, artifactsDir, "share-dialogs-2-member-reads.png");
 
-  // a guest of the team reads it (a team share leaves guests viewers) but cannot run a cell
-  await signIn(page, baseUrl, "guest", `/?session=${id}`);
-  await page.getByTestId("session-title").filter({ hasText: title }).waitFor();
-  await page.getByRole("region", { name: "Transcript" }).getByText("tide := 6 * 7").waitFor();
-  check((await page.getByLabel("Ringside input").count()) === 0, "a guest is shown the input editor");
-  check((await page.getByRole("button", { name: "Run" }).count()) === 0, "a guest is shown a Run button");
-  check((await page.getByRole("button", { name: "Share", exact: true }).count()) === 0, "a guest is offered the share dialog");
-  const status = await postCell(page, `/api/sessions/${id}/cells`);
-  check(status === 403, `a guest's cell was answered ${status}, not 403`);
-  await shot(page, artifactsDir, "share-dialogs-3-guest-read-only.png");
-});
+    // a guest of the team reads it (a team share leaves guests viewers) but cannot run a cell
+    await signIn(page, baseUrl, "guest", `/?session=${id}`);
+    await page.getByTestId("session-title").filter({ hasText: title }).waitFor();
+    await page.getByRole("region", { name: "Transcript" }).getByText("tide := 6 * 7").waitFor();
+    check((await page.getByLabel("Ringside input").count()) === 0, "a guest is shown the input editor");
+    check((await page.getByRole("button", { name: "Run" }).count()) === 0, "a guest is shown a Run button");
+    check((await page.getByRole("button", { name: "Share", exact: true }).count()) === 0, "a guest is offered the share dialog");
+    const status = await postCell(page, `/api/sessions/${id}/cells`);
+    check(status === 403, `a guest's cell was answered ${status}, not 403`);
+    await shot(page, artifactsDir, "share-dialogs-3-guest-read-only.png");
+  },
+);
 
 browserTest("read-only link: published from the dialog, read signed out, dead once revoked", async ({ page, baseUrl, artifactsDir }) => {
   const title = `Slipway tallies ${Date.now().toString(36)}`;
@@ -137,41 +149,56 @@ browserTest("read-only link: published from the dialog, read signed out, dead on
   // the lead revokes the link from the same dialog; the address stops working
   await signIn(page, baseUrl, "lead", `/?session=${id}`);
   await palette(page, "Publish or revoke the read-only link…");
-  await page.getByRole("dialog", { name: `Share “${title}”` }).getByRole("button", { name: "Revoke the link" }).click();
-  await page.getByRole("dialog", { name: `Share “${title}”` }).getByRole("button", { name: "Publish a read-only link" }).waitFor();
+  await page
+    .getByRole("dialog", { name: `Share “${title}”` })
+    .getByRole("button", { name: "Revoke the link" })
+    .click();
+  await page
+    .getByRole("dialog", { name: `Share “${title}”` })
+    .getByRole("button", { name: "Publish a read-only link" })
+    .waitFor();
   await page.keyboard.press("Escape");
   await page.context().clearCookies();
   await page.goto(url);
   await page.getByRole("alert").filter({ hasText: "This read-only link does not open a session" }).waitFor();
-  check((await page.getByRole("region", { name: "Transcript" }).getByText("tide := 6 * 7").count()) === 0, "a revoked link still shows the transcript");
+  check(
+    (await page.getByRole("region", { name: "Transcript" }).getByText("tide := 6 * 7").count()) === 0,
+    "a revoked link still shows the transcript",
+  );
   await shot(page, artifactsDir, "share-dialogs-6-link-revoked.png");
 });
 
-browserTest("object sharing: shared from the shelf, imported by a member with its origin shown", async ({ page, baseUrl, artifactsDir }) => {
-  const title = `Buoy readings ${Date.now().toString(36)}`;
-  const { group, id } = await leadSession(title);
-  const [own] = await db().insert(sessions).values({ title: `Milo's scratch ${Date.now().toString(36)}`, ownerId: group.users.member.id }).returning({ id: sessions.id });
+browserTest(
+  "object sharing: shared from the shelf, imported by a member with its origin shown",
+  async ({ page, baseUrl, artifactsDir }) => {
+    const title = `Buoy readings ${Date.now().toString(36)}`;
+    const { group, id } = await leadSession(title);
+    const [own] = await db()
+      .insert(sessions)
+      .values({ title: `Milo's scratch ${Date.now().toString(36)}`, ownerId: group.users.member.id })
+      .returning({ id: sessions.id });
 
-  await signIn(page, baseUrl, "lead", `/?session=${id}`);
-  await page.getByRole("region", { name: "Shelf" }).getByRole("button", { name: "Share tide" }).click();
-  const dialog = page.getByRole("dialog", { name: "Share the named object tide" });
-  await dialog.getByLabel("A person").check();
-  await dialog.getByLabel("E-mail address").fill(TEST_ACCOUNTS.member.email);
-  await dialog.getByRole("button", { name: "Share", exact: true }).click();
-  await dialog.getByTestId("share-row").filter({ hasText: TEST_ACCOUNTS.member.email }).waitFor();
-  await shot(page, artifactsDir, "share-dialogs-7-object-shared.png");
-  await page.keyboard.press("Escape");
+    await signIn(page, baseUrl, "lead", `/?session=${id}`);
+    await page.getByRole("region", { name: "Shelf" }).getByRole("button", { name: "Share tide" }).click();
+    const dialog = page.getByRole("dialog", { name: "Share the named object tide" });
+    await dialog.getByLabel("A person").check();
+    await dialog.getByLabel("E-mail address").fill(TEST_ACCOUNTS.member.email);
+    await dialog.getByRole("button", { name: "Share", exact: true }).click();
+    await dialog.getByTestId("share-row").filter({ hasText: TEST_ACCOUNTS.member.email }).waitFor();
+    await shot(page, artifactsDir, "share-dialogs-7-object-shared.png");
+    await page.keyboard.press("Escape");
 
-  await signIn(page, baseUrl, "member", `/?session=${own!.id}`);
-  await page.getByLabel("Ringside input").waitFor();
-  await page.getByRole("region", { name: "Shelf" }).getByRole("button", { name: "Shared with me" }).click();
-  const list = page.getByRole("dialog", { name: "Objects shared with me" });
-  await list.locator(`[data-shared-object="tide"]`).filter({ hasText: title }).getByRole("button", { name: "Import tide" }).click();
-  await page.getByTestId("console-notice").filter({ hasText: "Imported tide" }).waitFor();
-  const origin = page.getByRole("region", { name: "Shelf" }).getByTestId("object-origin");
-  await origin.filter({ hasText: `from ${TEST_ACCOUNTS.lead.name}'s session “${title}”` }).waitFor();
-  await shot(page, artifactsDir, "share-dialogs-8-object-imported.png");
-});
+    await signIn(page, baseUrl, "member", `/?session=${own!.id}`);
+    await page.getByLabel("Ringside input").waitFor();
+    await page.getByRole("region", { name: "Shelf" }).getByRole("button", { name: "Shared with me" }).click();
+    const list = page.getByRole("dialog", { name: "Objects shared with me" });
+    await list.locator(`[data-shared-object="tide"]`).filter({ hasText: title }).getByRole("button", { name: "Import tide" }).click();
+    await page.getByTestId("console-notice").filter({ hasText: "Imported tide" }).waitFor();
+    const origin = page.getByRole("region", { name: "Shelf" }).getByTestId("object-origin");
+    await origin.filter({ hasText: `from ${TEST_ACCOUNTS.lead.name}'s session “${title}”` }).waitFor();
+    await shot(page, artifactsDir, "share-dialogs-8-object-imported.png");
+  },
+);
 
 browserTest("export dialog: LaTeX and JSON downloads; the JSON file imports as a new session", async ({ page, baseUrl, artifactsDir }) => {
   const title = `Tidepool ledger ${Date.now().toString(36)}`;
@@ -188,13 +215,22 @@ browserTest("export dialog: LaTeX and JSON downloads; the JSON file imports as a
   };
   const tex = await download("LaTeX");
   check(tex.name.endsWith(".tex"), `the LaTeX download is named ${tex.name}`);
-  check(tex.text.includes("\\begin{document}") && tex.text.includes("tide := 6 * 7"), "the LaTeX download lacks the document or the cell source");
+  check(
+    tex.text.includes("\\begin{document}") && tex.text.includes("tide := 6 * 7"),
+    "the LaTeX download lacks the document or the cell source",
+  );
   const json = await download("JSON");
-  check(json.name.endsWith(".json") && JSON.parse(json.text).format === "ringside.session", `the JSON download is not our export: ${json.name}`);
+  check(
+    json.name.endsWith(".json") && JSON.parse(json.text).format === "ringside.session",
+    `the JSON download is not our export: ${json.name}`,
+  );
   await shot(page, artifactsDir, "share-dialogs-9-export-dialog.png");
 
   await dialog.getByLabel(/A JSON export file/).setInputFiles(json.where);
-  await page.getByTestId("console-notice").filter({ hasText: `Imported “${title}”` }).waitFor();
+  await page
+    .getByTestId("console-notice")
+    .filter({ hasText: `Imported “${title}”` })
+    .waitFor();
   await page.getByTestId("session-title").filter({ hasText: title }).waitFor();
   await page.getByRole("region", { name: "Transcript" }).getByText("tide := 6 * 7").waitFor();
   check(new URL(page.url()).searchParams.get("session") !== id, "the import did not open a new session");

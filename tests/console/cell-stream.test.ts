@@ -29,7 +29,11 @@ describe("readNdjson", () => {
     const bad: string[] = [];
     const events: CellEvent[] = [];
     const bytes = new TextEncoder().encode('not json\n{"no":"event"}\n{"event":"checked","statements":2}');
-    await readNdjson(streamOf([bytes]), (e) => events.push(e), (l) => bad.push(l));
+    await readNdjson(
+      streamOf([bytes]),
+      (e) => events.push(e),
+      (l) => bad.push(l),
+    );
     expect(events).toEqual([{ event: "checked", statements: 2 }]);
     expect(bad).toEqual(["not json", '{"no":"event"}']);
   });
@@ -40,7 +44,12 @@ describe("applyCellEvent", () => {
     const events: CellEvent[] = [
       { event: "accepted", cellId: "c1", position: 3 },
       { event: "checked", statements: 2 },
-      { event: "result", statement: 0, span: { from: { line: 1, col: 1 }, to: { line: 1, col: 5 } }, value: { type: "Ring", text: "Q[x]" } },
+      {
+        event: "result",
+        statement: 0,
+        span: { from: { line: 1, col: 1 }, to: { line: 1, col: 5 } },
+        value: { type: "Ring", text: "Q[x]" },
+      },
       { event: "progress", statement: 1, stage: "resolution", detail: "homological degree 1", fraction: 0.5 },
       { event: "partial", statement: 1, value: { type: "BettiTable", text: "", entries: [[0, 0, 1]], complete: false } },
       { event: "partial", statement: 1, value: { type: "BettiTable", text: "", entries: [[1, 2, 2]], complete: false } },
@@ -60,7 +69,11 @@ describe("applyCellEvent", () => {
   });
 
   it("clamps a fraction outside 0…1 and forgets partial columns of an earlier statement", () => {
-    let cell = applyCellEvent(startedCell("x"), { event: "partial", statement: 0, value: { type: "BettiTable", text: "", entries: [[0, 0, 1]], complete: false } });
+    let cell = applyCellEvent(startedCell("x"), {
+      event: "partial",
+      statement: 0,
+      value: { type: "BettiTable", text: "", entries: [[0, 0, 1]], complete: false },
+    });
     cell = applyCellEvent(cell, { event: "progress", statement: 1, stage: "s", fraction: 7 });
     expect(cell.fraction).toBe(1);
     expect(cell.partialBetti).toEqual([]);

@@ -42,7 +42,12 @@ describe("texOfExpression", () => {
     for (const t of ["x^2*y-2*x+3", "3/4*x^2-y", "(1+t)/(1-t)^3", "x1^3*x2-a'*b_7"]) parses(texOfExpression(t)!);
     parses(texOfIdeal(["x*y", "y*z"]));
     parses(texOfIdeal([]));
-    parses(texOfMatrix([["x", "y", "z"], ["y", "z", "w"]]));
+    parses(
+      texOfMatrix([
+        ["x", "y", "z"],
+        ["y", "z", "w"],
+      ]),
+    );
   });
 });
 

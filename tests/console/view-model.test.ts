@@ -4,19 +4,39 @@ import { noteOfValue, texOfModule, viewOfValue } from "@/app/_console/render/vie
 describe("viewOfValue", () => {
   it("shows an Experiment (a background sweep) as its text, with done/total", async () => {
     const { encodeValue } = await import("@/lib/notation/json");
-    const j = encodeValue({ type: "Experiment", id: "00000000-0000-4000-8000-000000000003", status: "queued", done: 0, total: 30, failures: 0 });
+    const j = encodeValue({
+      type: "Experiment",
+      id: "00000000-0000-4000-8000-000000000003",
+      status: "queued",
+      done: 0,
+      total: 30,
+      failures: 0,
+    });
     const v = viewOfValue(j);
     expect(v.kind).toBe("text");
-    if (v.kind === "text") expect(v.text).toMatch(/^experiment 00000000-0000-4000-8000-000000000003: queued, 0\/30 members done — runs in the background/);
+    if (v.kind === "text")
+      expect(v.text).toMatch(/^experiment 00000000-0000-4000-8000-000000000003: queued, 0\/30 members done — runs in the background/);
   });
 
   it("turns a §9 BettiTable into a grid, truncated when incomplete", () => {
     // Betti numbers of S/<xy, yz> over k[x,y,z]: <xy, yz> = y·<x, z>, resolved by
     // 0 ← S ← S(−2)^2 ← S(−3) ← 0 (Eisenbud, The Geometry of Syzygies, 2005, Ch. 1).
-    const v = viewOfValue({ type: "BettiTable", text: "", entries: [[0, 0, 1], [1, 2, 2], [2, 3, 1]], complete: false });
+    const v = viewOfValue({
+      type: "BettiTable",
+      text: "",
+      entries: [
+        [0, 0, 1],
+        [1, 2, 2],
+        [2, 3, 1],
+      ],
+      complete: false,
+    });
     expect(v.kind).toBe("betti");
     if (v.kind !== "betti") return;
-    expect(v.grid.rows.map((r) => r.cells)).toEqual([[1, null, null], [null, 2, 1]]);
+    expect(v.grid.rows.map((r) => r.cells)).toEqual([
+      [1, null, null],
+      [null, 2, 1],
+    ]);
     expect(v.grid.totals).toEqual([1, 2, 1]);
     expect(v.grid.truncated).toBe(true);
   });
@@ -35,7 +55,8 @@ describe("viewOfValue", () => {
     const s = viewOfValue({ type: "Series", text: "", coefficients: ["1", "2", "4"], rational: "1/(1-2*t)" });
     expect(s.kind).toBe("series");
     // issue 16: `checked` counts the terms beyond those the fit used; absent means none
-    if (s.kind === "series") expect(s.note).toBe("guessed rational function (not a proof): it reproduces 0 computed terms beyond those it was fitted to");
+    if (s.kind === "series")
+      expect(s.note).toBe("guessed rational function (not a proof): it reproduces 0 computed terms beyond those it was fitted to");
     const checked = viewOfValue({ type: "Series", text: "", coefficients: ["1", "2", "4", "8"], rational: "1/(1-2*t)", checked: 2 });
     if (checked.kind === "series") expect(checked.note).toContain("reproduces 2 computed terms beyond");
     // the computed terms are shown, with the guess beside them

@@ -10,12 +10,92 @@ import { EMPTY_ENV, tokenize, type Env } from "@/grammar/index";
 import { parse } from "@/grammar/parser";
 
 const FRAGMENTS = [
-  "S", ":=", "GF(32003)", "Q", "[", "]", "(", ")", "{", "}", "<", ">", "⟨", "⟩", ",", ";", "\n", ".", "..",
-  "x", "y", "z", "x1", "a'", "y_2", "I", "J", "R", "C", "0", "1", "2", "3", "10000000", "-1", "+", "-", "*",
-  "/", "^", "&", "∩", ":", "==", "!=", "<=", ">=", "⊆", "∈", "in", "and", "or", "not", "->", "→", "use",
-  "for", "if", "then", "else", "true", "false", "=", "\"s\"", "\"open", "#c", "2x", "@", "resolve",
-  "burch_index", "ideal", "matrix", "sweep", "order", "lex", "degrees", "length", "map", "betti", " ", "\t",
-  "é", "\\", "'", "`", "\r\n",
+  "S",
+  ":=",
+  "GF(32003)",
+  "Q",
+  "[",
+  "]",
+  "(",
+  ")",
+  "{",
+  "}",
+  "<",
+  ">",
+  "⟨",
+  "⟩",
+  ",",
+  ";",
+  "\n",
+  ".",
+  "..",
+  "x",
+  "y",
+  "z",
+  "x1",
+  "a'",
+  "y_2",
+  "I",
+  "J",
+  "R",
+  "C",
+  "0",
+  "1",
+  "2",
+  "3",
+  "10000000",
+  "-1",
+  "+",
+  "-",
+  "*",
+  "/",
+  "^",
+  "&",
+  "∩",
+  ":",
+  "==",
+  "!=",
+  "<=",
+  ">=",
+  "⊆",
+  "∈",
+  "in",
+  "and",
+  "or",
+  "not",
+  "->",
+  "→",
+  "use",
+  "for",
+  "if",
+  "then",
+  "else",
+  "true",
+  "false",
+  "=",
+  '"s"',
+  '"open',
+  "#c",
+  "2x",
+  "@",
+  "resolve",
+  "burch_index",
+  "ideal",
+  "matrix",
+  "sweep",
+  "order",
+  "lex",
+  "degrees",
+  "length",
+  "map",
+  "betti",
+  " ",
+  "\t",
+  "é",
+  "\\",
+  "'",
+  "`",
+  "\r\n",
 ];
 
 const VALID = [
@@ -60,7 +140,11 @@ function assertWellFormed(source: string, env: Env = EMPTY_ENV): void {
 
 const soup = fc
   .array(fc.oneof(fc.constantFrom(...FRAGMENTS), fc.string({ maxLength: 3 })), { maxLength: 40 })
-  .chain((parts) => fc.array(fc.constantFrom("", " ", "\n"), { minLength: parts.length, maxLength: parts.length }).map((gaps) => parts.map((p, i) => p + gaps[i]).join("")));
+  .chain((parts) =>
+    fc
+      .array(fc.constantFrom("", " ", "\n"), { minLength: parts.length, maxLength: parts.length })
+      .map((gaps) => parts.map((p, i) => p + gaps[i]).join("")),
+  );
 
 type Mutation = { at: number; kind: "delete" | "insert" | "replace"; text: string; len: number };
 const mutation: fc.Arbitrary<Mutation> = fc.record({
@@ -87,11 +171,17 @@ describe("fuzz: the front end never throws and spans stay inside the source", ()
   });
 
   test("random token soups", () => {
-    fc.assert(fc.property(soup, (s) => assertWellFormed(s)), { numRuns: 400, seed: 20261201 });
+    fc.assert(
+      fc.property(soup, (s) => assertWellFormed(s)),
+      { numRuns: 400, seed: 20261201 },
+    );
   });
 
   test("random token soups in a session with a current ring", () => {
-    fc.assert(fc.property(soup, (s) => assertWellFormed(s, SESSION)), { numRuns: 400, seed: 7 });
+    fc.assert(
+      fc.property(soup, (s) => assertWellFormed(s, SESSION)),
+      { numRuns: 400, seed: 7 },
+    );
   });
 
   test("random mutations of valid programs", () => {
@@ -114,9 +204,17 @@ describe("fuzz: the front end never throws and spans stay inside the source", ()
 describe("pathological sizes end with a clear error, not a crash", () => {
   test.each([
     ["a sum of 5000 terms is fine", Array(5000).fill("1").join(" + "), []],
-    ["300 nested parentheses", "(".repeat(300) + "1" + ")".repeat(300), ["brackets are nested more than 200 levels deep in this statement"]],
+    [
+      "300 nested parentheses",
+      "(".repeat(300) + "1" + ")".repeat(300),
+      ["brackets are nested more than 200 levels deep in this statement"],
+    ],
     ["3000 signs", "-".repeat(3000) + "1", ["this expression is nested more than 1000 levels deep — split it into several definitions"]],
-    ["a tower of 5000 powers", Array(5000).fill("2").join("^"), ["this statement is nested too deeply to read — split it into several definitions"]],
+    [
+      "a tower of 5000 powers",
+      Array(5000).fill("2").join("^"),
+      ["this statement is nested too deeply to read — split it into several definitions"],
+    ],
   ])("%s", (_what, source, messages) => {
     const a = check(parse(source), EMPTY_ENV, source);
     expect(a.errors.map((e) => e.message)).toEqual(messages);

@@ -34,21 +34,74 @@ const PRELUDE = [
 
 /// Notation.md v1, §3–§7: every function name.
 const NOTATION_FUNCTIONS = [
-  "GF", "ideal", "matrix", "saturate", "eliminate", "det", "minors", "pfaffians", "coker", "image", "ker",
-  "module", "syzygy", "resolve", "koszul", "tor", "ext", "hilbert", "poincare", "serre", "tor_lengths",
-  "burch_index", "eventual_period", "sum", "all", "any", "random_ideals", "monomial_ideals", "sweep",
+  "GF",
+  "ideal",
+  "matrix",
+  "saturate",
+  "eliminate",
+  "det",
+  "minors",
+  "pfaffians",
+  "coker",
+  "image",
+  "ker",
+  "module",
+  "syzygy",
+  "resolve",
+  "koszul",
+  "tor",
+  "ext",
+  "hilbert",
+  "poincare",
+  "serre",
+  "tor_lengths",
+  "burch_index",
+  "eventual_period",
+  "sum",
+  "all",
+  "any",
+  "random_ideals",
+  "monomial_ideals",
+  "sweep",
 ];
 
 /// Notation.md v1: every property, by the type that has it.
 const NOTATION_PROPERTIES: [TypeKind, string[]][] = [
-  ["Ring", ["field", "vars", "ngens", "maximal", "ideal", "ambient", "residue", "dim", "depth", "embdim", "codim",
-    "hilbert", "socle", "burch_index", "is_burch", "is_ci", "is_gorenstein", "is_cm",
-    // §3: a quotient ring answers every Module property
-    "rank", "pd", "reg", "degree", "length", "presentation", "min_gens", "splits_residue"]],
+  [
+    "Ring",
+    [
+      "field",
+      "vars",
+      "ngens",
+      "maximal",
+      "ideal",
+      "ambient",
+      "residue",
+      "dim",
+      "depth",
+      "embdim",
+      "codim",
+      "hilbert",
+      "socle",
+      "burch_index",
+      "is_burch",
+      "is_ci",
+      "is_gorenstein",
+      "is_cm",
+      // §3: a quotient ring answers every Module property
+      "rank",
+      "pd",
+      "reg",
+      "degree",
+      "length",
+      "presentation",
+      "min_gens",
+      "splits_residue",
+    ],
+  ],
   ["Ideal", ["gens", "groebner", "initial", "codim", "dim", "degree", "hilbert", "is_homogeneous", "burch"]],
   ["Matrix", ["t", "rows", "cols", "entries"]],
-  ["Module", ["rank", "dim", "depth", "pd", "reg", "degree", "length", "hilbert", "socle", "presentation",
-    "min_gens", "splits_residue"]],
+  ["Module", ["rank", "dim", "depth", "pd", "reg", "degree", "length", "hilbert", "socle", "presentation", "min_gens", "splits_residue"]],
   ["Complex", ["betti", "ranks", "length", "map", "complete", "minors"]],
   ["HilbertSeries", ["numerator", "denominator", "at", "polynomial", "values"]],
   ["Series", ["coefficients", "rational", "at"]],
@@ -57,8 +110,20 @@ const NOTATION_PROPERTIES: [TypeKind, string[]][] = [
 
 /// A value of each type, written in the notation over PRELUDE.
 const VALUE_OF: Partial<Record<TypeKind, string>> = {
-  Field: "S.field", Ring: "R", Poly: "x", Ideal: "I", Matrix: "A", Module: "M", Complex: "C",
-  BettiTable: "C.betti", HilbertSeries: "H", Series: "P", List: "[1, 2]", Family: "F", Table: "T", Str: '"s"',
+  Field: "S.field",
+  Ring: "R",
+  Poly: "x",
+  Ideal: "I",
+  Matrix: "A",
+  Module: "M",
+  Complex: "C",
+  BettiTable: "C.betti",
+  HilbertSeries: "H",
+  Series: "P",
+  List: "[1, 2]",
+  Family: "F",
+  Table: "T",
+  Str: '"s"',
 };
 
 function typeOfLast(source: string) {
@@ -105,15 +170,17 @@ describe("the signature table", () => {
       expect(d.length).toBeGreaterThan(3);
       expect(d).not.toMatch(/\n/);
     }
-    const parts = [...FUNCTIONS.flatMap((f) => f.overloads.map((o) => o.part)), ...PROPERTIES.map((p) => p.part), ...OPERATORS.map((o) => o.part)];
+    const parts = [
+      ...FUNCTIONS.flatMap((f) => f.overloads.map((o) => o.part)),
+      ...PROPERTIES.map((p) => p.part),
+      ...OPERATORS.map((o) => o.part),
+    ];
     for (const p of parts) expect([0, 1, 2, 3]).toContain(p);
   });
 
   test("the reference's printed forms", () => {
     const resolve = lookupFunction("resolve")!;
-    expect(formatOverload(resolve, resolve.overloads[0])).toBe(
-      "resolve(M: Module or Ring, length = …: Int, degree = …: Int) -> Complex",
-    );
+    expect(formatOverload(resolve, resolve.overloads[0])).toBe("resolve(M: Module or Ring, length = …: Int, degree = …: Int) -> Complex");
     const poincare = lookupFunction("poincare")!;
     expect(formatOverload(poincare, poincare.overloads[0])).toBe("poincare(M: Module or Ring, terms = 10: Int) -> Series");
     const matrix = lookupFunction("matrix")!;
@@ -131,7 +198,10 @@ describe("the signature table", () => {
   test.each(PROPERTIES.map((p) => [`${p.owner}.${p.name}`, p] as const))("%s resolves to its declared type", (_key, p) => {
     const value = VALUE_OF[p.owner];
     expect(value, `no sample value of ${p.owner}`).toBeDefined();
-    const args = p.params === null ? "" : `(${p.params.map((q) => (q.type.kind === "Str" ? '"d"' : q.type.kind === "Function" ? "r -> true" : "1")).join(", ")})`;
+    const args =
+      p.params === null
+        ? ""
+        : `(${p.params.map((q) => (q.type.kind === "Str" ? '"d"' : q.type.kind === "Function" ? "r -> true" : "1")).join(", ")})`;
     const { errors, type } = typeOfLast(`${PRELUDE}\n(${value}).${p.name}${args}`);
     expect(errors).toEqual([]);
     expect(type && typeToString(type)).toBe(typeToString(p.result));

@@ -3,13 +3,7 @@
 import { expect, test } from "vitest";
 import { analyze, tokenize } from "@/grammar/index";
 
-const LINES = [
-  "S := GF(32003)[x, y, z, w]",
-  "I := <x*z, x*w, y*z, y*w>",
-  "J := <x - z, y - w>",
-  "R := S / I",
-  "A := [x, y, z; y, z, w]",
-];
+const LINES = ["S := GF(32003)[x, y, z, w]", "I := <x*z, x*w, y*z, y*w>", "J := <x - z, y - w>", "R := S / I", "A := [x, y, z; y, z, w]"];
 for (let i = 0; i < 45; i++) {
   LINES.push(
     [

@@ -84,7 +84,10 @@ function withTimeout<T>(promise: Promise<T>, ms: number, name: string): Promise<
 }
 
 function slug(name: string): string {
-  return name.toLowerCase().replace(/[^a-z0-9]+/g, "-").slice(0, 60);
+  return name
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, "-")
+    .slice(0, 60);
 }
 
 main().then(

@@ -9,12 +9,27 @@ import type { CurrentUser } from "@/lib/auth/types";
 
 export type FixtureKey = "lead" | "member" | "guest" | "admin" | "outsider";
 
-export const TEST_ACCOUNTS: Record<FixtureKey, { email: string; name: string; password: string; siteRole: SiteRole; teamRole: TeamRole | null }> = {
+export const TEST_ACCOUNTS: Record<
+  FixtureKey,
+  { email: string; name: string; password: string; siteRole: SiteRole; teamRole: TeamRole | null }
+> = {
   lead: { email: "lead@harbor.test.example", name: "Lena Lead", password: "lead-pass-4821", siteRole: "member", teamRole: "lead" },
-  member: { email: "member@harbor.test.example", name: "Milo Member", password: "member-pass-7310", siteRole: "member", teamRole: "member" },
+  member: {
+    email: "member@harbor.test.example",
+    name: "Milo Member",
+    password: "member-pass-7310",
+    siteRole: "member",
+    teamRole: "member",
+  },
   guest: { email: "guest@harbor.test.example", name: "Gus Guest", password: "guest-pass-5902", siteRole: "member", teamRole: "guest" },
   admin: { email: "admin@harbor.test.example", name: "Ada Admin", password: "admin-pass-6645", siteRole: "admin", teamRole: null },
-  outsider: { email: "outsider@harbor.test.example", name: "Otto Outsider", password: "outsider-pass-1187", siteRole: "member", teamRole: null },
+  outsider: {
+    email: "outsider@harbor.test.example",
+    name: "Otto Outsider",
+    password: "outsider-pass-1187",
+    siteRole: "member",
+    teamRole: null,
+  },
 };
 
 export const TEST_TEAM_SLUG = "harbor-test-group";
@@ -28,7 +43,9 @@ export async function ensureTestGroup(): Promise<TestGroup> {
   const database = db();
   const keys = Object.keys(TEST_ACCOUNTS) as FixtureKey[];
   const emails = keys.map((k) => TEST_ACCOUNTS[k].email);
-  const existing = new Set((await database.select({ email: users.email }).from(users).where(inArray(users.email, emails))).map((r) => r.email));
+  const existing = new Set(
+    (await database.select({ email: users.email }).from(users).where(inArray(users.email, emails))).map((r) => r.email),
+  );
   const missing = keys.filter((k) => !existing.has(TEST_ACCOUNTS[k].email));
   if (missing.length > 0) {
     const rows = await Promise.all(

@@ -81,7 +81,10 @@ describe("session access", () => {
     // a team member who holds the link reads it as a viewer, not as an editor
     expect((await sessionRole(member, ids.link, { linkToken: TOKEN }))?.role).toBe("viewer");
     // and a team-visible session that also has a link keeps the team's own roles
-    await db().update(sessions).set({ shareToken: `${TOKEN}-team` }).where(eq(sessions.id, ids.team));
+    await db()
+      .update(sessions)
+      .set({ shareToken: `${TOKEN}-team` })
+      .where(eq(sessions.id, ids.team));
     expect(await canEdit(member, ids.team)).toBe(true);
     expect((await sessionRole(guest, ids.team, { linkToken: `${TOKEN}-team` }))?.role).toBe("viewer");
   });
@@ -89,10 +92,12 @@ describe("session access", () => {
   it("applies explicit shares, capping team guests at viewer", async () => {
     const { outsider, guest, lead } = group.users;
     const [s] = await db().insert(sessions).values({ title: "shared", ownerId: lead.id }).returning();
-    await db().insert(shares).values([
-      { sessionId: s!.id, userId: outsider.id, role: "editor" },
-      { sessionId: s!.id, teamId: group.teamId, role: "editor" },
-    ]);
+    await db()
+      .insert(shares)
+      .values([
+        { sessionId: s!.id, userId: outsider.id, role: "editor" },
+        { sessionId: s!.id, teamId: group.teamId, role: "editor" },
+      ]);
     expect(await canEdit(outsider, s!.id)).toBe(true);
     expect(await canEdit(group.users.member, s!.id)).toBe(true);
     expect(await canRead(guest, s!.id)).toBe(true);

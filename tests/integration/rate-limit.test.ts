@@ -29,7 +29,10 @@ describe("sign-in rate limit", () => {
     const body = (await blocked.json()) as { error: { code: string; message: string } };
     expect(body.error.code).toBe("rate_limited");
     expect(body.error.message).toContain("this account");
-    const hits = await db().select().from(auditLog).where(and(eq(auditLog.email, email), eq(auditLog.event, "signin_rate_limited")));
+    const hits = await db()
+      .select()
+      .from(auditLog)
+      .where(and(eq(auditLog.email, email), eq(auditLog.event, "signin_rate_limited")));
     expect(hits).toHaveLength(1);
     expect(hits[0]!.details).toEqual({ scope: "account" });
   });

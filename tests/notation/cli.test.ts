@@ -12,7 +12,11 @@ const launcher = path.join(root, "lib", "cli", "ringside.mjs");
 const dir = mkdtempSync(path.join(os.tmpdir(), "ringside-cli-"));
 
 /// Runs a command to completion without blocking the test worker.
-function exec(command: string, args: string[], input: string): Promise<{ status: number | null; stdout: string; stderr: string; lines: string[] }> {
+function exec(
+  command: string,
+  args: string[],
+  input: string,
+): Promise<{ status: number | null; stdout: string; stderr: string; lines: string[] }> {
   return new Promise((resolve, reject) => {
     const child = spawn(command, args, { cwd: root });
     let stdout = "";
@@ -41,12 +45,7 @@ describe("ringside eval", () => {
     expect(r.status).toBe(0);
     // two planes P = (x, y), Q = (z, w) meeting at a point: HS(S/P∩Q) = HS(S/P) + HS(S/Q) − HS(S/(P+Q))
     // = 2/(1−t)^2 − 1 = (1 − 4t^2 + 4t^3 − t^4)/(1 − t)^4 (common practice)
-    expect(r.lines).toEqual([
-      "S := GF(32003)[x, y, z, w]",
-      "I := <x*z, x*w, y*z, y*w>",
-      "true",
-      "(1-4*t^2+4*t^3-t^4)/(1-t)^4",
-    ]);
+    expect(r.lines).toEqual(["S := GF(32003)[x, y, z, w]", "I := <x*z, x*w, y*z, y*w>", "true", "(1-4*t^2+4*t^3-t^4)/(1-t)^4"]);
   });
 
   it("--json prints one §9 object per line", async () => {
@@ -54,21 +53,41 @@ describe("ringside eval", () => {
     expect(r.status).toBe(0);
     const objs = r.lines.map((l) => JSON.parse(l));
     for (const o of objs) expect(ValueJson.safeParse(o).success, JSON.stringify(o)).toBe(true);
-    expect(objs[0]).toEqual({ type: "Ring", text: "GF(32003)[x, y, z, w]", field: "GF(32003)", vars: ["x", "y", "z", "w"], degrees: [1, 1, 1, 1], order: "grevlex", ideal: [] });
+    expect(objs[0]).toEqual({
+      type: "Ring",
+      text: "GF(32003)[x, y, z, w]",
+      field: "GF(32003)",
+      vars: ["x", "y", "z", "w"],
+      degrees: [1, 1, 1, 1],
+      order: "grevlex",
+      ideal: [],
+    });
     expect(objs[1]).toMatchObject({ type: "Ideal", text: "<x*z, x*w, y*z, y*w>", gens: ["x*z", "x*w", "y*z", "y*w"] });
     expect(objs[2]).toEqual({ type: "Bool", text: "true", value: true });
-    expect(objs[3]).toEqual({ type: "HilbertSeries", text: "(1-4*t^2+4*t^3-t^4)/(1-t)^4", numerator: ["1", "0", "-4", "4", "-1"], denominator: "(1-t)^4" });
+    expect(objs[3]).toEqual({
+      type: "HilbertSeries",
+      text: "(1-4*t^2+4*t^3-t^4)/(1-t)^4",
+      numerator: ["1", "0", "-4", "4", "-1"],
+      denominator: "(1-t)^4",
+    });
   });
 
   it("resolves over a quotient ring and guesses the Poincaré series (engine part 3)", async () => {
     // J. Tate, Illinois J. Math. 1957: k over k[x,y]/(x^2, y^2) has β_i = i + 1 and P = 1/(1−t)^2
-    const src = "S := GF(101)[x, y]\nR := S / <x^2, y^2>\nresolve(R / R.maximal, length = 3).ranks\nP := poincare(R / R.maximal, terms = 6)\n";
+    const src =
+      "S := GF(101)[x, y]\nR := S / <x^2, y^2>\nresolve(R / R.maximal, length = 3).ranks\nP := poincare(R / R.maximal, terms = 6)\n";
     const r = await cli(["eval", "--json", file("quot.rs", src)]);
     expect(r.status).toBe(0);
     const objs = r.lines.map((l) => JSON.parse(l));
     for (const o of objs) expect(ValueJson.safeParse(o).success, JSON.stringify(o)).toBe(true);
     expect(objs[2].text).toBe("[1, 2, 3, 4]");
-    expect(objs[3]).toMatchObject({ type: "Series", coefficients: ["1", "2", "3", "4", "5", "6"], rational: "1/(1-2*t+t^2)", guessed: true, checked: 2 });
+    expect(objs[3]).toMatchObject({
+      type: "Series",
+      coefficients: ["1", "2", "3", "4", "5", "6"],
+      rational: "1/(1-2*t+t^2)",
+      guessed: true,
+      checked: 2,
+    });
   });
 
   it("reads standard input when FILE is omitted or -", async () => {
@@ -120,7 +139,10 @@ describe("ringside eval", () => {
 
 describe("ringside eval: sweeps run inline", () => {
   it("prints the Table and a progress line on stderr (done/total, failures, rate)", async () => {
-    const r = await cli(["eval"], "S := Q[a, b]\nT := sweep(monomial_ideals(S, degree = 2, max_gens = 3), I -> {pd: (S / I).pd})\nT.length\n");
+    const r = await cli(
+      ["eval"],
+      "S := Q[a, b]\nT := sweep(monomial_ideals(S, degree = 2, max_gens = 3), I -> {pd: (S / I).pd})\nT.length\n",
+    );
     expect(r.status).toBe(0);
     expect(r.stdout).toMatch(/^T := index \| label \| status \| seconds \| pd$/m);
     expect(r.lines[r.lines.length - 1]).toBe("7");

@@ -4,7 +4,11 @@ import { describe, expect, it } from "vitest";
 import { evaluate, type Binding, type EvalEvent, type EvalOutcome } from "@/lib/notation/evaluate";
 import type { ValueJson } from "@/lib/notation/json";
 
-async function run(source: string, bindings: Binding[] = [], currentRing: string | null = null): Promise<EvalOutcome & { events: EvalEvent[] }> {
+async function run(
+  source: string,
+  bindings: Binding[] = [],
+  currentRing: string | null = null,
+): Promise<EvalOutcome & { events: EvalEvent[] }> {
   const events: EvalEvent[] = [];
   const out = await evaluate(source, bindings, { currentRing, onEvent: (e) => events.push(e) });
   return { ...out, events };
@@ -27,7 +31,15 @@ const text = async (source: string) => (await last(source)).text;
 describe("rings and polynomials", () => {
   it("defining a ring makes it current; polynomial literals are read in it", async () => {
     const [S, f] = await values("S := GF(32003)[x, y, z, w]\n(x + y)^2");
-    expect(S).toEqual({ type: "Ring", text: "GF(32003)[x, y, z, w]", field: "GF(32003)", vars: ["x", "y", "z", "w"], degrees: [1, 1, 1, 1], order: "grevlex", ideal: [] });
+    expect(S).toEqual({
+      type: "Ring",
+      text: "GF(32003)[x, y, z, w]",
+      field: "GF(32003)",
+      vars: ["x", "y", "z", "w"],
+      degrees: [1, 1, 1, 1],
+      order: "grevlex",
+      ideal: [],
+    });
     // binomial theorem, grevlex with x > y
     expect(f.text).toBe("x^2+2*x*y+y^2");
   });
@@ -84,7 +96,20 @@ describe("ideals (grammar/README.md §5)", () => {
         "<y> * x == <x*y>",
       ].join("\n"),
     );
-    expect(v.slice(1).map((x) => x.text)).toEqual(["true", "true", "true", "true", "true", "true", "true", "true", "false", "true", "true", "true"]);
+    expect(v.slice(1).map((x) => x.text)).toEqual([
+      "true",
+      "true",
+      "true",
+      "true",
+      "true",
+      "true",
+      "true",
+      "true",
+      "false",
+      "true",
+      "true",
+      "true",
+    ]);
   });
 
   it("saturation: (x^2, x*y) : m^∞ = (x), since (x^2, xy) = (x) ∩ (x^2, y) (common practice)", async () => {
@@ -99,7 +124,13 @@ describe("ideals (grammar/README.md §5)", () => {
   it("reduced Gröbner basis in lex agrees with SymPy", async () => {
     // SymPy: groebner([x**2 - y, x*y - 1], x, y, order='lex') = [x - y**2, y**3 - 1]
     const G = await last("S := Q[x, y; order = lex]\n<x^2 - y, x*y - 1>.groebner");
-    expect(G).toMatchObject({ type: "List", items: [{ type: "Poly", text: "y^3-1" }, { type: "Poly", text: "x-y^2" }] });
+    expect(G).toMatchObject({
+      type: "List",
+      items: [
+        { type: "Poly", text: "y^3-1" },
+        { type: "Poly", text: "x-y^2" },
+      ],
+    });
   });
 
   it("initial ideal, homogeneity, dimension, codimension and degree", async () => {
@@ -127,7 +158,12 @@ describe("Hilbert series (grammar/README.md §6)", () => {
   it("of a complete intersection: ∏(1 − t^{d_i}) / (1 − t)^n (Koszul complex on a regular sequence, common practice)", async () => {
     // degrees 2 and 3 in 3 variables: (1 − t^2)(1 − t^3) = 1 − t^2 − t^3 + t^5
     const H = await last("S := Q[x, y, z]\n(S / <x^2, y^3>).hilbert");
-    expect(H).toEqual({ type: "HilbertSeries", text: "(1-t^2-t^3+t^5)/(1-t)^3", numerator: ["1", "0", "-1", "-1", "0", "1"], denominator: "(1-t)^3" });
+    expect(H).toEqual({
+      type: "HilbertSeries",
+      text: "(1-t^2-t^3+t^5)/(1-t)^3",
+      numerator: ["1", "0", "-1", "-1", "0", "1"],
+      denominator: "(1-t)^3",
+    });
     expect((await last("S := Q[x, y, z]\nhilbert(S / <x^2, y^3>)")).text).toBe("(1-t^2-t^3+t^5)/(1-t)^3");
   });
 
@@ -148,7 +184,9 @@ describe("Hilbert series (grammar/README.md §6)", () => {
 
 describe("quotient rings", () => {
   it("k[x, y]/(x^2, y^2): basis 1, x, y, xy, so h = (1, 2, 1) (checkable by hand)", async () => {
-    const v = await values("S := Q[x, y]\nR := S / <x^2, y^2>\n(x + y)^2\n(x + y)^3\nR.hilbert.values(3)\nR.dim\nR.embdim\nR.codim\nR.ideal");
+    const v = await values(
+      "S := Q[x, y]\nR := S / <x^2, y^2>\n(x + y)^2\n(x + y)^3\nR.hilbert.values(3)\nR.dim\nR.embdim\nR.codim\nR.ideal",
+    );
     expect(v.slice(2).map((x) => x.text)).toEqual(["2*x*y", "0", "[1, 2, 1, 0]", "0", "2", "2", "<x^2, y^2>"]);
     expect(v[1]).toMatchObject({ type: "Ring", text: "Q[x, y] / <x^2, y^2>", ideal: ["x^2", "y^2"] });
   });
@@ -166,7 +204,9 @@ describe("quotient rings", () => {
     // after k := R / R.maximal the current ring is k, yet S / <x^3> is a quotient of S:
     // its Hilbert function is h(d) = min(d + 1, 3)
     // (count the monomials x^a y^b of degree d with a < 3; common practice)
-    const v = await values("S := Q[x, y]\nR := S / <x^2, y^2>\nk := R / R.maximal\nT := S / <x^3>\nT.hilbert.values(4)\nU := Q[a, b]\n(S / <y^5>).ideal");
+    const v = await values(
+      "S := Q[x, y]\nR := S / <x^2, y^2>\nk := R / R.maximal\nT := S / <x^3>\nT.hilbert.values(4)\nU := Q[a, b]\n(S / <y^5>).ideal",
+    );
     expect(v[4].text).toBe("[1, 2, 3, 3, 3]");
     expect(v[6].text).toBe("<y^5>");
     const out = await run("S := Q[x, y]\nU := Q[a, b]\nS / <a>");
@@ -182,7 +222,9 @@ describe("numbers, lists, records, functions", () => {
   });
 
   it("lists, ranges, indexing, comprehensions, sum/all/any", async () => {
-    const v = await values("[p^2 for p in 1..4]\nsum(1..100)\n[1, 2, 3][0]\n[1, 2, 3].length\nall([true, 1 < 2])\nany([false, 2 < 1])\n[[a, b] for a in 1..2 for b in 3..4]\n2 in [1, 2]");
+    const v = await values(
+      "[p^2 for p in 1..4]\nsum(1..100)\n[1, 2, 3][0]\n[1, 2, 3].length\nall([true, 1 < 2])\nany([false, 2 < 1])\n[[a, b] for a in 1..2 for b in 3..4]\n2 in [1, 2]",
+    );
     // Gauss: 1 + … + 100 = 5050
     expect(v.map((x) => x.text)).toEqual(["[1, 4, 9, 16]", "5050", "1", "3", "true", "false", "[[1, 3], [1, 4], [2, 3], [2, 4]]", "true"]);
   });
@@ -194,12 +236,18 @@ describe("numbers, lists, records, functions", () => {
 
   it("records and field access", async () => {
     const r = await last("S := Q[x]\n{index: 2, f: x^2}");
-    expect(r).toMatchObject({ type: "Record", text: "{index: 2, f: x^2}", fields: { index: { type: "Int", value: "2" }, f: { type: "Poly", text: "x^2" } } });
+    expect(r).toMatchObject({
+      type: "Record",
+      text: "{index: 2, f: x^2}",
+      fields: { index: { type: "Int", value: "2" }, f: { type: "Poly", text: "x^2" } },
+    });
     expect(await text("{a: 1, b: 2}.b")).toBe("2");
   });
 
   it("lambdas, closures and if", async () => {
-    const v = await values("f := (a, b) -> a + b\nf(2, 3)\nk := 10\ng := n -> n + k\ng(1)\nif 2 < 3 then 1 else 0\n[(n -> n * n)(i) for i in 1..3]");
+    const v = await values(
+      "f := (a, b) -> a + b\nf(2, 3)\nk := 10\ng := n -> n + k\ng(1)\nif 2 < 3 then 1 else 0\n[(n -> n * n)(i) for i in 1..3]",
+    );
     expect(v.map((x) => x.text)).toEqual(["(a, b) -> a + b", "5", "10", "n -> n + k", "11", "1", "[1, 4, 9]"]);
     expect(v[3]).toMatchObject({ type: "Function", params: ["n"], captures: { k: { type: "Int", value: "10" } } });
   });
@@ -209,8 +257,18 @@ describe("numbers, lists, records, functions", () => {
   });
 
   it("matrices: literals, sum, product, transpose, shape and entries", async () => {
-    const v = await values("S := Q[x, y, z, w]\nA := [x, y; z, w]\nA * A\nA + A\nA.t\nA.rows\nmatrix([x, y, z], [y, z, w]).cols\nA.entries\nx * A == A * x");
-    expect(v.slice(2).map((x) => x.text)).toEqual(["[x^2+y*z, x*y+y*w; x*z+z*w, y*z+w^2]", "[2*x, 2*y; 2*z, 2*w]", "[x, z; y, w]", "2", "3", "<x, y, z, w>", "true"]);
+    const v = await values(
+      "S := Q[x, y, z, w]\nA := [x, y; z, w]\nA * A\nA + A\nA.t\nA.rows\nmatrix([x, y, z], [y, z, w]).cols\nA.entries\nx * A == A * x",
+    );
+    expect(v.slice(2).map((x) => x.text)).toEqual([
+      "[x^2+y*z, x*y+y*w; x*z+z*w, y*z+w^2]",
+      "[2*x, 2*y; 2*z, 2*w]",
+      "[x, z; y, w]",
+      "2",
+      "3",
+      "<x, y, z, w>",
+      "true",
+    ]);
   });
 });
 
@@ -268,7 +326,12 @@ describe("events and named objects", () => {
     expect(out.events.map((e) => e.event)).toEqual(["checked", "result", "partial", "partial", "partial", "result"]);
     expect(out.events[0]).toEqual({ event: "checked", statements: 2, errors: [] });
     expect(out.events.filter((e) => e.event === "partial").map((e) => (e as { value: ValueJson }).value.text)).toEqual(["x", "x^2", "x^3"]);
-    expect(out.events[1]).toMatchObject({ event: "result", index: 0, name: "S", span: { from: { line: 1, col: 1 }, to: { line: 1, col: 10 } } });
+    expect(out.events[1]).toMatchObject({
+      event: "result",
+      index: 0,
+      name: "S",
+      span: { from: { line: 1, col: 1 }, to: { line: 1, col: 10 } },
+    });
   });
 
   it("definitions come back as named objects with type, JSON value and source text", async () => {
@@ -304,7 +367,12 @@ describe("events and named objects", () => {
 describe("errors with kind and span", () => {
   it("division by zero is a runtime error at the division", async () => {
     const out = await run("x := 1\n3 / (x - 1)");
-    expect(out.error).toMatchObject({ type: "Error", kind: "runtime", message: "division by zero", span: { from: { line: 2, col: 5 }, to: { line: 2, col: 12 } } });
+    expect(out.error).toMatchObject({
+      type: "Error",
+      kind: "runtime",
+      message: "division by zero",
+      span: { from: { line: 2, col: 5 }, to: { line: 2, col: 12 } },
+    });
     expect(out.results).toHaveLength(1);
   });
 
@@ -323,7 +391,11 @@ describe("errors with kind and span", () => {
 
   it("dividing by a multiple of p in GF(p) is a division by zero", async () => {
     const out = await run("S := GF(7)[x]\nq := 7\nx / q");
-    expect(out.error).toMatchObject({ kind: "runtime", message: "division by zero: 7 is 0 in GF(7)", span: { from: { line: 3, col: 5 }, to: { line: 3, col: 6 } } });
+    expect(out.error).toMatchObject({
+      kind: "runtime",
+      message: "division by zero: 7 is 0 in GF(7)",
+      span: { from: { line: 3, col: 5 }, to: { line: 3, col: 6 } },
+    });
     const rat = await run("S := GF(7)[x]\nq := 7\n(1/q) * x");
     expect(rat.error?.message).toMatch(/division by zero/);
     // 1/2 is 4 in GF(7), since 2·4 = 8 ≡ 1
@@ -331,7 +403,17 @@ describe("errors with kind and span", () => {
   });
 
   it("a saved object that does not decode is reported, naming it", async () => {
-    const out = await run("1", [{ name: "I", value: { type: "Ideal", text: "<q>", gens: ["q"], ring: { type: "Ring", text: "", field: "Q", vars: ["x"], degrees: [1], order: "grevlex", ideal: [] } } }]);
+    const out = await run("1", [
+      {
+        name: "I",
+        value: {
+          type: "Ideal",
+          text: "<q>",
+          gens: ["q"],
+          ring: { type: "Ring", text: "", field: "Q", vars: ["x"], degrees: [1], order: "grevlex", ideal: [] },
+        },
+      },
+    ]);
     expect(out.error).toMatchObject({ kind: "runtime" });
     expect(out.error!.message).toMatch(/^the saved object I cannot be restored: /);
   });
@@ -363,7 +445,9 @@ describe("errors with kind and span", () => {
   it("invariants computed over polynomial rings only say so, and what to use, over a quotient ring", async () => {
     const quotient = await run("S := Q[x, y]\n(S / <x^2>).residue.reg");
     expect(quotient.error).toMatchObject({ kind: "runtime", span: { from: { line: 2, col: 1 } } });
-    expect(quotient.error!.message).toMatch(/reg is computed for modules over a polynomial ring only, .*quotient ring Q\[x, y\] \/ <x\^2>.*resolve\(M, length = n\)/);
+    expect(quotient.error!.message).toMatch(
+      /reg is computed for modules over a polynomial ring only, .*quotient ring Q\[x, y\] \/ <x\^2>.*resolve\(M, length = n\)/,
+    );
   });
 });
 
@@ -386,7 +470,8 @@ describe("cancellation", () => {
   it("a long Gröbner computation stops when the signal fires during it (aborted from its progress report)", async () => {
     const controller = new AbortController();
     // cyclic-6 over Q (Björck–Fröberg, J. Symbolic Comput. 1991): far more than one progress report long
-    const cyclic6 = "S := Q[a, b, c, d, e, f]\nI := <a+b+c+d+e+f, a*b+b*c+c*d+d*e+e*f+f*a, a*b*c+b*c*d+c*d*e+d*e*f+e*f*a+f*a*b, a*b*c*d+b*c*d*e+c*d*e*f+d*e*f*a+e*f*a*b+f*a*b*c, a*b*c*d*e+b*c*d*e*f+c*d*e*f*a+d*e*f*a*b+e*f*a*b*c+f*a*b*c*d, a*b*c*d*e*f-1>\nI.degree";
+    const cyclic6 =
+      "S := Q[a, b, c, d, e, f]\nI := <a+b+c+d+e+f, a*b+b*c+c*d+d*e+e*f+f*a, a*b*c+b*c*d+c*d*e+d*e*f+e*f*a+f*a*b, a*b*c*d+b*c*d*e+c*d*e*f+d*e*f*a+e*f*a*b+f*a*b*c, a*b*c*d*e+b*c*d*e*f+c*d*e*f*a+d*e*f*a*b+e*f*a*b*c+f*a*b*c*d, a*b*c*d*e*f-1>\nI.degree";
     const progress: EvalEvent[] = [];
     const out = await evaluate(cyclic6, [], {
       signal: controller.signal,

@@ -11,7 +11,15 @@ const rings = new RingRegistry();
 const S = rings.polynomialRing(gf(32003), ["x", "y", "z", "w"]);
 const Qxy = rings.polynomialRing(QQ, ["x", "y"], { order: { kind: "lex" }, degrees: [1, 2] });
 const P = (r: RingValue, t: string) => parsePoly(r.poly, t);
-const SJSON = { type: "Ring", text: "GF(32003)[x, y, z, w]", field: "GF(32003)", vars: ["x", "y", "z", "w"], degrees: [1, 1, 1, 1], order: "grevlex", ideal: [] };
+const SJSON = {
+  type: "Ring",
+  text: "GF(32003)[x, y, z, w]",
+  field: "GF(32003)",
+  vars: ["x", "y", "z", "w"],
+  degrees: [1, 1, 1, 1],
+  order: "grevlex",
+  ideal: [],
+};
 
 function roundTrip(v: Value): Json {
   const j = encodeValue(v);
@@ -26,7 +34,11 @@ function roundTrip(v: Value): Json {
 describe("§9 encoding of each type", () => {
   it("Int and Rat: value is a decimal string", () => {
     expect(roundTrip({ type: "Int", value: 42n })).toEqual({ type: "Int", text: "42", value: "42" });
-    expect(roundTrip({ type: "Int", value: -(10n ** 30n) })).toEqual({ type: "Int", text: `-1${"0".repeat(30)}`, value: `-1${"0".repeat(30)}` });
+    expect(roundTrip({ type: "Int", value: -(10n ** 30n) })).toEqual({
+      type: "Int",
+      text: `-1${"0".repeat(30)}`,
+      value: `-1${"0".repeat(30)}`,
+    });
     expect(roundTrip({ type: "Rat", value: ratOf(3n, -4n) })).toEqual({ type: "Rat", text: "-3/4", value: "-3/4" });
   });
 
@@ -74,7 +86,10 @@ describe("§9 encoding of each type", () => {
   });
 
   it("Matrix: rows of polynomial texts", () => {
-    const rows = [["x", "y", "z"], ["y", "z", "w"]];
+    const rows = [
+      ["x", "y", "z"],
+      ["y", "z", "w"],
+    ];
     const j = roundTrip({ type: "Matrix", ring: S, rows: rows.map((r) => r.map((t) => P(S, t))), cols: 3 });
     expect(j).toMatchObject({ type: "Matrix", text: "[x, y, z; y, z, w]", rows });
   });
@@ -88,7 +103,10 @@ describe("§9 encoding of each type", () => {
       degrees: [0],
     });
     const F = { type: "Matrix" as const, ring: S, rows: [[], []], cols: 0 };
-    expect(roundTrip({ type: "Module", ring: S, presentation: F, degrees: [0, 2] })).toMatchObject({ text: "GF(32003)[x, y, z, w]^[0, 2]", degrees: [0, 2] });
+    expect(roundTrip({ type: "Module", ring: S, presentation: F, degrees: [0, 2] })).toMatchObject({
+      text: "GF(32003)[x, y, z, w]^[0, 2]",
+      degrees: [0, 2],
+    });
   });
 
   it("Module: a presentation of null, or degrees that do not match its rows, do not restore", () => {
@@ -96,15 +114,42 @@ describe("§9 encoding of each type", () => {
     const bad = { type: "Module", text: "?", presentation: null, degrees: [], ring };
     expect(() => decodeValue(bad, { rings: new RingRegistry() })).toThrow(/needs its presentation/);
     const A = encodeValue({ type: "Matrix", ring: S, rows: [[P(S, "x")]], cols: 1 });
-    expect(() => decodeValue({ ...bad, presentation: A, degrees: [0, 1] }, { rings: new RingRegistry() })).toThrow(/2 generators but the presentation has 1 rows/);
+    expect(() => decodeValue({ ...bad, presentation: A, degrees: [0, 1] }, { rings: new RingRegistry() })).toThrow(
+      /2 generators but the presentation has 1 rows/,
+    );
   });
 
   it("BettiTable and Complex: entries [i, j, b] with j the internal degree", () => {
     // twisted cubic: β_{0,0}=1, β_{1,2}=3, β_{2,3}=2 (Hilbert–Burch; Eagon–Northcott 1962)
-    const betti = { type: "BettiTable" as const, entries: [[0, 0, 1], [1, 2, 3], [2, 3, 2]] as const, complete: true };
-    expect(roundTrip(betti)).toMatchObject({ type: "BettiTable", entries: [[0, 0, 1], [1, 2, 3], [2, 3, 2]], complete: true });
+    const betti = {
+      type: "BettiTable" as const,
+      entries: [
+        [0, 0, 1],
+        [1, 2, 3],
+        [2, 3, 2],
+      ] as const,
+      complete: true,
+    };
+    expect(roundTrip(betti)).toMatchObject({
+      type: "BettiTable",
+      entries: [
+        [0, 0, 1],
+        [1, 2, 3],
+        [2, 3, 2],
+      ],
+      complete: true,
+    });
     const C = roundTrip({ type: "Complex", ring: S, ranks: [1, 3, 2], betti, complete: true, maps: null });
-    expect(C).toMatchObject({ type: "Complex", ranks: [1, 3, 2], betti: [[0, 0, 1], [1, 2, 3], [2, 3, 2]], complete: true });
+    expect(C).toMatchObject({
+      type: "Complex",
+      ranks: [1, 3, 2],
+      betti: [
+        [0, 0, 1],
+        [1, 2, 3],
+        [2, 3, 2],
+      ],
+      complete: true,
+    });
   });
 
   it("HilbertSeries: numerator coefficients as Int strings, denominator as text", () => {
@@ -145,9 +190,27 @@ describe("§9 encoding of each type", () => {
   it("List, Record and Table nest encodings", () => {
     const one: Value = { type: "Int", value: 1n };
     const l = roundTrip({ type: "List", items: [one, { type: "Bool", value: false }] });
-    expect(l).toEqual({ type: "List", text: "[1, false]", items: [{ type: "Int", text: "1", value: "1" }, { type: "Bool", text: "false", value: false }] });
-    const r = roundTrip({ type: "Record", fields: new Map([["index", one], ["depth", { type: "Int", value: 0n }]]) });
-    expect(r).toEqual({ type: "Record", text: "{index: 1, depth: 0}", fields: { index: { type: "Int", text: "1", value: "1" }, depth: { type: "Int", text: "0", value: "0" } }, fieldOrder: ["index", "depth"] });
+    expect(l).toEqual({
+      type: "List",
+      text: "[1, false]",
+      items: [
+        { type: "Int", text: "1", value: "1" },
+        { type: "Bool", text: "false", value: false },
+      ],
+    });
+    const r = roundTrip({
+      type: "Record",
+      fields: new Map([
+        ["index", one],
+        ["depth", { type: "Int", value: 0n }],
+      ]),
+    });
+    expect(r).toEqual({
+      type: "Record",
+      text: "{index: 1, depth: 0}",
+      fields: { index: { type: "Int", text: "1", value: "1" }, depth: { type: "Int", text: "0", value: "0" } },
+      fieldOrder: ["index", "depth"],
+    });
     const t = roundTrip({ type: "Table", columns: ["index"], rows: [[one]] });
     expect(t).toMatchObject({ type: "Table", columns: ["index"], rows: [[{ type: "Int", value: "1" }]] });
   });
@@ -159,7 +222,9 @@ describe("§9 encoding of each type", () => {
 
   it("Family: its members and recipe", () => {
     const I = { type: "Ideal" as const, ring: S, gens: [P(S, "x^2")] };
-    expect(roundTrip({ type: "Family", ring: S, generator: "monomial_ideals", options: new Map([["degree", 2n]]), members: [I] })).toMatchObject({
+    expect(
+      roundTrip({ type: "Family", ring: S, generator: "monomial_ideals", options: new Map([["degree", 2n]]), members: [I] }),
+    ).toMatchObject({
       type: "Family",
       generator: "monomial_ideals",
       options: { degree: "2" },

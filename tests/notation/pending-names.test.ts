@@ -9,12 +9,10 @@ import { IMPLEMENTED_OPERATORS, operatorKey } from "@/lib/notation/operators";
 import { pendingError } from "@/lib/notation/pending";
 
 /// Waiting for engine part 2 (modules, resolutions, Tor/Ext, depth, pd, regularity).
-const PART_2: string[] = [
-];
+const PART_2: string[] = [];
 
 /// Waiting for engine part 3 (quotient-ring and Artinian invariants, Burch, Poincaré, families).
-const PART_3: string[] = [
-];
+const PART_3: string[] = [];
 
 const table = [
   ...signatureEntries(),

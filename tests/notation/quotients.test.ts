@@ -46,7 +46,10 @@ const trim = (a: bigint[]) => {
 /// The ascending coefficients of a polynomial in t from its text ("-6*t^3-9*t^2-t+1").
 function tCoefficients(text: string): bigint[] {
   const out: bigint[] = [];
-  for (const m of text.replace(/-/g, "+-").split("+").filter((s) => s !== "")) {
+  for (const m of text
+    .replace(/-/g, "+-")
+    .split("+")
+    .filter((s) => s !== "")) {
     const [, sign, coef, t, exp] = /^(-?)(\d+)?\*?(t)?(?:\^(\d+))?$/.exec(m)!;
     const k = t ? Number(exp ?? 1) : 0;
     while (out.length <= k) out.push(0n);
@@ -69,9 +72,12 @@ describe("Poincaré series over quotient rings", () => {
     // E. Golod, "On the homology of some local rings", Soviet Math. 1962: S/m^p is Golod, so
     // P(t) = (1+t)^3 / (1 − Σ β_i^S(S/m^3) t^{i+1}), with β^S(S/m^3) = 1, 10, 15, 6
     // (J. Eagon, D. Northcott, Proc. Roy. Soc. A 1962).
-    const num = powZ([1n, 1n], 3), den = [1n, 0n, -10n, -15n, -6n];
+    const num = powZ([1n, 1n], 3),
+      den = [1n, 0n, -10n, -15n, -6n];
     const [P, coeffs, rational, at] = (
-      await values("S := GF(32003)[x, y, z]\nR := S / S.maximal^3\nP := poincare(R / R.maximal, terms = 8)\nP.coefficients\nP.rational\nP.at(4)")
+      await values(
+        "S := GF(32003)[x, y, z]\nR := S / S.maximal^3\nP := poincare(R / R.maximal, terms = 8)\nP.coefficients\nP.rational\nP.at(4)",
+      )
     ).slice(2);
     expect(ints(coeffs)).toEqual(expand(num, den, 8));
     const g = rationalOf(rational);
@@ -90,7 +96,8 @@ describe("Poincaré series over quotient rings", () => {
       "S := GF(32003)[x, y, z]\nJ := <x^2 + 3*x*y - 2*z^2 + y*z, x^3 - y^3 + 5*x*y*z + z^3 - 2*x^2*z>\nJ.codim\nR := S / J\nP := poincare(R / R.maximal, terms = 10)\nP.coefficients\nP.rational",
     );
     expect(v[2]).toMatchObject({ value: "2" }); // a regular sequence: codim = number of forms
-    const num = powZ([1n, 1n], 3), den = powZ([1n, 0n, -1n], 2);
+    const num = powZ([1n, 1n], 3),
+      den = powZ([1n, 0n, -1n], 2);
     expect(ints(v[5])).toEqual(expand(num, den, 10));
     const g = rationalOf(v[6]);
     sameFunction(g.num, g.den, num, den);
@@ -104,7 +111,10 @@ describe("Poincaré series over quotient rings", () => {
     const src = (n: number) => `S := GF(32003)[x, y, z]\nT := S / <x^2, y^2, z^2>\npoincare(T / T.maximal, terms = ${n}).rational`;
     expect(await last(src(5))).toMatchObject({ type: "None" });
     expect(rationalOf(await last(src(2)))).toEqual({ num: [1n], den: [1n, -3n], checked: 0 });
-    for (const [n, checked] of [[6, 0], [8, 2]]) {
+    for (const [n, checked] of [
+      [6, 0],
+      [8, 2],
+    ]) {
       const g = rationalOf(await last(src(n)));
       sameFunction(g.num, g.den, [1n], powZ([1n, -1n], 3));
       expect(g.checked).toBe(checked);
@@ -134,10 +144,13 @@ describe("resolve over a quotient ring", () => {
 
   it("with a degree bound below the needed degrees, says which numbers are lower bounds", async () => {
     // k over k[x,y,z]/(x^2, y^2, z^2): the resolution is linear, β_i = C(i+2, 2) in degree i (Tate)
-    const v = await values("S := GF(32003)[x, y, z]\nT := S / <x^2, y^2, z^2>\nE := resolve(T / T.maximal, length = 3, degree = 2)\nE.ranks\nE.complete\nE.betti");
+    const v = await values(
+      "S := GF(32003)[x, y, z]\nT := S / <x^2, y^2, z^2>\nE := resolve(T / T.maximal, length = 3, degree = 2)\nE.ranks\nE.complete\nE.betti",
+    );
     expect(ints(v[3])).toEqual([1n, 3n, 6n, 0n]);
     expect(bool(v[4])).toBe(false);
-    for (const text of [v[2].text, v[5].text]) expect(text).toMatch(/internal degrees above 2 were not computed, so β_i for i ≥ 3 are lower bounds/);
+    for (const text of [v[2].text, v[5].text])
+      expect(text).toMatch(/internal degrees above 2 were not computed, so β_i for i ≥ 3 are lower bounds/);
   });
 
   it("keeps differentials whose composites vanish in R (common practice: a complex)", async () => {
@@ -153,7 +166,9 @@ describe("resolve over a quotient ring", () => {
     const out = await run("S := GF(32003)[x, y, z]\nR := S / S.maximal^2\nresolve(R / R.maximal, length = 4)");
     const partial = out.events.filter((e) => e.event === "partial");
     // Golod 1962: β_i = 3^i over k[x,y,z]/m^2
-    const totals = partial.map((e) => (e as { value: { entries: [number, number, number][] } }).value.entries.reduce((s, [, , b]) => s + b, 0));
+    const totals = partial.map((e) =>
+      (e as { value: { entries: [number, number, number][] } }).value.entries.reduce((s, [, , b]) => s + b, 0),
+    );
     expect(totals).toEqual([1, 3, 9, 27, 81]);
   });
 
@@ -218,7 +233,9 @@ describe("socles, the residue field as a summand", () => {
     // dimension 1, so Cohen–Macaulay of depth 1; the depth lemma gives depth Ω^i k ≥
     // min(i, depth R) = 1 for i ≥ 1 (common practice), so 0 :_{Ω²k} m = 0. Over
     // U = S/(x^2, xy), coker[x, y] = k[z] has depth 1 as well.
-    const v = await values("S := GF(32003)[x, y, z]\nT := S / <x*y, z^3>\nT.depth\nO := syzygy(T.residue, 2)\nO.depth\nO.socle\nO.splits_residue\nU := S / <x^2, x*y>\ncoker(matrix([x, y])).socle");
+    const v = await values(
+      "S := GF(32003)[x, y, z]\nT := S / <x*y, z^3>\nT.depth\nO := syzygy(T.residue, 2)\nO.depth\nO.socle\nO.splits_residue\nU := S / <x^2, x*y>\ncoker(matrix([x, y])).socle",
+    );
     expect([v[2].text, v[4].text]).toEqual(["1", "1"]);
     expect(v[5].text).toMatch(/^the zero module over /);
     expect(bool(v[6])).toBe(false);
@@ -231,19 +248,25 @@ describe("socles, the residue field as a summand", () => {
   it("socles of Artinian rings, graded and local", async () => {
     // k[x,y,z]/(x^2,y^2,z^2) is Gorenstein with socle spanned by xyz (common practice); the local
     // ring Q[u,v]/(u^2 + v^3, uv) has basis 1, u, v, v^2, v^3 = −u^2 and socle (u^2) (by hand)
-    const v = await values("S := GF(101)[x, y, z]\nT := S / <x^2, y^2, z^2>\nT.socle == <x*y*z>\nL0 := Q[u, v]\nL := L0 / <u^2 + v^3, u*v>\nL.socle == <u^2>\nL.socle == <u>");
+    const v = await values(
+      "S := GF(101)[x, y, z]\nT := S / <x^2, y^2, z^2>\nT.socle == <x*y*z>\nL0 := Q[u, v]\nL := L0 / <u^2 + v^3, u*v>\nL.socle == <u^2>\nL.socle == <u>",
+    );
     expect([bool(v[2]), bool(v[5]), bool(v[6])]).toEqual([true, true, false]);
   });
 
   it("k splits off the cyclic module A/I exactly when A/I is k (a cyclic module is indecomposable)", async () => {
-    const v = await values("S := GF(101)[x, y, z]\n(S / S.maximal^3).splits_residue\nR := S / S.maximal^3\n(R / R.maximal).splits_residue\n(R / <x>).splits_residue");
+    const v = await values(
+      "S := GF(101)[x, y, z]\n(S / S.maximal^3).splits_residue\nR := S / S.maximal^3\n(R / R.maximal).splits_residue\n(R / <x>).splits_residue",
+    );
     expect([bool(v[1]), bool(v[3]), bool(v[4])]).toEqual([false, true, false]);
   });
 });
 
 describe("Burch index", () => {
   it("m^p has Burch ideal m^2 and index n (Dao–Kobayashi–Takahashi, Algebra & Number Theory 2020)", async () => {
-    const v = await values("S := GF(101)[x, y, z]\n[burch_index(S / S.maximal^p) for p in 2..4]\n(S.maximal^3).burch == S.maximal^2\n(S / S.maximal^2).is_burch");
+    const v = await values(
+      "S := GF(101)[x, y, z]\n[burch_index(S / S.maximal^p) for p in 2..4]\n(S.maximal^3).burch == S.maximal^2\n(S / S.maximal^2).is_burch",
+    );
     expect(ints(v[1])).toEqual([3n, 3n, 3n]);
     expect(bool(v[2])).toBe(true);
     expect(bool(v[3])).toBe(true);
@@ -264,7 +287,9 @@ describe("Burch index", () => {
 
   it("says that a positive-depth index used a random choice, with its seed and forms", async () => {
     const out = await run("S := GF(32003)[x, y, z]\n(S / <x*y>).burch_index");
-    const notes = out.events.filter((e) => e.event === "progress" && /chosen at random \(seed 1\)/.test((e as { detail?: string }).detail ?? ""));
+    const notes = out.events.filter(
+      (e) => e.event === "progress" && /chosen at random \(seed 1\)/.test((e as { detail?: string }).detail ?? ""),
+    );
     expect(notes.length).toBe(1);
     // the result itself says so (text and JSON), with the two forms factored out (depth 2)
     const r = out.results[1].value as unknown as { value: string; text: string; note: string };
@@ -286,7 +311,9 @@ describe("minors along a resolution, eventual periods", () => {
     // D. Eisenbud, "Homological algebra on a complete intersection, with an application to group
     // representations", Trans. AMS 260 (1980): minimal resolutions over a hypersurface are
     // eventually periodic of period 2. For k over k[x]/(x^3) the maps alternate x and x^2.
-    const v = await values("S := GF(101)[x]\nR := S / <x^3>\nC := resolve(R / R.maximal, length = 6)\nM := C.minors(1)\nM\neventual_period(M)");
+    const v = await values(
+      "S := GF(101)[x]\nR := S / <x^3>\nC := resolve(R / R.maximal, length = 6)\nM := C.minors(1)\nM\neventual_period(M)",
+    );
     expect(v[4].text).toBe("[<x>, <x^2>, <x>, <x^2>, <x>, <x^2>]");
     expect(v[5].text).toBe("{start: 0, period: 2}");
   });
@@ -323,7 +350,9 @@ describe("modules over quotient rings", () => {
 
   it("socles of modules: k ⊕ R over k[x,y]/(x^2, y^2) has socle in degrees 0 and 2", async () => {
     // soc(k) = k in degree 0, soc(R) = (xy) in degree 2 (common practice); k splits off k ⊕ R but not R
-    const v = await values("S := GF(101)[x, y]\nR := S / <x^2, y^2>\nM := coker([x, y; 0, 0])\nM.socle.hilbert.values(3)\nM.splits_residue\n(R^1).splits_residue");
+    const v = await values(
+      "S := GF(101)[x, y]\nR := S / <x^2, y^2>\nM := coker([x, y; 0, 0])\nM.socle.hilbert.values(3)\nM.splits_residue\n(R^1).splits_residue",
+    );
     expect(ints(v[3])).toEqual([1n, 0n, 1n, 0n]);
     expect([bool(v[4]), bool(v[5])]).toEqual([true, false]);
   });

@@ -72,7 +72,11 @@ describe("resolve over a polynomial ring", () => {
     const B = first.objects.find((o) => o.name === "B")!;
     expect(B.value).toMatchObject({ ideal: ["x^2", "y^2"], over: 1 });
     // y^2 is a nonzerodivisor on A = S/(x^2): A/(y^2) has the resolution 0 → A(−2) → A (common practice)
-    const second = await evaluate("resolve(B, length = 3).ranks", first.objects.map((o) => ({ name: o.name, value: o.value })), { currentRing: "B" });
+    const second = await evaluate(
+      "resolve(B, length = 3).ranks",
+      first.objects.map((o) => ({ name: o.name, value: o.value })),
+      { currentRing: "B" },
+    );
     expect(second.error).toBeNull();
     expect(second.results[0].value).toMatchObject({ items: [{ value: "1" }, { value: "1" }, { value: "0" }, { value: "0" }] });
   });

@@ -4,7 +4,25 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { evaluate } from "@/lib/notation/evaluate";
 
-const atoms = ["x", "y", "0", "1", "2", "3/4", "<x>", "<x, y>", "<0>", "[1, 2]", "S", "S.maximal", "true", '"s"', "none", "(S / <x^2>)", "f"];
+const atoms = [
+  "x",
+  "y",
+  "0",
+  "1",
+  "2",
+  "3/4",
+  "<x>",
+  "<x, y>",
+  "<0>",
+  "[1, 2]",
+  "S",
+  "S.maximal",
+  "true",
+  '"s"',
+  "none",
+  "(S / <x^2>)",
+  "f",
+];
 const binary = ["+", "-", "*", "/", "^", ":", "&", "==", "!=", "<=", "<", "in", "and", "or"];
 
 const expr: fc.Arbitrary<string> = fc.letrec<{ e: string }>((tie) => ({

@@ -32,7 +32,9 @@ describe("notes survive export", () => {
     const tex = valueTex(v);
     expect(tex).toContain("$1 + 3 t + 9 t^{2} + 27 t^{3} + 81 t^{4} + 243 t^{5} + O(t^{6})$");
     // 1/(1 − 3t) is fixed by 2 terms, so 4 of the 6 confirm it (issue 16: checked counts those)
-    expect(tex).toMatch(/\\emph\{Guessed rational function \}\$1\/\(1 - 3 t\)\$\\emph\{: it reproduces 4 computed terms beyond those it was fitted to; a guess, not a proof\.\}/);
+    expect(tex).toMatch(
+      /\\emph\{Guessed rational function \}\$1\/\(1 - 3 t\)\$\\emph\{: it reproduces 4 computed terms beyond those it was fitted to; a guess, not a proof\.\}/,
+    );
     expect(markdownOf(v)).toMatch(/> Guessed rational function \$1\/\(1 - 3 t\)\$: it reproduces 4 computed terms beyond/);
   });
 

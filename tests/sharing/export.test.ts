@@ -28,7 +28,14 @@ function tabularRows(tex: string): string[][] {
 describe("LaTeX of values", () => {
   it("typesets a Betti table as a tabular with rows j−i and columns i", () => {
     // S/I, I the ideal of three general points of P²: β00 = 1, β12 = 3, β23 = 2
-    const tex = bettiTabular([[0, 0, 1], [1, 2, 3], [2, 3, 2]], true);
+    const tex = bettiTabular(
+      [
+        [0, 0, 1],
+        [1, 2, 3],
+        [2, 3, 2],
+      ],
+      true,
+    );
     expect(tex).toMatch(/^\\begin\{tabular\}\{r\|rrr\}/);
     expect(tabularRows(tex)).toEqual([
       ["", "0", "1", "2"],
@@ -43,7 +50,13 @@ describe("LaTeX of values", () => {
   });
 
   it("keeps gaps between rows and notes truncation", () => {
-    const tex = bettiTabular([[0, 0, 1], [1, 3, 1]], false);
+    const tex = bettiTabular(
+      [
+        [0, 0, 1],
+        [1, 3, 1],
+      ],
+      false,
+    );
     expect(tabularRows(tex)).toEqual([
       ["", "0", "1"],
       ["0", "1", ""],
@@ -101,7 +114,16 @@ describe("export and import over the API", () => {
     await run("S := Q[x, y, z]\nI := <x*y, y*z, x*z>\nf := x^2 - 3/4*y*z");
     // The exporter formats stored §9 JSON; the Betti table of S/I (three points of P²:
     // β00 = 1, β12 = 3, β23 = 2) is stored as a finished cell would store it.
-    const betti = { type: "BettiTable", text: "Betti numbers β(0,0)=1, β(1,2)=3, β(2,3)=2", entries: [[0, 0, 1], [1, 2, 3], [2, 3, 2]], complete: true };
+    const betti = {
+      type: "BettiTable",
+      text: "Betti numbers β(0,0)=1, β(1,2)=3, β(2,3)=2",
+      entries: [
+        [0, 0, 1],
+        [1, 2, 3],
+        [2, 3, 2],
+      ],
+      complete: true,
+    };
     const span = { from: { line: 1, col: 1 }, to: { line: 1, col: 26 } };
     const [cell] = await db()
       .insert(cells)
@@ -115,7 +137,17 @@ describe("export and import over the API", () => {
         durationMs: 3,
       })
       .returning();
-    await db().insert(namedObjects).values({ sessionId, ownerId: group.users.lead.id, name: "B", type: "BettiTable", value: betti, source: "B := resolve(S / I).betti", sourceCellId: cell!.id });
+    await db()
+      .insert(namedObjects)
+      .values({
+        sessionId,
+        ownerId: group.users.lead.id,
+        name: "B",
+        type: "BettiTable",
+        value: betti,
+        source: "B := resolve(S / I).betti",
+        sourceCellId: cell!.id,
+      });
   }, 120_000);
   afterAll(async () => {
     await db().delete(sessions).where(eq(sessions.title, "three points"));
@@ -177,13 +209,34 @@ describe("export and import over the API", () => {
 
   it("refuses malformed imports and stores nothing", async () => {
     const count = async () => (await db().select({ id: sessions.id }).from(sessions).where(eq(sessions.title, "bad import"))).length;
-    const base = { format: "ringside.session", version: 1, exportedAt: new Date().toISOString(), session: { title: "bad import", ownerName: "" }, cells: [], objects: [] };
+    const base = {
+      format: "ringside.session",
+      version: 1,
+      exportedAt: new Date().toISOString(),
+      session: { title: "bad import", ownerName: "" },
+      cells: [],
+      objects: [],
+    };
     const cases: unknown[] = [
       { ...base, format: "other" },
       { ...base, version: 2 },
       { ...base, objects: [{ name: "1x", type: "Int", value: { type: "Int", text: "1" }, source: "", cell: null, origin: null }] },
       { ...base, objects: [{ name: "a", type: "Int", value: { type: "Int", text: "1" }, source: "", cell: 7, origin: null }] },
-      { ...base, cells: [{ position: 0, source: "1", status: "running", results: [], error: null, currentRing: null, durationMs: null, engineVersion: null }] },
+      {
+        ...base,
+        cells: [
+          {
+            position: 0,
+            source: "1",
+            status: "running",
+            results: [],
+            error: null,
+            currentRing: null,
+            durationMs: null,
+            engineVersion: null,
+          },
+        ],
+      },
       [],
     ];
     for (const body of cases) {
@@ -192,7 +245,11 @@ describe("export and import over the API", () => {
       const e = (await r.json()) as { error: { code: string; message: string } };
       expect(e.error.code).toMatch(/invalid_export|invalid_body/);
     }
-    const notJson = await other.request("/api/sessions/import", { method: "POST", headers: { "Content-Type": "application/json" }, body: "{" });
+    const notJson = await other.request("/api/sessions/import", {
+      method: "POST",
+      headers: { "Content-Type": "application/json" },
+      body: "{",
+    });
     expect(notJson.status).toBe(400);
     expect(await count()).toBe(0);
   });

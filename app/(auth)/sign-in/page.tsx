@@ -22,7 +22,10 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
       <SignInForm callbackUrl={callbackUrl} initialError={error} />
       <p className="mt-4 text-center text-sm text-ink-soft">
         No account yet?{" "}
-        <Link className="font-medium text-ink underline" href={callbackUrl === "/" ? "/sign-up" : `/sign-up?callbackUrl=${encodeURIComponent(callbackUrl)}`}>
+        <Link
+          className="font-medium text-ink underline"
+          href={callbackUrl === "/" ? "/sign-up" : `/sign-up?callbackUrl=${encodeURIComponent(callbackUrl)}`}
+        >
           Create one
         </Link>
       </p>

@@ -23,7 +23,10 @@ export default async function SignUpPage({ searchParams }: { searchParams: Promi
       <SignUpForm passwordRule={PASSWORD_RULE} callbackUrl={callbackUrl} email={invitation?.email} />
       <p className="mt-4 text-center text-sm text-ink-soft">
         Already have one?{" "}
-        <Link className="font-medium text-ink underline" href={callbackUrl === "/" ? "/sign-in" : `/sign-in?callbackUrl=${encodeURIComponent(callbackUrl)}`}>
+        <Link
+          className="font-medium text-ink underline"
+          href={callbackUrl === "/" ? "/sign-in" : `/sign-in?callbackUrl=${encodeURIComponent(callbackUrl)}`}
+        >
           Sign in
         </Link>
       </p>

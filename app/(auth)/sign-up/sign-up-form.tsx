@@ -15,7 +15,11 @@ export function SignUpForm({ passwordRule, callbackUrl = "/", email }: { passwor
   async function onSubmit(event: React.FormEvent<HTMLFormElement>) {
     event.preventDefault();
     const form = new FormData(event.currentTarget);
-    const body = { name: String(form.get("name") ?? ""), email: String(form.get("email") ?? ""), password: String(form.get("password") ?? "") };
+    const body = {
+      name: String(form.get("name") ?? ""),
+      email: String(form.get("email") ?? ""),
+      password: String(form.get("password") ?? ""),
+    };
     setBusy(true);
     setError(null);
     const response = await fetch("/api/auth/signup", {

@@ -82,7 +82,9 @@ export function texOfRing(v: ValueReading): string {
   // a local ring (notation.md §11): the ring localised at the maximal ideal of its point
   const at = v.local?.at;
   if (!at) return global;
-  const point = at.every((a) => a === "0") ? "0" : `(${at.map((a) => (a.includes("/") ? `\\tfrac{${a.split("/")[0]}}{${a.split("/")[1]}}` : a)).join(", ")})`;
+  const point = at.every((a) => a === "0")
+    ? "0"
+    : `(${at.map((a) => (a.includes("/") ? `\\tfrac{${a.split("/")[0]}}{${a.split("/")[1]}}` : a)).join(", ")})`;
   return `\\left(${global}\\right)_{\\mathfrak{m}_{${point}}}`;
 }
 

@@ -48,8 +48,11 @@ export function startedCell(source: string): RunningCell {
   };
 }
 
-const bettiOf = (v: { type: string; entries?: readonly (readonly [number, number, number])[]; betti?: readonly (readonly [number, number, number])[] }) =>
-  v.type === "BettiTable" ? v.entries ?? [] : v.type === "Complex" ? v.betti ?? [] : [];
+const bettiOf = (v: {
+  type: string;
+  entries?: readonly (readonly [number, number, number])[];
+  betti?: readonly (readonly [number, number, number])[];
+}) => (v.type === "BettiTable" ? (v.entries ?? []) : v.type === "Complex" ? (v.betti ?? []) : []);
 
 /// Folds one stream event into the running cell.
 export function applyCellEvent(cell: RunningCell, e: CellEvent): RunningCell {

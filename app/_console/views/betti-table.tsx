@@ -18,7 +18,10 @@ export function BettiTable({ grid, partial = false }: { grid: BettiGrid; partial
       </caption>
       <thead>
         <tr>
-          <th scope="col" className="border-b border-ink/20 px-2 text-right font-normal text-ink/50 dark:border-paper/20 dark:text-paper/50">
+          <th
+            scope="col"
+            className="border-b border-ink/20 px-2 text-right font-normal text-ink/50 dark:border-paper/20 dark:text-paper/50"
+          >
             <span className="sr-only">j − i \ i</span>
           </th>
           {grid.columns.map((i) => (
@@ -44,7 +47,10 @@ export function BettiTable({ grid, partial = false }: { grid: BettiGrid; partial
       </tbody>
       <tfoot>
         <tr>
-          <th scope="row" className="border-r border-t border-ink/20 px-2 text-right font-normal text-ink-soft dark:border-paper/20 dark:text-paper/70">
+          <th
+            scope="row"
+            className="border-r border-t border-ink/20 px-2 text-right font-normal text-ink-soft dark:border-paper/20 dark:text-paper/70"
+          >
             total
           </th>
           {grid.totals.map((t, i) => (

@@ -61,7 +61,12 @@ export function CellView({ cell, footer, context }: { cell: Cell; footer?: React
       aria-label={`Cell ${cell.position + 1}`}
       className="rs-cell flex flex-col gap-2 border-b border-ink/10 py-3 dark:border-paper/10"
     >
-      <Header position={cell.position} status={cell.status} ms={cell.timings?.totalMs ?? null} author={(cell as Cell & { author?: Author }).author} />
+      <Header
+        position={cell.position}
+        status={cell.status}
+        ms={cell.timings?.totalMs ?? null}
+        author={(cell as Cell & { author?: Author }).author}
+      />
       <Source source={cell.source} />
       {cell.results.map((r, k) => (
         <ValueView key={resultIndex(r, k)} value={r.value} context={context} />

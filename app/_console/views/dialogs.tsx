@@ -82,7 +82,11 @@ export function ConsoleDialogs(props: {
       <Modal open={dialog === "export" && sessionId !== null} title="Export" onClose={onClose}>
         {sessionId && <ExportPanel sessionId={sessionId} link={props.link} cells={props.cells} onDone={props.onNotice} />}
       </Modal>
-      <Modal open={props.pendingRedefinition !== null} title="Replace a name someone else defined?" onClose={() => props.onAnswerRedefinition(false)}>
+      <Modal
+        open={props.pendingRedefinition !== null}
+        title="Replace a name someone else defined?"
+        onClose={() => props.onAnswerRedefinition(false)}
+      >
         <p className="text-sm" data-testid="redefine-question">
           {props.pendingRedefinition?.message}
         </p>

@@ -9,7 +9,11 @@ export function ErrorView({ error, source }: { error: ErrorJson; source: string 
   const c = errorCaret(source, error.span);
   const kind = error.kind === "limit" ? "limit reached" : error.kind === "cancelled" ? "cancelled" : `${error.kind} error`;
   return (
-    <div role="group" aria-label="Error" className="rounded border-l-4 border-red-600 bg-red-50 px-3 py-2 dark:border-red-400 dark:bg-red-950/40">
+    <div
+      role="group"
+      aria-label="Error"
+      className="rounded border-l-4 border-red-600 bg-red-50 px-3 py-2 dark:border-red-400 dark:bg-red-950/40"
+    >
       <pre className="overflow-x-auto font-mono text-sm leading-snug" aria-hidden={error.kind === "cancelled"}>
         <span className="select-none text-ink/40 dark:text-paper/40">{String(c.lineNumber).padStart(3)} │ </span>
         {c.line}

@@ -11,10 +11,19 @@ interface HistoryEntry {
   readonly sessionTitle?: string;
 }
 
-const itemClass = "cursor-pointer rounded px-2 py-1 font-mono text-sm aria-selected:bg-ink aria-selected:text-paper dark:aria-selected:bg-signal dark:aria-selected:text-night";
+const itemClass =
+  "cursor-pointer rounded px-2 py-1 font-mono text-sm aria-selected:bg-ink aria-selected:text-paper dark:aria-selected:bg-signal dark:aria-selected:text-night";
 
 /// A filterable list of earlier inputs. `entries` are this session's, oldest first.
-export function HistorySearch({ entries, onChoose, acrossSessions = true }: { entries: readonly string[]; onChoose: (source: string) => void; acrossSessions?: boolean }) {
+export function HistorySearch({
+  entries,
+  onChoose,
+  acrossSessions = true,
+}: {
+  entries: readonly string[];
+  onChoose: (source: string) => void;
+  acrossSessions?: boolean;
+}) {
   const [query, setQuery] = useState("");
   const [remote, setRemote] = useState<readonly HistoryEntry[]>([]);
   const [highlight, setHighlight] = useState(0);

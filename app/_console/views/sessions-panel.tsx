@@ -29,13 +29,19 @@ export function SessionsPanel({ sessions, error, currentId, onOpen, onNew, onImp
   const { mutate } = useSWRConfig();
   const [query, setQuery] = useState("");
   const q = query.trim();
-  const found = useSWR<{ sessions: Found[] }>(q ? `${keys.sessions}?q=${encodeURIComponent(q)}` : null, fetchJson, { keepPreviousData: true });
+  const found = useSWR<{ sessions: Found[] }>(q ? `${keys.sessions}?q=${encodeURIComponent(q)}` : null, fetchJson, {
+    keepPreviousData: true,
+  });
   const [renaming, setRenaming] = useState<{ id: string; title: string } | null>(null);
   const [deleting, setDeleting] = useState<SessionSummary | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
 
-  const refresh = () => mutate((key) => typeof key === "string" && (key === keys.sessions || key.startsWith(`${keys.sessions}?`) || key.startsWith(`${keys.sessions}/`)));
+  const refresh = () =>
+    mutate(
+      (key) =>
+        typeof key === "string" && (key === keys.sessions || key.startsWith(`${keys.sessions}?`) || key.startsWith(`${keys.sessions}/`)),
+    );
 
   const rename = async () => {
     if (!renaming) return;
@@ -102,7 +108,9 @@ export function SessionsPanel({ sessions, error, currentId, onOpen, onNew, onImp
         </p>
       )}
       {!list && !error && <p className="text-sm text-ink/50 dark:text-paper/50">{q ? "Searching…" : "Loading…"}</p>}
-      {list && list.length === 0 && <p className="text-sm text-ink/60 dark:text-paper/60">{q ? "No session matches." : "No sessions yet."}</p>}
+      {list && list.length === 0 && (
+        <p className="text-sm text-ink/60 dark:text-paper/60">{q ? "No session matches." : "No sessions yet."}</p>
+      )}
       <ul id="rs-sessions" className="flex min-h-0 flex-col gap-0.5 overflow-y-auto">
         {list?.map((s) =>
           renaming?.id === s.id ? (
@@ -154,10 +162,22 @@ export function SessionsPanel({ sessions, error, currentId, onOpen, onNew, onImp
               </button>
               {s.access === "owner" && (
                 <span className="flex shrink-0 flex-col">
-                  <button type="button" className={buttonQuiet} aria-label={`Rename ${s.title}`} title="Rename" onClick={() => setRenaming({ id: s.id, title: s.title })}>
+                  <button
+                    type="button"
+                    className={buttonQuiet}
+                    aria-label={`Rename ${s.title}`}
+                    title="Rename"
+                    onClick={() => setRenaming({ id: s.id, title: s.title })}
+                  >
                     Rename
                   </button>
-                  <button type="button" className={buttonQuiet} aria-label={`Delete ${s.title}`} title="Delete" onClick={() => setDeleting(s)}>
+                  <button
+                    type="button"
+                    className={buttonQuiet}
+                    aria-label={`Delete ${s.title}`}
+                    title="Delete"
+                    onClick={() => setDeleting(s)}
+                  >
                     Delete
                   </button>
                 </span>

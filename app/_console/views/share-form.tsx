@@ -92,14 +92,28 @@ export function ShareForm({ teams, allTeams = [], onShare }: ShareFormProps) {
           <input type="radio" name="grantee-kind" checked={kind === "user"} onChange={() => setKind("user")} /> A person
         </label>
         <label className="flex items-center gap-1">
-          <input type="radio" name="grantee-kind" checked={kind === "team"} disabled={teams.length === 0} onChange={() => setKind("team")} /> A team
+          <input
+            type="radio"
+            name="grantee-kind"
+            checked={kind === "team"}
+            disabled={teams.length === 0}
+            onChange={() => setKind("team")}
+          />{" "}
+          A team
         </label>
       </fieldset>
       <div className="flex items-end gap-2">
         {kind === "user" ? (
           <div className="min-w-0 flex-1 text-sm">
             <label htmlFor={`${id}-email`}>E-mail address</label>
-            <input id={`${id}-email`} className={textInput} type="email" value={email} onChange={(e) => setEmail(e.target.value)} placeholder="name@example.org" />
+            <input
+              id={`${id}-email`}
+              className={textInput}
+              type="email"
+              value={email}
+              onChange={(e) => setEmail(e.target.value)}
+              placeholder="name@example.org"
+            />
           </div>
         ) : (
           <div className="min-w-0 flex-1 text-sm">
@@ -124,7 +138,9 @@ export function ShareForm({ teams, allTeams = [], onShare }: ShareFormProps) {
           Share
         </button>
       </div>
-      {teams.length === 0 && <p className="text-xs text-ink/60 dark:text-paper/60">You lead or belong to no team yet; share with a person by e-mail.</p>}
+      {teams.length === 0 && (
+        <p className="text-xs text-ink/60 dark:text-paper/60">You lead or belong to no team yet; share with a person by e-mail.</p>
+      )}
       {problem && (
         <p role="alert" className="text-sm text-red-700 dark:text-red-300">
           {problem}
@@ -149,7 +165,8 @@ export function ShareForm({ teams, allTeams = [], onShare }: ShareFormProps) {
           </div>
         ) : (
           <p className="text-sm" data-testid="invite-offer">
-            If {invitable} has no Ringside account yet, a lead of one of your teams can invite them; the share waits for their confirmed address.
+            If {invitable} has no Ringside account yet, a lead of one of your teams can invite them; the share waits for their confirmed
+            address.
           </p>
         ))}
       {inviteNotice && (

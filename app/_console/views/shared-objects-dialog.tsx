@@ -38,7 +38,12 @@ export function SharedObjectsPanel({ targetSessionId, onImported }: SharedObject
     }
   };
 
-  if (list.error) return <p role="alert" className="text-sm text-red-700 dark:text-red-300">{list.error instanceof Error ? list.error.message : "Could not load."}</p>;
+  if (list.error)
+    return (
+      <p role="alert" className="text-sm text-red-700 dark:text-red-300">
+        {list.error instanceof Error ? list.error.message : "Could not load."}
+      </p>
+    );
   if (!list.data) return <p className="text-sm text-ink/50 dark:text-paper/50">Loading…</p>;
   const objects = list.data.objects;
   return (
@@ -47,7 +52,10 @@ export function SharedObjectsPanel({ targetSessionId, onImported }: SharedObject
       {objects.length === 0 ? (
         <p className="text-sm text-ink/60 dark:text-paper/60">Nobody has shared a named object with you yet.</p>
       ) : (
-        <ul aria-label="Objects shared with me" className="divide-y divide-ink/10 rounded-md border border-ink/10 dark:divide-paper/10 dark:border-paper/10">
+        <ul
+          aria-label="Objects shared with me"
+          className="divide-y divide-ink/10 rounded-md border border-ink/10 dark:divide-paper/10 dark:border-paper/10"
+        >
           {objects.map((o) => (
             <li key={o.id} className="flex flex-col gap-1 px-2 py-1.5 text-sm" data-shared-object={o.name}>
               <div className="flex items-center gap-2">
@@ -75,7 +83,12 @@ export function SharedObjectsPanel({ targetSessionId, onImported }: SharedObject
                 >
                   <label className="min-w-0 flex-1 text-xs">
                     Name of the copy
-                    <input autoFocus className={textInput} value={renaming.name} onChange={(e) => setRenaming({ id: o.id, name: e.target.value })} />
+                    <input
+                      autoFocus
+                      className={textInput}
+                      value={renaming.name}
+                      onChange={(e) => setRenaming({ id: o.id, name: e.target.value })}
+                    />
                   </label>
                   <button type="submit" className={buttonSecondary}>
                     Import as this name
@@ -86,7 +99,11 @@ export function SharedObjectsPanel({ targetSessionId, onImported }: SharedObject
           ))}
         </ul>
       )}
-      {problem && <p role="alert" className="text-sm text-red-700 dark:text-red-300">{problem}</p>}
+      {problem && (
+        <p role="alert" className="text-sm text-red-700 dark:text-red-300">
+          {problem}
+        </p>
+      )}
     </div>
   );
 }

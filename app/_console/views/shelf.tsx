@@ -78,7 +78,12 @@ export function Shelf({ objects, canEdit, onInsert, onRename, onDelete, onShare,
         <h2 className={panelHeading}>Named objects</h2>
         <span className="flex flex-wrap gap-0.5">
           {onOpenLibrary && (
-            <button type="button" className={buttonQuiet} onClick={onOpenLibrary} title="Your named objects across sessions, and those shared with you">
+            <button
+              type="button"
+              className={buttonQuiet}
+              onClick={onOpenLibrary}
+              title="Your named objects across sessions, and those shared with you"
+            >
               Library
             </button>
           )}
@@ -142,7 +147,11 @@ export function Shelf({ objects, canEdit, onInsert, onRename, onDelete, onShare,
               {o.summary}
             </p>
             {o.origin && (
-              <p className="truncate pl-1 text-[0.7rem] italic text-ink-soft dark:text-signal-soft" data-testid="object-origin" title={originLine(o.origin)}>
+              <p
+                className="truncate pl-1 text-[0.7rem] italic text-ink-soft dark:text-signal-soft"
+                data-testid="object-origin"
+                title={originLine(o.origin)}
+              >
                 {originLine(o.origin)}
               </p>
             )}
@@ -163,7 +172,11 @@ export function Shelf({ objects, canEdit, onInsert, onRename, onDelete, onShare,
             <input autoFocus className={textInput} value={newName} onChange={(e) => setNewName(e.target.value)} />
           </label>
           <p className="text-xs text-ink/60 dark:text-paper/60">Earlier cells keep their text; later cells use the new name.</p>
-          {problem && <p role="alert" className="text-sm text-red-700 dark:text-red-300">{problem}</p>}
+          {problem && (
+            <p role="alert" className="text-sm text-red-700 dark:text-red-300">
+              {problem}
+            </p>
+          )}
           <div className="flex justify-end gap-2">
             <button type="button" className={buttonSecondary} onClick={close}>
               Keep the name
@@ -177,10 +190,14 @@ export function Shelf({ objects, canEdit, onInsert, onRename, onDelete, onShare,
 
       <Modal open={deleting !== null} title={`Delete ${deleting?.name ?? ""}?`} onClose={close}>
         <p className="text-sm">
-          <span className="font-mono">{deleting?.name}</span> ({deleting?.type}) leaves the shelf; cells that use the name will
-          no longer find it.
+          <span className="font-mono">{deleting?.name}</span> ({deleting?.type}) leaves the shelf; cells that use the name will no longer
+          find it.
         </p>
-        {problem && <p role="alert" className="text-sm text-red-700 dark:text-red-300">{problem}</p>}
+        {problem && (
+          <p role="alert" className="text-sm text-red-700 dark:text-red-300">
+            {problem}
+          </p>
+        )}
         <div className="flex justify-end gap-2">
           <button type="button" className={buttonSecondary} onClick={close} autoFocus>
             Keep it

@@ -69,7 +69,11 @@ export function TransferPanel({ canExport, canImport, onExport, onImport, onChoo
               }}
             />
           </label>
-          {problem && <p role="alert" className="text-sm text-red-700 dark:text-red-300">{problem}</p>}
+          {problem && (
+            <p role="alert" className="text-sm text-red-700 dark:text-red-300">
+              {problem}
+            </p>
+          )}
         </section>
       )}
     </div>

@@ -12,7 +12,14 @@ interface Detail {
   role: TeamRole;
   members: { userId: string; name: string; email: string; role: TeamRole }[];
   invitations: { id: string; email: string; role: TeamRole; expiresAt: string }[];
-  sharedSessions: { id: string; title: string; ownerName: string; role: "viewer" | "editor"; shareId: string | null; via: "share" | "team visibility" }[];
+  sharedSessions: {
+    id: string;
+    title: string;
+    ownerName: string;
+    role: "viewer" | "editor";
+    shareId: string | null;
+    via: "share" | "team visibility";
+  }[];
 }
 interface SessionRow {
   id: string;
@@ -142,7 +149,12 @@ export function TeamView({ teamId, userId }: { teamId: string; userId: string })
             </label>
             <label className="flex flex-col text-sm">
               Role
-              <select aria-label="Invitation role" className={inputClass} value={inviteRole} onChange={(e) => setInviteRole(e.target.value as "member" | "guest")}>
+              <select
+                aria-label="Invitation role"
+                className={inputClass}
+                value={inviteRole}
+                onChange={(e) => setInviteRole(e.target.value as "member" | "guest")}
+              >
                 <option value="member">member</option>
                 <option value="guest">guest</option>
               </select>
@@ -162,7 +174,9 @@ export function TeamView({ teamId, userId }: { teamId: string; userId: string })
                     type="button"
                     className={quietButtonClass}
                     disabled={busy}
-                    onClick={() => act(() => api(`/api/teams/${teamId}/invitations/${i.id}`, { method: "DELETE" }), `Invitation to ${i.email} revoked.`)}
+                    onClick={() =>
+                      act(() => api(`/api/teams/${teamId}/invitations/${i.id}`, { method: "DELETE" }), `Invitation to ${i.email} revoked.`)
+                    }
                   >
                     Revoke
                   </button>
@@ -206,7 +220,13 @@ export function TeamView({ teamId, userId }: { teamId: string; userId: string })
           >
             <label className="flex flex-col text-sm">
               Share one of your sessions
-              <select aria-label="Share one of your sessions" className={inputClass} required value={shareSession} onChange={(e) => setShareSession(e.target.value)}>
+              <select
+                aria-label="Share one of your sessions"
+                className={inputClass}
+                required
+                value={shareSession}
+                onChange={(e) => setShareSession(e.target.value)}
+              >
                 <option value="">choose a session…</option>
                 {own.map((s) => (
                   <option key={s.id} value={s.id}>
@@ -217,7 +237,12 @@ export function TeamView({ teamId, userId }: { teamId: string; userId: string })
             </label>
             <label className="flex flex-col text-sm">
               As
-              <select aria-label="Share as" className={inputClass} value={shareRole} onChange={(e) => setShareRole(e.target.value as "viewer" | "editor")}>
+              <select
+                aria-label="Share as"
+                className={inputClass}
+                value={shareRole}
+                onChange={(e) => setShareRole(e.target.value as "viewer" | "editor")}
+              >
                 <option value="editor">editor</option>
                 <option value="viewer">viewer</option>
               </select>

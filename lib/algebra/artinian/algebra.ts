@@ -85,7 +85,8 @@ export class FiniteAlgebra<C = unknown> {
 
   /// x_v · a for a coordinate vector a.
   mulVector(v: number, a: readonly C[]): C[] {
-    const K = this.K, M = this.mulVar(v);
+    const K = this.K,
+      M = this.mulVar(v);
     const out = new Array<C>(this.dim).fill(K.zero);
     a.forEach((c, k) => {
       if (K.isZero(c)) return;

@@ -82,7 +82,10 @@ export function burchIndexOfRing(I: Ideal, opts?: ComputeOptions & { seed?: numb
       if (cut) break;
     }
     if (!cut) {
-      throw runtimeError("burch_index", "the ideal has an element of order 1 at the origin whose variable cannot be solved for polynomially; eliminating it needs power series, which are not implemented here");
+      throw runtimeError(
+        "burch_index",
+        "the ideal has an element of order 1 at the origin whose variable cannot be solved for polynomially; eliminating it needs power series, which are not implemented here",
+      );
     }
     J = cut.ideal;
     T = cut.ring;
@@ -121,4 +124,3 @@ function lcg(seed: number): () => number {
   let s = (Math.abs(Math.floor(seed)) % 2147483646) + 1;
   return () => (s = (s * 48271) % 2147483647);
 }
-

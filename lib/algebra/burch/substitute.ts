@@ -11,7 +11,11 @@ export function cutByLinearForm(I: Ideal, a: readonly bigint[]): { ideal: Ideal;
   let c = a.length - 1;
   while (c >= 0 && a[c] === 0n) c--;
   const keep = S.vars.map((_, i) => i).filter((i) => i !== c);
-  const T = polyRing(S.field, keep.map((i) => S.vars[i]), { order: S.order, degrees: keep.map((i) => S.degrees[i]) });
+  const T = polyRing(
+    S.field,
+    keep.map((i) => S.vars[i]),
+    { order: S.order, degrees: keep.map((i) => S.degrees[i]) },
+  );
   const image = keep.map((_, k) => variable(T, k));
   let sub = zero(T);
   keep.forEach((i, k) => {
@@ -45,7 +49,11 @@ export function eliminateByElement(I: Ideal, g: Poly): { ideal: Ideal; ring: Pol
   });
   if (c < 0) return null;
   const keep = S.vars.map((_, i) => i).filter((i) => i !== c);
-  const T = polyRing(S.field, keep.map((i) => S.vars[i]), { order: S.order, degrees: keep.map((i) => S.degrees[i]) });
+  const T = polyRing(
+    S.field,
+    keep.map((i) => S.vars[i]),
+    { order: S.order, degrees: keep.map((i) => S.degrees[i]) },
+  );
   const lead = ts.find((t) => t.exps[c] === 1)!;
   const toT = (exps: readonly number[], num: bigint, den: bigint): Poly => {
     let m = constant(T, num, den);

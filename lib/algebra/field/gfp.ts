@@ -17,7 +17,10 @@ export function mulModLarge(a: number, b: number, p: number): number {
 /// Inverse by the extended Euclidean algorithm.
 export function invMod(a: number, p: number): number {
   if (a === 0) throw runtimeError("invMod", `0 has no inverse in GF(${p})`);
-  let r0 = p, r1 = a, s0 = 0, s1 = 1;
+  let r0 = p,
+    r1 = a,
+    s0 = 0,
+    s1 = 1;
   while (r1 !== 0) {
     const q = Math.floor(r0 / r1);
     [r0, r1] = [r1, r0 - q * r1];

@@ -37,8 +37,12 @@ export function bigGcd(a: bigint, b: bigint): bigint {
   if (a < b) [a, b] = [b, a];
   while (b >= SMALL) {
     const shift = BigInt(Math.max(0, bitLength(a) - LEAD_BITS));
-    let x = Number(a >> shift), y = Number(b >> shift);
-    let A = 1, B = 0, C = 0, D = 1;
+    let x = Number(a >> shift),
+      y = Number(b >> shift);
+    let A = 1,
+      B = 0,
+      C = 0,
+      D = 1;
     for (;;) {
       if (y + C === 0 || y + D === 0) break;
       const q = Math.floor((x + A) / (y + C));

@@ -25,8 +25,10 @@ export class Echelon<C> {
   private axpy(w: C[], c: C, row: readonly C[]): void {
     const K = this.K;
     if (this.p) {
-      const p = this.p, nc = p - (c as number);
-      const ww = w as unknown as number[], rr = row as unknown as number[];
+      const p = this.p,
+        nc = p - (c as number);
+      const ww = w as unknown as number[],
+        rr = row as unknown as number[];
       for (let k = 0; k < ww.length; k++) {
         const a = rr[k];
         if (a !== 0) ww[k] = (ww[k] + nc * a) % p;

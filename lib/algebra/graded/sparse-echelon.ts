@@ -40,14 +40,18 @@ export class SparseEchelon<C> {
   /// Adds the vector held in the accumulator to the span (and clears the accumulator);
   /// false when it already lies in the span.
   insertAccumulated(): boolean {
-    const K = this.K, w = this.acc;
+    const K = this.K,
+      w = this.acc;
     if (this.p) {
-      const p = this.p, ww = w as unknown as number[];
+      const p = this.p,
+        ww = w as unknown as number[];
       for (let r = 0; r < this.rows.length; r++) {
         const c = ww[this.pivots[r]] % p;
         if (c === 0) continue;
-        const nc = p - c, row = this.rows[r] as unknown as SparseRow<number>;
-        const idx = row.idx, val = row.val;
+        const nc = p - c,
+          row = this.rows[r] as unknown as SparseRow<number>;
+        const idx = row.idx,
+          val = row.val;
         for (let k = 0; k < idx.length; k++) ww[idx[k]] = (ww[idx[k]] + nc * val[k]) % p;
       }
     } else {
@@ -59,7 +63,8 @@ export class SparseEchelon<C> {
       }
     }
     let lead = -1;
-    const idx: number[] = [], val: C[] = [];
+    const idx: number[] = [],
+      val: C[] = [];
     for (let k = 0; k < w.length; k++) {
       const a = w[k];
       if (K.isZero(a)) continue;

@@ -7,14 +7,23 @@ import type { SparseRow } from "./sparse-echelon";
 /// of length src per stored row (src × rank numbers); these are mostly zero, and for the
 /// largest graded pieces of a resolution that was most of the memory. Gaussian elimination
 /// tracking the combinations (common practice); `tick` is called once per image.
-export function sparseKernelBasis<C>(K: Coeffs<C>, tgt: number, src: number, images: readonly SparseRow<C>[], tick?: () => void): SparseRow<C>[] {
+export function sparseKernelBasis<C>(
+  K: Coeffs<C>,
+  tgt: number,
+  src: number,
+  images: readonly SparseRow<C>[],
+  tick?: () => void,
+): SparseRow<C>[] {
   const w = new Array<C>(tgt).fill(K.zero);
   const z = new Array<C>(src).fill(K.zero);
-  const rows: SparseRow<C>[] = [], combos: SparseRow<C>[] = [], pivots: number[] = [];
+  const rows: SparseRow<C>[] = [],
+    combos: SparseRow<C>[] = [],
+    pivots: number[] = [];
   const out: SparseRow<C>[] = [];
   const gather = (acc: C[], touched: number[]): SparseRow<C> => {
     touched.sort((a, b) => a - b);
-    const idx: number[] = [], val: C[] = [];
+    const idx: number[] = [],
+      val: C[] = [];
     let last = -1;
     for (const k of touched) {
       if (k === last) continue;
@@ -30,7 +39,8 @@ export function sparseKernelBasis<C>(K: Coeffs<C>, tgt: number, src: number, ima
   };
   images.forEach((v, j) => {
     tick?.();
-    const tw: number[] = [], tz: number[] = [j];
+    const tw: number[] = [],
+      tz: number[] = [j];
     for (let k = 0; k < v.idx.length; k++) {
       w[v.idx[k]] = v.val[k];
       tw.push(v.idx[k]);
@@ -39,7 +49,8 @@ export function sparseKernelBasis<C>(K: Coeffs<C>, tgt: number, src: number, ima
     for (let r = 0; r < rows.length; r++) {
       const c = w[pivots[r]];
       if (K.isZero(c)) continue;
-      const row = rows[r], combo = combos[r];
+      const row = rows[r],
+        combo = combos[r];
       for (let k = 0; k < row.idx.length; k++) {
         const i = row.idx[k];
         w[i] = K.sub(w[i], K.mul(c, row.val[k]));
@@ -51,7 +62,8 @@ export function sparseKernelBasis<C>(K: Coeffs<C>, tgt: number, src: number, ima
         tz.push(i);
       }
     }
-    const row = gather(w, tw), combo = gather(z, tz);
+    const row = gather(w, tw),
+      combo = gather(z, tz);
     if (row.idx.length === 0) {
       out.push(combo);
       return;

@@ -9,7 +9,12 @@ import { chooseStrategy } from "./strategy";
 
 /// Buchberger's algorithm with the Gebauer–Möller criteria and the sugar strategy; returns
 /// the reduced Gröbner basis (monic, sorted by increasing leading monomial).
-export function buchberger<C>(R: RingCtx<C>, gens: readonly Poly[], opts: ComputeOptions | undefined, strategy: Strategy = chooseStrategy(R)): Poly[] {
+export function buchberger<C>(
+  R: RingCtx<C>,
+  gens: readonly Poly[],
+  opts: ComputeOptions | undefined,
+  strategy: Strategy = chooseStrategy(R),
+): Poly[] {
   const inputs = gens.filter((f) => f.m.length > 0);
   const basis: Basis = { elts: [], active: [] };
   let pairs: Pair[] = inputs.map((f, i) => ({ i, j: -1, lcm: f.m[0], sugar: maxDegree(f) }));

@@ -69,7 +69,8 @@ class Accumulator {
 
   /// The residue at column c, which is then cleared.
   take(c: number): number {
-    const lo = this.lo, hi = this.hi;
+    const lo = this.lo,
+      hi = this.hi;
     let v = lo[c];
     if (hi !== null) {
       const h = hi[c];
@@ -85,14 +86,21 @@ class Accumulator {
 
   /// Adds mult·row (without its first entry) to the accumulator; mult in [1, p).
   addTail(row: SparseRow, mult: number): void {
-    const pc = row.cols, pv = row.vals, lo = this.lo, hi = this.hi, len = row.len, o = row.off;
+    const pc = row.cols,
+      pv = row.vals,
+      lo = this.lo,
+      hi = this.hi,
+      len = row.len,
+      o = row.off;
     if (hi === null) {
       for (let k = 1; k < len; k++) lo[pc[o + k]] += mult * pv[k];
       return;
     }
-    const mh = Math.floor(mult / 65536), ml = mult - mh * 65536;
+    const mh = Math.floor(mult / 65536),
+      ml = mult - mh * 65536;
     for (let k = 1; k < len; k++) {
-      const c = pc[o + k], v = pv[k];
+      const c = pc[o + k],
+        v = pv[k];
       lo[c] += ml * v;
       hi[c] += mh * v;
     }
@@ -100,7 +108,8 @@ class Accumulator {
 
   /// Reduces columns [from, to) so that another `budget` row operations fit.
   normalise(from: number, to: number): void {
-    const lo = this.lo, hi = this.hi;
+    const lo = this.lo,
+      hi = this.hi;
     for (let c = from; c < to; c++) {
       let v = lo[c];
       if (hi !== null && hi[c] !== 0) {
@@ -117,9 +126,21 @@ class Accumulator {
 /// numbering, A columns [0, nA) first) by the reducer rows `pivots` (indexed by their pivot
 /// column) and returns the remainder in the B columns, renumbered from 0 and increasing, or
 /// null when it is zero.
-function reduceByA(acc: Accumulator, row: SparseRow, skip: number, pivots: readonly SparseRow[], nA: number, ncols: number): SparseRow | null {
-  const p = acc.p, lo = acc.lo, hi = acc.hi, budget = acc.budget;
-  const rc = row.cols, rv = row.vals, o = row.off;
+function reduceByA(
+  acc: Accumulator,
+  row: SparseRow,
+  skip: number,
+  pivots: readonly SparseRow[],
+  nA: number,
+  ncols: number,
+): SparseRow | null {
+  const p = acc.p,
+    lo = acc.lo,
+    hi = acc.hi,
+    budget = acc.budget;
+  const rc = row.cols,
+    rv = row.vals,
+    o = row.off;
   let first = ncols;
   for (let k = skip; k < row.len; k++) {
     const c = rc[o + k];
@@ -137,7 +158,8 @@ function reduceByA(acc: Accumulator, row: SparseRow, skip: number, pivots: reado
       ops = 0;
     }
   }
-  const cols: number[] = [], vals: number[] = [];
+  const cols: number[] = [],
+    vals: number[] = [];
   for (let c = first > nA ? first : nA; c < ncols; c++) {
     if (lo[c] === 0 && (hi === null || hi[c] === 0)) continue;
     const v = acc.take(c);
@@ -154,15 +176,21 @@ function reduceByA(acc: Accumulator, row: SparseRow, skip: number, pivots: reado
 function echelon(p: number, rows: SparseRow[], from: number[], nB: number, ticker: Ticker): { rows: SparseRow[]; from: number[] } {
   const order = rows.map((_, i) => i).sort((a, b) => rows[a].cols[0] - rows[b].cols[0] || rows[a].len - rows[b].len);
   const acc = new Accumulator(p, nB);
-  const lo = acc.lo, hi = acc.hi, budget = acc.budget;
+  const lo = acc.lo,
+    hi = acc.hi,
+    budget = acc.budget;
   const pivots: (SparseRow | undefined)[] = new Array(nB);
-  const out: SparseRow[] = [], outFrom: number[] = [];
+  const out: SparseRow[] = [],
+    outFrom: number[] = [];
   for (const i of order) {
     ticker.tick();
     const row = rows[i];
-    const rc = row.cols, rv = row.vals;
+    const rc = row.cols,
+      rv = row.vals;
     for (let k = 0; k < row.len; k++) lo[rc[k]] = rv[k];
-    let ops = 0, lead = -1, nonzero = 0;
+    let ops = 0,
+      lead = -1,
+      nonzero = 0;
     for (let c = rc[0]; c < nB; c++) {
       if (lo[c] === 0 && (hi === null || hi[c] === 0)) continue;
       const v = acc.take(c);
@@ -181,7 +209,8 @@ function echelon(p: number, rows: SparseRow[], from: number[], nB: number, ticke
       }
     }
     if (lead < 0) continue;
-    const cols = new Int32Array(nonzero), vals = new Float64Array(nonzero);
+    const cols = new Int32Array(nonzero),
+      vals = new Float64Array(nonzero);
     const inv = invMod(lo[lead], p);
     let k = 0;
     for (let c = lead; k < nonzero; c++) {
@@ -201,7 +230,8 @@ function echelon(p: number, rows: SparseRow[], from: number[], nB: number, ticke
 
 /// v·w mod p when the product may not be exact in a double (p > 2^26).
 function mulSplit(v: number, w: number, p: number, acc: Accumulator): number {
-  const wh = Math.floor(w / 65536), wl = w - wh * 65536;
+  const wh = Math.floor(w / 65536),
+    wl = w - wh * 65536;
   return acc.mod(acc.mod(v * wh) * 65536 + v * wl);
 }
 
@@ -219,7 +249,8 @@ export interface F4Matrix {
 export function reduceF4Matrix(p: number, M: F4Matrix, ticker: Ticker): { rows: SparseRow[]; from: number[] } {
   const { pivots, rows, nA, ncols } = M;
   const acc = new Accumulator(p, ncols);
-  const reduced: SparseRow[] = [], from: number[] = [];
+  const reduced: SparseRow[] = [],
+    from: number[] = [];
   for (let i = 0; i < rows.length; i++) {
     ticker.tick();
     const r = reduceByA(acc, rows[i], 0, pivots, nA, ncols);

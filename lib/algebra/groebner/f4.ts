@@ -69,7 +69,8 @@ class MatrixBuilder {
   /// The row of t·f (monomial ids); `src` names f for a trace (a basis index, or −1 − i
   /// for input i).
   product(f: Poly, t: Mono, src = 0): SparseRow {
-    const fm = f.m, len = fm.length;
+    const fm = f.m,
+      len = fm.length;
     const hs = this.hashesOf(f);
     const ht = this.table.hash(t);
     if (this.used + len > this.pool.length) {
@@ -79,7 +80,8 @@ class MatrixBuilder {
     }
     const off = this.used;
     this.used += len;
-    const pool = this.pool, table = this.table;
+    const pool = this.pool,
+      table = this.table;
     for (let k = 0; k < len; k++) pool[off + k] = table.productId(t, ht, fm[k], hs[k]);
     // The pool may be replaced later; `cols` is set to the final pool in `finish`.
     const row = { cols: pool, off, len, vals: coeffsOf(f) };
@@ -91,13 +93,18 @@ class MatrixBuilder {
   /// divides gets a reducer row (the shortest such element); the table grows while it is
   /// walked.
   preprocess(elts: readonly BasisElt[], active: readonly number[], ticker: Ticker): void {
-    const table = this.table, S = table.stride, t = this.scratch;
+    const table = this.table,
+      S = table.stride,
+      t = this.scratch;
     for (let id = 0; id < table.size; id++) {
       ticker.tick();
       if (this.pivotOf[id] !== undefined) continue;
-      const E = table.exps, o = id * S;
-      const mask = E[o + 2], deg = E[o + 1];
-      let best = -1, bestLen = Infinity;
+      const E = table.exps,
+        o = id * S;
+      const mask = E[o + 2],
+        deg = E[o + 1];
+      let best = -1,
+        bestLen = Infinity;
       outer: for (let k = 0; k < active.length; k++) {
         const e = elts[active[k]];
         const lm = e.lm;
@@ -125,8 +132,10 @@ class MatrixBuilder {
   /// order), rewrites every row's ids as columns, and returns the matrix with the monomial
   /// id of each B column.
   finish(): { M: F4Matrix; bIds: Int32Array } {
-    const table = this.table, n = table.size;
-    const aIds: number[] = [], bIds: number[] = [];
+    const table = this.table,
+      n = table.size;
+    const aIds: number[] = [],
+      bIds: number[] = [];
     for (let id = 0; id < n; id++) (this.pivotOf[id] !== undefined ? aIds : bIds).push(id);
     const cmp = table.comparator(this.R.ring.order);
     const desc = (a: number, b: number) => cmp(b, a);
@@ -228,7 +237,12 @@ export function tracingF4(base: Strategy, trace: F4StepTrace[]): Strategy {
 /// inputs' images: every step builds only the traced rows and must give the traced leading
 /// monomials. Returns the reduced basis, or null when a step differs (p, or the traced
 /// prime, is unlucky for this ideal): the caller then computes from scratch.
-export function replayF4(R: RingCtx<number>, trace: readonly F4StepTrace[], inputs: readonly Poly[], opts: ComputeOptions | undefined): Poly[] | null {
+export function replayF4(
+  R: RingCtx<number>,
+  trace: readonly F4StepTrace[],
+  inputs: readonly Poly[],
+  opts: ComputeOptions | undefined,
+): Poly[] | null {
   const p = (R.K as GFCoeffs).p;
   const ticker = new Ticker(opts, () => ({ stage: "groebner", detail: "following the first prime's trace" }));
   const elts: Poly[] = [];
@@ -288,13 +302,18 @@ export function interreduceF4(R: RingCtx<number>, G: readonly Poly[], opts: Comp
     B.pivotOf[row.cols[row.off]] = row;
     B.rows.push(row);
   }
-  B.preprocess(elts, elts.map((_, i) => i), ticker);
+  B.preprocess(
+    elts,
+    elts.map((_, i) => i),
+    ticker,
+  );
   const { M, bIds } = B.finish();
   const tails = reduceTails(p, M, ticker);
   return elts.map((e, i) => {
     const t = tails[i];
     const len = t ? t.len : 0;
-    const m: Mono[] = new Array(len + 1), c: number[] = new Array(len + 1);
+    const m: Mono[] = new Array(len + 1),
+      c: number[] = new Array(len + 1);
     m[0] = e.lm;
     c[0] = 1;
     for (let k = 0; k < len; k++) {

@@ -46,10 +46,14 @@ export class Geobucket<C> {
   }
 
   private merge(a: Level<C>, b: Level<C>): Level<C> {
-    const K = this.R.K, cmp = this.R.cmp;
-    const m: Mono[] = [], c: C[] = [];
-    let i = a.start, j = b.start;
-    const na = a.m.length, nb = b.m.length;
+    const K = this.R.K,
+      cmp = this.R.cmp;
+    const m: Mono[] = [],
+      c: C[] = [];
+    let i = a.start,
+      j = b.start;
+    const na = a.m.length,
+      nb = b.m.length;
     while (i < na && j < nb) {
       const d = cmp(a.m[i], b.m[j]);
       if (d > 0) {
@@ -81,7 +85,9 @@ export class Geobucket<C> {
 
   /// Removes and returns the leading term of the sum, or null when the sum is zero.
   popLead(): { m: Mono; c: C } | null {
-    const K = this.R.K, cmp = this.R.cmp, levels = this.levels;
+    const K = this.R.K,
+      cmp = this.R.cmp,
+      levels = this.levels;
     for (;;) {
       let best = -1;
       let bestM: Mono | null = null;

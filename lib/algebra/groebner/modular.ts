@@ -73,7 +73,13 @@ export function groebnerModular(R: RingCtx<Rat>, gens: readonly Poly[], opts: Co
     if (best(lifts) !== L) continue;
     const lifted = reconstruct(R, L);
     if (!lifted) continue;
-    const text = lifted.map((g) => asTyped<Rat>(g).c.map((c) => `${c.n}/${c.d}`).join(" ")).join(";");
+    const text = lifted
+      .map((g) =>
+        asTyped<Rat>(g)
+          .c.map((c) => `${c.n}/${c.d}`)
+          .join(" "),
+      )
+      .join(";");
     const stable = text === L.last;
     L.last = text;
     if (!stable) continue;
@@ -94,7 +100,8 @@ function reduceInputs(inputs: readonly Poly[], p: number): [Mono[], number[]][] 
   const out: [Mono[], number[]][] = [];
   for (const f of inputs) {
     const F = asTyped<Rat>(f);
-    const m: Mono[] = [], c: number[] = [];
+    const m: Mono[] = [],
+      c: number[] = [];
     for (let k = 0; k < F.m.length; k++) {
       const d = bigToMod(F.c[k].d, p);
       if (d === 0) return null;
@@ -143,7 +150,10 @@ function combine(L: Lift, Gp: Poly[], p: number): void {
 /// (P. S. Wang, "A p-adic algorithm for univariate partial fractions", SYMSAC 1981).
 function ratRecon(u: bigint, M: bigint): Rat | null {
   const bound = bigSqrt(M / 2n);
-  let r0 = M, r1 = ((u % M) + M) % M, s0 = 0n, s1 = 1n;
+  let r0 = M,
+    r1 = ((u % M) + M) % M,
+    s0 = 0n,
+    s1 = 1n;
   while (r1 > bound) {
     const q = r0 / r1;
     [r0, r1] = [r1, r0 - q * r1];
@@ -168,7 +178,8 @@ function bigSqrt(n: bigint): bigint {
 function reconstruct(R: RingCtx<Rat>, L: Lift): Poly[] | null {
   const out: Poly[] = [];
   for (let k = 0; k < L.monos.length; k++) {
-    const m: Mono[] = [], c: Rat[] = [];
+    const m: Mono[] = [],
+      c: Rat[] = [];
     for (const mono of L.monos[k]) {
       const u = L.residues[k].get(monoKey(mono))!;
       if (u === 0n) continue;
@@ -178,7 +189,12 @@ function reconstruct(R: RingCtx<Rat>, L: Lift): Poly[] | null {
       c.push(q);
     }
     const idx = m.map((_, i) => i).sort((a, b) => R.cmp(m[b], m[a]));
-    out.push(makePoly(idx.map((i) => m[i]), idx.map((i) => c[i])));
+    out.push(
+      makePoly(
+        idx.map((i) => m[i]),
+        idx.map((i) => c[i]),
+      ),
+    );
   }
   return out;
 }
@@ -204,8 +220,10 @@ function verify(R: RingCtx<Rat>, inputs: readonly Poly[], G: Poly[], opts: Compu
     pairs = updatePairs(R.layout, { cmp: R.cmp, bySugar: false }, basis, pairs, basis.elts.length - 1);
   }
   for (const pr of pairs) {
-    const gi = Z[pr.i], gj = Z[pr.j];
-    const ai = gi.c[0], aj = gj.c[0];
+    const gi = Z[pr.i],
+      gj = Z[pr.j];
+    const ai = gi.c[0],
+      aj = gj.c[0];
     const d = bigGcd(ai, aj);
     const s = combineZ(R, mulZ(gi, monoDiv(pr.lcm, elts[pr.i].lm)), aj / d, mulZ(gj, monoDiv(pr.lcm, elts[pr.j].lm)), -(ai / d), 1);
     if (!reducesToZero(R, s, elts, Z, ids, ticker)) return false;
@@ -244,8 +262,10 @@ function mulZ(g: ZPoly, t: Mono): ZPoly {
 
 /// a·f + b·g without the first `skip` terms of each (their leading terms cancel).
 function combineZ(R: RingCtx<Rat>, f: ZPoly, a: bigint, g: ZPoly, b: bigint, skip: number): ZPoly {
-  const m: Mono[] = [], c: bigint[] = [];
-  let i = skip, j = skip;
+  const m: Mono[] = [],
+    c: bigint[] = [];
+  let i = skip,
+    j = skip;
   while (i < f.m.length || j < g.m.length) {
     const o = i >= f.m.length ? -1 : j >= g.m.length ? 1 : R.cmp(f.m[i], g.m[j]);
     if (o > 0) {
@@ -274,7 +294,8 @@ function reducesToZero(R: RingCtx<Rat>, h: ZPoly, elts: BasisElt[], Z: ZPoly[], 
     const r = findReducer(elts, ids, h.m[0]);
     if (r < 0) return false;
     const g = Z[r];
-    const a = g.c[0], c = h.c[0];
+    const a = g.c[0],
+      c = h.c[0];
     const d = bigGcd(a, c);
     h = combineZ(R, h, a / d, mulZ(g, monoDiv(h.m[0], elts[r].lm)), -(c / d), 1);
     if (++steps % 4 === 0) h = primitive(h);

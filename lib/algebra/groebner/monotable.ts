@@ -42,7 +42,10 @@ export class MonoTable {
   /// The id of t·m (hash(t·m) = ht + hm), inserting it when new.
   productId(t: Mono, ht: number, m: Mono, hm: number): number {
     const h = (ht + hm) | 0;
-    const slots = this.slots, E = this.exps, S = this.stride, hashes = this.hashes;
+    const slots = this.slots,
+      E = this.exps,
+      S = this.stride,
+      hashes = this.hashes;
     const mask = slots.length - 1;
     let s = (h ^ (h >>> 16)) & mask;
     for (;;) {
@@ -62,7 +65,8 @@ export class MonoTable {
     }
     const id = this.size++;
     if (id === this.hashes.length) this.growStore();
-    const F = this.exps, o = id * S;
+    const F = this.exps,
+      o = id * S;
     F[o] = t[0] + m[0];
     F[o + 1] = t[1] + m[1];
     F[o + 2] = t[2] | m[2];
@@ -99,18 +103,24 @@ export class MonoTable {
     switch (order.kind) {
       case "grevlex":
         return (a, b) => {
-          const E = this.exps, oa = a * S, ob = b * S;
+          const E = this.exps,
+            oa = a * S,
+            ob = b * S;
           return E[oa] - E[ob] || revTail(E, oa, ob);
         };
       case "glex":
       case "lex":
         return (a, b) => {
-          const E = this.exps, oa = a * S, ob = b * S;
+          const E = this.exps,
+            oa = a * S,
+            ob = b * S;
           return E[oa] - E[ob] || lexTail(E, oa, ob);
         };
       case "weights":
         return (a, b) => {
-          const E = this.exps, oa = a * S, ob = b * S;
+          const E = this.exps,
+            oa = a * S,
+            ob = b * S;
           return E[oa] - E[ob] || E[oa + 1] - E[ob + 1] || revTail(E, oa, ob);
         };
     }

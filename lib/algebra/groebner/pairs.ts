@@ -24,7 +24,8 @@ function lcmEquals(a: Mono, b: Mono, l: Mono): boolean {
 
 /// Sugar of the S-polynomial of elements with leading monomials lmi, lmj.
 function pairSugar(lcm: Mono, lmi: Mono, si: number, lmj: Mono, sj: number): number {
-  const a = si + lcm[1] - lmi[1], b = sj + lcm[1] - lmj[1];
+  const a = si + lcm[1] - lmi[1],
+    b = sj + lcm[1] - lmj[1];
   return a > b ? a : b;
 }
 
@@ -51,11 +52,7 @@ export function updatePairs(L: MonoLayout, order: PairOrder, basis: Basis, pairs
   }
   // Old pairs whose lcm is a proper multiple of lm(h) in the chain sense are redundant.
   const survivors = pairs.filter(
-    (p) =>
-      p.j < 0 ||
-      !monoDivides(lmh, p.lcm) ||
-      lcmEquals(elts[p.i].lm, lmh, p.lcm) ||
-      lcmEquals(elts[p.j].lm, lmh, p.lcm),
+    (p) => p.j < 0 || !monoDivides(lmh, p.lcm) || lcmEquals(elts[p.i].lm, lmh, p.lcm) || lcmEquals(elts[p.j].lm, lmh, p.lcm),
   );
   const fresh: Pair[] = [];
   for (const p of kept) {
@@ -75,7 +72,9 @@ export function updatePairs(L: MonoLayout, order: PairOrder, basis: Basis, pairs
 function mergeSorted(order: PairOrder, a: Pair[], b: Pair[]): Pair[] {
   if (b.length === 0) return a;
   const out: Pair[] = new Array(a.length + b.length);
-  let i = 0, j = 0, k = 0;
+  let i = 0,
+    j = 0,
+    k = 0;
   while (i < a.length && j < b.length) out[k++] = pairBefore(order, a[i], b[j]) <= 0 ? a[i++] : b[j++];
   while (i < a.length) out[k++] = a[i++];
   while (j < b.length) out[k++] = b[j++];

@@ -13,7 +13,8 @@ export const reducePairwise: ReductionStep = (R, batch, inputs, basis, opts, tic
       const f = asTyped(inputs[p.i]);
       bucket.add([...f.m], [...f.c] as never[]);
     } else {
-      const ei = basis.elts[p.i], ej = basis.elts[p.j];
+      const ei = basis.elts[p.i],
+        ej = basis.elts[p.j];
       addMultipleOfTail(R, bucket, ei.poly, R.K.one, monoDiv(p.lcm, ei.lm));
       addMultipleOfTail(R, bucket, ej.poly, R.K.neg(R.K.one), monoDiv(p.lcm, ej.lm));
     }

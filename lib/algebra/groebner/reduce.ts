@@ -8,8 +8,11 @@ import { Geobucket } from "./geobucket";
 /// A reducer: among the given elements, one whose leading monomial divides m (shortest first).
 /// The mask and degree tests are inlined: this is the hottest search of the engine.
 export function findReducer(elts: readonly BasisElt[], ids: readonly number[], m: Mono): number {
-  let best = -1, bestLen = Infinity;
-  const mask = m[2], deg = m[1], len = m.length;
+  let best = -1,
+    bestLen = Infinity;
+  const mask = m[2],
+    deg = m[1],
+    len = m.length;
   outer: for (let k = 0; k < ids.length; k++) {
     const e = elts[ids[k]];
     const lm = e.lm;
@@ -23,17 +26,18 @@ export function findReducer(elts: readonly BasisElt[], ids: readonly number[], m
 
 /// Adds s·t·tail(g) to the bucket, where tail(g) omits g's leading term.
 export function addMultipleOfTail<C>(R: RingCtx<C>, B: Geobucket<C>, g: Poly, s: C, t: Mono): void {
-  const G = asTyped<C>(g), K = R.K;
+  const G = asTyped<C>(g),
+    K = R.K;
   const len = G.m.length;
   if (len <= 1) return;
-  const m: Mono[] = new Array(len - 1), c: C[] = new Array(len - 1);
+  const m: Mono[] = new Array(len - 1),
+    c: C[] = new Array(len - 1);
   for (let k = 1; k < len; k++) {
     m[k - 1] = monoMul(G.m[k], t);
     c[k - 1] = K.mul(s, G.c[k]);
   }
   B.add(m, c);
 }
-
 
 /// Full reduction of the sum held in `bucket` by the elements `ids` (monic reducers).
 /// Returns the remainder (not normalised) and the sugar grown by the reductions.
@@ -47,7 +51,8 @@ export function reduceBucket<C>(
   ticker: Ticker,
 ): Reduced<C> {
   const K = R.K;
-  const m: Mono[] = [], c: C[] = [];
+  const m: Mono[] = [],
+    c: C[] = [];
   for (;;) {
     ticker.tick();
     const lt = bucket.popLead();
@@ -73,5 +78,8 @@ export function makeMonic<C>(R: RingCtx<C>, m: Mono[], c: C[]): Poly {
   const K = R.K;
   const inv = K.inv(c[0]);
   if (K.isOne(inv)) return makePoly(m, c);
-  return makePoly(m, c.map((x) => K.mul(inv, x)));
+  return makePoly(
+    m,
+    c.map((x) => K.mul(inv, x)),
+  );
 }

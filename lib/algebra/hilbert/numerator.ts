@@ -9,11 +9,7 @@ import type { Ticker } from "../options";
 /// N(t) with HS(S/I)(t) = N(t) / ∏ (1 − t^{w_i}), for I spanned by `gens` (any
 /// generators: redundant ones are removed first). `weights` are the positive degrees
 /// of the variables.
-export function hilbertNumeratorPivot(
-  gens: readonly Exponents[],
-  weights: readonly number[],
-  ticker: Ticker,
-): bigint[] {
+export function hilbertNumeratorPivot(gens: readonly Exponents[], weights: readonly number[], ticker: Ticker): bigint[] {
   return numeratorOfMinimal(minimalMonomialGenerators(gens), weights, ticker);
 }
 

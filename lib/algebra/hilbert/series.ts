@@ -27,7 +27,10 @@ export interface HilbertSeries {
 export function validateWeights(where: string, weights: readonly number[]): void {
   weights.forEach((w, i) => {
     if (!Number.isSafeInteger(w) || w < 1) {
-      throw runtimeError(where, `degree ${w} of variable ${i + 1} is not a positive integer (only positive gradings have a Hilbert series here)`);
+      throw runtimeError(
+        where,
+        `degree ${w} of variable ${i + 1} is not a positive integer (only positive gradings have a Hilbert series here)`,
+      );
     }
   });
 }
@@ -46,11 +49,7 @@ function validateExponents(where: string, gens: readonly Exponents[], n: number)
 /// The Hilbert series of S/I for the monomial ideal I spanned by the exponent vectors
 /// `gens` (redundant generators allowed; no generators means I = 0), with the
 /// variables in degrees `weights`.
-export function hilbertSeriesOfMonomials(
-  gens: readonly Exponents[],
-  weights: readonly number[],
-  opts?: ComputeOptions,
-): HilbertSeries {
+export function hilbertSeriesOfMonomials(gens: readonly Exponents[], weights: readonly number[], opts?: ComputeOptions): HilbertSeries {
   const where = "hilbertSeriesOfMonomials";
   validateWeights(where, weights);
   validateExponents(where, gens, weights.length);

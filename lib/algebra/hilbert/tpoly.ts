@@ -37,7 +37,13 @@ export function tpolyMul(f: TPoly, g: TPoly): bigint[] {
 
 /// f · (1 − t^d)
 export function tpolyMulOneMinusPower(f: TPoly, d: number): bigint[] {
-  return tpolyAdd(f, tpolyShift(f.map((c) => -c), d));
+  return tpolyAdd(
+    f,
+    tpolyShift(
+      f.map((c) => -c),
+      d,
+    ),
+  );
 }
 
 export function tpolyAtOne(f: TPoly): bigint {

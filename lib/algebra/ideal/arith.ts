@@ -37,5 +37,8 @@ export function idealPower(I: Ideal, k: number, opts?: ComputeOptions): Ideal {
     checkLimit(opts, "maxBasisSize", next.length, "number of generators of a power");
     layer = next;
   }
-  return ideal(R, layer.map((p) => p.poly));
+  return ideal(
+    R,
+    layer.map((p) => p.poly),
+  );
 }

@@ -13,12 +13,18 @@ export function idealColonElement(I: Ideal, f: Poly, opts?: ComputeOptions): Ide
   if (!f) throw runtimeError("idealColonElement", "the element is missing");
   if (isZero(f)) return ideal(R, [one(R)]);
   const meet = idealIntersection(I, ideal(R, [f]), opts);
-  return ideal(R, meet.gens.map((h) => exactQuotient(R, h, f, opts)));
+  return ideal(
+    R,
+    meet.gens.map((h) => exactQuotient(R, h, f, opts)),
+  );
 }
 
 /// I : J = ⋂_j (I : f_j) over the generators f_j of J (same source); I : 0 is the unit ideal.
 export function idealColon(I: Ideal, J: Ideal, opts?: ComputeOptions): Ideal {
   const R = commonRing("idealColon", I, J);
   if (J.gens.length === 0) return ideal(R, [one(R)]);
-  return idealIntersectionOf(J.gens.map((f) => idealColonElement(I, f, opts)), opts);
+  return idealIntersectionOf(
+    J.gens.map((f) => idealColonElement(I, f, opts)),
+    opts,
+  );
 }

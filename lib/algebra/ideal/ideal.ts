@@ -55,7 +55,10 @@ export function commonRing(where: string, ...ideals: Ideal[]): PolyRing {
   const R = ideals[0].ring;
   ideals.forEach((J, k) => {
     if (!sameRing(R, J.ring)) {
-      throw runtimeError(where, `ideal ${k + 1} lives in a different ring (variables ${J.ring.vars.join(", ")}) than ideal 1 (${R.vars.join(", ")})`);
+      throw runtimeError(
+        where,
+        `ideal ${k + 1} lives in a different ring (variables ${J.ring.vars.join(", ")}) than ideal 1 (${R.vars.join(", ")})`,
+      );
     }
   });
   return R;

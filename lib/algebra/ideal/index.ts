@@ -5,12 +5,5 @@ export { idealColon, idealColonElement } from "./colon";
 export { idealSaturation, idealSaturationElement } from "./saturate";
 export { idealEliminate } from "./eliminate";
 export { idealContains, idealIsSubset, idealEquals } from "./compare";
-export {
-  initialIdeal,
-  idealIsHomogeneous,
-  idealHilbertSeries,
-  idealDimension,
-  idealCodimension,
-  idealDegree,
-} from "./invariants";
+export { initialIdeal, idealIsHomogeneous, idealHilbertSeries, idealDimension, idealCodimension, idealDegree } from "./invariants";
 export { exactQuotient } from "./divide";

@@ -15,10 +15,7 @@ export function idealSaturationElement(I: Ideal, f: Poly, opts?: ComputeOptions)
   if (isZero(f)) return ideal(R, [one(R)]);
   const T = taggedRing(R, 1);
   const y = variable(T, 0);
-  const gens = [
-    ...I.gens.map((g) => embedInTagged(R, T, 1, g)),
-    sub(T, one(T), mul(T, y, embedInTagged(R, T, 1, f))),
-  ];
+  const gens = [...I.gens.map((g) => embedInTagged(R, T, 1, g)), sub(T, one(T), mul(T, y, embedInTagged(R, T, 1, f)))];
   return eliminatedIdeal(R, eliminateTags(R, T, 1, gens, opts));
 }
 
@@ -27,5 +24,8 @@ export function idealSaturationElement(I: Ideal, f: Poly, opts?: ComputeOptions)
 export function idealSaturation(I: Ideal, J: Ideal, opts?: ComputeOptions): Ideal {
   const R = commonRing("idealSaturation", I, J);
   if (J.gens.length === 0) return ideal(R, [one(R)]);
-  return idealIntersectionOf(J.gens.map((f) => idealSaturationElement(I, f, opts)), opts);
+  return idealIntersectionOf(
+    J.gens.map((f) => idealSaturationElement(I, f, opts)),
+    opts,
+  );
 }

@@ -78,4 +78,3 @@ export function grevlexRing(R: PolyRing): PolyRing {
 export function identityMap(n: number, offset = 0): number[] {
   return Array.from({ length: n }, (_, i) => i + offset);
 }
-

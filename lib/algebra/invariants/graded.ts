@@ -18,12 +18,21 @@ export interface GradedModule<C> {
   readonly leads: number[][][];
 }
 
-export function gradedModule<C>(R: RingCtx<C>, rows: readonly (readonly Poly[])[], degrees: readonly number[], opts?: ComputeOptions): GradedModule<C> {
+export function gradedModule<C>(
+  R: RingCtx<C>,
+  rows: readonly (readonly Poly[])[],
+  degrees: readonly number[],
+  opts?: ComputeOptions,
+): GradedModule<C> {
   const O = termOverPosition(R.layout, degrees.length);
   const ncols = rows.length === 0 ? 0 : rows[0].length;
   const gens: Vec<C>[] = [];
   for (let q = 0; q < ncols; q++) {
-    const v = vecFromPolys(R, O, rows.map((row) => row[q]));
+    const v = vecFromPolys(
+      R,
+      O,
+      rows.map((row) => row[q]),
+    );
     if (v.mono.length > 0) gens.push(v);
   }
   const G = moduleGroebner(R, O, degrees, gens, opts);
@@ -72,8 +81,15 @@ export function gradedPiece<C>(N: GradedModule<C>, shifts: readonly number[], d:
 
 /// The rank of the degree-d part of A ⊗ N: ⊕_b N(−src_b) → ⊕_a N(−tgt_a), by normal forms
 /// modulo the Gröbner basis of N's relations.
-export function gradedRank<C>(N: GradedModule<C>, A: readonly (readonly Poly[])[], src: GradedPiece, tgt: GradedPiece, opts?: ComputeOptions): number {
-  const R = N.R, K = R.K;
+export function gradedRank<C>(
+  N: GradedModule<C>,
+  A: readonly (readonly Poly[])[],
+  src: GradedPiece,
+  tgt: GradedPiece,
+  opts?: ComputeOptions,
+): number {
+  const R = N.R,
+    K = R.K;
   const ticker = new Ticker(opts, () => ({ stage: "graded linear algebra" }));
   const rows: Map<number, C>[] = [];
   for (const { b, c, u } of src.basis) {

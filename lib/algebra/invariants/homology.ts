@@ -19,10 +19,12 @@ function zeros(r: number, c: number): Matrix {
 /// A ⊗ 1 on F ⊗ G for A: F' ← F and G of rank g: rows (p, c) ↦ p·g + c.
 function kronLeft(A: readonly (readonly Poly[])[], cols: number, g: number): Matrix {
   const out = zeros(A.length * g, cols * g);
-  A.forEach((row, p) => row.forEach((f, q) => {
-    if (f.m.length === 0) return;
-    for (let c = 0; c < g; c++) out[p * g + c][q * g + c] = f;
-  }));
+  A.forEach((row, p) =>
+    row.forEach((f, q) => {
+      if (f.m.length === 0) return;
+      for (let c = 0; c < g; c++) out[p * g + c][q * g + c] = f;
+    }),
+  );
   return out;
 }
 

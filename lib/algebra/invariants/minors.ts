@@ -25,7 +25,13 @@ function subsets(n: number, k: number): number[][] {
 
 /// Determinants of all k×k submatrices on the first k rows of `rows`, keyed by column set,
 /// by Laplace expansion along the last row with the (k−1)-minors reused (common practice).
-function minorsOfRows<C>(R: RingCtx<C>, A: readonly (readonly Poly[])[], rowIdx: readonly number[], ncols: number, opts?: ComputeOptions): Map<string, Poly> {
+function minorsOfRows<C>(
+  R: RingCtx<C>,
+  A: readonly (readonly Poly[])[],
+  rowIdx: readonly number[],
+  ncols: number,
+  opts?: ComputeOptions,
+): Map<string, Poly> {
   let prev = new Map<string, Poly>([["", makePoly([], [])]]);
   const one = R.K.one;
   for (let t = 0; t < rowIdx.length; t++) {
@@ -81,5 +87,11 @@ export function det(R: PolyRing, A: readonly (readonly Poly[])[], opts?: Compute
   if (n !== A.length) throw runtimeError("det", `the matrix is ${A.length}×${n}, not square`);
   if (n === 0) return minors(R, A, 0)[0];
   const C = ringCtx(R);
-  return minorsOfRows(C, A, A.map((_, i) => i), n, opts).get(A.map((_, i) => i).join(",")) as Poly;
+  return minorsOfRows(
+    C,
+    A,
+    A.map((_, i) => i),
+    n,
+    opts,
+  ).get(A.map((_, i) => i).join(",")) as Poly;
 }

@@ -30,12 +30,14 @@ function pfaffian<C>(R: RingCtx<C>, A: readonly (readonly Poly[])[], idx: number
 export function pfaffians(R: PolyRing, A: readonly (readonly Poly[])[], size: number, opts?: ComputeOptions): Poly[] {
   const n = A.length;
   if (A.some((r) => r.length !== n)) throw runtimeError("pfaffians", "the matrix is not square");
-  if (!Number.isInteger(size) || size < 0 || size % 2 !== 0) throw runtimeError("pfaffians", `the size must be an even non-negative integer, got ${size}`);
+  if (!Number.isInteger(size) || size < 0 || size % 2 !== 0)
+    throw runtimeError("pfaffians", `the size must be an even non-negative integer, got ${size}`);
   const C = ringCtx(R);
   for (let i = 0; i < n; i++) {
     if (A[i][i].m.length > 0) throw runtimeError("pfaffians", "the matrix is not alternating (nonzero diagonal)");
     for (let j = 0; j < i; j++) {
-      if (addScaled(C, A[i][j], A[j][i], C.K.one).m.length > 0) throw runtimeError("pfaffians", "the matrix is not alternating (A + Aᵀ ≠ 0)");
+      if (addScaled(C, A[i][j], A[j][i], C.K.one).m.length > 0)
+        throw runtimeError("pfaffians", "the matrix is not alternating (A + Aᵀ ≠ 0)");
     }
   }
   const memo = new Map<string, Poly>();

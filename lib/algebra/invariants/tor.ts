@@ -18,11 +18,13 @@ export function quotientPresentation(I: Ideal): Presentation {
 /// M ⊗ N presented by [A ⊗ 1 | 1 ⊗ B] on the rows (a, c) (common practice).
 function tensorPresentation(M: Presentation, N: Presentation): Presentation {
   const zero = makePoly([], []);
-  const m0 = M.rowDegrees.length, n0 = N.rowDegrees.length;
+  const m0 = M.rowDegrees.length,
+    n0 = N.rowDegrees.length;
   const rowDegrees: number[] = [];
   for (let a = 0; a < m0; a++) for (let c = 0; c < n0; c++) rowDegrees.push(M.rowDegrees[a] + N.rowDegrees[c]);
   const cols: Poly[][] = [];
-  const mc = M.rows[0]?.length ?? 0, nc = N.rows[0]?.length ?? 0;
+  const mc = M.rows[0]?.length ?? 0,
+    nc = N.rows[0]?.length ?? 0;
   for (let q = 0; q < mc; q++) {
     for (let c = 0; c < n0; c++) {
       const col = new Array<Poly>(m0 * n0).fill(zero);
@@ -48,9 +50,16 @@ function tensorPresentation(M: Presentation, N: Presentation): Presentation {
 export function torLengthsOf(R: PolyRing, M: Presentation, N: Presentation, opts?: ComputeOptions): number[] {
   const T = tensorPresentation(M, N);
   const cols = T.rows[0]?.length ?? 0;
-  const hs = moduleHilbertSeries(freeModule(R, T.rowDegrees), Array.from({ length: cols }, (_, q) => T.rows.map((row) => row[q])), opts);
+  const hs = moduleHilbertSeries(
+    freeModule(R, T.rowDegrees),
+    Array.from({ length: cols }, (_, q) => T.rows.map((row) => row[q])),
+    opts,
+  );
   if (hs.dimension > 0) {
-    throw runtimeError("torLengths", `M ⊗ N is not of finite length (it has dimension ${hs.dimension}); Tor lengths need a finite-length tensor product`);
+    throw runtimeError(
+      "torLengths",
+      `M ⊗ N is not of finite length (it has dimension ${hs.dimension}); Tor lengths need a finite-length tensor product`,
+    );
   }
   const F = resolveCoker(R, M.rows, M.rowDegrees, opts);
   if (hs.dimension < 0) return F.ranks.map(() => 0);

@@ -1,12 +1,19 @@
 import { internalLimit } from "./limits";
-import { monoDiv as monoDivImported, monoDivides as monoDividesImported, monoMul as monoMulImported, type Mono } from "../monomial/monomial";
+import {
+  monoDiv as monoDivImported,
+  monoDivides as monoDividesImported,
+  monoMul as monoMulImported,
+  type Mono,
+} from "../monomial/monomial";
 import type { Ticker } from "../options";
 import type { RingCtx } from "../poly/ring";
 import { compareKeys, type ModuleOrder } from "./order";
 import type { Vec } from "./vector";
 
 // Bound once: transpiled module imports are property reads on every call in the hot loop.
-const monoMul = monoMulImported, monoDiv = monoDivImported, monoDivides = monoDividesImported;
+const monoMul = monoMulImported,
+  monoDiv = monoDivImported,
+  monoDivides = monoDividesImported;
 
 /// The sum s·t·v[pos..] of the terms of v from position pos on, multiplied by the term s·t.
 export interface Stream<C> {
@@ -77,7 +84,8 @@ export function heapDivide<C>(
   ticker: Ticker,
   maxTerms: number,
 ): Division<C> {
-  const K = R.K, cmp = R.cmp;
+  const K = R.K,
+    cmp = R.cmp;
   const before = (x: Stream<C>, y: Stream<C>) => compareKeys(cmp, O, x.key, x.v.comp[x.pos], y.key, y.v.comp[y.pos]) > 0;
   const heap: Stream<C>[] = [];
   const push = (st: Stream<C>) => {
@@ -158,7 +166,8 @@ export function heapDivide<C>(
 function findDivisor<C>(D: Divisors<C>, key: Mono, comp: number): number {
   const list = D.byComp.get(comp);
   if (!list) return -1;
-  let best = -1, bestLen = Infinity;
+  let best = -1,
+    bestLen = Infinity;
   for (const l of list) {
     const v = D.vecs[l];
     if (v.mono.length < bestLen && monoDivides(v.tot[0], key)) {

@@ -51,7 +51,8 @@ export function moduleGroebner<C>(
     const todo: Stream<C>[][] = [];
     for (const x of inputs.filter((y) => y.degree === current)) todo.push([makeStream(monoOne(R.layout), R.K.one, x.v, 0)]);
     for (const p of pairs.filter((q) => q.degree === current)) {
-      const gi = basis[p.i], gj = basis[p.j];
+      const gi = basis[p.i],
+        gj = basis[p.j];
       todo.push([makeStream(monoDiv(p.lcm, gi.tot[0]), R.K.one, gi, 1), makeStream(monoDiv(p.lcm, gj.tot[0]), R.K.neg(R.K.one), gj, 1)]);
     }
     pairs = pairs.filter((q) => q.degree !== current);
@@ -77,7 +78,9 @@ export function moduleGroebner<C>(
 
 /// Adds the pairs of the new element k and drops redundant ones (Gebauer–Möller B and M).
 function updatePairs<C>(R: RingCtx<C>, basis: Vec<C>[], degs: number[], pairs: Pair[], k: number): Pair[] {
-  const gk = basis[k], a = gk.comp[0], lk = gk.tot[0];
+  const gk = basis[k],
+    a = gk.comp[0],
+    lk = gk.tot[0];
   const fresh: Pair[] = [];
   for (let i = 0; i < k; i++) {
     if (basis[i].comp[0] !== a) continue;
@@ -86,12 +89,11 @@ function updatePairs<C>(R: RingCtx<C>, basis: Vec<C>[], degs: number[], pairs: P
   }
   const kept = pairs.filter((p) => {
     if (basis[p.i].comp[0] !== a || !monoDivides(lk, p.lcm)) return true;
-    const li = monoLcm(R.layout, basis[p.i].tot[0], lk), lj = monoLcm(R.layout, basis[p.j].tot[0], lk);
+    const li = monoLcm(R.layout, basis[p.i].tot[0], lk),
+      lj = monoLcm(R.layout, basis[p.j].tot[0], lk);
     return monoEq(li, p.lcm) || monoEq(lj, p.lcm);
   });
-  const minimal = fresh.filter((p, x) =>
-    fresh.every((q, y) => y === x || !monoDivides(q.lcm, p.lcm) || (monoEq(q.lcm, p.lcm) && y > x)),
-  );
+  const minimal = fresh.filter((p, x) => fresh.every((q, y) => y === x || !monoDivides(q.lcm, p.lcm) || (monoEq(q.lcm, p.lcm) && y > x)));
   return kept.concat(minimal);
 }
 

@@ -16,7 +16,8 @@ import { vecFromPolys } from "./vector";
 /// Needs the basis of F in non-negative degrees.
 export function moduleHilbertSeries(F: FreeModule, gens: readonly (readonly Poly[])[], opts?: ComputeOptions): HilbertSeries {
   const R = F.ring;
-  if (F.degrees.some((d) => d < 0)) throw runtimeError("moduleHilbertSeries", "the free module has generators in negative degrees; shift it first");
+  if (F.degrees.some((d) => d < 0))
+    throw runtimeError("moduleHilbertSeries", "the free module has generators in negative degrees; shift it first");
   const C = ringCtx(R);
   const O = termOverPosition(C.layout, F.degrees.length);
   const vecs = gens.map((g) => vecFromPolys(C, O, g)).filter((v) => v.mono.length > 0);

@@ -19,7 +19,8 @@ export function moduleKernel(
   targetDegrees: readonly number[],
   opts?: ComputeOptions,
 ): Poly[][] {
-  const r = targetDegrees.length, s = sourceDegrees.length;
+  const r = targetDegrees.length,
+    s = sourceDegrees.length;
   if (rows.length !== r) throw runtimeError("moduleKernel", `expected ${r} rows, got ${rows.length}`);
   if (rows.some((row) => row.length !== s)) throw runtimeError("moduleKernel", `every row needs ${s} entries`);
   if (s === 0) return [];

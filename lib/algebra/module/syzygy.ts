@@ -63,13 +63,16 @@ export function schreyerSyzygy<C>(
   maxTerms: number,
 ): Vec<C> {
   const K = R.K;
-  const gi = gens[t.i], gj = gens[t.j];
+  const gi = gens[t.i],
+    gj = gens[t.j];
   const lcm = monoLcm(R.layout, gi.tot[0], gj.tot[0]);
   const mj = monoDiv(lcm, gj.tot[0]);
   const minusOne = K.neg(K.one);
   const streams = [makeStream(t.mono, K.one, gi, 1), makeStream(mj, minusOne, gj, 1)];
   const { quotient } = heapDivide(R, O, streams, D, false, ticker, maxTerms);
-  const mono: Mono[] = [t.mono, mj], comp: number[] = [t.i, t.j], coef: C[] = [K.one, minusOne];
+  const mono: Mono[] = [t.mono, mj],
+    comp: number[] = [t.i, t.j],
+    coef: C[] = [K.one, minusOne];
   for (const q of quotient) {
     mono.push(q.mono);
     comp.push(q.index);

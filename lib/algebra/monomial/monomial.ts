@@ -6,7 +6,9 @@
 export type Mono = Int32Array;
 
 export const HEAD = 3;
-const KEY = 0, DEG = 1, MASK = 2;
+const KEY = 0,
+  DEG = 1,
+  MASK = 2;
 
 /// What packing needs to know about a ring: its grading and its order's primary weight.
 export interface MonoLayout {
@@ -28,7 +30,9 @@ export function monoFromExps(L: MonoLayout, exps: ArrayLike<number>): Mono {
 
 /// Recomputes the header of m from its exponents.
 export function finishMono(L: MonoLayout, m: Mono): Mono {
-  let deg = 0, key = 0, mask = 0;
+  let deg = 0,
+    key = 0,
+    mask = 0;
   const kw = L.keyWeights;
   for (let i = 0; i < L.n; i++) {
     const e = m[HEAD + i];

@@ -5,11 +5,7 @@ import { HEAD, type Mono } from "../monomial/monomial";
 const H = HEAD;
 /// Monomial orders. The first variable is the largest. "weights" compares w·e first and
 /// breaks ties by grevlex; grevlex and glex compare the grading's (weighted) degree first.
-export type OrderSpec =
-  | { kind: "grevlex" }
-  | { kind: "lex" }
-  | { kind: "glex" }
-  | { kind: "weights"; weights: number[] };
+export type OrderSpec = { kind: "grevlex" } | { kind: "lex" } | { kind: "glex" } | { kind: "weights"; weights: number[] };
 
 /// Positive when a > b, negative when a < b, 0 when equal.
 export type MonoCompare = (a: Mono, b: Mono) => number;

@@ -8,10 +8,16 @@ import type { RingCtx } from "./ring";
 const H = HEAD;
 /// f + s·g by one merge of the two sorted term lists.
 export function addScaled<C>(R: RingCtx<C>, f: Poly, g: Poly, s: C): Poly {
-  const F = asTyped<C>(f), G = asTyped<C>(g), K = R.K, cmp = R.cmp;
-  const m: Mono[] = [], c: C[] = [];
-  let i = 0, j = 0;
-  const nf = F.m.length, ng = G.m.length;
+  const F = asTyped<C>(f),
+    G = asTyped<C>(g),
+    K = R.K,
+    cmp = R.cmp;
+  const m: Mono[] = [],
+    c: C[] = [];
+  let i = 0,
+    j = 0;
+  const nf = F.m.length,
+    ng = G.m.length;
   const sOne = K.isOne(s);
   while (i < nf && j < ng) {
     const d = cmp(F.m[i], G.m[j]);
@@ -44,7 +50,8 @@ export function addScaled<C>(R: RingCtx<C>, f: Poly, g: Poly, s: C): Poly {
 
 /// s·t·f for a coefficient s and a monomial t.
 export function mulTerm<C>(R: RingCtx<C>, f: Poly, s: C, t: Mono): Poly {
-  const F = asTyped<C>(f), K = R.K;
+  const F = asTyped<C>(f),
+    K = R.K;
   if (K.isZero(s)) return makePoly([], []);
   const trivial = t.every((x, i) => i < H || x === 0);
   const m = trivial ? [...F.m] : F.m.map((x) => monoMul(x, t));
@@ -54,7 +61,10 @@ export function mulTerm<C>(R: RingCtx<C>, f: Poly, s: C, t: Mono): Poly {
 
 export function negPoly<C>(R: RingCtx<C>, f: Poly): Poly {
   const F = asTyped<C>(f);
-  return makePoly([...F.m], F.c.map((x) => R.K.neg(x)));
+  return makePoly(
+    [...F.m],
+    F.c.map((x) => R.K.neg(x)),
+  );
 }
 
 export function constPoly<C>(R: RingCtx<C>, a: C): Poly {
@@ -64,7 +74,8 @@ export function constPoly<C>(R: RingCtx<C>, a: C): Poly {
 /// Makes a polynomial from unsorted terms, combining equal monomials.
 export function polyFromTerms<C>(R: RingCtx<C>, m: Mono[], c: C[]): Poly {
   const idx = m.map((_, i) => i).sort((a, b) => R.cmp(m[b], m[a]));
-  const om: Mono[] = [], oc: C[] = [];
+  const om: Mono[] = [],
+    oc: C[] = [];
   for (const i of idx) {
     const k = om.length - 1;
     if (k >= 0 && R.cmp(om[k], m[i]) === 0) oc[k] = R.K.add(oc[k], c[i]);
@@ -73,7 +84,8 @@ export function polyFromTerms<C>(R: RingCtx<C>, m: Mono[], c: C[]): Poly {
       oc.push(c[i]);
     }
   }
-  const rm: Mono[] = [], rc: C[] = [];
+  const rm: Mono[] = [],
+    rc: C[] = [];
   for (let i = 0; i < om.length; i++) {
     if (!R.K.isZero(oc[i])) {
       rm.push(om[i]);
@@ -90,11 +102,13 @@ function maxDegree(f: Poly): number {
 }
 
 function guardExponents(f: Poly, g: Poly): void {
-  const a = f.m[0], b = g.m[0];
+  const a = f.m[0],
+    b = g.m[0];
   if (!a || !b) return;
   let worst = 0;
   for (let i = H; i < a.length; i++) {
-    let ea = 0, eb = 0;
+    let ea = 0,
+      eb = 0;
     for (const t of f.m) if (t[i] > ea) ea = t[i];
     for (const t of g.m) if (t[i] > eb) eb = t[i];
     if (ea + eb > worst) worst = ea + eb;

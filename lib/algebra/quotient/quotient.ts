@@ -40,7 +40,10 @@ export function quotientRing(A: AnyRing, I: Ideal | readonly Poly[]): QuotientRi
   const S = ambientRing(A);
   const extra = Array.isArray(I) ? ideal(S, I as readonly Poly[]) : (I as Ideal);
   if (!sameRing(S, extra.ring)) {
-    throw runtimeError("quotientRing", `the ideal lives in a ring with variables ${extra.ring.vars.join(", ")}, not in the ambient ring (${S.vars.join(", ")})`);
+    throw runtimeError(
+      "quotientRing",
+      `the ideal lives in a ring with variables ${extra.ring.vars.join(", ")}, not in the ambient ring (${S.vars.join(", ")})`,
+    );
   }
   const J = isQuotientRing(A) ? idealSum(A.ideal, extra) : extra;
   return Object.freeze({ ambient: S, ideal: J });
@@ -53,7 +56,10 @@ export function quotientRing(A: AnyRing, I: Ideal | readonly Poly[]): QuotientRi
 export function liftIdeal(A: AnyRing, I: Ideal): Ideal {
   const S = ambientRing(A);
   if (!sameRing(S, I.ring)) {
-    throw runtimeError("liftIdeal", `the ideal lives in a ring with variables ${I.ring.vars.join(", ")}, not in the ambient ring (${S.vars.join(", ")})`);
+    throw runtimeError(
+      "liftIdeal",
+      `the ideal lives in a ring with variables ${I.ring.vars.join(", ")}, not in the ambient ring (${S.vars.join(", ")})`,
+    );
   }
   return isQuotientRing(A) ? idealSum(A.ideal, I) : I;
 }

@@ -83,7 +83,9 @@ function bySchreyer(req: ResolutionRequest): Resolution {
     ...req.opts,
     ...(req.length !== undefined ? { length: req.length } : {}),
     ...(req.degree !== undefined ? { degree: req.degree } : {}),
-    partial: partial ? (col: { i: number; entries: readonly (readonly [number, number])[] }) => partial({ index: col.i, entries: col.entries }) : undefined,
+    partial: partial
+      ? (col: { i: number; entries: readonly (readonly [number, number])[] }) => partial({ index: col.i, entries: col.entries })
+      : undefined,
   };
   const M = req.module;
   return "ideal" in M ? resolveQuotient(M.ideal, opts) : resolveCoker(req.ring.ring, M.presentation.rows, M.presentation.degrees, opts);
@@ -118,13 +120,17 @@ function cyclicIdeal(req: ResolutionRequest): Ideal {
   if ("ideal" in M) return M.ideal;
   const rows = M.presentation.rows;
   if (rows.length !== 1) {
-    throw new AlgebraError("runtime", `resolve: over a ring given by a non-homogeneous ideal only cyclic modules are resolved (at the origin); this module has ${rows.length} generators`);
+    throw new AlgebraError(
+      "runtime",
+      `resolve: over a ring given by a non-homogeneous ideal only cyclic modules are resolved (at the origin); this module has ${rows.length} generators`,
+    );
   }
   return ideal(req.ring.ring, [...rows[0], ...req.ring.gens]);
 }
 
 function atOrigin(req: ResolutionRequest, length: number): { resolution: LocalResolution; overGivenRing: boolean } {
-  if (req.degree !== undefined) throw new AlgebraError("runtime", "resolve: degree bounds need a graded ring; this one is read at the origin, ungraded");
+  if (req.degree !== undefined)
+    throw new AlgebraError("runtime", "resolve: degree bounds need a graded ring; this one is read at the origin, ungraded");
   const I = cyclicIdeal(req);
   const Q = componentAtOrigin(req.ring, req.opts).ideal;
   return { resolution: resolveLocalArtinian(Q, idealSum(Q, I), length, req.opts), overGivenRing: idealEquals(Q, req.ring, req.opts) };

@@ -22,7 +22,8 @@ export function guessRational(s: TruncatedSeries, margin = 2): RationalGuess | n
   const N = a.length;
   const C: Rat[] = [RAT_ONE];
   let B: Rat[] = [RAT_ONE];
-  let L = 0, m = 1;
+  let L = 0,
+    m = 1;
   let b: Rat = RAT_ONE;
   for (let k = 0; k < N; k++) {
     // The discrepancy of the recurrence Σ_i C_i a_{k−i} = 0 (C_0 = 1) at k.

@@ -2,7 +2,10 @@
 /// start s, with list[k] = list[k + p] for every k ≥ s inside the list, the repeating block
 /// seen at least twice (s + 2p ≤ length). `null` when the list shows no such pattern.
 /// A list that is eventually constant has period 1 (it stabilises).
-export function eventualPeriod<T>(list: readonly T[], eq: (a: T, b: T) => boolean = (a, b) => a === b): { start: number; period: number } | null {
+export function eventualPeriod<T>(
+  list: readonly T[],
+  eq: (a: T, b: T) => boolean = (a, b) => a === b,
+): { start: number; period: number } | null {
   const N = list.length;
   for (let p = 1; 2 * p <= N; p++) {
     // The tail that satisfies the period-p condition, scanning from the end.

@@ -13,13 +13,18 @@ export function truncatedSeries(coeffs: readonly (bigint | number)[]): Truncated
 
 /// The coefficient of t^i; an error beyond the known terms.
 export function seriesAt(s: TruncatedSeries, i: number): bigint {
-  if (!Number.isInteger(i) || i < 0 || i >= s.terms) throw runtimeError("series", `the coefficient of t^${i} is not known (${s.terms} terms computed)`);
+  if (!Number.isInteger(i) || i < 0 || i >= s.terms)
+    throw runtimeError("series", `the coefficient of t^${i} is not known (${s.terms} terms computed)`);
   return s.coeffs[i];
 }
 
 /// The first `terms` coefficients of num/den (integer coefficient lists, den[0] = ±1).
 export function expandRational(num: readonly bigint[], den: readonly bigint[], terms: number): bigint[] {
-  const q = expandRationalQ(num.map((a) => rat(a)), den.map((a) => rat(a)), terms);
+  const q = expandRationalQ(
+    num.map((a) => rat(a)),
+    den.map((a) => rat(a)),
+    terms,
+  );
   return q.map((c) => {
     if (c.d !== 1n) throw runtimeError("series", "the expansion is not integral");
     return c.n;
@@ -55,10 +60,9 @@ export function polyPowZ(a: readonly bigint[], k: number): bigint[] {
 
 /// Whether a/b = c/d as rational functions (cross-multiplication).
 export function sameRationalFunction(a: readonly bigint[], b: readonly bigint[], c: readonly bigint[], d: readonly bigint[]): boolean {
-  const l = polyMulZ(a, d), r = polyMulZ(c, b);
+  const l = polyMulZ(a, d),
+    r = polyMulZ(c, b);
   const len = Math.max(l.length, r.length);
   for (let i = 0; i < len; i++) if ((l[i] ?? 0n) !== (r[i] ?? 0n)) return false;
   return true;
 }
-
-

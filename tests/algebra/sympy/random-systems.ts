@@ -32,7 +32,10 @@ export function randomSystem(
       const deg = int(t === 0 ? 1 : 0, o.degree);
       const exps = new Array<number>(o.vars).fill(0);
       for (let k = 0; k < deg; k++) exps[int(0, o.vars - 1)]++;
-      const mono = vars.map((v, i) => (exps[i] === 0 ? "" : exps[i] === 1 ? v : `${v}^${exps[i]}`)).filter(Boolean).join("*");
+      const mono = vars
+        .map((v, i) => (exps[i] === 0 ? "" : exps[i] === 1 ? v : `${v}^${exps[i]}`))
+        .filter(Boolean)
+        .join("*");
       parts.push(mono ? `(${coef})*${mono}` : `(${coef})`);
     }
     gens.push(parts.join("+"));

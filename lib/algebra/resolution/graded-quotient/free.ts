@@ -109,7 +109,8 @@ export class GradedFree<C> {
   /// `to` of degree j + w_v (of size `size`).
   mulVarBlock(v: number, j: number, from: readonly number[], w: readonly C[], size: number): C[] {
     const K = this.K;
-    const L = this.layout(j), T = this.layout(j + this.A.weights[v]);
+    const L = this.layout(j),
+      T = this.layout(j + this.A.weights[v]);
     const out = new Array<C>(size).fill(K.zero);
     for (let k = 0; k < w.length; k++) if (!K.isZero(w[k])) this.addMulVar(v, j, from[k], w[k], out, L, T);
     return out;
@@ -118,7 +119,8 @@ export class GradedFree<C> {
   /// Adds x_v · w into `out` (a zeroed dense vector of the group of degree j + w_v), for w
   /// sparse over the positions of group `from` of degree j.
   mulVarSparseInto(v: number, j: number, from: readonly number[], w: { idx: readonly number[]; val: readonly C[] }, out: C[]): void {
-    const L = this.layout(j), T = this.layout(j + this.A.weights[v]);
+    const L = this.layout(j),
+      T = this.layout(j + this.A.weights[v]);
     for (let k = 0; k < w.idx.length; k++) this.addMulVar(v, j, from[w.idx[k]], w.val[k], out, L, T);
   }
 

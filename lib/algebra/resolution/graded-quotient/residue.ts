@@ -5,7 +5,10 @@ import { type LocalResolveOptions, type QuotientResolution, resolveDegreewise } 
 /// The ideal m of the variables of the ring of J.
 export function variablesOf(J: Ideal): Ideal {
   const S = J.ring;
-  return ideal(S, S.vars.map((_, i) => variable(S, i)));
+  return ideal(
+    S,
+    S.vars.map((_, i) => variable(S, i)),
+  );
 }
 
 /// Betti numbers of the residue field k = R/m over R = S/J, J homogeneous.

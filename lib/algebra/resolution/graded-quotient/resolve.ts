@@ -166,11 +166,14 @@ function prepare<C>(req: ResolveRequest<C>): Setup<C> {
   const R = gradedQuotient(req.ring) as GradedQuotient<C>;
   const n = req.length;
   if (!Number.isInteger(n) || n < 0) throw new AlgebraError("runtime", "resolution: the length must be a non-negative integer");
-  if ((req.module === undefined) === (req.presentation === undefined)) throw new AlgebraError("runtime", "resolution: give either an ideal or a presentation");
+  if ((req.module === undefined) === (req.presentation === undefined))
+    throw new AlgebraError("runtime", "resolution: give either an ideal or a presentation");
   const pres = req.presentation ? presentationVectors(S, R, req.presentation) : null;
   const Q = req.module ? (gradedQuotient(idealSum(req.ring, req.module)) as GradedQuotient<C>) : null;
   const top = Q ? Q.topDegree() : topDegreeOf(S, req.ring, req.presentation!, opts);
-  const gensDeg = Q ? Math.max(1, ...idealGroebnerBasis(req.module!).map((f: Poly) => degree(S, f))) : Math.max(1, ...pres!.columns.map((c) => c.degree));
+  const gensDeg = Q
+    ? Math.max(1, ...idealGroebnerBasis(req.module!).map((f: Poly) => degree(S, f)))
+    : Math.max(1, ...pres!.columns.map((c) => c.degree));
   const plan = degreePlan(S, R, top, gensDeg, pres ? Math.max(0, ...req.presentation!.degrees) : 0, n, req.degree);
   checkLimit(opts, "maxDegree", plan.D === Infinity ? 0 : plan.D, "the internal degree of the resolution");
   const multi = !pres && isMonomialIdeal(req.ring) && isMonomialIdeal(req.module!);
@@ -212,7 +215,11 @@ function nextModule<C>(
   const images = new ImageCache(F, target);
   const pass: Pass<C> = { setup, i, F, next, kernels, prevKernelDims, images };
   for (let j = Math.min(...F.degrees); j <= jmax; j++) {
-    const info = () => ({ stage: "resolution over a quotient ring", detail: `homological degree ${i + 1}, internal degree ${j}`, fraction: n > 0 ? i / n : 1 });
+    const info = () => ({
+      stage: "resolution over a quotient ring",
+      detail: `homological degree ${i + 1}, internal degree ${j}`,
+      fraction: n > 0 ? i / n : 1,
+    });
     checkpoint(opts, info);
     checkLimit(opts, "maxBasisSize", F.dim(j), "a graded piece of the resolution");
     const L = F.layout(j);
@@ -414,7 +421,15 @@ interface DegreePlan {
 ///   cited from memory).
 /// * M of finite length with top degree s: Tor_i(M, k) is a subquotient of M ⊗ F_i(k), so
 ///   t_i(M) ≤ t_i(k) + s.
-function degreePlan<C>(S: PolyRing, R: GradedQuotient<C>, s: number | null, gensDeg: number, top0: number, n: number, degreeBound?: number): DegreePlan {
+function degreePlan<C>(
+  S: PolyRing,
+  R: GradedQuotient<C>,
+  s: number | null,
+  gensDeg: number,
+  top0: number,
+  n: number,
+  degreeBound?: number,
+): DegreePlan {
   const standard = S.degrees.every((w) => w === 1);
   const g = Math.max(2, R.initialDegree);
   let bound: (i: number) => number = () => Infinity;
@@ -425,7 +440,8 @@ function degreePlan<C>(S: PolyRing, R: GradedQuotient<C>, s: number | null, gens
   }
   if (R.isArtinian) reason = "R is Artinian: every graded piece beyond the computed ones is zero";
   if (degreeBound !== undefined) {
-    if (!Number.isInteger(degreeBound) || degreeBound < 0) throw new AlgebraError("runtime", "resolution: the degree bound must be a non-negative integer");
+    if (!Number.isInteger(degreeBound) || degreeBound < 0)
+      throw new AlgebraError("runtime", "resolution: the degree bound must be a non-negative integer");
     return { D: degreeBound, bound, reason };
   }
   if (R.isArtinian) return { D: Infinity, bound, reason };
@@ -436,9 +452,14 @@ function degreePlan<C>(S: PolyRing, R: GradedQuotient<C>, s: number | null, gens
 
 /// The columns of a presentation as sparse vectors of F_0 = ⊕ R(−a_p), each in its degree
 /// (the entries reduced to normal form modulo J).
-function presentationVectors<C>(S: PolyRing, R: GradedQuotient<C>, P: ModulePresentation): { columns: { degree: number; vector: Sparse<C> }[] } {
+function presentationVectors<C>(
+  S: PolyRing,
+  R: GradedQuotient<C>,
+  P: ModulePresentation,
+): { columns: { degree: number; vector: Sparse<C> }[] } {
   const degs = P.degrees;
-  if (degs.some((d) => !Number.isInteger(d) || d < 0)) throw new AlgebraError("runtime", "resolution: generator degrees must be integers ≥ 0");
+  if (degs.some((d) => !Number.isInteger(d) || d < 0))
+    throw new AlgebraError("runtime", "resolution: generator degrees must be integers ≥ 0");
   if (P.rows.length !== degs.length) throw new AlgebraError("runtime", "resolution: one degree per row of the presentation is needed");
   const cols = P.rows[0]?.length ?? 0;
   const K = R.K;

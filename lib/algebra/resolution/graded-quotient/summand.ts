@@ -61,7 +61,11 @@ export function residueSplitsFromSyzygy(J: Ideal, p: number, I?: Ideal, opts?: C
 /// degree by degree: M_j = F_j / K_j with K = image of A, read from the resolution's first step.
 /// null when the pieces computed cannot decide (M not of finite length over a ring that is not
 /// Artinian): the caller may know more (a module of positive depth has no socle).
-export function moduleSocle(J: Ideal, presentation: ModulePresentation, opts?: ComputeOptions): { degrees: number[]; splits: boolean } | null {
+export function moduleSocle(
+  J: Ideal,
+  presentation: ModulePresentation,
+  opts?: ComputeOptions,
+): { degrees: number[]; splits: boolean } | null {
   const step = presentationKernels(J, presentation, opts);
   if (!step) return null;
   const degrees: number[] = [];

@@ -42,7 +42,13 @@ export function schreyerResolution<C>(
   opts: ComputeOptions | undefined,
   onLevel: LevelDone<C>,
 ): SchreyerResolution<C> {
-  const S: SchreyerResolution<C> = { degrees: [[...degrees0]], orders: [order0], cols: [[]], truncatedDegree: false, truncatedLength: false };
+  const S: SchreyerResolution<C> = {
+    degrees: [[...degrees0]],
+    orders: [order0],
+    cols: [[]],
+    truncatedDegree: false,
+    truncatedLength: false,
+  };
   firstLevel(S, basis, degrees0, order0, bounds);
   onLevel(S, 1);
   const at: Position = { level: 1, degree: 0, done: 0, total: 0 };
@@ -64,7 +70,12 @@ export function schreyerResolution<C>(
     checkLimit(opts, "maxBasisSize", kept.length, `the rank of the free module F_${level + 1}`);
     const cols = syzygiesOfLevel(R, S, level, gens, kept, keptDegs, { at, info, ticker, opts });
     S.degrees.push(keptDegs);
-    S.orders.push(schreyerOrder(S.orders[level], kept.map((t) => ({ mono: t.mono, comp: t.i }))));
+    S.orders.push(
+      schreyerOrder(
+        S.orders[level],
+        kept.map((t) => ({ mono: t.mono, comp: t.i })),
+      ),
+    );
     S.cols.push(cols);
     onLevel(S, level + 1);
   }
@@ -82,17 +93,33 @@ interface Position {
 type FrameTerm = ReturnType<typeof schreyerFrame>[number];
 
 /// Level 1: the Gröbner basis in Schreyer's sort order, cut at the degree bound.
-function firstLevel<C>(S: SchreyerResolution<C>, basis: readonly Vec<C>[], degrees0: readonly number[], order0: ModuleOrder, bounds: FrameBounds): void {
+function firstLevel<C>(
+  S: SchreyerResolution<C>,
+  basis: readonly Vec<C>[],
+  degrees0: readonly number[],
+  order0: ModuleOrder,
+  bounds: FrameBounds,
+): void {
   const perm = schreyerSort(basis);
   const first = perm.map((k) => basis[k]);
   const firstDegrees = first.map((v) => v.mono[0][1] + degrees0[v.comp[0]]);
   const keep = firstDegrees.map((d) => d <= bounds.maxDegree);
   if (keep.includes(false)) S.truncatedDegree = true;
-  pushLevel(S, first.filter((_, k) => keep[k]), firstDegrees.filter((_, k) => keep[k]), order0);
+  pushLevel(
+    S,
+    first.filter((_, k) => keep[k]),
+    firstDegrees.filter((_, k) => keep[k]),
+    order0,
+  );
 }
 
 /// The frame's leading terms whose degree is within the bound (and their degrees).
-function withinDegreeBound<C>(S: SchreyerResolution<C>, level: number, frame: readonly FrameTerm[], bounds: FrameBounds): { kept: FrameTerm[]; keptDegs: number[] } {
+function withinDegreeBound<C>(
+  S: SchreyerResolution<C>,
+  level: number,
+  frame: readonly FrameTerm[],
+  bounds: FrameBounds,
+): { kept: FrameTerm[]; keptDegs: number[] } {
   const degs = frame.map((t) => t.mono[1] + S.degrees[level][t.i]);
   const kept = frame.filter((_, p) => degs[p] <= bounds.maxDegree);
   const keptDegs = degs.filter((d) => d <= bounds.maxDegree);
@@ -139,5 +166,10 @@ function syzygiesOfLevel<C>(
 function pushLevel<C>(S: SchreyerResolution<C>, cols: Vec<C>[], degs: number[], O: ModuleOrder): void {
   S.degrees.push(degs);
   S.cols.push(cols);
-  S.orders.push(schreyerOrder(O, cols.map((g) => ({ mono: g.mono[0], comp: g.comp[0] }))));
+  S.orders.push(
+    schreyerOrder(
+      O,
+      cols.map((g) => ({ mono: g.mono[0], comp: g.comp[0] })),
+    ),
+  );
 }

@@ -38,7 +38,8 @@ interface SparseMap {
 function sparseFromVecs<C>(R: RingCtx<C>, cols: readonly Vec<C>[]): SparseMap {
   const M: SparseMap = { cols: new Map(), rows: new Map() };
   cols.forEach((v, p) => {
-    const ms = new Map<number, Mono[]>(), cs = new Map<number, C[]>();
+    const ms = new Map<number, Mono[]>(),
+      cs = new Map<number, C[]>();
     for (let t = 0; t < v.mono.length; t++) {
       const a = v.comp[t];
       if (!ms.has(a)) {
@@ -163,7 +164,8 @@ function eliminate<C>(R: RingCtx<C>, maps: SparseMap[], k: number, a: number, b:
 
 /// The matrix of map k of the minimal complex, rows and columns in the order of `kept`.
 export function denseMap<C>(R: RingCtx<C>, M: MinimalComplex, k: number): Poly[][] {
-  const rows = M.kept[k - 1], cols = M.kept[k];
+  const rows = M.kept[k - 1],
+    cols = M.kept[k];
   const zero = polyFromTerms(R, [], []);
   const A = M.maps[k];
   return rows.map((a) => cols.map((b) => A?.cols.get(b)?.get(a) ?? zero));

@@ -28,10 +28,20 @@ export function columnDegrees(rows: readonly (readonly Poly[])[], rowDegrees: re
 
 /// A minimal presentation of coker(A) (A homogeneous, rows in degrees rowDegrees): the first
 /// differential of its minimal graded free resolution and the degrees of its target.
-export function minimalPresentation(R: PolyRing, rows: readonly (readonly Poly[])[], rowDegrees: readonly number[], opts?: ComputeOptions): Presentation {
+export function minimalPresentation(
+  R: PolyRing,
+  rows: readonly (readonly Poly[])[],
+  rowDegrees: readonly number[],
+  opts?: ComputeOptions,
+): Presentation {
   // the frame works with basis elements in non-negative degrees: shift and shift back
   const shift = -Math.min(0, ...rowDegrees);
-  const C = resolveCoker(R, rows, rowDegrees.map((d) => d + shift), { ...opts, length: 1 });
+  const C = resolveCoker(
+    R,
+    rows,
+    rowDegrees.map((d) => d + shift),
+    { ...opts, length: 1 },
+  );
   const degs = (C.degrees[0] ?? []).map((d) => d - shift);
   return { rows: C.length >= 1 ? C.map(1) : degs.map(() => []), rowDegrees: degs };
 }

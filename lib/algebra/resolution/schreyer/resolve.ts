@@ -42,7 +42,12 @@ export function resolveQuotient(I: Ideal, opts?: ResolveOptions): Resolution {
   const C = ringCtx(R);
   const G = idealGroebnerBasis(I, opts);
   const O = termOverPosition(C.layout, 1);
-  for (const g of G) if (!g.m.every((m) => m[1] === g.m[0][1])) throw runtimeError("resolveQuotient", "the ideal is not homogeneous, so it has no graded resolution: make the terms of each generator share one degree (homogenize with a new variable)");
+  for (const g of G)
+    if (!g.m.every((m) => m[1] === g.m[0][1]))
+      throw runtimeError(
+        "resolveQuotient",
+        "the ideal is not homogeneous, so it has no graded resolution: make the terms of each generator share one degree (homogenize with a new variable)",
+      );
   const basis = G.map((g) => vecFromPolys(C, O, [g]));
   return resolveFromBasis(C, [0], O, basis, opts);
 }
@@ -50,7 +55,12 @@ export function resolveQuotient(I: Ideal, opts?: ResolveOptions): Resolution {
 /// The minimal graded free resolution of coker(A) for a homogeneous matrix A (given by its
 /// rows) with target R^[rowDegrees] (default all 0): the degree of column q is deg A[a][q] +
 /// rowDegrees[a] for its nonzero entries, which must agree.
-export function resolveCoker(R: PolyRing, rows: readonly (readonly Poly[])[], rowDegrees?: readonly number[], opts?: ResolveOptions): Resolution {
+export function resolveCoker(
+  R: PolyRing,
+  rows: readonly (readonly Poly[])[],
+  rowDegrees?: readonly number[],
+  opts?: ResolveOptions,
+): Resolution {
   const C = ringCtx(R);
   const r = rows.length;
   const degs = rowDegrees ? [...rowDegrees] : new Array<number>(r).fill(0);
@@ -60,7 +70,11 @@ export function resolveCoker(R: PolyRing, rows: readonly (readonly Poly[])[], ro
   const O = termOverPosition(C.layout, r);
   const gens: Vec<unknown>[] = [];
   for (let q = 0; q < ncols; q++) {
-    const v = vecFromPolys(C, O, rows.map((row) => row[q]));
+    const v = vecFromPolys(
+      C,
+      O,
+      rows.map((row) => row[q]),
+    );
     if (v.mono.length > 0) gens.push(v);
   }
   checkpoint(opts, { stage: "resolution", detail: "Gröbner basis of the presentation" });
@@ -109,14 +123,21 @@ function resolveFromBasis<C>(R: RingCtx<C>, degrees0: number[], O: ModuleOrder, 
     }
     return M;
   };
-  const rankOf = Array.from({ length: length + 1 }, (_, i) => (reported.find((c) => c.i === i)?.entries ?? []).reduce((s, [, b]) => s + b, 0));
+  const rankOf = Array.from({ length: length + 1 }, (_, i) =>
+    (reported.find((c) => c.i === i)?.entries ?? []).reduce((s, [, b]) => s + b, 0),
+  );
   let degrees: readonly (readonly number[])[] | null = null;
   const maps = new Map<number, Poly[][]>();
   return Object.freeze({
     ring: R.ring,
     ranks: Object.freeze(rankOf),
     get degrees() {
-      if (!degrees) degrees = Object.freeze(minimized().kept.slice(0, length + 1).map((ks, k) => Object.freeze(ks.map((p) => S.degrees[k][p]))));
+      if (!degrees)
+        degrees = Object.freeze(
+          minimized()
+            .kept.slice(0, length + 1)
+            .map((ks, k) => Object.freeze(ks.map((p) => S.degrees[k][p]))),
+        );
       return degrees;
     },
     betti: bettiTable(reported, complete),

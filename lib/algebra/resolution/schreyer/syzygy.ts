@@ -13,7 +13,8 @@ export interface Presentation {
 export function syzygyPresentation(C: Resolution, p: number): Presentation {
   if (!Number.isInteger(p) || p < 0) throw runtimeError("syzygyPresentation", `p must be a non-negative integer, got ${p}`);
   if (p > C.length) return { rows: [], rowDegrees: [] };
-  if (!C.complete && p + 1 > C.length) throw runtimeError("syzygyPresentation", "the resolution was cut short before this syzygy's presentation");
+  if (!C.complete && p + 1 > C.length)
+    throw runtimeError("syzygyPresentation", "the resolution was cut short before this syzygy's presentation");
   const rows = p + 1 <= C.length ? C.map(p + 1) : C.degrees[p].map(() => []);
   return { rows, rowDegrees: [...C.degrees[p]] };
 }

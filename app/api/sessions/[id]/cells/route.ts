@@ -19,7 +19,10 @@ export const MAX_SOURCE_BYTES = LIMIT_TABLE.cellSourceBytes.value;
 
 const NewCell = z
   .object({
-    source: z.string().max(MAX_SOURCE_BYTES, "a cell holds at most 100 KB of source").refine((s) => s.trim() !== "", "the cell is empty: type a statement to run"),
+    source: z
+      .string()
+      .max(MAX_SOURCE_BYTES, "a cell holds at most 100 KB of source")
+      .refine((s) => s.trim() !== "", "the cell is empty: type a statement to run"),
     /// the caller confirmed replacing names that someone else defined (lib/sessions/redefine-guard)
     redefine: z.boolean().optional(),
   })

@@ -42,7 +42,12 @@ export const GET = route(async (req, { params }: Context) => {
   const { session } = await requireSessionAccess(user, id, "read", { linkToken: token });
   const f = format as keyof typeof TYPES;
   const body = f === "json" ? JSON.stringify(await exportJson(session, selection), null, 2) : await exportText(session, f, selection);
-  const filename = `${session.title.replace(/[^A-Za-z0-9._-]+/g, "-").replace(/^-+|-+$/g, "").slice(0, 60) || "session"}.${TYPES[f].ext}`;
+  const filename = `${
+    session.title
+      .replace(/[^A-Za-z0-9._-]+/g, "-")
+      .replace(/^-+|-+$/g, "")
+      .slice(0, 60) || "session"
+  }.${TYPES[f].ext}`;
   return new Response(body, {
     status: 200,
     headers: { "Content-Type": TYPES[f].type, "Content-Disposition": `attachment; filename="${filename}"`, "Cache-Control": "no-store" },
