@@ -5,7 +5,7 @@
 import { readUpload } from "./compute-adapter";
 import { ExperimentError } from "./errors";
 import type { UploadProblem } from "./experiment-job";
-import { MAX_UPLOAD_LINES } from "./uploads";
+import { jsonLines, MAX_UPLOAD_LINES } from "./uploads";
 
 /// How many members the preview returns (the count is always the full one).
 export const PREVIEW_MEMBERS = 12;
@@ -23,37 +23,12 @@ export interface UploadPreview {
   unit: "line" | "item";
 }
 
-/// The same reading of JSON as uploads.ts: one `<g1, g2>` line per item; a malformed item
-/// is a problem numbered by its 1-based position.
-function jsonAsLines(content: string): { text: string; problems: UploadProblem[] } {
-  let data: unknown;
-  try {
-    data = JSON.parse(content);
-  } catch (e) {
-    throw new ExperimentError(400, "invalid_upload", `The upload is not valid JSON: ${(e as Error).message}.`);
-  }
-  if (!Array.isArray(data))
-    throw new ExperimentError(
-      400,
-      "invalid_upload",
-      'A JSON upload is a list of ideals, each a list of generator texts: [["x^2", "y"], …].',
-    );
-  const problems: UploadProblem[] = [];
-  const lines = data.map((item, k) => {
-    if (!Array.isArray(item) || item.length === 0 || !item.every((g) => typeof g === "string" && g.trim() !== "" && !/[<>\n;]/.test(g))) {
-      problems.push({ line: k + 1, message: 'expected a nonempty list of generator texts such as ["x^2", "y*z"]' });
-      return "<0>";
-    }
-    return `<${(item as string[]).join(", ")}>`;
-  });
-  return { text: lines.join("\n"), problems };
-}
 
 export async function previewUpload(u: { format: "text" | "json"; ring: string; content: string }): Promise<UploadPreview> {
   const unit = u.format === "json" ? "item" : "line";
   let text = u.content;
   let problems: UploadProblem[] = [];
-  if (u.format === "json") ({ text, problems } = jsonAsLines(u.content));
+  if (u.format === "json") ({ text, problems } = jsonLines(u.content));
   const lineCount = text.split("\n").length;
   if (lineCount > MAX_UPLOAD_LINES)
     throw new ExperimentError(413, "too_large", `The upload has ${lineCount} lines; at most ${MAX_UPLOAD_LINES}.`);

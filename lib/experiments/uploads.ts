@@ -22,7 +22,7 @@ export interface UploadInput {
 }
 
 /// JSON content as text lines `<g1, g2>`, one per item; a malformed item is a problem.
-function jsonLines(content: string): { text: string; problems: UploadProblem[] } {
+export function jsonLines(content: string): { text: string; problems: UploadProblem[] } {
   let data: unknown;
   try {
     data = JSON.parse(content);
