@@ -23,7 +23,6 @@ export interface UploadPreview {
   unit: "line" | "item";
 }
 
-
 export async function previewUpload(u: { format: "text" | "json"; ring: string; content: string }): Promise<UploadPreview> {
   const unit = u.format === "json" ? "item" : "line";
   let text = u.content;
