@@ -10,15 +10,27 @@ import path from "node:path";
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeDb, db } from "@/db/client";
-import { invitations, namedObjects, sessions } from "@/db/schema";
+import { experiments, invitations, namedObjects, sessions } from "@/db/schema";
 import { newToken, tokenHash } from "@/lib/sharing/common";
 import { EXPORT_FORMAT } from "@/lib/export/format";
 import { uniqueEmail } from "../helpers/fixtures";
 import type { TestClient } from "../helpers/http";
-import { cleanUp, freshSession, freshTeam, makeWorld, ownSession, type Actor, type World } from "./setup";
+import { cleanUp, freshExperiment, freshSession, freshTeam, makeWorld, ownSession, type Actor, type World } from "./setup";
 
 const API = path.resolve(__dirname, "..", "..", "app", "api");
-const ROLES = ["owner", "editor", "viewer", "linkHolder", "lead", "member", "guest", "stranger", "signedOut", "signedOutLink", "admin"] as const;
+const ROLES = [
+  "owner",
+  "editor",
+  "viewer",
+  "linkHolder",
+  "lead",
+  "member",
+  "guest",
+  "stranger",
+  "signedOut",
+  "signedOutLink",
+  "admin",
+] as const;
 type Role = (typeof ROLES)[number];
 
 type Request = { path: string; method: string; body?: unknown; form?: boolean };
@@ -39,6 +51,12 @@ const SIGNED_IN: Row["expect"] = [200, 200, 200, 200, 200, 200, 200, 200, 401, 4
 const SIGNED_IN_CREATE: Row["expect"] = [201, 201, 201, 201, 201, 201, 201, 201, 401, 401, 201];
 /// Renaming and deleting a session: its owner alone (issue 18).
 const OWNER_ONLY: Row["expect"] = [200, 403, 403, 403, 403, 403, 403, 404, 401, 401, 404];
+const EDIT_CREATE: Row["expect"] = [201, 201, 403, 403, 201, 201, 403, 404, 401, 401, 404];
+// a create naming the session in its body: no link goes with it, so a signed-in link holder
+// is a stranger to the session (404)
+const BODY_CREATE: Row["expect"] = [201, 201, 403, 404, 201, 201, 403, 404, 401, 401, 404];
+// an editor's pause, resume or cancel the experiment's status forbids: 409
+const EDIT_CONFLICT: Row["expect"] = [409, 409, 403, 403, 409, 409, 403, 404, 401, 401, 404];
 const TEAM_LEAD: Row["expect"] = [403, 403, 403, 403, 200, 403, 403, 403, 401, 401, 403];
 
 function importDoc() {
@@ -54,22 +72,40 @@ function importDoc() {
 
 async function invitationFor(teamId: string, email: string, invitedBy: string): Promise<string> {
   const token = newToken();
-  await db().insert(invitations).values({ teamId, email, role: "member", tokenHash: tokenHash(token), invitedBy, expiresAt: new Date(Date.now() + 3600_000) });
+  await db()
+    .insert(invitations)
+    .values({ teamId, email, role: "member", tokenHash: tokenHash(token), invitedBy, expiresAt: new Date(Date.now() + 3600_000) });
   return token;
 }
 
 const MATRIX: Record<string, Row[]> = {
-  "admin/audit/route.ts": [{ method: "GET", expect: [403, 403, 403, 403, 403, 403, 403, 403, 401, 401, 200], make: async () => ({ path: "/api/admin/audit?limit=1" }) }],
+  "admin/audit/route.ts": [
+    {
+      method: "GET",
+      expect: [403, 403, 403, 403, 403, 403, 403, 403, 401, 401, 200],
+      make: async () => ({ path: "/api/admin/audit?limit=1" }),
+    },
+  ],
   "auth/[...nextauth]/route.ts": [
     { method: "GET", expect: [200, 200, 200, 200, 200, 200, 200, 200, 200, 200, 200], make: async () => ({ path: "/api/auth/csrf" }) },
     // A credentials post without a CSRF token is turned away by next-auth itself.
     {
       method: "POST",
       expect: [302, 302, 302, 302, 302, 302, 302, 302, 302, 302, 302],
-      make: async () => ({ path: "/api/auth/callback/credentials", body: { email: "nobody@harbor.test.example", password: "x" }, form: true }),
+      make: async () => ({
+        path: "/api/auth/callback/credentials",
+        body: { email: "nobody@harbor.test.example", password: "x" },
+        form: true,
+      }),
     },
   ],
-  "auth/signup/route.ts": [{ method: "POST", expect: [400, 400, 400, 400, 400, 400, 400, 400, 400, 400, 400], make: async () => ({ path: "/api/auth/signup", body: {} }) }],
+  "auth/signup/route.ts": [
+    {
+      method: "POST",
+      expect: [400, 400, 400, 400, 400, 400, 400, 400, 400, 400, 400],
+      make: async () => ({ path: "/api/auth/signup", body: {} }),
+    },
+  ],
   "me/route.ts": [{ method: "GET", expect: SIGNED_IN, make: async () => ({ path: "/api/me" }) }],
   "sessions/route.ts": [
     { method: "GET", expect: SIGNED_IN, make: async () => ({ path: "/api/sessions" }) },
@@ -84,7 +120,11 @@ const MATRIX: Record<string, Row[]> = {
   "history/route.ts": [{ method: "GET", expect: SIGNED_IN, make: async () => ({ path: "/api/history?q=n" }) }],
   "sessions/[id]/cells/route.ts": [
     { method: "GET", expect: READ, make: async (w) => ({ path: `/api/sessions/${(await freshSession(w)).id}/cells` }) },
-    { method: "POST", expect: EDIT, make: async (w) => ({ path: `/api/sessions/${(await freshSession(w)).id}/cells`, body: { source: "1 + 1" } }) },
+    {
+      method: "POST",
+      expect: EDIT,
+      make: async (w) => ({ path: `/api/sessions/${(await freshSession(w)).id}/cells`, body: { source: "1 + 1" } }),
+    },
   ],
   "sessions/[id]/cells/[cell]/cancel/route.ts": [
     {
@@ -97,7 +137,9 @@ const MATRIX: Record<string, Row[]> = {
       },
     },
   ],
-  "sessions/[id]/objects/route.ts": [{ method: "GET", expect: READ, make: async (w) => ({ path: `/api/sessions/${(await freshSession(w)).id}/objects` }) }],
+  "sessions/[id]/objects/route.ts": [
+    { method: "GET", expect: READ, make: async (w) => ({ path: `/api/sessions/${(await freshSession(w)).id}/objects` }) },
+  ],
   "sessions/[id]/objects/[objectId]/route.ts": [
     {
       method: "PATCH",
@@ -121,7 +163,10 @@ const MATRIX: Record<string, Row[]> = {
     {
       method: "POST",
       expect: MANAGE_CREATE,
-      make: async (w) => ({ path: `/api/sessions/${(await freshSession(w)).id}/shares`, body: { email: "admin@harbor.test.example", role: "viewer" } }),
+      make: async (w) => ({
+        path: `/api/sessions/${(await freshSession(w)).id}/shares`,
+        body: { email: "admin@harbor.test.example", role: "viewer" },
+      }),
     },
   ],
   "sessions/[id]/shares/[shareId]/route.ts": [
@@ -152,13 +197,19 @@ const MATRIX: Record<string, Row[]> = {
   "sessions/[id]/export/route.ts": [
     { method: "GET", expect: READ, make: async (w) => ({ path: `/api/sessions/${(await freshSession(w)).id}/export?format=latex` }) },
   ],
-  "sessions/import/route.ts": [{ method: "POST", expect: SIGNED_IN_CREATE, make: async () => ({ path: "/api/sessions/import", body: importDoc() }) }],
+  "sessions/import/route.ts": [
+    { method: "POST", expect: SIGNED_IN_CREATE, make: async () => ({ path: "/api/sessions/import", body: importDoc() }) },
+  ],
   "teams/route.ts": [
     { method: "GET", expect: SIGNED_IN, make: async () => ({ path: "/api/teams" }) },
     { method: "POST", expect: SIGNED_IN_CREATE, make: async () => ({ path: "/api/teams", body: { name: "Matrix created team" } }) },
   ],
   "teams/[id]/route.ts": [
-    { method: "GET", expect: [403, 403, 403, 403, 200, 200, 200, 403, 401, 401, 403], make: async (w) => ({ path: `/api/teams/${await freshTeam(w)}` }) },
+    {
+      method: "GET",
+      expect: [403, 403, 403, 403, 200, 200, 200, 403, 401, 401, 403],
+      make: async (w) => ({ path: `/api/teams/${await freshTeam(w)}` }),
+    },
   ],
   "teams/[id]/invitations/route.ts": [
     { method: "GET", expect: TEAM_LEAD, make: async (w) => ({ path: `/api/teams/${await freshTeam(w)}/invitations` }) },
@@ -181,9 +232,17 @@ const MATRIX: Record<string, Row[]> = {
     },
   ],
   "teams/[id]/members/[userId]/route.ts": [
-    { method: "PATCH", expect: TEAM_LEAD, make: async (w) => ({ path: `/api/teams/${await freshTeam(w)}/members/${w.ids.guest}`, body: { role: "member" } }) },
+    {
+      method: "PATCH",
+      expect: TEAM_LEAD,
+      make: async (w) => ({ path: `/api/teams/${await freshTeam(w)}/members/${w.ids.guest}`, body: { role: "member" } }),
+    },
     // the guest removing the guest is leaving the team, which anyone may
-    { method: "DELETE", expect: [403, 403, 403, 403, 200, 403, 200, 403, 401, 401, 403], make: async (w) => ({ path: `/api/teams/${await freshTeam(w)}/members/${w.ids.guest}` }) },
+    {
+      method: "DELETE",
+      expect: [403, 403, 403, 403, 200, 403, 200, 403, 401, 401, 403],
+      make: async (w) => ({ path: `/api/teams/${await freshTeam(w)}/members/${w.ids.guest}` }),
+    },
   ],
   "invitations/[token]/route.ts": [
     {
@@ -203,14 +262,25 @@ const MATRIX: Record<string, Row[]> = {
   "objects/route.ts": [{ method: "GET", expect: SIGNED_IN, make: async () => ({ path: "/api/objects" }) }],
   "objects/[objectId]/route.ts": [
     // the admin holds a viewer share of the object alone
-    { method: "GET", expect: [200, 200, 200, 200, 200, 200, 200, 404, 401, 200, 200], make: async (w) => ({ path: `/api/objects/${(await freshSession(w)).objectId}` }) },
+    {
+      method: "GET",
+      expect: [200, 200, 200, 200, 200, 200, 200, 404, 401, 200, 200],
+      make: async (w) => ({ path: `/api/objects/${(await freshSession(w)).objectId}` }),
+    },
   ],
   "objects/[objectId]/shares/route.ts": [
-    { method: "GET", expect: [200, 403, 403, 403, 200, 403, 403, 404, 401, 401, 403], make: async (w) => ({ path: `/api/objects/${(await freshSession(w)).objectId}/shares` }) },
+    {
+      method: "GET",
+      expect: [200, 403, 403, 403, 200, 403, 403, 404, 401, 401, 403],
+      make: async (w) => ({ path: `/api/objects/${(await freshSession(w)).objectId}/shares` }),
+    },
     {
       method: "POST",
       expect: [201, 403, 403, 403, 201, 403, 403, 404, 401, 401, 403],
-      make: async (w) => ({ path: `/api/objects/${(await freshSession(w)).objectId}/shares`, body: { email: "outsider@harbor.test.example", role: "viewer" } }),
+      make: async (w) => ({
+        path: `/api/objects/${(await freshSession(w)).objectId}/shares`,
+        body: { email: "outsider@harbor.test.example", role: "viewer" },
+      }),
     },
   ],
   "objects/[objectId]/shares/[shareId]/route.ts": [
@@ -234,6 +304,83 @@ const MATRIX: Record<string, Row[]> = {
       },
     },
   ],
+  // Experiments are shared exactly as their session (app/api/README.md, "Experiments").
+  "experiments/route.ts": [
+    // A signed-in link holder is no reader of the listed session (the list takes no link): 404.
+    {
+      method: "GET",
+      expect: [200, 200, 200, 404, 200, 200, 200, 404, 401, 401, 404],
+      make: async (w) => ({ path: `/api/experiments?session=${(await freshSession(w)).id}` }),
+    },
+    {
+      method: "POST",
+      expect: BODY_CREATE,
+      make: async (w) => ({
+        path: "/api/experiments",
+        body: {
+          sessionId: (await freshSession(w)).id,
+          source: "S := Q[a]\nsweep(monomial_ideals(S, degree = 1, max_gens = 1), I -> {c: I.codim})",
+        },
+      }),
+    },
+  ],
+  "experiments/[id]/route.ts": [
+    { method: "GET", expect: READ, make: async (w) => ({ path: `/api/experiments/${(await freshExperiment(w, "done")).id}` }) },
+  ],
+  "experiments/[id]/rows/route.ts": [
+    { method: "GET", expect: READ, make: async (w) => ({ path: `/api/experiments/${(await freshExperiment(w, "done")).id}/rows` }) },
+  ],
+  "experiments/[id]/export/route.ts": [
+    {
+      method: "GET",
+      expect: READ,
+      make: async (w) => ({ path: `/api/experiments/${(await freshExperiment(w, "done")).id}/export?format=latex` }),
+    },
+  ],
+  "experiments/[id]/members/[index]/route.ts": [
+    { method: "GET", expect: READ, make: async (w) => ({ path: `/api/experiments/${(await freshExperiment(w, "done")).id}/members/0` }) },
+  ],
+  // queued (with no jobs): editors pause it
+  "experiments/[id]/pause/route.ts": [
+    { method: "POST", expect: EDIT, make: async (w) => ({ path: `/api/experiments/${(await freshExperiment(w, "queued")).id}/pause` }) },
+  ],
+  // done: nothing to resume
+  "experiments/[id]/resume/route.ts": [
+    {
+      method: "POST",
+      expect: EDIT_CONFLICT,
+      make: async (w) => ({ path: `/api/experiments/${(await freshExperiment(w, "done")).id}/resume` }),
+    },
+  ],
+  // paused: editors cancel it
+  "experiments/[id]/cancel/route.ts": [
+    { method: "POST", expect: EDIT, make: async (w) => ({ path: `/api/experiments/${(await freshExperiment(w, "paused")).id}/cancel` }) },
+  ],
+  // no members, so running it again queues no work
+  "experiments/[id]/rerun/route.ts": [
+    {
+      method: "POST",
+      expect: EDIT_CREATE,
+      make: async (w) => ({ path: `/api/experiments/${(await freshExperiment(w, "done", 0)).id}/rerun` }),
+    },
+  ],
+  "experiments/uploads/route.ts": [
+    {
+      method: "POST",
+      expect: BODY_CREATE,
+      make: async (w) => ({
+        path: "/api/experiments/uploads",
+        body: { sessionId: (await freshSession(w)).id, name: "fam", format: "text", ring: "Q[x]", content: "<x>" },
+      }),
+    },
+  ],
+  "experiments/uploads/preview/route.ts": [
+    {
+      method: "POST",
+      expect: SIGNED_IN,
+      make: async () => ({ path: "/api/experiments/uploads/preview", body: { format: "text", ring: "Q[x]", content: "<x>" } }),
+    },
+  ],
 };
 
 function eqHash(token: string) {
@@ -252,7 +399,9 @@ async function routeFiles(dir = API, prefix = ""): Promise<string[]> {
 
 async function exportedMethods(file: string): Promise<string[]> {
   const text = await readFile(path.join(API, file), "utf8");
-  const found = [...text.matchAll(/export\s+(?:const|async\s+function|function)\s+(GET|POST|PUT|PATCH|DELETE|HEAD|OPTIONS)\b/g)].map((m) => m[1]!);
+  const found = [...text.matchAll(/export\s+(?:const|async\s+function|function)\s+(GET|POST|PUT|PATCH|DELETE|HEAD|OPTIONS)\b/g)].map(
+    (m) => m[1]!,
+  );
   return [...new Set(found)].sort();
 }
 
@@ -281,7 +430,8 @@ function clientFor(role: Role): TestClient {
 async function send(role: Role, req: Request, linkToken: string | null): Promise<Response> {
   const client = clientFor(role);
   let p = req.path;
-  if ((role === "linkHolder" || role === "signedOutLink") && linkToken) p += `${p.includes("?") ? "&" : "?"}link=${encodeURIComponent(linkToken)}`;
+  if ((role === "linkHolder" || role === "signedOutLink") && linkToken)
+    p += `${p.includes("?") ? "&" : "?"}link=${encodeURIComponent(linkToken)}`;
   if (req.form) {
     return client.request(p, {
       method: req.method,
@@ -326,16 +476,26 @@ describe("authorisation matrix", () => {
   }
 });
 
-const UUID_IN_PATH = /\/api\/(sessions|objects)\/([0-9a-f-]{36})/;
+const UUID_IN_PATH = /\/api\/(sessions|objects|experiments)\/([0-9a-f-]{36})|\/api\/experiments\?session=([0-9a-f-]{36})/;
 async function linkTokenOf(p: string): Promise<string | null> {
   const m = UUID_IN_PATH.exec(p);
   if (!m) return null;
+  if (m[3]) return tokenOfSession(m[3]);
   let sessionId = m[2]!;
+  if (m[1] === "experiments") {
+    const [e] = await db().select({ s: experiments.sessionId }).from(experiments).where(eq(experiments.id, sessionId));
+    if (!e) return null;
+    sessionId = e.s;
+  }
   if (m[1] === "objects") {
     const [o] = await db().select({ s: namedObjects.sessionId }).from(namedObjects).where(eq(namedObjects.id, sessionId));
     if (!o) return null;
     sessionId = o.s;
   }
+  return tokenOfSession(sessionId);
+}
+
+async function tokenOfSession(sessionId: string): Promise<string | null> {
   const [s] = await db().select({ t: sessions.shareToken }).from(sessions).where(eq(sessions.id, sessionId));
   return s?.t ?? null;
 }

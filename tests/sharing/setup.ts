@@ -4,7 +4,7 @@
 import { randomBytes } from "node:crypto";
 import { eq, inArray, like, or } from "drizzle-orm";
 import { db } from "@/db/client";
-import { cells, memberships, namedObjects, sessions, shares, teams, users } from "@/db/schema";
+import { cells, experiments, memberships, namedObjects, sessions, shares, teams, users } from "@/db/schema";
 import { hashPassword } from "@/lib/auth/password";
 import { ensureTestGroup, TEST_ACCOUNTS, type TestGroup } from "../helpers/fixtures";
 import { TestClient, testAddress } from "../helpers/http";
@@ -27,7 +27,15 @@ export async function ensureExtraAccounts(): Promise<Record<ExtraKey, string>> {
       .values({ email: a.email, displayName: a.name, passwordHash: await hashPassword(a.password) })
       .onConflictDoNothing({ target: users.email });
   }
-  const rows = await database.select({ id: users.id, email: users.email }).from(users).where(inArray(users.email, keys.map((k) => EXTRA_ACCOUNTS[k].email)));
+  const rows = await database
+    .select({ id: users.id, email: users.email })
+    .from(users)
+    .where(
+      inArray(
+        users.email,
+        keys.map((k) => EXTRA_ACCOUNTS[k].email),
+      ),
+    );
   const byEmail = new Map(rows.map((r) => [r.email, r.id]));
   return Object.fromEntries(keys.map((k) => [k, byEmail.get(EXTRA_ACCOUNTS[k].email)!])) as Record<ExtraKey, string>;
 }
@@ -92,12 +100,50 @@ export async function freshSession(w: World, title = "matrix session") {
     .returning();
   const [object] = await database
     .insert(namedObjects)
-    .values({ sessionId: s!.id, ownerId: w.ids.owner, name: "n", type: "Int", value: { type: "Int", text: "42", value: "42" }, source: "n := 6 * 7", sourceCellId: cell!.id })
+    .values({
+      sessionId: s!.id,
+      ownerId: w.ids.owner,
+      name: "n",
+      type: "Int",
+      value: { type: "Int", text: "42", value: "42" },
+      source: "n := 6 * 7",
+      sourceCellId: cell!.id,
+    })
     .returning();
   const [editorShare] = await database.insert(shares).values({ sessionId: s!.id, userId: w.ids.editor, role: "editor" }).returning();
   await database.insert(shares).values({ sessionId: s!.id, userId: w.ids.viewer, role: "viewer" });
   const [objectShare] = await database.insert(shares).values({ objectId: object!.id, userId: w.ids.admin, role: "viewer" }).returning();
   return { id: s!.id, token, cellId: cell!.id, objectId: object!.id, editorShareId: editorShare!.id, objectShareId: objectShare!.id };
+}
+
+/// An experiment of a fresh session (freshSession: owner, editor and viewer shares, a link,
+/// team visibility) inserted straight into the database with the given status and no queued
+/// jobs, so nothing runs and its status — hence what pause, resume and cancel answer — stays
+/// as chosen. `members` (0 or 1) is its size: one member (the Int 1) to read, none for a
+/// "run again" that queues no work.
+export async function freshExperiment(w: World, status: "queued" | "paused" | "done", members: 0 | 1 = 1) {
+  const s = await freshSession(w);
+  const member = { type: "Int", text: "1", value: "1" };
+  const [e] = await db()
+    .insert(experiments)
+    .values({
+      sessionId: s.id,
+      createdBy: w.ids.owner,
+      title: "matrix experiment",
+      status,
+      program: "sweep([1], n -> {n: n})",
+      familyDefinition: "[1]",
+      family: { type: "Family", text: "[1]", definition: "[1]", members: members === 1 ? [member] : [] },
+      labels: members === 1 ? ["1"] : [],
+      probeText: "n -> {n: n}",
+      probe: { type: "Function", text: "n -> {n: n}" },
+      engineVersion: "matrix",
+      limits: { timeLimitMs: 1000, heapLimitMb: 64 },
+      total: members,
+      finishedAt: status === "done" ? new Date() : null,
+    })
+    .returning();
+  return { id: e!.id, session: s };
 }
 
 /// A session of `actor`'s own with no sharing (a target for imports).
@@ -130,7 +176,9 @@ export async function removeSession(id: string): Promise<void> {
 export async function cleanUp(sessionTitles: string[], teamNames: string[]): Promise<void> {
   const database = db();
   if (sessionTitles.length > 0) {
-    await database.delete(sessions).where(or(...sessionTitles.map((t) => (t.includes("%") ? like(sessions.title, t) : eq(sessions.title, t)))));
+    await database
+      .delete(sessions)
+      .where(or(...sessionTitles.map((t) => (t.includes("%") ? like(sessions.title, t) : eq(sessions.title, t)))));
   }
   if (teamNames.length > 0) await database.delete(teams).where(inArray(teams.name, teamNames));
 }
