@@ -137,17 +137,15 @@ describe("export and import over the API", () => {
         durationMs: 3,
       })
       .returning();
-    await db()
-      .insert(namedObjects)
-      .values({
-        sessionId,
-        ownerId: group.users.lead.id,
-        name: "B",
-        type: "BettiTable",
-        value: betti,
-        source: "B := resolve(S / I).betti",
-        sourceCellId: cell!.id,
-      });
+    await db().insert(namedObjects).values({
+      sessionId,
+      ownerId: group.users.lead.id,
+      name: "B",
+      type: "BettiTable",
+      value: betti,
+      source: "B := resolve(S / I).betti",
+      sourceCellId: cell!.id,
+    });
   }, 120_000);
   afterAll(async () => {
     await db().delete(sessions).where(eq(sessions.title, "three points"));

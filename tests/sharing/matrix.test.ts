@@ -113,7 +113,11 @@ const MATRIX: Record<string, Row[]> = {
   ],
   "sessions/[id]/route.ts": [
     { method: "GET", expect: READ, make: async (w) => ({ path: `/api/sessions/${(await freshSession(w)).id}` }) },
-    { method: "PATCH", expect: OWNER_ONLY, make: async (w) => ({ path: `/api/sessions/${(await freshSession(w)).id}`, body: { title: "renamed in the matrix" } }) },
+    {
+      method: "PATCH",
+      expect: OWNER_ONLY,
+      make: async (w) => ({ path: `/api/sessions/${(await freshSession(w)).id}`, body: { title: "renamed in the matrix" } }),
+    },
     { method: "DELETE", expect: OWNER_ONLY, make: async (w) => ({ path: `/api/sessions/${(await freshSession(w)).id}` }) },
   ],
   "library/route.ts": [{ method: "GET", expect: SIGNED_IN, make: async () => ({ path: "/api/library?q=n" }) }],
