@@ -99,7 +99,9 @@ browserTest("daily: find an object from another session in the library and inser
   const title = `Harbor target ${mark}`;
   await openOwnSession(page, baseUrl, "lead", title);
   // define the object in the other session through the API, as a cell would
+  // Same-origin, as the page's own fetch is (state-changing requests must say where they come from).
   const r = await page.request.post(`${baseUrl}/api/sessions/${source!.id}/cells`, {
+    headers: { Origin: baseUrl },
     data: { source: `S := Q[x, y]\n${mark} := <x^2, x*y>` },
   });
   check(r.ok(), `running the source cell answered ${r.status()}`);
