@@ -56,7 +56,9 @@ export class OwnServer {
     mkdirSync(dir, { recursive: true });
     const pgPort = await freePort();
     const webPort = await freePort();
-    bash(`pg_up "${dir}/pg" ${pgPort} "${dir}/pg-password" "-c fsync=off -c synchronous_commit=off -c full_page_writes=off" >/dev/null 2>&1
+    // synchronous_commit stays on: the tests kill this postmaster, and an asynchronous commit
+    // acknowledged just before the kill may vanish (fsync=off only risks an OS crash).
+    bash(`pg_up "${dir}/pg" ${pgPort} "${dir}/pg-password" "-c fsync=off -c full_page_writes=off" >/dev/null 2>&1
 ensure_database ${pgPort} "${dir}/pg-password" ringside_own >/dev/null 2>&1`);
     const own = new OwnServer(dir, pgPort, webPort, env);
     execFileSync("node", ["--import", "tsx", "db/migrate.ts"], {
@@ -127,7 +129,7 @@ ensure_database ${pgPort} "${dir}/pg-password" ringside_own >/dev/null 2>&1`);
   /// shared memory until they notice), and waits until it accepts connections.
   async restartPostgres(): Promise<void> {
     for (let i = 0; i < 120 && this.orphanedBackends.some(alive); i++) await new Promise((r) => setTimeout(r, 250));
-    const opts = `-c listen_addresses=127.0.0.1 -c port=${this.pgPort} -c unix_socket_directories=${this.dir}/pg.sock -c fsync=off -c synchronous_commit=off -c full_page_writes=off`;
+    const opts = `-c listen_addresses=127.0.0.1 -c port=${this.pgPort} -c unix_socket_directories=${this.dir}/pg.sock -c fsync=off -c full_page_writes=off`;
     let last: unknown;
     for (let i = 0; i < 20; i++) {
       try {
