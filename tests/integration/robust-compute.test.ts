@@ -363,6 +363,7 @@ describe("no cell stays running", () => {
       }
     })();
     await until("the cell to compute", async () => events.some((e) => e.event === "progress"));
+    await until("the running cell to be stored", async () => (cellId ? await cellRow(cellId) : undefined));
     own.killPostmaster();
     await new Promise((r) => setTimeout(r, 1500));
     await own.restartPostgres();
