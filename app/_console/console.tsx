@@ -10,7 +10,7 @@ import { createFromSource } from "@/app/_experiments/api";
 import { CellExperiments, useExperimentCommands } from "@/app/_experiments/console-links";
 import type { GuidedExample } from "@/lib/examples/tour";
 import { messageOf } from "@/app/_client/fetch";
-import { createSession } from "./api/client";
+import { createSession, detailUrl } from "./api/client";
 import { paletteCommands } from "./palette-commands";
 import { useTheme } from "./theme";
 import { useConsole, type ConsoleOptions, type DialogName } from "./use-console";
@@ -57,6 +57,13 @@ export function Console(props: ConsoleProps) {
       <CellExperiments cell={cell} sessionId={sessionId} canEdit={canEdit} signedIn={signedIn} />
     ),
     [sessionId, canEdit, signedIn],
+  );
+
+  // The whole of a value stored as a summary, from the open session (with its link token).
+  const link = c.link;
+  const detailAddress = useMemo(
+    () => (sessionId ? (detailId: string) => detailUrl(sessionId, detailId, link) : undefined),
+    [sessionId, link],
   );
 
   const commands = useMemo(
@@ -189,6 +196,7 @@ export function Console(props: ConsoleProps) {
           onOpenTour={() => setDialog("tour")}
           onCancel={() => void cancelRunning()}
           cellFooter={cellFooter}
+          detailAddress={detailAddress}
         />
         <p
           role="status"

@@ -49,3 +49,7 @@ export type ExportFormat = "latex" | "markdown" | "json";
 /// The transcript export address in `format`, carrying the link token when there is one.
 export const exportUrl = (sessionId: string, format: ExportFormat, link: string | null = null) =>
   withLink(`/api/sessions/${sessionId}/export?format=${format}`, link);
+
+/// The address of the whole value behind a summary (its `detail.id`), with the link token.
+export const detailUrl = (sessionId: string, detailId: string, link: string | null = null) =>
+  withLink(`/api/sessions/${sessionId}/details/${detailId}`, link);

@@ -35,9 +35,11 @@ export type ValueView =
   | { readonly kind: "table"; readonly columns: readonly string[]; readonly rows: readonly (readonly string[])[] };
 
 /// What the transcript knows around a value: the session's named objects, so a
-/// resolution is written over the ring's name (S, not R).
+/// resolution is written over the ring's name (S, not R); and where the whole of a value
+/// stored as a summary is fetched (render/detail.ts), absent outside an open session.
 export interface ViewContext {
   readonly objects?: readonly { readonly name: string; readonly value: ValueReading }[];
+  readonly detailAddress?: (detailId: string) => string;
 }
 
 /// The field names of a §9 Record in the order the user wrote them (`fieldOrder`, kept beside

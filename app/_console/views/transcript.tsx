@@ -25,10 +25,15 @@ export function Transcript(props: {
   onCancel: () => void;
   /// drawn under a stored cell (the experiments room's links and "Run as an experiment")
   cellFooter?: (cell: Cell) => ReactNode;
+  /// where the whole of a value stored as a summary is fetched (the open session's details)
+  detailAddress?: (detailId: string) => string;
 }) {
   const { cells, running, noSessions, canEdit, sessionError, cellsError, onInsertExample, onOpenTour, onCancel } = props;
   const end = useRef<HTMLDivElement>(null);
-  const context = useMemo(() => ({ objects: props.objects ?? [] }), [props.objects]);
+  const context = useMemo(
+    () => ({ objects: props.objects ?? [], detailAddress: props.detailAddress }),
+    [props.objects, props.detailAddress],
+  );
   useEffect(() => {
     end.current?.scrollIntoView({ block: "end" });
   }, [cells?.length, running?.results.length, running?.status, running?.partialBetti.length]);

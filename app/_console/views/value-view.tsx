@@ -3,11 +3,13 @@
 /// series with their number of terms, lists, records and tables.
 import { useState } from "react";
 import type { ValueReading } from "@/lib/wire/reading";
+import { detailOfValue } from "../render/detail";
 import { typeWords } from "../render/type-words";
 import { noteOfValue, viewOfValue, type ValueView as View, type ViewContext } from "../render/view-model";
 import { BettiTable } from "./betti-table";
 import { CopyMenu } from "./copy-menu";
 import { Tex } from "./tex";
+import { ValueDetail } from "./value-detail";
 
 function Draw({ view, text }: { view: View; text: string }) {
   switch (view.kind) {
@@ -146,8 +148,10 @@ function Resolution({ view, text }: { view: Extract<View, { kind: "complex" }>; 
   );
 }
 
-/// The value of one statement, with its type in words as a small label.
+/// The value of one statement, with its type in words as a small label; a value stored as a
+/// summary has the control that loads or downloads the whole of it (value-detail.tsx).
 export function ValueView({ value, context, copyable = true }: { value: ValueReading; context?: ViewContext; copyable?: boolean }) {
+  const marker = detailOfValue(value);
   return (
     <div className="group/value flex items-start gap-3" data-value-type={value.type}>
       <span className="mt-0.5 w-24 shrink-0 text-right text-xs tracking-wide text-ink/50 dark:text-paper/50" data-testid="type-tag">
@@ -159,6 +163,13 @@ export function ValueView({ value, context, copyable = true }: { value: ValueRea
           <p className="mt-1 text-xs text-ink-soft dark:text-paper/70" data-testid="value-note">
             {noteOfValue(value)}
           </p>
+        )}
+        {marker && (
+          <ValueDetail
+            marker={marker}
+            address={context?.detailAddress ? context.detailAddress(marker.id) : null}
+            draw={(whole) => <ValueView value={whole} context={context} copyable={copyable} />}
+          />
         )}
       </div>
       {copyable && <CopyMenu value={value} context={context} />}
