@@ -5,7 +5,7 @@
 /// only the summary (GET …/details/:id streams the detail from disk); a later cell that uses
 /// the value gets it back from the detail file inside its slot.
 import { createHash } from "node:crypto";
-import { existsSync, mkdirSync, readFileSync, renameSync, writeFileSync } from "node:fs";
+import { existsSync, mkdirSync, readFileSync, renameSync, utimesSync, writeFileSync } from "node:fs";
 import path from "node:path";
 import { formatLimit, limitValue } from "../limits";
 
@@ -52,10 +52,21 @@ export function bounded<T>(value: T): T {
   const dir = detailDirectory();
   mkdirSync(dir, { recursive: true, mode: 0o700 });
   const file = path.join(dir, `${id}.json`);
-  if (!existsSync(file)) {
+  const write = () => {
     const tmp = `${file}.${process.pid}.tmp`;
     writeFileSync(tmp, json, { mode: 0o600 });
     renameSync(tmp, file);
+  };
+  if (!existsSync(file)) write();
+  else {
+    // Touched, so pruning (lib/sessions/details.ts) keeps a file that a running cell is about
+    // to hold again even when the last stored value holding it is deleted meanwhile.
+    const now = new Date();
+    try {
+      utimesSync(file, now, now);
+    } catch {
+      write(); // pruned between the two calls
+    }
   }
   const detail: DetailMarker = { id, bytes: json.length, type };
   const why = `this ${type} takes ${megabytes(json.length)}, above ${formatLimit("largeValueBytes", threshold)} (largeValueBytes): it is kept as a summary, its detail on request`;

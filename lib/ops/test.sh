@@ -66,6 +66,9 @@ export RINGSIDE_BCRYPT_COST=4
 # A short cell time limit so the API test of the limit finishes quickly.
 export RINGSIDE_CELL_TIME_LIMIT_MS=8000
 export NEXT_TELEMETRY_DISABLED=1
+# Large values' details (lib/compute/large-values.ts) of this run, removed with it; the
+# suites plant and check files there (tests/api/value-details.test.ts).
+export RINGSIDE_DETAIL_DIR="$T/details"
 # The suites connect from 127.0.0.1 and act as a proxy for invented client addresses
 # (X-Forwarded-For: testAddress(n)), so each file has its own rate-limit bucket; a client
 # connecting from any other loopback address (127.0.0.2 …) is untrusted, which is how

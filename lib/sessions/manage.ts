@@ -6,6 +6,7 @@ import { sessions } from "@/db/schema";
 import { requireSessionAccess } from "@/lib/auth/access";
 import type { CurrentUser } from "@/lib/auth/types";
 import { forbidden } from "@/lib/http/errors";
+import { detailIdsOfSession, pruneDetails } from "./details";
 
 /// With the session's link token a link holder is known to read it: 403, not 404.
 async function requireOwner(user: CurrentUser, sessionId: string, what: string, linkToken?: string | null) {
@@ -25,8 +26,14 @@ export async function renameSession(user: CurrentUser, sessionId: string, title:
   return row!;
 }
 
-/// Deletes the session with its cells, named objects and shares (foreign keys cascade).
+/// Deletes the session with its cells, named objects and shares (foreign keys cascade), then
+/// the detail files of its large values that nothing else holds (details.ts).
 export async function deleteSession(user: CurrentUser, sessionId: string, linkToken?: string | null): Promise<void> {
   await requireOwner(user, sessionId, "delete", linkToken);
-  await db().delete(sessions).where(eq(sessions.id, sessionId));
+  const details = await db().transaction(async (tx) => {
+    const ids = await detailIdsOfSession(sessionId, tx);
+    await tx.delete(sessions).where(eq(sessions.id, sessionId));
+    return ids;
+  });
+  await pruneDetails(details);
 }

@@ -1,10 +1,11 @@
 /// Queries for sessions, cells and named objects. Access checks happen before these are
 /// called (lib/auth/access); every write that spans rows is one transaction.
-import { and, asc, desc, eq, sql } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db/client";
 import { cells, namedObjects, sessions, users } from "@/db/schema";
 import type { CurrentUser } from "@/lib/auth/types";
 import type { SessionSummary } from "@/lib/wire/sessions";
+import { detailIdsIn, detailIdsOfCell, pruneDetails } from "./details";
 
 export type CellRow = typeof cells.$inferSelect;
 export type ObjectRow = typeof namedObjects.$inferSelect;
@@ -188,7 +189,19 @@ export async function startCell(sessionId: string, user: CurrentUser, source: st
 /// A name bound again replaces the earlier object (notation.md §2); earlier cells keep
 /// their results.
 export async function finishCell(cell: CellRow, user: CurrentUser, outcome: CellOutcome): Promise<ObjectRow[]> {
-  return db().transaction(async (tx) => {
+  // Large values this write replaces (the partial results the heartbeat stored, the objects
+  // bound again): their detail files go once nothing else holds them (details.ts).
+  const replaced = new Set<string>();
+  const saved = await db().transaction(async (tx) => {
+    for (const id of await detailIdsOfCell(cell.id, tx)) replaced.add(id);
+    const names = outcome.objects.map((o) => o.name);
+    if (names.length > 0) {
+      const earlier = await tx
+        .select({ value: namedObjects.value })
+        .from(namedObjects)
+        .where(and(eq(namedObjects.sessionId, cell.sessionId), inArray(namedObjects.name, names)));
+      for (const o of earlier) detailIdsIn(o.value, replaced);
+    }
     await tx
       .update(cells)
       .set({
@@ -200,7 +213,7 @@ export async function finishCell(cell: CellRow, user: CurrentUser, outcome: Cell
         engineVersion: outcome.engineVersion,
       })
       .where(eq(cells.id, cell.id));
-    const saved: ObjectRow[] = [];
+    const stored: ObjectRow[] = [];
     for (const o of outcome.objects) {
       const [row] = await tx
         .insert(namedObjects)
@@ -228,7 +241,7 @@ export async function finishCell(cell: CellRow, user: CurrentUser, outcome: Cell
           },
         })
         .returning();
-      saved.push(row!);
+      stored.push(row!);
     }
     await tx.update(sessions).set({ updatedAt: new Date() }).where(eq(sessions.id, cell.sessionId));
     const first = outcome.objects.find((o) => o.source.trim() !== "");
@@ -239,8 +252,10 @@ export async function finishCell(cell: CellRow, user: CurrentUser, outcome: Cell
         .set({ title: titleFromDefinition(first.source), autoTitle: false })
         .where(and(eq(sessions.id, cell.sessionId), eq(sessions.autoTitle, true)));
     }
-    return saved;
+    return stored;
   });
+  if (replaced.size > 0) await pruneDetails(replaced);
+  return saved;
 }
 
 export async function renameObject(sessionId: string, objectId: string, name: string): Promise<ObjectRow | undefined> {
@@ -252,11 +267,13 @@ export async function renameObject(sessionId: string, objectId: string, name: st
   return row;
 }
 
+/// Deletes a named object, then its large value's detail file when nothing else holds it.
 export async function deleteObject(sessionId: string, objectId: string): Promise<boolean> {
   const rows = await db()
     .delete(namedObjects)
     .where(and(eq(namedObjects.sessionId, sessionId), eq(namedObjects.id, objectId)))
-    .returning({ id: namedObjects.id });
+    .returning({ id: namedObjects.id, value: namedObjects.value });
+  if (rows.length > 0) await pruneDetails(detailIdsIn(rows[0]!.value));
   return rows.length > 0;
 }
 

@@ -83,6 +83,9 @@ ensure_database ${pgPort} "${dir}/pg-password" ringside_own >/dev/null 2>&1`);
         ...process.env,
         ...this.env,
         DATABASE_URL: this.databaseUrl,
+        // Its own detail folder beside its own database: details are pruned by what the
+        // database holds (lib/sessions/details.ts), so two databases never share one folder.
+        RINGSIDE_DETAIL_DIR: path.join(this.dir, "details"),
         NEXTAUTH_URL: this.baseUrl,
         NEXTAUTH_SECRET: readFileSync(path.join(this.dir, "secret"), "utf8"),
       },

@@ -1,0 +1,112 @@
+/// Pruning the detail folder (RINGSIDE_DETAIL_DIR, default `.data/details`): the whole JSON of
+/// every value stored as a summary (lib/compute/large-values.ts). A detail file is named by
+/// its content, so one file may back values in several places (the same value computed in
+/// two sessions, a named object imported into another session); it is deleted when the last
+/// stored value that carries its marker goes — a session deleted, a named object deleted or
+/// bound again, a cell's stored partial results replaced by its outcome — and never while it
+/// may belong to a cell still running (a running cell's values are not stored yet).
+/// Only cells (`result`) and named objects (`value`) carry markers: only a cell's job makes
+/// summaries, and experiment members are computed whole.
+import { stat, unlink } from "node:fs/promises";
+import { sql, type SQL } from "drizzle-orm";
+import { db } from "@/db/client";
+import { detailOf, detailPath } from "@/lib/compute/large-values";
+
+/// Every marker's id anywhere inside a jsonb column (PostgreSQL's SQL/JSON path, lax mode:
+/// nodes without a `detail` are skipped; DISTINCT removes the repeats `.**` may give).
+const DETAIL_IDS = "lax $.**.detail.id";
+
+type Queryable = { execute: ReturnType<typeof db>["execute"] };
+
+/// The detail ids carried by one stored value (or a cell's whole result), read in place.
+export function detailIdsIn(json: unknown, into: Set<string> = new Set()): Set<string> {
+  const stack: unknown[] = [json];
+  while (stack.length > 0) {
+    const node = stack.pop();
+    if (node === null || typeof node !== "object") continue;
+    const marker = Array.isArray(node) ? null : detailOf(node);
+    if (marker) into.add(marker.id);
+    for (const child of Array.isArray(node) ? node : Object.values(node))
+      if (child !== null && typeof child === "object") stack.push(child);
+  }
+  return into;
+}
+
+async function idsWhere(database: Queryable, cellsWhere: SQL | null, objectsWhere: SQL | null): Promise<string[]> {
+  const parts: SQL[] = [];
+  if (cellsWhere)
+    parts.push(sql`SELECT jsonb_path_query(result, ${DETAIL_IDS}) #>> '{}' AS id FROM cells WHERE result IS NOT NULL AND ${cellsWhere}`);
+  if (objectsWhere) parts.push(sql`SELECT jsonb_path_query(value, ${DETAIL_IDS}) #>> '{}' AS id FROM named_objects WHERE ${objectsWhere}`);
+  const rows = await database.execute<{ id: string | null }>(sql`SELECT DISTINCT id FROM (${sql.join(parts, sql` UNION ALL `)}) found`);
+  return rows.map((r) => r.id).filter((id): id is string => typeof id === "string" && detailPath(id) !== null);
+}
+
+/// The detail ids a session's cells and named objects carry (taken before the session goes).
+export function detailIdsOfSession(sessionId: string, database: Queryable = db()): Promise<string[]> {
+  return idsWhere(database, sql`session_id = ${sessionId}`, sql`session_id = ${sessionId}`);
+}
+
+/// The detail ids a cell's stored result carries (its partial results, before its outcome replaces them).
+export function detailIdsOfCell(cellId: string, database: Queryable = db()): Promise<string[]> {
+  return idsWhere(database, sql`id = ${cellId}`, null);
+}
+
+/// Of `ids`, those some stored cell or named object still carries (any session).
+async function stillReferenced(ids: string[]): Promise<Set<string>> {
+  const list = sql`ARRAY[${sql.join(
+    ids.map((id) => sql`${id}`),
+    sql`, `,
+  )}]::text[]`;
+  const rows = await db().execute<{ id: string }>(sql`
+    SELECT DISTINCT id FROM (
+      SELECT jsonb_path_query(result, ${DETAIL_IDS}) #>> '{}' AS id FROM cells WHERE result IS NOT NULL
+      UNION ALL
+      SELECT jsonb_path_query(value, ${DETAIL_IDS}) #>> '{}' AS id FROM named_objects
+    ) found WHERE id = ANY(${list})`);
+  return new Set(rows.map((r) => r.id));
+}
+
+/// When the oldest running cell started (null: none runs). A detail file touched since then
+/// may be one of its values, about to be stored (large-values.ts touches a file it finds
+/// already written), so it is kept.
+async function oldestRunningStart(): Promise<Date | null> {
+  const [row] = await db().execute<{ started: string | Date | null }>(
+    sql`SELECT min(coalesce(started_at, created_at)) AS started FROM cells WHERE status = 'running'`,
+  );
+  return row?.started ? new Date(row.started) : null;
+}
+
+/// A file written within this long is kept whatever the database says: an engine slot may
+/// write a value's detail before its cell's row is stored as running.
+const FRESH_MS = 10_000;
+
+/// Deletes the detail files among `candidates` that no stored value carries any more and no
+/// running cell may be about to store; returns the ids deleted. A failure is logged, never
+/// thrown: the delete or the cell that asked has already succeeded, and a leftover file
+/// harms nothing but disk space.
+export async function pruneDetails(candidates: Iterable<string>, now: Date = new Date()): Promise<string[]> {
+  const ids = [...new Set(candidates)].filter((id) => detailPath(id) !== null);
+  if (ids.length === 0) return [];
+  try {
+    const kept = await stillReferenced(ids);
+    const orphans = ids.filter((id) => !kept.has(id));
+    if (orphans.length === 0) return [];
+    const running = await oldestRunningStart();
+    const deleted: string[] = [];
+    for (const id of orphans) {
+      const file = detailPath(id)!;
+      const info = await stat(file).catch(() => null);
+      if (!info) continue;
+      const touched = info.mtime.getTime();
+      if (now.getTime() - touched < FRESH_MS || (running !== null && touched >= running.getTime() - 1000)) continue;
+      await unlink(file).catch((error: NodeJS.ErrnoException) => {
+        if (error.code !== "ENOENT") throw error;
+      });
+      deleted.push(id);
+    }
+    return deleted;
+  } catch (error) {
+    console.error("[ringside] pruning value details failed:", (error as Error).message);
+    return [];
+  }
+}
