@@ -113,6 +113,10 @@ serve_web() { cd "$ROOT" && exec node --import tsx lib/ops/web-server.ts --host 
 
 node_ts() { (cd "$ROOT" && node --import tsx "$@"); }
 
+# detail_dir: where large values' details are kept (lib/compute/large-values.ts
+# detailDirectory, the same rule): RINGSIDE_DETAIL_DIR, else .data/details.
+detail_dir() { printf '%s' "${RINGSIDE_DETAIL_DIR:-${RINGSIDE_ROOT:-$ROOT}/.data/details}"; }
+
 # build_if_stale: `next build` unless .next holds a build of exactly the current sources
 # (a hash over every tracked and untracked, not ignored, file outside tests/); fails
 # (status 1) when the build fails.
