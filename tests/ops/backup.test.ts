@@ -180,7 +180,9 @@ describe("npm run backup and npm run restore", () => {
     expect(backup.stderr).toContain("2 value detail(s)");
     // One archive: what it is, the database, the details (never a half-written file).
     const listed = (await run("tar", ["-tzf", archive])).stdout.split("\n").filter(Boolean).sort();
-    expect(listed).toEqual(["database.dump", "details/", `details/${ALSO_HELD}.json`, `details/${HELD}.json`, "ringside-backup.txt"]);
+    expect(listed).toEqual(
+      ["database.dump", "details/", `details/${ALSO_HELD}.json`, `details/${HELD}.json`, "ringside-backup.txt"].sort(),
+    );
     expect((await stat(archive)).mode & 0o777).toBe(0o600);
     expect((await stat(path.dirname(archive))).mode & 0o777).toBe(0o700);
 
