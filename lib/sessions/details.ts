@@ -7,10 +7,10 @@
 /// may belong to a cell still running (a running cell's values are not stored yet).
 /// Only cells (`result`) and named objects (`value`) carry markers: only a cell's job makes
 /// summaries, and experiment members are computed whole.
-import { stat, unlink } from "node:fs/promises";
+import { readdir, stat, unlink } from "node:fs/promises";
 import { sql, type SQL } from "drizzle-orm";
 import { db } from "@/db/client";
-import { detailOf, detailPath } from "@/lib/compute/large-values";
+import { detailDirectory, detailOf, detailPath } from "@/lib/compute/large-values";
 
 /// Every marker's id anywhere inside a jsonb column (PostgreSQL's SQL/JSON path, lax mode:
 /// nodes without a `detail` are skipped; DISTINCT removes the repeats `.**` may give).
@@ -51,18 +51,21 @@ export function detailIdsOfCell(cellId: string, database: Queryable = db()): Pro
   return idsWhere(database, sql`id = ${cellId}`, null);
 }
 
-/// Of `ids`, those some stored cell or named object still carries (any session).
-async function stillReferenced(ids: string[]): Promise<Set<string>> {
-  const list = sql`ARRAY[${sql.join(
-    ids.map((id) => sql`${id}`),
-    sql`, `,
-  )}]::text[]`;
+/// Of `ids` (every id when null), those some stored cell or named object still carries (any session).
+async function stillReferenced(ids: string[] | null): Promise<Set<string>> {
+  const list =
+    ids === null
+      ? null
+      : sql`ARRAY[${sql.join(
+          ids.map((id) => sql`${id}`),
+          sql`, `,
+        )}]::text[]`;
   const rows = await db().execute<{ id: string }>(sql`
     SELECT DISTINCT id FROM (
       SELECT jsonb_path_query(result, ${DETAIL_IDS}) #>> '{}' AS id FROM cells WHERE result IS NOT NULL
       UNION ALL
       SELECT jsonb_path_query(value, ${DETAIL_IDS}) #>> '{}' AS id FROM named_objects
-    ) found WHERE id = ANY(${list})`);
+    ) found ${list === null ? sql`` : sql`WHERE id = ANY(${list})`}`);
   return new Set(rows.map((r) => r.id));
 }
 
@@ -80,33 +83,88 @@ async function oldestRunningStart(): Promise<Date | null> {
 /// write a value's detail before its cell's row is stored as running.
 const FRESH_MS = 10_000;
 
+/// A half-written detail (`<id>.json.<pid>.tmp`, left by a slot killed mid-write) this old is
+/// certainly abandoned.
+const ABANDONED_TMP_MS = 3600_000;
+
+/// Deletes the files among `orphans` that no running cell may be about to store (see above).
+async function deleteUnlessInFlight(orphans: string[], now: Date): Promise<string[]> {
+  if (orphans.length === 0) return [];
+  const running = await oldestRunningStart();
+  const deleted: string[] = [];
+  for (const id of orphans) {
+    const file = detailPath(id)!;
+    const info = await stat(file).catch(() => null);
+    if (!info) continue;
+    const touched = info.mtime.getTime();
+    if (now.getTime() - touched < FRESH_MS || (running !== null && touched >= running.getTime() - 1000)) continue;
+    await unlink(file).catch((error: NodeJS.ErrnoException) => {
+      if (error.code !== "ENOENT") throw error;
+    });
+    deleted.push(id);
+  }
+  return deleted;
+}
+
 /// Deletes the detail files among `candidates` that no stored value carries any more and no
 /// running cell may be about to store; returns the ids deleted. A failure is logged, never
 /// thrown: the delete or the cell that asked has already succeeded, and a leftover file
-/// harms nothing but disk space.
+/// harms nothing but disk space (the sweep at the next start takes it).
 export async function pruneDetails(candidates: Iterable<string>, now: Date = new Date()): Promise<string[]> {
   const ids = [...new Set(candidates)].filter((id) => detailPath(id) !== null);
   if (ids.length === 0) return [];
   try {
     const kept = await stillReferenced(ids);
-    const orphans = ids.filter((id) => !kept.has(id));
-    if (orphans.length === 0) return [];
-    const running = await oldestRunningStart();
-    const deleted: string[] = [];
-    for (const id of orphans) {
-      const file = detailPath(id)!;
-      const info = await stat(file).catch(() => null);
-      if (!info) continue;
-      const touched = info.mtime.getTime();
-      if (now.getTime() - touched < FRESH_MS || (running !== null && touched >= running.getTime() - 1000)) continue;
-      await unlink(file).catch((error: NodeJS.ErrnoException) => {
-        if (error.code !== "ENOENT") throw error;
-      });
-      deleted.push(id);
-    }
-    return deleted;
+    return await deleteUnlessInFlight(
+      ids.filter((id) => !kept.has(id)),
+      now,
+    );
   } catch (error) {
     console.error("[ringside] pruning value details failed:", (error as Error).message);
     return [];
   }
+}
+
+/// The whole folder against the whole database (run when a server starts): deletes every
+/// detail file no stored value holds — the leftovers of values that were never stored (a
+/// statement's partial value, a cell whose save failed, a server killed mid-cell) — under
+/// the same in-flight rules, and half-written files abandoned for an hour. Returns the count
+/// deleted. The folder must belong to this database alone (DEVELOPERS.md).
+export async function sweepDetails(now: Date = new Date()): Promise<number> {
+  let names: string[];
+  try {
+    names = await readdir(detailDirectory());
+  } catch (error) {
+    if ((error as NodeJS.ErrnoException).code === "ENOENT") return 0;
+    throw error;
+  }
+  let deleted = 0;
+  for (const name of names.filter((n) => n.endsWith(".tmp"))) {
+    const file = `${detailDirectory()}/${name}`;
+    const info = await stat(file).catch(() => null);
+    if (
+      info?.isFile() &&
+      now.getTime() - info.mtime.getTime() > ABANDONED_TMP_MS &&
+      (await unlink(file).then(
+        () => true,
+        () => false,
+      ))
+    )
+      deleted++;
+  }
+  const ids = names
+    .filter((n) => n.endsWith(".json"))
+    .map((n) => n.slice(0, -".json".length))
+    .filter((id) => detailPath(id) !== null);
+  if (ids.length === 0) return deleted;
+  const kept = await stillReferenced(null);
+  return (
+    deleted +
+    (
+      await deleteUnlessInFlight(
+        ids.filter((id) => !kept.has(id)),
+        now,
+      )
+    ).length
+  );
 }

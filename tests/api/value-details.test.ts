@@ -3,7 +3,8 @@
 /// and refuses everyone else; and the detail folder is pruned (lib/sessions/details.ts) when
 /// the last stored value holding a detail goes — a named object deleted or bound again, a
 /// session deleted — but not while another session still holds it, nor when it was written
-/// moments ago (a running cell may be about to store it).
+/// moments ago (a running cell may be about to store it); the sweep at a server's start takes
+/// the files no stored value holds.
 ///
 /// The summaries are planted in the test database with their files in the run's detail folder
 /// (RINGSIDE_DETAIL_DIR, set by test.sh), exactly as the cell job writes them
@@ -17,6 +18,7 @@ import { sql } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeDb, db } from "@/db/client";
 import { cells, namedObjects } from "@/db/schema";
+import { sweepDetails } from "@/lib/sessions/details";
 import { ensureTestGroup, TEST_ACCOUNTS, type TestGroup } from "../helpers/fixtures";
 import { TestClient, testAddress } from "../helpers/http";
 import { testEnv } from "../helpers/env";
@@ -28,23 +30,23 @@ const outsider = new TestClient(testAddress(242));
 const anonymous = new TestClient(testAddress(243));
 let group: TestGroup;
 
-/// A detail as the cell job writes it: `<id>.json` holding the whole value, mode 600; written
-/// an hour ago unless `fresh`, so only the database decides whether pruning may delete it.
-function plantDetail(
-  whole: unknown,
-  fresh = false,
-): { id: string; file: string; json: string; marker: { id: string; bytes: number; type: string } } {
+/// A detail as the cell job writes it: `<id>.json` holding the whole value, mode 600. Written
+/// now, so a server starting meanwhile (its sweep keeps files younger than 10 s) cannot take
+/// it before the rows holding it are stored; `age` then dates it an hour back, so that only
+/// the database decides whether pruning may delete it.
+function plantDetail(whole: unknown): { id: string; file: string; json: string; marker: { id: string; bytes: number; type: string } } {
   const dir = testEnv("RINGSIDE_DETAIL_DIR");
   mkdirSync(dir, { recursive: true, mode: 0o700 });
   const id = randomUUID();
   const json = JSON.stringify(whole);
   const file = path.join(dir, `${id}.json`);
   writeFileSync(file, json, { mode: 0o600 });
-  if (!fresh) {
-    const hourAgo = new Date(Date.now() - 3600_000);
-    utimesSync(file, hourAgo, hourAgo);
-  }
   return { id, file, json, marker: { id, bytes: json.length, type: (whole as { type: string }).type } };
+}
+
+function age(file: string) {
+  const hourAgo = new Date(Date.now() - 3600_000);
+  utimesSync(file, hourAgo, hourAgo);
 }
 
 /// A Koszul-like complex's whole JSON (its content does not matter to the route).
@@ -199,6 +201,7 @@ describe("the detail folder is pruned with the values that hold it", () => {
     const whole = wholeComplex("session");
     const planted = plantDetail(whole);
     const { objectId } = await plantCell(session, summaryOf(whole, planted.marker), "C");
+    age(planted.file);
     expect((await owner.request(`/api/sessions/${session}/objects/${objectId}`, { method: "DELETE" })).status).toBe(200);
     expect(existsSync(planted.file)).toBe(true);
     expect((await owner.request(detailAddress(session, planted.id))).status).toBe(200);
@@ -214,6 +217,7 @@ describe("the detail folder is pruned with the values that hold it", () => {
     const summary = summaryOf(whole, planted.marker);
     await plantCell(first, summary, "C");
     const copy = await plantObject(second, "D", summary);
+    age(planted.file);
     expect((await owner.request(`/api/sessions/${first}`, { method: "DELETE" })).status).toBeLessThan(300);
     expect(existsSync(planted.file)).toBe(true);
     expect((await owner.request(detailAddress(second, planted.id))).status).toBe(200);
@@ -227,6 +231,7 @@ describe("the detail folder is pruned with the values that hold it", () => {
     const planted = plantDetail(whole);
     // An imported copy: no cell of any session holds the summary, only this object.
     await plantObject(session, "E", summaryOf(whole, planted.marker));
+    age(planted.file);
     const events = await allEvents(
       await owner.request(`/api/sessions/${session}/cells`, {
         method: "POST",
@@ -245,9 +250,27 @@ describe("the detail folder is pruned with the values that hold it", () => {
   it("keeps a file written moments ago: a running cell may be about to store it", async () => {
     const session = await newSession(owner, "large values, fresh file");
     const whole = wholeComplex("fresh");
-    const planted = plantDetail(whole, true);
+    const planted = plantDetail(whole);
     const objectId = await plantObject(session, "F", summaryOf(whole, planted.marker));
     expect((await owner.request(`/api/sessions/${session}/objects/${objectId}`, { method: "DELETE" })).status).toBe(200);
     expect(existsSync(planted.file)).toBe(true);
+  });
+
+  it("the sweep a server runs at start deletes the files no stored value holds, and abandoned half-written ones", async () => {
+    const session = await newSession(owner, "large values, swept");
+    const held = wholeComplex("held at the sweep");
+    const heldDetail = plantDetail(held);
+    await plantCell(session, summaryOf(held, heldDetail.marker), "H");
+    const stray = plantDetail(wholeComplex("never stored"));
+    const fresh = plantDetail(wholeComplex("being stored"));
+    const halfWritten = `${stray.file}.4242.tmp`;
+    writeFileSync(halfWritten, "{", { mode: 0o600 });
+    for (const file of [heldDetail.file, stray.file, halfWritten]) age(file);
+    expect(await sweepDetails()).toBeGreaterThanOrEqual(2);
+    expect(existsSync(stray.file)).toBe(false);
+    expect(existsSync(halfWritten)).toBe(false);
+    expect(existsSync(heldDetail.file)).toBe(true);
+    expect(existsSync(fresh.file)).toBe(true);
+    expect((await owner.request(detailAddress(session, heldDetail.id))).status).toBe(200);
   });
 });

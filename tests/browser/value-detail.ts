@@ -3,7 +3,7 @@
 /// says so in words. The summaries and their files are planted as the cell job writes them
 /// (tests/api/value-details.test.ts explains why), the rest is the real console and server.
 import { randomUUID } from "node:crypto";
-import { mkdirSync, readFileSync, utimesSync, writeFileSync } from "node:fs";
+import { mkdirSync, readFileSync, writeFileSync } from "node:fs";
 import path from "node:path";
 import { db } from "@/db/client";
 import { cells } from "@/db/schema";
@@ -40,8 +40,6 @@ function plant(whole: unknown, keepFile: boolean) {
   if (keepFile) {
     const file = path.join(dir, `${id}.json`);
     writeFileSync(file, json, { mode: 0o600 });
-    const hourAgo = new Date(Date.now() - 3600_000);
-    utimesSync(file, hourAgo, hourAgo);
   }
   const why = "it is kept as a summary, its detail on request";
   const summary = { ...WHOLE, text: `${WHOLE.text} (${why})`, maps: null, note: why, detail: { id, bytes: json.length, type: "Complex" } };
