@@ -32,7 +32,7 @@ let group: TestGroup;
 
 /// A detail as the cell job writes it: `<id>.json` holding the whole value, mode 600. Written
 /// now, so a server starting meanwhile (its sweep keeps files younger than 10 s) cannot take
-/// it before the rows holding it are stored; `age` then dates it an hour back, so that only
+/// it before the rows holding it are stored; `age` then dates it two hours back, so that only
 /// the database decides whether pruning may delete it.
 function plantDetail(whole: unknown): { id: string; file: string; json: string; marker: { id: string; bytes: number; type: string } } {
   const dir = testEnv("RINGSIDE_DETAIL_DIR");
@@ -44,9 +44,10 @@ function plantDetail(whole: unknown): { id: string; file: string; json: string; 
   return { id, file, json, marker: { id, bytes: json.length, type: (whole as { type: string }).type } };
 }
 
+/// Two hours back: past the sweep's hour for half-written files too.
 function age(file: string) {
-  const hourAgo = new Date(Date.now() - 3600_000);
-  utimesSync(file, hourAgo, hourAgo);
+  const then = new Date(Date.now() - 2 * 3600_000);
+  utimesSync(file, then, then);
 }
 
 /// A Koszul-like complex's whole JSON (its content does not matter to the route).
