@@ -41,6 +41,30 @@ async function idsWhere(database: Queryable, cellsWhere: SQL | null, objectsWher
   return rows.map((r) => r.id).filter((id): id is string => typeof id === "string" && detailPath(id) !== null);
 }
 
+/// The sessions whose stored cells or named objects carry the marker of detail `id`.
+export async function sessionsHoldingDetail(id: string, database: Queryable = db()): Promise<string[]> {
+  const rows = await database.execute<{ session_id: string }>(sql`
+    SELECT DISTINCT session_id FROM (
+      SELECT session_id FROM cells WHERE result IS NOT NULL AND jsonb_path_exists(result, ${DETAIL_IDS + " ? (@ == $id)"}, jsonb_build_object('id', ${id}::text))
+      UNION ALL
+      SELECT session_id FROM named_objects WHERE jsonb_path_exists(value, ${DETAIL_IDS + " ? (@ == $id)"}, jsonb_build_object('id', ${id}::text))
+    ) holders`);
+  return rows.map((r) => r.session_id);
+}
+
+/// A copy of `json` without the markers of details outside `keep` (the summaries stay).
+export function withoutDetailsOutside<T>(json: T, keep: ReadonlySet<string>): T {
+  const walk = (node: unknown): unknown => {
+    if (node === null || typeof node !== "object") return node;
+    if (Array.isArray(node)) return node.map(walk);
+    const marker = detailOf(node);
+    const out: Record<string, unknown> = {};
+    for (const [k, v] of Object.entries(node)) if (!(k === "detail" && marker && !keep.has(marker.id))) out[k] = walk(v);
+    return out;
+  };
+  return walk(json) as T;
+}
+
 /// The detail ids a session's cells and named objects carry (taken before the session goes).
 export function detailIdsOfSession(sessionId: string, database: Queryable = db()): Promise<string[]> {
   return idsWhere(database, sql`session_id = ${sessionId}`, sql`session_id = ${sessionId}`);

@@ -10,6 +10,8 @@ import { transcriptToLatex } from "@/lib/export/latex";
 import { transcriptToMarkdown } from "@/lib/export/markdown";
 import { statementsOf, type Transcript, type ValueJsonLike } from "@/lib/export/transcript";
 import { HttpError } from "@/lib/http/errors";
+import { canRead } from "@/lib/auth/access";
+import { detailIdsIn, sessionsHoldingDetail, withoutDetailsOutside } from "@/lib/sessions/details";
 import { auditSharing } from "./common";
 
 type SessionRow = typeof sessions.$inferSelect;
@@ -125,8 +127,28 @@ export function parseImport(body: unknown): { doc: SessionExport; title: string 
   return { doc: data, title: data.session.title };
 }
 
-export async function importSession(user: CurrentUser, doc: SessionExport, title: string, address: string) {
+/// An import may carry the marker of a value's detail (a summary of a large value); the detail
+/// is served to whoever holds the marker, so a crafted import could name another user's
+/// detail. A marker is kept only when the importer can read a session that already holds it
+/// (their own export imported again, a session shared with them); the others are dropped and
+/// the summary stays.
+async function keepReadableDetails(user: CurrentUser, doc: SessionExport): Promise<SessionExport> {
+  const ids = detailIdsIn(doc);
+  const keep = new Set<string>();
+  for (const id of ids) {
+    for (const sessionId of await sessionsHoldingDetail(id)) {
+      if (await canRead(user, sessionId)) {
+        keep.add(id);
+        break;
+      }
+    }
+  }
+  return keep.size === ids.size ? doc : withoutDetailsOutside(doc, keep);
+}
+
+export async function importSession(user: CurrentUser, given: SessionExport, title: string, address: string) {
   const importedAt = new Date().toISOString();
+  const doc = await keepReadableDetails(user, given);
   return db().transaction(async (tx) => {
     const [session] = await tx.insert(sessions).values({ title, ownerId: user.id }).returning();
     const idOf = new Map<number, string>();

@@ -196,6 +196,38 @@ describe("GET /api/sessions/:id/details/:detailId", () => {
   });
 });
 
+describe("importing a session keeps a detail marker only for an importer who can read it already", () => {
+  // The detail route serves whoever holds the marker; an import is text the importer wrote,
+  // so a marker copied from someone else's export (or guessed) must not open their detail.
+  it("drops the marker for an outsider (the summary stays), keeps it for the owner's own export", async () => {
+    const session = await newSession(owner, "large values, exported");
+    const whole = wholeComplex("exported");
+    const planted = plantDetail(whole);
+    await plantCell(session, summaryOf(whole, planted.marker), "C");
+    const exported = await owner.request(`/api/sessions/${session}/export?format=json`);
+    expect(exported.status).toBe(200);
+    const doc = await exported.json();
+    expect(JSON.stringify(doc)).toContain(planted.id);
+
+    const stolen = await outsider.json("/api/sessions/import", doc);
+    expect(stolen.status).toBe(201);
+    const theirs = ((await stolen.json()) as { session: { id: string } }).session.id;
+    expect((await outsider.request(detailAddress(theirs, planted.id))).status).toBe(404);
+    const [cell] = await db().execute<{ result: unknown }>(sql`SELECT result FROM cells WHERE session_id = ${theirs}`);
+    expect(JSON.stringify(cell!.result)).not.toContain(planted.id);
+    expect(JSON.stringify(cell!.result)).toContain("kept as a summary");
+    const [object] = await db().execute<{ value: unknown }>(sql`SELECT value FROM named_objects WHERE session_id = ${theirs}`);
+    expect(JSON.stringify(object!.value)).not.toContain(planted.id);
+
+    const again = await owner.json("/api/sessions/import", doc);
+    expect(again.status).toBe(201);
+    const mine = ((await again.json()) as { session: { id: string } }).session.id;
+    const served = await owner.request(detailAddress(mine, planted.id));
+    expect(served.status).toBe(200);
+    expect(await served.text()).toBe(planted.json);
+  });
+});
+
 describe("the detail folder is pruned with the values that hold it", () => {
   it("deleting a named object keeps the file while its cell holds it; deleting the session removes it", async () => {
     const session = await newSession(owner, "large values, session deleted");
