@@ -135,6 +135,37 @@ describe("uploads", () => {
     expect(((await bad.json()) as { error: { message: string } }).error.message).toMatch(/item 2/);
   });
 
+  it("the preview reads every file exactly as the upload does (one reader, readFamilyFile)", async () => {
+    // Good and bad files of both formats, bad lines given out of order in the JSON case and
+    // a line whose problem the engine finds (x^2 + y is no ideal) beside a parse error.
+    const files: { format: "text" | "json"; content: string }[] = [
+      { format: "text", content: "# two good ideals\n<x^2, y>\n\n<x*y, z^2>\n" },
+      { format: "text", content: "<x^2, y>\nx^2 + y\n<x^2 +* y>\n<z>" },
+      { format: "json", content: '[["x^2", "y"], ["z^3"], ["x*y", "z"]]' },
+      { format: "json", content: '[[], ["x^2"], "y", ["z"]]' },
+    ];
+    for (const [k, f] of files.entries()) {
+      const p = await owner.json("/api/experiments/uploads/preview", { format: f.format, ring: RING, content: f.content });
+      expect(p.status).toBe(200);
+      const { preview } = (await p.json()) as {
+        preview: { count: number; problems: { line: number; message: string }[]; problemCount: number; unit: string };
+      };
+      expect(preview.unit).toBe(f.format === "json" ? "item" : "line");
+      const u = await owner.json("/api/experiments/uploads", { sessionId, name: `same${k}`, ...f, ring: RING });
+      if (preview.problemCount === 0) {
+        expect(u.status, f.content).toBe(201);
+        expect(((await u.json()) as { upload: { length: number } }).upload.length).toBe(preview.count);
+        expect(preview.count).toBeGreaterThan(0);
+      } else {
+        expect(u.status, f.content).toBe(422);
+        const details = ((await u.json()) as { error: { details: { line: number; message: string }[] } }).error.details;
+        // the same lines in the same (line) order, each with the same reason
+        expect(details.map((d) => d.line)).toEqual(preview.problems.map((q) => q.line));
+        expect(details.map((d) => d.message)).toEqual(preview.problems.map((q) => `${preview.unit} ${q.line}: ${q.message}`));
+      }
+    }
+  });
+
   it("a viewer cannot upload", async () => {
     const r = await guest.json("/api/experiments/uploads", { sessionId, name: "g", format: "text", ring: RING, content: "<x>" });
     expect(r.status).toBe(403);
