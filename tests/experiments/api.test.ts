@@ -295,4 +295,37 @@ describe("experiments over HTTP", () => {
     expect(list.length).toBeGreaterThanOrEqual(3);
     expect((await outsider.request(`/api/experiments?session=${sessionId}`)).status).toBe(404);
   });
+
+  it("a read-only link lists its session's experiments, signed in or not, and creates none", async () => {
+    // the session's link was published by the test above
+    const [s] = await db().select().from(sessions).where(eq(sessions.id, sessionId));
+    const token = s.shareToken!;
+    const ids = async (client: TestClient, query: string) => {
+      const r = await client.request(`/api/experiments?${query}`);
+      expect(r.status, `${query}`).toBe(200);
+      return ((await r.json()) as { experiments: { id: string }[] }).experiments.map((e) => e.id);
+    };
+    const all = await ids(owner, `session=${sessionId}`);
+    expect(all.length).toBeGreaterThanOrEqual(3);
+    // the same list as the owner's, for a stranger to the session holding the link and for a
+    // signed-out visitor holding it (as GET /api/experiments/:id?link= already answered)
+    expect(await ids(outsider, `session=${sessionId}&link=${token}`)).toEqual(all);
+    expect(await ids(anonymous, `session=${sessionId}&link=${token}`)).toEqual(all);
+    // a wrong token opens nothing; a link names no list of "every session I can read"
+    expect((await outsider.request(`/api/experiments?session=${sessionId}&link=${token}x`)).status).toBe(404);
+    expect((await anonymous.request(`/api/experiments?session=${sessionId}&link=${token}x`)).status).toBe(404);
+    expect((await anonymous.request(`/api/experiments?link=${token}`)).status).toBe(401);
+    const outsiderAll = await ids(outsider, `link=${token}`);
+    expect(outsiderAll.filter((id) => all.includes(id))).toEqual([]);
+    // reading through the link is no licence to create (the create names its session in the
+    // body and takes no link: to the outsider the session stays invisible, 404)
+    const before = all.length;
+    const create = await outsider.json(`/api/experiments?session=${sessionId}&link=${token}`, {
+      sessionId,
+      source: "S := Q[a]\nsweep(monomial_ideals(S, degree = 1, max_gens = 1), I -> {c: I.codim})",
+    });
+    expect(create.status).toBe(404);
+    expect((await anonymous.json(`/api/experiments?link=${token}`, { sessionId, source: "S := Q[a]" })).status).toBe(401);
+    expect(await ids(owner, `session=${sessionId}`)).toHaveLength(before);
+  });
 });
