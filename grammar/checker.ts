@@ -633,10 +633,16 @@ class Checker {
   }
 
   /// A sweep's table has the probe's record fields as columns; the probe is checked
-  /// on a member of the family (an Ideal for the generated families).
+  /// on a member of the family (an Ideal for the generated families). Whether the sweep runs
+  /// inline (a Table) or becomes a background experiment (an Experiment) is decided when it
+  /// runs — by the family's size against inlineSweepMembers, and by where (the CLI always runs
+  /// inline) — so the type is `Table or Experiment`, narrowed to Table by `background = false`.
   private sweepResult(e: A.Call, argTypes: Type[], member: Type): Type {
     const fields = this.probeFields(e, argTypes[1], member, "sweep");
-    return T.table(fields && { index: T.Int, label: T.Str, status: T.Str, seconds: T.Rat, ...fields });
+    const table = T.table(fields && { index: T.Int, label: T.Str, status: T.Str, seconds: T.Rat, ...fields });
+    const background = e.named.find((n) => n.name.name === "background")?.value;
+    const inline = background?.kind === "BoolLit" && !background.value;
+    return inline ? table : T.union(table, T.Experiment);
   }
 
   /// The probe's Record fields, or null when not known; reports a probe that returns no Record.
@@ -907,9 +913,14 @@ class Checker {
 }
 
 /// The type of a value that may be `none`, once it is not (checked at run time).
+/// The type a value is used as (for its properties, methods and indexing): `none` aside, and
+/// a sweep's Experiment aside where it may as well be a Table. Neither is ruled out statically
+/// (there is no flow typing, and inline or background is decided when the sweep runs); the
+/// evaluator reports `none`, or a background sweep's Experiment, when it is used so.
 function withoutNone(t: Type): Type {
   if (t.kind !== "Union") return t;
-  const real = t.options.filter((o) => o.kind !== "None");
+  const table = t.options.some((o) => o.kind === "Table");
+  const real = t.options.filter((o) => o.kind !== "None" && !(table && o.kind === "Experiment"));
   return real.length === 0 ? t : makeUnion(real);
 }
 

@@ -341,17 +341,21 @@ export const FUNCTIONS: readonly FunctionSig[] = [
   },
   {
     name: "sweep",
-    overloads: [ov([p("family", T.family(T.v("X"))), p("probe", T.fn([T.v("X")], T.Any))], T.table(null), 3)],
+    // Inline or in the background is decided when the sweep runs (the family's size against
+    // inlineSweepMembers, where it runs): the result is honestly either; `background = false`
+    // narrows it to a Table (grammar/checker.ts sweepResult).
+    overloads: [ov([p("family", T.family(T.v("X"))), p("probe", T.fn([T.v("X")], T.Any))], T.union(T.table(null), T.Experiment), 3)],
     options: [
       {
         name: "background",
         type: T.Bool,
         default: null,
-        description: "true/false forces a background experiment or an inline run (the CLI always runs inline)",
+        description:
+          "true/false forces a background experiment or an inline run (the CLI always runs inline); false makes the result a Table",
       },
     ],
     description:
-      "applies probe to every member of the family: a Table, one row per member, columns index, label, status, seconds and the probe's Record fields",
+      "applies probe to every member of the family: a Table, one row per member, columns index, label, status, seconds and the probe's Record fields — or, for a long sweep in a cell (more than inlineSweepMembers members, or background = true), an Experiment that runs in the background",
     example: "sweep(F, I -> {index: burch_index(S / I), depth: (S / I).depth})",
   },
   {

@@ -38,7 +38,7 @@ export function Console(props: ConsoleProps) {
   const closeDialog = useCallback(() => setDialog(null), [setDialog]);
 
   // the experiments room: palette commands, a cell's links, the tour's sweep step
-  const experimentCommands = useExperimentCommands(sessionId, c.cells, canEdit, signedIn, c.setNotice);
+  const experimentCommands = useExperimentCommands(sessionId, c.cells, canEdit, signedIn, c.link, c.setNotice);
   const runTourExperiment = useCallback(
     async (e: GuidedExample) => {
       try {
@@ -54,9 +54,9 @@ export function Console(props: ConsoleProps) {
   );
   const cellFooter = useCallback(
     (cell: Parameters<typeof CellExperiments>[0]["cell"]) => (
-      <CellExperiments cell={cell} sessionId={sessionId} canEdit={canEdit} signedIn={signedIn} />
+      <CellExperiments cell={cell} sessionId={sessionId} canEdit={canEdit} signedIn={signedIn} link={c.link} />
     ),
-    [sessionId, canEdit, signedIn],
+    [sessionId, canEdit, signedIn, c.link],
   );
 
   // The whole of a value stored as a summary, from the open session (with its link token).

@@ -5,6 +5,10 @@ import type { Experiment, ExperimentSummary, Row, MemberAnswer, RowsPage, RowSta
 
 export const experimentKeys = {
   list: "/api/experiments",
+  /// one session's experiments, through the session's read-only link when the visitor has one
+  /// (signed in or not); null (nothing to read) without a session, or signed out without a link
+  ofSession: (sessionId: string | null, signedIn: boolean, link: string | null) =>
+    sessionId && (signedIn || link) ? withLink(`/api/experiments?session=${sessionId}`, link) : null,
   one: (id: string, link: string | null) => withLink(`/api/experiments/${id}`, link),
   member: (id: string, index: number, link: string | null) => withLink(`/api/experiments/${id}/members/${index}`, link),
 };

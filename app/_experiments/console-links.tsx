@@ -5,22 +5,19 @@
 import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
 import useSWR from "swr";
-import { fetchJson, messageOf } from "@/app/_client/fetch";
+import { fetchJson, messageOf, withLink } from "@/app/_client/fetch";
 import type { Cell } from "@/lib/wire/reading";
 import type { PaletteCommand } from "@/app/_console/views/command-palette";
 import { buttonSecondary, focusRing } from "@/app/_console/views/styles";
-import { actOn, createFromCell } from "./api";
+import { actOn, createFromCell, experimentKeys } from "./api";
 import { ExperimentStatusBadge } from "./experiment-status";
 import { isActive, type ExperimentSummary } from "./types";
 
 /// Whether a cell's program has a sweep the server can run as an experiment.
 export const hasSweep = (source: string): boolean => /\bsweep\s*\(/.test(source);
 
-const sessionExperimentsKey = (sessionId: string | null, signedIn: boolean) =>
-  sessionId && signedIn ? `/api/experiments?session=${sessionId}` : null;
-
-export function useSessionExperiments(sessionId: string | null, signedIn: boolean) {
-  return useSWR<{ experiments: ExperimentSummary[] }>(sessionExperimentsKey(sessionId, signedIn), fetchJson, {
+export function useSessionExperiments(sessionId: string | null, signedIn: boolean, link: string | null) {
+  return useSWR<{ experiments: ExperimentSummary[] }>(experimentKeys.ofSession(sessionId, signedIn, link), fetchJson, {
     refreshInterval: (d) => (d?.experiments.some((e) => isActive(e.status)) ? 3000 : 0),
   });
 }
@@ -38,13 +35,16 @@ export function CellExperiments({
   sessionId,
   canEdit,
   signedIn,
+  link,
 }: {
   cell: Cell;
   sessionId: string | null;
   canEdit: boolean;
   signedIn: boolean;
+  /// the read-only link the console was opened with: the list and the rooms are read through it
+  link: string | null;
 }) {
-  const list = useSessionExperiments(sessionId, signedIn);
+  const list = useSessionExperiments(sessionId, signedIn, link);
   const router = useRouter();
   const [busy, setBusy] = useState(false);
   const [problem, setProblem] = useState<string | null>(null);
@@ -69,14 +69,14 @@ export function CellExperiments({
       {made.map((e) => (
         <a
           key={e.id}
-          href={`/experiments/${e.id}`}
+          href={withLink(`/experiments/${e.id}`, link)}
           className={`inline-flex items-center gap-1.5 underline underline-offset-2 ${focusRing}`}
         >
           Experiment: {e.done}/{e.total} <ExperimentStatusBadge status={e.status} />
         </a>
       ))}
       {unlisted.map((id) => (
-        <a key={id} href={`/experiments/${id}`} className={`underline underline-offset-2 ${focusRing}`}>
+        <a key={id} href={withLink(`/experiments/${id}`, link)} className={`underline underline-offset-2 ${focusRing}`}>
           Open the experiment
         </a>
       ))}
@@ -106,9 +106,10 @@ export function useExperimentCommands(
   cells: readonly Cell[] | undefined,
   canEdit: boolean,
   signedIn: boolean,
+  link: string | null,
   notify: (s: string) => void,
 ): PaletteCommand[] {
-  const list = useSessionExperiments(sessionId, signedIn);
+  const list = useSessionExperiments(sessionId, signedIn, link);
   const router = useRouter();
   return useMemo(() => {
     if (!signedIn) return [];

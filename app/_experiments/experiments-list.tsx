@@ -14,6 +14,8 @@ import { isActive, type ExperimentSummary } from "./types";
 
 type Whose = "all" | "mine" | "shared";
 
+const COLUMNS = ["Experiment", "Status", "Done", "Session", "Created"] as const;
+
 export function ExperimentsList() {
   const list = useSWR<{ experiments: ExperimentSummary[] }>(experimentKeys.list, fetchJson, {
     refreshInterval: (d) => (d?.experiments.some((e) => isActive(e.status)) ? 2000 : 10_000),
@@ -68,21 +70,11 @@ export function ExperimentsList() {
           <table className="w-full border-collapse text-sm" data-testid="experiments-list">
             <thead className="bg-paper-deep/60 text-left dark:bg-night-panel">
               <tr>
-                <th scope="col" className="px-3 py-1.5">
-                  Experiment
-                </th>
-                <th scope="col" className="px-3 py-1.5">
-                  Status
-                </th>
-                <th scope="col" className="px-3 py-1.5">
-                  Done
-                </th>
-                <th scope="col" className="px-3 py-1.5">
-                  Session
-                </th>
-                <th scope="col" className="px-3 py-1.5">
-                  Created
-                </th>
+                {COLUMNS.map((c) => (
+                  <th key={c} scope="col" className="px-3 py-1.5">
+                    {c}
+                  </th>
+                ))}
               </tr>
             </thead>
             <tbody>

@@ -189,6 +189,21 @@ export async function act(id: string, action: Action): Promise<ExperimentRow> {
   return row;
 }
 
+/// Cancelling a cell cancels the background experiments its run created (the cells route hands
+/// this to lib/sessions/run-cell.ts; the cancel route calls it for a cell whose server is gone):
+/// each of `ids` that was made from that cell and is still queued, running or paused is
+/// cancelled exactly as POST /api/experiments/:id/cancel does; one already done or cancelled,
+/// or made from another cell, is left alone. Answers the ids it cancelled.
+export async function cancelFromCell(cellId: string, ids: readonly string[]): Promise<string[]> {
+  const cancelled: string[] = [];
+  for (const id of new Set(ids)) {
+    const e = await getExperiment(id);
+    if (!e || e.sourceCellId !== cellId) continue;
+    if (await changeStatus(id, "cancelled")) cancelled.push(id);
+  }
+  return cancelled;
+}
+
 /// Queues every member of `e` that has no row (duplicates of waiting jobs are dropped).
 export async function requeue(e: ExperimentRow): Promise<number> {
   const missing = await missingIndexes(e);

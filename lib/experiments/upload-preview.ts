@@ -1,11 +1,8 @@
-/// A dry run of an upload (issue 15, the experiments room): the file is read exactly as
-/// POST /api/experiments/uploads reads it (the same engine job), but nothing is stored; the
-/// answer lists the first members and every bad line with its number and reason, so the
+/// A dry run of an upload (issue 15, the experiments room): the file is read by the upload's
+/// own reader (`readFamilyFile` in uploads.ts, the same engine job), but nothing is stored;
+/// the answer lists the first members and every bad line with its number and reason, so the
 /// browser can show them before anything is created.
-import { readUpload } from "./compute-adapter";
-import { ExperimentError } from "./errors";
-import type { UploadProblem } from "./experiment-job";
-import { jsonLines, MAX_UPLOAD_LINES } from "./uploads";
+import { readFamilyFile, type FamilyFile } from "./uploads";
 
 /// How many members the preview returns (the count is always the full one).
 export const PREVIEW_MEMBERS = 12;
@@ -23,34 +20,24 @@ export interface UploadPreview {
   unit: "line" | "item";
 }
 
-export async function previewUpload(u: { format: "text" | "json"; ring: string; content: string }): Promise<UploadPreview> {
+export async function previewUpload(u: FamilyFile): Promise<UploadPreview> {
   const unit = u.format === "json" ? "item" : "line";
-  let text = u.content;
-  let problems: UploadProblem[] = [];
-  if (u.format === "json") ({ text, problems } = jsonLines(u.content));
-  const lineCount = text.split("\n").length;
-  if (lineCount > MAX_UPLOAD_LINES)
-    throw new ExperimentError(413, "too_large", `The upload has ${lineCount} lines; at most ${MAX_UPLOAD_LINES}.`);
-  if (problems.length === 0) {
-    const read = await readUpload(u.ring, text, 60_000);
-    if (read.kind === "upload-error") problems = read.problems;
-    else {
-      return {
-        count: read.members.length,
-        // the job's lines are 1-based lines of the file (line 0 is the ring)
-        members: read.members.slice(0, PREVIEW_MEMBERS).map((value, k) => ({ line: read.lines[k] ?? k + 1, value })),
-        problems: [],
-        problemCount: 0,
-        unit,
-      };
-    }
+  const read = await readFamilyFile(u);
+  if (read.kind === "upload-error") {
+    return {
+      count: 0,
+      members: [],
+      problems: read.problems.slice(0, PREVIEW_PROBLEMS).map((p) => ({ line: p.line, message: p.message })),
+      problemCount: read.problems.length,
+      unit,
+    };
   }
-  problems.sort((a, b) => a.line - b.line);
   return {
-    count: 0,
-    members: [],
-    problems: problems.slice(0, PREVIEW_PROBLEMS).map((p) => ({ line: p.line, message: p.message })),
-    problemCount: problems.length,
+    count: read.members.length,
+    // the job's lines are 1-based lines of the file (line 0 is the ring)
+    members: read.members.slice(0, PREVIEW_MEMBERS).map((value, k) => ({ line: read.lines[k] ?? k + 1, value })),
+    problems: [],
+    problemCount: 0,
     unit,
   };
 }

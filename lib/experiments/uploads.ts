@@ -6,19 +6,23 @@ import { db } from "@/db/client";
 import { namedObjects, uploads } from "@/db/schema";
 import { ExperimentError } from "./errors";
 import { readUpload } from "./compute-adapter";
-import type { UploadProblem } from "./experiment-job";
+import type { UploadOutcome, UploadProblem } from "./experiment-job";
 
 export const MAX_UPLOAD_LINES = 20_000;
 
-export interface UploadInput {
-  sessionId: string;
-  userId: string;
-  /// the named object the family becomes (an identifier)
-  name: string;
+/// A family file as the browser sends it, for the preview and for the upload alike.
+export interface FamilyFile {
   format: "text" | "json";
   /// the ring the ideals are read in, in the notation: "GF(32003)[x, y, z]"
   ring: string;
   content: string;
+}
+
+export interface UploadInput extends FamilyFile {
+  sessionId: string;
+  userId: string;
+  /// the named object the family becomes (an identifier)
+  name: string;
 }
 
 /// JSON content as text lines `<g1, g2>`, one per item; a malformed item is a problem.
@@ -46,6 +50,25 @@ export function jsonLines(content: string): { text: string; problems: UploadProb
   return { text: lines.join("\n"), problems };
 }
 
+/// Reads a family file the one way both the upload and its preview (upload-preview.ts) read
+/// it: JSON items become text lines (a malformed item is a problem), more than
+/// MAX_UPLOAD_LINES lines are refused (413), and only a file with no problem so far goes to
+/// an engine thread, which reads every line in the ring. Problems come back in line order.
+export async function readFamilyFile(u: FamilyFile): Promise<UploadOutcome> {
+  let text = u.content;
+  let problems: UploadProblem[] = [];
+  if (u.format === "json") ({ text, problems } = jsonLines(u.content));
+  const lineCount = text.split("\n").length;
+  if (lineCount > MAX_UPLOAD_LINES)
+    throw new ExperimentError(413, "too_large", `The upload has ${lineCount} lines; at most ${MAX_UPLOAD_LINES}.`);
+  if (problems.length === 0) {
+    const read = await readUpload(u.ring, text, 60_000);
+    if (read.kind === "upload") return read;
+    problems = read.problems;
+  }
+  return { kind: "upload-error", problems: [...problems].sort((a, b) => a.line - b.line) };
+}
+
 const where = (format: "text" | "json", p: UploadProblem) =>
   p.line === 0 ? p.message : `${format === "json" ? "item" : "line"} ${p.line}: ${p.message}`;
 
@@ -56,64 +79,55 @@ export async function createUpload(u: UploadInput) {
       "invalid_upload",
       `The name ${JSON.stringify(u.name)} is not an identifier (a letter, then letters, digits, _ or ').`,
     );
-  let text = u.content;
-  let problems: UploadProblem[] = [];
-  if (u.format === "json") ({ text, problems } = jsonLines(u.content));
-  const lineCount = text.split("\n").length;
-  if (lineCount > MAX_UPLOAD_LINES)
-    throw new ExperimentError(413, "too_large", `The upload has ${lineCount} lines; at most ${MAX_UPLOAD_LINES}.`);
-  if (problems.length === 0) {
-    const read = await readUpload(u.ring, text, 60_000);
-    if (read.kind === "upload-error") problems = read.problems;
-    else {
-      const family = {
-        type: "Family",
-        text: `upload ${u.name}: ${read.members.length} ideals`,
-        length: read.members.length,
-        definition: `upload ${u.name} (${u.format}, ${read.members.length} ideals over ${u.ring})`,
-        generator: "upload",
-        options: { length: String(read.members.length) },
-        members: read.members,
-        ring: read.ring,
-      };
-      return db().transaction(async (tx) => {
-        const [row] = await tx
-          .insert(uploads)
-          .values({
-            sessionId: u.sessionId,
-            createdBy: u.userId,
-            name: u.name,
-            format: u.format,
-            content: u.content,
-            family,
-            length: read.members.length,
-          })
-          .returning({ id: uploads.id, name: uploads.name, format: uploads.format, length: uploads.length, createdAt: uploads.createdAt });
-        // the upload becomes a named object of type Family (notation.md §11)
-        await tx
-          .insert(namedObjects)
-          .values({
-            sessionId: u.sessionId,
-            ownerId: u.userId,
-            name: u.name,
-            type: "Family",
-            value: family,
-            source: `# uploaded file (${u.format})`,
-          })
-          .onConflictDoUpdate({
-            target: [namedObjects.sessionId, namedObjects.name],
-            set: { type: "Family", value: family, source: `# uploaded file (${u.format})`, updatedAt: new Date() },
-          });
-        return row;
-      });
-    }
+  const read = await readFamilyFile(u);
+  if (read.kind === "upload-error") {
+    const problems = read.problems;
+    const shown = problems.slice(0, 20).map((p) => where(u.format, p));
+    throw new ExperimentError(
+      422,
+      "invalid_upload",
+      `Nothing was stored: ${shown[0]}${problems.length > 1 ? ` (and ${problems.length - 1} more problem${problems.length > 2 ? "s" : ""})` : ""}`,
+      problems.slice(0, 100).map((p) => ({ line: p.line, message: where(u.format, p) })),
+    );
   }
-  problems.sort((a, b) => a.line - b.line);
-  const shown = problems.slice(0, 20).map((p) => where(u.format, p));
-  throw new ExperimentError(
-    422,
-    "invalid_upload",
-    `Nothing was stored: ${shown[0]}${problems.length > 1 ? ` (and ${problems.length - 1} more problem${problems.length > 2 ? "s" : ""})` : ""}`,
-    problems.slice(0, 100).map((p) => ({ line: p.line, message: where(u.format, p) })),
-  );
+  const family = {
+    type: "Family",
+    text: `upload ${u.name}: ${read.members.length} ideals`,
+    length: read.members.length,
+    definition: `upload ${u.name} (${u.format}, ${read.members.length} ideals over ${u.ring})`,
+    generator: "upload",
+    options: { length: String(read.members.length) },
+    members: read.members,
+    ring: read.ring,
+  };
+  return db().transaction(async (tx) => {
+    const [row] = await tx
+      .insert(uploads)
+      .values({
+        sessionId: u.sessionId,
+        createdBy: u.userId,
+        name: u.name,
+        format: u.format,
+        content: u.content,
+        family,
+        length: read.members.length,
+      })
+      .returning({ id: uploads.id, name: uploads.name, format: uploads.format, length: uploads.length, createdAt: uploads.createdAt });
+    // the upload becomes a named object of type Family (notation.md §11)
+    await tx
+      .insert(namedObjects)
+      .values({
+        sessionId: u.sessionId,
+        ownerId: u.userId,
+        name: u.name,
+        type: "Family",
+        value: family,
+        source: `# uploaded file (${u.format})`,
+      })
+      .onConflictDoUpdate({
+        target: [namedObjects.sessionId, namedObjects.name],
+        set: { type: "Family", value: family, source: `# uploaded file (${u.format})`, updatedAt: new Date() },
+      });
+    return row;
+  });
 }

@@ -447,6 +447,14 @@ export function callFunction(interp: Evaluator, name: string, args: Value[], nam
 
 function propertySig(obj: Value, name: string, span: Span): PropertySig {
   const sig = lookupProperty(obj.type as TypeKind, name);
+  // The checker lets a sweep's result be used as a Table (it may be one: grammar/checker.ts
+  // sweepResult); a sweep that went to the background says here what it is instead.
+  if (!sig && obj.type === "Experiment") {
+    throw runtime(
+      `this sweep runs in the background, so its value is an Experiment, which has no property ${name}: follow its rows in the experiments room, or write background = false to run the sweep here and get a Table`,
+      span,
+    );
+  }
   if (!sig) {
     const known = PROPERTIES.filter((p) => p.owner === obj.type).map((p) => p.name);
     throw runtime(`${obj.type} has no property ${name}${known.length ? `; its properties are ${known.join(", ")}` : ""}`, span);

@@ -51,6 +51,9 @@ export interface ExperimentRequest {
 export interface RunCellOptions {
   /// Stores a background experiment. Without it every sweep runs inline (as in the CLI).
   createExperiment?: (request: ExperimentRequest) => Promise<unknown>;
+  /// Cancels the background experiments this run created (`ids`) when the user cancels the
+  /// cell; answers the ids it cancelled (lib/experiments' cancelFromCell).
+  cancelExperiments?: (cellId: string, ids: readonly string[]) => Promise<readonly string[]>;
 }
 
 export async function runCell(user: CurrentUser, sessionId: string, source: string, options: RunCellOptions = {}): Promise<Response> {
@@ -114,6 +117,9 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
           order = order.then(() => send(event));
         };
         let experimentProblem: string | null = null;
+        // the experiments this run stored, and whether the user asked to cancel the cell
+        const created: string[] = [];
+        let cancelRequested = false;
         const onEvent = (event: CellEvent) => {
           work.observe(event);
           switch (event.event) {
@@ -135,7 +141,7 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
               };
               order = order.then(() =>
                 (createExperiment ?? noExperiments)(request).then(
-                  () => {},
+                  () => void created.push(request.id),
                   (error: Error) => {
                     console.error(`[ringside] cell ${cell.id}: creating experiment ${request.id} failed:`, error);
                     experimentProblem ??= error.message;
@@ -159,7 +165,10 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
 
         untrack = trackRunningCell(cell.id, () => work.snapshot());
         // Without the cancel channel the cell still runs; only cross-server cancel is lost.
-        const unregister = await registerRunningCell(cell.id, () => stop.abort()).catch((error) => {
+        const unregister = await registerRunningCell(cell.id, () => {
+          cancelRequested = true;
+          stop.abort();
+        }).catch((error) => {
           console.error("[ringside] cancel channel unavailable:", error);
           return () => {};
         });
@@ -189,12 +198,22 @@ export async function runCell(user: CurrentUser, sessionId: string, source: stri
         const final = failure as ErrorValue | null;
         const status: CellOutcome["status"] =
           end.status === "cancelled" || final?.kind === "cancelled" ? "cancelled" : final ? "error" : "done";
+        // The user's cancel stops what the cell started too: its background experiments
+        // (lib/experiments/README.md, "Sweeps in a cell"). A dropped connection or a limit
+        // leaves them running — a background experiment is meant to outlive the page.
+        const stoppedExperiments =
+          status === "cancelled" && cancelRequested && created.length > 0
+            ? await (options.cancelExperiments?.(cell.id, created) ?? Promise.resolve([])).catch((error: Error) => {
+                console.error(`[ringside] cell ${cell.id}: cancelling its experiments failed:`, error);
+                return [];
+              })
+            : [];
         // A cancel or a limit keeps the work done: finished statements and the running one's
         // partial results, with where it stopped.
         const stoppedWhy =
           final && (final.kind === "cancelled" || final.kind === "limit")
             ? final.kind === "cancelled"
-              ? "cancelled"
+              ? `cancelled${withExperiments(stoppedExperiments.length)}`
               : final.message
             : null;
         const kept = stoppedWhy ? work.stored(stoppedWhy) : null;
@@ -282,6 +301,10 @@ async function saveWithRetries(cell: CellRow, user: CurrentUser, outcome: CellOu
   await markUnsaved(cell.id, `the result could not be saved after ${attempts} tries (saveAttempts); run the cell again`).catch(() => {});
   return null;
 }
+
+/// Says in the cell's "stopped" line that its cancel also cancelled the experiments it started.
+const withExperiments = (n: number): string =>
+  n === 0 ? "" : n === 1 ? ", and so was the background experiment it started" : `, and so were the ${n} background experiments it started`;
 
 /// The slot is offered experiments only when the caller can create them; reaching this means
 /// it asked anyway, and the cell says so instead of naming an experiment that does not exist.

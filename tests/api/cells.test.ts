@@ -8,6 +8,7 @@ import { closeDb, db } from "@/db/client";
 import { sessions } from "@/db/schema";
 import { ensureTestGroup, TEST_ACCOUNTS } from "../helpers/fixtures";
 import { TestClient, testAddress } from "../helpers/http";
+import { katsuraIdealText } from "../bench/families";
 import { allEvents, ndjsonEvents } from "./ndjson";
 
 const owner = new TestClient(testAddress(141));
@@ -19,24 +20,7 @@ let sessionId = "";
 // machine (katsura-9 took 8 s, too close to the test server's 8 s limit), so it is still
 // running when a test cancels it or the limit stops it. (Katsura's family: common practice.)
 const N = 10;
-const LONG_CELL = [
-  `K := GF(32003)[u0..u${N}]`,
-  "G := <" +
-    [
-      ["u0", ...Array.from({ length: N }, (_, i) => `2*u${i + 1}`)].join("+") + "-1",
-      ...Array.from({ length: N }, (_, m) => {
-        const terms: string[] = [];
-        for (let l = -N; l <= N; l++) {
-          const i = Math.abs(l);
-          const j = Math.abs(m - l);
-          if (j <= N) terms.push(`u${i}*u${j}`);
-        }
-        return `${terms.join("+")}-u${m}`;
-      }),
-    ].join(", ") +
-    ">",
-  "G.groebner",
-].join("\n");
+const LONG_CELL = [`K := GF(32003)[u0..u${N}]`, `G := ${katsuraIdealText(N)}`, "G.groebner"].join("\n");
 
 beforeAll(async () => {
   const group = await ensureTestGroup();

@@ -18,11 +18,12 @@ export function cyclic(field: A.Field, n: number): { R: A.PolyRing; gens: A.Poly
 
 /// The katsura-n system in u0..un: u0 + 2(u1 + … + un) = 1 and, for m = 0..n−1,
 /// Σ_{l=−n..n} u_|l| u_|m−l| = u_m with u_k = 0 for k > n (common practice, from memory).
-export function katsura(field: A.Field, n: number): { R: A.PolyRing; gens: A.Poly[] } {
+/// The generators as text, read alike by the engine's parsePoly and by the notation (the
+/// cell and experiment suites send them as an ideal literal: `katsuraIdealText`).
+export function katsuraGenerators(n: number): string[] {
   const v = Array.from({ length: n + 1 }, (_, i) => `u${i}`);
-  const R = A.polyRing(field, v);
   const u = (k: number) => (Math.abs(k) <= n ? v[Math.abs(k)] : null);
-  const gens: A.Poly[] = [A.parsePoly(R, `${v[0]}+2*(${v.slice(1).join("+")})-1`)];
+  const gens = [`${v[0]}+2*(${v.slice(1).join("+")})-1`];
   for (let m = 0; m < n; m++) {
     const parts: string[] = [];
     for (let l = -n; l <= n; l++) {
@@ -30,9 +31,20 @@ export function katsura(field: A.Field, n: number): { R: A.PolyRing; gens: A.Pol
         b = u(m - l);
       if (a && b) parts.push(`${a}*${b}`);
     }
-    gens.push(A.parsePoly(R, `${parts.join("+")}-${v[m]}`));
+    gens.push(`${parts.join("+")}-${v[m]}`);
   }
-  return { R, gens };
+  return gens;
+}
+
+/// katsura-n as an ideal literal of the notation, read in a ring with variables u0..un.
+export const katsuraIdealText = (n: number): string => `<${katsuraGenerators(n).join(", ")}>`;
+
+export function katsura(field: A.Field, n: number): { R: A.PolyRing; gens: A.Poly[] } {
+  const R = A.polyRing(
+    field,
+    Array.from({ length: n + 1 }, (_, i) => `u${i}`),
+  );
+  return { R, gens: katsuraGenerators(n).map((g) => A.parsePoly(R, g)) };
 }
 
 /// The number of monomials outside the initial ideal of a zero-dimensional ideal

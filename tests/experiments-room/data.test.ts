@@ -6,6 +6,7 @@
 import { describe, expect, it } from "vitest";
 import { analyze } from "@/grammar";
 import { EXPERIMENT_STEP } from "@/lib/examples/tour";
+import { experimentKeys } from "@/app/_experiments/api";
 import { cellNumber, cellText, numberOfValue, numericColumns, bettiColumns } from "@/app/_experiments/data/cells";
 import { parseFilter, rowPasses, whereParam } from "@/app/_experiments/data/filters";
 import { formatEta, formatRate, fileStem } from "@/app/_experiments/data/format";
@@ -204,5 +205,18 @@ describe("the tour's sweep step", () => {
     expect(analyze(EXPERIMENT_STEP.source).errors).toEqual([]);
     expect(EXPERIMENT_STEP.source).toContain("sweep(");
     expect(EXPERIMENT_STEP.why).toMatch(/Kestrel Lake/);
+  });
+});
+
+describe("a session's experiments from the console", () => {
+  const id = "00000000-0000-4000-8000-000000000007";
+  it("are read through the console's read-only link, signed in or not", () => {
+    expect(experimentKeys.ofSession(id, true, null)).toBe(`/api/experiments?session=${id}`);
+    expect(experimentKeys.ofSession(id, true, "t/k")).toBe(`/api/experiments?session=${id}&link=t%2Fk`);
+    expect(experimentKeys.ofSession(id, false, "t/k")).toBe(`/api/experiments?session=${id}&link=t%2Fk`);
+  });
+  it("are not asked for without a session, or signed out without a link", () => {
+    expect(experimentKeys.ofSession(null, true, "t")).toBeNull();
+    expect(experimentKeys.ofSession(id, false, null)).toBeNull();
   });
 });

@@ -135,6 +135,37 @@ describe("uploads", () => {
     expect(((await bad.json()) as { error: { message: string } }).error.message).toMatch(/item 2/);
   });
 
+  it("the preview reads every file exactly as the upload does (one reader, readFamilyFile)", async () => {
+    // Good and bad files of both formats, bad lines given out of order in the JSON case and
+    // a line whose problem the engine finds (x^2 + y is no ideal) beside a parse error.
+    const files: { format: "text" | "json"; content: string }[] = [
+      { format: "text", content: "# two good ideals\n<x^2, y>\n\n<x*y, z^2>\n" },
+      { format: "text", content: "<x^2, y>\nx^2 + y\n<x^2 +* y>\n<z>" },
+      { format: "json", content: '[["x^2", "y"], ["z^3"], ["x*y", "z"]]' },
+      { format: "json", content: '[[], ["x^2"], "y", ["z"]]' },
+    ];
+    for (const [k, f] of files.entries()) {
+      const p = await owner.json("/api/experiments/uploads/preview", { format: f.format, ring: RING, content: f.content });
+      expect(p.status).toBe(200);
+      const { preview } = (await p.json()) as {
+        preview: { count: number; problems: { line: number; message: string }[]; problemCount: number; unit: string };
+      };
+      expect(preview.unit).toBe(f.format === "json" ? "item" : "line");
+      const u = await owner.json("/api/experiments/uploads", { sessionId, name: `same${k}`, ...f, ring: RING });
+      if (preview.problemCount === 0) {
+        expect(u.status, f.content).toBe(201);
+        expect(((await u.json()) as { upload: { length: number } }).upload.length).toBe(preview.count);
+        expect(preview.count).toBeGreaterThan(0);
+      } else {
+        expect(u.status, f.content).toBe(422);
+        const details = ((await u.json()) as { error: { details: { line: number; message: string }[] } }).error.details;
+        // the same lines in the same (line) order, each with the same reason
+        expect(details.map((d) => d.line)).toEqual(preview.problems.map((q) => q.line));
+        expect(details.map((d) => d.message)).toEqual(preview.problems.map((q) => `${preview.unit} ${q.line}: ${q.message}`));
+      }
+    }
+  });
+
   it("a viewer cannot upload", async () => {
     const r = await guest.json("/api/experiments/uploads", { sessionId, name: "g", format: "text", ring: RING, content: "<x>" });
     expect(r.status).toBe(403);
@@ -263,5 +294,38 @@ describe("experiments over HTTP", () => {
     const list = ((await r.json()) as { experiments: { id: string }[] }).experiments;
     expect(list.length).toBeGreaterThanOrEqual(3);
     expect((await outsider.request(`/api/experiments?session=${sessionId}`)).status).toBe(404);
+  });
+
+  it("a read-only link lists its session's experiments, signed in or not, and creates none", async () => {
+    // the session's link was published by the test above
+    const [s] = await db().select().from(sessions).where(eq(sessions.id, sessionId));
+    const token = s.shareToken!;
+    const ids = async (client: TestClient, query: string) => {
+      const r = await client.request(`/api/experiments?${query}`);
+      expect(r.status, `${query}`).toBe(200);
+      return ((await r.json()) as { experiments: { id: string }[] }).experiments.map((e) => e.id);
+    };
+    const all = await ids(owner, `session=${sessionId}`);
+    expect(all.length).toBeGreaterThanOrEqual(3);
+    // the same list as the owner's, for a stranger to the session holding the link and for a
+    // signed-out visitor holding it (as GET /api/experiments/:id?link= already answered)
+    expect(await ids(outsider, `session=${sessionId}&link=${token}`)).toEqual(all);
+    expect(await ids(anonymous, `session=${sessionId}&link=${token}`)).toEqual(all);
+    // a wrong token opens nothing; a link names no list of "every session I can read"
+    expect((await outsider.request(`/api/experiments?session=${sessionId}&link=${token}x`)).status).toBe(404);
+    expect((await anonymous.request(`/api/experiments?session=${sessionId}&link=${token}x`)).status).toBe(404);
+    expect((await anonymous.request(`/api/experiments?link=${token}`)).status).toBe(401);
+    const outsiderAll = await ids(outsider, `link=${token}`);
+    expect(outsiderAll.filter((id) => all.includes(id))).toEqual([]);
+    // reading through the link is no licence to create (the create names its session in the
+    // body and takes no link: to the outsider the session stays invisible, 404)
+    const before = all.length;
+    const create = await outsider.json(`/api/experiments?session=${sessionId}&link=${token}`, {
+      sessionId,
+      source: "S := Q[a]\nsweep(monomial_ideals(S, degree = 1, max_gens = 1), I -> {c: I.codim})",
+    });
+    expect(create.status).toBe(404);
+    expect((await anonymous.json(`/api/experiments?link=${token}`, { sessionId, source: "S := Q[a]" })).status).toBe(401);
+    expect(await ids(owner, `session=${sessionId}`)).toHaveLength(before);
   });
 });

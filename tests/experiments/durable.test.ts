@@ -9,6 +9,7 @@ import { closeExperimentPool } from "@/lib/experiments/compute-adapter";
 import { stopBoss } from "@/lib/experiments/queue";
 import { act, createFromProgram, runAgain } from "@/lib/experiments/service";
 import { getExperiment, progressOf } from "@/lib/experiments/store";
+import { katsuraIdealText } from "../bench/families";
 import { testEnv } from "../helpers/env";
 import { uniqueEmail } from "../helpers/fixtures";
 import {
@@ -114,21 +115,7 @@ describe("a 200-member sweep shared by two workers and a server", () => {
     // katsura-10 over GF(32003) takes our engine over 20 s of CPU, far past the 4 s member
     // limit (katsura-9 now fits in it); Katsura's family: common practice. 1/0 is a division by zero.
     const N = 10;
-    const katsura =
-      "<" +
-      [
-        ["u0", ...Array.from({ length: N }, (_, i) => `2*u${i + 1}`)].join("+") + "-1",
-        ...Array.from({ length: N }, (_, m) => {
-          const terms: string[] = [];
-          for (let l = -N; l <= N; l++) {
-            const i = Math.abs(l);
-            const j = Math.abs(m - l);
-            if (j <= N) terms.push(`u${i}*u${j}`);
-          }
-          return `${terms.join("+")}-u${m}`;
-        }),
-      ].join(", ") +
-      ">";
+    const katsura = katsuraIdealText(N);
     const e = await createFromProgram({
       sessionId,
       userId,

@@ -1,7 +1,11 @@
 /// Which sweeps run inline and which become background experiments (lib/limits.ts
-/// `sweepRunsInline`, grammar/README.md "Families, sweeps and searches"), and what the
-/// evaluator does with each when the server offers experiments (Session.experiments).
+/// `sweepRunsInline`, grammar/README.md "Families, sweeps and searches"), what the
+/// evaluator does with each when the server offers experiments (Session.experiments), and the
+/// checker's honest type for either (`Table or Experiment`).
 import { describe, expect, it } from "vitest";
+import { analyze, EMPTY_ENV, formatOverload, lookupFunction } from "@/grammar";
+import { typeToString } from "@/grammar/types";
+import { hoverDoc } from "@/lib/editor/notation-hover";
 import { evaluate } from "@/lib/notation/evaluate";
 import { LIMIT_TABLE, limitValue, sweepRunsInline } from "@/lib/limits";
 import { encodeValue } from "@/lib/notation/json";
@@ -125,5 +129,66 @@ describe("the cell job in an engine slot (lib/compute/cell-job.ts)", () => {
     expect(events.filter((e) => e.event === "experiment")).toHaveLength(0);
     const results = events.filter((e) => e.event === "result");
     expect((results[results.length - 1].value as { type: string }).type).toBe("Table");
+  });
+});
+
+describe("the checker's type of a sweep: Table or Experiment, as it may run either way", () => {
+  const typeOf = (source: string) => {
+    const a = analyze(source);
+    const s = a.program.statements[a.program.statements.length - 1];
+    const e = s.kind === "Define" ? s.value : s.kind === "ExprStatement" ? s.expr : undefined;
+    return { errors: a.errors.map((x) => x.message), type: e && typeToString(a.types.get(e)!) };
+  };
+
+  it("says either unless background = false keeps it inline", () => {
+    expect(typeOf(family(30) + "sweep(F, R -> {len: R.length})")).toEqual({ errors: [], type: "Table or Experiment" });
+    expect(typeOf(family(2) + "sweep(F, R -> {len: R.length}, background = true)").type).toBe("Table or Experiment");
+    expect(typeOf(family(30) + "sweep(F, R -> {len: R.length}, background = false)")).toEqual({ errors: [], type: "Table" });
+  });
+
+  it("still lets the result be used as the Table it is when inline (the evaluator says when it is not)", () => {
+    const T = family(3) + "T := sweep(F, R -> {len: R.length})\n";
+    expect(typeOf(T + "T.rows")).toEqual({ errors: [], type: "List<Record>" });
+    expect(typeOf(T + "T.where(r -> r.len > 1)")).toEqual({ errors: [], type: "Table" });
+    // the predicate is still checked against the sweep's columns
+    expect(typeOf(T + "T.where(r -> r.lenght > 1)").errors[0]).toMatch(/no field lenght/);
+    // a name stored from a background sweep is an Experiment, which has no Table properties
+    const stored = analyze("T.rows", { bindings: { T: { kind: "Experiment" } }, currentRing: null });
+    expect(stored.errors.map((x) => x.message)).toEqual([expect.stringMatching(/Experiment has no property rows/)]);
+  });
+
+  it("the signature table, the hover and /reference say the same", () => {
+    const sweep = lookupFunction("sweep")!;
+    expect(formatOverload(sweep, sweep.overloads[0])).toMatch(/\) -> Table or Experiment$/);
+    expect(sweep.description).toMatch(/an Experiment that runs in the background/);
+    const doc = hoverDoc({ analyze, env: () => EMPTY_ENV }, "sweep(F, p)", 2)!;
+    expect(doc.signatures).toEqual([formatOverload(sweep, sweep.overloads[0])]);
+  });
+
+  it("a background sweep's Experiment used as a Table says why at run time, and how to get the Table", async () => {
+    const source = family(5) + "T := sweep(F, R -> {len: R.length})\nT.rows";
+    const out = await evaluate(source, [], {
+      experiments: {
+        inlineMax: 3,
+        start: (f): Value => ({
+          type: "Experiment",
+          id: "00000000-0000-4000-8000-000000000004",
+          status: "queued",
+          done: 0,
+          total: f.members.length,
+          failures: 0,
+        }),
+      },
+    });
+    expect(out.results.map((r) => r.value.type)).toEqual(["Ring", "Family", "Experiment"]);
+    expect(out.error?.kind).toBe("runtime");
+    expect(out.error?.text).toMatch(/this sweep runs in the background, so its value is an Experiment, which has no property rows/);
+    expect(out.error?.text).toMatch(/background = false/);
+    // the same program with the sweep kept inline gives the rows
+    const inline = await evaluate(source.replace("R.length})", "R.length}, background = false)"), [], {
+      experiments: { inlineMax: 3, start: () => ({ type: "None" }) as Value },
+    });
+    expect(inline.error).toBeNull();
+    expect(inline.results.at(-1)!.value.type).toBe("List");
   });
 });

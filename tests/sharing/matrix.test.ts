@@ -310,10 +310,12 @@ const MATRIX: Record<string, Row[]> = {
   ],
   // Experiments are shared exactly as their session (app/api/README.md, "Experiments").
   "experiments/route.ts": [
-    // A signed-in link holder is no reader of the listed session (the list takes no link): 404.
+    // The list of one session's experiments takes its read-only link, as each experiment's own
+    // routes do: a link holder, signed in or not, reads it (it was 404 / 401 while the list
+    // ignored ?link=, so a link holder's console could not list the experiments it may open).
     {
       method: "GET",
-      expect: [200, 200, 200, 404, 200, 200, 200, 404, 401, 401, 404],
+      expect: READ,
       make: async (w) => ({ path: `/api/experiments?session=${(await freshSession(w)).id}` }),
     },
     {

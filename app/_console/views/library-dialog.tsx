@@ -1,16 +1,13 @@
 "use client";
 /// The library: every named object I may reach across sessions — mine, those in sessions
 /// shared with me, those shared with me one by one — searchable by name, type and content;
-/// "Insert" copies one into the open session (the copy records where it came from). A name
-/// already used in the session asks for another.
+/// "Insert" copies one into the open session (ObjectCopyList, shared with "Shared with me").
 import { useState } from "react";
 import useSWR from "swr";
-import { ApiError, fetchJson, messageOf } from "@/app/_client/fetch";
-import { importObject } from "../api/sharing";
+import { fetchJson, messageOf } from "@/app/_client/fetch";
 import { typeWords } from "../render/type-words";
-import { buttonQuiet, buttonSecondary, textInput } from "./styles";
-
-const NAME = /^[A-Za-z][A-Za-z0-9_']*$/;
+import { ObjectCopyList } from "./object-copy-list";
+import { textInput } from "./styles";
 
 /// The types a user looks for most, in the filter (any other is found by typing its name).
 const TYPES = [
@@ -54,24 +51,6 @@ export function LibraryPanel({ targetSessionId, onInserted }: LibraryProps) {
   if (query.trim()) params.set("q", query.trim());
   if (type) params.set("type", type);
   const list = useSWR<{ objects: LibraryEntry[] }>(`/api/library${params.size ? `?${params}` : ""}`, fetchJson, { keepPreviousData: true });
-  const [renaming, setRenaming] = useState<{ id: string; name: string } | null>(null);
-  const [problem, setProblem] = useState<string | null>(null);
-
-  const insert = async (o: LibraryEntry, name?: string) => {
-    if (!targetSessionId) return;
-    if (name !== undefined && !NAME.test(name)) return setProblem("A name starts with a letter and has only letters, digits, _ and '.");
-    setProblem(null);
-    try {
-      const { object } = await importObject(o.id, targetSessionId, name);
-      setRenaming(null);
-      onInserted(`Inserted ${object.name}, a copy of ${o.name} from “${o.sessionTitle}”.`);
-    } catch (e) {
-      if (e instanceof ApiError && e.code === "name_taken") {
-        setRenaming({ id: o.id, name: `${o.name}_copy` });
-        setProblem(e.message);
-      } else setProblem(messageOf(e));
-    }
-  };
 
   // the objects of the open session itself are already on its shelf
   const objects = (list.data?.objects ?? []).filter((o) => o.sessionId !== targetSessionId);
@@ -103,64 +82,27 @@ export function LibraryPanel({ targetSessionId, onInserted }: LibraryProps) {
         </p>
       )}
       {!list.data && !list.error && <p className="text-sm text-ink/50 dark:text-paper/50">Loading…</p>}
-      {list.data && objects.length === 0 && (
-        <p className="text-sm text-ink/60 dark:text-paper/60">No object in your other sessions matches.</p>
-      )}
-      <ul
-        aria-label="Library"
-        className="min-h-0 divide-y divide-ink/10 overflow-y-auto rounded-md border border-ink/10 dark:divide-paper/10 dark:border-paper/10"
-      >
-        {objects.map((o) => (
-          <li key={o.id} className="flex flex-col gap-1 px-2 py-1.5 text-sm" data-library-object={o.name}>
-            <div className="flex flex-wrap items-center gap-2">
-              <span className="font-mono font-semibold">{o.name}</span>
-              <span className="rounded bg-ink/10 px-1.5 text-[0.7rem] dark:bg-paper/10">{typeWords(o.type)}</span>
-              <span className="min-w-0 flex-1 truncate text-xs text-ink/60 dark:text-paper/60">
-                in “{o.sessionTitle}”{o.mine ? "" : ` · by ${o.definedByName}`} · {o.via}
-              </span>
-              {targetSessionId && renaming?.id !== o.id && (
-                <button
-                  type="button"
-                  className={buttonQuiet}
-                  aria-label={`Insert ${o.name} from ${o.sessionTitle}`}
-                  onClick={() => void insert(o)}
-                >
-                  Insert
-                </button>
-              )}
-            </div>
-            <p className="truncate font-mono text-xs text-ink/60 dark:text-paper/60" title={o.source || o.summary}>
-              {o.source || o.summary}
-            </p>
-            {renaming?.id === o.id && (
-              <form
-                className="flex items-end gap-2"
-                onSubmit={(e) => {
-                  e.preventDefault();
-                  void insert(o, renaming.name);
-                }}
-              >
-                <label className="min-w-0 flex-1 text-xs">
-                  Name of the copy
-                  <input
-                    autoFocus
-                    className={textInput}
-                    value={renaming.name}
-                    onChange={(e) => setRenaming({ id: o.id, name: e.target.value })}
-                  />
-                </label>
-                <button type="submit" className={buttonSecondary}>
-                  Insert as this name
-                </button>
-              </form>
-            )}
-          </li>
-        ))}
-      </ul>
-      {problem && (
-        <p role="alert" className="text-sm text-red-700 dark:text-red-300">
-          {problem}
-        </p>
+      {list.data && (
+        <ObjectCopyList
+          rows={objects.map((o) => ({
+            id: o.id,
+            sessionTitle: o.sessionTitle,
+            name: o.name,
+            type: typeWords(o.type),
+            where: `in “${o.sessionTitle}”${o.mine ? "" : ` · by ${o.definedByName}`} · ${o.via}`,
+            detail: o.source || o.summary,
+          }))}
+          label="Library"
+          verb="Insert"
+          buttonName={(row) => `Insert ${row.name} from ${row.sessionTitle}`}
+          rowAttribute="data-library-object"
+          empty="No object in your other sessions matches."
+          targetSessionId={targetSessionId}
+          noticeFor={(row, copied) => `Inserted ${copied}, a copy of ${row.name} from “${row.sessionTitle}”.`}
+          onCopied={onInserted}
+          monoDetail
+          className="min-h-0 overflow-y-auto"
+        />
       )}
     </div>
   );

@@ -2,29 +2,33 @@ import { experimentRoute } from "@/lib/experiments/http";
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import { requireSessionAccess } from "@/lib/auth/access";
-import { requireUser } from "@/lib/auth/current-user";
+import { requireUser, requireUserOrLink } from "@/lib/auth/current-user";
 import { readJson } from "@/lib/http/body";
 import { HttpError } from "@/lib/http/errors";
 import { createFromProgram, createFromUpload } from "@/lib/experiments/service";
 import { getExperiment, listExperiments, progressOf } from "@/lib/experiments/store";
 import { experimentView } from "@/lib/experiments/views";
+import { linkToken } from "@/lib/sessions/link-token";
 import { listSessions } from "@/lib/sessions/store";
 import { CreateExperimentBody } from "@/lib/wire/experiments";
 
 const uuid = z.string().uuid();
 
-/// GET /api/experiments[?session=ID]: the experiments of one session, or of every session
-/// the caller can read; newest first.
+/// GET /api/experiments[?session=ID[&link=TOKEN]]: the experiments of one session, or of every
+/// session the caller can read; newest first. With a session, its read-only link reads the
+/// list as it reads each experiment (signed in or not); without one a link names nothing, so
+/// the list of every readable session needs a signed-in user.
 export const GET = experimentRoute(async (req) => {
-  const user = await requireUser();
   const session = new URL(req.url).searchParams.get("session");
+  const token = linkToken(req);
   let ids: string[];
   if (session !== null) {
+    const user = await requireUserOrLink(token);
     if (!uuid.safeParse(session).success) throw new HttpError(400, "invalid_query", "session must be a session id.");
-    await requireSessionAccess(user, session, "read");
+    await requireSessionAccess(user, session, "read", { linkToken: token });
     ids = [session];
   } else {
-    ids = (await listSessions(user)).map((s) => s.id);
+    ids = (await listSessions(await requireUser())).map((s) => s.id);
   }
   const rows = await listExperiments(ids);
   return NextResponse.json({

@@ -6,7 +6,7 @@ import { readJson } from "@/lib/http/body";
 import { route } from "@/lib/http/errors";
 import { LIMIT_TABLE } from "@/lib/limits";
 import { linkToken } from "@/lib/sessions/link-token";
-import { createFromCell } from "@/lib/experiments/service";
+import { cancelFromCell, createFromCell } from "@/lib/experiments/service";
 import { definedNames } from "@/grammar/defined-names";
 import { requireRedefinitionConsent } from "@/lib/sessions/redefine-guard";
 import { runCell } from "@/lib/sessions/run-cell";
@@ -45,6 +45,7 @@ export const POST = route(async (req, { params }: Context) => {
   await requireSessionAccess(user, id, "edit", { linkToken: linkToken(req) });
   const { source, redefine } = await readJson(req, NewCell, { maxBytes: MAX_SOURCE_BYTES + 1024 });
   await requireRedefinitionConsent(user, id, definedNames(source), redefine === true);
-  // A long sweep in the cell becomes a background experiment (lib/experiments/README.md).
-  return runCell(user, id, source, { createExperiment: createFromCell });
+  // A long sweep in the cell becomes a background experiment, which cancelling the cell
+  // cancels too (lib/experiments/README.md, "Sweeps in a cell").
+  return runCell(user, id, source, { createExperiment: createFromCell, cancelExperiments: cancelFromCell });
 });
