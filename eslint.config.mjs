@@ -34,9 +34,9 @@ export const LAYERS = [
   },
   { layer: "lib/cli/", files: ["lib/cli/**"], may: ["grammar", "lib/bundle", "lib/notation", "lib/wire"], packages: "any" },
   { layer: "db/", files: ["db/**"], may: [], packages: "any" },
-  { layer: "lib/http/", files: ["lib/http/**"], may: [], packages: "any" },
+  { layer: "lib/http/", files: ["lib/http/**"], may: ["lib/limits.ts"], packages: "any" },
   { layer: "lib/mail/", files: ["lib/mail/**"], may: [], packages: "any" },
-  { layer: "lib/auth/", files: ["lib/auth/**"], may: ["db", "lib/http"], packages: "any" },
+  { layer: "lib/auth/", files: ["lib/auth/**"], may: ["db", "lib/http", "lib/limits.ts"], packages: "any" },
   {
     layer: "lib/sessions/",
     files: ["lib/sessions/**"],
@@ -46,7 +46,7 @@ export const LAYERS = [
   {
     layer: "lib/sharing/, lib/export/",
     files: ["lib/sharing/**", "lib/export/**"],
-    may: ["db", "lib/auth", "lib/http", "lib/mail", "lib/sessions", "lib/wire"],
+    may: ["db", "lib/auth", "lib/http", "lib/limits.ts", "lib/mail", "lib/sessions", "lib/wire"],
     packages: "any",
   },
   {

@@ -3,9 +3,8 @@
 /// answer lists the first members and every bad line with its number and reason, so the
 /// browser can show them before anything is created.
 import { readUpload } from "./compute-adapter";
-import { ExperimentError } from "./errors";
 import type { UploadProblem } from "./experiment-job";
-import { jsonLines, MAX_UPLOAD_LINES } from "./uploads";
+import { jsonLines, MAX_UPLOAD_LINES, tooManyLines } from "./uploads";
 
 /// How many members the preview returns (the count is always the full one).
 export const PREVIEW_MEMBERS = 12;
@@ -29,10 +28,9 @@ export async function previewUpload(u: { format: "text" | "json"; ring: string; 
   let problems: UploadProblem[] = [];
   if (u.format === "json") ({ text, problems } = jsonLines(u.content));
   const lineCount = text.split("\n").length;
-  if (lineCount > MAX_UPLOAD_LINES)
-    throw new ExperimentError(413, "too_large", `The upload has ${lineCount} lines; at most ${MAX_UPLOAD_LINES}.`);
+  if (lineCount > MAX_UPLOAD_LINES) throw tooManyLines(lineCount);
   if (problems.length === 0) {
-    const read = await readUpload(u.ring, text, 60_000);
+    const read = await readUpload(u.ring, text);
     if (read.kind === "upload-error") problems = read.problems;
     else {
       return {

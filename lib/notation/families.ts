@@ -11,7 +11,7 @@ import type { CallContext } from "./context";
 import { EvalError, asEvalError, limit, runtime } from "./errors";
 import { idealValue } from "./ideals";
 import { ratOf } from "../algebra/index";
-import { sweepRunsInline } from "../limits";
+import { LIMIT_TABLE, sweepRunsInline } from "../limits";
 import { familyDefinition, ringText, valueText } from "./text";
 import {
   list,
@@ -24,8 +24,8 @@ import {
   type Value,
 } from "./values";
 
-/// Largest family `random_ideals` / `monomial_ideals` build.
-export const MAX_FAMILY_SIZE = 100_000;
+/// Largest family `random_ideals` / `monomial_ideals` build: the limit `familyMembers`.
+export const MAX_FAMILY_SIZE = LIMIT_TABLE.familyMembers.value;
 /// The columns every sweep table starts with (notation.md §11), then the probe's fields.
 export const FIXED_COLUMNS = ["index", "label", "status", "seconds"] as const;
 /// Appended (addition) when some row is not ok: what went wrong.

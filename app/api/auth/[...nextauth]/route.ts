@@ -1,12 +1,13 @@
 import NextAuth from "next-auth";
 import { NextRequest } from "next/server";
 import { recordAuditEvent } from "@/lib/auth/audit-log";
-import { hashQueueFull } from "@/lib/auth/hash-slots";
-import { authOptions, normalizeEmail } from "@/lib/auth/options";
+import { HASH_QUEUE_FULL_MESSAGE, HASH_RETRY_AFTER_SECONDS, hashQueueFull } from "@/lib/auth/hash-slots";
+import { authOptions, HASH_QUEUE_FULL_ERROR, normalizeEmail } from "@/lib/auth/options";
 import { checkSignInRate } from "@/lib/auth/rate-limit";
 import { readText } from "@/lib/http/body";
 import { clientAddress } from "@/lib/http/client-address";
-import { errorResponse, jsonError } from "@/lib/http/errors";
+import { errorResponse, jsonError, limitError } from "@/lib/http/errors";
+import { formatLimit, limitDetails } from "@/lib/limits";
 import { textProblem } from "@/lib/http/json-guard";
 
 type Context = { params: Promise<{ nextauth: string[] }> };
@@ -14,8 +15,6 @@ type Context = { params: Promise<{ nextauth: string[] }> };
 const handler = NextAuth(authOptions) as (req: Request, context: Context) => Promise<Response>;
 
 export const GET = handler;
-
-const MAX_CREDENTIALS_BYTES = 8 * 1024;
 
 /// The fields of a credentials body, read exactly as next-auth reads them
 /// (next-auth/next/utils getBody: JSON when the type mentions application/json, else
@@ -34,6 +33,38 @@ function credentialFields(contentType: string, text: string): Record<string, unk
   return null;
 }
 
+/// 503 with Retry-After and kind `limit` naming `hashQueue`: too many passwords are waiting
+/// to be checked (lib/auth/hash-slots.ts).
+/// Like the 429 below it carries `url`, which next-auth's client reads from every answer.
+function busy(req: Request): Response {
+  const refusal = limitError(503, "busy", "hashQueue", HASH_QUEUE_FULL_MESSAGE);
+  const url = new URL("/sign-in?error=busy", req.url).toString();
+  return Response.json(
+    { error: { code: refusal.code, message: refusal.message, details: refusal.details }, url },
+    { status: 503, headers: { "Retry-After": String(HASH_RETRY_AFTER_SECONDS) } },
+  );
+}
+
+/// Whether next-auth's answer is the failed sign-in it gives when authorize threw
+/// HASH_QUEUE_FULL_ERROR: its error URL (the Location, or `url` in a JSON answer) says so.
+async function refusedForHashQueue(answer: Response): Promise<boolean> {
+  if (answer.status < 300 || answer.status === 304) return false;
+  let target = answer.headers.get("location");
+  if (!target && (answer.headers.get("content-type") ?? "").includes("application/json")) {
+    const body = (await answer
+      .clone()
+      .json()
+      .catch(() => null)) as { url?: unknown } | null;
+    target = typeof body?.url === "string" ? body.url : null;
+  }
+  if (!target) return false;
+  try {
+    return new URL(target, "http://localhost").searchParams.get("error") === HASH_QUEUE_FULL_ERROR;
+  } catch {
+    return false;
+  }
+}
+
 /// Every sign-in attempt, whatever its encoding, passes the rate limiter first, so a
 /// blocked account or address gets a clear 429 before any password is checked; a body
 /// next-auth could not read is refused here with 400/415 rather than reaching it.
@@ -42,7 +73,7 @@ export async function POST(req: Request, context: Context): Promise<Response> {
   if (nextauth[0] !== "callback" || nextauth[1] !== "credentials") return handler(req, context);
   try {
     const contentType = req.headers.get("content-type") ?? "";
-    const text = await readText(req, MAX_CREDENTIALS_BYTES);
+    const text = await readText(req, { limit: "authBodyBytes" });
     const fields = credentialFields(contentType, text);
     if (fields === null) {
       return contentType.includes("json") || contentType.includes("form-urlencoded")
@@ -63,22 +94,23 @@ export async function POST(req: Request, context: Context): Promise<Response> {
       await recordAuditEvent({ event: "signin_rate_limited", email, address, details: { scope: decision.scope } });
       const minutes = Math.ceil(decision.retryAfterSeconds / 60);
       const who = decision.scope === "account" ? "this account" : "your address";
-      const message = `Too many failed sign-in attempts for ${who}. Try again in ${minutes} minutes.`;
+      const message =
+        `Too many failed sign-in attempts for ${who}. Try again in ${minutes} minutes ` +
+        `(limit ${decision.limit} = ${formatLimit(decision.limit)} within ${formatLimit("signInWindowMs")}).`;
       // next-auth's client reads `url` from the JSON answer; point it at the sign-in page.
       const url = new URL("/sign-in?error=rate_limited", req.url).toString();
       return Response.json(
-        { error: { code: "rate_limited", message }, url },
+        { error: { code: "rate_limited", message, details: limitDetails(decision.limit) }, url },
         { status: 429, headers: { "Retry-After": String(decision.retryAfterSeconds) } },
       );
     }
-    if (hashQueueFull()) {
-      return jsonError(503, "busy", "Too many sign-ins are being checked right now; try again in a few seconds.", undefined, {
-        "Retry-After": "5",
-      });
-    }
+    if (hashQueueFull()) return busy(req);
     // The body has been read: hand next-auth an identical request with the same bytes.
     const replay = new NextRequest(req.url, { method: "POST", headers: req.headers, body: text });
-    return handler(replay, context);
+    const answer = await handler(replay, context);
+    // The queue may have filled after the check above (many requests pass it at once):
+    // next-auth then reports the authorize error as a failed sign-in; it is a refusal.
+    return (await refusedForHashQueue(answer)) ? busy(req) : answer;
   } catch (error) {
     return errorResponse(error);
   }

@@ -36,7 +36,7 @@ const Rename = z.object({ title: z.string().trim().min(1, "give the session a ti
 export const PATCH = route(async (req, { params }: Context) => {
   const user = await requireUser();
   const { id } = await params;
-  const { title } = await readJson(req, Rename, { maxBytes: 4 * 1024 });
+  const { title } = await readJson(req, Rename, { limit: "shortBodyBytes" });
   const session = await renameSession(user, id, title, linkToken(req));
   return NextResponse.json({ session: { id: session.id, title: session.title } });
 });

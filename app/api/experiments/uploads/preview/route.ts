@@ -18,6 +18,6 @@ const Body = z
 /// message}], problemCount, unit}}` whether or not lines are bad (the problems are the answer).
 export const POST = experimentRoute(async (req) => {
   await requireUser();
-  const body = await readJson(req, Body, { maxBytes: 3 * 1024 * 1024 });
+  const body = await readJson(req, Body, { limit: "uploadBodyBytes" });
   return NextResponse.json({ preview: await previewUpload(body) });
 });
