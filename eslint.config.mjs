@@ -22,7 +22,7 @@ export const LAYERS = [
   { layer: "lib/algebra/", files: ["lib/algebra/**"], may: [], packages: [] },
   { layer: "lib/limits.ts", files: ["lib/limits.ts"], may: [], packages: [] },
   { layer: "grammar/", files: ["grammar/**"], may: [{ types: "lib/algebra" }, "lib/limits.ts"], packages: ["chevrotain"] },
-  { layer: "lib/wire/", files: ["lib/wire/**"], may: [{ types: "grammar" }, { types: "lib/algebra" }], packages: ["zod"] },
+  { layer: "lib/wire/", files: ["lib/wire/**"], may: [{ types: "grammar" }, { types: "lib/algebra" }, "lib/limits.ts"], packages: ["zod"] },
   { layer: "lib/notation/", files: ["lib/notation/**"], may: ["grammar", "lib/algebra", "lib/limits.ts", "lib/wire"], packages: ["zod"] },
   { layer: "lib/editor/, lib/examples/", files: ["lib/editor/**", "lib/examples/**"], may: ["grammar", "lib/wire"], packages: "browser" },
   { layer: "lib/bundle/", files: ["lib/bundle/**"], may: [], packages: "any" },

@@ -178,6 +178,9 @@ export const LIMIT_TABLE = {
   importObjects: { value: 2000, unit: "count", what: "named objects of one imported session" },
   // experiments: uploads and planning (lib/experiments)
   uploadLines: { value: 20_000, unit: "count", what: "lines (or JSON items) of an uploaded family" },
+  uploadChars: { value: 2 * 1024 * 1024, unit: "count", what: "characters of an uploaded family's file" },
+  experimentProgramChars: { value: 200_000, unit: "count", what: "characters of the program an experiment is created from" },
+  probeChars: { value: 20_000, unit: "count", what: "characters of the probe run over an uploaded family" },
   uploadReadMs: {
     value: 60 * 1000,
     unit: "ms",
