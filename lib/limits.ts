@@ -204,6 +204,7 @@ export const LIMIT_TABLE = {
   bracketNesting: { value: 200, unit: "levels", what: "brackets nested inside one statement" },
   expressionNesting: { value: 1000, unit: "levels", what: "expressions nested inside one statement (checked before evaluation)" },
   ringVariables: { value: 1000, unit: "count", what: "variables of one polynomial ring" },
+  ringWeight: { value: 1_000_000, unit: "count", what: "a variable's degree or weight written in a ring" },
   literalExponent: { value: 1_000_000, unit: "count", what: "a literal exponent written in the source" },
   familyMembers: { value: 100_000, unit: "count", what: "members a family built in the notation (random or monomial ideals) may have" },
   // evaluation: what one statement may ask of the engine
@@ -217,6 +218,7 @@ export const LIMIT_TABLE = {
   internalDegree: { value: 100_000, unit: "count", what: "degree = of a resolution (the highest internal degree computed)" },
   koszulEntries: { value: 2_000_000, unit: "count", what: "matrix entries of a Koszul complex's differentials together" },
   freeRank: { value: 10_000, unit: "count", what: "rank n of a free module R^n written directly" },
+  moduleDegree: { value: 1_000_000, unit: "count", what: "|d| for a generator degree d of a free module written directly" },
   keptMapEntries: {
     value: 200_000,
     unit: "count",
