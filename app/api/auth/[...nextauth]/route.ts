@@ -1,12 +1,13 @@
 import NextAuth from "next-auth";
 import { NextRequest } from "next/server";
 import { recordAuditEvent } from "@/lib/auth/audit-log";
-import { HASH_QUEUE_FULL_MESSAGE, HASH_RETRY_AFTER_SECONDS, hashQueueFull } from "@/lib/auth/hash-slots";
-import { authOptions, HASH_QUEUE_FULL_ERROR, normalizeEmail } from "@/lib/auth/options";
+import { hashQueueFull } from "@/lib/auth/hash-slots";
+import { busy, refusedForHashQueue } from "@/lib/auth/hash-refusal";
+import { authOptions, normalizeEmail } from "@/lib/auth/options";
 import { checkSignInRate } from "@/lib/auth/rate-limit";
 import { readText } from "@/lib/http/body";
 import { clientAddress } from "@/lib/http/client-address";
-import { errorResponse, jsonError, limitError } from "@/lib/http/errors";
+import { errorResponse, jsonError } from "@/lib/http/errors";
 import { formatLimit, limitDetails } from "@/lib/limits";
 import { textProblem } from "@/lib/http/json-guard";
 
@@ -31,38 +32,6 @@ function credentialFields(contentType: string, text: string): Record<string, unk
   }
   if (contentType.includes("application/x-www-form-urlencoded")) return Object.fromEntries(new URLSearchParams(text));
   return null;
-}
-
-/// 503 with Retry-After and kind `limit` naming `hashQueue`: too many passwords are waiting
-/// to be checked (lib/auth/hash-slots.ts).
-/// Like the 429 below it carries `url`, which next-auth's client reads from every answer.
-function busy(req: Request): Response {
-  const refusal = limitError(503, "busy", "hashQueue", HASH_QUEUE_FULL_MESSAGE);
-  const url = new URL("/sign-in?error=busy", req.url).toString();
-  return Response.json(
-    { error: { code: refusal.code, message: refusal.message, details: refusal.details }, url },
-    { status: 503, headers: { "Retry-After": String(HASH_RETRY_AFTER_SECONDS) } },
-  );
-}
-
-/// Whether next-auth's answer is the failed sign-in it gives when authorize threw
-/// HASH_QUEUE_FULL_ERROR: its error URL (the Location, or `url` in a JSON answer) says so.
-async function refusedForHashQueue(answer: Response): Promise<boolean> {
-  if (answer.status < 300 || answer.status === 304) return false;
-  let target = answer.headers.get("location");
-  if (!target && (answer.headers.get("content-type") ?? "").includes("application/json")) {
-    const body = (await answer
-      .clone()
-      .json()
-      .catch(() => null)) as { url?: unknown } | null;
-    target = typeof body?.url === "string" ? body.url : null;
-  }
-  if (!target) return false;
-  try {
-    return new URL(target, "http://localhost").searchParams.get("error") === HASH_QUEUE_FULL_ERROR;
-  } catch {
-    return false;
-  }
 }
 
 /// Every sign-in attempt, whatever its encoding, passes the rate limiter first, so a
