@@ -97,6 +97,14 @@ export const LIMIT_TABLE = {
     env: "RINGSIDE_SAVE_ATTEMPTS",
     what: "tries to store a finished cell before it is marked as not saved",
   },
+  // requests: fields people type (checked by the routes' schemas)
+  titleChars: { value: 200, unit: "count", what: "characters of a session's or an experiment's title" },
+  objectNameChars: { value: 64, unit: "count", what: "characters of a named object's name (also an uploaded family's)" },
+  displayNameChars: { value: 100, unit: "count", what: "characters of a person's name given at sign-up" },
+  teamNameChars: { value: 120, unit: "count", what: "characters of a team's name" },
+  descriptionChars: { value: 2000, unit: "count", what: "characters of a team's description" },
+  ringTextChars: { value: 2000, unit: "count", what: "characters of the ring an uploaded family is read in" },
+  pageRows: { value: 1000, unit: "count", what: "rows one request for an experiment's table may ask for" },
   // requests: bodies every route reads (lib/http/body.ts)
   requestBodyBytes: {
     value: 64 * 1024,
@@ -248,6 +256,12 @@ export function limitValues(env: Record<string, string | undefined> = environmen
 /// `{"kind": "limit", "limit": name, "value": …}`), so a client can tell which bound it met.
 export function limitDetails(name: LimitName, value = limitValue(name)): { kind: "limit"; limit: LimitName; value: number } {
   return { kind: "limit", limit: name, value };
+}
+
+/// For a schema's `.max(...atMost("titleChars"))`: the row's value and a message naming it.
+export function atMost(name: LimitName): [number, string] {
+  const value = LIMIT_TABLE[name].value;
+  return [value, `is longer than ${value} characters (limit ${name})`];
 }
 
 /// "350 MB", "8 s", "48 h", "1 MiB"… for messages.

@@ -5,7 +5,7 @@ import { z } from "zod";
 import { db } from "@/db/client";
 import { users } from "@/db/schema";
 import { HttpError, limitError } from "@/lib/http/errors";
-import { formatLimit } from "@/lib/limits";
+import { atMost, formatLimit } from "@/lib/limits";
 import { recordAudit } from "./audit";
 import { issueVerificationToken, VERIFICATION_LIFETIME_MS, verificationLink } from "./email-verification";
 import { HASH_QUEUE_FULL_MESSAGE, HASH_RETRY_AFTER_SECONDS, HashQueueFull } from "./hash-slots";
@@ -17,7 +17,11 @@ export const signUpBody = z.object({
     .string()
     .transform(normalizeEmail)
     .pipe(z.email({ message: "not a valid e-mail address" }).max(254)),
-  name: z.string().trim().min(1, { message: "is empty" }).max(100, { message: "is longer than 100 characters" }),
+  name: z
+    .string()
+    .trim()
+    .min(1, { message: "is empty" })
+    .max(...atMost("displayNameChars")),
   password: z.string(),
 });
 

@@ -2,7 +2,7 @@
 /// this folder documents it) and its zod schema, used by POST /api/sessions/import.
 import { z } from "zod";
 import { INT4_MAX } from "@/lib/http/json-guard";
-import { limitValue } from "@/lib/limits";
+import { atMost, limitValue } from "@/lib/limits";
 
 export const EXPORT_FORMAT = "ringside.session";
 export const EXPORT_VERSION = 1;
@@ -16,7 +16,7 @@ export const IMPORT_LIMITS = {
   sourceChars: limitValue("cellSourceBytes"),
 } as const;
 
-const atMost = (n: number, what: string, name: string) => `holds more than ${n} ${what} (limit ${name})`;
+const holdsAtMost = (n: number, what: string, name: string) => `holds more than ${n} ${what} (limit ${name})`;
 
 // Integers stored in PostgreSQL `integer` columns or compared with them stay within int4.
 const int4 = () =>
@@ -37,7 +37,7 @@ export const ExportedValue = z
 export const ExportedCell = z
   .object({
     position: int4(),
-    source: z.string().max(IMPORT_LIMITS.sourceChars, atMost(IMPORT_LIMITS.sourceChars, "characters", "cellSourceBytes")),
+    source: z.string().max(IMPORT_LIMITS.sourceChars, holdsAtMost(IMPORT_LIMITS.sourceChars, "characters", "cellSourceBytes")),
     status: z.enum(["done", "error", "cancelled", "interrupted"]),
     results: z.array(z.object({ statement: int4(), span: span.nullable(), value: ExportedValue }).strict()),
     error: z
@@ -54,10 +54,13 @@ const NAME = /^[A-Za-z][A-Za-z0-9_']*$/;
 
 export const ExportedObject = z
   .object({
-    name: z.string().regex(NAME, "a name starts with a letter and continues with letters, digits, _ or '").max(64),
+    name: z
+      .string()
+      .regex(NAME, "a name starts with a letter and continues with letters, digits, _ or '")
+      .max(...atMost("objectNameChars")),
     type: z.string().min(1).max(64),
     value: ExportedValue,
-    source: z.string().max(IMPORT_LIMITS.sourceChars, atMost(IMPORT_LIMITS.sourceChars, "characters", "cellSourceBytes")),
+    source: z.string().max(IMPORT_LIMITS.sourceChars, holdsAtMost(IMPORT_LIMITS.sourceChars, "characters", "cellSourceBytes")),
     /// position of the cell that bound it, or null
     cell: int4().nullable(),
     origin: z.record(z.string(), z.unknown()).nullable(),
@@ -69,9 +72,18 @@ export const SessionExport = z
     format: z.literal(EXPORT_FORMAT),
     version: z.literal(EXPORT_VERSION),
     exportedAt: z.string().datetime({ offset: true }),
-    session: z.object({ title: z.string().trim().min(1).max(200), ownerName: z.string().max(200) }).strict(),
-    cells: z.array(ExportedCell).max(IMPORT_LIMITS.cells, atMost(IMPORT_LIMITS.cells, "cells", "importCells")),
-    objects: z.array(ExportedObject).max(IMPORT_LIMITS.objects, atMost(IMPORT_LIMITS.objects, "objects", "importObjects")),
+    session: z
+      .object({
+        title: z
+          .string()
+          .trim()
+          .min(1)
+          .max(...atMost("titleChars")),
+        ownerName: z.string().max(200),
+      })
+      .strict(),
+    cells: z.array(ExportedCell).max(IMPORT_LIMITS.cells, holdsAtMost(IMPORT_LIMITS.cells, "cells", "importCells")),
+    objects: z.array(ExportedObject).max(IMPORT_LIMITS.objects, holdsAtMost(IMPORT_LIMITS.objects, "objects", "importObjects")),
   })
   .strict()
   .superRefine((doc, ctx) => {
@@ -96,6 +108,16 @@ export type SessionExport = z.infer<typeof SessionExport>;
 /// the new session another title.
 export const ImportBody = z.union([
   SessionExport,
-  z.object({ title: z.string().trim().min(1).max(200).optional(), export: SessionExport }).strict(),
+  z
+    .object({
+      title: z
+        .string()
+        .trim()
+        .min(1)
+        .max(...atMost("titleChars"))
+        .optional(),
+      export: SessionExport,
+    })
+    .strict(),
 ]);
 export type ImportBody = z.infer<typeof ImportBody>;

@@ -2,7 +2,7 @@
 /// experiment with its progress, a row, a list entry. Schemas first, types inferred from
 /// them; lib/experiments produces these shapes and the browser (issue 15) reads them.
 import { z } from "zod";
-import { LIMIT_TABLE } from "../limits";
+import { atMost, LIMIT_TABLE } from "../limits";
 import { ValueJson } from "./values";
 
 /// A text field bounded by a row of lib/limits.ts (counted in characters), whose refusal names it.
@@ -30,7 +30,12 @@ export const CreateFromProgramBody = z
     source: boundedText("experimentProgramChars").optional(),
     /// or a cell of the session, whose text is used
     cellId: uuid.optional(),
-    title: z.string().trim().min(1).max(200).optional(),
+    title: z
+      .string()
+      .trim()
+      .min(1)
+      .max(...atMost("titleChars"))
+      .optional(),
   })
   .strict();
 /// … or from an uploaded family and a probe over it.
@@ -42,7 +47,12 @@ export const CreateFromUploadBody = z
     probe: boundedText("probeChars").trim().min(1),
     /// the name the probe uses for the upload's ring (default S)
     ringName: identifier.optional(),
-    title: z.string().trim().min(1).max(200).optional(),
+    title: z
+      .string()
+      .trim()
+      .min(1)
+      .max(...atMost("titleChars"))
+      .optional(),
   })
   .strict();
 export const CreateExperimentBody = z.union([CreateFromProgramBody, CreateFromUploadBody]);
@@ -53,10 +63,16 @@ export const UploadBody = z
   .object({
     sessionId: uuid,
     /// the named object the family becomes
-    name: z.string().min(1).max(100),
+    name: z
+      .string()
+      .min(1)
+      .max(...atMost("objectNameChars")),
     format: z.enum(["text", "json"]),
     /// the ring the ideals are read in, in the notation: "GF(32003)[x, y, z]"
-    ring: z.string().min(1).max(2000),
+    ring: z
+      .string()
+      .min(1)
+      .max(...atMost("ringTextChars")),
     content: boundedText("uploadChars"),
   })
   .strict();

@@ -10,7 +10,9 @@ import { MAX_JSON_DEPTH } from "@/lib/http/json-guard";
 import { HASH_SLOTS, MAX_WAITING } from "@/lib/auth/hash-slots";
 import { ACCOUNT_FAILURES, ADDRESS_FAILURES, RATE_WINDOW_SECONDS } from "@/lib/auth/rate-limit";
 import { VERIFICATION_LIFETIME_MS } from "@/lib/auth/email-verification";
-import { SIGN_UP_ACCEPTED } from "@/lib/auth/signup";
+import { SIGN_UP_ACCEPTED, signUpBody } from "@/lib/auth/signup";
+import { NewTeam } from "@/lib/sharing/bodies";
+import { UploadBody } from "@/lib/wire/experiments";
 import { IMPORT_LIMITS } from "@/lib/export/format";
 import { MAX_UPLOAD_LINES } from "@/lib/experiments/uploads";
 import { formatLimit, LIMIT_TABLE, limitValue } from "@/lib/limits";
@@ -86,5 +88,25 @@ describe("readJson refuses with kind limit, naming the row", () => {
     expect(deep.status).toBe(400);
     expect(deep.code).toBe("too_deep");
     expect(deep.details).toEqual({ kind: "limit", limit: "jsonNesting", value: depth });
+  });
+});
+
+describe("typed fields are bounded by rows of the table, named in the message", () => {
+  const failure = (r: { success: boolean; error?: { issues: { message: string }[] } }) => r.error?.issues.map((i) => i.message).join("; ");
+
+  it("a team name, a person's name and an upload's name and file", () => {
+    const team = LIMIT_TABLE.teamNameChars.value;
+    expect(NewTeam.safeParse({ name: "t".repeat(team) }).success).toBe(true);
+    expect(failure(NewTeam.safeParse({ name: "t".repeat(team + 1) }))).toContain("limit teamNameChars");
+    const person = LIMIT_TABLE.displayNameChars.value;
+    const signUp = { email: "bound@example.test", password: "irrelevant-here-9" };
+    expect(signUpBody.safeParse({ ...signUp, name: "n".repeat(person) }).success).toBe(true);
+    expect(failure(signUpBody.safeParse({ ...signUp, name: "n".repeat(person + 1) }))).toContain("limit displayNameChars");
+    const upload = { sessionId: "00000000-0000-4000-8000-000000000000", format: "text", ring: "Q[x]", content: "<x>" };
+    const name = LIMIT_TABLE.objectNameChars.value;
+    expect(UploadBody.safeParse({ ...upload, name: "u".repeat(name) }).success).toBe(true);
+    expect(failure(UploadBody.safeParse({ ...upload, name: "u".repeat(name + 1) }))).toContain("limit objectNameChars");
+    const big = "x".repeat(LIMIT_TABLE.uploadChars.value + 1);
+    expect(failure(UploadBody.safeParse({ ...upload, name: "F", content: big }))).toContain("limit uploadChars");
   });
 });

@@ -4,12 +4,16 @@ import { requireUser } from "@/lib/auth/current-user";
 import { readJson } from "@/lib/http/body";
 import { experimentRoute } from "@/lib/experiments/http";
 import { previewUpload } from "@/lib/experiments/upload-preview";
+import { atMost } from "@/lib/limits";
 import { boundedText } from "@/lib/wire/experiments";
 
 const Body = z
   .object({
     format: z.enum(["text", "json"]),
-    ring: z.string().min(1).max(2000),
+    ring: z
+      .string()
+      .min(1)
+      .max(...atMost("ringTextChars")),
     content: boundedText("uploadChars"),
   })
   .strict();
