@@ -24,6 +24,12 @@ export class HashQueueFull extends Error {
   }
 }
 
+/// Whether `error` is a HashQueueFull — also one thrown by another bundle's copy of this
+/// module (Next may bundle routes apart; the queue itself is shared through globalThis).
+export function isHashQueueFull(error: unknown): error is HashQueueFull {
+  return error instanceof Error && error.name === "HashQueueFull";
+}
+
 // One queue per process, even when the bundler gives several routes their own copy of
 // this module.
 const KEY = Symbol.for("ringside.hashSlots");

@@ -8,7 +8,7 @@ import { clientAddress } from "@/lib/http/client-address";
 import { limitValue } from "@/lib/limits";
 import { recordAudit } from "./audit";
 import { decoyHash, verifyPassword } from "./password";
-import { HashQueueFull } from "./hash-slots";
+import { isHashQueueFull } from "./hash-slots";
 import { recordSignInAttempt } from "./rate-limit";
 
 /// How long a sign-in lasts: the limit `signInSessionMs` of lib/limits.ts.
@@ -39,7 +39,7 @@ export const authOptions: NextAuthOptions = {
           // The queue filled between the route's check and this point (a flood): nothing was
           // checked, so no attempt is recorded; the route answers 503 (next-auth puts the
           // message in its error URL).
-          if (error instanceof HashQueueFull) throw new Error(HASH_QUEUE_FULL_ERROR);
+          if (isHashQueueFull(error)) throw new Error(HASH_QUEUE_FULL_ERROR);
           throw error;
         }
         const succeeded = ok && user !== undefined;

@@ -8,7 +8,7 @@ import { HttpError, limitError } from "@/lib/http/errors";
 import { atMost, formatLimit } from "@/lib/limits";
 import { recordAudit } from "./audit";
 import { issueVerificationToken, VERIFICATION_LIFETIME_MS, verificationLink } from "./email-verification";
-import { HASH_QUEUE_FULL_MESSAGE, HASH_RETRY_AFTER_SECONDS, HashQueueFull } from "./hash-slots";
+import { HASH_QUEUE_FULL_MESSAGE, HASH_RETRY_AFTER_SECONDS, isHashQueueFull } from "./hash-slots";
 import { normalizeEmail } from "./options";
 import { hashPassword, passwordProblem, PASSWORD_RULE } from "./password";
 
@@ -55,7 +55,7 @@ export async function signUp(input: SignUpInput, address: string, base: string):
     // Hashed in both cases, so the answer takes as long whether or not the address is taken.
     passwordHash = await hashPassword(input.password);
   } catch (error) {
-    if (error instanceof HashQueueFull)
+    if (isHashQueueFull(error))
       throw limitError(503, "busy", "hashQueue", HASH_QUEUE_FULL_MESSAGE, { "Retry-After": String(HASH_RETRY_AFTER_SECONDS) });
     throw error;
   }

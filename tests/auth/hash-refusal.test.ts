@@ -7,7 +7,7 @@
 /// are built exactly so. tests/integration/hash-flood.test.ts shows the same over HTTP.
 import { describe, expect, it } from "vitest";
 import { busy, refusedForHashQueue } from "@/lib/auth/hash-refusal";
-import { MAX_WAITING } from "@/lib/auth/hash-slots";
+import { HashQueueFull, isHashQueueFull, MAX_WAITING } from "@/lib/auth/hash-slots";
 import { HASH_QUEUE_FULL_ERROR } from "@/lib/auth/options";
 
 const BASE = "http://127.0.0.1:3000/api/auth";
@@ -40,5 +40,15 @@ describe("the hash-queue refusal", () => {
     const answer = json("CredentialsSignin");
     await refusedForHashQueue(answer);
     expect(((await answer.json()) as { url: string }).url).toBe(errorUrl("CredentialsSignin"));
+  });
+});
+
+describe("isHashQueueFull", () => {
+  it("knows the refusal also when another bundle's copy of the module threw it", () => {
+    expect(isHashQueueFull(new HashQueueFull())).toBe(true);
+    const copy = Object.assign(new Error("Too many sign-ins are being checked right now"), { name: "HashQueueFull" });
+    expect(isHashQueueFull(copy)).toBe(true);
+    expect(isHashQueueFull(new Error("HashQueueFull"))).toBe(false);
+    expect(isHashQueueFull("HashQueueFull")).toBe(false);
   });
 });
