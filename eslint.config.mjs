@@ -22,7 +22,7 @@ export const LAYERS = [
   { layer: "lib/algebra/", files: ["lib/algebra/**"], may: [], packages: [] },
   { layer: "lib/limits.ts", files: ["lib/limits.ts"], may: [], packages: [] },
   { layer: "grammar/", files: ["grammar/**"], may: [{ types: "lib/algebra" }, "lib/limits.ts"], packages: ["chevrotain"] },
-  { layer: "lib/wire/", files: ["lib/wire/**"], may: [{ types: "grammar" }, { types: "lib/algebra" }], packages: ["zod"] },
+  { layer: "lib/wire/", files: ["lib/wire/**"], may: [{ types: "grammar" }, { types: "lib/algebra" }, "lib/limits.ts"], packages: ["zod"] },
   { layer: "lib/notation/", files: ["lib/notation/**"], may: ["grammar", "lib/algebra", "lib/limits.ts", "lib/wire"], packages: ["zod"] },
   { layer: "lib/editor/, lib/examples/", files: ["lib/editor/**", "lib/examples/**"], may: ["grammar", "lib/wire"], packages: "browser" },
   { layer: "lib/bundle/", files: ["lib/bundle/**"], may: [], packages: "any" },
@@ -34,9 +34,9 @@ export const LAYERS = [
   },
   { layer: "lib/cli/", files: ["lib/cli/**"], may: ["grammar", "lib/bundle", "lib/notation", "lib/wire"], packages: "any" },
   { layer: "db/", files: ["db/**"], may: [], packages: "any" },
-  { layer: "lib/http/", files: ["lib/http/**"], may: [], packages: "any" },
+  { layer: "lib/http/", files: ["lib/http/**"], may: ["lib/limits.ts"], packages: "any" },
   { layer: "lib/mail/", files: ["lib/mail/**"], may: [], packages: "any" },
-  { layer: "lib/auth/", files: ["lib/auth/**"], may: ["db", "lib/http"], packages: "any" },
+  { layer: "lib/auth/", files: ["lib/auth/**"], may: ["db", "lib/http", "lib/limits.ts"], packages: "any" },
   {
     layer: "lib/sessions/",
     files: ["lib/sessions/**"],
@@ -46,7 +46,7 @@ export const LAYERS = [
   {
     layer: "lib/sharing/, lib/export/",
     files: ["lib/sharing/**", "lib/export/**"],
-    may: ["db", "lib/auth", "lib/http", "lib/mail", "lib/sessions", "lib/wire"],
+    may: ["db", "lib/auth", "lib/http", "lib/limits.ts", "lib/mail", "lib/sessions", "lib/wire"],
     packages: "any",
   },
   {

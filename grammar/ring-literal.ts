@@ -39,12 +39,17 @@ function expandRange(from: string, to: string): string[] | string {
   return `a range of variables is a name ending in a number up to the same name with a larger number (x1..x6) or a letter up to a later letter (a..e); got ${from}..${to}`;
 }
 
+const MAX_WEIGHT = LIMIT_TABLE.ringWeight.value;
+
 function positiveIntList(e: Expr, what: string, problems: RingLiteralProblem[]): number[] | null {
   const items = e.kind === "Tuple" || e.kind === "ListLit" ? e.items : [e];
   const out: number[] = [];
   for (const it of items) {
-    if (it.kind !== "IntLit" || it.value < 1n || it.value > 1_000_000n) {
-      problems.push({ message: `${what} must be positive integers (at most 10^6), written out, as in (1, 2, 3)`, span: it.span });
+    if (it.kind !== "IntLit" || it.value < 1n || it.value > BigInt(MAX_WEIGHT)) {
+      problems.push({
+        message: `${what} must be positive integers (at most ${MAX_WEIGHT}, limit ringWeight), written out, as in (1, 2, 3)`,
+        span: it.span,
+      });
       return null;
     }
     out.push(Number(it.value));

@@ -6,9 +6,11 @@ import { createHash, randomBytes } from "node:crypto";
 import { and, eq, gt, isNull, lt } from "drizzle-orm";
 import { db } from "@/db/client";
 import { emailVerifications, shares, users } from "@/db/schema";
+import { limitValue } from "@/lib/limits";
 import type { Executor } from "./audit";
 
-export const VERIFICATION_LIFETIME_MS = 48 * 3600_000;
+/// How long a confirmation link works: the limit `emailVerificationMs` of lib/limits.ts.
+export const VERIFICATION_LIFETIME_MS = limitValue("emailVerificationMs");
 const TOKEN_SHAPE = /^[A-Za-z0-9_-]{43}$/;
 
 function digest(token: string): string {

@@ -1,23 +1,33 @@
 /// Bounded concurrency for bcrypt. bcryptjs runs on the server's own event loop, so a flood
 /// of sign-ins with wrong passwords would otherwise keep every core hashing and starve every
-/// other request. At most HASH_SLOTS hashes run at once; up to MAX_WAITING more wait their
-/// turn in arrival order, and beyond that callers are told to come back later (the sign-in
-/// and sign-up routes answer 503 with Retry-After instead of queueing without bound).
+/// other request. At most `hashConcurrency` hashes run at once; up to `hashQueue` more wait
+/// their turn in arrival order, and beyond that callers are told to come back later (the
+/// sign-in and sign-up routes answer 503 with Retry-After and kind `limit` instead of
+/// queueing without bound). Both are rows of lib/limits.ts.
+import { limitValue } from "../limits";
 
-export const HASH_SLOTS = positive(process.env.RINGSIDE_HASH_CONCURRENCY, 2);
-export const MAX_WAITING = positive(process.env.RINGSIDE_HASH_QUEUE, 32);
+export const HASH_SLOTS = Math.max(1, Math.floor(limitValue("hashConcurrency")));
+export const MAX_WAITING = Math.max(1, Math.floor(limitValue("hashQueue")));
 
-function positive(raw: string | undefined, fallback: number): number {
-  const n = Number(raw);
-  return Number.isInteger(n) && n > 0 ? n : fallback;
-}
+/// Seconds a refused caller is told to wait (Retry-After): a queue of `hashQueue` drains in
+/// well under this at bcrypt's usual cost.
+export const HASH_RETRY_AFTER_SECONDS = 5;
+
+/// What a refused sign-in or sign-up reads (the refusal names the limit `hashQueue`).
+export const HASH_QUEUE_FULL_MESSAGE = "Too many sign-ins are being checked right now; try again in a few seconds";
 
 /// Thrown by withHashSlot when MAX_WAITING callers are already waiting.
 export class HashQueueFull extends Error {
   constructor() {
-    super("Too many sign-ins are being checked right now; try again in a few seconds.");
+    super(HASH_QUEUE_FULL_MESSAGE);
     this.name = "HashQueueFull";
   }
+}
+
+/// Whether `error` is a HashQueueFull — also one thrown by another bundle's copy of this
+/// module (Next may bundle routes apart; the queue itself is shared through globalThis).
+export function isHashQueueFull(error: unknown): error is HashQueueFull {
+  return error instanceof Error && error.name === "HashQueueFull";
 }
 
 // One queue per process, even when the bundler gives several routes their own copy of

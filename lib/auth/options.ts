@@ -5,11 +5,18 @@ import { and, eq, sql } from "drizzle-orm";
 import { db } from "@/db/client";
 import { users } from "@/db/schema";
 import { clientAddress } from "@/lib/http/client-address";
+import { limitValue } from "@/lib/limits";
 import { recordAudit } from "./audit";
 import { decoyHash, verifyPassword } from "./password";
+import { isHashQueueFull } from "./hash-slots";
 import { recordSignInAttempt } from "./rate-limit";
 
-export const SESSION_MAX_AGE_SECONDS = 7 * 24 * 60 * 60;
+/// How long a sign-in lasts: the limit `signInSessionMs` of lib/limits.ts.
+export const SESSION_MAX_AGE_SECONDS = Math.ceil(limitValue("signInSessionMs") / 1000);
+
+/// The error next-auth reports (in its error URL) when the password could not be checked
+/// because the hash queue was full; the credentials route turns it into a 503.
+export const HASH_QUEUE_FULL_ERROR = "hash_queue_full";
 
 export const authOptions: NextAuthOptions = {
   session: { strategy: "jwt", maxAge: SESSION_MAX_AGE_SECONDS },
@@ -25,7 +32,16 @@ export const authOptions: NextAuthOptions = {
         const password = typeof credentials?.password === "string" ? credentials.password : "";
         const address = clientAddress(req.headers ?? {});
         const [user] = email ? await db().select().from(users).where(eq(users.email, email)) : [];
-        const ok = await verifyPassword(password, user?.passwordHash ?? (await decoyHash()));
+        let ok: boolean;
+        try {
+          ok = await verifyPassword(password, user?.passwordHash ?? (await decoyHash()));
+        } catch (error) {
+          // The queue filled between the route's check and this point (a flood): nothing was
+          // checked, so no attempt is recorded; the route answers 503 (next-auth puts the
+          // message in its error URL).
+          if (isHashQueueFull(error)) throw new Error(HASH_QUEUE_FULL_ERROR);
+          throw error;
+        }
         const succeeded = ok && user !== undefined;
         await recordSignInAttempt(email, address, succeeded);
         await recordAudit(db(), {

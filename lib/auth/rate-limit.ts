@@ -1,17 +1,29 @@
 /// Sign-in rate limiting, counted in PostgreSQL so every web server shares the counts.
 /// An account is blocked after ACCOUNT_FAILURES failed attempts since its last success
-/// within the window; an address after ADDRESS_FAILURES failures within the window.
+/// within the window; an address after ADDRESS_FAILURES failures within the window. The
+/// three figures are rows of lib/limits.ts (`signInWindowMs`, `signInAccountFailures`,
+/// `signInAddressFailures`).
 import { and, count, eq, gt, lt, sql } from "drizzle-orm";
 import { db } from "@/db/client";
 import { signInAttempts } from "@/db/schema";
+import { limitValue, type LimitName } from "@/lib/limits";
 
-export const RATE_WINDOW_MINUTES = 15;
-export const ACCOUNT_FAILURES = 5;
-export const ADDRESS_FAILURES = 20;
+/// Whole seconds, at least one (PostgreSQL's interval and Retry-After both take seconds).
+export const RATE_WINDOW_SECONDS = Math.max(1, Math.ceil(limitValue("signInWindowMs") / 1000));
+export const ACCOUNT_FAILURES = Math.max(1, Math.floor(limitValue("signInAccountFailures")));
+export const ADDRESS_FAILURES = Math.max(1, Math.floor(limitValue("signInAddressFailures")));
 
-export type RateDecision = { limited: false } | { limited: true; scope: "account" | "address"; retryAfterSeconds: number };
+export type RateDecision =
+  | { limited: false }
+  | {
+      limited: true;
+      scope: "account" | "address";
+      /// the row of lib/limits.ts that refused
+      limit: Extract<LimitName, "signInAccountFailures" | "signInAddressFailures">;
+      retryAfterSeconds: number;
+    };
 
-const windowStart = sql`now() - make_interval(mins => ${RATE_WINDOW_MINUTES})`;
+const windowStart = sql`now() - make_interval(secs => ${RATE_WINDOW_SECONDS})`;
 
 export async function checkSignInRate(email: string, address: string): Promise<RateDecision> {
   const database = db();
@@ -24,13 +36,14 @@ export async function checkSignInRate(email: string, address: string): Promise<R
     .select({ n: count() })
     .from(signInAttempts)
     .where(and(eq(signInAttempts.email, email), eq(signInAttempts.succeeded, false), gt(signInAttempts.at, since)));
-  const retryAfterSeconds = RATE_WINDOW_MINUTES * 60;
-  if ((account?.n ?? 0) >= ACCOUNT_FAILURES) return { limited: true, scope: "account", retryAfterSeconds };
+  const retryAfterSeconds = RATE_WINDOW_SECONDS;
+  if ((account?.n ?? 0) >= ACCOUNT_FAILURES) return { limited: true, scope: "account", limit: "signInAccountFailures", retryAfterSeconds };
   const [byAddress] = await database
     .select({ n: count() })
     .from(signInAttempts)
     .where(and(eq(signInAttempts.address, address), eq(signInAttempts.succeeded, false), gt(signInAttempts.at, windowStart)));
-  if ((byAddress?.n ?? 0) >= ADDRESS_FAILURES) return { limited: true, scope: "address", retryAfterSeconds };
+  if ((byAddress?.n ?? 0) >= ADDRESS_FAILURES)
+    return { limited: true, scope: "address", limit: "signInAddressFailures", retryAfterSeconds };
   return { limited: false };
 }
 

@@ -4,10 +4,11 @@
 import { z } from "zod";
 import { db } from "@/db/client";
 import { users } from "@/db/schema";
-import { HttpError } from "@/lib/http/errors";
+import { HttpError, limitError } from "@/lib/http/errors";
+import { atMost, formatLimit } from "@/lib/limits";
 import { recordAudit } from "./audit";
-import { issueVerificationToken, verificationLink } from "./email-verification";
-import { HashQueueFull } from "./hash-slots";
+import { issueVerificationToken, VERIFICATION_LIFETIME_MS, verificationLink } from "./email-verification";
+import { HASH_QUEUE_FULL_MESSAGE, HASH_RETRY_AFTER_SECONDS, isHashQueueFull } from "./hash-slots";
 import { normalizeEmail } from "./options";
 import { hashPassword, passwordProblem, PASSWORD_RULE } from "./password";
 
@@ -16,14 +17,25 @@ export const signUpBody = z.object({
     .string()
     .transform(normalizeEmail)
     .pipe(z.email({ message: "not a valid e-mail address" }).max(254)),
-  name: z.string().trim().min(1, { message: "is empty" }).max(100, { message: "is longer than 100 characters" }),
+  name: z
+    .string()
+    .trim()
+    .min(1, { message: "is empty" })
+    .max(...atMost("displayNameChars")),
   password: z.string(),
 });
 
 export type SignUpInput = z.infer<typeof signUpBody>;
 
-/// What every sign-up with a valid body and an acceptable password answers.
-export const SIGN_UP_ACCEPTED = "Check your mailbox: we sent a link that confirms this address.";
+/// How long the mailed link works, for people: "48 h" (the limit `emailVerificationMs`).
+export const VERIFICATION_LIFETIME_TEXT = formatLimit("emailVerificationMs", VERIFICATION_LIFETIME_MS);
+
+/// What every sign-up with a valid body and an acceptable password answers, and what the
+/// sign-up page shows after it: the account is not confirmed until the mailed link is followed.
+export const SIGN_UP_ACCEPTED =
+  `Check your mail: we sent a link to this address that confirms it, and it works for ${VERIFICATION_LIFETIME_TEXT}. ` +
+  "Until you follow it you can work in your own sessions, but you cannot accept team invitations " +
+  "and sessions shared with this address wait for you.";
 
 export interface OutgoingMail {
   to: string;
@@ -43,7 +55,8 @@ export async function signUp(input: SignUpInput, address: string, base: string):
     // Hashed in both cases, so the answer takes as long whether or not the address is taken.
     passwordHash = await hashPassword(input.password);
   } catch (error) {
-    if (error instanceof HashQueueFull) throw new HttpError(503, "busy", error.message, undefined, { "Retry-After": "5" });
+    if (isHashQueueFull(error))
+      throw limitError(503, "busy", "hashQueue", HASH_QUEUE_FULL_MESSAGE, { "Retry-After": String(HASH_RETRY_AFTER_SECONDS) });
     throw error;
   }
   const created = await db().transaction(async (tx) => {
@@ -70,7 +83,7 @@ function welcomeMail(to: string, name: string, link: string): OutgoingMail {
       `Hello ${name},\n\n` +
       "your Ringside account is ready. Sign in with this e-mail address and the password you chose.\n\n" +
       `Before teams can invite you or colleagues can share with you, confirm that this address is yours:\n${link}\n\n` +
-      "The link works for 48 hours. If you did not create this account, ignore this message.\n\n" +
+      `The link works for ${VERIFICATION_LIFETIME_TEXT}. If you did not create this account, ignore this message.\n\n` +
       "Ringside\n",
   };
 }

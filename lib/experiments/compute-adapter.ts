@@ -6,6 +6,7 @@
 import os from "node:os";
 import path from "node:path";
 import { engineSettings, SlotPool, type JobEnd } from "@/lib/compute";
+import { formatLimit, limitValue, type LimitName } from "@/lib/limits";
 import type { Binding } from "@/lib/notation/evaluate";
 import type { ExperimentJob, MemberOutcome, PlanOutcome, UploadOutcome } from "./experiment-job";
 
@@ -14,15 +15,20 @@ export interface MemberLimits {
   heapLimitMb: number;
 }
 
-function numberFromEnv(name: string): number | undefined {
-  const v = Number(process.env[name]);
-  return Number.isFinite(v) && v > 0 ? v : undefined;
-}
+const MEMBER_TIME_ENV = "RINGSIDE_MEMBER_TIME_LIMIT_MS";
 
-/// A member gets the cells' limits unless RINGSIDE_MEMBER_TIME_LIMIT_MS says otherwise.
+/// A member gets the cells' limits unless its own time limit (`memberTimeMs`,
+/// RINGSIDE_MEMBER_TIME_LIMIT_MS) is set.
 export function memberLimits(): MemberLimits {
   const cell = engineSettings();
-  return { timeLimitMs: numberFromEnv("RINGSIDE_MEMBER_TIME_LIMIT_MS") ?? cell.timeLimitMs, heapLimitMb: cell.heapLimitMb };
+  const own = process.env[MEMBER_TIME_ENV] ? limitValue("memberTimeMs") : undefined;
+  return { timeLimitMs: own ?? cell.timeLimitMs, heapLimitMb: cell.heapLimitMb };
+}
+
+/// The message of a job stopped by a limit, naming the row of lib/limits.ts that bounded
+/// its time (the slot pool only knows the cells' names).
+function limitMessage(end: Extract<JobEnd, { status: "limit" }>, timeLimit: LimitName, timeLimitMs: number): string {
+  return end.limit === "time" ? `time limit of ${formatLimit(timeLimit, timeLimitMs)} reached (${timeLimit})` : end.message;
 }
 
 type Role = "members" | "requests";
@@ -92,20 +98,30 @@ export async function planSweep(
   source: string,
   bindings: Binding[],
   currentRing: string | null,
-  timeLimitMs: number,
+  timeLimitMs = limitValue("planTimeMs"),
 ): Promise<PlanOutcome> {
   const job: ExperimentJob = { kind: "plan", source, bindings, currentRing };
   const end = await experimentPool("requests").submit(job, { user: "experiment-requests", timeLimitMs }).done;
   if (end.status === "finished") return end.outcome as PlanOutcome;
-  const message = end.status === "limit" ? end.message : end.status === "crashed" ? `the engine stopped: ${end.message}` : "stopped";
+  const message =
+    end.status === "limit"
+      ? limitMessage(end, "planTimeMs", timeLimitMs)
+      : end.status === "crashed"
+        ? `the engine stopped: ${end.message}`
+        : "stopped";
   return { kind: "plan-error", error: { kind: end.status === "limit" ? "limit" : "runtime", message } };
 }
 
 /// Reads an uploaded family in an engine thread (the notation's checker and evaluator).
-export async function readUpload(ring: string, text: string, timeLimitMs: number): Promise<UploadOutcome> {
+export async function readUpload(ring: string, text: string, timeLimitMs = limitValue("uploadReadMs")): Promise<UploadOutcome> {
   const job: ExperimentJob = { kind: "upload", ring, text };
   const end = await experimentPool("requests").submit(job, { user: "experiment-requests", timeLimitMs }).done;
   if (end.status === "finished") return end.outcome as UploadOutcome;
-  const message = end.status === "limit" ? end.message : end.status === "crashed" ? `the engine stopped: ${end.message}` : "stopped";
+  const message =
+    end.status === "limit"
+      ? limitMessage(end, "uploadReadMs", timeLimitMs)
+      : end.status === "crashed"
+        ? `the engine stopped: ${end.message}`
+        : "stopped";
   return { kind: "upload-error", problems: [{ line: 0, message: `the upload could not be read: ${message}` }] };
 }

@@ -15,9 +15,6 @@ import { changeStatus, getExperiment, insertExperiment, missingIndexes, type Exp
 /// A member job comes back to the queue when its worker is silent this long past the limit.
 export const expireSecondsFor = (timeLimitMs: number): number => Math.ceil(timeLimitMs / 1000) + 30;
 
-/// How long planning (evaluating the program up to its sweep) may take.
-const PLAN_TIME_LIMIT_MS = 60_000;
-
 export interface CreateFromProgram {
   sessionId: string;
   userId: string | null;
@@ -42,7 +39,7 @@ export async function createFromProgram(input: CreateFromProgram): Promise<Exper
     throw new ExperimentError(400, "invalid_body", "Give the program (source) or a cell (cellId) whose text has a sweep(family, probe).");
   const bindings = (await listObjects(input.sessionId)).map((o) => ({ name: o.name, value: o.value }));
   const currentRing = await currentRingOf(input.sessionId);
-  const plan = await planSweep(source, bindings, currentRing, PLAN_TIME_LIMIT_MS);
+  const plan = await planSweep(source, bindings, currentRing);
   if (plan.kind === "plan-error") {
     throw new ExperimentError(422, "no_experiment", `The program does not give a sweep to run: ${plan.error.message}`);
   }
@@ -106,7 +103,7 @@ export async function createFromUpload(input: CreateFromUpload): Promise<Experim
     { name: ringName, value: family.ring },
     { name: "uploaded", value: u.family },
   ];
-  const plan = await planSweep(program, bindings, ringName, PLAN_TIME_LIMIT_MS);
+  const plan = await planSweep(program, bindings, ringName);
   if (plan.kind === "plan-error")
     throw new ExperimentError(422, "no_experiment", `The probe cannot run over the upload: ${plan.error.message}`);
   return start({

@@ -4,11 +4,23 @@
 /// reported with its line number (or JSON item) and nothing is stored.
 import { db } from "@/db/client";
 import { namedObjects, uploads } from "@/db/schema";
+import { formatLimit, limitDetails, limitValue } from "@/lib/limits";
 import { ExperimentError } from "./errors";
 import { readUpload } from "./compute-adapter";
 import type { UploadOutcome, UploadProblem } from "./experiment-job";
 
-export const MAX_UPLOAD_LINES = 20_000;
+/// Lines (or JSON items) an upload may have: the limit `uploadLines` of lib/limits.ts.
+export const MAX_UPLOAD_LINES = limitValue("uploadLines");
+
+/// The 413 of an upload with too many lines, kind `limit` naming `uploadLines`.
+export function tooManyLines(lineCount: number): ExperimentError {
+  return new ExperimentError(
+    413,
+    "too_large",
+    `The upload has ${lineCount} lines; at most ${formatLimit("uploadLines", MAX_UPLOAD_LINES)} (limit uploadLines).`,
+    limitDetails("uploadLines", MAX_UPLOAD_LINES),
+  );
+}
 
 /// A family file as the browser sends it, for the preview and for the upload alike.
 export interface FamilyFile {
@@ -59,10 +71,9 @@ export async function readFamilyFile(u: FamilyFile): Promise<UploadOutcome> {
   let problems: UploadProblem[] = [];
   if (u.format === "json") ({ text, problems } = jsonLines(u.content));
   const lineCount = text.split("\n").length;
-  if (lineCount > MAX_UPLOAD_LINES)
-    throw new ExperimentError(413, "too_large", `The upload has ${lineCount} lines; at most ${MAX_UPLOAD_LINES}.`);
+  if (lineCount > MAX_UPLOAD_LINES) throw tooManyLines(lineCount);
   if (problems.length === 0) {
-    const read = await readUpload(u.ring, text, 60_000);
+    const read = await readUpload(u.ring, text);
     if (read.kind === "upload") return read;
     problems = read.problems;
   }

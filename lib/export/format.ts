@@ -2,12 +2,21 @@
 /// this folder documents it) and its zod schema, used by POST /api/sessions/import.
 import { z } from "zod";
 import { INT4_MAX } from "@/lib/http/json-guard";
+import { atMost, limitValue } from "@/lib/limits";
 
 export const EXPORT_FORMAT = "ringside.session";
 export const EXPORT_VERSION = 1;
 
-/// Limits an import enforces besides the request size limit.
-export const IMPORT_LIMITS = { cells: 2000, objects: 2000, sourceChars: 100_000 } as const;
+/// Limits an import enforces besides the request size limit (`sessionImportBytes`): rows of
+/// lib/limits.ts; a source is bounded as a cell's is (`cellSourceBytes`, counted in characters
+/// as the cells route counts it).
+export const IMPORT_LIMITS = {
+  cells: limitValue("importCells"),
+  objects: limitValue("importObjects"),
+  sourceChars: limitValue("cellSourceBytes"),
+} as const;
+
+const holdsAtMost = (n: number, what: string, name: string) => `holds more than ${n} ${what} (limit ${name})`;
 
 // Integers stored in PostgreSQL `integer` columns or compared with them stay within int4.
 const int4 = () =>
@@ -28,7 +37,7 @@ export const ExportedValue = z
 export const ExportedCell = z
   .object({
     position: int4(),
-    source: z.string().max(IMPORT_LIMITS.sourceChars),
+    source: z.string().max(IMPORT_LIMITS.sourceChars, holdsAtMost(IMPORT_LIMITS.sourceChars, "characters", "cellSourceBytes")),
     status: z.enum(["done", "error", "cancelled", "interrupted"]),
     results: z.array(z.object({ statement: int4(), span: span.nullable(), value: ExportedValue }).strict()),
     error: z
@@ -45,10 +54,13 @@ const NAME = /^[A-Za-z][A-Za-z0-9_']*$/;
 
 export const ExportedObject = z
   .object({
-    name: z.string().regex(NAME, "a name starts with a letter and continues with letters, digits, _ or '").max(64),
+    name: z
+      .string()
+      .regex(NAME, "a name starts with a letter and continues with letters, digits, _ or '")
+      .max(...atMost("objectNameChars")),
     type: z.string().min(1).max(64),
     value: ExportedValue,
-    source: z.string().max(IMPORT_LIMITS.sourceChars),
+    source: z.string().max(IMPORT_LIMITS.sourceChars, holdsAtMost(IMPORT_LIMITS.sourceChars, "characters", "cellSourceBytes")),
     /// position of the cell that bound it, or null
     cell: int4().nullable(),
     origin: z.record(z.string(), z.unknown()).nullable(),
@@ -60,9 +72,18 @@ export const SessionExport = z
     format: z.literal(EXPORT_FORMAT),
     version: z.literal(EXPORT_VERSION),
     exportedAt: z.string().datetime({ offset: true }),
-    session: z.object({ title: z.string().trim().min(1).max(200), ownerName: z.string().max(200) }).strict(),
-    cells: z.array(ExportedCell).max(IMPORT_LIMITS.cells),
-    objects: z.array(ExportedObject).max(IMPORT_LIMITS.objects),
+    session: z
+      .object({
+        title: z
+          .string()
+          .trim()
+          .min(1)
+          .max(...atMost("titleChars")),
+        ownerName: z.string().max(200),
+      })
+      .strict(),
+    cells: z.array(ExportedCell).max(IMPORT_LIMITS.cells, holdsAtMost(IMPORT_LIMITS.cells, "cells", "importCells")),
+    objects: z.array(ExportedObject).max(IMPORT_LIMITS.objects, holdsAtMost(IMPORT_LIMITS.objects, "objects", "importObjects")),
   })
   .strict()
   .superRefine((doc, ctx) => {
@@ -87,6 +108,16 @@ export type SessionExport = z.infer<typeof SessionExport>;
 /// the new session another title.
 export const ImportBody = z.union([
   SessionExport,
-  z.object({ title: z.string().trim().min(1).max(200).optional(), export: SessionExport }).strict(),
+  z
+    .object({
+      title: z
+        .string()
+        .trim()
+        .min(1)
+        .max(...atMost("titleChars"))
+        .optional(),
+      export: SessionExport,
+    })
+    .strict(),
 ]);
 export type ImportBody = z.infer<typeof ImportBody>;

@@ -1,23 +1,30 @@
-/// Reads a JSON request body with a size limit and validates it with a zod schema.
+/// Reads a JSON request body with a size limit and validates it with a zod schema. Every
+/// bound here is a row of lib/limits.ts, named in the refusal (kind `limit`).
 import type { z } from "zod";
-import { HttpError } from "./errors";
+import { limitDetails, limitValue, type LimitName } from "../limits";
+import { HttpError, limitError } from "./errors";
 import { nestingProblem, valueProblem } from "./json-guard";
 
-export const DEFAULT_BODY_LIMIT = 64 * 1024;
+/// The size bound of a body: a row of lib/limits.ts, plus `slackBytes` for the JSON around a
+/// field whose own bound is that row (a cell's source is bounded by `cellSourceBytes`, its
+/// body by that and a little more).
+export interface BodyBound {
+  limit?: LimitName;
+  slackBytes?: number;
+}
 
 /// Throws HttpError 413 (body too large), 415 (not JSON), 400 (malformed JSON, nesting
-/// deeper than MAX_JSON_DEPTH, a NUL or lone surrogate in any string, a number JSON cannot
+/// deeper than `jsonNesting`, a NUL or lone surrogate in any string, a number JSON cannot
 /// carry exactly — lib/http/json-guard.ts — or a body that fails the schema; `details`
 /// lists each failing field path and why).
-export async function readJson<S extends z.ZodType>(req: Request, schema: S, opts: { maxBytes?: number } = {}): Promise<z.infer<S>> {
-  const maxBytes = opts.maxBytes ?? DEFAULT_BODY_LIMIT;
+export async function readJson<S extends z.ZodType>(req: Request, schema: S, bound: BodyBound = {}): Promise<z.infer<S>> {
   const type = req.headers.get("content-type") ?? "";
   if (!/^application\/(.+\+)?json\b/i.test(type)) {
     throw new HttpError(415, "unsupported_media_type", "Send the body as JSON (Content-Type: application/json).");
   }
-  const text = await readLimited(req, maxBytes);
-  const deep = nestingProblem(text);
-  if (deep) throw new HttpError(400, "too_deep", deep);
+  const text = await readText(req, bound);
+  const deep = nestingProblem(text, limitValue("jsonNesting"));
+  if (deep) throw new HttpError(400, "too_deep", deep, limitDetails("jsonNesting"));
   let value: unknown;
   try {
     value = JSON.parse(text);
@@ -36,25 +43,24 @@ export async function readJson<S extends z.ZodType>(req: Request, schema: S, opt
   return parsed.data;
 }
 
-/// Bodies up to this size are read to the end before a 413 is sent. A server that answers
-/// and closes while the client is still sending makes the client's write fail (EPIPE or
-/// ECONNRESET) before it can read the answer, so the client sees "fetch failed" instead of
-/// 413 (common practice: servers drain modest bodies before refusing them). Beyond this the
-/// connection is closed early: a client sending megabytes to a JSON route gets no courtesy.
-const DRAIN_LIMIT = 1024 * 1024;
-
-/// The body as text, at most `maxBytes` bytes (413 beyond, as readJson).
-export function readText(req: Request, maxBytes: number): Promise<string> {
-  return readLimited(req, maxBytes);
+/// The body as text within its bound (413 beyond, as readJson).
+export function readText(req: Request, bound: BodyBound = {}): Promise<string> {
+  const name = bound.limit ?? "requestBodyBytes";
+  return readLimited(req, name, limitValue(name) + (bound.slackBytes ?? 0));
 }
 
-async function readLimited(req: Request, maxBytes: number): Promise<string> {
+async function readLimited(req: Request, name: LimitName, maxBytes: number): Promise<string> {
   // The connection is closed after a 413 either way: `Connection: close` keeps keep-alive
   // clients from reusing it.
-  const tooLarge = () =>
-    new HttpError(413, "body_too_large", `The body is larger than ${maxBytes} bytes.`, undefined, { Connection: "close" });
+  const tooLarge = () => limitError(413, "body_too_large", name, "The body is too large", { Connection: "close" });
   const declared = Number(req.headers.get("content-length"));
-  const drainLimit = Math.max(DRAIN_LIMIT, maxBytes);
+  // Bodies up to `bodyDrainBytes` are read to the end before a 413 is sent. A server that
+  // answers and closes while the client is still sending makes the client's write fail
+  // (EPIPE or ECONNRESET) before it can read the answer, so the client sees "fetch failed"
+  // instead of 413 (common practice: servers drain modest bodies before refusing them).
+  // Beyond it the connection is closed early: a client sending megabytes to a JSON route
+  // gets no courtesy.
+  const drainLimit = Math.max(limitValue("bodyDrainBytes"), maxBytes);
   if (Number.isFinite(declared) && declared > maxBytes) {
     if (declared <= drainLimit) await drain(req, drainLimit);
     throw tooLarge();

@@ -1,5 +1,6 @@
 /// JSON errors for route handlers: every failure answers `{ error: { code, message } }`.
 import { NextResponse } from "next/server";
+import { formatLimit, limitDetails, limitValue, type LimitName } from "../limits";
 
 export class HttpError extends Error {
   constructor(
@@ -23,6 +24,20 @@ export function jsonError(
 ): NextResponse {
   const error = details === undefined ? { code, message } : { code, message, details };
   return NextResponse.json({ error }, { status, headers });
+}
+
+/// A refusal because a request met a limit of lib/limits.ts: the message says which and how
+/// much — `message` has no final period; "The body is too large" becomes "The body is too
+/// large (limit authBodyBytes = 8 KiB)." — and `details` is `{kind: "limit", limit, value}`.
+export function limitError(
+  status: number,
+  code: string,
+  name: LimitName,
+  message: string,
+  headers?: Record<string, string>,
+  value = limitValue(name),
+): HttpError {
+  return new HttpError(status, code, `${message} (limit ${name} = ${formatLimit(name, value)}).`, limitDetails(name, value), headers);
 }
 
 export const unauthorized = () => new HttpError(401, "unauthorized", "Sign in to use this endpoint.");

@@ -3,9 +3,12 @@
 /// readJson, so titles, sources, names, sign-up fields and imports all answer 400 with a
 /// message naming the place, instead of a 500 from the database or a stack overflow.
 
+import { limitValue } from "../limits";
+
 /// Deeper nesting than any body of ours needs (an imported session's values are about ten
-/// levels deep); recursive code anywhere after this point may rely on it.
-export const MAX_JSON_DEPTH = 64;
+/// levels deep); recursive code anywhere after this point may rely on it. The limit
+/// `jsonNesting` of lib/limits.ts.
+export const MAX_JSON_DEPTH = limitValue("jsonNesting");
 
 /// Largest integer a JSON number can carry exactly (2⁵³ − 1); a bigger one would be rounded
 /// silently, so it is refused rather than stored as a different number.
@@ -15,7 +18,7 @@ export const MAX_EXACT_INTEGER = Number.MAX_SAFE_INTEGER;
 export const INT4_MAX = 2_147_483_647;
 
 /// Scans the raw text (before JSON.parse, so an absurdly deep body costs one linear pass
-/// and no recursion) and reports where nesting first exceeds MAX_JSON_DEPTH.
+/// and no recursion) and reports where nesting first exceeds the limit `jsonNesting`.
 export function nestingProblem(text: string, maxDepth = MAX_JSON_DEPTH): string | null {
   let depth = 0;
   let inString = false;
@@ -29,7 +32,8 @@ export function nestingProblem(text: string, maxDepth = MAX_JSON_DEPTH): string 
       inString = true;
     } else if (c === 0x5b || c === 0x7b) {
       depth++;
-      if (depth > maxDepth) return `The body nests arrays and objects more than ${maxDepth} levels deep (at character ${i + 1}).`;
+      if (depth > maxDepth)
+        return `The body nests arrays and objects more than ${maxDepth} levels deep (at character ${i + 1}; limit jsonNesting).`;
     } else if (c === 0x5d || c === 0x7d) {
       depth--;
     }

@@ -11,7 +11,7 @@ import type { CallContext } from "./context";
 import { EvalError, asEvalError, limit, runtime } from "./errors";
 import { idealValue } from "./ideals";
 import { ratOf } from "../algebra/index";
-import { sweepRunsInline } from "../limits";
+import { LIMIT_TABLE, sweepRunsInline, type LimitName } from "../limits";
 import { familyDefinition, ringText, valueText } from "./text";
 import {
   list,
@@ -24,8 +24,8 @@ import {
   type Value,
 } from "./values";
 
-/// Largest family `random_ideals` / `monomial_ideals` build.
-export const MAX_FAMILY_SIZE = 100_000;
+/// Largest family `random_ideals` / `monomial_ideals` build: the limit `familyMembers`.
+export const MAX_FAMILY_SIZE = LIMIT_TABLE.familyMembers.value;
 /// The columns every sweep table starts with (notation.md §11), then the probe's fields.
 export const FIXED_COLUMNS = ["index", "label", "status", "seconds"] as const;
 /// Appended (addition) when some row is not ok: what went wrong.
@@ -43,12 +43,13 @@ const key = (name: string): string => {
   return `${name}(${o.params.map((p) => typeToString(p.type)).join(", ")})`;
 };
 
-function intOption(c: CallContext, name: string, fallback: bigint, min: bigint, max: bigint): bigint {
+/// `limitName`: the row of lib/limits.ts that `max` comes from, named in the refusal.
+function intOption(c: CallContext, name: string, fallback: bigint, min: bigint, max: bigint, limitName?: LimitName): bigint {
   const v = c.named.get(name);
   if (v === undefined) return fallback;
   if (v.type !== "Int") throw runtime(`${name} must be an Int, got ${v.type}`, c.span);
   if (v.value < min) throw runtime(`${name} must be at least ${min}, got ${v.value}`, c.span);
-  if (v.value > max) throw limit(`${name} = ${v.value} is beyond the limit ${max}`, c.span);
+  if (v.value > max) throw limit(`${name} = ${v.value} is beyond the limit ${max}`, c.span, limitName);
   return v.value;
 }
 
@@ -85,7 +86,7 @@ function polynomialRingArg(v: Value, c: CallContext, what: string): RingValue {
 
 function randomIdeals([S]: readonly Value[], c: CallContext): Value {
   const ring = polynomialRingArg(S, c, "random_ideals");
-  const count = intOption(c, "count", 200n, 0n, BigInt(MAX_FAMILY_SIZE));
+  const count = intOption(c, "count", 200n, 0n, BigInt(MAX_FAMILY_SIZE), "familyMembers");
   const gens = intOption(c, "gens", 3n, 1n, 100n);
   const seed = intOption(c, "seed", 1n, -(2n ** 63n), 2n ** 64n - 1n);
   const homogeneous = boolOption(c, "homogeneous", true);

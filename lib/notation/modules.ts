@@ -27,6 +27,7 @@ import type { MatrixValue, ModuleValue, RingValue, Value } from "./values";
 
 /// The largest rank of a free module R^n written directly.
 const MAX_FREE_RANK = LIMIT_TABLE.freeRank.value;
+const MAX_MODULE_DEGREE = LIMIT_TABLE.moduleDegree.value;
 
 export function matrixOf(ring: RingValue, rows: readonly (readonly Poly[])[], cols: number): MatrixValue {
   return { type: "Matrix", ring, rows, cols };
@@ -241,7 +242,8 @@ function freeDegrees(v: Value, span: Span): number[] {
   if (v.items.length > MAX_FREE_RANK) throw limit(`the rank ${v.items.length} is beyond the limit ${MAX_FREE_RANK}`, span, "freeRank");
   return v.items.map((x, k) => {
     if (x.type !== "Int") throw runtime(`degree ${k + 1} must be an Int, got ${x.type}`, span);
-    if (x.value > 1_000_000n || x.value < -1_000_000n) throw limit(`degree ${x.value} is beyond the limit ±1000000`, span);
+    if (x.value > BigInt(MAX_MODULE_DEGREE) || x.value < -BigInt(MAX_MODULE_DEGREE))
+      throw limit(`degree ${x.value} is beyond the limit ±${MAX_MODULE_DEGREE}`, span, "moduleDegree");
     return Number(x.value);
   });
 }

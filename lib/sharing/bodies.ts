@@ -1,17 +1,26 @@
 /// The zod schemas of the collaboration API's request bodies.
 import { z } from "zod";
+import { atMost } from "@/lib/limits";
 
 const email = z.string().trim().toLowerCase().email("expected an e-mail address").max(254);
 const uuid = z.string().uuid("expected a team id (UUID)");
 
 export const NewTeam = z
   .object({
-    name: z.string().trim().min(1, "give the team a name").max(120),
+    name: z
+      .string()
+      .trim()
+      .min(1, "give the team a name")
+      .max(...atMost("teamNameChars")),
     slug: z
       .string()
       .regex(/^[a-z0-9](?:[a-z0-9-]{0,46}[a-z0-9])?$/, "lower-case letters, digits and inner hyphens, at most 48")
       .optional(),
-    description: z.string().trim().max(2000).optional(),
+    description: z
+      .string()
+      .trim()
+      .max(...atMost("descriptionChars"))
+      .optional(),
   })
   .strict();
 
@@ -40,7 +49,7 @@ export const ObjectImport = z
     name: z
       .string()
       .regex(NAME, "a name starts with a letter and continues with letters, digits, _ or '")
-      .max(64)
+      .max(...atMost("objectNameChars"))
       .refine((n) => !KEYWORDS.has(n), "a keyword cannot be a name")
       .optional(),
   })

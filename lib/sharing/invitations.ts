@@ -7,14 +7,14 @@ import { invitations, memberships, sessions, teams, users, type TeamRole } from 
 import { requireTeamRole } from "@/lib/auth/access";
 import type { CurrentUser } from "@/lib/auth/types";
 import { HttpError, notFound } from "@/lib/http/errors";
+import { limitValue } from "@/lib/limits";
 import { sendMail } from "@/lib/mail/send";
 import { PLACEHOLDER_TITLE } from "@/lib/sessions/store";
 import { auditSharing, newToken, requireUuid, tokenHash } from "./common";
 
-/// Lifetime of an invitation; RINGSIDE_INVITATION_TTL_HOURS overrides the 7 days.
+/// Lifetime of an invitation: the limit `invitationHours` (RINGSIDE_INVITATION_TTL_HOURS).
 export function invitationLifetimeMs(): number {
-  const hours = Number(process.env.RINGSIDE_INVITATION_TTL_HOURS);
-  return (Number.isFinite(hours) && hours > 0 ? hours : 24 * 7) * 3600_000;
+  return limitValue("invitationHours") * 3600_000;
 }
 
 export async function createInvitation(

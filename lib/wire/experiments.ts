@@ -2,7 +2,14 @@
 /// experiment with its progress, a row, a list entry. Schemas first, types inferred from
 /// them; lib/experiments produces these shapes and the browser (issue 15) reads them.
 import { z } from "zod";
+import { atMost, LIMIT_TABLE } from "../limits";
 import { ValueJson } from "./values";
+
+/// A text field bounded by a row of lib/limits.ts (counted in characters), whose refusal names it.
+export function boundedText(name: "uploadChars" | "experimentProgramChars" | "probeChars") {
+  const n = LIMIT_TABLE[name].value;
+  return z.string().max(n, `is longer than ${n} characters (limit ${name})`);
+}
 
 export const ExperimentStatus = z.enum(["queued", "running", "paused", "done", "cancelled"]);
 export type ExperimentStatus = z.infer<typeof ExperimentStatus>;
@@ -20,10 +27,15 @@ export const CreateFromProgramBody = z
   .object({
     sessionId: uuid,
     /// the program whose first sweep(family, probe) becomes the experiment
-    source: z.string().max(200_000).optional(),
+    source: boundedText("experimentProgramChars").optional(),
     /// or a cell of the session, whose text is used
     cellId: uuid.optional(),
-    title: z.string().trim().min(1).max(200).optional(),
+    title: z
+      .string()
+      .trim()
+      .min(1)
+      .max(...atMost("titleChars"))
+      .optional(),
   })
   .strict();
 /// … or from an uploaded family and a probe over it.
@@ -32,10 +44,15 @@ export const CreateFromUploadBody = z
     sessionId: uuid,
     uploadId: uuid,
     /// a function of one member, e.g. "I -> {depth: (S / I).depth}"
-    probe: z.string().trim().min(1).max(20_000),
+    probe: boundedText("probeChars").trim().min(1),
     /// the name the probe uses for the upload's ring (default S)
     ringName: identifier.optional(),
-    title: z.string().trim().min(1).max(200).optional(),
+    title: z
+      .string()
+      .trim()
+      .min(1)
+      .max(...atMost("titleChars"))
+      .optional(),
   })
   .strict();
 export const CreateExperimentBody = z.union([CreateFromProgramBody, CreateFromUploadBody]);
@@ -46,11 +63,17 @@ export const UploadBody = z
   .object({
     sessionId: uuid,
     /// the named object the family becomes
-    name: z.string().min(1).max(100),
+    name: z
+      .string()
+      .min(1)
+      .max(...atMost("objectNameChars")),
     format: z.enum(["text", "json"]),
     /// the ring the ideals are read in, in the notation: "GF(32003)[x, y, z]"
-    ring: z.string().min(1).max(2000),
-    content: z.string().max(2 * 1024 * 1024),
+    ring: z
+      .string()
+      .min(1)
+      .max(...atMost("ringTextChars")),
+    content: boundedText("uploadChars"),
   })
   .strict();
 export type UploadBody = z.infer<typeof UploadBody>;

@@ -6,6 +6,7 @@ import path from "node:path";
 import { and, eq, sql } from "drizzle-orm";
 import { db } from "@/db/client";
 import { experimentRows, experiments } from "@/db/schema";
+import { webServerArgs } from "../helpers/own-server";
 
 const ROOT = path.resolve(__dirname, "../..");
 
@@ -44,9 +45,10 @@ export async function freePort(): Promise<number> {
   });
 }
 
-/// A second production server (the build npm test made) with its embedded worker.
+/// A second production server (the build npm test made, served by lib/ops/web-server.ts as
+/// in production) with its embedded worker.
 export async function startServer(port: number): Promise<Proc> {
-  const p = start("node", ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(port)], {
+  const p = start("node", webServerArgs(port), {
     RINGSIDE_EMBEDDED_WORKER: "1",
     RINGSIDE_EMBEDDED_CONCURRENCY: "1",
   });

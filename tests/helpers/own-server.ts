@@ -1,8 +1,9 @@
-/// A Ringside server of a test's own — its own PostgreSQL cluster and its own `next start`
-/// (the production build test.sh made) on its own port, with the test's environment (tight
-/// limits) — so a test may kill -9 the server or the postmaster without touching the shared
-/// test server other suites use. Needs root (the cluster runs as the postgres user), as
-/// `npm test` does.
+/// A Ringside server of a test's own — its own PostgreSQL cluster and its own production web
+/// server (the build test.sh made, served by lib/ops/web-server.ts as `npm start` and
+/// `npm test` serve it, so the client address comes from the socket) on its own port, with
+/// the test's environment (tight limits) — so a test may kill -9 the server or the
+/// postmaster without touching the shared test server other suites use. Needs root (the
+/// cluster runs as the postgres user), as `npm test` does.
 import { execFileSync, spawn, type ChildProcess } from "node:child_process";
 import { mkdirSync, readFileSync, rmSync, writeFileSync, openSync } from "node:fs";
 import net from "node:net";
@@ -77,7 +78,8 @@ ensure_database ${pgPort} "${dir}/pg-password" ringside_own >/dev/null 2>&1`);
   }
 
   async startServer(): Promise<void> {
-    const child = spawn("node", ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(this.webPort)], {
+    // As common.sh's serve_web: node itself is the child, so a kill reaches the server.
+    const child = spawn("node", webServerArgs(this.webPort), {
       cwd: ROOT,
       env: {
         ...process.env,
@@ -177,6 +179,11 @@ ensure_database ${pgPort} "${dir}/pg-password" ringside_own >/dev/null 2>&1`);
     writeFileSync(`${this.dir}.log`, this.log() + "\n--- PostgreSQL ---\n" + this.pgLog());
     rmSync(this.dir, { recursive: true, force: true });
   }
+}
+
+/// The command line of the production web server (lib/ops/common.sh, serve_web).
+export function webServerArgs(port: number): string[] {
+  return ["--import", "tsx", "lib/ops/web-server.ts", "--host", "127.0.0.1", "--port", String(port)];
 }
 
 function childPids(pid: number): number[] {

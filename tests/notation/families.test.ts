@@ -82,6 +82,12 @@ describe("random_ideals", () => {
     const out = await run("S := Q[x, y]\nrandom_ideals(S, gens = 2, degree = [1, 2, 3])");
     expect(out.error?.message).toMatch(/degree lists 3 degree\(s\) but gens = 2/);
   });
+
+  it("refuses a count past the table's familyMembers with kind limit naming it", async () => {
+    const out = await run("S := Q[x, y]\nrandom_ideals(S, count = 100001, gens = 2, degree = 2)");
+    expect(out.error?.kind).toBe("limit");
+    expect(out.error?.message).toMatch(/count = 100001 is beyond the limit 100000 \(limit familyMembers\)/);
+  });
 });
 
 describe("monomial_ideals", () => {

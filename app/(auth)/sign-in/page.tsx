@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { redirect } from "next/navigation";
 import { currentUser } from "@/lib/auth/current-user";
+import { formatLimit } from "@/lib/limits";
 import { invitationBehind } from "@/lib/sharing/invitations";
 import { InvitationNote } from "../invitation-note";
 import { safeCallback } from "../safe-callback";
@@ -19,7 +20,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
     <>
       <h1 className="mb-4 text-lg font-semibold">Sign in</h1>
       {invitation && <InvitationNote invitation={invitation} action="sign in" />}
-      <SignInForm callbackUrl={callbackUrl} initialError={error} />
+      <SignInForm callbackUrl={callbackUrl} initialError={error} rateWindow={formatLimit("signInWindowMs")} />
       <p className="mt-4 text-center text-sm text-ink-soft">
         No account yet?{" "}
         <Link

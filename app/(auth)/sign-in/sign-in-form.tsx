@@ -5,13 +5,27 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Field } from "../field";
 
-const MESSAGES: Record<string, string> = {
-  rate_limited: "Too many failed sign-in attempts. Wait 15 minutes, then try again.",
-  CredentialsSignin: "That e-mail and password do not match an account.",
-};
+/// What the form says for each refusal; `rateWindow` is the limit `signInWindowMs` as text
+/// ("15 min"), handed over by the server page (client code does not read lib/limits.ts).
+function messages(rateWindow: string): Record<string, string> {
+  return {
+    rate_limited: `Too many failed sign-in attempts. Wait ${rateWindow}, then try again.`,
+    busy: "Too many sign-ins are being checked right now. Try again in a few seconds.",
+    CredentialsSignin: "That e-mail and password do not match an account.",
+  };
+}
 
-export function SignInForm({ callbackUrl, initialError }: { callbackUrl: string; initialError: string | null }) {
+export function SignInForm({
+  callbackUrl,
+  initialError,
+  rateWindow,
+}: {
+  callbackUrl: string;
+  initialError: string | null;
+  rateWindow: string;
+}) {
   const router = useRouter();
+  const MESSAGES = messages(rateWindow);
   const [error, setError] = useState<string | null>(initialError ? (MESSAGES[initialError] ?? "Sign-in failed.") : null);
   const [busy, setBusy] = useState(false);
 
@@ -31,6 +45,8 @@ export function SignInForm({ callbackUrl, initialError }: { callbackUrl: string;
       router.refresh();
     } else if (result?.status === 429) {
       setError(MESSAGES.rate_limited!);
+    } else if (result?.status === 503) {
+      setError(MESSAGES.busy!);
     } else {
       setError(MESSAGES.CredentialsSignin!);
     }

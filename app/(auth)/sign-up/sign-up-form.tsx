@@ -11,6 +11,10 @@ export function SignUpForm({ passwordRule, callbackUrl = "/", email }: { passwor
   const router = useRouter();
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
+  /// After a successful sign-up: what the server said (check your mail, the link's lifetime)
+  /// and where "Continue" goes. The page waits for the reader instead of moving on at once, so
+  /// the notice about the confirmation link is not missed.
+  const [done, setDone] = useState<{ message: string; next: string; signedIn: boolean } | null>(null);
 
   async function onSubmit(event: React.FormEvent<HTMLFormElement>) {
     event.preventDefault();
@@ -33,14 +37,34 @@ export function SignUpForm({ passwordRule, callbackUrl = "/", email }: { passwor
       setBusy(false);
       return;
     }
+    const answer = (await response.json().catch(() => null)) as { message?: unknown } | null;
+    const message = typeof answer?.message === "string" ? answer.message : "Check your mail for the link that confirms your address.";
     const result = await signIn("credentials", { email: body.email, password: body.password, redirect: false });
     setBusy(false);
-    if (result?.ok) {
-      router.replace(callbackUrl);
-      router.refresh();
-    } else {
-      router.replace(callbackUrl === "/" ? "/sign-in" : `/sign-in?callbackUrl=${encodeURIComponent(callbackUrl)}`);
-    }
+    const signedIn = result?.ok === true;
+    const next = signedIn ? callbackUrl : callbackUrl === "/" ? "/sign-in" : `/sign-in?callbackUrl=${encodeURIComponent(callbackUrl)}`;
+    setDone({ message, next, signedIn });
+  }
+
+  if (done) {
+    return (
+      <div role="status" aria-label="Account created" className="space-y-3">
+        <p className="font-medium text-ink">
+          {done.signedIn ? "Your account is created and you are signed in." : "Your account is created."}
+        </p>
+        <p className="rounded-md bg-paper-deep px-3 py-2 text-sm text-ink">{done.message}</p>
+        <button
+          type="button"
+          className="button-primary"
+          onClick={() => {
+            router.replace(done.next);
+            router.refresh();
+          }}
+        >
+          {done.signedIn ? "Continue" : "Continue to sign in"}
+        </button>
+      </div>
+    );
   }
 
   return (

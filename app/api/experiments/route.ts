@@ -43,7 +43,7 @@ export const GET = experimentRoute(async (req) => {
 /// POST /api/experiments: create from a program or cell, or from an upload and a probe.
 export const POST = experimentRoute(async (req) => {
   const user = await requireUser();
-  const body = await readJson(req, CreateExperimentBody, { maxBytes: 256 * 1024 });
+  const body = await readJson(req, CreateExperimentBody, { limit: "experimentBodyBytes" });
   await requireSessionAccess(user, body.sessionId, "edit");
   const created =
     "uploadId" in body

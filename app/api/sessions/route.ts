@@ -1,12 +1,22 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
+import { atMost } from "@/lib/limits";
 import { requireUser } from "@/lib/auth/current-user";
 import { readJson } from "@/lib/http/body";
 import { route } from "@/lib/http/errors";
 import { createSession, listSessions } from "@/lib/sessions/store";
 
 /// Without a title the session is named by its first definition (lib/sessions/store).
-const NewSession = z.object({ title: z.string().trim().min(1, "give the session a title").max(200).optional() }).strict();
+const NewSession = z
+  .object({
+    title: z
+      .string()
+      .trim()
+      .min(1, "give the session a title")
+      .max(...atMost("titleChars"))
+      .optional(),
+  })
+  .strict();
 
 export const POST = route(async (req) => {
   const user = await requireUser();

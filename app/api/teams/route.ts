@@ -13,7 +13,7 @@ export const GET = route(async () => {
 
 export const POST = route(async (req) => {
   const user = await requireUser();
-  const body = await readJson(req, NewTeam, { maxBytes: 8 * 1024 });
+  const body = await readJson(req, NewTeam, { limit: "shortBodyBytes" });
   const team = await createTeam(user, body, clientAddress(req.headers));
   return NextResponse.json(
     { team: { id: team.id, slug: team.slug, name: team.name, description: team.description, role: "lead" } },

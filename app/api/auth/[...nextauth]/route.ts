@@ -2,11 +2,13 @@ import NextAuth from "next-auth";
 import { NextRequest } from "next/server";
 import { recordAuditEvent } from "@/lib/auth/audit-log";
 import { hashQueueFull } from "@/lib/auth/hash-slots";
+import { busy, refusedForHashQueue } from "@/lib/auth/hash-refusal";
 import { authOptions, normalizeEmail } from "@/lib/auth/options";
 import { checkSignInRate } from "@/lib/auth/rate-limit";
 import { readText } from "@/lib/http/body";
 import { clientAddress } from "@/lib/http/client-address";
 import { errorResponse, jsonError } from "@/lib/http/errors";
+import { formatLimit, limitDetails } from "@/lib/limits";
 import { textProblem } from "@/lib/http/json-guard";
 
 type Context = { params: Promise<{ nextauth: string[] }> };
@@ -14,8 +16,6 @@ type Context = { params: Promise<{ nextauth: string[] }> };
 const handler = NextAuth(authOptions) as (req: Request, context: Context) => Promise<Response>;
 
 export const GET = handler;
-
-const MAX_CREDENTIALS_BYTES = 8 * 1024;
 
 /// The fields of a credentials body, read exactly as next-auth reads them
 /// (next-auth/next/utils getBody: JSON when the type mentions application/json, else
@@ -42,7 +42,7 @@ export async function POST(req: Request, context: Context): Promise<Response> {
   if (nextauth[0] !== "callback" || nextauth[1] !== "credentials") return handler(req, context);
   try {
     const contentType = req.headers.get("content-type") ?? "";
-    const text = await readText(req, MAX_CREDENTIALS_BYTES);
+    const text = await readText(req, { limit: "authBodyBytes" });
     const fields = credentialFields(contentType, text);
     if (fields === null) {
       return contentType.includes("json") || contentType.includes("form-urlencoded")
@@ -63,22 +63,23 @@ export async function POST(req: Request, context: Context): Promise<Response> {
       await recordAuditEvent({ event: "signin_rate_limited", email, address, details: { scope: decision.scope } });
       const minutes = Math.ceil(decision.retryAfterSeconds / 60);
       const who = decision.scope === "account" ? "this account" : "your address";
-      const message = `Too many failed sign-in attempts for ${who}. Try again in ${minutes} minutes.`;
+      const message =
+        `Too many failed sign-in attempts for ${who}. Try again in ${minutes} minutes ` +
+        `(limit ${decision.limit} = ${formatLimit(decision.limit)} within ${formatLimit("signInWindowMs")}).`;
       // next-auth's client reads `url` from the JSON answer; point it at the sign-in page.
       const url = new URL("/sign-in?error=rate_limited", req.url).toString();
       return Response.json(
-        { error: { code: "rate_limited", message }, url },
+        { error: { code: "rate_limited", message, details: limitDetails(decision.limit) }, url },
         { status: 429, headers: { "Retry-After": String(decision.retryAfterSeconds) } },
       );
     }
-    if (hashQueueFull()) {
-      return jsonError(503, "busy", "Too many sign-ins are being checked right now; try again in a few seconds.", undefined, {
-        "Retry-After": "5",
-      });
-    }
+    if (hashQueueFull()) return busy(req);
     // The body has been read: hand next-auth an identical request with the same bytes.
     const replay = new NextRequest(req.url, { method: "POST", headers: req.headers, body: text });
-    return handler(replay, context);
+    const answer = await handler(replay, context);
+    // The queue may have filled after the check above (many requests pass it at once):
+    // next-auth then reports the authorize error as a failed sign-in; it is a refusal.
+    return (await refusedForHashQueue(answer)) ? busy(req) : answer;
   } catch (error) {
     return errorResponse(error);
   }

@@ -5,12 +5,10 @@ import { route } from "@/lib/http/errors";
 import { sendMail } from "@/lib/mail/send";
 import { publicBase } from "@/lib/sharing/common";
 
-const MAX_BODY_BYTES = 8 * 1024;
-
 /// 201 with the same body whether the address was free or already had an account (the
 /// mailbox's owner is told which): the answer reveals no accounts.
 export const POST = route(async (req) => {
-  const input = await readJson(req, signUpBody, { maxBytes: MAX_BODY_BYTES });
+  const input = await readJson(req, signUpBody, { limit: "authBodyBytes" });
   const mail = await signUp(input, clientAddress(req.headers), publicBase(req));
   // The answer is the same whether or not the mail goes out; the log says when it did not.
   await sendMail(mail).catch((error: Error) => console.error(`[ringside] sign-up mail failed: ${error.message}`));

@@ -10,7 +10,7 @@ import { UploadBody } from "@/lib/wire/experiments";
 /// why) and nothing stored, or 201 with the upload (also saved as a named object).
 export const POST = experimentRoute(async (req) => {
   const user = await requireUser();
-  const body = await readJson(req, UploadBody, { maxBytes: 3 * 1024 * 1024 });
+  const body = await readJson(req, UploadBody, { limit: "uploadBodyBytes" });
   await requireSessionAccess(user, body.sessionId, "edit");
   const upload = await createUpload({ ...body, userId: user.id });
   return NextResponse.json({ upload: { ...upload, createdAt: new Date(upload.createdAt).toISOString() } }, { status: 201 });

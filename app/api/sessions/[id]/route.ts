@@ -1,5 +1,6 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
+import { atMost } from "@/lib/limits";
 import { requireUser, requireUserOrLink } from "@/lib/auth/current-user";
 import { readJson } from "@/lib/http/body";
 import { deleteSession, renameSession } from "@/lib/sessions/manage";
@@ -30,13 +31,21 @@ export const GET = route(async (req, { params }: Context) => {
   });
 });
 
-const Rename = z.object({ title: z.string().trim().min(1, "give the session a title").max(200) }).strict();
+const Rename = z
+  .object({
+    title: z
+      .string()
+      .trim()
+      .min(1, "give the session a title")
+      .max(...atMost("titleChars")),
+  })
+  .strict();
 
 /// Renames the session (its owner only).
 export const PATCH = route(async (req, { params }: Context) => {
   const user = await requireUser();
   const { id } = await params;
-  const { title } = await readJson(req, Rename, { maxBytes: 4 * 1024 });
+  const { title } = await readJson(req, Rename, { limit: "shortBodyBytes" });
   const session = await renameSession(user, id, title, linkToken(req));
   return NextResponse.json({ session: { id: session.id, title: session.title } });
 });

@@ -9,7 +9,7 @@ import { importSession, parseImport } from "@/lib/sharing/transfer";
 /// Re-creates a session (cells and objects) owned by the caller from our JSON export.
 export const POST = route(async (req) => {
   const user = await requireUser();
-  const raw = await readJson(req, z.unknown(), { maxBytes: 8 * 1024 * 1024 });
+  const raw = await readJson(req, z.unknown(), { limit: "sessionImportBytes" });
   const { doc, title } = parseImport(raw);
   const session = await importSession(user, doc, title, clientAddress(req.headers));
   return NextResponse.json({ session }, { status: 201 });

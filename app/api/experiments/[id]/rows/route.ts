@@ -1,6 +1,7 @@
 import { experimentRoute } from "@/lib/experiments/http";
 import { NextResponse } from "next/server";
 import { z } from "zod";
+import { LIMIT_TABLE } from "@/lib/limits";
 import { HttpError } from "@/lib/http/errors";
 import { requireExperimentAccess } from "@/lib/experiments/access";
 import { readRows } from "@/lib/experiments/store";
@@ -10,7 +11,12 @@ type Context = { params: Promise<{ id: string }> };
 
 const Query = z.object({
   offset: z.coerce.number().int().min(0).default(0),
-  limit: z.coerce.number().int().min(1).max(1000).default(100),
+  limit: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .max(LIMIT_TABLE.pageRows.value, `at most ${LIMIT_TABLE.pageRows.value} rows per request (limit pageRows)`)
+    .default(100),
   sort: z.string().default("index"),
   order: z.enum(["asc", "desc"]).default("asc"),
   status: z

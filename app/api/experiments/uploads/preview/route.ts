@@ -4,12 +4,17 @@ import { requireUser } from "@/lib/auth/current-user";
 import { readJson } from "@/lib/http/body";
 import { experimentRoute } from "@/lib/experiments/http";
 import { previewUpload } from "@/lib/experiments/upload-preview";
+import { atMost } from "@/lib/limits";
+import { boundedText } from "@/lib/wire/experiments";
 
 const Body = z
   .object({
     format: z.enum(["text", "json"]),
-    ring: z.string().min(1).max(2000),
-    content: z.string().max(2 * 1024 * 1024),
+    ring: z
+      .string()
+      .min(1)
+      .max(...atMost("ringTextChars")),
+    content: boundedText("uploadChars"),
   })
   .strict();
 
@@ -18,6 +23,6 @@ const Body = z
 /// message}], problemCount, unit}}` whether or not lines are bad (the problems are the answer).
 export const POST = experimentRoute(async (req) => {
   await requireUser();
-  const body = await readJson(req, Body, { maxBytes: 3 * 1024 * 1024 });
+  const body = await readJson(req, Body, { limit: "uploadBodyBytes" });
   return NextResponse.json({ preview: await previewUpload(body) });
 });

@@ -14,7 +14,7 @@ type Context = { params: Promise<{ objectId: string }> };
 export const POST = route(async (req, { params }: Context) => {
   const user = await requireUser();
   const { objectId } = await params;
-  const body = await readJson(req, ObjectImport, { maxBytes: 2 * 1024 });
+  const body = await readJson(req, ObjectImport, { limit: "shortBodyBytes" });
   const row = await importObject(user, objectId, body, { linkToken: linkToken(req), address: clientAddress(req.headers) });
   return NextResponse.json({ object: { ...objectView(row), origin: row.origin } }, { status: 201 });
 });

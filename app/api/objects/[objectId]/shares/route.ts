@@ -18,7 +18,7 @@ export const GET = route(async (req, { params }: Context) => {
 export const POST = route(async (req, { params }: Context) => {
   const user = await requireUser();
   const { objectId } = await params;
-  const body = await readJson(req, NewShare, { maxBytes: 4 * 1024 });
+  const body = await readJson(req, NewShare, { limit: "shortBodyBytes" });
   const { share, created } = await shareObject(user, objectId, granteeOf(body), body.role, clientAddress(req.headers), linkToken(req));
   return NextResponse.json({ share }, { status: created ? 201 : 200 });
 });

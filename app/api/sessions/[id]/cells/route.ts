@@ -4,7 +4,7 @@ import { requireUser, requireUserOrLink } from "@/lib/auth/current-user";
 import { requireSessionAccess } from "@/lib/auth/access";
 import { readJson } from "@/lib/http/body";
 import { route } from "@/lib/http/errors";
-import { LIMIT_TABLE } from "@/lib/limits";
+import { formatLimit, LIMIT_TABLE } from "@/lib/limits";
 import { linkToken } from "@/lib/sessions/link-token";
 import { cancelFromCell, createFromCell } from "@/lib/experiments/service";
 import { definedNames } from "@/grammar/defined-names";
@@ -21,7 +21,7 @@ const NewCell = z
   .object({
     source: z
       .string()
-      .max(MAX_SOURCE_BYTES, "a cell holds at most 100 KB of source")
+      .max(MAX_SOURCE_BYTES, `a cell holds at most ${formatLimit("cellSourceBytes", MAX_SOURCE_BYTES)} of source (limit cellSourceBytes)`)
       .refine((s) => s.trim() !== "", "the cell is empty: type a statement to run"),
     /// the caller confirmed replacing names that someone else defined (lib/sessions/redefine-guard)
     redefine: z.boolean().optional(),
@@ -43,7 +43,7 @@ export const POST = route(async (req, { params }: Context) => {
   const { id } = await params;
   // With the link's token a link holder is known to read the session: 403, not 404.
   await requireSessionAccess(user, id, "edit", { linkToken: linkToken(req) });
-  const { source, redefine } = await readJson(req, NewCell, { maxBytes: MAX_SOURCE_BYTES + 1024 });
+  const { source, redefine } = await readJson(req, NewCell, { limit: "cellSourceBytes", slackBytes: 1024 });
   await requireRedefinitionConsent(user, id, definedNames(source), redefine === true);
   // A long sweep in the cell becomes a background experiment, which cancelling the cell
   // cancels too (lib/experiments/README.md, "Sweeps in a cell").

@@ -18,7 +18,7 @@ export const GET = route(async (_req, { params }: Context) => {
 export const POST = route(async (req, { params }: Context) => {
   const user = await requireUser();
   const { id } = await params;
-  const body = await readJson(req, NewInvitation, { maxBytes: 4 * 1024 });
+  const body = await readJson(req, NewInvitation, { limit: "shortBodyBytes" });
   const invitation = await createInvitation(user, id, body, publicBase(req), clientAddress(req.headers));
   return NextResponse.json({ invitation }, { status: 201 });
 });

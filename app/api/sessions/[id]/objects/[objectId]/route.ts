@@ -1,5 +1,6 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
+import { atMost } from "@/lib/limits";
 import { requireUser } from "@/lib/auth/current-user";
 import { requireSessionAccess } from "@/lib/auth/access";
 import { readJson } from "@/lib/http/body";
@@ -18,7 +19,7 @@ const Rename = z
     name: z
       .string()
       .regex(/^[A-Za-z][A-Za-z0-9_']*$/, "a name starts with a letter and continues with letters, digits, _ or '")
-      .max(64)
+      .max(...atMost("objectNameChars"))
       .refine((n) => !KEYWORDS.has(n), "a keyword cannot be a name"),
   })
   .strict();

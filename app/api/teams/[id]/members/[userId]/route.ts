@@ -11,7 +11,7 @@ type Context = { params: Promise<{ id: string; userId: string }> };
 export const PATCH = route(async (req, { params }: Context) => {
   const user = await requireUser();
   const { id, userId } = await params;
-  const { role } = await readJson(req, RoleChange, { maxBytes: 1024 });
+  const { role } = await readJson(req, RoleChange, { limit: "shortBodyBytes" });
   return NextResponse.json({ member: await changeRole(user, id, userId, role, clientAddress(req.headers)) });
 });
 
