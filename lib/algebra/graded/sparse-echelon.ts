@@ -55,7 +55,9 @@ export class SparseEchelon<C> implements Accumulator<C> {
 
   /// Adds c to coordinate k of the vector being accumulated (for `insertAccumulated`).
   add(k: number, c: C): void {
-    this.acc[k] = this.K.add(this.acc[k], c);
+    // over GF(p) plain sums (exact in a double), reduced when the coordinate is visited
+    if (this.p) (this.acc as unknown as number[])[k] += c as unknown as number;
+    else this.acc[k] = this.K.add(this.acc[k], c);
     this.heap.push(k);
   }
 
