@@ -32,6 +32,10 @@ export interface FrameStrategy {
   /// Divide with the general heap division (module/divide.ts) even where the integer-key
   /// division of frame-division.ts applies.
   generalDivision?: boolean;
+  /// Release the columns of level k once level k + 1 is built and its scalar ranks read
+  /// (callers that want only Betti numbers: the minimisation, which needs every level,
+  /// never runs for them).
+  dropFinishedLevels?: boolean;
 }
 
 /// Called when level k (the columns of d_k) is finished.
@@ -87,6 +91,8 @@ export function schreyerResolution<C>(
     );
     S.cols.push(cols);
     onLevel(S, level + 1);
+    // level + 1 divides the next level; level itself is read no more
+    if (strategy.dropFinishedLevels) S.cols[level] = [];
   }
   return S;
 }
