@@ -47,6 +47,15 @@ function keyLo(D: Digits, m: Mono): number {
   return s;
 }
 
+/// dst = a·b in the packed layout (monomial.ts: key and degree add, masks or).
+function productInto(dst: Mono, a: Mono, b: Mono): Mono {
+  dst[0] = a[0] + b[0];
+  dst[1] = a[1] + b[1];
+  dst[2] = a[2] | b[2];
+  for (let i = HEAD, len = dst.length; i < len; i++) dst[i] = a[i] + b[i];
+  return dst;
+}
+
 /// One summand s·t·v[pos..] of the dividend (or of a subtracted multiple of a divisor),
 /// its current term's key (hi, lo) and basis element kept at hand for the heap.
 interface Stream<C> {
@@ -102,6 +111,8 @@ export function frameDivider<C>(
   for (const list of byComp.values()) list.sort((a, b) => gens[a].mono.length - gens[b].mono.length || a - b);
   const rank = O.rank;
   const K = R.K;
+  // the packed monomial of the current term, only read before the next one
+  const scratch = new Int32Array(HEAD + R.n);
 
   const before = (x: Stream<C>, y: Stream<C>): boolean =>
     x.hi < y.hi || (x.hi === y.hi && (x.lo < y.lo || (x.lo === y.lo && rank[x.comp] > rank[y.comp])));
@@ -184,7 +195,7 @@ export function frameDivider<C>(
           advance(h);
         }
         if (K.isZero(c)) continue;
-        const m = monoMul(ft, fv.tot[fpos]);
+        const m = productInto(scratch, ft, fv.tot[fpos]);
         const l = divisor(m, c0);
         if (l < 0) throw new Error("frame division: a term of the dividend has no divisor; the level is not a Gröbner basis");
         const g = gens[l];
