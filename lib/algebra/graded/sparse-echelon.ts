@@ -30,8 +30,13 @@ export interface Accumulator<C> {
 /// own, cleared as they are read. Over GF(p), p < 2^26, the hot loop is plain number
 /// arithmetic.
 export class SparseEchelon<C> implements Accumulator<C> {
-  readonly rows: SparseRow<C>[] = [];
   readonly pivots: number[] = [];
+  /// The rows, one after the other (no object per row: a kernel basis has hundreds of
+  /// thousands of rows of one or two entries, and per-row arrays were most of the garbage):
+  /// row r is idx/val[start[r] … start[r + 1]), its first entry the pivot with value 1.
+  readonly idx: number[] = [];
+  readonly val: C[] = [];
+  readonly start: number[] = [0];
   /// For every coordinate, the row whose pivot it is, else −1.
   private readonly pivotRow: Int32Array;
   private readonly acc: C[];
@@ -50,7 +55,15 @@ export class SparseEchelon<C> implements Accumulator<C> {
   }
 
   get rank(): number {
-    return this.rows.length;
+    return this.pivots.length;
+  }
+
+  /// The rows as separate sparse vectors (a copy, for inspection).
+  get rows(): SparseRow<C>[] {
+    return this.pivots.map((_, r) => ({
+      idx: this.idx.slice(this.start[r], this.start[r + 1]),
+      val: this.val.slice(this.start[r], this.start[r + 1]),
+    }));
   }
 
   /// Adds c to coordinate k of the vector being accumulated (for `insertAccumulated`).
@@ -62,30 +75,34 @@ export class SparseEchelon<C> implements Accumulator<C> {
   }
 
   /// Adds the vector accumulated by `add` to the span (and clears the accumulator); false
-  /// when it already lies in the span.
+  /// when it already lies in the span. The reduced vector is written straight after the
+  /// last row and kept there only when it is not zero.
   insertAccumulated(): boolean {
-    const idx: number[] = [],
-      val: C[] = [];
-    if (this.p) this.reduceGF(idx as number[], val as unknown as number[]);
-    else this.reduceGeneric(idx, val);
-    if (idx.length === 0) return false;
-    const K = this.K;
-    if (!K.isOne(val[0])) {
-      const inv = K.inv(val[0]);
-      for (let k = 0; k < val.length; k++) val[k] = K.mul(val[k], inv);
+    const from = this.idx.length;
+    if (this.p) this.reduceGF();
+    else this.reduceGeneric();
+    const to = this.idx.length;
+    if (to === from) return false;
+    const K = this.K,
+      val = this.val;
+    if (!K.isOne(val[from])) {
+      const inv = K.inv(val[from]);
+      for (let k = from; k < to; k++) val[k] = K.mul(val[k], inv);
     }
-    this.pivotRow[idx[0]] = this.rows.length;
-    this.rows.push({ idx, val });
-    this.pivots.push(idx[0]);
+    this.pivotRow[this.idx[from]] = this.pivots.length;
+    this.pivots.push(this.idx[from]);
+    this.start.push(to);
     return true;
   }
 
-  private reduceGF(idx: number[], val: number[]): void {
+  private reduceGF(): void {
     const p = this.p,
       w = this.acc as unknown as number[],
       heap = this.heap,
       pivotRow = this.pivotRow,
-      rows = this.rows as unknown as SparseRow<number>[];
+      start = this.start,
+      idx = this.idx,
+      val = this.val as unknown as number[];
     while (heap.size > 0) {
       const k = heap.pop();
       const a = w[k] % p;
@@ -97,22 +114,23 @@ export class SparseEchelon<C> implements Accumulator<C> {
         val.push(a);
         continue;
       }
-      const nc = p - a,
-        ri = rows[r].idx,
-        rv = rows[r].val;
-      for (let t = 1; t < ri.length; t++) {
-        const i = ri[t];
-        w[i] = (w[i] + nc * rv[t]) % p;
+      const nc = p - a;
+      for (let t = start[r] + 1, end = start[r + 1]; t < end; t++) {
+        const i = idx[t];
+        w[i] = (w[i] + nc * val[t]) % p;
         heap.push(i);
       }
     }
   }
 
-  private reduceGeneric(idx: number[], val: C[]): void {
+  private reduceGeneric(): void {
     const K = this.K,
       w = this.acc,
       heap = this.heap,
-      pivotRow = this.pivotRow;
+      pivotRow = this.pivotRow,
+      start = this.start,
+      idx = this.idx,
+      val = this.val;
     while (heap.size > 0) {
       const k = heap.pop();
       const a = w[k];
@@ -124,10 +142,9 @@ export class SparseEchelon<C> implements Accumulator<C> {
         val.push(a);
         continue;
       }
-      const row = this.rows[r];
-      for (let t = 1; t < row.idx.length; t++) {
-        const i = row.idx[t];
-        w[i] = K.sub(w[i], K.mul(a, row.val[t]));
+      for (let t = start[r] + 1, end = start[r + 1]; t < end; t++) {
+        const i = idx[t];
+        w[i] = K.sub(w[i], K.mul(a, val[t]));
         heap.push(i);
       }
     }

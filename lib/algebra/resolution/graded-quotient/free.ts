@@ -118,20 +118,24 @@ export class GradedFree<C> {
   }
 
   /// Adds x_v · w into `out` (coordinates: the positions in the group of degree j + w_v),
-  /// for w sparse over the positions of group `from` of degree j.
+  /// for w sparse over the positions of group `from` of degree j: its entries are
+  /// idx/val[lo … hi) (a row of a SparseEchelon's pool).
   mulVarSparseInto(
     v: number,
     j: number,
     from: readonly number[],
-    w: { idx: readonly number[]; val: readonly C[] },
+    wIdx: readonly number[],
+    wVal: readonly C[],
+    lo: number,
+    hi: number,
     out: Accumulator<C>,
   ): void {
     const K = this.K;
     const L = this.layout(j),
       T = this.layout(j + this.A.weights[v]);
-    for (let k = 0; k < w.idx.length; k++) {
-      const idx = from[w.idx[k]],
-        c = w.val[k];
+    for (let k = lo; k < hi; k++) {
+      const idx = from[wIdx[k]],
+        c = wVal[k];
       const g = L.generator[idx];
       const col = this.A.mulVar(v, j - this.degrees[g])[idx - L.offsets[g]];
       const at = T.offsets[g];

@@ -278,10 +278,10 @@ function syzygiesOfBlock<C>(
     if (!low) continue;
     const from = F.layout(jl).blocks.get(lk!)!;
     if (low instanceof SparseEchelon && P instanceof SparseEchelon) {
-      for (const b of low.rows) {
+      for (let r = 0; r < low.rank; r++) {
         if (P.rank >= expected) break products;
         checkpoint(opts, info);
-        F.mulVarSparseInto(v, jl, from, b, P);
+        F.mulVarSparseInto(v, jl, from, low.idx, low.val, low.start[r], low.start[r + 1], P);
         P.insertAccumulated();
       }
     } else {
