@@ -103,6 +103,8 @@ describe("Schreyer frame: integer-key division against the general division", ()
       [A.mul(R, x3, x4), A.sub(R, x2, x3)],
     ].map((c) => vecFromPolys(C, O, c));
     const basis = moduleGroebner(C, O, degs, cols);
+    // terms of different degrees in one vector (row degrees 0 and 1): still the integer keys
+    expect(frameDivider(C, O, basis, [])).not.toBeNull();
     const run = (generalDivision: boolean) => schreyerResolution(C, degs, O, basis, UNBOUNDED, undefined, () => {}, { generalDivision });
     const fast = run(false);
     expect(fast.cols.length).toBeGreaterThan(3);

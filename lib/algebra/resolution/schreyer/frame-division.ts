@@ -9,13 +9,13 @@ import type { RingCtx } from "../../poly/ring";
 /// Largest integer a double holds exactly.
 const EXACT = 2 ** 53;
 
-/// Term keys of the monomials of one level as two exact integers (hi, lo): for grevlex and
-/// terms of one degree, a > b exactly when the last exponent where they differ is smaller
-/// in a (common practice), so reading the exponents as digits base B from the last variable
-/// down gives a number that is smaller exactly when the monomial is larger. With B above
-/// every exponent the digits never carry: the key of a product is the sum of the keys, and
-/// a stream of the division advances by two additions where the packed monomial needs a
-/// product of n + 3 slots and a comparison loop.
+/// Term keys of the monomials of one level as exact integers (degree, hi, lo): grevlex
+/// compares degrees first, and for terms of one degree a > b exactly when the last exponent
+/// where they differ is smaller in a (common practice), so reading the exponents as digits
+/// base B from the last variable down gives a number that is smaller exactly when the
+/// monomial is larger. With B above every exponent the digits never carry: the key of a
+/// product is the sum of the keys, and a stream of the division advances by three additions
+/// where the packed monomial needs a product of n + 3 slots and a comparison loop.
 interface Digits {
   /// The exponent of variable i is the digit at weight[i] of hi (i ≥ split) or of lo.
   readonly weight: Float64Array;
@@ -63,16 +63,19 @@ interface Stream<C> {
   readonly s: C;
   /// index of v in the level's vectors
   readonly l: number;
+  readonly tdg: number;
   readonly thi: number;
   readonly tlo: number;
   pos: number;
+  /// the degree (grevlex's first comparison) and the digit keys of the current term
+  dg: number;
   hi: number;
   lo: number;
   comp: number;
 }
 
 /// The division of the Schreyer frame (schreyerSyzygy of module/syzygy.ts) for one level,
-/// when the ring is ordered by grevlex and everything is homogeneous: the same terms, the
+/// when the ring is ordered by grevlex and the module order has one position: the same terms, the
 /// same divisor for each term (the shortest, the first among equals), the same quotients in
 /// the same order — only the comparisons are on exact integer keys, the packed monomial of
 /// a term is formed only when it survives cancellation (in the Plücker ideal of G(2,7) 9 in
@@ -90,15 +93,15 @@ export function frameDivider<C>(
 ): FrameDivider<C> | null {
   if (R.ring.order.kind !== "grevlex" || gens.length === 0) return null;
   for (let a = 1; a < O.pos.length; a++) if (O.pos[a] !== O.pos[0]) return null;
-  // Every vector homogeneous (its terms' comparison monomials of one degree), and the
-  // largest degree of a division bounds every exponent met in it.
-  for (const v of gens) for (let k = 1; k < v.tot.length; k++) if (v.tot[k][0] !== v.tot[0][0]) return null;
+  // grevlex compares degrees first, so a vector's first term has its largest degree and
+  // the degree of a division's first term bounds every exponent met in it
   let top = 0;
   for (const t of kept) top = Math.max(top, t.mono[0] + gens[t.i].tot[0][0]);
   const D = digitsFor(R.n, top + 1);
   if (!D) return null;
   // Keys of every term of the level's vectors (those of degree > top are never used: a
   // divisor of a term has at most its degree).
+  const dgs = gens.map((v) => Int32Array.from(v.tot, (m) => m[0]));
   const his = gens.map((v) => Float64Array.from(v.tot, (m) => keyHi(D, m)));
   const los = gens.map((v) => Float64Array.from(v.tot, (m) => keyLo(D, m)));
   const byComp = new Map<number, number[]>();
@@ -114,11 +117,12 @@ export function frameDivider<C>(
   // the packed monomial of the current term, only read before the next one
   const scratch = new Int32Array(HEAD + R.n);
 
+  // degree first (larger is bigger), then the digits (smaller is bigger), then the rank
   const before = (x: Stream<C>, y: Stream<C>): boolean =>
-    x.hi < y.hi || (x.hi === y.hi && (x.lo < y.lo || (x.lo === y.lo && rank[x.comp] > rank[y.comp])));
+    x.dg > y.dg || (x.dg === y.dg && (x.hi < y.hi || (x.hi === y.hi && (x.lo < y.lo || (x.lo === y.lo && rank[x.comp] > rank[y.comp])))));
 
-  function stream(t: Mono, thi: number, tlo: number, s: C, l: number): Stream<C> {
-    return { t, s, l, thi, tlo, pos: 1, hi: thi + his[l][1], lo: tlo + los[l][1], comp: gens[l].comp[1] };
+  function stream(t: Mono, tdg: number, thi: number, tlo: number, s: C, l: number): Stream<C> {
+    return { t, s, l, tdg, thi, tlo, pos: 1, dg: tdg + dgs[l][1], hi: thi + his[l][1], lo: tlo + los[l][1], comp: gens[l].comp[1] };
   }
 
   function divisor(m: Mono, comp: number): number {
@@ -163,6 +167,7 @@ export function frameDivider<C>(
       const advance = (st: Stream<C>) => {
         const v = gens[st.l];
         if (++st.pos < v.mono.length) {
+          st.dg = st.tdg + dgs[st.l][st.pos];
           st.hi = st.thi + his[st.l][st.pos];
           st.lo = st.tlo + los[st.l][st.pos];
           st.comp = v.comp[st.pos];
@@ -175,21 +180,21 @@ export function frameDivider<C>(
       // m·e_i − m'·e_j with m·in(g_i) = m'·in(g_j): the leads cancel, the tails are divided
       const mj = monoDiv(monoLcm(R.layout, gi.tot[0], gj.tot[0]), gj.tot[0]);
       const minusOne = K.neg(K.one);
-      if (gi.mono.length > 1) push(stream(t.mono, keyHi(D, t.mono), keyLo(D, t.mono), K.one, t.i));
-      if (gj.mono.length > 1) push(stream(mj, keyHi(D, mj), keyLo(D, mj), minusOne, t.j));
+      if (gi.mono.length > 1) push(stream(t.mono, t.mono[0], keyHi(D, t.mono), keyLo(D, t.mono), K.one, t.i));
+      if (gj.mono.length > 1) push(stream(mj, mj[0], keyHi(D, mj), keyLo(D, mj), minusOne, t.j));
       const mono: Mono[] = [t.mono, mj],
         comp: number[] = [t.i, t.j],
         coef: C[] = [K.one, minusOne];
       while (heap.length > 0) {
         ticker.tick();
         const first = pop();
-        const { hi, lo, comp: c0, t: ft, pos: fpos } = first;
+        const { dg, hi, lo, comp: c0, t: ft, pos: fpos } = first;
         const fv = gens[first.l];
         let c = K.mul(first.s, fv.coef[fpos]);
         advance(first);
         while (heap.length > 0) {
           const h = heap[0];
-          if (h.comp !== c0 || h.hi !== hi || h.lo !== lo) break;
+          if (h.comp !== c0 || h.hi !== hi || h.lo !== lo || h.dg !== dg) break;
           pop();
           c = K.add(c, K.mul(h.s, gens[h.l].coef[h.pos]));
           advance(h);
@@ -204,7 +209,7 @@ export function frameDivider<C>(
         comp.push(l);
         coef.push(K.neg(c));
         if (mono.length - 2 > maxTerms) throw internalLimit(mono.length - 2, maxTerms);
-        if (g.mono.length > 1) push(stream(q, hi - his[l][0], lo - los[l][0], K.neg(c), l));
+        if (g.mono.length > 1) push(stream(q, dg - dgs[l][0], hi - his[l][0], lo - los[l][0], K.neg(c), l));
       }
       return { mono, comp, coef, tot: mono.map((m, k) => monoMul(m, next.T[comp[k]])) };
     },

@@ -158,8 +158,8 @@ function syzygiesOfLevel<C>(
   const O = S.orders[level - 1];
   const next = S.orders[level];
   const D = divisorsOf(gens);
-  // grevlex and homogeneous (every resolution of a graded module over a grevlex ring): the
-  // same division on integer keys (frame-division.ts)
+  // over a grevlex ring (term over position and its Schreyer orders): the same division on
+  // integer keys (frame-division.ts)
   const fast = strategy.generalDivision ? null : frameDivider(R, O, gens, kept);
   const cols = new Array<Vec<C>>(kept.length);
   const byDegree = kept.map((_, p) => p).sort((a, b) => keptDegs[a] - keptDegs[b]);
