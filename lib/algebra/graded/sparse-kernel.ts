@@ -20,20 +20,21 @@ export function sparseKernelBasis<C>(
 ): SparseRow<C>[] {
   const w = new Array<C>(tgt).fill(K.zero);
   const z = new Array<C>(src).fill(K.zero);
+  // the positions of z touched, each listed once
+  const inZ = new Uint8Array(src);
   const heap = new PositionHeap(tgt);
   const pivotRow = new Int32Array(tgt).fill(-1);
   const rows: SparseRow<C>[] = [],
     combos: SparseRow<C>[] = [];
   const out: SparseRow<C>[] = [];
   /// The combination accumulated in z at the positions touched, cleared.
-  const gather = (touched: number[]): SparseRow<C> => {
-    touched.sort((a, b) => a - b);
+  const gather = (list: number[]): SparseRow<C> => {
+    // a typed array sorts numerically without a comparator call per step
+    const touched = Int32Array.from(list).sort();
     const idx: number[] = [],
       val: C[] = [];
-    let last = -1;
     for (const k of touched) {
-      if (k === last) continue;
-      last = k;
+      inZ[k] = 0;
       const a = z[k];
       if (!K.isZero(a)) {
         idx.push(k);
@@ -51,6 +52,7 @@ export function sparseKernelBasis<C>(
     }
     const tz: number[] = [j];
     z[j] = K.one;
+    inZ[j] = 1;
     const idx: number[] = [],
       val: C[] = [];
     while (heap.size > 0) {
@@ -74,7 +76,10 @@ export function sparseKernelBasis<C>(
       for (let t = 0; t < combo.idx.length; t++) {
         const i = combo.idx[t];
         z[i] = K.sub(z[i], K.mul(c, combo.val[t]));
-        tz.push(i);
+        if (!inZ[i]) {
+          inZ[i] = 1;
+          tz.push(i);
+        }
       }
     }
     const combo = gather(tz);
