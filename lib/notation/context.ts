@@ -48,6 +48,9 @@ export interface Evaluator {
   applyFunction(fn: Value, args: Value[], span: Span, f: Frame): Value;
   /// the notation's equality of two values
   equal(a: Value, b: Value, span: Span): boolean;
+  /// The span of the call being evaluated when its value is read only for Betti numbers
+  /// (resolve(…).betti, .ranks, .length, .complete): such a resolve keeps no differentials.
+  readonly bettiOnlyCall?: Span | null;
 }
 
 /// A call of a built-in function, method or property.

@@ -22,8 +22,26 @@ const PREDEFINED: Record<string, Value> = {
   none: { type: "None" },
 };
 
+/// Properties of a Complex that read only its Betti numbers.
+const BETTI_READS = new Set(["betti", "ranks", "length", "complete"]);
+
 export class Interpreter implements Evaluator {
   constructor(readonly session: Session) {}
+
+  bettiOnlyCall: Span | null = null;
+
+  /// The object of a property access. In resolve(…).betti (and .ranks, .length, .complete)
+  /// the call's value is read for its Betti numbers only, so the call is told (through
+  /// `bettiOnlyCall`, its own span) and a resolution keeps no differentials (issue 17).
+  private evalObjectOf(object: Expr, property: string, f: Frame): Value {
+    const saved = this.bettiOnlyCall;
+    this.bettiOnlyCall = object.kind === "Call" && BETTI_READS.has(property) ? object.span : null;
+    try {
+      return this.eval(object, f);
+    } finally {
+      this.bettiOnlyCall = saved;
+    }
+  }
 
   /// Throws a "cancelled" error once the signal fired; called at every node.
   private checkSignal(span: Span): void {
@@ -96,7 +114,7 @@ export class Interpreter implements Evaluator {
       case "Call":
         return this.call(e, f);
       case "Property": {
-        const obj = this.eval(e.object, f);
+        const obj = this.evalObjectOf(e.object, e.name.name, f);
         if (obj.type === "Record" && obj.fields.has(e.name.name)) return obj.fields.get(e.name.name)!;
         return getProperty(this, obj, e.name.name, e, f);
       }

@@ -247,6 +247,8 @@ export function poincareValue([M]: readonly Value[], c: CallContext): Value {
   const r = minimalResolution({
     ...t.input,
     length: terms - 1,
+    // only the ranks are read: no differential is kept
+    bettiOnly: true,
     // degree by degree, each finished column streams as a one-column, still-incomplete Betti table
     partial:
       partial && t.method === "graded-quotient"

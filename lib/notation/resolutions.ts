@@ -30,11 +30,13 @@ export function resolveValue([m]: readonly Value[], c: CallContext): Value {
   const partial = c.interp.session.partial;
   // each finished column streams as a one-column, still-incomplete Betti table
   const running = t.method === "graded-quotient" ? { note: "the resolution is still running" } : {};
+  // resolve(…).betti and the like: the value is read for its Betti numbers only
+  const bettiOnly = c.interp.bettiOnlyCall === c.span;
   const r = minimalResolution({
     ...t.input,
     length,
     degree: degree === undefined ? undefined : degree + t.shift,
-    keepMaps: MAX_MAP_ENTRIES,
+    ...(bettiOnly ? { bettiOnly } : { keepMaps: MAX_MAP_ENTRIES }),
     partial: partial
       ? (col) =>
           partial({

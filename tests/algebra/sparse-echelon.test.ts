@@ -33,8 +33,43 @@ describe("sparse echelon basis", () => {
             expect(sparse.rank).toBe(dense.rank);
           }
           for (const r of sparse.rows) expect(K.isOne(r.val[0])).toBe(true);
+          // The pivots (first nonzero indices of an echelon basis) depend only on the span.
+          expect([...sparse.pivots].sort((a, b) => a - b)).toEqual([...dense.pivots].sort((a, b) => a - b));
         }),
         { numRuns: 40 },
+      );
+    });
+
+    it(`keeps an echelon basis of the span in larger dimensions over ${field.kind === "Q" ? "Q" : `GF(${field.p})`}`, () => {
+      // Vectors of 1–3 entries in dimension 60, many dependent (the shape of products of
+      // syzygies by variables): the rows start at their pivots with 1, the pivots are
+      // distinct, every row is zero at the pivots of the rows stored before it, and the
+      // rank is the exact rank of the vectors inserted.
+      const dim = 60;
+      const vec = fc.array(fc.tuple(fc.integer({ min: 0, max: dim - 1 }), fc.integer({ min: -2, max: 2 })), { minLength: 1, maxLength: 3 });
+      fc.assert(
+        fc.property(fc.array(vec, { minLength: 1, maxLength: 80 }), (vs) => {
+          const sparse = new SparseEchelon(K, dim);
+          const dense = new Echelon(K, dim);
+          const seen: unknown[][] = [];
+          for (const entries of vs) {
+            const v = new Array(dim).fill(K.zero);
+            for (const [i, a] of entries) v[i] = K.add(v[i], K.fromRational(BigInt(a), 1n));
+            expect(sparse.insert({ idx: v.flatMap((a, i) => (K.isZero(a) ? [] : [i])), val: v.filter((a) => !K.isZero(a)) })).toBe(
+              dense.insert(v),
+            );
+            seen.push(v);
+          }
+          expect(sparse.rank).toBe(rankOf(K, dim, seen));
+          expect(new Set(sparse.pivots).size).toBe(sparse.rank);
+          sparse.rows.forEach((r, k) => {
+            expect(r.idx[0]).toBe(sparse.pivots[k]);
+            expect(K.isOne(r.val[0])).toBe(true);
+            for (let t = 1; t < r.idx.length; t++) expect(r.idx[t]).toBeGreaterThan(r.idx[t - 1]);
+            for (let e = 0; e < k; e++) expect(r.idx.includes(sparse.pivots[e])).toBe(false);
+          });
+        }),
+        { numRuns: 25 },
       );
     });
   }

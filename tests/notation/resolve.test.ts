@@ -60,6 +60,23 @@ describe("resolve over a polynomial ring", () => {
     expect(partial.map((col) => col.map(([, , b]) => b).reduce((s, b) => s + b, 0))).toEqual([1, 4, 6, 4, 1]);
   });
 
+  it("resolve(…).betti reads the Betti numbers only, with the same answer as a kept resolution, whose maps still work", async () => {
+    // issue 17, item 3: resolve(…).betti keeps no differentials; the twisted cubic again
+    // (Eagon–Northcott 1962: β = 1, 3, 2)
+    const v = await values(
+      "S := GF(32003)[x, y, z, w]\nI := minors([x, y, z; y, z, w], 2)\nresolve(S / I).betti\nresolve(S / I).ranks\nC := resolve(S / I)\nC.betti\nresolve(S / I).map(2).cols\nC.map(1) * C.map(2)",
+    );
+    expect(entries(v[2])).toEqual([
+      [0, 0, 1],
+      [1, 2, 3],
+      [2, 3, 2],
+    ]);
+    expect((v[3] as unknown as { items: { value: string }[] }).items.map((i) => i.value)).toEqual(["1", "3", "2"]);
+    expect(entries(v[5])).toEqual(entries(v[2]));
+    expect(v[6]).toMatchObject({ type: "Int", value: "2" });
+    expect((v[7] as unknown as { rows: string[][] }).rows.flat().every((e) => e === "0")).toBe(true);
+  });
+
   it("reads (S/J)/I as a module over S/J, and asks for a length bound there", async () => {
     const out = await run("S := GF(7)[x, y]\nA := S / <x^2>\nB := A / <y^2>\nresolve(B)");
     expect(out.error?.kind).toBe("runtime");

@@ -21,7 +21,7 @@ export class GradedQuotient<C = unknown> {
   private readonly leads: number[][];
   private readonly bases = new Map<number, number[][]>();
   private readonly indices = new Map<number, Map<string, number>>();
-  private readonly mults = new Map<string, SparseColumn<C>[]>();
+  private readonly mults: SparseColumn<C>[][][] = [];
 
   constructor(
     readonly S: PolyRing,
@@ -124,8 +124,9 @@ export class GradedQuotient<C = unknown> {
   /// Multiplication by the variable x_v from R_d to R_{d + w_v}: one sparse column per
   /// basis element of R_d.
   mulVar(v: number, d: number): SparseColumn<C>[] {
-    const key = `${v}:${d}`;
-    let M = this.mults.get(key);
+    // cached by [v][d], not by a string key: resolutions call this once per coordinate
+    const byDegree = (this.mults[v] ??= []);
+    let M = byDegree[d];
     if (M) return M;
     const t = d + this.weights[v];
     M = this.basis(d).map((u) => {
@@ -133,7 +134,7 @@ export class GradedQuotient<C = unknown> {
       e[v]++;
       return this.reduceMonomial(t, e);
     });
-    this.mults.set(key, M);
+    byDegree[d] = M;
     return M;
   }
 

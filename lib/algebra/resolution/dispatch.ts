@@ -38,6 +38,10 @@ export interface ResolutionRequest extends ResolutionInput {
   degree?: number;
   /// graded-quotient: keep the differentials while they have at most this many entries.
   keepMaps?: number;
+  /// The caller reads only Betti numbers and ranks: no differential is kept (Schreyer:
+  /// the frame's levels are released as it goes and the result's `map` is refused;
+  /// graded-quotient: no `keepMaps`, so no matrix is built; artinian: small dense maps kept).
+  bettiOnly?: boolean;
   /// each Betti column as soon as it is final (graded methods).
   partial?: (column: FinishedColumn) => void;
   opts?: ComputeOptions;
@@ -83,6 +87,7 @@ function bySchreyer(req: ResolutionRequest): Resolution {
     ...req.opts,
     ...(req.length !== undefined ? { length: req.length } : {}),
     ...(req.degree !== undefined ? { degree: req.degree } : {}),
+    ...(req.bettiOnly ? { bettiOnly: true } : {}),
     partial: partial
       ? (col: { i: number; entries: readonly (readonly [number, number])[] }) => partial({ index: col.i, entries: col.entries })
       : undefined,
@@ -105,7 +110,7 @@ function byGradedQuotient(req: ResolutionRequest, length: number): QuotientResol
     ...(module ? { module } : { presentation: (M as { presentation: ModulePresentation }).presentation }),
     length,
     degree: req.degree,
-    keepMaps: req.keepMaps,
+    keepMaps: req.bettiOnly ? undefined : req.keepMaps,
     opts: {
       ...req.opts,
       partial: partial ? (col) => partial({ index: col.index, entries: col.entries.map((e) => [e.degree, e.count] as const) }) : undefined,

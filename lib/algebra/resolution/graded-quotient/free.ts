@@ -1,5 +1,6 @@
 import type { Coeffs } from "../../field/coeffs";
 import type { GradedQuotient, SparseColumn } from "../../graded/piece";
+import type { Accumulator } from "../../graded/sparse-echelon";
 import { multidegreeKey, WHOLE_DEGREE, type BlockKey } from "./multidegree";
 
 /// A sparse vector: (index, coefficient) pairs.
@@ -116,12 +117,30 @@ export class GradedFree<C> {
     return out;
   }
 
-  /// Adds x_v · w into `out` (a zeroed dense vector of the group of degree j + w_v), for w
-  /// sparse over the positions of group `from` of degree j.
-  mulVarSparseInto(v: number, j: number, from: readonly number[], w: { idx: readonly number[]; val: readonly C[] }, out: C[]): void {
+  /// Adds x_v · w into `out` (coordinates: the positions in the group of degree j + w_v),
+  /// for w sparse over the positions of group `from` of degree j: its entries are
+  /// idx/val[lo … hi) (a row of a SparseEchelon's pool).
+  mulVarSparseInto(
+    v: number,
+    j: number,
+    from: readonly number[],
+    wIdx: readonly number[],
+    wVal: readonly C[],
+    lo: number,
+    hi: number,
+    out: Accumulator<C>,
+  ): void {
+    const K = this.K;
     const L = this.layout(j),
       T = this.layout(j + this.A.weights[v]);
-    for (let k = 0; k < w.idx.length; k++) this.addMulVar(v, j, from[w.idx[k]], w.val[k], out, L, T);
+    for (let k = lo; k < hi; k++) {
+      const idx = from[wIdx[k]],
+        c = wVal[k];
+      const g = L.generator[idx];
+      const col = this.A.mulVar(v, j - this.degrees[g])[idx - L.offsets[g]];
+      const at = T.offsets[g];
+      for (let r = 0; r < col.idx.length; r++) out.add(T.local[at + col.idx[r]], K.mul(c, col.val[r]));
+    }
   }
 
   /// x_v · w for a sparse w of degree j, as a sparse vector of degree j + w_v.

@@ -9,7 +9,7 @@ import { checkLimit, checkpoint, type ComputeOptions, type ProgressInfo } from "
 import { add, degree, monomial, terms, zero } from "../../poly/checked";
 import { type Poly } from "../../poly/poly";
 import { type PolyRing } from "../../poly/ring";
-import { compact, densify, GradedFree, type Layout, type Sparse, sparsify } from "./free";
+import { compact, densify, GradedFree, type Layout, type Sparse } from "./free";
 import { freeModule } from "../../module/free";
 import { moduleHilbertSeries } from "../../module/hilbert";
 import { hilbertFunctionValues } from "../../hilbert/series";
@@ -278,10 +278,10 @@ function syzygiesOfBlock<C>(
     if (!low) continue;
     const from = F.layout(jl).blocks.get(lk!)!;
     if (low instanceof SparseEchelon && P instanceof SparseEchelon) {
-      for (const b of low.rows) {
+      for (let r = 0; r < low.rank; r++) {
         if (P.rank >= expected) break products;
         checkpoint(opts, info);
-        F.mulVarSparseInto(v, jl, from, b, P.accumulator);
+        F.mulVarSparseInto(v, jl, from, low.idx, low.val, low.start[r], low.start[r + 1], P);
         P.insertAccumulated();
       }
     } else {
@@ -325,10 +325,16 @@ function syzygiesOfBlock<C>(
     if (ker.length !== expected - P.rank) throw new AlgebraError("runtime", "resolution: internal inconsistency (kernel dimension)");
     const md = multidegreeOf(key);
     for (const c of ker) {
-      const z = new Array<C>(dimF).fill(K.zero);
-      c.idx.forEach((k, t) => (z[free[k]] = c.val[t]));
-      insertDense(P, z);
-      next.addGenerator(j, sparsify(K, z, block), md);
+      // sparse throughout: a dense vector of dimF per new generator was most of the time of
+      // the largest pieces (free, c.idx and block all increase, so the indices stay sorted)
+      const local = c.idx.map((k) => free[k]);
+      if (P instanceof SparseEchelon) P.insert({ idx: local, val: c.val });
+      else {
+        const z = new Array<C>(dimF).fill(K.zero);
+        local.forEach((k, t) => (z[k] = c.val[t]));
+        P.insert(z);
+      }
+      next.addGenerator(j, { idx: local.map((k) => block[k]), val: c.val.slice() }, md);
     }
   }
   return { kernel: P, decomposable };

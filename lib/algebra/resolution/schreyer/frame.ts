@@ -5,6 +5,7 @@ import { divisorsOf } from "../../module/divide";
 import { schreyerOrder, type ModuleOrder } from "../../module/order";
 import { schreyerFrame, schreyerSort, schreyerSyzygy } from "../../module/syzygy";
 import type { Vec } from "../../module/vector";
+import { frameDivider } from "./frame-division";
 
 /// The Schreyer resolution F_0 ← F_1 ← … of a module F_0 / ⟨g⟩: level k holds the columns of
 /// d_k (vectors in F_{k−1}) and the degrees of the basis of F_k.
@@ -26,6 +27,17 @@ export interface FrameBounds {
   readonly maxDegree: number;
 }
 
+/// How the frame is computed, for tests that compare the ways.
+export interface FrameStrategy {
+  /// Divide with the general heap division (module/divide.ts) even where the integer-key
+  /// division of frame-division.ts applies.
+  generalDivision?: boolean;
+  /// Release the columns of level k once level k + 1 is built and its scalar ranks read
+  /// (callers that want only Betti numbers: the minimisation, which needs every level,
+  /// never runs for them).
+  dropFinishedLevels?: boolean;
+}
+
 /// Called when level k (the columns of d_k) is finished.
 export type LevelDone<C> = (S: SchreyerResolution<C>, k: number) => void;
 
@@ -41,6 +53,7 @@ export function schreyerResolution<C>(
   bounds: FrameBounds,
   opts: ComputeOptions | undefined,
   onLevel: LevelDone<C>,
+  strategy: FrameStrategy = {},
 ): SchreyerResolution<C> {
   const S: SchreyerResolution<C> = {
     degrees: [[...degrees0]],
@@ -68,7 +81,7 @@ export function schreyerResolution<C>(
     }
     const { kept, keptDegs } = withinDegreeBound(S, level, frame, bounds);
     checkLimit(opts, "maxBasisSize", kept.length, `the rank of the free module F_${level + 1}`);
-    const cols = syzygiesOfLevel(R, S, level, gens, kept, keptDegs, { at, info, ticker, opts });
+    const cols = syzygiesOfLevel(R, S, level, gens, kept, keptDegs, { at, info, ticker, opts, strategy });
     S.degrees.push(keptDegs);
     S.orders.push(
       schreyerOrder(
@@ -78,6 +91,8 @@ export function schreyerResolution<C>(
     );
     S.cols.push(cols);
     onLevel(S, level + 1);
+    // level + 1 divides the next level; level itself is read no more
+    if (strategy.dropFinishedLevels) S.cols[level] = [];
   }
   return S;
 }
@@ -136,13 +151,16 @@ function syzygiesOfLevel<C>(
   gens: readonly Vec<C>[],
   kept: readonly FrameTerm[],
   keptDegs: readonly number[],
-  run: { at: Position; info: () => ProgressInfo; ticker: Ticker; opts: ComputeOptions | undefined },
+  run: { at: Position; info: () => ProgressInfo; ticker: Ticker; opts: ComputeOptions | undefined; strategy: FrameStrategy },
 ): Vec<C>[] {
-  const { at, info, ticker, opts } = run;
+  const { at, info, ticker, opts, strategy } = run;
   const maxTerms = opts?.limits?.maxTerms ?? Infinity;
   const O = S.orders[level - 1];
   const next = S.orders[level];
   const D = divisorsOf(gens);
+  // over a grevlex ring (term over position and its Schreyer orders): the same division on
+  // integer keys (frame-division.ts)
+  const fast = strategy.generalDivision ? null : frameDivider(R, O, gens, kept);
   const cols = new Array<Vec<C>>(kept.length);
   const byDegree = kept.map((_, p) => p).sort((a, b) => keptDegs[a] - keptDegs[b]);
   at.done = 0;
@@ -157,7 +175,7 @@ function syzygiesOfLevel<C>(
       throw limitError("maxDegree", `the resolution reached internal degree ${at.degree}, above the limit maxDegree = ${limit}`);
     }
     checkpoint(opts, info);
-    cols[p] = schreyerSyzygy(R, O, gens, D, next, kept[p], ticker, maxTerms);
+    cols[p] = fast ? fast.syzygy(kept[p], next, ticker, maxTerms) : schreyerSyzygy(R, O, gens, D, next, kept[p], ticker, maxTerms);
     at.done++;
   }
   return cols;
