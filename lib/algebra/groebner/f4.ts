@@ -4,7 +4,8 @@ import { checkLimit, checkpoint, Ticker, type ComputeOptions } from "../options"
 import { asTyped, makePoly, type Poly } from "../poly/poly";
 import type { RingCtx } from "../poly/ring";
 import type { BasisElt, Reduced, ReductionStep, Strategy } from "./basis";
-import { reduceF4Matrix, reduceTails, type F4Matrix, type SparseRow } from "./f4-linalg";
+import { reduceF4Matrix, reduceTails } from "./f4-linalg";
+import type { F4Matrix, SparseRow } from "./f4-linalg-types";
 import { MonoTable } from "./monotable";
 import { makeMonic } from "./reduce";
 
