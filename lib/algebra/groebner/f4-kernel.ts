@@ -6,7 +6,7 @@ import type { SparseRow } from "./f4-linalg-types";
 /// The WebAssembly side of the F4 matrix reduction (source: kernel/f4-kernel.as.ts, built
 /// by `npm run build:f4-kernel` into f4-kernel-wasm.ts). This file lays a matrix out in the
 /// module's linear memory and drives it block by block, so the ticker (time limits,
-/// cancellation) still runs between blocks of four rows.
+/// cancellation) still runs between blocks of eight rows.
 ///
 /// Memory: each reducer owns one instance (its own linear memory, which counts in the
 /// process's resident memory). Instances are reused from matrix to matrix; one whose memory
@@ -15,7 +15,7 @@ import type { SparseRow } from "./f4-linalg-types";
 /// engine's limit error.
 
 /// Rows reduced together (the lanes of the kernel's accumulator).
-const BLOCK = 4;
+const BLOCK = 8;
 /// An idle instance is kept for the next matrix only while its memory is at most this.
 const KEEP_BYTES = 64 << 20;
 /// Where the caller's layout starts (above the module's own globals; checked on load).
@@ -140,8 +140,8 @@ export class WasmPivotReducer {
     const vals = align(cols + 4 * colWords);
     this.rowTab = align(vals + 4 * valWords);
     this.rowData = align(this.rowTab + 12 * BLOCK);
-    const acc = align(this.rowData + BLOCK * 8 * ncols);
-    this.stage = align(acc + 32 * ncols);
+    const acc = Math.ceil((this.rowData + BLOCK * 8 * ncols) / 64) * 64;
+    this.stage = align(acc + 8 * BLOCK * ncols);
     this.stageLen = align(this.stage + BLOCK * 8 * nB);
     const dense = align(this.stageLen + 4 * BLOCK);
     const etab = align(dense + 8 * nB);
@@ -180,7 +180,7 @@ export class WasmPivotReducer {
     return this.k;
   }
 
-  /// Reduces rows[from, from + count) (count ≤ 4, each without its first `skip` entries) and
+  /// Reduces rows[from, from + count) (count ≤ 8, each without its first `skip` entries) and
   /// stages their B-parts in the kernel.
   private reduceBlock(rows: readonly SparseRow[], from: number, count: number, skip: number): void {
     const k = this.kernel();

@@ -20,7 +20,7 @@ export type { F4Matrix, SparseRow } from "./f4-linalg-types";
 /// is left, made monic and kept; so memory holds the rank of D', not every remainder.
 ///
 /// Two implementations compute exactly the same rows (tests/algebra/f4-kernel.test.ts):
-/// the WebAssembly kernel of f4-kernel.ts (kernel/f4-kernel.as.ts: four rows at a time in
+/// the WebAssembly kernel of f4-kernel.ts (kernel/f4-kernel.as.ts: eight rows at a time in
 /// 64-bit integer lanes with SIMD, sparse rows in u32 arrays), which the engine uses, and
 /// the TypeScript one below (`reduceF4MatrixTS`, `reduceRowTS`), kept as the reference and
 /// for reducing a few rows without loading a matrix into the kernel. In the TypeScript one
@@ -265,7 +265,7 @@ export class PivotReducer {
     return this.kernel.reduceRows([row instanceof Float64Array ? sparseOfDense(row) : row])[0];
   }
 
-  /// The B-parts of rows, four at a time (faster than one by one).
+  /// The B-parts of rows, eight at a time (faster than one by one).
   reduceRows(rows: readonly SparseRow[], ticker?: Ticker): (SparseRow | null)[] {
     return this.kernel.reduceRows(rows, 0, ticker);
   }

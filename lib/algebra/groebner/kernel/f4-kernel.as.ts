@@ -4,9 +4,10 @@
 // ../f4-kernel-wasm.ts; excluded from the TypeScript project (it uses AssemblyScript's
 // machine types: u32, i64, v128).
 //
-// Rows being reduced are held four at a time in one dense accumulator, the four values of a
-// column side by side (64-bit lanes), so every entry of a sparse pivot row is read once for
-// four rows and applied with two 128-bit SIMD multiply-adds. Arithmetic is exact in 64-bit
+// Rows being reduced are held eight at a time in one dense accumulator, the eight values of a
+// column side by side (64-bit lanes, one 64-byte cache line a column), so every entry of a
+// sparse pivot row is read once for eight rows and applied with four 128-bit SIMD
+// multiply-adds. Arithmetic is exact in 64-bit
 // integers with delayed modular reduction (common practice in F4 implementations; see
 // J.-C. Faugère, S. Lachartre, PASCO 2010, on reducing modulo p only when needed):
 //   mode 0 (p < 2^24): lanes are unsigned sums of products (p − v)·a < p², reduced modulo p
@@ -29,9 +30,9 @@ let NC: i32 = 0;
 let NB: i32 = 0;
 /// Row descriptions of the pivot rows, indexed by pivot column.
 let PIV: usize = 0;
-/// Dense accumulator of four rows: column c at ACC + 32·c, row r in lane r (i64).
+/// Dense accumulator of eight rows: column c at ACC + 64·c, row r in lane r (i64).
 let ACC: usize = 0;
-/// Staged B-parts of the four rows of the last block: row r's columns at STAGE + r·8·NB,
+/// Staged B-parts of the eight rows of the last block: row r's columns at STAGE + r·8·NB,
 /// its residues NB·4 bytes further; lengths at STAGE_LEN + 4r.
 let STAGE: usize = 0;
 let STAGE_LEN: usize = 0;
@@ -106,15 +107,38 @@ function modp(x: u64): u64 {
 /// Reduces every lane of columns [from, NC) modulo p (mode 0, when the budget is used up).
 function normalise(from: i32): void {
   for (let c = from; c < NC; c++) {
-    const a = ACC + ((<usize>c) << 5);
-    for (let r: usize = 0; r < 4; r++) {
+    const a = ACC + ((<usize>c) << 6);
+    for (let r: usize = 0; r < 8; r++) {
       const x = load<u64>(a + (r << 3));
       if (x >= P) store<u64>(a + (r << 3), modp(x));
     }
   }
 }
 
-/// Reduces `count` ≤ 4 rows (descriptions at `rows`, combined column numbering) by the pivot
+/// The multipliers of four lanes (i64) as the low halves of an i32x4: v mod p, or p − v in
+/// mode 0 (which adds where mode 1 subtracts).
+@inline
+function multipliers(x0: v128, x1: v128): v128 {
+  let v0 = <u32>modp(i64x2.extract_lane(x0, 0));
+  let v1 = <u32>modp(i64x2.extract_lane(x0, 1));
+  let v2 = <u32>modp(i64x2.extract_lane(x1, 0));
+  let v3 = <u32>modp(i64x2.extract_lane(x1, 1));
+  if (MODE == 0) {
+    const p = <u32>P;
+    if (v0 != 0) v0 = p - v0;
+    if (v1 != 0) v1 = p - v1;
+    if (v2 != 0) v2 = p - v2;
+    if (v3 != 0) v3 = p - v3;
+  }
+  let m = i32x4.splat(0);
+  m = i32x4.replace_lane(m, 0, v0);
+  m = i32x4.replace_lane(m, 1, v1);
+  m = i32x4.replace_lane(m, 2, v2);
+  m = i32x4.replace_lane(m, 3, v3);
+  return m;
+}
+
+/// Reduces `count` ≤ 8 rows (descriptions at `rows`, combined column numbering) by the pivot
 /// rows and stages their B-parts (renumbered from 0, increasing, residues in [1, p)).
 export function reduceBlock(rows: usize, count: i32): void {
   let first: i32 = NC;
@@ -125,7 +149,7 @@ export function reduceBlock(rows: usize, count: i32): void {
       vp = <usize>load<u32>(e, 8);
     for (let k: usize = 0; k < len; k++) {
       const c = load<u32>(cp + (k << 2));
-      store<u64>(ACC + ((<usize>c) << 5) + ((<usize>r) << 3), <u64>load<u32>(vp + (k << 2)));
+      store<u64>(ACC + ((<usize>c) << 6) + ((<usize>r) << 3), <u64>load<u32>(vp + (k << 2)));
       if (<i32>c < first) first = <i32>c;
     }
   }
@@ -133,39 +157,31 @@ export function reduceBlock(rows: usize, count: i32): void {
   const p2 = i64x2.splat(P2);
   let ops = 0;
   for (let c = first; c < NA; c++) {
-    const a = ACC + ((<usize>c) << 5);
+    const a = ACC + ((<usize>c) << 6);
     const x0 = v128.load(a),
-      x1 = v128.load(a, 16);
-    if (!v128.any_true(v128.or(x0, x1))) continue;
+      x1 = v128.load(a, 16),
+      x2 = v128.load(a, 32),
+      x3 = v128.load(a, 48);
+    if (!v128.any_true(v128.or(v128.or(x0, x1), v128.or(x2, x3)))) continue;
     v128.store(a, zero);
     v128.store(a, zero, 16);
-    let v0 = <u32>modp(i64x2.extract_lane(x0, 0));
-    let v1 = <u32>modp(i64x2.extract_lane(x0, 1));
-    let v2 = <u32>modp(i64x2.extract_lane(x1, 0));
-    let v3 = <u32>modp(i64x2.extract_lane(x1, 1));
-    if ((v0 | v1 | v2 | v3) == 0) continue;
+    v128.store(a, zero, 32);
+    v128.store(a, zero, 48);
+    const mA = multipliers(x0, x1),
+      mB = multipliers(x2, x3);
+    if (!v128.any_true(v128.or(mA, mB))) continue;
     const e = PIV + 12 * <usize>c;
     const cp = <usize>load<u32>(e),
       len = <usize>load<u32>(e, 4),
       vp = <usize>load<u32>(e, 8);
     if (MODE == 0) {
-      const p = <u32>P;
-      if (v0 != 0) v0 = p - v0;
-      if (v1 != 0) v1 = p - v1;
-      if (v2 != 0) v2 = p - v2;
-      if (v3 != 0) v3 = p - v3;
-    }
-    let m = i32x4.splat(0);
-    m = i32x4.replace_lane(m, 0, v0);
-    m = i32x4.replace_lane(m, 1, v1);
-    m = i32x4.replace_lane(m, 2, v2);
-    m = i32x4.replace_lane(m, 3, v3);
-    if (MODE == 0) {
       for (let k: usize = 1; k < len; k++) {
-        const t = ACC + ((<usize>load<u32>(cp + (k << 2))) << 5);
+        const t = ACC + ((<usize>load<u32>(cp + (k << 2))) << 6);
         const w = v128.load32_splat(vp + (k << 2));
-        v128.store(t, i64x2.add(v128.load(t), i64x2.extmul_low_i32x4_u(m, w)));
-        v128.store(t, i64x2.add(v128.load(t, 16), i64x2.extmul_high_i32x4_u(m, w)), 16);
+        v128.store(t, i64x2.add(v128.load(t), i64x2.extmul_low_i32x4_u(mA, w)));
+        v128.store(t, i64x2.add(v128.load(t, 16), i64x2.extmul_high_i32x4_u(mA, w)), 16);
+        v128.store(t, i64x2.add(v128.load(t, 32), i64x2.extmul_low_i32x4_u(mB, w)), 32);
+        v128.store(t, i64x2.add(v128.load(t, 48), i64x2.extmul_high_i32x4_u(mB, w)), 48);
       }
       if (++ops == BUDGET) {
         normalise(c + 1);
@@ -173,26 +189,32 @@ export function reduceBlock(rows: usize, count: i32): void {
       }
     } else {
       for (let k: usize = 1; k < len; k++) {
-        const t = ACC + ((<usize>load<u32>(cp + (k << 2))) << 5);
+        const t = ACC + ((<usize>load<u32>(cp + (k << 2))) << 6);
         const w = v128.load32_splat(vp + (k << 2));
-        let y0 = i64x2.sub(v128.load(t), i64x2.extmul_low_i32x4_u(m, w));
-        let y1 = i64x2.sub(v128.load(t, 16), i64x2.extmul_high_i32x4_u(m, w));
+        let y0 = i64x2.sub(v128.load(t), i64x2.extmul_low_i32x4_u(mA, w));
+        let y1 = i64x2.sub(v128.load(t, 16), i64x2.extmul_high_i32x4_u(mA, w));
+        let y2 = i64x2.sub(v128.load(t, 32), i64x2.extmul_low_i32x4_u(mB, w));
+        let y3 = i64x2.sub(v128.load(t, 48), i64x2.extmul_high_i32x4_u(mB, w));
         y0 = i64x2.add(y0, v128.and(i64x2.lt_s(y0, zero), p2));
         y1 = i64x2.add(y1, v128.and(i64x2.lt_s(y1, zero), p2));
+        y2 = i64x2.add(y2, v128.and(i64x2.lt_s(y2, zero), p2));
+        y3 = i64x2.add(y3, v128.and(i64x2.lt_s(y3, zero), p2));
         v128.store(t, y0);
         v128.store(t, y1, 16);
+        v128.store(t, y2, 32);
+        v128.store(t, y3, 48);
       }
     }
   }
   // The B-parts, staged; the accumulator is left zero.
   const from = first > NA ? first : NA;
-  for (let r = 0; r < 4; r++) {
+  for (let r = 0; r < 8; r++) {
     const sc = STAGE + (<usize>r) * 8 * <usize>NB;
     const sv = sc + 4 * <usize>NB;
     let n: usize = 0;
     if (r < count) {
       for (let c = from; c < NC; c++) {
-        const a = ACC + ((<usize>c) << 5) + ((<usize>r) << 3);
+        const a = ACC + ((<usize>c) << 6) + ((<usize>r) << 3);
         const x = load<u64>(a);
         if (x == 0) continue;
         store<u64>(a, 0);
