@@ -44,6 +44,7 @@ interface KernelExports {
   lastPtr(): number;
   lastLen(): number;
   reduceBlock(rows: number, count: number): void;
+  setEchelon(on: number): void;
   echelonRow(r: number): number;
 }
 
@@ -182,8 +183,9 @@ export class WasmPivotReducer {
 
   /// Reduces rows[from, from + count) (count ≤ 8, each without its first `skip` entries) and
   /// stages their B-parts in the kernel.
-  private reduceBlock(rows: readonly SparseRow[], from: number, count: number, skip: number): void {
+  private reduceBlock(rows: readonly SparseRow[], from: number, count: number, skip: number, echelon: boolean): void {
     const k = this.kernel();
+    k.setEchelon(echelon ? 1 : 0);
     const u32 = new Uint32Array(k.memory.buffer);
     for (let r = 0; r < count; r++) {
       const row = rows[from + r];
@@ -220,7 +222,7 @@ export class WasmPivotReducer {
     for (let i = 0; i < rows.length; i += BLOCK) {
       ticker?.tick();
       const count = Math.min(BLOCK, rows.length - i);
-      this.reduceBlock(rows, i, count, skip);
+      this.reduceBlock(rows, i, count, skip, false);
       for (let r = 0; r < count; r++) out.push(this.staged(r));
     }
     return out;
@@ -236,7 +238,7 @@ export class WasmPivotReducer {
     for (let i = 0; i < rows.length; i += BLOCK) {
       ticker.tick();
       const count = Math.min(BLOCK, rows.length - i);
-      this.reduceBlock(rows, i, count, 0);
+      this.reduceBlock(rows, i, count, 0, true);
       for (let r = 0; r < count; r++) {
         const lead = k.echelonRow(r);
         if (lead === -1) continue;

@@ -43,6 +43,8 @@ let DENSE: usize = 0;
 let ETAB: usize = 0;
 /// Next free byte for echelon rows.
 let BUMP: usize = 0;
+/// Whether reduceBlock also reduces by the echelon rows (off for the tails of a basis).
+let ECHELON: bool = false;
 let LAST_PTR: usize = 0;
 let LAST_LEN: i32 = 0;
 
@@ -80,6 +82,10 @@ export function setup(
 /// The first byte not used by this module's own data (the caller starts above it).
 export function heapBase(): usize {
   return __heap_base;
+}
+
+export function setEchelon(on: bool): void {
+  ECHELON = on;
 }
 
 export function lastPtr(): usize {
@@ -138,8 +144,48 @@ function multipliers(x0: v128, x1: v128): v128 {
   return m;
 }
 
+/// Adds the multiples (multipliers mA, mB) of the tail of one sparse row — columns at cp,
+/// residues at vp, entries [1, len), columns shifted by `shift` — to the eight lanes.
+@inline
+function applyRow(mA: v128, mB: v128, cp: usize, vp: usize, len: usize, shift: usize): void {
+  const acc = ACC + (shift << 6);
+  if (MODE == 0) {
+    for (let k: usize = 1; k < len; k++) {
+      const t = acc + ((<usize>load<u32>(cp + (k << 2))) << 6);
+      const w = v128.load32_splat(vp + (k << 2));
+      v128.store(t, i64x2.add(v128.load(t), i64x2.extmul_low_i32x4_u(mA, w)));
+      v128.store(t, i64x2.add(v128.load(t, 16), i64x2.extmul_high_i32x4_u(mA, w)), 16);
+      v128.store(t, i64x2.add(v128.load(t, 32), i64x2.extmul_low_i32x4_u(mB, w)), 32);
+      v128.store(t, i64x2.add(v128.load(t, 48), i64x2.extmul_high_i32x4_u(mB, w)), 48);
+    }
+  } else {
+    const zero = i64x2.splat(0);
+    const p2 = i64x2.splat(P2);
+    for (let k: usize = 1; k < len; k++) {
+      const t = acc + ((<usize>load<u32>(cp + (k << 2))) << 6);
+      const w = v128.load32_splat(vp + (k << 2));
+      let y0 = i64x2.sub(v128.load(t), i64x2.extmul_low_i32x4_u(mA, w));
+      let y1 = i64x2.sub(v128.load(t, 16), i64x2.extmul_high_i32x4_u(mA, w));
+      let y2 = i64x2.sub(v128.load(t, 32), i64x2.extmul_low_i32x4_u(mB, w));
+      let y3 = i64x2.sub(v128.load(t, 48), i64x2.extmul_high_i32x4_u(mB, w));
+      y0 = i64x2.add(y0, v128.and(i64x2.lt_s(y0, zero), p2));
+      y1 = i64x2.add(y1, v128.and(i64x2.lt_s(y1, zero), p2));
+      y2 = i64x2.add(y2, v128.and(i64x2.lt_s(y2, zero), p2));
+      y3 = i64x2.add(y3, v128.and(i64x2.lt_s(y3, zero), p2));
+      v128.store(t, y0);
+      v128.store(t, y1, 16);
+      v128.store(t, y2, 32);
+      v128.store(t, y3, 48);
+    }
+  }
+}
+
 /// Reduces `count` ≤ 8 rows (descriptions at `rows`, combined column numbering) by the pivot
-/// rows and stages their B-parts (renumbered from 0, increasing, residues in [1, p)).
+/// rows, then by the echelon rows found so far, and stages their B-parts (renumbered from
+/// 0, increasing, residues in [1, p)). Reducing by the echelon rows here, eight rows at a
+/// time, leaves echelonRow only the rows found within the block: the result is the same,
+/// as a row reduced by a set of rows with distinct leading columns until it vanishes at all
+/// of them is unique.
 export function reduceBlock(rows: usize, count: i32): void {
   let first: i32 = NC;
   for (let r = 0; r < count; r++) {
@@ -154,10 +200,25 @@ export function reduceBlock(rows: usize, count: i32): void {
     }
   }
   const zero = i64x2.splat(0);
-  const p2 = i64x2.splat(P2);
   let ops = 0;
-  for (let c = first; c < NA; c++) {
+  for (let c = first; c < NC; c++) {
     const a = ACC + ((<usize>c) << 6);
+    let cp: usize, len: usize, vp: usize, shift: usize;
+    if (c < NA) {
+      const e = PIV + 12 * <usize>c;
+      cp = <usize>load<u32>(e);
+      len = <usize>load<u32>(e, 4);
+      vp = <usize>load<u32>(e, 8);
+      shift = 0;
+    } else {
+      if (!ECHELON) break;
+      const e = ETAB + ((<usize>(c - NA)) << 3);
+      cp = <usize>load<u32>(e);
+      if (cp == 0) continue;
+      len = <usize>load<u32>(e, 4);
+      vp = cp + (len << 2);
+      shift = <usize>NA;
+    }
     const x0 = v128.load(a),
       x1 = v128.load(a, 16),
       x2 = v128.load(a, 32),
@@ -170,40 +231,10 @@ export function reduceBlock(rows: usize, count: i32): void {
     const mA = multipliers(x0, x1),
       mB = multipliers(x2, x3);
     if (!v128.any_true(v128.or(mA, mB))) continue;
-    const e = PIV + 12 * <usize>c;
-    const cp = <usize>load<u32>(e),
-      len = <usize>load<u32>(e, 4),
-      vp = <usize>load<u32>(e, 8);
-    if (MODE == 0) {
-      for (let k: usize = 1; k < len; k++) {
-        const t = ACC + ((<usize>load<u32>(cp + (k << 2))) << 6);
-        const w = v128.load32_splat(vp + (k << 2));
-        v128.store(t, i64x2.add(v128.load(t), i64x2.extmul_low_i32x4_u(mA, w)));
-        v128.store(t, i64x2.add(v128.load(t, 16), i64x2.extmul_high_i32x4_u(mA, w)), 16);
-        v128.store(t, i64x2.add(v128.load(t, 32), i64x2.extmul_low_i32x4_u(mB, w)), 32);
-        v128.store(t, i64x2.add(v128.load(t, 48), i64x2.extmul_high_i32x4_u(mB, w)), 48);
-      }
-      if (++ops == BUDGET) {
-        normalise(c + 1);
-        ops = 0;
-      }
-    } else {
-      for (let k: usize = 1; k < len; k++) {
-        const t = ACC + ((<usize>load<u32>(cp + (k << 2))) << 6);
-        const w = v128.load32_splat(vp + (k << 2));
-        let y0 = i64x2.sub(v128.load(t), i64x2.extmul_low_i32x4_u(mA, w));
-        let y1 = i64x2.sub(v128.load(t, 16), i64x2.extmul_high_i32x4_u(mA, w));
-        let y2 = i64x2.sub(v128.load(t, 32), i64x2.extmul_low_i32x4_u(mB, w));
-        let y3 = i64x2.sub(v128.load(t, 48), i64x2.extmul_high_i32x4_u(mB, w));
-        y0 = i64x2.add(y0, v128.and(i64x2.lt_s(y0, zero), p2));
-        y1 = i64x2.add(y1, v128.and(i64x2.lt_s(y1, zero), p2));
-        y2 = i64x2.add(y2, v128.and(i64x2.lt_s(y2, zero), p2));
-        y3 = i64x2.add(y3, v128.and(i64x2.lt_s(y3, zero), p2));
-        v128.store(t, y0);
-        v128.store(t, y1, 16);
-        v128.store(t, y2, 32);
-        v128.store(t, y3, 48);
-      }
+    applyRow(mA, mB, cp, vp, len, shift);
+    if (MODE == 0 && ++ops == BUDGET) {
+      normalise(c + 1);
+      ops = 0;
     }
   }
   // The B-parts, staged; the accumulator is left zero.
