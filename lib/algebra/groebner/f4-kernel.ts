@@ -123,18 +123,27 @@ export class WasmPivotReducer {
   ) {
     const nB = ncols - nA;
     this.nB = nB;
-    // Layout: pivot descriptions, the pivots' columns and residues (each residue array once),
-    // the block's row descriptions and data, the accumulator, the staged B-parts, the dense
-    // row and table of the echelon step, then the echelon rows (grown by the kernel).
+    // Layout: pivot descriptions, the pivots' column arrays and residue arrays (each array
+    // once: f4.ts builds all rows in one column pool, and the rows that are multiples of one
+    // polynomial share its residues), the block's row descriptions and data, the
+    // accumulator, the staged B-parts, the dense row and table of the echelon step, then the
+    // echelon rows (grown by the kernel).
     const valsAt = new Map<Float64Array, number>();
-    let colWords = 0,
-      valWords = 0;
+    const colsEnd = new Map<Int32Array, number>();
+    let valWords = 0;
     for (const r of pivots) {
-      colWords += r.len;
+      const end = r.off + r.len;
+      if ((colsEnd.get(r.cols) ?? 0) < end) colsEnd.set(r.cols, end);
       if (!valsAt.has(r.vals)) {
         valsAt.set(r.vals, valWords);
         valWords += r.vals.length;
       }
+    }
+    const colsAt = new Map<Int32Array, number>();
+    let colWords = 0;
+    for (const [a, end] of colsEnd) {
+      colsAt.set(a, colWords);
+      colWords += end;
     }
     const piv = BASE;
     const cols = align(piv + 12 * nA);
@@ -158,15 +167,13 @@ export class WasmPivotReducer {
       new Uint8Array(buf, dense, bump - dense).fill(0);
       const u32 = new Uint32Array(buf);
       for (const [v, at] of valsAt) u32.set(v, vals / 4 + at);
-      let c = cols / 4;
+      for (const [a, at] of colsAt) u32.set(colsEnd.get(a)! === a.length ? a : a.subarray(0, colsEnd.get(a)), cols / 4 + at);
       for (let i = 0; i < nA; i++) {
         const r = pivots[i];
-        u32.set(r.cols.subarray(r.off, r.off + r.len), c);
         const d = piv / 4 + 3 * i;
-        u32[d] = c * 4;
+        u32[d] = cols + 4 * (colsAt.get(r.cols)! + r.off);
         u32[d + 1] = r.len;
         u32[d + 2] = vals + 4 * valsAt.get(r.vals)!;
-        c += r.len;
       }
       const { mode, budget } = arithmetic;
       k.setup(p, mode, budget, nA, ncols, piv, acc, this.stage, this.stageLen, dense, etab, bump);
