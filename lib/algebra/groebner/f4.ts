@@ -51,10 +51,13 @@ class MatrixBuilder {
   readonly pivotOf: (SparseRow | undefined)[] = [];
   readonly rows: SparseRow[] = [];
   private readonly scratch: Int32Array;
+  /// The monomial 1 (all entries 0), as the factor t of a look-up of m itself.
+  private readonly unit: Int32Array;
 
   constructor(private readonly R: RingCtx<unknown>) {
     this.table = new MonoTable(R.n);
     this.scratch = new Int32Array(H + R.n);
+    this.unit = new Int32Array(H + R.n);
   }
 
   private hashesOf(f: Poly): Int32Array {
@@ -75,6 +78,11 @@ class MatrixBuilder {
       packedMonos.set(f, P);
     }
     return P;
+  }
+
+  /// The id of monomial m (inserted when new).
+  idOf(m: Mono): number {
+    return this.table.productId(this.unit, 0, m, 0, this.table.hash(m));
   }
 
   /// When set, where every row comes from (for a trace; see F4StepTrace).
@@ -196,12 +204,12 @@ function f4Step<C>(...[R, batch, inputs, basis, opts, ticker, trace]: [...Parame
   const seen = new Set<number>();
   const addPairRow = (k: number, lcm: Mono) => {
     const e = elts[k];
-    const row = B.product(e.poly, monoDiv(lcm, e.lm), k);
-    const lead = row.cols[row.off];
-    // The same multiple of the same element is needed once.
+    // The same multiple of the same element is needed once: looked up before it is built.
+    const lead = B.idOf(lcm);
     const key = lead * elts.length + k;
     if (seen.has(key)) return;
     seen.add(key);
+    const row = B.product(e.poly, monoDiv(lcm, e.lm), k);
     if (B.pivotOf[lead] === undefined) B.pivotOf[lead] = row;
     else B.rows.push(row);
   };
