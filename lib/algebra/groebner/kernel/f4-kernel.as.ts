@@ -180,6 +180,46 @@ function applyRow(mA: v128, mB: v128, cp: usize, vp: usize, len: usize, shift: u
   }
 }
 
+/// The multiplier of lane r (0 ≤ r < 8).
+function lane(mA: v128, mB: v128, r: i32): u64 {
+  switch (r) {
+    case 0:
+      return <u64>(<u32>i32x4.extract_lane(mA, 0));
+    case 1:
+      return <u64>(<u32>i32x4.extract_lane(mA, 1));
+    case 2:
+      return <u64>(<u32>i32x4.extract_lane(mA, 2));
+    case 3:
+      return <u64>(<u32>i32x4.extract_lane(mA, 3));
+    case 4:
+      return <u64>(<u32>i32x4.extract_lane(mB, 0));
+    case 5:
+      return <u64>(<u32>i32x4.extract_lane(mB, 1));
+    case 6:
+      return <u64>(<u32>i32x4.extract_lane(mB, 2));
+    default:
+      return <u64>(<u32>i32x4.extract_lane(mB, 3));
+  }
+}
+
+/// applyRow for lane r alone, multiplier m.
+function applyLane(m: u64, cp: usize, vp: usize, len: usize, shift: usize, r: usize): void {
+  const acc = ACC + (shift << 6) + (r << 3);
+  if (MODE == 0) {
+    for (let k: usize = 1; k < len; k++) {
+      const t = acc + ((<usize>load<u32>(cp + (k << 2))) << 6);
+      store<u64>(t, load<u64>(t) + m * <u64>load<u32>(vp + (k << 2)));
+    }
+  } else {
+    for (let k: usize = 1; k < len; k++) {
+      const t = acc + ((<usize>load<u32>(cp + (k << 2))) << 6);
+      let y = load<i64>(t) - <i64>(m * <u64>load<u32>(vp + (k << 2)));
+      if (y < 0) y += P2;
+      store<i64>(t, y);
+    }
+  }
+}
+
 /// Reduces `count` ≤ 8 rows (descriptions at `rows`, combined column numbering) by the pivot
 /// rows, then by the echelon rows found so far, and stages their B-parts (renumbered from
 /// 0, increasing, residues in [1, p)). Reducing by the echelon rows here, eight rows at a
@@ -230,8 +270,18 @@ export function reduceBlock(rows: usize, count: i32): void {
     v128.store(a, zero, 48);
     const mA = multipliers(x0, x1),
       mB = multipliers(x2, x3);
-    if (!v128.any_true(v128.or(mA, mB))) continue;
-    applyRow(mA, mB, cp, vp, len, shift);
+    const lanes = i32x4.bitmask(i32x4.ne(mA, zero)) | (i32x4.bitmask(i32x4.ne(mB, zero)) << 4);
+    if (lanes == 0) continue;
+    if (popcnt(lanes) <= 2) {
+      // One or two rows of the block meet this pivot row (sparse rows): lane by lane is
+      // cheaper than all eight lanes.
+      let bits = lanes;
+      while (bits != 0) {
+        const r = ctz(bits);
+        bits &= bits - 1;
+        applyLane(lane(mA, mB, r), cp, vp, len, shift, <usize>r);
+      }
+    } else applyRow(mA, mB, cp, vp, len, shift);
     if (MODE == 0 && ++ops == BUDGET) {
       normalise(c + 1);
       ops = 0;
