@@ -227,8 +227,9 @@ export class WasmPivotReducer {
   reduceRows(rows: readonly SparseRow[], skip = 0, ticker?: Ticker): (SparseRow | null)[] {
     const out: (SparseRow | null)[] = [];
     for (let i = 0; i < rows.length; i += BLOCK) {
-      ticker?.tick();
       const count = Math.min(BLOCK, rows.length - i);
+      // One tick a row, as the row-by-row reduction did: a block takes milliseconds.
+      if (ticker) for (let r = 0; r < count; r++) ticker.tick();
       this.reduceBlock(rows, i, count, skip, false);
       for (let r = 0; r < count; r++) out.push(this.staged(r));
     }
@@ -243,8 +244,8 @@ export class WasmPivotReducer {
     const out: SparseRow[] = [],
       from: number[] = [];
     for (let i = 0; i < rows.length; i += BLOCK) {
-      ticker.tick();
       const count = Math.min(BLOCK, rows.length - i);
+      for (let r = 0; r < count; r++) ticker.tick();
       this.reduceBlock(rows, i, count, 0, true);
       for (let r = 0; r < count; r++) {
         const lead = k.echelonRow(r);
