@@ -17,7 +17,7 @@ import type { SparseRow } from "./f4-linalg-types";
 /// Rows reduced together (the lanes of the kernel's accumulator).
 const BLOCK = 8;
 /// An idle instance is kept for the next matrix only while its memory is at most this.
-const KEEP_BYTES = 64 << 20;
+const KEEP_BYTES = 32 << 20;
 /// Where the caller's layout starts (above the module's own globals; checked on load).
 const BASE = 1024;
 const PAGE = 65536;
