@@ -9,7 +9,7 @@
 // compiles to, and a matrix too large for WebAssembly's memory fails with a limit error.
 import { describe, expect, it } from "vitest";
 import { AlgebraError } from "@/lib/algebra/errors";
-import { WasmPivotReducer, kernelMode } from "@/lib/algebra/groebner/f4-kernel";
+import { WasmPivotReducer, idleKernelBytes, kernelMode } from "@/lib/algebra/groebner/f4-kernel";
 import {
   PivotReducer,
   reduceF4Matrix,
@@ -150,6 +150,23 @@ describe("the WebAssembly kernel computes the TypeScript reduction's rows exactl
     // The kernel still works afterwards.
     const small = randomMatrix(32003, 9, 20, 10, 8, 0.3);
     expect(reduceF4Matrix(32003, small, ticker()).rows.map(plain)).toEqual(reduceF4MatrixTS(32003, small, ticker()).rows.map(plain));
+  });
+});
+
+describe("the kernel's memory", () => {
+  it("is reused from matrix to matrix, and dropped once it grew past 32 MB", () => {
+    const small = randomMatrix(32003, 11, 30, 10, 9, 0.3);
+    reduceF4Matrix(32003, small, ticker());
+    const kept = idleKernelBytes();
+    expect(kept).toBeGreaterThan(0);
+    expect(kept).toBeLessThanOrEqual(32 << 20);
+    // 400 000 columns: the accumulator of eight 64-bit lanes alone takes 25.6 MB.
+    const wide: F4Matrix = { pivots: [], rows: [small.rows[0]], nA: 0, ncols: 400_000 };
+    reduceF4Matrix(32003, wide, ticker());
+    expect(idleKernelBytes()).toBe(0);
+    reduceF4Matrix(32003, small, ticker());
+    expect(idleKernelBytes()).toBeGreaterThan(0);
+    expect(idleKernelBytes()).toBeLessThanOrEqual(kept);
   });
 });
 

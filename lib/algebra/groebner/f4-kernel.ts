@@ -51,6 +51,11 @@ interface KernelExports {
 let compiled: WebAssembly.Module | null = null;
 let idle: KernelExports | null = null;
 
+/// The memory of the instance kept for the next matrix (0: none), for tests.
+export function idleKernelBytes(): number {
+  return idle ? idle.memory.buffer.byteLength : 0;
+}
+
 function decodeBase64(s: string): Uint8Array<ArrayBuffer> {
   const bin = atob(s);
   const out = new Uint8Array(bin.length);
