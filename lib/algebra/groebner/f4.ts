@@ -63,7 +63,11 @@ class MatrixBuilder {
   private hashesOf(f: Poly): Int32Array {
     let h = termHashes.get(f);
     if (!h) {
-      h = Int32Array.from(f.m, (m) => this.table.hash(m));
+      // A plain loop: Int32Array.from with a mapping function is several times slower.
+      const fm = f.m,
+        table = this.table;
+      h = new Int32Array(fm.length);
+      for (let k = 0; k < fm.length; k++) h[k] = table.hash(fm[k]);
       termHashes.set(f, h);
     }
     return h;
@@ -73,8 +77,9 @@ class MatrixBuilder {
     let P = packedMonos.get(f);
     if (!P) {
       const S = this.table.stride;
-      P = new Int32Array(f.m.length * S);
-      f.m.forEach((m, k) => P!.set(m, k * S));
+      const fm = f.m;
+      P = new Int32Array(fm.length * S);
+      for (let k = 0; k < fm.length; k++) P.set(fm[k], k * S);
       packedMonos.set(f, P);
     }
     return P;
