@@ -17,6 +17,12 @@ export function pairBefore(o: PairOrder, a: Pair, b: Pair): number {
   return o.cmp(a.lcm, b.lcm);
 }
 
+/// Whether every exponent of a is at most that of b.
+function exponentsDivide(a: Mono, b: Mono): boolean {
+  for (let i = H, len = a.length; i < len; i++) if (a[i] > b[i]) return false;
+  return true;
+}
+
 function lcmEquals(a: Mono, b: Mono, l: Mono): boolean {
   for (let k = H, len = l.length; k < len; k++) if ((a[k] > b[k] ? a[k] : b[k]) !== l[k]) return false;
   return true;
@@ -38,27 +44,43 @@ export function updatePairs(L: MonoLayout, order: PairOrder, basis: Basis, pairs
   const eh = elts[h];
   const lmh = eh.lm;
   // New pairs (h, g) with their lcms; keep those not made redundant by another new pair.
-  const cand = active.map((g) => ({ g, lcm: monoLcm(L, lmh, elts[g].lm), coprime: monoCoprime(lmh, elts[g].lm) }));
-  const kept: typeof cand = [];
-  for (let k = 0; k < cand.length; k++) {
-    const p = cand[k];
-    if (!p.coprime) {
+  // The degrees and masks of the lcms sit in typed arrays, so the quadratic search rejects
+  // most candidates without reading an lcm (the same tests as monoDivides, in its order).
+  const n = active.length;
+  const lcms: Mono[] = new Array(n);
+  const degs = new Int32Array(n),
+    masks = new Int32Array(n),
+    coprime = new Uint8Array(n);
+  for (let k = 0; k < n; k++) {
+    const lm = elts[active[k]].lm;
+    const l = monoLcm(L, lmh, lm);
+    lcms[k] = l;
+    degs[k] = l[1];
+    masks[k] = l[2];
+    coprime[k] = monoCoprime(lmh, lm) ? 1 : 0;
+  }
+  const divides = (q: number, k: number) => degs[q] <= degs[k] && (masks[q] & ~masks[k]) === 0 && exponentsDivide(lcms[q], lcms[k]);
+  const kept: number[] = [];
+  for (let k = 0; k < n; k++) {
+    if (!coprime[k]) {
       let redundant = false;
-      for (let q = k + 1; q < cand.length && !redundant; q++) redundant = monoDivides(cand[q].lcm, p.lcm);
-      for (let q = 0; q < kept.length && !redundant; q++) redundant = monoDivides(kept[q].lcm, p.lcm);
+      for (let q = k + 1; q < n && !redundant; q++) redundant = divides(q, k);
+      for (let q = 0; q < kept.length && !redundant; q++) redundant = divides(kept[q], k);
       if (redundant) continue;
     }
-    kept.push(p);
+    kept.push(k);
   }
   // Old pairs whose lcm is a proper multiple of lm(h) in the chain sense are redundant.
   const survivors = pairs.filter(
     (p) => p.j < 0 || !monoDivides(lmh, p.lcm) || lcmEquals(elts[p.i].lm, lmh, p.lcm) || lcmEquals(elts[p.j].lm, lmh, p.lcm),
   );
   const fresh: Pair[] = [];
-  for (const p of kept) {
-    if (p.coprime) continue; // Buchberger's product criterion
-    const eg = elts[p.g];
-    fresh.push({ i: p.g, j: h, lcm: p.lcm, sugar: pairSugar(p.lcm, eg.lm, eg.sugar, lmh, eh.sugar) });
+  for (const k of kept) {
+    if (coprime[k]) continue; // Buchberger's product criterion
+    const g = active[k],
+      eg = elts[g],
+      l = lcms[k];
+    fresh.push({ i: g, j: h, lcm: l, sugar: pairSugar(l, eg.lm, eg.sugar, lmh, eh.sugar) });
   }
   fresh.sort((a, b) => pairBefore(order, a, b));
   // Basis elements whose leading monomial lm(h) divides are no longer needed as reducers.
