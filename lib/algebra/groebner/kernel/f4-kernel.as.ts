@@ -1,15 +1,16 @@
 // AssemblyScript source of the WebAssembly kernel of the F4 matrix reduction over GF(p),
 // p < 2^31 (see ../f4-linalg.ts for the block form it computes and ../f4-kernel.ts for the
-// memory layout the caller writes). Built by `npm run build:f4-kernel` (lib/ops/build-f4-kernel.mjs) into
-// ../f4-kernel-wasm.ts; excluded from the TypeScript project (it uses AssemblyScript's
-// machine types: u32, i64, v128).
+// memory layout the caller writes). Built by `npm run build:f4-kernel`
+// (lib/ops/build-f4-kernel.mjs) into ../f4-kernel-wasm.ts; excluded from the TypeScript
+// project (it uses AssemblyScript's machine types: u32, i64, v128).
 //
 // Rows being reduced are held eight at a time in one dense accumulator, the eight values of a
 // column side by side (64-bit lanes, one 64-byte cache line a column), so every entry of a
 // sparse pivot row is read once for eight rows and applied with four 128-bit SIMD
-// multiply-adds. Arithmetic is exact in 64-bit
-// integers with delayed modular reduction (common practice in F4 implementations; see
-// J.-C. Faugère, S. Lachartre, PASCO 2010, on reducing modulo p only when needed):
+// multiply-adds. Arithmetic is exact in 64-bit integers with delayed modular reduction
+// (common practice in finite-field linear algebra; e.g. J.-G. Dumas, P. Giorgi, C. Pernet,
+// "Dense linear algebra over word-size prime fields: the FFLAS and FFPACK packages",
+// ACM TOMS 35, 2008 — from memory):
 //   mode 0 (p < 2^24): lanes are unsigned sums of products (p − v)·a < p², reduced modulo p
 //     only after `budget` row operations (the caller computes it so no sum reaches 2^64);
 //   mode 1 (any p < 2^31): lanes stay in [0, p²): a product v·a < p² < 2^62 is subtracted
