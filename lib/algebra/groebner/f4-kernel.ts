@@ -87,11 +87,18 @@ function ensure(k: KernelExports, bytes: number): void {
   const have = k.memory.buffer.byteLength;
   if (bytes <= have) return;
   if (bytes > MAX_BYTES) throw memoryError(bytes);
-  try {
-    k.memory.grow(Math.ceil((bytes - have) / PAGE));
-  } catch {
-    throw memoryError(bytes);
+  // At least doubling (up to KEEP_BYTES), so a run of growing matrices grows the memory a
+  // few times rather than once a matrix; pages never written stay out of resident memory.
+  const target = Math.max(bytes, Math.min(2 * have, KEEP_BYTES));
+  for (const want of target > bytes ? [target, bytes] : [bytes]) {
+    try {
+      k.memory.grow(Math.ceil((want - have) / PAGE));
+      return;
+    } catch {
+      // refused: try the exact size, then give up
+    }
   }
+  throw memoryError(bytes);
 }
 
 /// The kernel's arithmetic for p: mode 0 adds products unreduced for `budget` row
