@@ -21,6 +21,7 @@ const KEEP_BYTES = 32 << 20;
 /// Where the caller's layout starts (above the module's own globals; checked on load).
 const BASE = 1024;
 const PAGE = 65536;
+const GROW_STEP = 4 << 20;
 /// WebAssembly's 32-bit address space.
 const MAX_BYTES = 2 ** 32 - PAGE;
 
@@ -87,9 +88,10 @@ function ensure(k: KernelExports, bytes: number): void {
   const have = k.memory.buffer.byteLength;
   if (bytes <= have) return;
   if (bytes > MAX_BYTES) throw memoryError(bytes);
-  // At least doubling (up to KEEP_BYTES), so a run of growing matrices grows the memory a
-  // few times rather than once a matrix; pages never written stay out of resident memory.
-  const target = Math.max(bytes, Math.min(2 * have, KEEP_BYTES));
+  // In steps of GROW_STEP, so a run of slowly growing matrices grows the memory a few times
+  // rather than once a matrix (each grow costs), while it stays within 4 MB of the need
+  // (the grown pages count in resident memory).
+  const target = Math.ceil(bytes / GROW_STEP) * GROW_STEP;
   for (const want of target > bytes ? [target, bytes] : [bytes]) {
     try {
       k.memory.grow(Math.ceil((want - have) / PAGE));
