@@ -1,4 +1,4 @@
-import { HEAD, monoCoprime, monoDivides, monoLcm, type Mono, type MonoLayout } from "../monomial/monomial";
+import { finishMono, HEAD, monoCoprime, monoDivides, type Mono, type MonoLayout } from "../monomial/monomial";
 import type { MonoCompare } from "../order/order";
 import type { Basis, Pair } from "./basis";
 
@@ -15,12 +15,6 @@ export interface PairOrder {
 export function pairBefore(o: PairOrder, a: Pair, b: Pair): number {
   if (o.bySugar && a.sugar !== b.sugar) return a.sugar - b.sugar;
   return o.cmp(a.lcm, b.lcm);
-}
-
-/// Whether every exponent of a is at most that of b.
-function exponentsDivide(a: Mono, b: Mono): boolean {
-  for (let i = H, len = a.length; i < len; i++) if (a[i] > b[i]) return false;
-  return true;
 }
 
 function lcmEquals(a: Mono, b: Mono, l: Mono): boolean {
@@ -44,22 +38,40 @@ export function updatePairs(L: MonoLayout, order: PairOrder, basis: Basis, pairs
   const eh = elts[h];
   const lmh = eh.lm;
   // New pairs (h, g) with their lcms; keep those not made redundant by another new pair.
-  // The degrees and masks of the lcms sit in typed arrays, so the quadratic search rejects
-  // most candidates without reading an lcm (the same tests as monoDivides, in its order).
-  const n = active.length;
-  const lcms: Mono[] = new Array(n);
+  // The lcms are built in one flat array (exponents, with their degree and mask — the header
+  // slots of monomial.ts, as finishMono computes them — beside them in typed arrays), so the
+  // quadratic search rejects most candidates on two numbers (the tests of monoDivides, in
+  // its order) and only the lcms of kept pairs become monomials.
+  const n = active.length,
+    nv = L.n,
+    degrees = L.degrees;
+  const ex = new Int32Array(n * nv);
   const degs = new Int32Array(n),
     masks = new Int32Array(n),
     coprime = new Uint8Array(n);
   for (let k = 0; k < n; k++) {
     const lm = elts[active[k]].lm;
-    const l = monoLcm(L, lmh, lm);
-    lcms[k] = l;
-    degs[k] = l[1];
-    masks[k] = l[2];
+    let deg = 0,
+      mask = 0;
+    for (let i = 0, o = k * nv; i < nv; i++) {
+      const a = lmh[H + i],
+        b = lm[H + i];
+      const e = a > b ? a : b;
+      ex[o + i] = e;
+      if (e !== 0) {
+        deg += e * degrees[i];
+        mask |= 1 << (i & 31);
+      }
+    }
+    degs[k] = deg;
+    masks[k] = mask;
     coprime[k] = monoCoprime(lmh, lm) ? 1 : 0;
   }
-  const divides = (q: number, k: number) => degs[q] <= degs[k] && (masks[q] & ~masks[k]) === 0 && exponentsDivide(lcms[q], lcms[k]);
+  const divides = (q: number, k: number) => {
+    if ((masks[q] & ~masks[k]) !== 0 || degs[q] > degs[k]) return false;
+    for (let i = 0, oq = q * nv, ok = k * nv; i < nv; i++) if (ex[oq + i] > ex[ok + i]) return false;
+    return true;
+  };
   const kept: number[] = [];
   for (let k = 0; k < n; k++) {
     if (!coprime[k]) {
@@ -77,9 +89,11 @@ export function updatePairs(L: MonoLayout, order: PairOrder, basis: Basis, pairs
   const fresh: Pair[] = [];
   for (const k of kept) {
     if (coprime[k]) continue; // Buchberger's product criterion
+    const l = new Int32Array(H + nv);
+    l.set(ex.subarray(k * nv, (k + 1) * nv), H);
+    finishMono(L, l);
     const g = active[k],
-      eg = elts[g],
-      l = lcms[k];
+      eg = elts[g];
     fresh.push({ i: g, j: h, lcm: l, sugar: pairSugar(l, eg.lm, eg.sugar, lmh, eh.sugar) });
   }
   fresh.sort((a, b) => pairBefore(order, a, b));
