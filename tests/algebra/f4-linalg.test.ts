@@ -1,10 +1,11 @@
 // The linear algebra of an F4 step (lib/algebra/groebner/f4-linalg.ts: reduction of the rows
-// to reduce by the pivot rows, then echelon form of the remainder, with products of residues
-// summed in doubles and reduced only when the 2^52 budget is used up) against plain Gaussian
+// to reduce by the pivot rows, then echelon form of the remainder; the WebAssembly kernel
+// with 64-bit integer lanes, and the TypeScript reference with products of residues summed in
+// doubles and reduced only when the 2^52 budget is used up) against plain Gaussian
 // elimination in BigInt arithmetic. The row space of the remainder D' = D − C·A⁻¹·B has a
 // unique reduced row echelon form (common practice), which both sides are brought to.
 import { describe, expect, it } from "vitest";
-import { reduceF4Matrix, type SparseRow } from "@/lib/algebra/groebner/f4-linalg";
+import { reduceF4Matrix, reduceF4MatrixTS, type SparseRow } from "@/lib/algebra/groebner/f4-linalg";
 import { Ticker } from "@/lib/algebra/options";
 import { mulberry32 } from "./sympy/random-systems";
 
@@ -57,8 +58,11 @@ function sparse(dense: number[]): SparseRow {
 }
 
 describe("F4 matrix reduction with delayed modular reduction", () => {
-  for (const p of [32003, 8388593, 2147483629, 2147483647]) {
-    it(`agrees with exact Gaussian elimination over GF(${p}) on dense pivot blocks`, () => {
+  for (const [p, reduce] of [32003, 8388593, 16777213, 16777259, 2147483629, 2147483647].flatMap((q) => [
+    [q, reduceF4Matrix] as const,
+    [q, reduceF4MatrixTS] as const,
+  ])) {
+    it(`agrees with exact Gaussian elimination over GF(${p}) on dense pivot blocks (${reduce.name})`, () => {
       const rng = mulberry32(p % 100000);
       // Residues near p − 1 as often as small ones: the largest products are the risky ones.
       const residue = () => (rng() < 0.5 ? p - 1 - Math.floor(rng() * 3) : 1 + Math.floor(rng() * (p - 1)));
@@ -82,7 +86,7 @@ describe("F4 matrix reduction with delayed modular reduction", () => {
           C.push(row);
         }
         const ticker = new Ticker(undefined, () => ({ stage: "test" }));
-        const got = reduceF4Matrix(p, { pivots: A.map(sparse), rows: C.map(sparse), nA, ncols }, ticker).rows;
+        const got = reduce(p, { pivots: A.map(sparse), rows: C.map(sparse), nA, ncols }, ticker).rows;
         // Ours: back to dense rows over the B columns.
         const ours = got.map((r) => {
           const d = new Array<bigint>(nB).fill(0n);

@@ -1,5 +1,9 @@
 import { invMod } from "../field/gfp";
 import type { Ticker } from "../options";
+import { WasmPivotReducer } from "./f4-kernel";
+import type { F4Matrix, SparseRow } from "./f4-linalg-types";
+
+export type { F4Matrix, SparseRow } from "./f4-linalg-types";
 
 /// The linear algebra of one F4 step over GF(p), p < 2^31, in the block form of
 /// J.-C. Faugère, S. Lachartre, "Parallel Gaussian elimination for Gröbner bases computations
@@ -11,26 +15,20 @@ import type { Ticker } from "../options";
 ///
 /// Step 1 reduces each row of [C D] by the reducer rows, leaving D' = D − C·A⁻¹·B (rows in the
 /// B columns only); step 2 brings D' to echelon form. Only the non-zero rows of D' matter to
-/// F4: their leading monomials are new.
+/// F4: their leading monomials are new. Step 2 runs as the rows come, in the order of
+/// M.rows: each remainder is reduced by the echelon rows found before it and, when something
+/// is left, made monic and kept; so memory holds the rank of D', not every remainder.
 ///
-/// Rows are sparse (column indices in an Int32Array, residues in a Float64Array); each row
-/// being reduced is spread into a dense accumulator of doubles, and products of residues are
-/// added without reduction while the sum provably stays below 2^52 (delayed modular
-/// reduction; the budget is counted in row operations). For p above 2^23 a product of two
-/// residues would use up the 53-bit mantissa too fast, so the multiplier is split into 16-bit
-/// halves added into two accumulators.
-
-/// A sparse row: entries k < len at columns cols[off + k] with residues vals[k]; the first
-/// entry is the leading one (coefficient 1 in a reducer row). Many rows share one `cols`
-/// pool and the coefficient array of the polynomial they are a multiple of, so building a
-/// row allocates nothing but this small object. Only the rows of D' and its echelon form
-/// have column indices in increasing order.
-export interface SparseRow {
-  cols: Int32Array;
-  off: number;
-  len: number;
-  vals: Float64Array;
-}
+/// Two implementations compute exactly the same rows (tests/algebra/f4-kernel.test.ts):
+/// the WebAssembly kernel of f4-kernel.ts (kernel/f4-kernel.as.ts: eight rows at a time in
+/// 64-bit integer lanes with SIMD, sparse rows in u32 arrays), which the engine uses, and
+/// the TypeScript one below (`reduceF4MatrixTS`, `reduceRowTS`), kept as the reference and
+/// for reducing a few rows without loading a matrix into the kernel. In the TypeScript one
+/// each row being reduced is spread into a dense accumulator of doubles, and products of
+/// residues are added without reduction while the sum provably stays below 2^52 (delayed
+/// modular reduction; the budget is counted in row operations). For p above 2^23 a product
+/// of two residues would use up the 53-bit mantissa too fast, so the multiplier is split
+/// into 16-bit halves added into two accumulators.
 
 /// A prime with p ≤ 2^23 adds plain products; above, the split multiplier.
 const PLAIN_PRIME_BOUND = 2 ** 23;
@@ -171,61 +169,51 @@ function reduceByA(
   return { cols: Int32Array.from(cols), off: 0, len: cols.length, vals: Float64Array.from(vals) };
 }
 
-/// Step 2: the echelon form of the rows (B-column numbering, nB columns), monic, each row
-/// reduced by the pivots of the rows before it. Rows reducing to zero are dropped.
-function echelon(p: number, rows: SparseRow[], from: number[], nB: number, ticker: Ticker): { rows: SparseRow[]; from: number[] } {
-  const order = rows.map((_, i) => i).sort((a, b) => rows[a].cols[0] - rows[b].cols[0] || rows[a].len - rows[b].len);
-  const acc = new Accumulator(p, nB);
-  const lo = acc.lo,
+/// Step 2 for one remainder `row` (B numbering, increasing columns): reduces it by the
+/// echelon rows `pivots` (indexed by leading column) and returns what is left, monic, or null.
+function echelonRow(acc: Accumulator, row: SparseRow, pivots: (SparseRow | undefined)[], nB: number): SparseRow | null {
+  const p = acc.p,
+    lo = acc.lo,
     hi = acc.hi,
     budget = acc.budget;
-  const pivots: (SparseRow | undefined)[] = new Array(nB);
-  const out: SparseRow[] = [],
-    outFrom: number[] = [];
-  for (const i of order) {
-    ticker.tick();
-    const row = rows[i];
-    const rc = row.cols,
-      rv = row.vals;
-    for (let k = 0; k < row.len; k++) lo[rc[k]] = rv[k];
-    let ops = 0,
-      lead = -1,
-      nonzero = 0;
-    for (let c = rc[0]; c < nB; c++) {
-      if (lo[c] === 0 && (hi === null || hi[c] === 0)) continue;
-      const v = acc.take(c);
-      if (v === 0) continue;
-      const piv = pivots[c];
-      if (piv === undefined) {
-        lo[c] = v; // kept, reduced
-        if (lead < 0) lead = c;
-        nonzero++;
-        continue;
-      }
-      acc.addTail(piv, p - v);
-      if (++ops === budget) {
-        acc.normalise(c + 1, nB);
-        ops = 0;
-      }
+  const rc = row.cols,
+    rv = row.vals;
+  for (let k = 0; k < row.len; k++) lo[rc[k]] = rv[k];
+  let ops = 0,
+    lead = -1,
+    nonzero = 0;
+  for (let c = rc[0]; c < nB; c++) {
+    if (lo[c] === 0 && (hi === null || hi[c] === 0)) continue;
+    const v = acc.take(c);
+    if (v === 0) continue;
+    const piv = pivots[c];
+    if (piv === undefined) {
+      lo[c] = v; // kept, reduced
+      if (lead < 0) lead = c;
+      nonzero++;
+      continue;
     }
-    if (lead < 0) continue;
-    const cols = new Int32Array(nonzero),
-      vals = new Float64Array(nonzero);
-    const inv = invMod(lo[lead], p);
-    let k = 0;
-    for (let c = lead; k < nonzero; c++) {
-      const v = lo[c];
-      if (v === 0) continue;
-      cols[k] = c;
-      vals[k++] = acc.mod(v * inv >= SUM_BOUND ? mulSplit(v, inv, p, acc) : v * inv);
-      lo[c] = 0;
+    acc.addTail(piv, p - v);
+    if (++ops === budget) {
+      acc.normalise(c + 1, nB);
+      ops = 0;
     }
-    const r = { cols, off: 0, len: nonzero, vals };
-    pivots[lead] = r;
-    out.push(r);
-    outFrom.push(from[i]);
   }
-  return { rows: out, from: outFrom };
+  if (lead < 0) return null;
+  const cols = new Int32Array(nonzero),
+    vals = new Float64Array(nonzero);
+  const inv = invMod(lo[lead], p);
+  let k = 0;
+  for (let c = lead; k < nonzero; c++) {
+    const v = lo[c];
+    if (v === 0) continue;
+    cols[k] = c;
+    vals[k++] = acc.mod(v * inv >= SUM_BOUND ? mulSplit(v, inv, p, acc) : v * inv);
+    lo[c] = 0;
+  }
+  const r = { cols, off: 0, len: nonzero, vals };
+  pivots[lead] = r;
+  return r;
 }
 
 /// v·w mod p when the product may not be exact in a double (p > 2^26).
@@ -235,37 +223,102 @@ function mulSplit(v: number, w: number, p: number, acc: Accumulator): number {
   return acc.mod(acc.mod(v * wh) * 65536 + v * wl);
 }
 
-export interface F4Matrix {
-  /// Reducer rows by pivot column, in the combined numbering (A columns [0, nA), then B).
-  pivots: SparseRow[];
-  /// Rows to reduce, combined numbering.
-  rows: SparseRow[];
-  nA: number;
-  ncols: number;
-}
-
-/// The non-zero rows of the echelon form of D' (B-column numbering, monic), each with the
-/// index in M.rows of the row it came from.
+/// The non-zero rows of the echelon form of D' (B-column numbering, monic, increasing
+/// columns, distinct leading columns), each with the index in M.rows of the row it came
+/// from; computed by the WebAssembly kernel.
 export function reduceF4Matrix(p: number, M: F4Matrix, ticker: Ticker): { rows: SparseRow[]; from: number[] } {
-  const { pivots, rows, nA, ncols } = M;
-  const acc = new Accumulator(p, ncols);
-  const reduced: SparseRow[] = [],
-    from: number[] = [];
-  for (let i = 0; i < rows.length; i++) {
-    ticker.tick();
-    const r = reduceByA(acc, rows[i], 0, pivots, nA, ncols);
-    if (r) {
-      reduced.push(r);
-      from.push(i);
-    }
+  const reducer = new WasmPivotReducer(p, M.pivots, M.nA, M.ncols);
+  try {
+    return reducer.reduceAndEchelon(M.rows, ticker);
+  } finally {
+    reducer.release();
   }
-  return echelon(p, reduced, from, ncols - nA, ticker);
 }
 
 /// The tail (all entries but the first) of each row reduced by the reducer rows: its
 /// remainder in the B columns (renumbered from 0, increasing), or null when it is zero.
 /// With the elements of a Gröbner basis as rows, these are the tails of the reduced basis.
 export function reduceTails(p: number, M: F4Matrix, ticker: Ticker): (SparseRow | null)[] {
+  const reducer = new WasmPivotReducer(p, M.pivots, M.nA, M.ncols);
+  try {
+    return reducer.reduceRows(M.rows, 1, ticker);
+  } finally {
+    reducer.release();
+  }
+}
+
+/// The reducer rows of a matrix loaded once into the WebAssembly kernel, to reduce many rows
+/// by them: `reduceRow` / `reduceRows` return B-parts as `reduceRowTS` does. Call `release()`
+/// when done (the kernel's memory is then reused for the next matrix).
+export class PivotReducer {
+  private readonly kernel: WasmPivotReducer;
+  constructor(
+    readonly p: number,
+    readonly M: Pick<F4Matrix, "pivots" | "nA" | "ncols">,
+  ) {
+    this.kernel = new WasmPivotReducer(p, M.pivots, M.nA, M.ncols);
+  }
+
+  /// The B-part of one row: a sparse row or a dense one (residues in [0, p) by column of the
+  /// combined numbering, length ncols).
+  reduceRow(row: SparseRow | Float64Array): SparseRow | null {
+    return this.kernel.reduceRows([row instanceof Float64Array ? sparseOfDense(row) : row])[0];
+  }
+
+  /// The B-parts of rows, eight at a time (faster than one by one).
+  reduceRows(rows: readonly SparseRow[], ticker?: Ticker): (SparseRow | null)[] {
+    return this.kernel.reduceRows(rows, 0, ticker);
+  }
+
+  release(): void {
+    this.kernel.release();
+  }
+}
+
+/// The non-zero entries of a dense row.
+function sparseOfDense(d: Float64Array): SparseRow {
+  let n = 0;
+  for (let c = 0; c < d.length; c++) if (d[c] !== 0) n++;
+  const cols = new Int32Array(n),
+    vals = new Float64Array(n);
+  for (let c = 0, k = 0; c < d.length; c++) {
+    if (d[c] !== 0) {
+      cols[k] = c;
+      vals[k++] = d[c];
+    }
+  }
+  return { cols, off: 0, len: n, vals };
+}
+
+/// `reduceF4Matrix` in TypeScript (the reference the kernel is tested against).
+export function reduceF4MatrixTS(p: number, M: F4Matrix, ticker: Ticker): { rows: SparseRow[]; from: number[] } {
+  const { pivots, rows, nA, ncols } = M;
+  const acc = new Accumulator(p, ncols);
+  const eacc = new Accumulator(p, ncols - nA);
+  const echelonPivots: (SparseRow | undefined)[] = new Array(ncols - nA);
+  const out: SparseRow[] = [],
+    from: number[] = [];
+  for (let i = 0; i < rows.length; i++) {
+    ticker.tick();
+    const r = reduceByA(acc, rows[i], 0, pivots, nA, ncols);
+    const e = r && echelonRow(eacc, r, echelonPivots, ncols - nA);
+    if (e) {
+      out.push(e);
+      from.push(i);
+    }
+  }
+  return { rows: out, from };
+}
+
+/// The B-part of one row reduced by the reducer rows of M, in TypeScript: a sparse row, or a
+/// dense one (residues in [0, p) by column of the combined numbering, length ncols).
+export function reduceRowTS(p: number, M: Pick<F4Matrix, "pivots" | "nA" | "ncols">, row: SparseRow | Float64Array): SparseRow | null {
+  const acc = new Accumulator(p, M.ncols);
+  return reduceByA(acc, row instanceof Float64Array ? sparseOfDense(row) : row, 0, M.pivots, M.nA, M.ncols);
+}
+
+/// `reduceTails` in TypeScript.
+export function reduceTailsTS(p: number, M: F4Matrix, ticker: Ticker): (SparseRow | null)[] {
   const { pivots, rows, nA, ncols } = M;
   const acc = new Accumulator(p, ncols);
   return rows.map((row) => {

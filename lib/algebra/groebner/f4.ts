@@ -4,7 +4,8 @@ import { checkLimit, checkpoint, Ticker, type ComputeOptions } from "../options"
 import { asTyped, makePoly, type Poly } from "../poly/poly";
 import type { RingCtx } from "../poly/ring";
 import type { BasisElt, Reduced, ReductionStep, Strategy } from "./basis";
-import { reduceF4Matrix, reduceTails, type F4Matrix, type SparseRow } from "./f4-linalg";
+import { reduceF4Matrix, reduceTails } from "./f4-linalg";
+import type { F4Matrix, SparseRow } from "./f4-linalg-types";
 import { MonoTable } from "./monotable";
 import { makeMonic } from "./reduce";
 
@@ -20,8 +21,10 @@ import { makeMonic } from "./reduce";
 const H = HEAD;
 
 /// Term hashes of a polynomial, computed once per polynomial (the hash is the same for all
-/// tables of the same number of variables).
+/// tables of the same number of variables), and its monomials packed in one array (read in
+/// sequence when a multiple of it is built).
 const termHashes = new WeakMap<Poly, Int32Array>();
+const packedMonos = new WeakMap<Poly, Int32Array>();
 /// Coefficients as a Float64Array, so the inner loop reads one kind of array only.
 const coeffArrays = new WeakMap<Poly, Float64Array>();
 
@@ -48,19 +51,43 @@ class MatrixBuilder {
   readonly pivotOf: (SparseRow | undefined)[] = [];
   readonly rows: SparseRow[] = [];
   private readonly scratch: Int32Array;
+  /// The monomial 1 (all entries 0), as the factor t of a look-up of m itself.
+  private readonly unit: Int32Array;
 
   constructor(private readonly R: RingCtx<unknown>) {
     this.table = new MonoTable(R.n);
     this.scratch = new Int32Array(H + R.n);
+    this.unit = new Int32Array(H + R.n);
   }
 
   private hashesOf(f: Poly): Int32Array {
     let h = termHashes.get(f);
     if (!h) {
-      h = Int32Array.from(f.m, (m) => this.table.hash(m));
+      // A plain loop: Int32Array.from with a mapping function is several times slower.
+      const fm = f.m,
+        table = this.table;
+      h = new Int32Array(fm.length);
+      for (let k = 0; k < fm.length; k++) h[k] = table.hash(fm[k]);
       termHashes.set(f, h);
     }
     return h;
+  }
+
+  private packedOf(f: Poly): Int32Array {
+    let P = packedMonos.get(f);
+    if (!P) {
+      const S = this.table.stride;
+      const fm = f.m;
+      P = new Int32Array(fm.length * S);
+      for (let k = 0; k < fm.length; k++) P.set(fm[k], k * S);
+      packedMonos.set(f, P);
+    }
+    return P;
+  }
+
+  /// The id of monomial m (inserted when new).
+  idOf(m: Mono): number {
+    return this.table.productId(this.unit, 0, m, 0, this.table.hash(m));
   }
 
   /// When set, where every row comes from (for a trace; see F4StepTrace).
@@ -71,7 +98,9 @@ class MatrixBuilder {
   product(f: Poly, t: Mono, src = 0): SparseRow {
     const fm = f.m,
       len = fm.length;
-    const hs = this.hashesOf(f);
+    const hs = this.hashesOf(f),
+      P = this.packedOf(f),
+      S = this.table.stride;
     const ht = this.table.hash(t);
     if (this.used + len > this.pool.length) {
       const bigger = new Int32Array(Math.max(this.pool.length * 2, this.used + len));
@@ -82,7 +111,7 @@ class MatrixBuilder {
     this.used += len;
     const pool = this.pool,
       table = this.table;
-    for (let k = 0; k < len; k++) pool[off + k] = table.productId(t, ht, fm[k], hs[k]);
+    for (let k = 0; k < len; k++) pool[off + k] = table.productId(t, ht, P, k * S, hs[k]);
     // The pool may be replaced later; `cols` is set to the final pool in `finish`.
     const row = { cols: pool, off, len, vals: coeffsOf(f) };
     if (this.sources) this.sources.set(row, { src, t: t.slice() });
@@ -96,6 +125,10 @@ class MatrixBuilder {
     const table = this.table,
       S = table.stride,
       t = this.scratch;
+    // Candidates by increasing length (stable, so ties keep the order of `active`): the
+    // first divisor met is the shortest, and the scan stops there.
+    const byLen = active.slice().sort((a, b) => elts[a].poly.m.length - elts[b].poly.m.length);
+    const lms = byLen.map((k) => elts[k].lm);
     for (let id = 0; id < table.size; id++) {
       ticker.tick();
       if (this.pivotOf[id] !== undefined) continue;
@@ -103,15 +136,13 @@ class MatrixBuilder {
         o = id * S;
       const mask = E[o + 2],
         deg = E[o + 1];
-      let best = -1,
-        bestLen = Infinity;
-      outer: for (let k = 0; k < active.length; k++) {
-        const e = elts[active[k]];
-        const lm = e.lm;
-        if ((lm[2] & ~mask) !== 0 || lm[1] > deg || e.poly.m.length >= bestLen) continue;
+      let best = -1;
+      outer: for (let k = 0; k < lms.length; k++) {
+        const lm = lms[k];
+        if ((lm[2] & ~mask) !== 0 || lm[1] > deg) continue;
         for (let i = H; i < S; i++) if (lm[i] > E[o + i]) continue outer;
-        best = active[k];
-        bestLen = e.poly.m.length;
+        best = byLen[k];
+        break;
       }
       if (best < 0) continue;
       const lm = elts[best].lm;
@@ -126,6 +157,14 @@ class MatrixBuilder {
       t[2] = tmask;
       this.pivotOf[id] = this.product(elts[best].poly, t, best);
     }
+  }
+
+  /// The monomial of each B column, built once and shared by every polynomial of the step
+  /// that has it (monomials are never changed in place), which keeps the number of small
+  /// arrays, and so the garbage collector's work, proportional to the columns.
+  bMonos(bIds: Int32Array): (c: number) => Mono {
+    const cache: (Mono | undefined)[] = new Array(bIds.length);
+    return (c) => (cache[c] ??= this.table.mono(bIds[c]));
   }
 
   /// Numbers the columns (pivot columns first, then the others, each in decreasing monomial
@@ -170,12 +209,12 @@ function f4Step<C>(...[R, batch, inputs, basis, opts, ticker, trace]: [...Parame
   const seen = new Set<number>();
   const addPairRow = (k: number, lcm: Mono) => {
     const e = elts[k];
-    const row = B.product(e.poly, monoDiv(lcm, e.lm), k);
-    const lead = row.cols[row.off];
-    // The same multiple of the same element is needed once.
+    // The same multiple of the same element is needed once: looked up before it is built.
+    const lead = B.idOf(lcm);
     const key = lead * elts.length + k;
     if (seen.has(key)) return;
     seen.add(key);
+    const row = B.product(e.poly, monoDiv(lcm, e.lm), k);
     if (B.pivotOf[lead] === undefined) B.pivotOf[lead] = row;
     else B.rows.push(row);
   };
@@ -195,10 +234,11 @@ function f4Step<C>(...[R, batch, inputs, basis, opts, ticker, trace]: [...Parame
   const sugar = batch[0].sugar;
   const out: Reduced<C>[] = [];
   const found = reduceF4Matrix(p, M, ticker);
+  const monoOf = B.bMonos(bIds);
   for (const r of found.rows) {
     checkLimit(opts, "maxTerms", r.len, "a polynomial's number of terms");
     const m: Mono[] = new Array(r.len);
-    for (let k = 0; k < r.len; k++) m[k] = B.table.mono(bIds[r.cols[k]]);
+    for (let k = 0; k < r.len; k++) m[k] = monoOf(r.cols[k]);
     out.push({ m, c: Array.from(r.vals) as unknown as C[], sugar });
   }
   if (trace && B.sources) {
@@ -268,12 +308,13 @@ export function replayF4(
     if (found.rows.length !== step.leads.length) return null;
     // Same leading monomials, put in the traced order (later steps refer to the indices).
     const byLead = new Map<string, SparseRow>();
-    for (const r of found.rows) byLead.set(B.table.mono(bIds[r.cols[0]]).join(","), r);
+    const monoOf = B.bMonos(bIds);
+    for (const r of found.rows) byLead.set(monoOf(r.cols[0]).join(","), r);
     for (const lead of step.leads) {
       const r = byLead.get(lead.join(","));
       if (!r) return null;
       const m: Mono[] = new Array(r.len);
-      for (let k = 0; k < r.len; k++) m[k] = B.table.mono(bIds[r.cols[k]]);
+      for (let k = 0; k < r.len; k++) m[k] = monoOf(r.cols[k]);
       elts.push(makePoly(m, Array.from(r.vals)));
     }
   }
@@ -309,6 +350,7 @@ export function interreduceF4(R: RingCtx<number>, G: readonly Poly[], opts: Comp
   );
   const { M, bIds } = B.finish();
   const tails = reduceTails(p, M, ticker);
+  const monoOf = B.bMonos(bIds);
   return elts.map((e, i) => {
     const t = tails[i];
     const len = t ? t.len : 0;
@@ -317,7 +359,7 @@ export function interreduceF4(R: RingCtx<number>, G: readonly Poly[], opts: Comp
     m[0] = e.lm;
     c[0] = 1;
     for (let k = 0; k < len; k++) {
-      m[k + 1] = B.table.mono(bIds[t!.cols[k]]);
+      m[k + 1] = monoOf(t!.cols[k]);
       c[k + 1] = t!.vals[k];
     }
     return makePoly(m, c);

@@ -16,6 +16,7 @@ export class MonoTable {
   exps: Int32Array;
   size = 0;
   private hashes: Int32Array;
+  /// Open addressing, at most half full: slot s holds an id at 2s (−1: empty) and its hash at 2s + 1.
   private slots: Int32Array;
   private readonly weights: Int32Array;
 
@@ -23,7 +24,7 @@ export class MonoTable {
     this.stride = H + n;
     this.exps = new Int32Array(capacity * this.stride);
     this.hashes = new Int32Array(capacity);
-    this.slots = new Int32Array(capacity * 2).fill(-1);
+    this.slots = new Int32Array(capacity * 4).fill(-1);
     this.weights = new Int32Array(n);
     let s = 0x9e3779b9 | 0;
     for (let i = 0; i < n; i++) {
@@ -39,22 +40,23 @@ export class MonoTable {
     return h;
   }
 
-  /// The id of t·m (hash(t·m) = ht + hm), inserting it when new.
-  productId(t: Mono, ht: number, m: Mono, hm: number): number {
+  /// The id of t·m (hash(t·m) = ht + hm), inserting it when new; m is the monomial at
+  /// offset `mo` of the packed array M (the layout of monomial.ts, `stride` entries each).
+  /// A slot holds the id and the hash, so a probe reads the monomial only on a hash match.
+  productId(t: Mono, ht: number, M: Int32Array, mo: number, hm: number): number {
     const h = (ht + hm) | 0;
     const slots = this.slots,
       E = this.exps,
-      S = this.stride,
-      hashes = this.hashes;
-    const mask = slots.length - 1;
+      S = this.stride;
+    const mask = (slots.length >> 1) - 1;
     let s = (h ^ (h >>> 16)) & mask;
     for (;;) {
-      const id = slots[s];
+      const id = slots[2 * s];
       if (id < 0) break;
-      if (hashes[id] === h) {
+      if (slots[2 * s + 1] === h) {
         let same = true;
         for (let i = H, o = id * S; i < S; i++) {
-          if (E[o + i] !== t[i] + m[i]) {
+          if (E[o + i] !== t[i] + M[mo + i]) {
             same = false;
             break;
           }
@@ -67,13 +69,14 @@ export class MonoTable {
     if (id === this.hashes.length) this.growStore();
     const F = this.exps,
       o = id * S;
-    F[o] = t[0] + m[0];
-    F[o + 1] = t[1] + m[1];
-    F[o + 2] = t[2] | m[2];
-    for (let i = H; i < S; i++) F[o + i] = t[i] + m[i];
+    F[o] = t[0] + M[mo];
+    F[o + 1] = t[1] + M[mo + 1];
+    F[o + 2] = t[2] | M[mo + 2];
+    for (let i = H; i < S; i++) F[o + i] = t[i] + M[mo + i];
     this.hashes[id] = h;
-    slots[s] = id;
-    if (this.size * 2 > slots.length) this.growSlots();
+    slots[2 * s] = id;
+    slots[2 * s + 1] = h;
+    if (this.size * 4 > slots.length) this.growSlots();
     return id;
   }
 
@@ -138,12 +141,13 @@ export class MonoTable {
 
   private growSlots(): void {
     const slots = new Int32Array(this.slots.length * 2).fill(-1);
-    const mask = slots.length - 1;
+    const mask = (slots.length >> 1) - 1;
     for (let id = 0; id < this.size; id++) {
       const h = this.hashes[id];
       let s = (h ^ (h >>> 16)) & mask;
-      while (slots[s] >= 0) s = (s + 1) & mask;
-      slots[s] = id;
+      while (slots[2 * s] >= 0) s = (s + 1) & mask;
+      slots[2 * s] = id;
+      slots[2 * s + 1] = h;
     }
     this.slots = slots;
   }

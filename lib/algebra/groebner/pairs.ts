@@ -1,4 +1,4 @@
-import { HEAD, monoCoprime, monoDivides, monoLcm, type Mono, type MonoLayout } from "../monomial/monomial";
+import { finishMono, HEAD, monoCoprime, monoDivides, type Mono, type MonoLayout } from "../monomial/monomial";
 import type { MonoCompare } from "../order/order";
 import type { Basis, Pair } from "./basis";
 
@@ -38,27 +38,63 @@ export function updatePairs(L: MonoLayout, order: PairOrder, basis: Basis, pairs
   const eh = elts[h];
   const lmh = eh.lm;
   // New pairs (h, g) with their lcms; keep those not made redundant by another new pair.
-  const cand = active.map((g) => ({ g, lcm: monoLcm(L, lmh, elts[g].lm), coprime: monoCoprime(lmh, elts[g].lm) }));
-  const kept: typeof cand = [];
-  for (let k = 0; k < cand.length; k++) {
-    const p = cand[k];
-    if (!p.coprime) {
+  // The lcms are built in one flat array (exponents, with their degree and mask — the header
+  // slots of monomial.ts, as finishMono computes them — beside them in typed arrays), so the
+  // quadratic search rejects most candidates on two numbers (the tests of monoDivides, in
+  // its order) and only the lcms of kept pairs become monomials.
+  const n = active.length,
+    nv = L.n,
+    degrees = L.degrees;
+  const ex = new Int32Array(n * nv);
+  const degs = new Int32Array(n),
+    masks = new Int32Array(n),
+    coprime = new Uint8Array(n);
+  for (let k = 0; k < n; k++) {
+    const lm = elts[active[k]].lm;
+    let deg = 0,
+      mask = 0;
+    for (let i = 0, o = k * nv; i < nv; i++) {
+      const a = lmh[H + i],
+        b = lm[H + i];
+      const e = a > b ? a : b;
+      ex[o + i] = e;
+      if (e !== 0) {
+        deg += e * degrees[i];
+        mask |= 1 << (i & 31);
+      }
+    }
+    degs[k] = deg;
+    masks[k] = mask;
+    coprime[k] = monoCoprime(lmh, lm) ? 1 : 0;
+  }
+  const divides = (q: number, k: number) => {
+    if ((masks[q] & ~masks[k]) !== 0 || degs[q] > degs[k]) return false;
+    for (let i = 0, oq = q * nv, ok = k * nv; i < nv; i++) if (ex[oq + i] > ex[ok + i]) return false;
+    return true;
+  };
+  const kept: number[] = [];
+  for (let k = 0; k < n; k++) {
+    if (!coprime[k]) {
       let redundant = false;
-      for (let q = k + 1; q < cand.length && !redundant; q++) redundant = monoDivides(cand[q].lcm, p.lcm);
-      for (let q = 0; q < kept.length && !redundant; q++) redundant = monoDivides(kept[q].lcm, p.lcm);
+      for (let q = k + 1; q < n && !redundant; q++) redundant = divides(q, k);
+      for (let q = 0; q < kept.length && !redundant; q++) redundant = divides(kept[q], k);
       if (redundant) continue;
     }
-    kept.push(p);
+    kept.push(k);
   }
   // Old pairs whose lcm is a proper multiple of lm(h) in the chain sense are redundant.
   const survivors = pairs.filter(
     (p) => p.j < 0 || !monoDivides(lmh, p.lcm) || lcmEquals(elts[p.i].lm, lmh, p.lcm) || lcmEquals(elts[p.j].lm, lmh, p.lcm),
   );
   const fresh: Pair[] = [];
-  for (const p of kept) {
-    if (p.coprime) continue; // Buchberger's product criterion
-    const eg = elts[p.g];
-    fresh.push({ i: p.g, j: h, lcm: p.lcm, sugar: pairSugar(p.lcm, eg.lm, eg.sugar, lmh, eh.sugar) });
+  for (const k of kept) {
+    if (coprime[k]) continue; // Buchberger's product criterion
+    const l = new Int32Array(H + nv);
+    l.set(ex.subarray(k * nv, (k + 1) * nv), H);
+    finishMono(L, l);
+    const g = active[k],
+      eg = elts[g];
+    fresh.push({ i: g, j: h, lcm: l, sugar: pairSugar(l, eg.lm, eg.sugar, lmh, eh.sugar) });
   }
   fresh.sort((a, b) => pairBefore(order, a, b));
   // Basis elements whose leading monomial lm(h) divides are no longer needed as reducers.
