@@ -3,6 +3,7 @@
 import { z } from "zod";
 import { INT4_MAX } from "@/lib/http/json-guard";
 import { atMost, limitValue } from "@/lib/limits";
+import { optionalTitle } from "@/lib/wire/experiments";
 
 export const EXPORT_FORMAT = "ringside.session";
 export const EXPORT_VERSION = 1;
@@ -110,12 +111,7 @@ export const ImportBody = z.union([
   SessionExport,
   z
     .object({
-      title: z
-        .string()
-        .trim()
-        .min(1)
-        .max(...atMost("titleChars"))
-        .optional(),
+      title: optionalTitle,
       export: SessionExport,
     })
     .strict(),

@@ -20,6 +20,14 @@ export type RowStatus = z.infer<typeof RowStatus>;
 export const FIXED_COLUMNS = ["index", "label", "status", "seconds"] as const;
 
 const uuid = z.string().uuid();
+/// A title given by the user (an experiment's, an imported session's): trimmed, not empty,
+/// within the limit `titleChars`; optional.
+export const optionalTitle = z
+  .string()
+  .trim()
+  .min(1)
+  .max(...atMost("titleChars"))
+  .optional();
 const identifier = z.string().regex(/^[A-Za-z][A-Za-z0-9_']*$/, "expected an identifier (a letter, then letters, digits, _ or ')");
 
 /// POST /api/experiments: from a program (a cell's text) or a cell of the session …
@@ -30,12 +38,7 @@ export const CreateFromProgramBody = z
     source: boundedText("experimentProgramChars").optional(),
     /// or a cell of the session, whose text is used
     cellId: uuid.optional(),
-    title: z
-      .string()
-      .trim()
-      .min(1)
-      .max(...atMost("titleChars"))
-      .optional(),
+    title: optionalTitle,
   })
   .strict();
 /// … or from an uploaded family and a probe over it.
@@ -47,12 +50,7 @@ export const CreateFromUploadBody = z
     probe: boundedText("probeChars").trim().min(1),
     /// the name the probe uses for the upload's ring (default S)
     ringName: identifier.optional(),
-    title: z
-      .string()
-      .trim()
-      .min(1)
-      .max(...atMost("titleChars"))
-      .optional(),
+    title: optionalTitle,
   })
   .strict();
 export const CreateExperimentBody = z.union([CreateFromProgramBody, CreateFromUploadBody]);

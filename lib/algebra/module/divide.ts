@@ -1,4 +1,5 @@
 import { internalLimit } from "./limits";
+import { binaryHeap } from "./heap";
 import {
   monoDiv as monoDivImported,
   monoDivides as monoDividesImported,
@@ -87,37 +88,7 @@ export function heapDivide<C>(
   const K = R.K,
     cmp = R.cmp;
   const before = (x: Stream<C>, y: Stream<C>) => compareKeys(cmp, O, x.key, x.v.comp[x.pos], y.key, y.v.comp[y.pos]) > 0;
-  const heap: Stream<C>[] = [];
-  const push = (st: Stream<C>) => {
-    let i = heap.length;
-    heap.push(st);
-    while (i > 0) {
-      const p = (i - 1) >> 1;
-      if (!before(st, heap[p])) break;
-      heap[i] = heap[p];
-      i = p;
-    }
-    heap[i] = st;
-  };
-  const pop = (): Stream<C> => {
-    const top = heap[0];
-    const last = heap.pop() as Stream<C>;
-    const n = heap.length;
-    if (n > 0) {
-      let i = 0;
-      for (;;) {
-        const l = 2 * i + 1;
-        if (l >= n) break;
-        const r = l + 1;
-        const c = r < n && before(heap[r], heap[l]) ? r : l;
-        if (!before(heap[c], last)) break;
-        heap[i] = heap[c];
-        i = c;
-      }
-      heap[i] = last;
-    }
-    return top;
-  };
+  const { items: heap, push, pop } = binaryHeap<Stream<C>>(before);
   // A stream's key is its own array, rewritten in place as the stream advances (one packed
   // monomial per pending term was most of the allocation of a resolution); the current
   // term's key is copied into `key` first, since it outlives the advance.

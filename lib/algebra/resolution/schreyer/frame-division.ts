@@ -1,4 +1,5 @@
 import { HEAD, monoDiv, monoDivides, monoLcm, monoMul, type Mono } from "../../monomial/monomial";
+import { binaryHeap } from "../../module/heap";
 import { internalLimit } from "../../module/limits";
 import type { ModuleOrder } from "../../module/order";
 import type { FrameTerm } from "../../module/syzygy";
@@ -133,37 +134,7 @@ export function frameDivider<C>(
 
   return {
     syzygy(t, next, ticker, maxTerms) {
-      const heap: Stream<C>[] = [];
-      const push = (st: Stream<C>) => {
-        let i = heap.length;
-        heap.push(st);
-        while (i > 0) {
-          const p = (i - 1) >> 1;
-          if (!before(st, heap[p])) break;
-          heap[i] = heap[p];
-          i = p;
-        }
-        heap[i] = st;
-      };
-      const pop = (): Stream<C> => {
-        const top = heap[0];
-        const last = heap.pop() as Stream<C>;
-        const n = heap.length;
-        if (n > 0) {
-          let i = 0;
-          for (;;) {
-            const l = 2 * i + 1;
-            if (l >= n) break;
-            const r = l + 1;
-            const c = r < n && before(heap[r], heap[l]) ? r : l;
-            if (!before(heap[c], last)) break;
-            heap[i] = heap[c];
-            i = c;
-          }
-          heap[i] = last;
-        }
-        return top;
-      };
+      const { items: heap, push, pop } = binaryHeap<Stream<C>>(before);
       const advance = (st: Stream<C>) => {
         const v = gens[st.l];
         if (++st.pos < v.mono.length) {
