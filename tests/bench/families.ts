@@ -36,6 +36,13 @@ export function katsuraGenerators(n: number): string[] {
   return gens;
 }
 
+/// A katsura-n no computation in a test finishes before the tests' time limits (8 s for a
+/// cell, 4 s for an experiment member) stop it, with room for engines many times faster: with
+/// the F4 kernel katsura-10 takes about 2 s and katsura-11 about 13 s on the development
+/// machine, each step some 7–8 times the one before (README, Performance), so katsura-13 needs
+/// minutes. Suites that need a computation still running when a limit or a cancel comes use it.
+export const OUTLASTING_KATSURA = 13;
+
 /// katsura-n as an ideal literal of the notation, read in a ring with variables u0..un.
 export const katsuraIdealText = (n: number): string => `<${katsuraGenerators(n).join(", ")}>`;
 

@@ -6,14 +6,14 @@
 /// cancelled with the experiments its stored values name, and only those made from it.
 ///
 /// No worker of this file's own: the experiments must stay unfinished while the cell runs, so
-/// each member recomputes katsura-10's Gröbner basis, which outlasts the member time limit (a
+/// each member recomputes katsura-13's Gröbner basis (OUTLASTING_KATSURA), which outlasts the member time limit (a
 /// worker of another suite may take a member; none can finish three within the test).
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeDb, db } from "@/db/client";
 import { cells, experiments } from "@/db/schema";
 import { ndjsonEvents } from "../api/ndjson";
-import { katsuraIdealText } from "../bench/families";
+import { katsuraIdealText, OUTLASTING_KATSURA } from "../bench/families";
 import { ensureTestGroup, TEST_ACCOUNTS } from "../helpers/fixtures";
 import { TestClient, testAddress } from "../helpers/http";
 
@@ -31,13 +31,13 @@ beforeAll(async () => {
 afterAll(() => closeDb());
 
 // A background sweep (forced: three members) whose probe is slow, then a statement that keeps
-// the cell running past the sweep: katsura-10's Gröbner basis takes our engine far longer than
+// the cell running past the sweep: katsura-13's Gröbner basis takes our engine far longer than
 // the test server's 8 s cell limit (tests/api/cells.test.ts; Katsura's family: common practice).
 const CELL = [
   "S := Q[x, y]",
   "F := family([S / S.maximal^p for p in 1..3])",
-  "K := GF(32003)[u0..u10]",
-  `G := ${katsuraIdealText(10)}`,
+  `K := GF(32003)[u0..u${OUTLASTING_KATSURA}]`,
+  `G := ${katsuraIdealText(OUTLASTING_KATSURA)}`,
   "T := sweep(F, R -> {n: G.groebner.length}, background = true)",
   "G.groebner",
 ].join("\n");

@@ -9,7 +9,7 @@ import { closeExperimentPool } from "@/lib/experiments/compute-adapter";
 import { stopBoss } from "@/lib/experiments/queue";
 import { act, createFromProgram, runAgain } from "@/lib/experiments/service";
 import { getExperiment, progressOf } from "@/lib/experiments/store";
-import { katsuraIdealText } from "../bench/families";
+import { katsuraIdealText, OUTLASTING_KATSURA } from "../bench/families";
 import { testEnv } from "../helpers/env";
 import { uniqueEmail } from "../helpers/fixtures";
 import {
@@ -112,9 +112,9 @@ describe("a 200-member sweep shared by two workers and a server", () => {
   }, 400_000);
 
   it("a member past the time limit and a member that errors give those statuses; the sweep completes", async () => {
-    // katsura-10 over GF(32003) takes our engine over 20 s of CPU, far past the 4 s member
-    // limit (katsura-9 now fits in it); Katsura's family: common practice. 1/0 is a division by zero.
-    const N = 10;
+    // katsura-13 over GF(32003) takes our engine minutes, far past the 4 s member limit
+    // (OUTLASTING_KATSURA); Katsura's family: common practice. 1/0 is a division by zero.
+    const N = OUTLASTING_KATSURA;
     const katsura = katsuraIdealText(N);
     const e = await createFromProgram({
       sessionId,
