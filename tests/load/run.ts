@@ -117,8 +117,18 @@ async function phase(
           };
         },
         onResponse: (status: number, body: string) => {
-          if (status >= 400) fail(`HTTP ${status}`);
-          else if (body.includes('"event":"error"')) {
+          if (status >= 400) {
+            // name the refusal: a documented limit says which (details.kind = "limit")
+            let why = `HTTP ${status}`;
+            try {
+              const e = (JSON.parse(body) as { error?: { code?: string; details?: { kind?: string; limit?: string } } }).error;
+              if (e?.details?.kind === "limit") why += ` (kind limit: ${e.details.limit})`;
+              else if (e?.code) why += ` (${e.code})`;
+            } catch {
+              // not JSON: the status alone
+            }
+            fail(why);
+          } else if (body.includes('"event":"error"')) {
             // a cell that ended with an Error: name its kind and message
             const line = body.split("\n").find((l) => l.includes('"event":"error"'));
             try {
