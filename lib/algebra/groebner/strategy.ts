@@ -32,8 +32,14 @@ export const normalStrategy: Strategy = { ...pairwiseStrategy, bySugar: false };
 /// The dispatcher. Degree orders over GF(p): F4 for every p < 2^31 (the WebAssembly kernel
 /// of f4-kernel.ts is exact for all of them). With the kernel F4 became 2× faster on
 /// cyclic-7, 4× on katsura-9 and cyclic-8 and 7.6× on katsura-10 over GF(32003) (README of
-/// this folder); the choice itself is unchanged, as F4 already took every graded order over
-/// GF(p) and pair by pair was not re-measured against it. Pair by pair with sugar over Q
+/// this folder). The crossover, measured 2026-12-03 on the idle development machine (mean of
+/// repeated runs in one warm process, grevlex over GF(32003)): pair by pair wins only below a
+/// millisecond — 3 quadrics in 3 variables 0.29 ms against F4's 1.03 ms, cyclic-4 0.15 against
+/// 1.04 (F4's fixed cost: a matrix, a kernel instance) — and loses from there on: katsura-4
+/// 1.73 against 1.12, cyclic-5 6.5 against 4.6, katsura-5 12 against 2.1, katsura-6 110
+/// against 4.1, cyclic-6 120 against 7.9. Nothing cheap to read from the input predicts which
+/// side a system falls on, and the loss of a wrong pick is below a millisecond one way and
+/// many-fold the other, so F4 takes every graded order over GF(p). Pair by pair with sugar over Q
 /// (where the modular method runs F4 per prime instead). Lex and weight orders: pair by pair,
 /// normal strategy — there matrices of a sugar degree grow large while a single pair stays
 /// cheap (measured on the random systems of the SymPy cross-check).
