@@ -2,6 +2,8 @@
 /// # comments allowed) or JSON (a list of lists of generator texts). Every line is read in the
 /// given ring by the notation's checker and evaluator; when any line is bad, every problem is
 /// reported with its line number (or JSON item) and nothing is stored.
+import type { z } from "zod";
+import type { FamilyFileBody } from "@/lib/wire/experiments";
 import { db } from "@/db/client";
 import { namedObjects, uploads } from "@/db/schema";
 import { formatLimit, limitDetails, limitValue } from "@/lib/limits";
@@ -23,12 +25,7 @@ export function tooManyLines(lineCount: number): ExperimentError {
 }
 
 /// A family file as the browser sends it, for the preview and for the upload alike.
-export interface FamilyFile {
-  format: "text" | "json";
-  /// the ring the ideals are read in, in the notation: "GF(32003)[x, y, z]"
-  ring: string;
-  content: string;
-}
+export type FamilyFile = z.infer<typeof FamilyFileBody>;
 
 export interface UploadInput extends FamilyFile {
   sessionId: string;

@@ -57,14 +57,10 @@ export const CreateExperimentBody = z.union([CreateFromProgramBody, CreateFromUp
 export type CreateExperimentBody = z.infer<typeof CreateExperimentBody>;
 
 /// POST /api/experiments/uploads.
-export const UploadBody = z
+/// A family file as the browser sends it, for the preview (POST …/uploads/preview) and the
+/// upload alike.
+export const FamilyFileBody = z
   .object({
-    sessionId: uuid,
-    /// the named object the family becomes
-    name: z
-      .string()
-      .min(1)
-      .max(...atMost("objectNameChars")),
     format: z.enum(["text", "json"]),
     /// the ring the ideals are read in, in the notation: "GF(32003)[x, y, z]"
     ring: z
@@ -74,6 +70,15 @@ export const UploadBody = z
     content: boundedText("uploadChars"),
   })
   .strict();
+
+export const UploadBody = FamilyFileBody.extend({
+  sessionId: uuid,
+  /// the named object the family becomes
+  name: z
+    .string()
+    .min(1)
+    .max(...atMost("objectNameChars")),
+}).strict();
 export type UploadBody = z.infer<typeof UploadBody>;
 
 export const Upload = z.object({
