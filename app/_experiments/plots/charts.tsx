@@ -71,17 +71,15 @@ const innerH = HEIGHT - M.top - M.bottom;
 const leftOut = (used: number, skipped: number, noun = "rows") =>
   `${used} ${noun}${skipped ? `; ${skipped} without a number left out` : ""}`;
 
-export function Histogram({
-  rows,
-  column,
-  palette,
-  svgRef,
-}: {
+/// The props of a plot of one column of the rows.
+interface OneColumnChart {
   rows: Row[];
   column: string;
   palette: PlotPalette;
   svgRef: Ref<SVGSVGElement>;
-}) {
+}
+
+export function Histogram({ rows, column, palette, svgRef }: OneColumnChart) {
   const { bins, used, skipped } = histogram(rows, column);
   const x = scaleLinear<number>({ domain: bins.length ? [bins[0].from, bins[bins.length - 1].to] : [0, 1], range: [0, innerW] });
   const y = scaleLinear<number>({ domain: [0, Math.max(1, ...bins.map((b) => b.count))], range: [innerH, 0], nice: true });
@@ -242,17 +240,7 @@ interface HeatColumn {
   bins: { position: string; count: number }[];
 }
 
-export function BettiHeatMap({
-  rows,
-  column,
-  palette,
-  svgRef,
-}: {
-  rows: Row[];
-  column: string;
-  palette: PlotPalette;
-  svgRef: Ref<SVGSVGElement>;
-}) {
+export function BettiHeatMap({ rows, column, palette, svgRef }: OneColumnChart) {
   const heat = bettiHeat(rows, column);
   const left = 80;
   const w = WIDTH - left - M.right;
