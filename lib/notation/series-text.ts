@@ -3,16 +3,7 @@
 import { formatHilbertDenominator, type HilbertSeries } from "../algebra/index";
 
 export function ascendingText(coeffs: readonly bigint[], variable = "t"): string {
-  let out = "";
-  coeffs.forEach((c, i) => {
-    if (c === 0n) return;
-    const neg = c < 0n;
-    const a = neg ? -c : c;
-    const mono = i === 0 ? "" : i === 1 ? variable : `${variable}^${i}`;
-    const body = mono === "" ? a.toString() : a === 1n ? mono : `${a}*${mono}`;
-    out += neg ? `-${body}` : out === "" ? body : `+${body}`;
-  });
-  return out === "" ? "0" : out;
+  return laurentText(coeffs, 0, variable);
 }
 
 /// Inverse of the engine's formatHilbertDenominator ("(1-t)^2*(1-t^3)", "1"): the degrees
