@@ -41,15 +41,23 @@ async function idsWhere(database: Queryable, cellsWhere: SQL | null, objectsWher
   return rows.map((r) => r.id).filter((id): id is string => typeof id === "string" && detailPath(id) !== null);
 }
 
-/// The sessions whose stored cells or named objects carry the marker of detail `id`.
-export async function sessionsHoldingDetail(id: string, database: Queryable = db()): Promise<string[]> {
-  const rows = await database.execute<{ session_id: string }>(sql`
-    SELECT DISTINCT session_id FROM (
-      SELECT session_id FROM cells WHERE result IS NOT NULL AND jsonb_path_exists(result, ${DETAIL_IDS + " ? (@ == $id)"}, jsonb_build_object('id', ${id}::text))
+/// For each of `ids`, the sessions whose stored cells or named objects carry its marker (one
+/// pass over the stored values for all of them).
+export async function sessionsHoldingDetails(ids: readonly string[], database: Queryable = db()): Promise<Map<string, string[]>> {
+  const held = new Map<string, string[]>();
+  if (ids.length === 0) return held;
+  const list = sql`ARRAY[${sql.join(
+    ids.map((id) => sql`${id}`),
+    sql`, `,
+  )}]::text[]`;
+  const rows = await database.execute<{ id: string; session_id: string }>(sql`
+    SELECT DISTINCT id, session_id FROM (
+      SELECT jsonb_path_query(result, ${DETAIL_IDS}) #>> '{}' AS id, session_id FROM cells WHERE result IS NOT NULL
       UNION ALL
-      SELECT session_id FROM named_objects WHERE jsonb_path_exists(value, ${DETAIL_IDS + " ? (@ == $id)"}, jsonb_build_object('id', ${id}::text))
-    ) holders`);
-  return rows.map((r) => r.session_id);
+      SELECT jsonb_path_query(value, ${DETAIL_IDS}) #>> '{}' AS id, session_id FROM named_objects
+    ) found WHERE id = ANY(${list})`);
+  for (const r of rows) held.set(r.id, [...(held.get(r.id) ?? []), r.session_id]);
+  return held;
 }
 
 /// A copy of `json` without the markers of details outside `keep` (the summaries stay).

@@ -11,7 +11,7 @@ import { transcriptToMarkdown } from "@/lib/export/markdown";
 import { statementsOf, type Transcript, type ValueJsonLike } from "@/lib/export/transcript";
 import { HttpError } from "@/lib/http/errors";
 import { canRead } from "@/lib/auth/access";
-import { detailIdsIn, sessionsHoldingDetail, withoutDetailsOutside } from "@/lib/sessions/details";
+import { detailIdsIn, sessionsHoldingDetails, withoutDetailsOutside } from "@/lib/sessions/details";
 import { auditSharing } from "./common";
 
 type SessionRow = typeof sessions.$inferSelect;
@@ -135,9 +135,11 @@ export function parseImport(body: unknown): { doc: SessionExport; title: string 
 async function keepReadableDetails(user: CurrentUser, doc: SessionExport): Promise<SessionExport> {
   const ids = detailIdsIn(doc);
   const keep = new Set<string>();
-  for (const id of ids) {
-    for (const sessionId of await sessionsHoldingDetail(id)) {
-      if (await canRead(user, sessionId)) {
+  const readable = new Map<string, boolean>();
+  for (const [id, sessionIds] of await sessionsHoldingDetails([...ids])) {
+    for (const sessionId of sessionIds) {
+      if (!readable.has(sessionId)) readable.set(sessionId, await canRead(user, sessionId));
+      if (readable.get(sessionId)) {
         keep.add(id);
         break;
       }
