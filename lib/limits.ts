@@ -244,14 +244,6 @@ export function limitValue(name: LimitName, env: Record<string, string | undefin
   return Number.isFinite(value) && value > 0 ? value : spec.value;
 }
 
-/// Every limit's value in force, by name (handed to engine slots, which must not read a
-/// different environment).
-export function limitValues(env: Record<string, string | undefined> = environment()): Record<LimitName, number> {
-  const out = {} as Record<LimitName, number>;
-  for (const name of Object.keys(LIMIT_TABLE) as LimitName[]) out[name] = limitValue(name, env);
-  return out;
-}
-
 /// What a refusal because of a limit carries as its `details` (the JSON error's
 /// `{"kind": "limit", "limit": name, "value": …}`), so a client can tell which bound it met.
 export function limitDetails(name: LimitName, value = limitValue(name)): { kind: "limit"; limit: LimitName; value: number } {

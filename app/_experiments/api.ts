@@ -1,7 +1,7 @@
 /// Calls to the experiments API (app/api/README.md, "Experiments") for the room; every
 /// read carries a read-only link's token when the visitor came with one.
 import { errorOf, send, withLink } from "@/app/_client/fetch";
-import type { Experiment, ExperimentSummary, Row, MemberAnswer, RowsPage, RowStatus, UploadPreview } from "./types";
+import type { Experiment, ExperimentSummary, Row, RowsPage, RowStatus, UploadPreview } from "./types";
 
 export const experimentKeys = {
   list: "/api/experiments",
@@ -70,8 +70,6 @@ export const createUpload = (body: { sessionId: string; name: string; format: "t
 
 export const createFromUpload = (body: { sessionId: string; uploadId: string; probe: string; ringName?: string }) =>
   send<{ experiment: Experiment }>("/api/experiments", { method: "POST", body: JSON.stringify(body) });
-
-export const getMember = (id: string, index: number, link: string | null) => send<MemberAnswer>(experimentKeys.member(id, index, link));
 
 /// Runs `source` as a new cell of `sessionId` and waits for the cell's stream to end.
 export async function runAsCell(sessionId: string, source: string): Promise<void> {

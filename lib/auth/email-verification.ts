@@ -3,7 +3,7 @@
 /// and shares made to its address wait (lib/sharing/shares.ts) until it is confirmed, so
 /// nobody can claim another person's address to receive what was meant for them.
 import { createHash, randomBytes } from "node:crypto";
-import { and, eq, gt, isNull, lt } from "drizzle-orm";
+import { and, eq, isNull, lt } from "drizzle-orm";
 import { db } from "@/db/client";
 import { emailVerifications, shares, users } from "@/db/schema";
 import { limitValue } from "@/lib/limits";
@@ -55,13 +55,4 @@ export async function confirmEmail(token: string): Promise<VerificationOutcome> 
     const [already] = await tx.select({ email: users.email }).from(users).where(eq(users.id, row.userId));
     return already ? { ok: true as const, email: already.email } : { ok: false as const, why: "unknown" as const };
   });
-}
-
-/// Whether the account has a pending, unexpired verification (for tests and the console).
-export async function hasPendingVerification(userId: string): Promise<boolean> {
-  const [row] = await db()
-    .select({ userId: emailVerifications.userId })
-    .from(emailVerifications)
-    .where(and(eq(emailVerifications.userId, userId), gt(emailVerifications.expiresAt, new Date())));
-  return row !== undefined;
 }

@@ -8,18 +8,6 @@ export const enum StopReason {
   TimeLimit = 2,
 }
 
-export function createStopFlag(): SharedArrayBuffer {
-  return new SharedArrayBuffer(Int32Array.BYTES_PER_ELEMENT);
-}
-
-export function raiseStopFlag(flag: SharedArrayBuffer, reason: StopReason): void {
-  Atomics.compareExchange(new Int32Array(flag), 0, StopReason.None, reason);
-}
-
-export function readStopFlag(flag: SharedArrayBuffer): StopReason {
-  return Atomics.load(new Int32Array(flag), 0) as StopReason;
-}
-
 /// A signal whose `aborted` reads the shared flag on every access.
 export function signalFromStopFlag(flag: SharedArrayBuffer): AbortSignal {
   const cells = new Int32Array(flag);

@@ -37,8 +37,6 @@ export interface Note {
   readonly after?: string;
 }
 
-export const noteText = (n: Note): string => `${n.before}${n.math ?? ""}${n.after ?? ""}`;
-
 /// The sentences to print under the value.
 export function notesOf(v: ValueJsonLike): Note[] {
   const out: Note[] = [];

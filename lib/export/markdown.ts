@@ -139,8 +139,3 @@ export function transcriptToMarkdown(t: Transcript): string {
   }
   return parts.join("\n\n") + "\n";
 }
-
-/// One value alone as Markdown (the console's copy menu).
-export function valueToMarkdown(v: ValueJsonLike): string {
-  return valueMarkdown(v);
-}

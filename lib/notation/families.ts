@@ -14,7 +14,6 @@ import { ratOf } from "../algebra/index";
 import { LIMIT_TABLE, sweepRunsInline, type LimitName } from "../limits";
 import { familyDefinition, ringText, valueText } from "./text";
 import {
-  list,
   type FamilyMember,
   type FamilyValue,
   type FunctionValue,
@@ -393,5 +392,3 @@ export function familyIndex(F: FamilyValue, i: bigint, span: Span): Value {
   }
   return F.members[Number(i)];
 }
-
-export const familyList = (F: FamilyValue): Value => list(F.members);

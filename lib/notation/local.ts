@@ -26,8 +26,6 @@ import { type HilbertSeriesValue, type RingValue, type Value } from "./values";
 const Int = (value: number | bigint): Value => ({ type: "Int", value: BigInt(value) });
 const opts = (c: CallContext) => c.interp.session.compute;
 
-export const isLocal = (v: Value): v is RingValue => v.type === "Ring" && v.local !== undefined;
-
 /// The point of a local ring; the origin for a graded ring (read at its irrelevant ideal).
 function pointOf(r: RingValue): Point {
   return r.local ? r.local.at : r.poly.vars.map(() => ({ n: 0n, d: 1n }));

@@ -17,10 +17,6 @@ export function numberOfValue(v: ValueJson | undefined): number | null {
   return null;
 }
 
-export function cellValue(row: Row, column: string): ValueJson | undefined {
-  return row.fields[column];
-}
-
 /// What the table prints for `column` of `row`.
 export function cellText(row: Row, column: string): string {
   switch (column) {

@@ -25,16 +25,6 @@ export function tpolyShift(f: TPoly, k: number): bigint[] {
   return out;
 }
 
-export function tpolyMul(f: TPoly, g: TPoly): bigint[] {
-  if (f.length === 0 || g.length === 0) return [];
-  const out = new Array<bigint>(f.length + g.length - 1).fill(0n);
-  for (let i = 0; i < f.length; i++) {
-    if (f[i] === 0n) continue;
-    for (let j = 0; j < g.length; j++) out[i + j] += f[i] * g[j];
-  }
-  return tpolyTrim(out);
-}
-
 /// f · (1 − t^d)
 export function tpolyMulOneMinusPower(f: TPoly, d: number): bigint[] {
   return tpolyAdd(

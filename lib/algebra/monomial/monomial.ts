@@ -110,10 +110,6 @@ export function monoIsOne(a: Mono): boolean {
   return true;
 }
 
-export function monoDegree(a: Mono): number {
-  return a[DEG];
-}
-
 export function monoExps(a: Mono): number[] {
   return Array.from(a.subarray(HEAD));
 }
