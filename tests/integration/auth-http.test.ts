@@ -40,12 +40,7 @@ describe("sign-up, sign-in, protected API", () => {
     expect(me.status).toBe(200);
     expect(await me.json()).toMatchObject({ user: { email, name: "Flow Tester", siteRole: "member", teams: [] } });
 
-    const csrf = (await (await client.request("/api/auth/csrf")).json()) as { csrfToken: string };
-    await client.request("/api/auth/signout", {
-      method: "POST",
-      headers: { "Content-Type": "application/x-www-form-urlencoded" },
-      body: new URLSearchParams({ csrfToken: csrf.csrfToken, json: "true" }).toString(),
-    });
+    await client.signOut();
     expect(client.hasSession()).toBe(false);
     expect((await client.request("/api/me")).status).toBe(401);
   });

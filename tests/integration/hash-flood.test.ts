@@ -42,16 +42,6 @@ interface Answer {
   url?: string;
 }
 
-/// next-auth's credentials callback with a JSON body.
-async function jsonSignIn(client: TestClient, email: string, password: string): Promise<Response> {
-  const csrf = (await (await client.request("/api/auth/csrf")).json()) as { csrfToken: string };
-  return client.request("/api/auth/callback/credentials", {
-    method: "POST",
-    headers: { "Content-Type": "application/json" },
-    body: JSON.stringify({ csrfToken: csrf.csrfToken, email, password, json: "true", callbackUrl: client.base }),
-  });
-}
-
 let attempts = 0;
 /// One wrong-password sign-in for an account that does not exist (the decoy hash costs as
 /// much as a real one) from an address of its own (2001:db8::/32, RFC 3849), so neither
@@ -61,7 +51,7 @@ async function attack(): Promise<Answer> {
   const client = new TestClient(`2001:db8::${k.toString(16)}`, own.baseUrl);
   const email = `flood-${process.pid}-${k}@example.test`;
   const encoding = k % 2 === 0 ? "json" : "form";
-  const r = encoding === "json" ? await jsonSignIn(client, email, `wrong-guess-${k}`) : await client.signIn(email, `wrong-guess-${k}`);
+  const r = encoding === "json" ? await client.signInJson(email, `wrong-guess-${k}`) : await client.signIn(email, `wrong-guess-${k}`);
   const body = (await r.json().catch(() => null)) as { error?: Answer["error"]; url?: string } | null;
   return { status: r.status, at: Date.now(), encoding, retryAfter: r.headers.get("retry-after"), error: body?.error, url: body?.url };
 }

@@ -24,25 +24,15 @@ async function newAccount(): Promise<string> {
   return email;
 }
 
-/// next-auth's credentials callback with a JSON body (next-auth reads JSON as readily as a form).
-async function jsonSignIn(client: TestClient, email: string, password: string): Promise<Response> {
-  const csrf = (await (await client.request("/api/auth/csrf")).json()) as { csrfToken: string };
-  return client.request("/api/auth/callback/credentials", {
-    method: "POST",
-    headers: { "Content-Type": "application/json" },
-    body: JSON.stringify({ csrfToken: csrf.csrfToken, email, password, json: "true", callbackUrl: client.base }),
-  });
-}
-
 describe("the sign-in rate limit covers every encoding", () => {
   it(`blocks JSON sign-ins after ${ACCOUNT_FAILURES} failures, keyed by the trimmed, lower-cased address`, async () => {
     const email = await newAccount();
     for (let i = 0; i < ACCOUNT_FAILURES; i++) {
       // A different spelling of the same address each time, from a different client address.
       const spelled = i % 2 === 0 ? `  ${email.toUpperCase()} ` : email;
-      expect((await jsonSignIn(new TestClient(testAddress(91 + i)), spelled, "wrong-guess-0")).status).toBe(401);
+      expect((await new TestClient(testAddress(91 + i)).signInJson(spelled, "wrong-guess-0")).status).toBe(401);
     }
-    const blocked = await jsonSignIn(new TestClient(testAddress(99)), email, PASSWORD);
+    const blocked = await new TestClient(testAddress(99)).signInJson(email, PASSWORD);
     expect(blocked.status).toBe(429);
     expect(((await blocked.json()) as { error: { code: string } }).error.code).toBe("rate_limited");
     // and the form encoding is blocked for the same account
@@ -55,7 +45,7 @@ describe("the sign-in rate limit covers every encoding", () => {
       expect((await new TestClient(testAddress(100 + i)).signIn(` ${email.toUpperCase()}`, "wrong-guess-1")).status).toBe(401);
     }
     expect((await new TestClient(testAddress(106)).signIn(email, PASSWORD)).status).toBe(429);
-    expect((await jsonSignIn(new TestClient(testAddress(106)), email, PASSWORD)).status).toBe(429);
+    expect((await new TestClient(testAddress(106)).signInJson(email, PASSWORD)).status).toBe(429);
   });
 
   it("refuses a credentials body whose fields are not strings with 400, before any check", async () => {
@@ -164,12 +154,7 @@ describe("signing out", () => {
     const stolen = client.copy(testAddress(110));
     expect((await stolen.request("/api/me")).status).toBe(200);
 
-    const csrf = (await (await client.request("/api/auth/csrf")).json()) as { csrfToken: string };
-    await client.request("/api/auth/signout", {
-      method: "POST",
-      headers: { "Content-Type": "application/x-www-form-urlencoded" },
-      body: new URLSearchParams({ csrfToken: csrf.csrfToken, json: "true" }).toString(),
-    });
+    await client.signOut();
     expect(client.hasSession()).toBe(false);
     expect(stolen.hasSession()).toBe(true);
     expect((await stolen.request("/api/me")).status).toBe(401);
